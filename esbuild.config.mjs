@@ -1,0 +1,26 @@
+// Bundles every entry point into dist/ so the extension and the CLI ship as a handful of files.
+import { build } from "esbuild";
+import { existsSync } from "node:fs";
+
+const entries = [
+  { in: "server/src/cli/main.ts", out: "cli" },
+  { in: "server/src/main.ts", out: "server" },
+  { in: "client/src/extension.ts", out: "client" },
+].filter((entry) => existsSync(entry.in));
+
+await Promise.all(
+  entries.map((entry) =>
+    build({
+      entryPoints: { [entry.out]: entry.in },
+      outdir: "dist",
+      bundle: true,
+      platform: "node",
+      target: "node20",
+      format: "cjs",
+      sourcemap: true,
+      external: ["vscode"],
+      banner: entry.out === "cli" ? { js: "#!/usr/bin/env node" } : undefined,
+      logLevel: "warning",
+    }),
+  ),
+);

@@ -1,0 +1,204 @@
+/**
+ * Plain data shared by every part of the chemistry core. Nothing here knows about editors,
+ * the protocol or I/O; offsets are UTF-16 indices into the string that was read.
+ */
+
+/** Half-open range of UTF-16 code units, `start` inclusive, `end` exclusive. */
+export interface TextRange {
+  readonly start: number;
+  readonly end: number;
+}
+
+export type ElementCategory =
+  | "main-group"
+  | "noble-gas"
+  | "transition-metal"
+  | "lanthanide"
+  | "actinide";
+
+export interface ElementData {
+  readonly symbol: string;
+  readonly name: string;
+  readonly atomicNumber: number;
+  /** IUPAC group 1-18; lanthanides and actinides carry 3. */
+  readonly group: number;
+  readonly period: number;
+  /** Valence electrons used in Lewis structures (s + p for main-group elements, group - 10 for groups 13-18). */
+  readonly valenceElectrons: number;
+  /** Pauling electronegativity, or null where none is tabulated (He, Ne, Ar). */
+  readonly electronegativity: number | null;
+  /** Single-bond covalent radius in picometres. */
+  readonly covalentRadius: number;
+  readonly category: ElementCategory;
+}
+
+/** One element and how many times it occurs, in the order the writer gave it. */
+export interface FormulaPart {
+  readonly symbol: string;
+  readonly count: number;
+}
+
+/** How the writer wrote the species; drives nothing chemical, only messages. */
+export type SpeciesNotation = "formula" | "mhchem" | "name" | "smiles";
+
+/** A species as read from text: what it is made of, before any structure is chosen. */
+export interface SpeciesReading {
+  /** The text exactly as read (the slice of the input covered by `range`). */
+  readonly text: string;
+  readonly range: TextRange;
+  readonly notation: SpeciesNotation;
+  /** Element counts in first-appearance order (e.g. H2SO4 -> H 2, S 1, O 4). */
+  readonly composition: readonly FormulaPart[];
+  /**
+   * Groups exactly as written, flattened in order: for CH3COOH this is C,H3,C,O,O,H.
+   * Structure builders use it to recover connectivity from condensed formulas.
+   */
+  readonly writtenSequence: readonly FormulaPart[];
+  readonly charge: number;
+  /** Canonical formula with charge, Hill-free, in written element order, e.g. "SO4^2-". */
+  readonly formula: string;
+  /** A name for the species where one is known ("sulfur tetrafluoride"). */
+  readonly name?: string;
+}
+
+/** Stable codes for everything that stops a species from being read or analysed. */
+export type ProblemCode =
+  // reading
+  | "empty-input"
+  | "unknown-element"
+  | "unbalanced-brackets"
+  | "malformed-formula"
+  | "unknown-name"
+  | "input-too-long"
+  // analysis
+  | "too-few-electrons"
+  | "octet-exceeded"
+  | "hydrogen-overbonded"
+  | "transition-metal-centre"
+  | "ionic-solid"
+  | "ambiguous-connectivity"
+  | "no-central-atom"
+  | "no-valid-structure";
+
+export interface Problem {
+  readonly code: ProblemCode;
+  readonly message: string;
+  /** A corrected spelling to offer, e.g. "SF4" for "Sf4". */
+  readonly suggestion?: string;
+  readonly range?: TextRange;
+}
+
+export type ReadResult =
+  | { readonly ok: true; readonly value: SpeciesReading }
+  | { readonly ok: false; readonly problem: Problem };
+
+/** One atom of a molecular graph, after the Lewis structure has been chosen. */
+export interface GraphAtom {
+  readonly symbol: string;
+  readonly lonePairs: number;
+  /** 0, or 1 for the odd electron of a radical. */
+  readonly unpairedElectrons: number;
+  readonly formalCharge: number;
+}
+
+export interface GraphBond {
+  readonly from: number;
+  readonly to: number;
+  /** 1, 2 or 3. */
+  readonly order: number;
+}
+
+/** A Lewis structure: atoms, bonds with orders, lone pairs and formal charges. */
+export interface MolecularGraph {
+  readonly atoms: readonly GraphAtom[];
+  readonly bonds: readonly GraphBond[];
+}
+
+export type ElectronGeometry =
+  | "linear"
+  | "trigonal planar"
+  | "tetrahedral"
+  | "trigonal bipyramidal"
+  | "octahedral"
+  | "pentagonal bipyramidal";
+
+export type MolecularGeometry =
+  | ElectronGeometry
+  | "bent"
+  | "trigonal pyramidal"
+  | "seesaw"
+  | "T-shaped"
+  | "square pyramidal"
+  | "square planar"
+  | "pentagonal pyramidal"
+  | "pentagonal planar";
+
+export type Hybridization = "sp" | "sp2" | "sp3" | "sp3d" | "sp3d2" | "sp3d3";
+
+/** A range of bond angles in degrees, with the ideal value it deviates from. */
+export interface AngleExpectation {
+  /** Ideal angle of the electron geometry between two bonded atoms, e.g. 109.5. */
+  readonly ideal: number;
+  /** Lowest and highest angle expected once lone pairs and multiple bonds have had their say. */
+  readonly min: number;
+  readonly max: number;
+  /** Which way the real angle moves and why, in one line. */
+  readonly note: string;
+  /** Short label for the pair of positions, e.g. "axial-equatorial"; absent when there is one kind. */
+  readonly between?: string;
+}
+
+/** A measured angle for a well-known species, with where the number comes from. */
+export interface MeasuredAngle {
+  readonly degrees: number;
+  readonly between: string;
+  readonly source: string;
+}
+
+/** The VSEPR description of one atom with two or more neighbours. */
+export interface CentreAnalysis {
+  /** 0-based index into the graph's atoms. */
+  readonly index: number;
+  readonly atom: string;
+  readonly axe: string;
+  readonly stericNumber: number;
+  readonly bondingDomains: number;
+  readonly lonePairs: number;
+  readonly unpairedElectrons: number;
+  readonly electronGeometry: ElectronGeometry;
+  readonly molecularGeometry: MolecularGeometry;
+  /** Distinct ideal angles between bonded neighbours, ascending (SF4: 90, 120, 180). */
+  readonly idealAngles: readonly number[];
+  readonly expectedAngles: readonly AngleExpectation[];
+  readonly hybridization: Hybridization;
+  readonly hybridizationNote?: string;
+}
+
+export interface PolarityVerdict {
+  readonly polar: boolean;
+  /** One line: "bond dipoles cancel by symmetry", "lone pair makes the shape asymmetric", ... */
+  readonly reason: string;
+  /** Magnitude of the summed bond-dipole vector in electronegativity units (a model number). */
+  readonly dipoleEstimate: number;
+}
+
+/** Everything lonepair works out for one species. */
+export interface SpeciesAnalysis {
+  readonly reading: SpeciesReading;
+  readonly valenceElectrons: number;
+  readonly radical: boolean;
+  readonly electronDeficient: boolean;
+  readonly expandedOctet: boolean;
+  readonly graph: MolecularGraph;
+  /** How many equivalent Lewis structures share the best formal-charge score. */
+  readonly resonanceForms: number;
+  readonly centres: readonly CentreAnalysis[];
+  readonly polarity: PolarityVerdict;
+  readonly measuredAngles: readonly MeasuredAngle[];
+  /** Plain-language notes the reader should see (radical, electron-deficient, model caveats). */
+  readonly warnings: readonly string[];
+}
+
+export type AnalysisResult =
+  | { readonly ok: true; readonly value: SpeciesAnalysis }
+  | { readonly ok: false; readonly reading?: SpeciesReading; readonly problem: Problem };
