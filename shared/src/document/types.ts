@@ -1,0 +1,72 @@
+/**
+ * What the core finds in a document: species mentioned in prose, and records in data tables.
+ * Offsets are UTF-16 indices into the document text; editors turn them into positions.
+ */
+import type { SpeciesReading, TextRange } from "../chemistry/types";
+
+export type DocumentKind = "markdown" | "plaintext" | "csv" | "tsv" | "json" | "yaml";
+
+/** One mention of a species, exactly as written. */
+export interface SpeciesOccurrence {
+  readonly range: TextRange;
+  readonly text: string;
+  readonly reading: SpeciesReading;
+}
+
+/** What a table column (or a record key) holds, recognised from its header. */
+export type ColumnMeaning =
+  | "species"
+  | "name"
+  | "valenceElectrons"
+  | "lonePairs"
+  | "axe"
+  | "electronGeometry"
+  | "molecularGeometry"
+  | "bondAngle"
+  | "hybridization"
+  | "polarity";
+
+/** One value cell of a record, with the exact range of the value (without quotes). */
+export interface TableCell {
+  readonly meaning: ColumnMeaning;
+  readonly range: TextRange;
+  readonly text: string;
+}
+
+/** A row of a CSV/TSV or markdown table, or an object in JSON/YAML, that names a species. */
+export interface TableRecord {
+  /** The cell that names the species (a formula, or failing that a name). */
+  readonly species: SpeciesOccurrence;
+  /** The other recognised cells of the same record. */
+  readonly cells: readonly TableCell[];
+}
+
+export type FindingSeverity = "error" | "warning" | "information" | "hint";
+
+/** A replacement that fixes a finding: only the offending token or cell. */
+export interface TextFix {
+  readonly range: TextRange;
+  readonly newText: string;
+  /** Short title for the quick fix, e.g. "Change to 26". */
+  readonly title: string;
+}
+
+/** A problem or note about a document: the core's diagnostic, free of protocol types. */
+export interface Finding {
+  readonly range: TextRange;
+  readonly severity: FindingSeverity;
+  /** Stable code such as "octet-exceeded" or "table-lone-pairs-mismatch". */
+  readonly code: string;
+  readonly message: string;
+  readonly fix?: TextFix;
+}
+
+/** Everything read from one document version. */
+export interface DocumentModel {
+  readonly kind: DocumentKind;
+  /** Every species mentioned, in document order (table species cells included). */
+  readonly occurrences: readonly SpeciesOccurrence[];
+  readonly records: readonly TableRecord[];
+  /** Problems reading the document itself (malformed JSON, a CSV row with a stray quote). */
+  readonly problems: readonly Finding[];
+}
