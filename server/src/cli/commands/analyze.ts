@@ -1,0 +1,70 @@
+/**
+ * `lonepair analyze [--json] <species...>`: one card (or JSON object) per argument.
+ * Exit 0 when every species was analysed, 1 when any was not, 2 on a usage error.
+ */
+import { parseArgs } from "node:util";
+import { analyzeSpecies } from "../../../../shared/src/index";
+import { formatAnalysisCard } from "../../../../shared/src/report/analysisCard";
+import { toAnalysisJson } from "../../../../shared/src/report/analysisJson";
+import type { CliCommand, CliIo } from "../cliCommand";
+import { EXIT_FAILURE, EXIT_OK, EXIT_USAGE } from "../cliCommand";
+import { cardStyle } from "../terminalStyle";
+
+const HELP = `Usage: lonepair analyze [--json] <species...>
+
+Works out the Lewis structure and VSEPR shape of each species: a formula (SF4, NH4+,
+SO4^2-), an mhchem span (\\ce{XeF4}) or a name ("sulfur tetrafluoride"). Quote names
+and anything your shell might expand. Each argument is one species.
+
+Options:
+  --json    print a JSON array, one object per species, instead of text cards
+  --help    show this help
+
+Exit status: 0 every species analysed, 1 any species not analysed, 2 usage error.
+`;
+
+export const analyzeCommand: CliCommand = {
+  name: "analyze",
+  summary: "shape, angles, polarity and hybridization of each species given",
+  help: HELP,
+  run: runAnalyze,
+};
+
+function runAnalyze(args: readonly string[], io: CliIo): number {
+  let parsed;
+  try {
+    parsed = parseArgs({
+      args: [...args],
+      options: { json: { type: "boolean" }, help: { type: "boolean" } },
+      allowPositionals: true,
+      strict: true,
+    });
+  } catch (error) {
+    io.writeError(`lonepair analyze: ${(error as Error).message}\n\n${HELP}`);
+    return EXIT_USAGE;
+  }
+  if (parsed.values.help) {
+    io.writeOut(HELP);
+    return EXIT_OK;
+  }
+  const speciesTexts = parsed.positionals;
+  if (speciesTexts.length === 0) {
+    io.writeError(`lonepair analyze: give at least one species.\n\n${HELP}`);
+    return EXIT_USAGE;
+  }
+
+  const results = speciesTexts.map((text) => ({ text, result: analyzeSpecies(text) }));
+  const failures = results.filter(({ result }) => !result.ok).length;
+
+  if (parsed.values.json) {
+    const json = results.map(({ text, result }) => toAnalysisJson(text, result));
+    io.writeOut(JSON.stringify(json, null, 2) + "\n");
+  } else {
+    const style = cardStyle(io.colour);
+    io.writeOut(results.map(({ text, result }) => formatAnalysisCard(text, result, style)).join("\n"));
+    if (results.length > 1) {
+      io.writeOut(`\n${results.length} species: ${results.length - failures} analysed, ${failures} not analysed\n`);
+    }
+  }
+  return failures === 0 ? EXIT_OK : EXIT_FAILURE;
+}

@@ -1,0 +1,154 @@
+/**
+ * A plain-text card for one analysis, for terminals and logs. The core never decides on
+ * colour: the caller passes a `CardStyle` (the command line does, when stdout is a terminal).
+ */
+import type {
+  AngleExpectation,
+  AnalysisResult,
+  CentreAnalysis,
+  MeasuredAngle,
+  SpeciesAnalysis,
+} from "../chemistry/types";
+import { lewisJson } from "./analysisJson";
+
+/** Wrappers for the parts of a card a caller may want to highlight. Identity by default. */
+export interface CardStyle {
+  readonly title: (text: string) => string;
+  readonly label: (text: string) => string;
+  readonly error: (text: string) => string;
+  readonly warning: (text: string) => string;
+  readonly muted: (text: string) => string;
+}
+
+const unstyled = (text: string): string => text;
+
+/** No colour, no escape codes: what files, pipes and CI logs get. */
+export const PLAIN_CARD_STYLE: CardStyle = {
+  title: unstyled,
+  label: unstyled,
+  error: unstyled,
+  warning: unstyled,
+  muted: unstyled,
+};
+
+/** The caution every user-facing result carries. */
+export const MODEL_CAUTION =
+  "Model prediction, not measured data. Follow the safety data sheet, local rules and licensed practice.";
+
+const LABEL_WIDTH = 20;
+const INDENT = "  ";
+
+/** Formats one analysis (or the reason it failed) as a multi-line card ending in a newline. */
+export function formatAnalysisCard(
+  input: string,
+  result: AnalysisResult,
+  style: CardStyle = PLAIN_CARD_STYLE,
+): string {
+  const lines = result.ok ? successLines(input, result.value, style) : failureLines(input, result, style);
+  return lines.join("\n") + "\n";
+}
+
+function failureLines(
+  input: string,
+  result: Extract<AnalysisResult, { ok: false }>,
+  style: CardStyle,
+): string[] {
+  const { problem, reading } = result;
+  const heading = reading ? `${input} (${reading.formula})` : input;
+  const lines = [
+    style.title(heading) + " " + style.error("- not analysed"),
+    row(style, "Problem", style.error(`${problem.message} [${problem.code}]`)),
+  ];
+  if (problem.suggestion !== undefined) lines.push(row(style, "Did you mean", problem.suggestion));
+  return lines;
+}
+
+function successLines(input: string, analysis: SpeciesAnalysis, style: CardStyle): string[] {
+  const { reading } = analysis;
+  const title = reading.name ? `${reading.formula} - ${reading.name}` : reading.formula;
+  const echoed = input.trim() === reading.formula || input.trim() === reading.name ? "" : `  (from "${input}")`;
+  const lines = [style.title(title) + style.muted(echoed)];
+  lines.push(row(style, "Charge", signed(reading.charge)));
+  lines.push(row(style, "Valence electrons", String(analysis.valenceElectrons)));
+  lines.push(...lewisLines(analysis, style));
+  // Measured angles belong to the species; list them once, under the first centre.
+  analysis.centres.forEach((centre, position) =>
+    lines.push(...centreLines(centre, position === 0 ? analysis.measuredAngles : [], style)),
+  );
+  if (analysis.centres.length === 0) lines.push(row(style, "Centres", "none (no atom has two or more neighbours)"));
+  lines.push(row(style, "Polarity", `${analysis.polarity.polar ? "polar" : "nonpolar"} - ${analysis.polarity.reason}`));
+  if (analysis.warnings.length === 0) {
+    lines.push(row(style, "Warnings", "none"));
+  } else {
+    analysis.warnings.forEach((warning, position) =>
+      lines.push(row(style, position === 0 ? "Warnings" : "", style.warning(warning))),
+    );
+  }
+  lines.push(INDENT + style.muted(`Caution: ${MODEL_CAUTION}`));
+  return lines;
+}
+
+function lewisLines(analysis: SpeciesAnalysis, style: CardStyle): string[] {
+  const lewis = lewisJson(analysis);
+  const charges =
+    lewis.formalCharges.length === 0
+      ? "all zero"
+      : lewis.formalCharges.map((entry) => `${entry.atom}${entry.index} ${signed(entry.formalCharge)}`).join(", ");
+  const lines = [
+    row(style, "Lewis structure", `${plural(lewis.bondingPairs, "bonding pair")}, ${plural(lewis.lonePairs, "lone pair")}`),
+    row(style, "Formal charges", charges),
+    row(style, "Resonance forms", String(lewis.resonanceForms)),
+  ];
+  if (analysis.radical) lines.push(row(style, "Radical", "yes (one unpaired electron)"));
+  if (analysis.electronDeficient) lines.push(row(style, "Octet", "electron-deficient centre"));
+  if (analysis.expandedOctet) lines.push(row(style, "Octet", "expanded octet"));
+  return lines;
+}
+
+function centreLines(
+  centre: CentreAnalysis,
+  measuredAngles: readonly MeasuredAngle[],
+  style: CardStyle,
+): string[] {
+  const sub = INDENT;
+  const lines = [
+    row(style, `Centre ${centre.atom} (atom ${centre.index})`, `${centre.axe}, steric number ${centre.stericNumber}`),
+    row(style, "Electron geometry", centre.electronGeometry, sub),
+    row(style, "Molecular geometry", centre.molecularGeometry, sub),
+    row(style, "Ideal angles", centre.idealAngles.map(degrees).join(", "), sub),
+  ];
+  centre.expectedAngles.forEach((angle, position) =>
+    lines.push(row(style, position === 0 ? "Expected angles" : "", expectedText(angle), sub)),
+  );
+  measuredAngles.forEach((angle, position) =>
+    lines.push(
+      row(style, position === 0 ? "Measured" : "", `${degrees(angle.degrees)} ${angle.between} ${style.muted(`(source: ${angle.source})`)}`, sub),
+    ),
+  );
+  const note = centre.hybridizationNote ? ` ${style.muted(`(${centre.hybridizationNote})`)}` : "";
+  lines.push(row(style, "Hybridization", centre.hybridization + note, sub));
+  return lines;
+}
+
+function expectedText(angle: AngleExpectation): string {
+  const between = angle.between ? `${angle.between}: ` : "";
+  const range = angle.min === angle.max ? degrees(angle.min) : `${degrees(angle.min)}-${degrees(angle.max)}`;
+  return `${between}${range} (ideal ${degrees(angle.ideal)}; ${angle.note})`;
+}
+
+function row(style: CardStyle, label: string, value: string, extraIndent = ""): string {
+  const width = LABEL_WIDTH - extraIndent.length;
+  return INDENT + extraIndent + style.label(label.padEnd(width)) + " " + value;
+}
+
+function degrees(value: number): string {
+  return `${Number.isInteger(value) ? value : value.toFixed(1)} deg`;
+}
+
+function signed(value: number): string {
+  return value > 0 ? `+${value}` : String(value);
+}
+
+function plural(count: number, noun: string): string {
+  return `${count} ${noun}${count === 1 ? "" : "s"}`;
+}

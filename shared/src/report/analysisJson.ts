@@ -1,0 +1,148 @@
+/**
+ * The machine-readable form of one analysis, as printed by `lonepair analyze --json`.
+ * The leading field names are a published contract (scripts and CI read them); extra
+ * fields may be added after them, never renamed or reordered.
+ */
+import type {
+  AngleExpectation,
+  AnalysisResult,
+  CentreAnalysis,
+  MeasuredAngle,
+  ProblemCode,
+  SpeciesAnalysis,
+} from "../chemistry/types";
+
+/** One centre in the JSON output. */
+export interface CentreJson {
+  readonly index: number;
+  readonly atom: string;
+  readonly axe: string;
+  readonly stericNumber: number;
+  readonly bondingDomains: number;
+  readonly lonePairs: number;
+  readonly electronGeometry: string;
+  readonly molecularGeometry: string;
+  readonly idealAngles: readonly number[];
+  readonly hybridization: string;
+  // extras after the fixed fields
+  readonly unpairedElectrons: number;
+  readonly expectedAngles: readonly AngleExpectation[];
+  readonly hybridizationNote?: string;
+}
+
+/** A non-zero formal charge on one atom of the chosen Lewis structure. */
+export interface FormalChargeJson {
+  readonly index: number;
+  readonly atom: string;
+  readonly formalCharge: number;
+}
+
+/** Summary of the chosen Lewis structure. */
+export interface LewisJson {
+  /** Shared electron pairs, a double bond counting two. */
+  readonly bondingPairs: number;
+  /** Lone pairs over all atoms. */
+  readonly lonePairs: number;
+  /** Only atoms whose formal charge is not zero. */
+  readonly formalCharges: readonly FormalChargeJson[];
+  readonly resonanceForms: number;
+}
+
+/** A species that was analysed. */
+export interface AnalysisJsonSuccess {
+  readonly input: string;
+  readonly ok: true;
+  readonly formula: string;
+  readonly charge: number;
+  readonly name: string | null;
+  readonly valenceElectrons: number;
+  readonly radical: boolean;
+  readonly centers: readonly CentreJson[];
+  readonly polar: boolean;
+  readonly warnings: readonly string[];
+  // extras after the fixed fields
+  readonly polarityReason: string;
+  readonly lewis: LewisJson;
+  readonly measuredAngles: readonly MeasuredAngle[];
+}
+
+/** A species that could not be read or analysed. */
+export interface AnalysisJsonFailure {
+  readonly input: string;
+  readonly ok: false;
+  readonly error: {
+    readonly code: ProblemCode;
+    readonly message: string;
+    readonly suggestion?: string;
+  };
+}
+
+export type AnalysisJson = AnalysisJsonSuccess | AnalysisJsonFailure;
+
+/**
+ * Turns an analysis into plain JSON-ready data with the fixed field order.
+ * `input` is the text exactly as the user gave it.
+ */
+export function toAnalysisJson(input: string, result: AnalysisResult): AnalysisJson {
+  if (!result.ok) {
+    const { code, message, suggestion } = result.problem;
+    return {
+      input,
+      ok: false,
+      error: suggestion === undefined ? { code, message } : { code, message, suggestion },
+    };
+  }
+  return successJson(input, result.value);
+}
+
+function successJson(input: string, analysis: SpeciesAnalysis): AnalysisJsonSuccess {
+  const { reading } = analysis;
+  return {
+    input,
+    ok: true,
+    formula: reading.formula,
+    charge: reading.charge,
+    name: reading.name ?? null,
+    valenceElectrons: analysis.valenceElectrons,
+    radical: analysis.radical,
+    centers: analysis.centres.map(centreJson),
+    polar: analysis.polarity.polar,
+    warnings: [...analysis.warnings],
+    polarityReason: analysis.polarity.reason,
+    lewis: lewisJson(analysis),
+    measuredAngles: analysis.measuredAngles.map((angle) => ({ ...angle })),
+  };
+}
+
+function centreJson(centre: CentreAnalysis): CentreJson {
+  const json: CentreJson = {
+    index: centre.index,
+    atom: centre.atom,
+    axe: centre.axe,
+    stericNumber: centre.stericNumber,
+    bondingDomains: centre.bondingDomains,
+    lonePairs: centre.lonePairs,
+    electronGeometry: centre.electronGeometry,
+    molecularGeometry: centre.molecularGeometry,
+    idealAngles: [...centre.idealAngles],
+    hybridization: centre.hybridization,
+    unpairedElectrons: centre.unpairedElectrons,
+    expectedAngles: centre.expectedAngles.map((angle) => ({ ...angle })),
+  };
+  return centre.hybridizationNote === undefined
+    ? json
+    : { ...json, hybridizationNote: centre.hybridizationNote };
+}
+
+/** Counts the chosen Lewis structure's electron pairs; shared with the text card. */
+export function lewisJson(analysis: SpeciesAnalysis): LewisJson {
+  const { atoms, bonds } = analysis.graph;
+  return {
+    bondingPairs: bonds.reduce((sum, bond) => sum + bond.order, 0),
+    lonePairs: atoms.reduce((sum, atom) => sum + atom.lonePairs, 0),
+    formalCharges: atoms.flatMap((atom, index) =>
+      atom.formalCharge === 0 ? [] : [{ index, atom: atom.symbol, formalCharge: atom.formalCharge }],
+    ),
+    resonanceForms: analysis.resonanceForms,
+  };
+}
