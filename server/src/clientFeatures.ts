@@ -1,0 +1,41 @@
+/**
+ * What the connected client says it can do, read once from `initialize`. Features consult
+ * this instead of the raw capabilities so that a missing capability degrades one feature.
+ */
+import { MarkupKind, type ClientCapabilities } from "vscode-languageserver";
+
+export interface ClientFeatures {
+  /** `workspace/configuration` can be asked for settings. */
+  readonly configuration: boolean;
+  /** Settings changes can be subscribed to with dynamic registration. */
+  readonly configurationRegistration: boolean;
+  /** The client pulls diagnostics (`textDocument/diagnostic`); otherwise we push them. */
+  readonly pullDiagnostics: boolean;
+  readonly diagnosticRefresh: boolean;
+  readonly inlayHints: boolean;
+  readonly inlayHintRefresh: boolean;
+  /** Workspace edits may carry versioned document changes. */
+  readonly documentChanges: boolean;
+  /** Code actions may be returned as literals with edits (not only commands). */
+  readonly codeActionLiterals: boolean;
+  readonly hoverMarkdown: boolean;
+  readonly relatedDiagnosticInformation: boolean;
+}
+
+/** Reads the capabilities the server cares about; anything absent counts as unsupported. */
+export function clientFeaturesFrom(capabilities: ClientCapabilities): ClientFeatures {
+  const workspace = capabilities.workspace;
+  const textDocument = capabilities.textDocument;
+  return {
+    configuration: workspace?.configuration === true,
+    configurationRegistration: workspace?.didChangeConfiguration?.dynamicRegistration === true,
+    pullDiagnostics: textDocument?.diagnostic !== undefined,
+    diagnosticRefresh: workspace?.diagnostics?.refreshSupport === true,
+    inlayHints: textDocument?.inlayHint !== undefined,
+    inlayHintRefresh: workspace?.inlayHint?.refreshSupport === true,
+    documentChanges: workspace?.workspaceEdit?.documentChanges === true,
+    codeActionLiterals: textDocument?.codeAction?.codeActionLiteralSupport !== undefined,
+    hoverMarkdown: textDocument?.hover?.contentFormat?.includes(MarkupKind.Markdown) ?? false,
+    relatedDiagnosticInformation: textDocument?.publishDiagnostics?.relatedInformation === true,
+  };
+}

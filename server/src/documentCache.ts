@@ -1,0 +1,116 @@
+/**
+ * Parse once per (uri, version): a bounded cache of document models that every feature
+ * reads. Findings are worked out lazily, once per version, the first time a feature asks.
+ */
+import type { TextDocument } from "vscode-languageserver-textdocument";
+import { analysedTextOf } from "./analysedText";
+import { analyzeDocument, checkDocument, documentKindFor, type DocumentKind, type DocumentModel, type Finding } from "./core";
+
+/** One analysed version of a document. */
+export interface AnalysedDocument {
+  readonly uri: string;
+  readonly version: number;
+  readonly kind: DocumentKind;
+  readonly model: DocumentModel;
+  /** Set when only a prefix was analysed. */
+  readonly truncatedAt?: number;
+  readonly binary: boolean;
+  /** The core's findings for this version, plus a note when the document was cut. */
+  findings(): readonly Finding[];
+}
+
+export interface DocumentCache {
+  /** The model of the document's current version, analysing it if needed. */
+  get(document: TextDocument): AnalysedDocument;
+  /** The kind of document, without analysing it. */
+  kindOf(document: TextDocument): DocumentKind;
+  delete(uri: string): void;
+  readonly size: number;
+}
+
+const EMPTY_MODEL = (kind: DocumentKind): DocumentModel => ({ kind, occurrences: [], records: [], problems: [] });
+
+/** Creates a cache holding at most `capacity` documents, least recently used dropped first. */
+export function createDocumentCache(capacity = 32): DocumentCache {
+  const entries = new Map<string, AnalysedDocument>();
+  const kinds = new Map<string, DocumentKind>();
+
+  const kindOf = (document: TextDocument): DocumentKind => {
+    const known = kinds.get(document.uri);
+    if (known) return known;
+    const kind = documentKindFor(fileNameOf(document.uri), document.languageId, document.getText().slice(0, 512)) ?? "plaintext";
+    kinds.set(document.uri, kind);
+    return kind;
+  };
+
+  return {
+    get(document) {
+      const cached = entries.get(document.uri);
+      if (cached && cached.version === document.version) {
+        // Re-insert so the map's order stays least-recently-used first.
+        entries.delete(document.uri);
+        entries.set(document.uri, cached);
+        return cached;
+      }
+      const entry = analyse(document, kindOf(document));
+      entries.delete(document.uri);
+      entries.set(document.uri, entry);
+      while (entries.size > capacity) {
+        const oldest = entries.keys().next().value as string;
+        entries.delete(oldest);
+      }
+      return entry;
+    },
+    kindOf,
+    delete(uri) {
+      entries.delete(uri);
+      kinds.delete(uri);
+    },
+    get size() {
+      return entries.size;
+    },
+  };
+}
+
+function analyse(document: TextDocument, kind: DocumentKind): AnalysedDocument {
+  const analysed = analysedTextOf(document.getText());
+  const model = analysed.binary ? EMPTY_MODEL(kind) : analyzeDocument(analysed.text, kind);
+  let findings: readonly Finding[] | undefined;
+  return {
+    uri: document.uri,
+    version: document.version,
+    kind,
+    model,
+    truncatedAt: analysed.truncatedAt,
+    binary: analysed.binary,
+    findings() {
+      findings ??= [...truncationNote(analysed.truncatedAt), ...model.problems, ...checkDocument(model)];
+      return findings;
+    },
+  };
+}
+
+/** One information finding at the top of a document that was only partly analysed. */
+function truncationNote(truncatedAt: number | undefined): Finding[] {
+  if (truncatedAt === undefined) return [];
+  const megabytes = (truncatedAt / (1024 * 1024)).toFixed(1);
+  return [
+    {
+      range: { start: 0, end: 0 },
+      severity: "information",
+      code: "document-partly-analysed",
+      message: `This document is large: lonepair analysed only its first ${megabytes} million characters.`,
+    },
+  ];
+}
+
+/** The last path segment of a URI, decoded, for recognising `.csv` and friends. */
+function fileNameOf(uri: string): string {
+  const path = uri.split(/[?#]/)[0];
+  const last = path.slice(path.lastIndexOf("/") + 1);
+  try {
+    return decodeURIComponent(last);
+  } catch {
+    return last;
+  }
+}

@@ -1,0 +1,114 @@
+/**
+ * Quick fixes: one per finding that carries a fix (replacing only that range), and one
+ * action that fixes every table value in the file as a single workspace edit.
+ */
+import {
+  CodeActionKind,
+  type CodeAction,
+  type CodeActionParams,
+  type Diagnostic,
+  type TextEdit,
+  type WorkspaceEdit,
+} from "vscode-languageserver";
+import type { TextDocument } from "vscode-languageserver-textdocument";
+import type { DocumentModel, Finding, TextFix } from "../core";
+import { guarded } from "../guardedHandler";
+import { lspRange, offsetRange, rangesTouch, rangeWithin } from "../ranges";
+import { enabledDocument, type ServerContext } from "../serverContext";
+import { DIAGNOSTIC_SOURCE, diagnosticsOf } from "./diagnostics";
+
+/** Title of the action that fixes every table value in one go. */
+export const FIX_ALL_TITLE = "Fix all lonepair table values in this file";
+
+/** Kind of the fix-all action when the client asks for source actions. */
+const FIX_ALL_KIND = `${CodeActionKind.SourceFixAll}.lonepair`;
+
+/** Registers the code action handler. */
+export function registerCodeActions(context: ServerContext): void {
+  context.connection.onCodeAction(
+    guarded<CodeActionParams, CodeAction[]>(context.log, "code actions", [], async (params, token) => {
+      // Without literal support a client can only run commands; we offer none rather than half a feature.
+      if (!context.clientFeatures().codeActionLiterals) return [];
+      const enabled = await enabledDocument(context, params.textDocument.uri);
+      if (!enabled) return [];
+      const { document, analysed } = enabled;
+      const findings = analysed.findings();
+      const only = params.context.only;
+      const wants = (kind: string): boolean => !only || only.some((requested) => kind === requested || kind.startsWith(`${requested}.`));
+      const actions: CodeAction[] = [];
+      if (wants(CodeActionKind.QuickFix)) {
+        const requested = offsetRange(document, params.range);
+        for (const finding of findings) {
+          if (token.isCancellationRequested) return [];
+          if (!finding.fix || !rangesTouch(finding.range, requested)) continue;
+          actions.push(quickFix(context, document, finding, finding.fix, params.context.diagnostics));
+        }
+      }
+      const tableFixes = tableValueFixes(analysed.model, findings);
+      if (tableFixes.length > 0) {
+        const kind = wants(CodeActionKind.QuickFix) ? CodeActionKind.QuickFix : wants(FIX_ALL_KIND) ? FIX_ALL_KIND : undefined;
+        if (kind) actions.push({ title: FIX_ALL_TITLE, kind, edit: workspaceEdit(context, document, tableFixes.map((fix) => textEdit(document, fix))) });
+      }
+      return actions;
+    }),
+  );
+}
+
+function quickFix(
+  context: ServerContext,
+  document: TextDocument,
+  finding: Finding,
+  fix: TextFix,
+  contextDiagnostics: readonly Diagnostic[],
+): CodeAction {
+  const [own] = diagnosticsOf(document, [finding]);
+  const matching = contextDiagnostics.filter(
+    (diagnostic) => diagnostic.source === DIAGNOSTIC_SOURCE && diagnostic.code === own.code && sameRange(diagnostic, own),
+  );
+  return {
+    title: fix.title,
+    kind: CodeActionKind.QuickFix,
+    diagnostics: matching.length > 0 ? matching : [own],
+    isPreferred: true,
+    edit: workspaceEdit(context, document, [textEdit(document, fix)]),
+  };
+}
+
+/**
+ * Fixes whose range lies inside a recognised table cell, in document order, without overlaps
+ * (two findings may want to rewrite the same cell; the first wins).
+ */
+export function tableValueFixes(model: DocumentModel, findings: readonly Finding[]): TextFix[] {
+  const cells = model.records.flatMap((record) => [record.species.range, ...record.cells.map((cell) => cell.range)]);
+  const fixes = findings
+    .map((finding) => finding.fix)
+    .filter((fix): fix is TextFix => fix !== undefined && cells.some((cell) => rangeWithin(fix.range, cell)))
+    .sort((a, b) => a.range.start - b.range.start);
+  const chosen: TextFix[] = [];
+  for (const fix of fixes) {
+    const previous = chosen[chosen.length - 1];
+    if (!previous || previous.range.end <= fix.range.start) chosen.push(fix);
+  }
+  return chosen;
+}
+
+function textEdit(document: TextDocument, fix: TextFix): TextEdit {
+  return { range: lspRange(document, fix.range), newText: fix.newText };
+}
+
+/** Versioned document changes where the client takes them, so a stale edit is refused. */
+function workspaceEdit(context: ServerContext, document: TextDocument, edits: TextEdit[]): WorkspaceEdit {
+  if (context.clientFeatures().documentChanges) {
+    return { documentChanges: [{ textDocument: { uri: document.uri, version: document.version }, edits }] };
+  }
+  return { changes: { [document.uri]: edits } };
+}
+
+function sameRange(a: Diagnostic, b: Diagnostic): boolean {
+  return (
+    a.range.start.line === b.range.start.line &&
+    a.range.start.character === b.range.start.character &&
+    a.range.end.line === b.range.end.line &&
+    a.range.end.character === b.range.end.character
+  );
+}

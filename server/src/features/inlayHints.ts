@@ -1,0 +1,65 @@
+/**
+ * Inlay hints: the molecular geometry after each species, e.g. "SF4: seesaw". Only for the
+ * range the editor asks for; prose and data files are switched on and off separately.
+ */
+import { InlayHintKind, type InlayHint, type InlayHintParams } from "vscode-languageserver";
+import { HOVER_CAUTION } from "../../../shared/src/report/hoverMarkdown";
+import type { DocumentKind, DocumentModel, SpeciesAnalysis, SpeciesOccurrence } from "../core";
+import { guarded } from "../guardedHandler";
+import { offsetRange } from "../ranges";
+import { enabledDocument, type ServerContext } from "../serverContext";
+import type { ServerSettings } from "../settings";
+import { analysisOf } from "../speciesAnalyses";
+
+const PROSE_KINDS: readonly DocumentKind[] = ["markdown", "plaintext"];
+
+/** Registers the inlay hint handler (only called when the client supports inlay hints). */
+export function registerInlayHints(context: ServerContext): void {
+  context.connection.languages.inlayHint.on(
+    guarded<InlayHintParams, InlayHint[]>(context.log, "inlay hints", [], async (params, token) => {
+      const enabled = await enabledDocument(context, params.textDocument.uri);
+      if (!enabled || !hintsWanted(enabled.analysed.kind, enabled.settings)) return [];
+      const { document, analysed } = enabled;
+      const requested = offsetRange(document, params.range);
+      const hints: InlayHint[] = [];
+      for (const occurrence of hintedOccurrences(analysed.model)) {
+        if (token.isCancellationRequested) return [];
+        if (occurrence.range.end < requested.start) continue;
+        if (occurrence.range.end > requested.end) break;
+        const result = analysisOf(occurrence);
+        const label = result.ok ? geometryLabel(result.value) : undefined;
+        if (!label) continue;
+        hints.push({
+          position: document.positionAt(occurrence.range.end),
+          label: `: ${label}`,
+          kind: InlayHintKind.Type,
+          tooltip: HOVER_CAUTION,
+        });
+      }
+      return hints;
+    }),
+  );
+}
+
+function hintsWanted(kind: DocumentKind, settings: ServerSettings): boolean {
+  return PROSE_KINDS.includes(kind) ? settings.inlayHints.prose : settings.inlayHints.dataFiles;
+}
+
+/** In prose, a table's species cells are data and get no hint; in data files every species does. */
+function hintedOccurrences(model: DocumentModel): readonly SpeciesOccurrence[] {
+  if (!PROSE_KINDS.includes(model.kind)) return model.occurrences;
+  const tableCells = new Set(model.records.map((record) => `${record.species.range.start}:${record.species.range.end}`));
+  return model.occurrences.filter((occurrence) => !tableCells.has(`${occurrence.range.start}:${occurrence.range.end}`));
+}
+
+/** "seesaw" for one centre; "C: tetrahedral, O: bent" when the centres differ. */
+export function geometryLabel(analysis: SpeciesAnalysis): string | undefined {
+  const labels: string[] = [];
+  for (const centre of analysis.centres) {
+    const label = `${centre.atom}: ${centre.molecularGeometry}`;
+    if (!labels.includes(label)) labels.push(label);
+  }
+  if (labels.length === 0) return undefined;
+  const geometries = new Set(analysis.centres.map((centre) => centre.molecularGeometry));
+  return geometries.size === 1 ? analysis.centres[0].molecularGeometry : labels.join(", ");
+}

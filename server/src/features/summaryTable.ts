@@ -1,0 +1,91 @@
+/**
+ * Summary table: a geometry table of the species in a document or a range, as markdown or
+ * CSV. Reachable as the command `lonepair.summaryTable` and as the request `lonepair/summaryTable`.
+ */
+import { RequestType, type ExecuteCommandParams, type Range } from "vscode-languageserver";
+import { summaryTable, type SummaryFormat } from "../../../shared/src/report/summaryTable";
+import type { SpeciesAnalysis } from "../core";
+import { guarded } from "../guardedHandler";
+import { offsetRange, rangesTouch } from "../ranges";
+import { enabledDocument, type ServerContext } from "../serverContext";
+import { analysisOf } from "../speciesAnalyses";
+
+/** The command name, also listed in `executeCommandProvider`. */
+export const SUMMARY_TABLE_COMMAND = "lonepair.summaryTable";
+
+/** Arguments of both the command and the request. */
+export interface SummaryTableParams {
+  readonly uri: string;
+  readonly range?: Range;
+  readonly format?: SummaryFormat;
+}
+
+/** The answer: the table text (markdown tables end with the caution line). */
+export interface SummaryTableResult {
+  readonly text: string;
+}
+
+export const summaryTableRequest = new RequestType<SummaryTableParams, SummaryTableResult, void>("lonepair/summaryTable");
+
+const EMPTY: SummaryTableResult = { text: "" };
+
+/** Registers the request; the command is dispatched by `main.ts` through `summaryTableFor`. */
+export function registerSummaryTable(context: ServerContext): void {
+  context.connection.onRequest(
+    summaryTableRequest,
+    guarded<SummaryTableParams, SummaryTableResult>(context.log, "summary table", EMPTY, (params) => summaryTableFor(context, params)),
+  );
+}
+
+/** Handles `workspace/executeCommand` for the summary table command. */
+export function summaryTableCommand(context: ServerContext) {
+  return guarded<ExecuteCommandParams, SummaryTableResult>(context.log, "summary table command", EMPTY, (params) => {
+    const [argument] = params.arguments ?? [];
+    return summaryTableFor(context, argument as SummaryTableParams);
+  });
+}
+
+/** Builds the table for checked parameters; anything malformed gives an empty text. */
+export async function summaryTableFor(context: ServerContext, params: unknown): Promise<SummaryTableResult> {
+  if (!isParams(params)) return EMPTY;
+  const enabled = await enabledDocument(context, params.uri);
+  if (!enabled) return EMPTY;
+  const { document, analysed, settings } = enabled;
+  const requested = params.range ? offsetRange(document, params.range) : undefined;
+  const analyses: SpeciesAnalysis[] = [];
+  const unanalysed: { text: string; message: string }[] = [];
+  for (const occurrence of analysed.model.occurrences) {
+    if (requested && !rangesTouch(occurrence.range, requested)) continue;
+    const result = analysisOf(occurrence);
+    if (result.ok) analyses.push(result.value);
+    else unanalysed.push({ text: occurrence.text, message: result.problem.message });
+  }
+  const text = summaryTable({
+    analyses,
+    unanalysed,
+    columns: settings.summaryTable.columns,
+    format: params.format === "csv" ? "csv" : "markdown",
+    angleDecimals: settings.angleDecimals,
+  });
+  return { text };
+}
+
+function isParams(value: unknown): value is SummaryTableParams {
+  if (typeof value !== "object" || value === null) return false;
+  const candidate = value as Record<string, unknown>;
+  if (typeof candidate.uri !== "string") return false;
+  if (candidate.range !== undefined && !isRange(candidate.range)) return false;
+  return candidate.format === undefined || candidate.format === "markdown" || candidate.format === "csv";
+}
+
+function isRange(value: unknown): value is Range {
+  const range = value as Range | null;
+  return (
+    typeof range === "object" &&
+    range !== null &&
+    Number.isInteger(range.start?.line) &&
+    Number.isInteger(range.start?.character) &&
+    Number.isInteger(range.end?.line) &&
+    Number.isInteger(range.end?.character)
+  );
+}

@@ -1,0 +1,40 @@
+/**
+ * What every feature adapter is given: the connection, the open documents, the model cache,
+ * settings and the client's abilities. One object, so features stay short and testable.
+ */
+import type { Connection, TextDocuments } from "vscode-languageserver";
+import type { TextDocument } from "vscode-languageserver-textdocument";
+import type { ClientFeatures } from "./clientFeatures";
+import type { AnalysedDocument, DocumentCache } from "./documentCache";
+import type { ServerLog } from "./guardedHandler";
+import type { ServerSettings } from "./settings";
+import type { SettingsStore } from "./settingsStore";
+
+export interface ServerContext {
+  readonly connection: Connection;
+  readonly documents: TextDocuments<TextDocument>;
+  readonly cache: DocumentCache;
+  readonly settings: SettingsStore;
+  readonly log: ServerLog;
+  /** Known once `initialize` has been answered. */
+  clientFeatures(): ClientFeatures;
+}
+
+/** An open document that lonepair is enabled for, with its model and settings. */
+export interface EnabledDocument {
+  readonly document: TextDocument;
+  readonly analysed: AnalysedDocument;
+  readonly settings: ServerSettings;
+}
+
+/** The open document at `uri` with its model, or undefined when it is closed or not enabled. */
+export async function enabledDocument(context: ServerContext, uri: string): Promise<EnabledDocument | undefined> {
+  const document = context.documents.get(uri);
+  if (!document) return undefined;
+  const settings = await context.settings.forUri(uri);
+  // Settings came back asynchronously: a newer edit may have arrived meanwhile.
+  const current = context.documents.get(uri);
+  if (!current) return undefined;
+  if (!settings.enabledLanguages.includes(context.cache.kindOf(current))) return undefined;
+  return { document: current, analysed: context.cache.get(current), settings };
+}

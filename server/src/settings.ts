@@ -1,0 +1,66 @@
+/**
+ * The `lonepair.*` settings the server reads, their defaults, and how a raw value from the
+ * client becomes a checked settings object (anything malformed falls back to the default).
+ */
+import { SUMMARY_COLUMNS, isSummaryColumn, type SummaryColumn } from "../../shared/src/report/summaryTable";
+import type { DocumentKind } from "./core";
+
+/** Settings that apply to one document. */
+export interface ServerSettings {
+  /** Document kinds the server analyses. */
+  readonly enabledLanguages: readonly DocumentKind[];
+  readonly inlayHints: {
+    /** Hints after species in markdown and plain text. */
+    readonly prose: boolean;
+    /** Hints after species in CSV, TSV, JSON and YAML. */
+    readonly dataFiles: boolean;
+  };
+  /** Digits after the decimal point for angles, 0-3. */
+  readonly angleDecimals: number;
+  readonly summaryTable: { readonly columns: readonly SummaryColumn[] };
+}
+
+const ALL_KINDS: readonly DocumentKind[] = ["markdown", "plaintext", "csv", "tsv", "json", "yaml"];
+
+export const DEFAULT_SETTINGS: ServerSettings = {
+  enabledLanguages: ALL_KINDS,
+  inlayHints: { prose: true, dataFiles: false },
+  angleDecimals: 1,
+  summaryTable: { columns: SUMMARY_COLUMNS },
+};
+
+/** Reads the `lonepair` section as the client sent it; never throws. */
+export function settingsFrom(raw: unknown): ServerSettings {
+  const section = isRecord(raw) ? raw : {};
+  const hints = isRecord(section.inlayHints) ? section.inlayHints : {};
+  const table = isRecord(section.summaryTable) ? section.summaryTable : {};
+  return {
+    enabledLanguages: kindList(section.enabledLanguages) ?? DEFAULT_SETTINGS.enabledLanguages,
+    inlayHints: {
+      prose: typeof hints.prose === "boolean" ? hints.prose : DEFAULT_SETTINGS.inlayHints.prose,
+      dataFiles: typeof hints.dataFiles === "boolean" ? hints.dataFiles : DEFAULT_SETTINGS.inlayHints.dataFiles,
+    },
+    angleDecimals: decimals(section.angleDecimals),
+    summaryTable: { columns: columnList(table.columns) ?? DEFAULT_SETTINGS.summaryTable.columns },
+  };
+}
+
+function isRecord(value: unknown): value is Record<string, unknown> {
+  return typeof value === "object" && value !== null && !Array.isArray(value);
+}
+
+function kindList(value: unknown): DocumentKind[] | undefined {
+  if (!Array.isArray(value)) return undefined;
+  return value.filter((item): item is DocumentKind => (ALL_KINDS as readonly unknown[]).includes(item));
+}
+
+function columnList(value: unknown): SummaryColumn[] | undefined {
+  if (!Array.isArray(value)) return undefined;
+  const columns = value.filter(isSummaryColumn);
+  return columns.length > 0 ? columns : undefined;
+}
+
+function decimals(value: unknown): number {
+  if (typeof value !== "number" || !Number.isFinite(value)) return DEFAULT_SETTINGS.angleDecimals;
+  return Math.max(0, Math.min(3, Math.round(value)));
+}

@@ -1,0 +1,167 @@
+/**
+ * Turns one species analysis into a short markdown card for an editor hover.
+ * Pure: takes the core's plain data, returns a string; no editor or protocol types.
+ */
+import type {
+  AngleExpectation,
+  CentreAnalysis,
+  MeasuredAngle,
+  MolecularGraph,
+  SpeciesAnalysis,
+} from "../chemistry/types";
+
+/** The caution every editor-facing result carries (hover cards and summary tables). */
+export const HOVER_CAUTION =
+  "Model prediction, not measured data: follow the safety data sheet, local rules and licensed practice.";
+
+/** Options that change how numbers are written. */
+export interface HoverMarkdownOptions {
+  /** Digits after the decimal point for angles (0-3). */
+  readonly angleDecimals: number;
+  /** At most this many distinct centre groups are listed; the rest are counted. */
+  readonly maxCentreGroups?: number;
+}
+
+const DEFAULT_MAX_CENTRE_GROUPS = 8;
+
+/** Writes an angle in degrees with a fixed number of decimals, e.g. "109.5°". */
+export function formatAngle(degrees: number, decimals: number): string {
+  const digits = Math.max(0, Math.min(3, Math.trunc(decimals)));
+  return `${degrees.toFixed(digits)}°`;
+}
+
+/** Builds the hover card for one analysed species. */
+export function hoverMarkdown(analysis: SpeciesAnalysis, options: HoverMarkdownOptions): string {
+  const lines: string[] = [];
+  lines.push(titleLine(analysis));
+  lines.push("");
+  lines.push(electronLine(analysis));
+  lines.push("");
+  for (const block of centreBlocks(analysis.centres, options)) {
+    lines.push(...block, "");
+  }
+  if (analysis.centres.length === 0) {
+    lines.push("No central atom: fewer than two atoms are bonded to any one atom.", "");
+  }
+  const measured = measuredLines(analysis.measuredAngles, options.angleDecimals);
+  if (measured.length > 0) lines.push(...measured, "");
+  lines.push(polarityLine(analysis), "");
+  for (const warning of analysis.warnings) lines.push(`- ⚠ ${escapeMarkdown(warning)}`);
+  if (analysis.warnings.length > 0) lines.push("");
+  lines.push(`_${HOVER_CAUTION}_`);
+  return lines.join("\n");
+}
+
+/** Builds a short card for text that names no species lonepair can analyse. */
+export function problemMarkdown(text: string, message: string): string {
+  return [`**${escapeMarkdown(text)}**: not analysed`, "", escapeMarkdown(message), "", `_${HOVER_CAUTION}_`].join("\n");
+}
+
+function titleLine(analysis: SpeciesAnalysis): string {
+  const formula = `\`${analysis.reading.formula}\``;
+  const name = analysis.reading.name;
+  return name ? `**${escapeMarkdown(name)}** · ${formula}` : `**${formula}**`;
+}
+
+function electronLine(analysis: SpeciesAnalysis): string {
+  const parts = [
+    `${analysis.valenceElectrons} valence electrons`,
+    `${bondingPairs(analysis.graph)} bonding pairs`,
+    `${lonePairTotal(analysis.graph)} lone pairs`,
+  ];
+  const charges = formalChargeText(analysis.graph);
+  if (charges) parts.push(`formal charges ${charges}`);
+  if (analysis.resonanceForms > 1) parts.push(`${analysis.resonanceForms} resonance forms`);
+  if (analysis.radical) parts.push("radical");
+  return `Lewis structure: ${parts.join(" · ")}`;
+}
+
+/** A double bond shares two pairs, a triple bond three. */
+function bondingPairs(graph: MolecularGraph): number {
+  return graph.bonds.reduce((sum, bond) => sum + bond.order, 0);
+}
+
+function lonePairTotal(graph: MolecularGraph): number {
+  return graph.atoms.reduce((sum, atom) => sum + atom.lonePairs, 0);
+}
+
+function formalChargeText(graph: MolecularGraph): string {
+  const charged = new Map<string, number>();
+  for (const atom of graph.atoms) {
+    if (atom.formalCharge === 0) continue;
+    const label = `${atom.symbol} ${signed(atom.formalCharge)}`;
+    charged.set(label, (charged.get(label) ?? 0) + 1);
+  }
+  return [...charged].map(([label, count]) => (count > 1 ? `${label} (×${count})` : label)).join(", ");
+}
+
+function signed(value: number): string {
+  return value > 0 ? `+${value}` : `−${Math.abs(value)}`;
+}
+
+/** Identical centres (the six carbons of hexane) are listed once with a count. */
+function centreBlocks(centres: readonly CentreAnalysis[], options: HoverMarkdownOptions): string[][] {
+  const groups = new Map<string, { centre: CentreAnalysis; count: number }>();
+  for (const centre of centres) {
+    const key = [centre.atom, centre.axe, centre.molecularGeometry, centre.hybridization].join("|");
+    const group = groups.get(key);
+    if (group) group.count += 1;
+    else groups.set(key, { centre, count: 1 });
+  }
+  const limit = options.maxCentreGroups ?? DEFAULT_MAX_CENTRE_GROUPS;
+  const listed = [...groups.values()].slice(0, limit);
+  const blocks = listed.map(({ centre, count }) => centreBlock(centre, count, centres.length > 1, options));
+  const hidden = groups.size - listed.length;
+  if (hidden > 0) blocks.push([`…and ${hidden} more kinds of centre.`]);
+  return blocks;
+}
+
+function centreBlock(
+  centre: CentreAnalysis,
+  count: number,
+  multiCentre: boolean,
+  options: HoverMarkdownOptions,
+): string[] {
+  const label = multiCentre ? `**Centre ${centre.atom}${count > 1 ? ` (×${count})` : ""}**` : `**Centre ${centre.atom}**`;
+  const lines = [
+    `${label} · ${centre.axe} · steric number ${centre.stericNumber}`,
+    `- Electron geometry: ${centre.electronGeometry}`,
+    `- Molecular geometry: **${centre.molecularGeometry}**`,
+  ];
+  if (centre.idealAngles.length > 0) {
+    lines.push(`- Ideal angles: ${centre.idealAngles.map((angle) => formatAngle(angle, options.angleDecimals)).join(", ")}`);
+  }
+  for (const expectation of centre.expectedAngles) {
+    lines.push(`- Expected: ${expectationText(expectation, options.angleDecimals)}`);
+  }
+  const note = centre.hybridizationNote ? ` (${escapeMarkdown(centre.hybridizationNote)})` : "";
+  lines.push(`- Hybridization: ${centre.hybridization}${note}`);
+  return lines;
+}
+
+function expectationText(expectation: AngleExpectation, decimals: number): string {
+  const between = expectation.between ? `${escapeMarkdown(expectation.between)} ` : "";
+  const span =
+    expectation.min === expectation.max
+      ? formatAngle(expectation.min, decimals)
+      : `${formatAngle(expectation.min, decimals)}–${formatAngle(expectation.max, decimals)}`;
+  const note = expectation.note ? `: ${escapeMarkdown(expectation.note)}` : "";
+  return `${between}${span} (ideal ${formatAngle(expectation.ideal, decimals)})${note}`;
+}
+
+function measuredLines(measured: readonly MeasuredAngle[], decimals: number): string[] {
+  return measured.map(
+    (angle) =>
+      `- Measured: ${formatAngle(angle.degrees, decimals)} ${escapeMarkdown(angle.between)} (source: ${escapeMarkdown(angle.source)})`,
+  );
+}
+
+function polarityLine(analysis: SpeciesAnalysis): string {
+  const verdict = analysis.polarity.polar ? "polar" : "nonpolar";
+  return `Polarity: **${verdict}** (${escapeMarkdown(analysis.polarity.reason)})`;
+}
+
+/** Text from the document or the core goes into markdown; keep it from turning into markup. */
+function escapeMarkdown(text: string): string {
+  return text.replace(/[\\`*_[\]<>|#]/g, (character) => `\\${character}`);
+}

@@ -1,0 +1,164 @@
+/**
+ * Builds a geometry table (markdown or CSV) for a list of analysed species.
+ * Pure: the caller decides which species and in which order; duplicates are dropped here.
+ */
+import type { CentreAnalysis, SpeciesAnalysis } from "../chemistry/types";
+import { HOVER_CAUTION, formatAngle } from "./hoverMarkdown";
+
+/** A column the table can show. */
+export type SummaryColumn =
+  | "formula"
+  | "name"
+  | "valenceElectrons"
+  | "axe"
+  | "electronGeometry"
+  | "molecularGeometry"
+  | "idealAngles"
+  | "hybridization"
+  | "polarity";
+
+export type SummaryFormat = "markdown" | "csv";
+
+/** Every column, in the order the table shows them by default. */
+export const SUMMARY_COLUMNS: readonly SummaryColumn[] = [
+  "formula",
+  "name",
+  "valenceElectrons",
+  "axe",
+  "electronGeometry",
+  "molecularGeometry",
+  "idealAngles",
+  "hybridization",
+  "polarity",
+];
+
+const COLUMN_HEADERS: Readonly<Record<SummaryColumn, string>> = {
+  formula: "Formula",
+  name: "Name",
+  valenceElectrons: "Valence electrons",
+  axe: "AXE",
+  electronGeometry: "Electron geometry",
+  molecularGeometry: "Molecular geometry",
+  idealAngles: "Ideal angles",
+  hybridization: "Hybridization",
+  polarity: "Polarity",
+};
+
+/** A species that could not be analysed, listed under a markdown table. */
+export interface UnanalysedSpecies {
+  readonly text: string;
+  readonly message: string;
+}
+
+export interface SummaryTableInput {
+  /** Analyses in order of first appearance; later duplicates (same formula) are skipped. */
+  readonly analyses: readonly SpeciesAnalysis[];
+  readonly unanalysed?: readonly UnanalysedSpecies[];
+  readonly columns?: readonly SummaryColumn[];
+  readonly format: SummaryFormat;
+  readonly angleDecimals: number;
+}
+
+/** True for a string that names a known column. */
+export function isSummaryColumn(value: unknown): value is SummaryColumn {
+  return typeof value === "string" && (SUMMARY_COLUMNS as readonly string[]).includes(value);
+}
+
+/** Builds the table text. An empty or unknown column list falls back to every column. */
+export function summaryTable(input: SummaryTableInput): string {
+  const requested = (input.columns ?? []).filter(isSummaryColumn);
+  const columns = requested.length > 0 ? requested : SUMMARY_COLUMNS;
+  const rows = uniqueByFormula(input.analyses).map((analysis) =>
+    columns.map((column) => cellText(analysis, column, input.angleDecimals)),
+  );
+  const headers = columns.map((column) => COLUMN_HEADERS[column]);
+  return input.format === "csv"
+    ? csvTable(headers, rows)
+    : markdownTable(headers, rows, uniqueUnanalysed(input.unanalysed ?? []));
+}
+
+function uniqueByFormula(analyses: readonly SpeciesAnalysis[]): SpeciesAnalysis[] {
+  const seen = new Set<string>();
+  return analyses.filter((analysis) => {
+    if (seen.has(analysis.reading.formula)) return false;
+    seen.add(analysis.reading.formula);
+    return true;
+  });
+}
+
+function uniqueUnanalysed(items: readonly UnanalysedSpecies[]): UnanalysedSpecies[] {
+  const seen = new Set<string>();
+  return items.filter((item) => !seen.has(item.text) && seen.add(item.text) !== undefined);
+}
+
+function cellText(analysis: SpeciesAnalysis, column: SummaryColumn, decimals: number): string {
+  switch (column) {
+    case "formula":
+      return analysis.reading.formula;
+    case "name":
+      return analysis.reading.name ?? "";
+    case "valenceElectrons":
+      return String(analysis.valenceElectrons);
+    case "axe":
+      return perCentre(analysis.centres, (centre) => centre.axe);
+    case "electronGeometry":
+      return perCentre(analysis.centres, (centre) => centre.electronGeometry);
+    case "molecularGeometry":
+      return perCentre(analysis.centres, (centre) => centre.molecularGeometry);
+    case "idealAngles":
+      return perCentre(analysis.centres, (centre) =>
+        centre.idealAngles.map((angle) => formatAngle(angle, decimals)).join(", "),
+      );
+    case "hybridization":
+      return perCentre(analysis.centres, (centre) => centre.hybridization);
+    case "polarity":
+      return analysis.polarity.polar ? "polar" : "nonpolar";
+  }
+}
+
+/**
+ * One centre shows its value alone; several show "C: tetrahedral; O: bent", with identical
+ * neighbours merged so that hexane's six carbons read as one entry.
+ */
+function perCentre(centres: readonly CentreAnalysis[], valueOf: (centre: CentreAnalysis) => string): string {
+  if (centres.length === 0) return "";
+  if (centres.length === 1) return valueOf(centres[0]);
+  const entries: string[] = [];
+  for (const centre of centres) {
+    const entry = `${centre.atom}: ${valueOf(centre)}`;
+    if (!entries.includes(entry)) entries.push(entry);
+  }
+  return entries.join("; ");
+}
+
+function markdownTable(headers: readonly string[], rows: readonly string[][], unanalysed: readonly UnanalysedSpecies[]): string {
+  const lines = [
+    markdownRow(headers),
+    markdownRow(headers.map(() => "---")),
+    ...rows.map((row) => markdownRow(row)),
+    "",
+  ];
+  if (unanalysed.length > 0) {
+    lines.push(`Not analysed: ${unanalysed.map((item) => `${escapeCell(item.text)} (${escapeCell(item.message)})`).join("; ")}`, "");
+  }
+  lines.push(`_${HOVER_CAUTION}_`, "");
+  return lines.join("\n");
+}
+
+function markdownRow(cells: readonly string[]): string {
+  return `| ${cells.map(escapeCell).join(" | ")} |`;
+}
+
+/** A pipe or a line break inside a cell would split the markdown row. */
+function escapeCell(text: string): string {
+  return text.replace(/\\/g, "\\\\").replace(/\|/g, "\\|").replace(/\r?\n/g, " ");
+}
+
+function csvTable(headers: readonly string[], rows: readonly string[][]): string {
+  return [headers, ...rows].map((row) => row.map(csvField).join(",")).join("\r\n") + "\r\n";
+}
+
+/** Quotes a field only when it has to (RFC 4180: comma, quote, CR or LF). */
+function csvField(text: string): string {
+  return /[",\r\n]/.test(text) ? `"${text.replace(/"/g, '""')}"` : text;
+}
