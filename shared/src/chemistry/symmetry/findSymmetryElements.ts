@@ -1,0 +1,107 @@
+/**
+ * The search itself: every candidate direction is tested as a rotation axis (of each order the
+ * atom layout allows) and as a mirror normal; inversion and improper rotations are tested
+ * directly. What survives is the molecule's set of symmetry elements.
+ */
+import { cross, dot, norm, type Vec3 } from "../geometry/vectors";
+import type { CentredMolecule } from "./centredMolecule";
+import { candidateAxes, candidateMirrorNormals } from "./candidateDirections";
+import {
+  improperRotationMatrix,
+  INVERSION,
+  mapsOntoItself,
+  reflectionMatrix,
+  rotationMatrix,
+  type MatchableMolecule,
+} from "./operations";
+
+/** A proper rotation axis with its highest order, and the highest S_n (n ≥ 3) about it, or 0. */
+export interface FoundAxis {
+  readonly direction: Vec3;
+  readonly order: number;
+  readonly improperOrder: number;
+}
+
+export interface FoundSymmetryElements {
+  readonly axes: readonly FoundAxis[];
+  readonly mirrorNormals: readonly Vec3[];
+  readonly inversion: boolean;
+}
+
+// Distinct symmetry axes of any finite point group are at least ~7° apart for orders up to 12,
+// so directions within ~3° are one axis seen twice.
+const SAME_DIRECTION_SINE = 0.05;
+
+export function sameDirection(a: Vec3, b: Vec3): boolean {
+  return norm(cross(a, b)) < SAME_DIRECTION_SINE;
+}
+
+/** Finds every rotation axis, mirror plane, improper axis and the inversion centre, if any. */
+export function findSymmetryElements(molecule: CentredMolecule, tolerance: number): FoundSymmetryElements {
+  const axes: FoundAxis[] = [];
+  for (const { direction } of candidateAxes(molecule, tolerance)) {
+    if (axes.some((axis) => sameDirection(axis.direction, direction))) continue;
+    const order = highestRotationOrder(molecule, direction, tolerance);
+    if (order < 2) continue;
+    axes.push({ direction, order, improperOrder: highestImproperOrder(molecule, direction, order, tolerance) });
+  }
+
+  const mirrorNormals: Vec3[] = [];
+  for (const { direction } of candidateMirrorNormals(molecule, tolerance)) {
+    if (mirrorNormals.some((normal) => sameDirection(normal, direction))) continue;
+    if (mapsOntoItself(molecule, reflectionMatrix(direction), tolerance)) mirrorNormals.push(direction);
+  }
+
+  return { axes, mirrorNormals, inversion: mapsOntoItself(molecule, INVERSION, tolerance) };
+}
+
+/**
+ * The highest n for which C_n about `axis` maps the molecule onto itself, or 1. Only divisors of
+ * the sizes of the rings of look-alike atoms round the axis are tried, since C_n moves every
+ * off-axis atom through a ring of exactly n.
+ */
+function highestRotationOrder(molecule: MatchableMolecule, axis: Vec3, tolerance: number): number {
+  const ringTolerance = 2 * tolerance;
+  const atoms = molecule.atoms;
+  const heights = atoms.map((atom) => dot(atom.position, axis));
+  const radii = atoms.map((atom, index) => Math.sqrt(Math.max(0, dot(atom.position, atom.position) - heights[index] ** 2)));
+  const counted = new Array<boolean>(atoms.length).fill(false);
+  let ringSizeDivisor = 0;
+  for (let i = 0; i < atoms.length; i++) {
+    // Atoms this close to the axis may sit on it; the rotation test itself decides.
+    if (counted[i] || radii[i] <= ringTolerance) continue;
+    let size = 1;
+    for (let j = i + 1; j < atoms.length; j++) {
+      if (
+        !counted[j] &&
+        atoms[j].elementId === atoms[i].elementId &&
+        Math.abs(heights[j] - heights[i]) <= ringTolerance &&
+        Math.abs(radii[j] - radii[i]) <= ringTolerance
+      ) {
+        counted[j] = true;
+        size++;
+      }
+    }
+    ringSizeDivisor = greatestCommonDivisor(ringSizeDivisor, size);
+    if (ringSizeDivisor === 1) return 1;
+  }
+  // Every atom on the axis: a linear molecule, which the caller handles before searching.
+  if (ringSizeDivisor === 0) return 1;
+  for (let order = ringSizeDivisor; order >= 2; order--) {
+    if (ringSizeDivisor % order !== 0) continue;
+    if (mapsOntoItself(molecule, rotationMatrix(axis, (2 * Math.PI) / order), tolerance)) return order;
+  }
+  return 1;
+}
+
+/** S_2n about a C_n axis, else S_n for n ≥ 3 (which needs a mirror normal to the axis), else 0. */
+function highestImproperOrder(molecule: MatchableMolecule, axis: Vec3, order: number, tolerance: number): number {
+  if (mapsOntoItself(molecule, improperRotationMatrix(axis, 2 * order), tolerance)) return 2 * order;
+  if (order >= 3 && mapsOntoItself(molecule, improperRotationMatrix(axis, order), tolerance)) return order;
+  return 0;
+}
+
+function greatestCommonDivisor(a: number, b: number): number {
+  while (b !== 0) [a, b] = [b, a % b];
+  return a;
+}
