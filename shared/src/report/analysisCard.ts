@@ -35,7 +35,7 @@ export const PLAIN_CARD_STYLE: CardStyle = {
 export const MODEL_CAUTION =
   "Model prediction, not measured data. Follow the safety data sheet, local rules and licensed practice.";
 
-const LABEL_WIDTH = 20;
+const LABEL_WIDTH = 22;
 const INDENT = "  ";
 
 /** Formats one analysis (or the reason it failed) as a multi-line card ending in a newline. */
@@ -115,7 +115,7 @@ function centreLines(
     row(style, `Centre ${centre.atom} (atom ${centre.index})`, `${centre.axe}, steric number ${centre.stericNumber}`),
     row(style, "Electron geometry", centre.electronGeometry, sub),
     row(style, "Molecular geometry", centre.molecularGeometry, sub),
-    row(style, "Ideal angles", centre.idealAngles.map(degrees).join(", "), sub),
+    row(style, "Ideal angles", `${centre.idealAngles.map(angleNumber).join(", ")} deg`, sub),
   ];
   centre.expectedAngles.forEach((angle, position) =>
     lines.push(row(style, position === 0 ? "Expected angles" : "", expectedText(angle), sub)),
@@ -132,7 +132,7 @@ function centreLines(
 
 function expectedText(angle: AngleExpectation): string {
   const between = angle.between ? `${angle.between}: ` : "";
-  const range = angle.min === angle.max ? degrees(angle.min) : `${degrees(angle.min)}-${degrees(angle.max)}`;
+  const range = angle.min === angle.max ? degrees(angle.min) : `${angleNumber(angle.min)}-${degrees(angle.max)}`;
   return `${between}${range} (ideal ${degrees(angle.ideal)}; ${angle.note})`;
 }
 
@@ -141,8 +141,12 @@ function row(style: CardStyle, label: string, value: string, extraIndent = ""): 
   return INDENT + extraIndent + style.label(label.padEnd(width)) + " " + value;
 }
 
+function angleNumber(value: number): string {
+  return Number.isInteger(value) ? String(value) : value.toFixed(1);
+}
+
 function degrees(value: number): string {
-  return `${Number.isInteger(value) ? value : value.toFixed(1)} deg`;
+  return `${angleNumber(value)} deg`;
 }
 
 function signed(value: number): string {
