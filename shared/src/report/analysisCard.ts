@@ -37,6 +37,8 @@ export const MODEL_CAUTION =
 
 const LABEL_WIDTH = 22;
 const INDENT = "  ";
+/** Long values wrap so a card stays readable in an 80-100 column terminal. */
+const LINE_WIDTH = 100;
 
 /** Formats one analysis (or the reason it failed) as a multi-line card ending in a newline. */
 export function formatAnalysisCard(
@@ -54,7 +56,7 @@ function failureLines(
   style: CardStyle,
 ): string[] {
   const { problem, reading } = result;
-  const heading = reading ? `${input} (${reading.formula})` : input;
+  const heading = reading && reading.formula !== input.trim() ? `${input} (${reading.formula})` : input;
   const lines = [
     style.title(heading) + " " + style.error("- not analysed"),
     row(style, "Problem", style.error(`${problem.message} [${problem.code}]`)),
@@ -84,7 +86,9 @@ function successLines(input: string, analysis: SpeciesAnalysis, style: CardStyle
       lines.push(row(style, position === 0 ? "Warnings" : "", style.warning(warning))),
     );
   }
-  lines.push(INDENT + style.muted(`Caution: ${MODEL_CAUTION}`));
+  for (const line of wrapWords(`Caution: ${MODEL_CAUTION}`, LINE_WIDTH - INDENT.length)) {
+    lines.push(INDENT + style.muted(line));
+  }
   return lines;
 }
 
@@ -138,7 +142,28 @@ function expectedText(angle: AngleExpectation): string {
 
 function row(style: CardStyle, label: string, value: string, extraIndent = ""): string {
   const width = LABEL_WIDTH - extraIndent.length;
-  return INDENT + extraIndent + style.label(label.padEnd(width)) + " " + value;
+  const valueColumn = INDENT.length + LABEL_WIDTH + 1;
+  const continuation = "\n" + " ".repeat(valueColumn);
+  return INDENT + extraIndent + style.label(label.padEnd(width)) + " " + wrapWords(value, LINE_WIDTH - valueColumn).join(continuation);
+}
+
+// Escape codes take no room on screen, so they must not count towards the width.
+const ESCAPE_CODES = /\u001b\[[0-9;]*m/g;
+
+function wrapWords(text: string, width: number): string[] {
+  const lines: string[] = [];
+  let current = "";
+  for (const word of text.split(" ")) {
+    const candidate = current === "" ? word : `${current} ${word}`;
+    if (current !== "" && candidate.replace(ESCAPE_CODES, "").length > width) {
+      lines.push(current);
+      current = word;
+    } else {
+      current = candidate;
+    }
+  }
+  lines.push(current);
+  return lines;
 }
 
 function angleNumber(value: number): string {
