@@ -1,0 +1,145 @@
+/**
+ * Reads names built by rule rather than listed: binary covalent names with Greek prefixes
+ * ("sulfur tetrafluoride", "dinitrogen tetroxide"), hydrogen compounds ("hydrogen sulfide"),
+ * salts of metals with one usual charge or a Stock numeral ("calcium chloride", "iron(III) oxide")
+ * and salts of polyatomic ions ("ammonium nitrate", "sodium sulfate"). Also writes the binary
+ * covalent name for a formula ("SF4" -> "sulfur tetrafluoride").
+ */
+import { elementByName, elementBySymbol } from "../../elements";
+import type { ElementData, FormulaPart } from "../../types";
+import { anionRootByName, anionRootBySymbol } from "./anionRoots";
+import { joinPrefix, prefixFor, prefixReadings } from "./greekPrefixes";
+import { ionByName } from "./ionNames";
+
+/** Nonmetals and metalloids: the elements that form binary covalent compounds named with prefixes. */
+const COVALENT_FORMERS: ReadonlySet<string> = new Set([
+  "H", "He", "B", "C", "N", "O", "F", "Ne", "Si", "P", "S", "Cl", "Ar",
+  "Ge", "As", "Se", "Br", "Kr", "Sb", "Te", "I", "Xe", "At", "Rn",
+]);
+
+const ROMAN_NUMERALS: readonly string[] = ["i", "ii", "iii", "iv", "v", "vi", "vii", "viii"];
+
+interface NamedPart {
+  /** Formula of the part without charge: "Fe", "NH4", "SO4". */
+  readonly body: string;
+  readonly singleElement: boolean;
+  readonly count: number;
+  readonly prefixed: boolean;
+  /** Charge of the bare ion where the name fixes it. */
+  readonly charge?: number;
+  readonly element?: ElementData;
+}
+
+/** Formula text for a compound name split into lower-case words, or undefined. */
+export function formulaForCompoundName(words: readonly string[]): string | undefined {
+  if (words.length < 2) return undefined;
+  const cation = readCationWord(words[0]);
+  const anion = readAnionWords(words.slice(1));
+  if (cation === undefined || anion === undefined) return undefined;
+  const anionCharge = anion.charge as number;
+
+  if (cation.prefixed || anion.prefixed) {
+    if (!cation.singleElement || !anion.singleElement || cation.charge !== undefined) return undefined;
+    return part(cation.body, cation.count) + part(anion.body, anion.count);
+  }
+  if (cation.charge !== undefined) return balanced(cation, cation.charge, anion, anionCharge);
+  const element = cation.element as ElementData;
+  if (element.symbol === "H" && anion.singleElement) return part("H", -anionCharge) + anion.body;
+  const usual = usualCationCharge(element);
+  if (usual !== undefined) return balanced(cation, usual, anion, anionCharge);
+  if (COVALENT_FORMERS.has(element.symbol) && anion.singleElement) return cation.body + anion.body;
+  return undefined;
+}
+
+/** "sulfur tetrafluoride" for SF4: the prefixed name of a neutral binary covalent compound. */
+export function binaryCovalentName(sequence: readonly FormulaPart[], charge: number): string | undefined {
+  if (charge !== 0 || sequence.length !== 2) return undefined;
+  const [first, second] = sequence;
+  if (first.symbol === second.symbol) return undefined;
+  const firstElement = elementBySymbol(first.symbol);
+  const anion = anionRootBySymbol(second.symbol);
+  if (firstElement === undefined || anion === undefined) return undefined;
+  if (first.symbol === "H") {
+    return first.count === -anion.charge && second.count === 1 ? `hydrogen ${anion.root}` : undefined;
+  }
+  const usual = usualCationCharge(firstElement);
+  if (usual !== undefined) {
+    const lcm = leastCommonMultiple(usual, -anion.charge);
+    const fits = first.count === lcm / usual && second.count === lcm / -anion.charge;
+    return fits ? `${firstElement.name} ${anion.root}` : undefined;
+  }
+  if (!COVALENT_FORMERS.has(first.symbol)) return undefined;
+  const firstPrefix = first.count === 1 ? "" : prefixFor(first.count);
+  const secondPrefix = prefixFor(second.count);
+  if (firstPrefix === undefined || secondPrefix === undefined) return undefined;
+  return `${firstPrefix}${firstElement.name} ${joinPrefix(secondPrefix, anion.root)}`;
+}
+
+function readCationWord(word: string): NamedPart | undefined {
+  const ion = ionByName(word);
+  if (ion !== undefined && ion.charge > 0) {
+    return { body: ion.body, singleElement: false, count: 1, prefixed: false, charge: ion.charge };
+  }
+  const open = word.indexOf("(");
+  if (open > 0 && word.endsWith(")")) {
+    const element = elementByName(word.slice(0, open));
+    const numeral = ROMAN_NUMERALS.indexOf(word.slice(open + 1, -1));
+    if (element === undefined || numeral < 0) return undefined;
+    return { body: element.symbol, singleElement: true, count: 1, prefixed: false, charge: numeral + 1, element };
+  }
+  for (const reading of prefixReadings(word)) {
+    const element = elementByName(reading.rest);
+    if (element !== undefined) {
+      return { body: element.symbol, singleElement: true, count: reading.count, prefixed: reading.prefixed, element };
+    }
+  }
+  return undefined;
+}
+
+function readAnionWords(words: readonly string[]): NamedPart | undefined {
+  const ion = ionByName(words.join(" "));
+  if (ion !== undefined) {
+    return ion.charge < 0 ? { body: ion.body, singleElement: false, count: 1, prefixed: false, charge: ion.charge } : undefined;
+  }
+  if (words.length !== 1) return undefined;
+  for (const reading of prefixReadings(words[0])) {
+    const root = anionRootByName(reading.rest);
+    if (root !== undefined) {
+      return { body: root.symbol, singleElement: true, count: reading.count, prefixed: reading.prefixed, charge: root.charge };
+    }
+  }
+  return undefined;
+}
+
+/** The one charge a metal takes in nearly all its salts, where there is one. */
+export function usualCationCharge(element: ElementData): number | undefined {
+  if (element.symbol === "H") return undefined;
+  if (element.group === 1) return 1;
+  if (element.group === 2) return 2;
+  if (element.symbol === "Al" || element.symbol === "Ga") return 3;
+  if (element.symbol === "Zn" || element.symbol === "Cd") return 2;
+  if (element.symbol === "Ag") return 1;
+  return undefined;
+}
+
+function balanced(cation: NamedPart, cationCharge: number, anion: NamedPart, anionCharge: number): string | undefined {
+  if (cationCharge <= 0 || anionCharge >= 0) return undefined;
+  const lcm = leastCommonMultiple(cationCharge, -anionCharge);
+  return group(cation, lcm / cationCharge) + group(anion, lcm / -anionCharge);
+}
+
+function group(named: NamedPart, count: number): string {
+  if (named.singleElement || count === 1) return part(named.body, count);
+  return `(${named.body})${count}`;
+}
+
+function part(body: string, count: number): string {
+  return count === 1 ? body : `${body}${count}`;
+}
+
+function leastCommonMultiple(a: number, b: number): number {
+  let x = a;
+  let y = b;
+  while (y !== 0) [x, y] = [y, x % y];
+  return (a * b) / x;
+}

@@ -1,0 +1,62 @@
+/**
+ * Suggests a spelling for a formula with a mis-cased symbol ("Sf4" -> "SF4", "CL" -> "Cl"): the
+ * re-casing of its letters with the fewest changed letters that makes every symbol a real element.
+ */
+import { elementBySymbol } from "../elements";
+import { isAsciiLetter } from "./characters";
+
+/** The re-cased `text[start, end)`, or undefined when no re-casing works or nothing would change. */
+export function recaseSuggestion(text: string, start: number, end: number): string | undefined {
+  let result = "";
+  let i = start;
+  while (i < end) {
+    if (!isAsciiLetter(text.charCodeAt(i))) {
+      result += text[i];
+      i++;
+      continue;
+    }
+    let runEnd = i;
+    while (runEnd < end && isAsciiLetter(text.charCodeAt(runEnd))) runEnd++;
+    const recased = recaseLetterRun(text.slice(i, runEnd));
+    if (recased === undefined) return undefined;
+    result += recased;
+    i = runEnd;
+  }
+  return result === text.slice(start, end) ? undefined : result;
+}
+
+/** Cheapest split of a run of letters into element symbols; cost = letters whose case changes. */
+function recaseLetterRun(run: string): string | undefined {
+  const length = run.length;
+  // best[k]: cheapest cost for the first k letters; choice[k]: symbol length that ends there.
+  const best = new Array<number>(length + 1).fill(Infinity);
+  const choice = new Array<number>(length + 1).fill(0);
+  best[0] = 0;
+  for (let k = 0; k < length; k++) {
+    if (best[k] === Infinity) continue;
+    for (let size = 1; size <= 2 && k + size <= length; size++) {
+      const symbol = symbolCase(run.slice(k, k + size));
+      if (elementBySymbol(symbol) === undefined) continue;
+      const cost = best[k] + changedLetters(run.slice(k, k + size), symbol);
+      // ties go to the longer symbol, read left to right like the scanner
+      if (cost < best[k + size] || (cost === best[k + size] && size === 2)) {
+        best[k + size] = cost;
+        choice[k + size] = size;
+      }
+    }
+  }
+  if (best[length] === Infinity) return undefined;
+  const symbols: string[] = [];
+  for (let k = length; k > 0; k -= choice[k]) symbols.push(symbolCase(run.slice(k - choice[k], k)));
+  return symbols.reverse().join("");
+}
+
+function symbolCase(letters: string): string {
+  return letters[0].toUpperCase() + letters.slice(1).toLowerCase();
+}
+
+function changedLetters(written: string, symbol: string): number {
+  let changes = 0;
+  for (let i = 0; i < written.length; i++) if (written[i] !== symbol[i]) changes++;
+  return changes;
+}
