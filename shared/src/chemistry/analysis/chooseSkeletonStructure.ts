@@ -1,0 +1,173 @@
+/**
+ * Try every reasonable skeleton for a molecular formula and keep the Lewis structure with the
+ * best formal charges; when none works, say why in the chemist's terms.
+ */
+import { elementBySymbol } from "../elements";
+import {
+  candidateSkeletons,
+  countChainFormingAtoms,
+  expandComposition,
+} from "../lewis/candidateSkeletons";
+import {
+  chooseLewisStructure,
+  compareScores,
+  countValenceElectrons,
+  type LewisFailure,
+  type LewisStructure,
+} from "../lewis/chooseLewisStructure";
+import type { Problem, SpeciesReading } from "../types";
+
+export type ChosenStructure =
+  | { readonly ok: true; readonly structure: LewisStructure; readonly centre: number | undefined }
+  | { readonly ok: false; readonly problem: Problem };
+
+/** Species this large are written as molecules, not as one centre and its neighbours. */
+const MAX_ATOMS = 40;
+
+export function chooseSkeletonStructure(reading: SpeciesReading): ChosenStructure {
+  const symbols = expandComposition(reading.composition);
+  const { formula, charge } = reading;
+  const electrons = countValenceElectrons(symbols, charge);
+  if (electrons < 0) {
+    return fail("too-few-electrons", `${formula}: a charge of ${charge} removes more electrons than its atoms have (${electrons + charge} valence electrons).`);
+  }
+  if (symbols.length > MAX_ATOMS) {
+    return fail("ambiguous-connectivity", `${formula} has ${symbols.length} atoms: write it as a structural formula or SMILES so its connectivity is clear.`);
+  }
+  if (symbols.length === 1) {
+    return { ok: true, structure: monatomic(symbols, charge, electrons), centre: undefined };
+  }
+  if (symbols.length === 2) {
+    const outcome = chooseLewisStructure({ symbols, bonds: [[0, 1]] }, charge);
+    if (outcome.ok) return { ok: true, structure: outcome.structure, centre: undefined };
+    return explainFailure(reading, symbols, outcome.failure, outcome.atom);
+  }
+  if (symbols.every((symbol) => symbol === "H")) {
+    return fail("hydrogen-overbonded", `${formula}: a hydrogen atom can form only one bond, so ${symbols.length} hydrogens cannot share a centre.`);
+  }
+
+  let best: RankedSkeleton | undefined;
+  let firstFailure: { failure: LewisFailure; atom?: number } | undefined;
+  const candidates = candidateSkeletons(symbols);
+  if (candidates.length === 0) {
+    return symbols.includes("H")
+      ? fail("hydrogen-overbonded", `${formula}: only hydrogen could sit in the middle, and hydrogen forms just one bond.`)
+      : fail("no-valid-structure", `${formula}: fluorine is never a central atom, so these atoms have no Lewis structure.`);
+  }
+  for (const skeleton of candidates) {
+    const outcome = chooseLewisStructure(skeleton, charge);
+    if (!outcome.ok) {
+      firstFailure ??= { failure: outcome.failure, atom: outcome.atom };
+      continue;
+    }
+    const centreSymbol = symbols[skeleton.centre];
+    const ranked: RankedSkeleton = {
+      structure: outcome.structure,
+      centre: skeleton.centre,
+      centreIsUnique: symbols.filter((symbol) => symbol === centreSymbol).length === 1,
+      electronegativity: elementBySymbol(centreSymbol)!.electronegativity ?? 4.5,
+    };
+    if (!best || compareSkeletons(ranked, best) < 0) best = ranked;
+  }
+
+  const chainAtoms = countChainFormingAtoms(symbols);
+  if (best) {
+    const outerTroubled = best.structure.graph.atoms.some(
+      (atom, index) => index !== best!.centre && Math.abs(atom.formalCharge) >= 2,
+    );
+    // A star that leaves atoms short of an octet, or outer atoms heavily charged, means the
+    // real molecule is a chain: C2H2 is HCCH, not H2C=C.
+    if (chainAtoms >= 2 && (best.structure.score.shellDeficit > 0 || outerTroubled)) {
+      return needsStructure(reading);
+    }
+    return { ok: true, structure: best.structure, centre: best.centre };
+  }
+  if (chainAtoms >= 2) return needsStructure(reading);
+  return explainFailure(reading, symbols, firstFailure?.failure ?? "no-structure", firstFailure?.atom);
+}
+
+interface RankedSkeleton {
+  readonly structure: LewisStructure;
+  readonly centre: number;
+  readonly centreIsUnique: boolean;
+  readonly electronegativity: number;
+}
+
+/**
+ * Formal charges first; when they tie, the skeleton whose centre is the one atom of its element
+ * (Cl2O is Cl-O-Cl, ClO2 is O-Cl-O), then the usual tie-breaks, then the less electronegative centre.
+ */
+function compareSkeletons(a: RankedSkeleton, b: RankedSkeleton): number {
+  const sa = a.structure.score;
+  const sb = b.structure.score;
+  return (
+    sa.shellDeficit - sb.shellDeficit ||
+    sa.sumAbsFormalCharge - sb.sumAbsFormalCharge ||
+    sa.sumSquareFormalCharge - sb.sumSquareFormalCharge ||
+    Number(b.centreIsUnique) - Number(a.centreIsUnique) ||
+    compareScores(sa, sb) ||
+    a.electronegativity - b.electronegativity
+  );
+}
+
+function explainFailure(
+  reading: SpeciesReading,
+  symbols: readonly string[],
+  failure: LewisFailure,
+  atom: number | undefined,
+): ChosenStructure {
+  const { formula, charge } = reading;
+  switch (failure) {
+    case "charge-exceeds-electrons":
+      return fail("too-few-electrons", `${formula}: the charge ${charge} removes more electrons than its atoms have.`);
+    case "too-few-electrons-to-bond": {
+      const electrons = countValenceElectrons(symbols, charge);
+      return fail(
+        "too-few-electrons",
+        `${formula} has ${electrons} valence electrons, too few to bond its ${symbols.length} atoms (at least ${2 * (symbols.length - 1)} needed).`,
+      );
+    }
+    case "hydrogen-overbonded":
+      return fail("hydrogen-overbonded", `${formula}: hydrogen would have to form more than one bond, and it holds only two electrons.`);
+    case "shell-overflow":
+    case "too-many-domains": {
+      const element = atom !== undefined ? elementBySymbol(symbols[atom]) : undefined;
+      if (element && element.period === 2) {
+        return fail(
+          "octet-exceeded",
+          `${formula}: ${element.name} is in period 2 and can hold at most four electron pairs (an octet), but ${formula} would need more around it. Expanded octets start in period 3.`,
+        );
+      }
+      if (element && element.period === 1) {
+        return fail("hydrogen-overbonded", `${formula}: hydrogen would have to form more than one bond.`);
+      }
+      return fail("octet-exceeded", `${formula}: the central atom would need more than seven electron domains.`);
+    }
+    default:
+      return fail("no-valid-structure", `${formula}: no Lewis structure fits these atoms and this electron count.`);
+  }
+}
+
+function needsStructure(reading: SpeciesReading): ChosenStructure {
+  return fail(
+    "ambiguous-connectivity",
+    `${reading.formula} has more than one atom that needs two or more bonds, so the formula alone does not say how the atoms connect. Write a structural formula (for example CH3CH2OH or CH3OCH3) or a SMILES string.`,
+  );
+}
+
+function monatomic(symbols: readonly string[], charge: number, electrons: number): LewisStructure {
+  const pairs = Math.floor(electrons / 2);
+  return {
+    graph: {
+      atoms: [{ symbol: symbols[0], lonePairs: pairs, unpairedElectrons: electrons % 2, formalCharge: charge }],
+      bonds: [],
+    },
+    score: { shellDeficit: 0, sumAbsFormalCharge: Math.abs(charge), sumSquareFormalCharge: charge * charge, expandedAtoms: 0, chargeTimesElectronegativity: 0 },
+    resonanceForms: 1,
+    valenceElectrons: electrons,
+  };
+}
+
+function fail(code: Problem["code"], message: string): ChosenStructure {
+  return { ok: false, problem: { code, message } };
+}

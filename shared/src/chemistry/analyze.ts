@@ -1,0 +1,67 @@
+/**
+ * From text to shape: read the species, rule out what VSEPR cannot describe, choose the skeleton
+ * and Lewis structure by formal charges, then describe every centre. Results are memoised by the
+ * exact text, since documents mention the same species over and over.
+ */
+import { elementBySymbol } from "./elements";
+import { readSpecies } from "./reader/readSpecies";
+import type { AnalysisResult, Problem, SpeciesReading } from "./types";
+import { buildAnalysis } from "./analysis/buildAnalysis";
+import { chooseSkeletonStructure } from "./analysis/chooseSkeletonStructure";
+
+const MEMO_LIMIT = 20_000;
+const memo = new Map<string, AnalysisResult>();
+
+/** Read and analyse one species; never throws. */
+export function analyzeSpecies(text: string): AnalysisResult {
+  const cached = memo.get(text);
+  if (cached) return cached;
+  let result: AnalysisResult;
+  try {
+    const read = readSpecies(text);
+    result = read.ok ? analyzeReading(read.value) : { ok: false, problem: read.problem };
+  } catch (error) {
+    result = { ok: false, problem: { code: "no-valid-structure", message: `internal error: ${String(error)}` } };
+  }
+  if (memo.size >= MEMO_LIMIT) memo.delete(memo.keys().next().value as string);
+  memo.set(text, result);
+  return result;
+}
+
+/** Analyse a species that has already been read. */
+export function analyzeReading(reading: SpeciesReading): AnalysisResult {
+  const scope = outOfScope(reading);
+  if (scope) return { ok: false, reading, problem: scope };
+  const chosen = chooseSkeletonStructure(reading);
+  if (!chosen.ok) return { ok: false, reading, problem: chosen.problem };
+  return { ok: true, value: buildAnalysis(reading, chosen.structure, chosen.centre) };
+}
+
+const IONIC_GROUPS = new Set([1, 2]);
+
+/** Species VSEPR has nothing to say about: transition-metal centres and ionic solids. */
+function outOfScope(reading: SpeciesReading): Problem | undefined {
+  const elements = reading.composition.map((part) => elementBySymbol(part.symbol)!);
+  const metal = elements.find(
+    (e) => e.category === "transition-metal" || e.category === "lanthanide" || e.category === "actinide",
+  );
+  if (metal) {
+    return {
+      code: "transition-metal-centre",
+      message:
+        `${reading.formula} contains ${metal.name}, a transition metal: VSEPR does not apply to ` +
+        "d-block centres (their shapes follow ligand-field and coordination rules). No shape is predicted.",
+    };
+  }
+  const distinctElements = new Set(reading.composition.map((part) => part.symbol));
+  const ionicMetal = elements.find((e) => IONIC_GROUPS.has(e.group) && e.symbol !== "H" && e.symbol !== "Be");
+  if (ionicMetal && distinctElements.size > 1) {
+    return {
+      code: "ionic-solid",
+      message:
+        `${reading.formula} is an ionic compound of ${ionicMetal.name}: it forms a lattice of ions, ` +
+        "not discrete molecules, so it has no VSEPR shape. Analyse its ions separately (for example the anion).",
+    };
+  }
+  return undefined;
+}

@@ -1,0 +1,83 @@
+/**
+ * The VSEPR description of one atom with two or more neighbours in a Lewis structure.
+ */
+import { atomTraits } from "../lewis/electronBookkeeping";
+import { add, norm, type Vec3 } from "../geometry/vectors";
+import type { CentreAnalysis, MolecularGraph } from "../types";
+import { assignSites, type Ligand, type SiteAssignment } from "./assignSites";
+import { expectedAngles, idealAnglesOf } from "./expectedAngles";
+import {
+  axeNotation,
+  ELECTRON_GEOMETRY_BY_STERIC_NUMBER,
+  HYBRIDIZATION_BY_STERIC_NUMBER,
+  molecularGeometryFor,
+} from "./shapeTables";
+
+export interface CentreDetail {
+  readonly centre: CentreAnalysis;
+  readonly ligands: readonly Ligand[];
+  readonly sites: SiteAssignment;
+}
+
+const EXPANDED_NOTE =
+  "sp3d/sp3d2 labels are bookkeeping for five or more domains: d orbitals contribute little, and " +
+  "the bonding is better described with three-centre four-electron bonds.";
+
+export function neighboursOf(graph: MolecularGraph, atom: number): Ligand[] {
+  const ligands: Ligand[] = [];
+  for (const bond of graph.bonds) {
+    const other = bond.from === atom ? bond.to : bond.to === atom ? bond.from : -1;
+    if (other < 0) continue;
+    const symbol = graph.atoms[other].symbol;
+    ligands.push({ atom: other, symbol, electronegativity: atomTraits(symbol).electronegativity, bondOrder: bond.order });
+  }
+  return ligands;
+}
+
+/** Undefined when the atom has fewer than two neighbours or an unsupported domain count. */
+export function analyzeCentre(graph: MolecularGraph, index: number, radical: boolean): CentreDetail | undefined {
+  const atom = graph.atoms[index];
+  const ligands = neighboursOf(graph, index);
+  if (ligands.length < 2) return undefined;
+  const loneDomains = atom.lonePairs + (atom.unpairedElectrons > 0 ? 1 : 0);
+  const stericNumber = ligands.length + loneDomains;
+  const electronGeometry = ELECTRON_GEOMETRY_BY_STERIC_NUMBER[stericNumber];
+  const molecularGeometry = molecularGeometryFor(stericNumber, loneDomains);
+  if (!electronGeometry || !molecularGeometry) return undefined;
+
+  const sites = assignSites(electronGeometry, loneDomains, ligands);
+  const traits = atomTraits(atom.symbol);
+  const first = ligands[0];
+  const identicalNeighbours = ligands.every((l) => l.symbol === first.symbol && l.bondOrder === first.bondOrder);
+  const loneSum = sites.lonePairDirections.reduce<Vec3>((sum, d) => add(sum, d), [0, 0, 0]);
+  const hybridization = HYBRIDIZATION_BY_STERIC_NUMBER[stericNumber];
+
+  const centre: CentreAnalysis = {
+    index,
+    atom: atom.symbol,
+    axe: axeNotation(ligands.length, loneDomains),
+    stericNumber,
+    bondingDomains: ligands.length,
+    lonePairs: atom.lonePairs,
+    unpairedElectrons: atom.unpairedElectrons,
+    electronGeometry,
+    molecularGeometry,
+    idealAngles: idealAnglesOf(sites.ligandDirections),
+    expectedAngles: expectedAngles({
+      electronGeometry,
+      stericNumber,
+      loneDomains,
+      lonePairsBalanced: loneDomains > 0 && norm(loneSum) < 1e-9 && atom.unpairedElectrons === 0,
+      centrePeriod: traits.element.period,
+      identicalNeighbours,
+      hasMultipleBond: ligands.some((l) => l.bondOrder > 1),
+      bulkyNeighbours: ligands.some((l) => atomTraits(l.symbol).element.period > traits.element.period),
+      radical,
+      ligandDirections: sites.ligandDirections,
+      ligandSiteKinds: sites.ligandSiteKinds,
+    }),
+    hybridization,
+    ...(stericNumber >= 5 ? { hybridizationNote: EXPANDED_NOTE } : {}),
+  };
+  return { centre, ligands, sites };
+}

@@ -1,0 +1,127 @@
+/**
+ * Ideal bond angles of a centre and how far the real ones are expected to move: lone pairs
+ * squeeze the bonds together, multiple bonds take more room than single ones, unlike neighbours
+ * break the symmetry, and an odd electron repels less than a pair. The ranges are deliberately
+ * generous model bounds, not predictions of a single number.
+ */
+import { angleDegrees, type Vec3 } from "../geometry/vectors";
+import type { SiteKind } from "../geometry/idealDirections";
+import type { AngleExpectation, ElectronGeometry } from "../types";
+
+export interface AngleContext {
+  readonly electronGeometry: ElectronGeometry;
+  readonly stericNumber: number;
+  readonly loneDomains: number;
+  /** True when the lone pairs sit symmetrically (XeF2, XeF4, I3-), so they push equally. */
+  readonly lonePairsBalanced: boolean;
+  readonly centrePeriod: number;
+  /** All neighbours the same element with the same bond order. */
+  readonly identicalNeighbours: boolean;
+  readonly hasMultipleBond: boolean;
+  /** Some neighbour is from a later period than the centre (Cl on O in Cl2O). */
+  readonly bulkyNeighbours: boolean;
+  readonly radical: boolean;
+  readonly ligandDirections: readonly Vec3[];
+  readonly ligandSiteKinds: readonly SiteKind[];
+}
+
+const round1 = (value: number) => Math.round(value * 10) / 10;
+
+/** Distinct ideal angles between bonded neighbours, ascending. */
+export function idealAnglesOf(directions: readonly Vec3[]): number[] {
+  const angles = new Set<number>();
+  for (let i = 0; i < directions.length; i++) {
+    for (let j = i + 1; j < directions.length; j++) angles.add(round1(angleDegrees(directions[i], directions[j])));
+  }
+  return [...angles].sort((a, b) => a - b);
+}
+
+function pairLabel(context: AngleContext, i: number, j: number, ideal: number): string | undefined {
+  const g = context.electronGeometry;
+  if (g === "trigonal bipyramidal" || g === "pentagonal bipyramidal") {
+    const kinds = [context.ligandSiteKinds[i], context.ligandSiteKinds[j]].sort();
+    return kinds.join("-");
+  }
+  if (g === "octahedral") return ideal > 135 ? "trans" : "cis";
+  return undefined;
+}
+
+export function expectedAngles(context: AngleContext): AngleExpectation[] {
+  const groups = new Map<string, { ideal: number; between?: string }>();
+  const directions = context.ligandDirections;
+  for (let i = 0; i < directions.length; i++) {
+    for (let j = i + 1; j < directions.length; j++) {
+      const ideal = round1(angleDegrees(directions[i], directions[j]));
+      const between = pairLabel(context, i, j, ideal);
+      groups.set(`${ideal}|${between ?? ""}`, { ideal, between });
+    }
+  }
+  return [...groups.values()]
+    .sort((a, b) => a.ideal - b.ideal)
+    .map(({ ideal, between }) => ({ ...rangeFor(context, ideal, between), ideal, ...(between ? { between } : {}) }));
+}
+
+function rangeFor(
+  context: AngleContext,
+  ideal: number,
+  between: string | undefined,
+): { min: number; max: number; note: string } {
+  const symmetric =
+    context.identicalNeighbours && (context.loneDomains === 0 || context.lonePairsBalanced) && !context.radical;
+  if (symmetric) return { min: ideal, max: ideal, note: "fixed by symmetry" };
+
+  let min = ideal;
+  let max = ideal;
+  const notes: string[] = [];
+  if (context.loneDomains > 0 && !context.lonePairsBalanced) {
+    const squeeze = lonePairSqueeze(context, ideal, between);
+    min = ideal - squeeze.down;
+    max = Math.min(180, ideal + squeeze.up);
+    notes.push(
+      ideal >= 170
+        ? "lone pairs bend the axis slightly"
+        : "lone pairs repel more than bonds and squeeze the bond angles below ideal",
+    );
+    if (context.bulkyNeighbours && ideal < 170) {
+      max += 2;
+      notes.push("large neighbours can hold the angle open a little");
+    }
+  }
+  if (!context.identicalNeighbours || context.hasMultipleBond) {
+    const spread = ideal >= 170 ? 10 : ideal <= 90 ? 6 : 10;
+    min = Math.min(min, ideal - spread);
+    if (ideal < 170) max = Math.max(max, ideal + (context.hasMultipleBond ? 6 : 4));
+    notes.push(
+      context.hasMultipleBond
+        ? "a multiple bond takes more room and pushes the other bonds together"
+        : "unlike neighbours make the angles unequal",
+    );
+  }
+  if (context.radical) {
+    max = Math.min(180, max + 15);
+    min -= 5;
+    notes.push("a single electron repels less than a pair, so the angle can open past the ideal");
+  }
+  return { min: round1(min), max: round1(Math.min(180, max)), note: notes.join("; ") || "close to ideal" };
+}
+
+function lonePairSqueeze(
+  context: AngleContext,
+  ideal: number,
+  between: string | undefined,
+): { down: number; up: number } {
+  if (ideal >= 170) return { down: between === "axial-axial" ? 20 : 30, up: 0 };
+  switch (context.stericNumber) {
+    case 3:
+      return { down: context.centrePeriod >= 4 ? 30 : 12, up: 0 };
+    case 4:
+      // Heavier centres barely hybridise: PH3 and H2S sit near 90°.
+      return { down: context.centrePeriod >= 3 ? 22 : 10, up: 0 };
+    case 5:
+      return ideal > 100 ? { down: 25, up: 0 } : { down: 10, up: 0 };
+    case 6:
+      return { down: 12, up: 0 };
+    default:
+      return { down: 8, up: 2 };
+  }
+}
