@@ -127,12 +127,12 @@ export function readBracketAtom(text: string, start: number): BracketAtom | Prob
         let magnitude = text.charCodeAt(i++) - ZERO;
         if (i < length && isDigit(text.charCodeAt(i))) magnitude = magnitude * 10 + text.charCodeAt(i++) - ZERO;
         charge = direction * magnitude;
+      } else if (i < length && text.charCodeAt(i) === sign) {
+        // "++" and "--" are the only repeated forms the grammar allows; "+++" is not SMILES.
+        charge = 2 * direction;
+        i++;
       } else {
         charge = direction;
-        while (i < length && text.charCodeAt(i) === sign) {
-          charge += direction;
-          i++;
-        }
       }
     }
   }
