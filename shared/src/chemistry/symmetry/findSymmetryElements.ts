@@ -61,37 +61,50 @@ export function findSymmetryElements(molecule: CentredMolecule, tolerance: numbe
  * off-axis atom through a ring of exactly n.
  */
 function highestRotationOrder(molecule: MatchableMolecule, axis: Vec3, tolerance: number): number {
-  const ringTolerance = 2 * tolerance;
-  const atoms = molecule.atoms;
-  const heights = atoms.map((atom) => dot(atom.position, axis));
-  const radii = atoms.map((atom, index) => Math.sqrt(Math.max(0, dot(atom.position, atom.position) - heights[index] ** 2)));
-  const counted = new Array<boolean>(atoms.length).fill(false);
-  let ringSizeDivisor = 0;
-  for (let i = 0; i < atoms.length; i++) {
-    // Atoms this close to the axis may sit on it; the rotation test itself decides.
-    if (counted[i] || radii[i] <= ringTolerance) continue;
-    let size = 1;
-    for (let j = i + 1; j < atoms.length; j++) {
-      if (
-        !counted[j] &&
-        atoms[j].elementId === atoms[i].elementId &&
-        Math.abs(heights[j] - heights[i]) <= ringTolerance &&
-        Math.abs(radii[j] - radii[i]) <= ringTolerance
-      ) {
-        counted[j] = true;
-        size++;
-      }
-    }
-    ringSizeDivisor = greatestCommonDivisor(ringSizeDivisor, size);
-    if (ringSizeDivisor === 1) return 1;
-  }
-  // Every atom on the axis: a linear molecule, which the caller handles before searching.
-  if (ringSizeDivisor === 0) return 1;
+  const ringSizeDivisor = ringSizeCommonDivisor(molecule, axis, 2 * tolerance);
   for (let order = ringSizeDivisor; order >= 2; order--) {
     if (ringSizeDivisor % order !== 0) continue;
     if (mapsOntoItself(molecule, rotationMatrix(axis, (2 * Math.PI) / order), tolerance)) return order;
   }
   return 1;
+}
+
+/**
+ * Greatest common divisor of the sizes of the rings round `axis`: atoms of one element at the same
+ * height along the axis and the same distance from it. Rings are chained (single linkage, first by
+ * height, then by distance), so noise can merge two whole rings, which keeps every true order a
+ * divisor, but never splits one. Returns 1 early once no order above 1 is left, and 1 when every
+ * atom is on the axis (a linear molecule, handled before the search).
+ */
+function ringSizeCommonDivisor(molecule: MatchableMolecule, axis: Vec3, ringTolerance: number): number {
+  const atoms = molecule.atoms;
+  const heights = atoms.map((atom) => dot(atom.position, axis));
+  const radii = atoms.map((atom, index) => Math.sqrt(Math.max(0, dot(atom.position, atom.position) - heights[index] ** 2)));
+  // Atoms this close to the axis may sit on it; the rotation test itself decides.
+  const offAxis = atoms.map((_, index) => index).filter((index) => radii[index] > ringTolerance);
+  offAxis.sort((a, b) => atoms[a].elementId - atoms[b].elementId || heights[a] - heights[b]);
+
+  let divisor = 0;
+  let start = 0;
+  for (let end = 1; end <= offAxis.length; end++) {
+    const previous = offAxis[end - 1];
+    const next = offAxis[end];
+    const sameLayer =
+      end < offAxis.length &&
+      atoms[next].elementId === atoms[previous].elementId &&
+      heights[next] - heights[previous] <= ringTolerance;
+    if (sameLayer) continue;
+    const layer = offAxis.slice(start, end).sort((a, b) => radii[a] - radii[b]);
+    let ringStart = 0;
+    for (let k = 1; k <= layer.length; k++) {
+      if (k < layer.length && radii[layer[k]] - radii[layer[k - 1]] <= ringTolerance) continue;
+      divisor = greatestCommonDivisor(divisor, k - ringStart);
+      if (divisor === 1) return 1;
+      ringStart = k;
+    }
+    start = end;
+  }
+  return divisor === 0 ? 1 : divisor;
 }
 
 /** S_2n about a C_n axis, else S_n for n ≥ 3 (which needs a mirror normal to the axis), else 0. */
