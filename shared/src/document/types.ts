@@ -2,7 +2,7 @@
  * What the core finds in a document: species mentioned in prose, and records in data tables.
  * Offsets are UTF-16 indices into the document text; editors turn them into positions.
  */
-import type { SpeciesReading, TextRange } from "../chemistry/types";
+import type { Problem, SpeciesReading, TextRange } from "../chemistry/types";
 
 export type DocumentKind = "markdown" | "plaintext" | "csv" | "tsv" | "json" | "yaml";
 
@@ -69,4 +69,16 @@ export interface DocumentModel {
   readonly records: readonly TableRecord[];
   /** Problems reading the document itself (malformed JSON, a CSV row with a stray quote). */
   readonly problems: readonly Finding[];
+  /**
+   * Text the scanner is confident names a species but that the reader rejects (a table's formula
+   * cell "Sf4", a `\ce{Xy3}` span, a prose token like "CLF3" with a suggested spelling).
+   */
+  readonly unreadable?: readonly UnreadableSpecies[];
+}
+
+/** A confident species mention that could not be read, with the reader's problem. */
+export interface UnreadableSpecies {
+  readonly range: TextRange;
+  readonly text: string;
+  readonly problem: Problem;
 }

@@ -1,0 +1,328 @@
+/**
+ * Finds species in running prose (markdown paragraphs, plain text): formulas such as SF4, NH4+ or
+ * SO4^2-, mhchem `\ce{...}` spans, names such as "sulfur tetrafluoride", and `smiles:` code spans.
+ * Precision comes first: a token counts only when its shape and context leave no doubt, and the
+ * species reader has the last word on every candidate.
+ */
+import { mhchemPieces, mhchemSpanEnd } from "./mhchemSpan";
+import { isPartOfCode, isWordContext } from "./proseContext";
+import { isConfidentToken, needsCalmContext, shapeOf } from "./proseTokenRules";
+import { isOccurrence, smilesOccurrence } from "./smilesSpan";
+import { mayBeOneWordName, mayEndName } from "./speciesNames";
+import { emptySink, memoisedReader, occurrenceAt, unreadableAt, type ScanSink, type SpeciesReader } from "./speciesReader";
+import type { SpeciesOccurrence } from "./types";
+
+/** Chunks longer than this are pasted data (base64, hashes, minified text), not words. */
+const MAX_CHUNK = 300;
+
+/**
+ * Every species mentioned in `text`, in order. Ranges are offsets into `text` plus `offset`, so a
+ * caller that passes a slice of a document can ask for document offsets.
+ */
+export function findSpeciesInProse(text: string, offset = 0): SpeciesOccurrence[] {
+  const sink = emptySink();
+  scanProse(text, 0, text.length, sink, memoisedReader());
+  if (offset === 0) return sink.occurrences;
+  return sink.occurrences.map((occurrence) => shifted(occurrence, offset));
+}
+
+function shifted(occurrence: SpeciesOccurrence, offset: number): SpeciesOccurrence {
+  const range = { start: occurrence.range.start + offset, end: occurrence.range.end + offset };
+  return { ...occurrence, range, reading: { ...occurrence.reading, range } };
+}
+
+interface Word {
+  readonly start: number;
+  readonly end: number;
+  readonly lower: string;
+  /** Nothing but whitespace may follow it inside a name ("sulfur, tetrafluoride" is two things). */
+  readonly open: boolean;
+}
+
+interface ProseScan {
+  readonly text: string;
+  readonly end: number;
+  readonly sink: ScanSink;
+  readonly read: SpeciesReader;
+  previousWord: Word | undefined;
+  /** Backtick runs known to have no closing run further on, by length (keeps the scan linear). */
+  readonly unclosedTicks: Set<number>;
+}
+
+/** Scans `text[start, end)` and adds what it finds to `sink`, with offsets into `text`. */
+export function scanProse(text: string, start: number, end: number, sink: ScanSink, read: SpeciesReader): void {
+  const scan: ProseScan = { text, end, sink, read, previousWord: undefined, unclosedTicks: new Set() };
+  let index = start;
+  while (index < end) {
+    const code = text.charCodeAt(index);
+    if (isSpaceCode(code)) {
+      index++;
+      continue;
+    }
+    if (code === 0x60) {
+      index = codeSpan(scan, index);
+      continue;
+    }
+    if (code === 0x5c && text.startsWith("\\ce{", index)) {
+      index = mhchemSpan(scan, index);
+      continue;
+    }
+    if (code === 0x3c && text.startsWith("<!--", index)) {
+      const close = text.indexOf("-->", index + 4);
+      index = close < 0 || close >= end ? end : close + 3;
+      scan.previousWord = undefined;
+      continue;
+    }
+    let chunkEnd = index + 1;
+    while (chunkEnd < end) {
+      const next = text.charCodeAt(chunkEnd);
+      if (isSpaceCode(next) || next === 0x60 || (next === 0x5c && text.startsWith("\\ce{", chunkEnd))) break;
+      chunkEnd++;
+    }
+    scanChunk(scan, index, chunkEnd);
+    index = chunkEnd;
+  }
+}
+
+function isSpaceCode(code: number): boolean {
+  return code === 0x20 || code === 0x0a || code === 0x09 || code === 0x0d || code === 0xa0 || code === 0x0c;
+}
+
+/** An inline code span: skipped, unless it is marked `smiles:`. Returns where scanning goes on. */
+function codeSpan(scan: ProseScan, open: number): number {
+  const { text, end } = scan;
+  let ticksEnd = open;
+  while (ticksEnd < end && text.charCodeAt(ticksEnd) === 0x60) ticksEnd++;
+  const length = ticksEnd - open;
+  scan.previousWord = undefined;
+  if (scan.unclosedTicks.has(length)) return ticksEnd;
+  const fence = "`".repeat(length);
+  let close = text.indexOf(fence, ticksEnd);
+  while (close >= 0 && close < end && text.charCodeAt(close + length) === 0x60) {
+    // A longer run does not close this span; skip past it.
+    let runEnd = close;
+    while (text.charCodeAt(runEnd) === 0x60) runEnd++;
+    close = text.indexOf(fence, runEnd);
+  }
+  if (close < 0 || close >= end) {
+    scan.unclosedTicks.add(length);
+    return ticksEnd;
+  }
+  const found = smilesOccurrence(text, ticksEnd, close);
+  if (found && isOccurrence(found)) scan.sink.occurrences.push(found);
+  else if (found) scan.sink.unreadable.push(found);
+  return close + length;
+}
+
+/** A `\ce{...}` span: every piece is chemistry, so every readable piece counts. */
+function mhchemSpan(scan: ProseScan, open: number): number {
+  const { text, end } = scan;
+  scan.previousWord = undefined;
+  const spanEnd = mhchemSpanEnd(text, open, end);
+  if (spanEnd < 0) return open + 4;
+  for (const piece of mhchemPieces(text, open + 4, spanEnd - 1)) {
+    const pieceText = text.slice(piece.start, piece.end);
+    const result = scan.read(pieceText);
+    if (result.ok) scan.sink.occurrences.push(occurrenceAt(result.value, pieceText, piece.start, "mhchem"));
+    else if (/^[A-Z(\[]/.test(pieceText) && result.problem.code !== "unknown-name") {
+      scan.sink.unreadable.push(unreadableAt(pieceText, piece.start, result));
+    }
+  }
+  return spanEnd;
+}
+
+const URL_OR_MAIL = /:\/\/|^[<(\["']*www\.|[A-Za-z0-9._%+-]@[A-Za-z0-9-]+\.[A-Za-z]/;
+
+/** One whitespace-free chunk of prose. */
+function scanChunk(scan: ProseScan, start: number, end: number): void {
+  const { text } = scan;
+  if (end - start > MAX_CHUNK) {
+    scan.previousWord = undefined;
+    return;
+  }
+  // A markdown link: the text before "](" is prose, the destination after it is not.
+  const link = text.indexOf("](", start);
+  if (link >= 0 && link < end) {
+    scanChunk(scan, start, link + 1);
+    scan.previousWord = undefined;
+    return;
+  }
+  if (URL_OR_MAIL.test(text.slice(start, end))) {
+    scan.previousWord = undefined;
+    return;
+  }
+  scanWord(scan, start, end);
+  scanFormulas(scan, start, end);
+}
+
+const LEADING_PUNCTUATION = /^[(\["'*_<\u201c\u2018]*/;
+const TRAILING_PUNCTUATION = /[)\]"'*_,.;:!?>\u201d\u2019]*$/;
+
+/** Names: a word ending "-ide/-ate/-ite/-ium" after another word, or a known one-word name. */
+function scanWord(scan: ProseScan, start: number, end: number): void {
+  const chunk = scan.text.slice(start, end);
+  const leading = LEADING_PUNCTUATION.exec(chunk)![0].length;
+  const trailing = TRAILING_PUNCTUATION.exec(chunk.slice(leading))![0].length;
+  const core = chunk.slice(leading, chunk.length - trailing);
+  if (!/^[A-Za-z]+$/.test(core)) {
+    scan.previousWord = undefined;
+    return;
+  }
+  const word: Word = {
+    start: start + leading,
+    end: end - trailing,
+    lower: core.toLowerCase(),
+    open: trailing === 0 || /^[*_]+$/.test(chunk.slice(chunk.length - trailing)),
+  };
+  const previous = scan.previousWord;
+  scan.previousWord = word;
+  if (mayEndName(word.lower)) {
+    if (previous && previous.open && leading === 0 && !/\n[ \t]*\n/.test(scan.text.slice(previous.end, word.start))) {
+      if (tryName(scan, previous.start, word.end, `${previous.lower} ${word.lower}`)) return;
+    }
+  }
+  if (mayBeOneWordName(word.lower)) tryName(scan, word.start, word.end, word.lower);
+}
+
+function tryName(scan: ProseScan, start: number, end: number, spoken: string): boolean {
+  const result = scan.read(spoken);
+  if (!result.ok || result.value.notation !== "name") return false;
+  scan.sink.occurrences.push(occurrenceAt(result.value, scan.text.slice(start, end), start, "name"));
+  return true;
+}
+
+/** Formula tokens inside one chunk, e.g. "(SF4)," or "NF3/SF6" or "NH4+". */
+function scanFormulas(scan: ProseScan, start: number, end: number): void {
+  const { text } = scan;
+  let index = start;
+  while (index < end) {
+    const code = text.charCodeAt(index);
+    const startsToken = isUpper(code) || code === 0x28 || code === 0x5b;
+    if (!startsToken || isWordCharacter(text.charCodeAt(index - 1))) {
+      index++;
+      continue;
+    }
+    index = formulaToken(scan, index, end);
+  }
+}
+
+function isUpper(code: number): boolean {
+  return code >= 0x41 && code <= 0x5a;
+}
+
+function isWordCharacter(code: number): boolean {
+  return (code >= 0x30 && code <= 0x39) || isUpper(code) || (code >= 0x61 && code <= 0x7a);
+}
+
+function isBodyCharacter(code: number): boolean {
+  return (
+    isWordCharacter(code) ||
+    code === 0x28 || code === 0x29 || code === 0x5b || code === 0x5d || code === 0xb7 ||
+    (code >= 0x2080 && code <= 0x2089)
+  );
+}
+
+function isSuperscript(code: number): boolean {
+  return code === 0xb9 || code === 0xb2 || code === 0xb3 || code === 0x2070 || (code >= 0x2074 && code <= 0x207b);
+}
+
+function isSign(code: number): boolean {
+  return code === 0x2b || code === 0x2d || code === 0x2212;
+}
+
+/** Reads one token starting at `start`; returns where scanning goes on. */
+function formulaToken(scan: ProseScan, start: number, end: number): number {
+  const { text } = scan;
+  let bodyEnd = start;
+  while (bodyEnd < end && isBodyCharacter(text.charCodeAt(bodyEnd))) bodyEnd++;
+  let tokenEnd = bodyEnd;
+  while (tokenEnd < end && isSuperscript(text.charCodeAt(tokenEnd))) tokenEnd++;
+  if (tokenEnd === bodyEnd) tokenEnd = chargeEnd(text, bodyEnd, end);
+  let bodyStart = start;
+  // Brackets that belong to the sentence, not the formula: "(SF4)," "[NF3]" "SF6)".
+  while (bodyStart < bodyEnd && isOpen(text.charCodeAt(bodyStart))) {
+    const close = closingOf(text, bodyStart, bodyEnd);
+    if (close === bodyEnd - 1 && tokenEnd === bodyEnd) {
+      bodyEnd--;
+      tokenEnd--;
+    } else if (close >= 0) break;
+    bodyStart++;
+  }
+  while (bodyEnd > bodyStart && isClose(text.charCodeAt(bodyEnd - 1)) && depthOf(text, bodyStart, bodyEnd) < 0) {
+    if (tokenEnd !== bodyEnd) break;
+    bodyEnd--;
+    tokenEnd--;
+  }
+  const next = Math.max(tokenEnd, start + 1);
+  if (bodyEnd <= bodyStart) return next;
+  const body = text.slice(bodyStart, bodyEnd);
+  const token = text.slice(bodyStart, tokenEnd);
+  const shape = shapeOf(body, text.slice(bodyEnd, tokenEnd));
+  if (!shape || !isConfidentToken(token, body, shape)) return next;
+  if (isPartOfCode(text, bodyStart, tokenEnd)) return next;
+  if (needsCalmContext(body, shape) && isWordContext(text, bodyStart, tokenEnd)) return next;
+  const result = scan.read(token);
+  if (result.ok) {
+    scan.sink.occurrences.push(occurrenceAt(result.value, token, bodyStart, "formula"));
+  } else if ((shape.hasCount || shape.hasCharge) && new Set(shape.symbols).size > 1) {
+    // Report only what comes with a better spelling that itself reads: "CLF3" -> "ClF3".
+    const suggestion = result.problem.suggestion;
+    if (suggestion && scan.read(suggestion).ok) scan.sink.unreadable.push(unreadableAt(token, bodyStart, result));
+  }
+  return next;
+}
+
+/** The end of a charge such as "+", "2-", "^2-", "^{2-}" right after a formula body. */
+function chargeEnd(text: string, bodyEnd: number, end: number): number {
+  let index = bodyEnd;
+  if (text.charCodeAt(index) === 0x5e) {
+    index++;
+    if (text.charCodeAt(index) === 0x7b) {
+      const close = text.indexOf("}", index);
+      return close > 0 && close < end && close - index <= 5 ? close + 1 : bodyEnd;
+    }
+    while (index < end && text.charCodeAt(index) >= 0x30 && text.charCodeAt(index) <= 0x39) index++;
+  }
+  const signStart = index;
+  while (index < end && index - signStart < 3 && isSign(text.charCodeAt(index))) index++;
+  if (index === signStart) return bodyEnd;
+  // A sign followed by a letter or digit is a hyphen or an operator: "NF3-rich", "NF3+SF6".
+  if (index < end && isWordCharacter(text.charCodeAt(index))) return bodyEnd;
+  if (text.charCodeAt(signStart) === 0x2d && isSuspendedHyphen(text, index)) return bodyEnd;
+  return index;
+}
+
+/** "CF4- and SF6-based": the hyphen waits for a word later in the sentence. */
+function isSuspendedHyphen(text: string, afterSign: number): boolean {
+  return /^[ \t]+(?:and|or|to|and\/or)[ \t]+\S*[A-Za-z0-9]-[A-Za-z]/.test(text.slice(afterSign, afterSign + 60));
+}
+
+function isOpen(code: number): boolean {
+  return code === 0x28 || code === 0x5b;
+}
+
+function isClose(code: number): boolean {
+  return code === 0x29 || code === 0x5d;
+}
+
+/** Bracket depth at the end of `text[start, end)`; negative when closers dangle. */
+function depthOf(text: string, start: number, end: number): number {
+  let depth = 0;
+  for (let index = start; index < end; index++) {
+    const code = text.charCodeAt(index);
+    if (isOpen(code)) depth++;
+    else if (isClose(code)) depth--;
+  }
+  return depth;
+}
+
+/** Index of the bracket closing the one at `open`, or -1. */
+function closingOf(text: string, open: number, end: number): number {
+  let depth = 0;
+  for (let index = open; index < end; index++) {
+    const code = text.charCodeAt(index);
+    if (isOpen(code)) depth++;
+    else if (isClose(code) && --depth === 0) return index;
+  }
+  return -1;
+}
