@@ -68,7 +68,8 @@ export function binaryCovalentName(sequence: readonly FormulaPart[], charge: num
     const fits = first.count === lcm / usual && second.count === lcm / -anion.charge;
     return fits ? `${firstElement.name} ${anion.root}` : undefined;
   }
-  if (!COVALENT_FORMERS.has(first.symbol)) return undefined;
+  // hydrides of nonmetals go by parent-hydride names (methane, silane), never "carbon tetrahydride"
+  if (!COVALENT_FORMERS.has(first.symbol) || second.symbol === "H") return undefined;
   const firstPrefix = first.count === 1 ? "" : prefixFor(first.count);
   const secondPrefix = prefixFor(second.count);
   if (firstPrefix === undefined || secondPrefix === undefined) return undefined;
