@@ -1,0 +1,210 @@
+/**
+ * The server must outlive bad input: broken framing, unknown methods, malformed parameters,
+ * huge or binary documents, cancelled requests and long runs of random edits.
+ */
+import { afterAll, beforeAll, describe, expect, it } from "vitest";
+import {
+  CancellationTokenSource,
+  CodeActionRequest,
+  ErrorCodes,
+  ExecuteCommandRequest,
+  HoverRequest,
+  InlayHintRequest,
+  RequestType,
+  ResponseError,
+  type MarkupContent,
+} from "vscode-languageserver-protocol/node";
+import { fixtureUri, positionOf, startSession, type LspSession } from "./lspSession";
+
+let session: LspSession;
+
+beforeAll(async () => {
+  session = await startSession();
+});
+
+afterAll(async () => {
+  await session?.stop();
+});
+
+/** A small deterministic generator, so a failing run can be replayed. */
+function seededRandom(seed: number): () => number {
+  let state = seed >>> 0;
+  return () => {
+    state = (state + 0x6d2b79f5) >>> 0;
+    let value = state;
+    value = Math.imul(value ^ (value >>> 15), value | 1);
+    value ^= value + Math.imul(value ^ (value >>> 7), value | 61);
+    return ((value ^ (value >>> 14)) >>> 0) / 4294967296;
+  };
+}
+
+/** Hovers on the first "SF4" of an open document and returns the card text. */
+async function hoverOnSf4(uri: string): Promise<string> {
+  const document = session.documents.get(uri)!;
+  const hover = await session.connection.sendRequest(HoverRequest.type, { textDocument: { uri }, position: positionOf(document, "SF4", 1) });
+  return (hover?.contents as MarkupContent | undefined)?.value ?? "";
+}
+
+async function stillAnswers(): Promise<void> {
+  const uri = fixtureUri("notebook/alive.md");
+  if (!session.documents.has(uri)) session.open(uri, "markdown", "The reference gas is SF4.\n");
+  // common practice: SF4 is a seesaw
+  expect(await hoverOnSf4(uri)).toContain("seesaw");
+  expect(session.child.exitCode).toBeNull();
+}
+
+describe("protocol abuse", () => {
+  it("skips garbage bytes and broken frames and keeps answering", async () => {
+    const random = seededRandom(14);
+    // Random bytes without CR or LF, closed by a blank line: a header block the reader must reject.
+    const garbage = Buffer.from(Array.from({ length: 4096 }, () => {
+      const byte = Math.floor(random() * 256);
+      return byte === 10 || byte === 13 ? 32 : byte;
+    }));
+    session.child.stdin.write(Buffer.concat([garbage, Buffer.from("\r\n\r\n")]));
+    session.child.stdin.write("Content-Length: not-a-number\r\n\r\n");
+    const brokenJson = "{ this is not json";
+    session.child.stdin.write(`Content-Length: ${Buffer.byteLength(brokenJson)}\r\n\r\n${brokenJson}`);
+    const notRpc = JSON.stringify({ hello: "Kestrel Ridge" });
+    session.child.stdin.write(`Content-Length: ${Buffer.byteLength(notRpc)}\r\n\r\n${notRpc}`);
+    await stillAnswers();
+  });
+
+  it("answers an unknown method with MethodNotFound", async () => {
+    const unknown = new RequestType<unknown, unknown, void>("lonepair/noSuchMethod");
+    const error = await session.connection.sendRequest(unknown, {}).then(
+      () => undefined,
+      (reason: unknown) => reason,
+    );
+    expect(error).toBeInstanceOf(ResponseError);
+    expect((error as ResponseError<unknown>).code).toBe(ErrorCodes.MethodNotFound);
+    await stillAnswers();
+  });
+
+  it.each([
+    ["hover without a document", HoverRequest.method, {}],
+    ["hover at a nonsense position", HoverRequest.method, { textDocument: { uri: fixtureUri("notebook/alive.md") }, position: { line: -3, character: "x" } }],
+    ["inlay hints for a document that is not open", InlayHintRequest.method, { textDocument: { uri: "file:///nowhere.md" }, range: null }],
+    ["code actions without a context", CodeActionRequest.method, { textDocument: { uri: fixtureUri("notebook/alive.md") }, range: null }],
+    ["the table command with junk arguments", ExecuteCommandRequest.method, { command: "lonepair.summaryTable", arguments: [42, "x"] }],
+  ])("answers %s without failing", async (_label, method, params) => {
+    const request = new RequestType<unknown, unknown, void>(method);
+    const result = await session.connection.sendRequest(request, params).then(
+      (value) => ({ value }),
+      (error: unknown) => ({ error }),
+    );
+    // Either an empty answer or a clean protocol error, never a dead server.
+    if ("error" in result) expect(result.error).toBeInstanceOf(ResponseError);
+    else expect([null, "", undefined].includes(result.value as null) || JSON.stringify(result.value).length < 200).toBe(true);
+    await stillAnswers();
+  });
+
+  it("survives a cancelled request", async () => {
+    const uri = fixtureUri("notebook/alive.md");
+    await stillAnswers();
+    const source = new CancellationTokenSource();
+    const pending = session.connection
+      .sendRequest(HoverRequest.type, { textDocument: { uri }, position: { line: 0, character: 22 } }, source.token)
+      .then(
+        (value) => ({ value }),
+        (error: unknown) => ({ error }),
+      );
+    source.cancel();
+    const result = await pending;
+    if ("error" in result) expect((result.error as ResponseError<unknown>).code).toBe(ErrorCodes.RequestCancelled ?? -32800);
+    await stillAnswers();
+  });
+});
+
+describe("awkward documents", () => {
+  it("analyses only the start of a 50 MB document and says so once", async () => {
+    const uri = fixtureUri("notebook/huge.md");
+    const paragraph = "Run 22 note: the SF4 cylinder KR-0812 was weighed and returned to bay C.\n";
+    const text = paragraph.repeat(Math.ceil((50 * 1024 * 1024) / paragraph.length));
+    session.open(uri, "markdown", text);
+    const published = await session.waitForDiagnostics(uri, undefined, 60_000);
+    const notes = published.diagnostics.filter((diagnostic) => diagnostic.code === "document-partly-analysed");
+    expect(notes).toHaveLength(1);
+    expect(notes[0].severity).toBe(3);
+    expect(await hoverOnSf4(uri)).toContain("seesaw");
+    // Past the analysed part there is nothing to hover.
+    const lastLine = Math.floor(text.length / paragraph.length) - 1;
+    const late = await session.connection.sendRequest(HoverRequest.type, {
+      textDocument: { uri },
+      position: { line: lastLine, character: paragraph.indexOf("SF4") + 1 },
+    });
+    expect(late).toBeNull();
+    session.close(uri);
+    await stillAnswers();
+  });
+
+  it("handles a 1 MB single line", async () => {
+    const uri = fixtureUri("notebook/one-line.md");
+    const phrase = "the SF4 line in bay C reads steady at 2.1 bar; ";
+    const text = phrase.repeat(Math.ceil((1024 * 1024) / phrase.length));
+    session.open(uri, "markdown", text);
+    await session.waitForDiagnostics(uri, undefined, 60_000);
+    // common practice: SF4 is a seesaw
+    expect(await hoverOnSf4(uri)).toContain("seesaw");
+    const hints = await session.connection.sendRequest(InlayHintRequest.type, {
+      textDocument: { uri },
+      range: { start: { line: 0, character: 0 }, end: { line: 0, character: phrase.length * 3 } },
+    });
+    expect(hints?.map((hint) => hint.label)).toEqual([": seesaw", ": seesaw", ": seesaw"]);
+    session.close(uri);
+    await stillAnswers();
+  });
+
+  it("ignores binary content", async () => {
+    const uri = fixtureUri("notebook/binary.md");
+    const random = seededRandom(7);
+    const text = Array.from({ length: 20_000 }, () => String.fromCharCode(Math.floor(random() * 0x2ff))).join("") + "\u0000SF4";
+    session.open(uri, "markdown", `\u0000${text}`);
+    const published = await session.waitForDiagnostics(uri);
+    expect(published.diagnostics).toEqual([]);
+    session.close(uri);
+    await stillAnswers();
+  });
+
+  it("keeps up with a long run of random edits", async () => {
+    const uri = fixtureUri("notebook/random-edits.md");
+    const random = seededRandom(2207);
+    const pieces = ["SF4", " ", "\n", "XeF4", "| NH3 | trigonal planar |", "\\ce{BF4-}", "CH5", "é", "🧪", "(", "]", "Cl", "2", "^", "-", ","];
+    let document = session.open(uri, "markdown", "# Run 23\n\nSF4 and NF3 in bay C.\n");
+    for (let step = 0; step < 300; step += 1) {
+      const length = document.getText().length;
+      const start = Math.floor(random() * (length + 1));
+      const end = Math.min(length, start + Math.floor(random() * 6));
+      const insert = random() < 0.7 ? pieces[Math.floor(random() * pieces.length)] : "";
+      document = session.change(uri, [{ range: { start: document.positionAt(start), end: document.positionAt(end) }, text: insert }]);
+      if (step % 25 === 0) {
+        const position = document.positionAt(Math.floor(random() * (document.getText().length + 1)));
+        await session.connection.sendRequest(HoverRequest.type, { textDocument: { uri }, position });
+        await session.connection.sendRequest(InlayHintRequest.type, {
+          textDocument: { uri },
+          range: { start: { line: 0, character: 0 }, end: document.positionAt(document.getText().length) },
+        });
+        await session.connection.sendRequest(CodeActionRequest.type, {
+          textDocument: { uri },
+          range: { start: position, end: position },
+          context: { diagnostics: [] },
+        });
+      }
+    }
+    document = session.change(uri, [{ range: { start: document.positionAt(document.getText().length), end: document.positionAt(document.getText().length) }, text: "\n\nFinal check: SF4.\n" }]);
+    const final = await session.waitForDiagnostics(uri, (params) => params.version === document.version);
+    const length = document.getText().length;
+    for (const diagnostic of final.diagnostics) {
+      expect(document.offsetAt(diagnostic.range.end)).toBeLessThanOrEqual(length);
+      expect(diagnostic.source).toBe("lonepair");
+    }
+    // The server's text equals ours: a hover on the appended species finds it.
+    const hover = await session.connection.sendRequest(HoverRequest.type, {
+      textDocument: { uri },
+      position: document.positionAt(document.getText().lastIndexOf("SF4") + 1),
+    });
+    // common practice: SF4 is a seesaw
+    expect((hover?.contents as MarkupContent | undefined)?.value ?? "").toContain("seesaw");
+    await stillAnswers();
+  });
+});
