@@ -69,7 +69,7 @@ function successLines(input: string, analysis: SpeciesAnalysis, style: CardStyle
   const { reading } = analysis;
   const title = reading.name ? `${reading.formula} - ${reading.name}` : reading.formula;
   const echoed = input.trim() === reading.formula || input.trim() === reading.name ? "" : `  (from "${input}")`;
-  const lines = [style.title(title) + style.muted(echoed)];
+  const lines = [style.title(title) + (echoed ? style.muted(echoed) : "")];
   lines.push(row(style, "Charge", signed(reading.charge)));
   lines.push(row(style, "Valence electrons", String(analysis.valenceElectrons)));
   lines.push(...lewisLines(analysis, style));
