@@ -37,14 +37,15 @@ export function hoverMarkdown(analysis: SpeciesAnalysis, options: HoverMarkdownO
   lines.push("");
   lines.push(electronLine(analysis));
   lines.push("");
-  for (const block of centreBlocks(analysis.centres, options)) {
-    lines.push(...block, "");
-  }
+  const measured = measuredLines(analysis.measuredAngles, options.angleDecimals);
+  const blocks = centreBlocks(analysis.centres, options);
+  // With one centre the measured angles belong to its block; with several they get their own.
+  if (blocks.length === 1) blocks[0].push(...measured);
+  for (const block of blocks) lines.push(...block, "");
   if (analysis.centres.length === 0) {
     lines.push("No central atom: fewer than two atoms are bonded to any one atom.", "");
   }
-  const measured = measuredLines(analysis.measuredAngles, options.angleDecimals);
-  if (measured.length > 0) lines.push(...measured, "");
+  if (blocks.length !== 1 && measured.length > 0) lines.push("**Measured angles**", ...measured, "");
   lines.push(polarityLine(analysis), "");
   for (const warning of analysis.warnings) lines.push(`- ⚠ ${escapeMarkdown(warning)}`);
   if (analysis.warnings.length > 0) lines.push("");
@@ -67,7 +68,7 @@ function electronLine(analysis: SpeciesAnalysis): string {
   const parts = [
     `${analysis.valenceElectrons} valence electrons`,
     `${bondingPairs(analysis.graph)} bonding pairs`,
-    `${lonePairTotal(analysis.graph)} lone pairs`,
+    `${lonePairTotal(analysis.graph)} lone pairs${centreLonePairs(analysis.centres)}`,
   ];
   const charges = formalChargeText(analysis.graph);
   if (charges) parts.push(`formal charges ${charges}`);
@@ -83,6 +84,11 @@ function bondingPairs(graph: MolecularGraph): number {
 
 function lonePairTotal(graph: MolecularGraph): number {
   return graph.atoms.reduce((sum, atom) => sum + atom.lonePairs, 0);
+}
+
+/** "(1 on S)" when there is one centre, so the reader need not subtract the outer atoms' pairs. */
+function centreLonePairs(centres: readonly CentreAnalysis[]): string {
+  return centres.length === 1 ? ` (${centres[0].lonePairs} on ${centres[0].atom})` : "";
 }
 
 function formalChargeText(graph: MolecularGraph): string {
@@ -131,22 +137,26 @@ function centreBlock(
   if (centre.idealAngles.length > 0) {
     lines.push(`- Ideal angles: ${centre.idealAngles.map((angle) => formatAngle(angle, options.angleDecimals)).join(", ")}`);
   }
+  let previousNote: string | undefined;
   for (const expectation of centre.expectedAngles) {
-    lines.push(`- Expected: ${expectationText(expectation, options.angleDecimals)}`);
+    // Several position pairs often share one reason; say it once.
+    const note = expectation.note === previousNote ? undefined : expectation.note;
+    previousNote = expectation.note;
+    lines.push(`- Expected: ${expectationText(expectation, note, options.angleDecimals)}`);
   }
   const note = centre.hybridizationNote ? ` (${escapeMarkdown(centre.hybridizationNote)})` : "";
   lines.push(`- Hybridization: ${centre.hybridization}${note}`);
   return lines;
 }
 
-function expectationText(expectation: AngleExpectation, decimals: number): string {
+function expectationText(expectation: AngleExpectation, note: string | undefined, decimals: number): string {
   const between = expectation.between ? `${escapeMarkdown(expectation.between)} ` : "";
   const span =
     expectation.min === expectation.max
       ? formatAngle(expectation.min, decimals)
       : `${formatAngle(expectation.min, decimals)}–${formatAngle(expectation.max, decimals)}`;
-  const note = expectation.note ? `: ${escapeMarkdown(expectation.note)}` : "";
-  return `${between}${span} (ideal ${formatAngle(expectation.ideal, decimals)})${note}`;
+  const reason = note ? `: ${escapeMarkdown(note)}` : "";
+  return `${between}${span} (ideal ${formatAngle(expectation.ideal, decimals)})${reason}`;
 }
 
 function measuredLines(measured: readonly MeasuredAngle[], decimals: number): string[] {
