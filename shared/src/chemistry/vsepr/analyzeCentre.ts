@@ -71,6 +71,7 @@ export function analyzeCentre(graph: MolecularGraph, index: number, radical: boo
       centrePeriod: traits.element.period,
       identicalNeighbours,
       hasMultipleBond: ligands.some((l) => l.bondOrder > 1),
+      multipleBondCount: ligands.filter((l) => l.bondOrder > 1).length,
       bulkyNeighbours: ligands.some((l) => atomTraits(l.symbol).element.period > traits.element.period),
       radical,
       ligandDirections: sites.ligandDirections,

@@ -18,6 +18,8 @@ export interface AngleContext {
   /** All neighbours the same element with the same bond order. */
   readonly identicalNeighbours: boolean;
   readonly hasMultipleBond: boolean;
+  /** Two or more multiple bonds: the angle between them opens wide (O-S-O in SO2Cl2). */
+  readonly multipleBondCount: number;
   /** Some neighbour is from a later period than the centre (Cl on O in Cl2O). */
   readonly bulkyNeighbours: boolean;
   readonly radical: boolean;
@@ -90,7 +92,8 @@ function rangeFor(
   if (!context.identicalNeighbours || context.hasMultipleBond) {
     const spread = ideal >= 170 ? 10 : ideal <= 90 ? 6 : 10;
     min = Math.min(min, ideal - spread);
-    if (ideal < 170) max = Math.max(max, ideal + (context.hasMultipleBond ? 6 : 4));
+    const opening = context.multipleBondCount >= 2 ? 16 : context.hasMultipleBond ? 6 : 4;
+    if (ideal < 170) max = Math.max(max, ideal + opening);
     notes.push(
       context.hasMultipleBond
         ? "a multiple bond takes more room and pushes the other bonds together"
