@@ -1,0 +1,99 @@
+/**
+ * The pure text builders behind the hover card and the summary table, fed by the core's own
+ * analyses. CSV output is read back with csv-parse, an independent RFC 4180 reader.
+ */
+import { parse } from "csv-parse/sync";
+import { describe, expect, it } from "vitest";
+import { analyzeSpecies, type SpeciesAnalysis } from "../../shared/src/index";
+import { HOVER_CAUTION, hoverMarkdown } from "../../shared/src/report/hoverMarkdown";
+import { summaryTable } from "../../shared/src/report/summaryTable";
+
+function analysis(text: string): SpeciesAnalysis {
+  const result = analyzeSpecies(text);
+  if (!result.ok) throw new Error(`${text}: ${result.problem.message}`);
+  return result.value;
+}
+
+describe("hover card", () => {
+  it.each([
+    // common practice: VSEPR classes and shapes of these textbook species
+    ["SF4", ["AX4E1", "trigonal bipyramidal", "seesaw", "sp3d", "polar"]],
+    ["XeF4", ["AX4E2", "octahedral", "square planar", "sp3d2", "nonpolar"]],
+    ["NH3", ["AX3E1", "tetrahedral", "trigonal pyramidal", "sp3"]],
+    ["BF3", ["AX3", "trigonal planar", "sp2", "nonpolar"]],
+  ])("%s names its class, shapes, hybridization and polarity", (formula, fragments) => {
+    const card = hoverMarkdown(analysis(formula), { angleDecimals: 1 });
+    for (const fragment of fragments) expect(card).toContain(fragment);
+    expect(card).toContain(HOVER_CAUTION);
+  });
+
+  it.each([
+    // from memory: S 6 + 4 F x 7 = 34 valence electrons, one lone pair on S
+    ["SF4", "34 valence electrons", "(1 on S)"],
+    // from memory: Xe 8 + 4 F x 7 = 36 valence electrons, two lone pairs on Xe
+    ["XeF4", "36 valence electrons", "(2 on Xe)"],
+  ])("%s counts electrons and the centre's lone pairs", (formula, electrons, lonePairs) => {
+    const card = hoverMarkdown(analysis(formula), { angleDecimals: 1 });
+    expect(card).toContain(electrons);
+    expect(card).toContain(lonePairs);
+  });
+
+  it("shows ozone's resonance and formal charges // common practice: O3 has two resonance forms, O+ and O-", () => {
+    const card = hoverMarkdown(analysis("O3"), { angleDecimals: 1 });
+    expect(card).toContain("2 resonance forms");
+    expect(card).toMatch(/formal charges .*O \+1/);
+    expect(card).toMatch(/O −1/);
+  });
+
+  it.each([
+    [0, "Ideal angles: 90°, 120°, 180°"],
+    [2, "Ideal angles: 90.00°, 120.00°, 180.00°"],
+  ])("writes angles with %i decimals // common practice: trigonal bipyramid angles 90, 120, 180 degrees", (decimals, expected) => {
+    const card = hoverMarkdown(analysis("SF4"), { angleDecimals: decimals });
+    expect(card).toContain(expected);
+  });
+
+  it("lists each kind of centre of a multi-centre species // common practice: both N of hydrazine are trigonal pyramidal", () => {
+    const card = hoverMarkdown(analysis("N2H4"), { angleDecimals: 1 });
+    expect(card).toContain("Centre N (×2)");
+    expect(card).toContain("trigonal pyramidal");
+  });
+});
+
+describe("summary table", () => {
+  const species = ["SF4", "XeF4", "SF4", "NH3"].map(analysis);
+
+  it("writes CSV that an RFC 4180 reader takes back, one row per species in first-seen order", () => {
+    const text = summaryTable({ analyses: species, format: "csv", angleDecimals: 1 });
+    const rows = parse(text) as string[][];
+    expect(rows[0]).toEqual([
+      "Formula", "Name", "Valence electrons", "AXE", "Electron geometry", "Molecular geometry", "Ideal angles", "Hybridization", "Polarity",
+    ]);
+    expect(rows.slice(1).map((row) => row[0])).toEqual(["SF4", "XeF4", "NH3"]);
+    // common practice: SF4 ideal angles 90, 120 and 180 degrees (a field with commas, so quoted)
+    expect(rows[1][6]).toBe("90.0°, 120.0°, 180.0°");
+    // common practice: NH3 AX3E1 trigonal pyramidal, polar
+    expect(rows[3].slice(3, 6)).toEqual(["AX3E1", "tetrahedral", "trigonal pyramidal"]);
+    expect(rows[3][8]).toBe("polar");
+  });
+
+  it("keeps only the asked columns, in the asked order", () => {
+    const text = summaryTable({ analyses: species, format: "csv", angleDecimals: 1, columns: ["molecularGeometry", "formula"] });
+    // common practice: XeF4 square planar
+    expect(parse(text)).toEqual([["Molecular geometry", "Formula"], ["seesaw", "SF4"], ["square planar", "XeF4"], ["trigonal pyramidal", "NH3"]]);
+  });
+
+  it("writes a markdown table with the caution and the species it could not analyse", () => {
+    const text = summaryTable({
+      analyses: species,
+      unanalysed: [{ text: "CH5", message: "carbon cannot make five bonds" }],
+      format: "markdown",
+      angleDecimals: 1,
+      columns: ["formula", "axe"],
+    });
+    const rows = text.split("\n").filter((line) => line.startsWith("|"));
+    expect(rows).toEqual(["| Formula | AXE |", "| --- | --- |", "| SF4 | AX4E1 |", "| XeF4 | AX4E2 |", "| NH3 | AX3E1 |"]);
+    expect(text).toContain("Not analysed: CH5");
+    expect(text).toContain(HOVER_CAUTION);
+  });
+});
