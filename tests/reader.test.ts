@@ -91,6 +91,7 @@ describe("charges", () => {
     ["SO4²−", "SO4^2-", -2, "formula", 5],
     ["O2^-", "O2^-", -1, "formula", 4],
     ["CH3-", "CH3^-", -1, "formula", 4],
+    ["C12+", "C12^+", 1, "formula", 4],
     ["Fe2+", "Fe^2+", 2, "formula", 4],
     ["Cu(NH3)4^2+", "Cu(NH3)4^2+", 2, "formula", 11],
     ["[Cu(NH3)4]2+", "Cu(NH3)4^2+", 2, "formula", 12],

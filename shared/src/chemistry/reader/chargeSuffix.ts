@@ -162,7 +162,9 @@ function signEndedCharge(text: string, start: number, end: number): ChargeSuffix
     return finishCharge(text, start, digitStart, end);
   }
   const lastDigit = text.charCodeAt(signStart - 1);
-  if (digitCount >= 2 && signCount === 1 && lastDigit !== 0x30) {
+  // "C12+" stays a count: splitting it would leave a written count of 1, which nobody writes
+  const leadingCount = Number(text.slice(digitStart, signStart - 1));
+  if (digitCount >= 2 && signCount === 1 && lastDigit !== 0x30 && leadingCount > 1) {
     const body = text.slice(start, signStart - 1);
     const suggestion = `${body}${chargeText(signValue(text.charCodeAt(signStart)) * (lastDigit - 0x30))}`;
     return malformed(
