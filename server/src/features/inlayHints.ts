@@ -24,8 +24,9 @@ export function registerInlayHints(context: ServerContext): void {
       const hints: InlayHint[] = [];
       for (const occurrence of hintedOccurrences(analysed.model)) {
         if (token.isCancellationRequested) return [];
-        if (occurrence.range.end < requested.start) continue;
-        if (occurrence.range.end > requested.end) break;
+        // Occurrences come in order of their start; a nested one may end before its parent.
+        if (occurrence.range.start > requested.end) break;
+        if (occurrence.range.end < requested.start || occurrence.range.end > requested.end) continue;
         const result = analysisOf(occurrence);
         const label = result.ok ? geometryLabel(result.value) : undefined;
         if (!label) continue;
