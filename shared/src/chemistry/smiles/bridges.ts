@@ -9,17 +9,44 @@ export interface BondEnds {
  * Returns one flag per bond, 1 for a bridge. The depth-first walk keeps its own stack so that long
  * chains cannot overflow the call stack.
  */
+// Scratch space reused between calls: allocating typed arrays per molecule costs more than the
+// walk itself for drug-sized inputs. Safe because the walk never calls out while using them.
+let scratch = new Int32Array(0);
+
+function scratchFor(atomCount: number, bondCount: number): Int32Array {
+  const needed = 6 * atomCount + 1 + 4 * bondCount;
+  if (scratch.length < needed) scratch = new Int32Array(Math.max(needed, 2 * scratch.length));
+  return scratch;
+}
+
+/**
+ * Marks the bonds that lie on no ring (bridges of the graph), in time linear in atoms plus bonds.
+ * Returns one flag per bond, 1 for a bridge. The depth-first walk keeps its own stack so that long
+ * chains cannot overflow the call stack.
+ */
 export function findBridges(atomCount: number, bonds: readonly BondEnds[]): Uint8Array {
   const bondCount = bonds.length;
-  const offsets = new Int32Array(atomCount + 1);
+  const buffer = scratchFor(atomCount, bondCount);
+  let used = 0;
+  const take = (size: number): Int32Array => buffer.subarray(used, (used += size));
+  const offsets = take(atomCount + 1).fill(0);
+  const fill = take(atomCount);
+  const discovered = take(atomCount).fill(0); // 0 = not yet visited
+  const low = take(atomCount);
+  const parentBond = take(atomCount);
+  const nextEdge = take(atomCount);
+  const stack = take(atomCount);
+  const neighbours = take(2 * bondCount);
+  const viaBond = take(2 * bondCount);
+
   for (let b = 0; b < bondCount; b++) {
     offsets[bonds[b].from + 1]++;
     offsets[bonds[b].to + 1]++;
   }
-  for (let a = 0; a < atomCount; a++) offsets[a + 1] += offsets[a];
-  const neighbours = new Int32Array(2 * bondCount);
-  const viaBond = new Int32Array(2 * bondCount);
-  const fill = offsets.slice(0, atomCount);
+  for (let a = 0; a < atomCount; a++) {
+    offsets[a + 1] += offsets[a];
+    fill[a] = offsets[a];
+  }
   for (let b = 0; b < bondCount; b++) {
     const { from, to } = bonds[b];
     neighbours[fill[from]] = to;
@@ -29,11 +56,6 @@ export function findBridges(atomCount: number, bonds: readonly BondEnds[]): Uint
   }
 
   const bridge = new Uint8Array(bondCount);
-  const discovered = new Int32Array(atomCount); // 0 = not yet visited
-  const low = new Int32Array(atomCount);
-  const parentBond = new Int32Array(atomCount);
-  const nextEdge = new Int32Array(atomCount);
-  const stack = new Int32Array(atomCount);
   let time = 0;
   for (let root = 0; root < atomCount; root++) {
     if (discovered[root] !== 0) continue;
