@@ -8,6 +8,7 @@ import {
   HUB_FORMAL_CHARGES,
   ION_SHAPES,
   MULTI_CENTRE,
+  PENDING_MULTI_CENTRE,
   NAMES,
   NOT_RADICALS,
   NO_EXPANDED_OCTET,
@@ -176,6 +177,8 @@ describe("several centres, H on O", () => {
     const want = centres.flatMap((c) => Array.from({ length: c.count }, () => `${c.atom} ${c.axe} ${c.molecularGeometry}`)).sort();
     expect(got, `${species}: ${describeGraph(analysis)}`).toEqual(want);
   });
+  // Condensed formulas with a carbon chain need the structural-formula builder.
+  it.todo.each(PENDING_MULTI_CENTRE)("%s per-atom centres from the condensed formula");
 });
 
 describe("names analyse like their formulas", () => {
