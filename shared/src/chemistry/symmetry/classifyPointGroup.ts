@@ -3,7 +3,7 @@
  * molecules that are not linear.
  */
 import { dot, type Vec3 } from "../geometry/vectors";
-import { sameDirection, type FoundAxis, type FoundSymmetryElements } from "./findSymmetryElements";
+import { type FoundAxis, type FoundSymmetryElements } from "./findSymmetryElements";
 
 /** The Schoenflies symbol and the principal axis the decision was made about, if any. */
 export interface Classification {
@@ -11,10 +11,15 @@ export interface Classification {
   readonly principalAxis: FoundAxis | null;
 }
 
-const PERPENDICULAR_COSINE = 0.05;
+/** Within about 11° of a right angle: loose enough for a slightly tilted axis at a loose tolerance. */
+const NEARLY_PERPENDICULAR_COSINE = 0.2;
 
-function isPerpendicular(a: Vec3, b: Vec3): boolean {
-  return Math.abs(dot(a, b)) < PERPENDICULAR_COSINE;
+/**
+ * Outside the cubic groups a mirror either contains the principal axis or is normal to it, so the
+ * nearer of the two decides; this stays right when a loose tolerance lets an axis tilt a little.
+ */
+function isNormalToPlane(axis: Vec3, planeNormal: Vec3): boolean {
+  return Math.abs(dot(axis, planeNormal)) > Math.SQRT1_2;
 }
 
 /**
@@ -40,10 +45,12 @@ export function classifyPointGroup(elements: FoundSymmetryElements): Classificat
 
   const principalAxis = choosePrincipalAxis(axes);
   const n = principalAxis.order;
-  const horizontalMirror = mirrorNormals.some((normal) => sameDirection(normal, principalAxis.direction));
-  const verticalMirror = mirrorNormals.some((normal) => isPerpendicular(normal, principalAxis.direction));
+  const horizontalMirror = mirrorNormals.some((normal) => isNormalToPlane(principalAxis.direction, normal));
+  const verticalMirror = mirrorNormals.some((normal) => !isNormalToPlane(principalAxis.direction, normal));
+  // Outside the cubic groups every other axis is a C2 at right angles to the principal one; the
+  // angle check still guards against a principal axis that was missed, leaving C2s at 60°.
   const perpendicularTwofold = axes.some(
-    (axis) => axis !== principalAxis && axis.order % 2 === 0 && isPerpendicular(axis.direction, principalAxis.direction),
+    (axis) => axis !== principalAxis && Math.abs(dot(axis.direction, principalAxis.direction)) < NEARLY_PERPENDICULAR_COSINE,
   );
 
   if (perpendicularTwofold) {

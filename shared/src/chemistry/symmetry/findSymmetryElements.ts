@@ -12,6 +12,7 @@ import {
   mapsOntoItself,
   reflectionMatrix,
   rotationMatrix,
+  symmetryPermutation,
   type MatchableMolecule,
 } from "./operations";
 
@@ -32,41 +33,88 @@ export interface FoundSymmetryElements {
 // so directions within ~3° are one axis seen twice.
 const SAME_DIRECTION_SINE = 0.05;
 
-export function sameDirection(a: Vec3, b: Vec3): boolean {
+function sameDirection(a: Vec3, b: Vec3): boolean {
   return norm(cross(a, b)) < SAME_DIRECTION_SINE;
 }
 
 /** Finds every rotation axis, mirror plane, improper axis and the inversion centre, if any. */
 export function findSymmetryElements(molecule: CentredMolecule, tolerance: number): FoundSymmetryElements {
-  const axes: FoundAxis[] = [];
+  // Each element is kept with the permutation of atoms it causes: at a loose tolerance a slightly
+  // tilted copy of an axis can pass too, and the permutation, not the angle, tells it is a copy.
+  const axes: (FoundAxis & { readonly permutation: readonly number[] })[] = [];
   for (const { direction } of candidateAxes(molecule, tolerance)) {
     if (axes.some((axis) => sameDirection(axis.direction, direction))) continue;
-    const order = highestRotationOrder(molecule, direction, tolerance);
-    if (order < 2) continue;
-    axes.push({ direction, order, improperOrder: highestImproperOrder(molecule, direction, order, tolerance) });
+    const rotation = highestRotation(molecule, direction, tolerance);
+    if (!rotation) continue;
+    const copyOf = axes.findIndex((axis) => sameRotationAxis(axis, rotation));
+    const found = { direction, ...rotation, improperOrder: highestImproperOrder(molecule, direction, rotation.order, tolerance) };
+    if (copyOf < 0) axes.push(found);
+    else if (axes[copyOf].order < found.order) axes[copyOf] = found;
   }
 
-  const mirrorNormals: Vec3[] = [];
+  const mirrors: { readonly normal: Vec3; readonly permutation: readonly number[] }[] = [];
   for (const { direction } of candidateMirrorNormals(molecule, tolerance)) {
-    if (mirrorNormals.some((normal) => sameDirection(normal, direction))) continue;
-    if (mapsOntoItself(molecule, reflectionMatrix(direction), tolerance)) mirrorNormals.push(direction);
+    if (mirrors.some(({ normal }) => sameDirection(normal, direction))) continue;
+    const permutation = symmetryPermutation(molecule, reflectionMatrix(direction), tolerance);
+    if (permutation && !mirrors.some((mirror) => samePermutation(mirror.permutation, permutation))) {
+      mirrors.push({ normal: direction, permutation });
+    }
   }
 
-  return { axes, mirrorNormals, inversion: mapsOntoItself(molecule, INVERSION, tolerance) };
+  return {
+    axes: axes.map(({ direction, order, improperOrder }) => ({ direction, order, improperOrder })),
+    mirrorNormals: mirrors.map(({ normal }) => normal),
+    inversion: mapsOntoItself(molecule, INVERSION, tolerance),
+  };
+}
+
+interface Rotation {
+  readonly order: number;
+  /** Where one step of the rotation (by 2π/order) sends each atom. */
+  readonly permutation: readonly number[];
 }
 
 /**
- * The highest n for which C_n about `axis` maps the molecule onto itself, or 1. Only divisors of
- * the sizes of the rings of look-alike atoms round the axis are tried, since C_n moves every
- * off-axis atom through a ring of exactly n.
+ * The highest-order rotation C_n about `axis` that maps the molecule onto itself, if any. Only
+ * divisors of the sizes of the rings of look-alike atoms round the axis are tried, since C_n
+ * moves every off-axis atom through a ring of exactly n.
  */
-function highestRotationOrder(molecule: MatchableMolecule, axis: Vec3, tolerance: number): number {
+function highestRotation(molecule: MatchableMolecule, axis: Vec3, tolerance: number): Rotation | undefined {
   const ringSizeDivisor = ringSizeCommonDivisor(molecule, axis, 2 * tolerance);
   for (let order = ringSizeDivisor; order >= 2; order--) {
     if (ringSizeDivisor % order !== 0) continue;
-    if (mapsOntoItself(molecule, rotationMatrix(axis, (2 * Math.PI) / order), tolerance)) return order;
+    const permutation = symmetryPermutation(molecule, rotationMatrix(axis, (2 * Math.PI) / order), tolerance);
+    if (permutation) return { order, permutation };
   }
-  return 1;
+  return undefined;
+}
+
+/**
+ * Two rotations lie on one axis when a power of the higher-order one moves the atoms exactly as
+ * the lower-order one does (either way round). For a molecule that is not linear, a rotation is
+ * fixed by how it moves the atoms.
+ */
+function sameRotationAxis(a: Rotation, b: Rotation): boolean {
+  const [high, low] = a.order >= b.order ? [a, b] : [b, a];
+  if (high.order % low.order !== 0) return false;
+  const power = permutationPower(high.permutation, high.order / low.order);
+  return samePermutation(power, low.permutation) || samePermutation(power, inversePermutation(low.permutation));
+}
+
+function permutationPower(permutation: readonly number[], exponent: number): number[] {
+  let result = permutation.map((_, index) => index);
+  for (let step = 0; step < exponent; step++) result = result.map((index) => permutation[index]);
+  return result;
+}
+
+function inversePermutation(permutation: readonly number[]): number[] {
+  const inverse = new Array<number>(permutation.length);
+  permutation.forEach((image, index) => (inverse[image] = index));
+  return inverse;
+}
+
+function samePermutation(a: readonly number[], b: readonly number[]): boolean {
+  return a.length === b.length && a.every((image, index) => image === b[index]);
 }
 
 /**

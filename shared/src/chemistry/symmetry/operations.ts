@@ -62,29 +62,42 @@ function multiply(a: Matrix3, b: Matrix3): Matrix3 {
 }
 
 /**
- * True when the operation sends every atom to within `tolerance` of an atom of the same element.
- * Atoms are assumed to be further apart than twice the tolerance, so no one-to-one check is needed.
+ * Where the operation sends each atom: `result[i]` is the index of the atom of the same element
+ * that atom i lands on within `tolerance`, or null when some atom lands on none. Atoms are
+ * assumed to be further apart than twice the tolerance, so the nearest match is the only one.
  */
-export function mapsOntoItself(molecule: MatchableMolecule, operation: Matrix3, tolerance: number): boolean {
+export function symmetryPermutation(
+  molecule: MatchableMolecule,
+  operation: Matrix3,
+  tolerance: number,
+): readonly number[] | null {
   const toleranceSquared = tolerance * tolerance;
   const [r0, r1, r2] = operation;
-  for (const atom of molecule.atoms) {
+  const permutation = new Array<number>(molecule.atoms.length);
+  for (let atomIndex = 0; atomIndex < molecule.atoms.length; atomIndex++) {
+    const atom = molecule.atoms[atomIndex];
     const [x, y, z] = atom.position;
     const ix = r0[0] * x + r0[1] * y + r0[2] * z;
     const iy = r1[0] * x + r1[1] * y + r1[2] * z;
     const iz = r2[0] * x + r2[1] * y + r2[2] * z;
-    let matched = false;
+    let image = -1;
     for (const index of molecule.indicesByElement[atom.elementId]) {
       const [px, py, pz] = molecule.atoms[index].position;
       const dx = px - ix;
       const dy = py - iy;
       const dz = pz - iz;
       if (dx * dx + dy * dy + dz * dz <= toleranceSquared) {
-        matched = true;
+        image = index;
         break;
       }
     }
-    if (!matched) return false;
+    if (image < 0) return null;
+    permutation[atomIndex] = image;
   }
-  return true;
+  return permutation;
+}
+
+/** True when the operation sends every atom to within `tolerance` of an atom of the same element. */
+export function mapsOntoItself(molecule: MatchableMolecule, operation: Matrix3, tolerance: number): boolean {
+  return symmetryPermutation(molecule, operation, tolerance) !== null;
 }
