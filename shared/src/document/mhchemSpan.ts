@@ -3,6 +3,7 @@
  * an equation ("SF4 + 2 H2O -> SO2 + 4 HF"), without coefficients, arrows and state symbols.
  */
 import type { TextRange } from "../chemistry/types";
+import { occurrenceAt, unreadableAt, type ScanSink, type SpeciesReader } from "./speciesReader";
 
 /** Longest `\ce{...}` body looked at; longer spans are not notes but pasted data. */
 const MAX_SPAN = 2000;
@@ -49,4 +50,19 @@ export function mhchemPieces(text: string, start: number, end: number): TextRang
     if (piece.length > 0) pieces.push({ start: pieceStart, end: pieceStart + piece.length });
   }
   return pieces;
+}
+
+/**
+ * Reads every piece of the mhchem body `text[start, end)` into `sink`. Everything inside is
+ * chemistry by the writer's own say-so, so a formula-shaped piece that does not read is reported.
+ */
+export function scanMhchemBody(text: string, start: number, end: number, read: SpeciesReader, sink: ScanSink): void {
+  for (const piece of mhchemPieces(text, start, end)) {
+    const pieceText = text.slice(piece.start, piece.end);
+    const result = read(pieceText);
+    if (result.ok) sink.occurrences.push(occurrenceAt(result.value, pieceText, piece.start, "mhchem"));
+    else if (/^[A-Z(\[]/.test(pieceText) && result.problem.code !== "unknown-name") {
+      sink.unreadable.push(unreadableAt(pieceText, piece.start, result));
+    }
+  }
 }

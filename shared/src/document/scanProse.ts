@@ -4,7 +4,7 @@
  * Precision comes first: a token counts only when its shape and context leave no doubt, and the
  * species reader has the last word on every candidate.
  */
-import { mhchemPieces, mhchemSpanEnd } from "./mhchemSpan";
+import { mhchemSpanEnd, scanMhchemBody } from "./mhchemSpan";
 import { isPartOfCode, isWordContext } from "./proseContext";
 import { isConfidentToken, needsCalmContext, shapeOf } from "./proseTokenRules";
 import { isOccurrence, smilesOccurrence } from "./smilesSpan";
@@ -68,6 +68,7 @@ export function scanProse(text: string, start: number, end: number, sink: ScanSi
       continue;
     }
     if (code === 0x3c && text.startsWith("<!--", index)) {
+      // An unclosed comment hides the rest of the text.
       const close = text.indexOf("-->", index + 4);
       index = close < 0 || close >= end ? end : close + 3;
       scan.previousWord = undefined;
@@ -120,14 +121,7 @@ function mhchemSpan(scan: ProseScan, open: number): number {
   scan.previousWord = undefined;
   const spanEnd = mhchemSpanEnd(text, open, end);
   if (spanEnd < 0) return open + 4;
-  for (const piece of mhchemPieces(text, open + 4, spanEnd - 1)) {
-    const pieceText = text.slice(piece.start, piece.end);
-    const result = scan.read(pieceText);
-    if (result.ok) scan.sink.occurrences.push(occurrenceAt(result.value, pieceText, piece.start, "mhchem"));
-    else if (/^[A-Z(\[]/.test(pieceText) && result.problem.code !== "unknown-name") {
-      scan.sink.unreadable.push(unreadableAt(pieceText, piece.start, result));
-    }
-  }
+  scanMhchemBody(text, open + 4, spanEnd - 1, scan.read, scan.sink);
   return spanEnd;
 }
 

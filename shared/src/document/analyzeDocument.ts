@@ -1,0 +1,71 @@
+/**
+ * One document version to its model: the species mentioned, the table records and the problems
+ * of the text itself. Linear in the length of the text and never throws.
+ */
+import { scanMarkdown } from "./scanMarkdown";
+import { scanProse } from "./scanProse";
+import { memoisedReader, type SpeciesReader } from "./speciesReader";
+import { readDelimitedRecords } from "./tables/delimitedRecords";
+import { readJsonRecords } from "./tables/json";
+import type { RecordSink } from "./tables/records";
+import { readYamlRecords } from "./tables/yaml";
+import type { DocumentKind, DocumentModel, Finding, SpeciesOccurrence } from "./types";
+
+/**
+ * Reads `text` as a document of `kind`: CSV/TSV as a header row and records, JSON/YAML as
+ * records, markdown as prose and tables, plain text as prose. Malformed JSON or YAML gives
+ * `problems` with ranges, not an exception.
+ */
+export function analyzeDocument(text: string, kind: DocumentKind, read: SpeciesReader = memoisedReader()): DocumentModel {
+  const sink: RecordSink = { occurrences: [], unreadable: [], records: [] };
+  let problems: readonly Finding[] = [];
+  try {
+    const source = typeof text === "string" ? text : "";
+    problems = readByKind(source, kind, read, sink);
+  } catch (error) {
+    // Every reader is written not to throw; this keeps a document usable if one still does.
+    problems = [
+      {
+        range: { start: 0, end: 0 },
+        severity: "error",
+        code: "document-unreadable",
+        message: `lonepair could not read this document: ${error instanceof Error ? error.message : String(error)}`,
+      },
+    ];
+  }
+  return {
+    kind,
+    occurrences: inDocumentOrder(sink.occurrences),
+    records: sink.records,
+    problems,
+    unreadable: [...sink.unreadable].sort((a, b) => a.range.start - b.range.start),
+  };
+}
+
+function readByKind(text: string, kind: DocumentKind, read: SpeciesReader, sink: RecordSink): readonly Finding[] {
+  switch (kind) {
+    case "csv":
+    case "tsv":
+      return readDelimitedRecords(text, kind, read, sink);
+    case "json":
+      return readJsonRecords(text, read, sink);
+    case "yaml":
+      return readYamlRecords(text, read, sink);
+    case "markdown":
+      scanMarkdown(text, read, sink);
+      return [];
+    default:
+      scanProse(text, 0, text.length, sink, read);
+      return [];
+  }
+}
+
+/** Sorted by start; scanners mostly emit in order already, so this is close to linear. */
+function inDocumentOrder(occurrences: SpeciesOccurrence[]): SpeciesOccurrence[] {
+  for (let index = 1; index < occurrences.length; index++) {
+    if (occurrences[index].range.start < occurrences[index - 1].range.start) {
+      return [...occurrences].sort((a, b) => a.range.start - b.range.start);
+    }
+  }
+  return occurrences;
+}

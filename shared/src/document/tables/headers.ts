@@ -1,0 +1,91 @@
+/**
+ * What a column holds, from its header as people write it: any case, spaces, underscores or
+ * hyphens, units in brackets or after a slash ("angle (deg)", "bond angle / °"), and the short
+ * forms of the trade (VE, LP, AXE).
+ */
+import type { ColumnMeaning } from "../types";
+
+/** Normalised header words -> meaning. Keys are lower case, single-spaced, without units. */
+const HEADERS: ReadonlyMap<string, ColumnMeaning> = new Map<string, ColumnMeaning>([
+  ...words("species", [
+    "formula", "species", "compound", "molecule", "ion", "chemical formula", "molecular formula",
+    "species formula", "formula of species", "chemical", "substance", "gas", "molecule formula",
+    "compound formula", "ion formula", "molecule or ion", "species or ion", "molecule ion", "formula ion",
+  ]),
+  ...words("name", ["name", "species name", "compound name", "chemical name", "common name", "iupac name", "molecule name", "ion name", "systematic name"]),
+  ...words("valenceElectrons", [
+    "valence electrons", "valence electron", "valence e", "valence electron count", "ve", "v e", "total valence electrons",
+    "number of valence electrons", "no of valence electrons", "valence electrons total", "total ve", "valence",
+    "val e", "val electrons", "electrons", "valence count", "n valence", "nve", "tve",
+  ]),
+  ...words("lonePairs", [
+    "lone pairs", "lone pair", "lp", "lps", "lone pairs on central atom", "lone pairs on the central atom",
+    "lone pairs on centre", "lone pairs on center", "central lone pairs", "lone pairs central atom",
+    "lone pairs central", "lone pairs centre", "lone pairs center", "central atom lone pairs",
+    "number of lone pairs", "no of lone pairs", "nonbonding pairs", "non bonding pairs", "unshared pairs",
+    "lone electron pairs", "e", "lone pairs on central", "lp on central atom", "lone pairs a",
+  ]),
+  ...words("axe", ["axe", "axe notation", "axe class", "axe formula", "vsepr notation", "vsepr class", "vsepr type", "axmen", "ax e"]),
+  ...words("electronGeometry", [
+    "electron geometry", "electron domain geometry", "electron pair geometry", "electronic geometry",
+    "electron group geometry", "electron arrangement", "electron pair arrangement", "domain geometry",
+    "eg", "e geometry", "electron domain arrangement", "electron shape", "parent geometry", "electron group arrangement",
+  ]),
+  ...words("molecularGeometry", [
+    "shape", "geometry", "molecular geometry", "molecular shape", "mg", "shape of molecule", "molecule shape",
+    "vsepr shape", "vsepr geometry", "molecular structure", "ion shape", "shape of ion", "predicted shape", "mol geometry",
+  ]),
+  ...words("bondAngle", [
+    "bond angle", "bond angles", "angle", "angles", "ideal angle", "ideal bond angle", "expected angle",
+    "predicted angle", "x a x angle", "bond angle range", "approx bond angle", "approximate bond angle", "measured angle",
+  ]),
+  ...words("hybridization", [
+    "hybridization", "hybridisation", "hybrid", "hybridization of central atom", "hybridisation of central atom",
+    "central atom hybridization", "central atom hybridisation", "orbital hybridization", "orbital hybridisation",
+    "hybrid orbitals", "hybridization central atom", "hybridisation central atom",
+  ]),
+  ...words("polarity", ["polar", "polarity", "is polar", "polar or nonpolar", "polar nonpolar", "polar y n", "dipole", "polar molecule", "molecular polarity"]),
+]);
+
+function words(meaning: ColumnMeaning, headers: readonly string[]): [string, ColumnMeaning][] {
+  return headers.map((header) => [header, meaning]);
+}
+
+/** Unit words that may trail a header without brackets: "angle deg", "bond angle degrees". */
+const TRAILING_UNITS = /\s+(?:deg|degs|degree|degrees|in degrees|count|no|number|y n|yes no)$/;
+
+/** The header reduced to plain lower-case words. */
+export function normalizeHeader(header: string): string {
+  return header
+    .toLowerCase()
+    .replace(/\u00b0/g, " deg ")
+    .replace(/[([{][^)\]}]*[)\]}]/g, " ") // "(deg)", "[°]", "(y/n)"
+    .replace(/\s\/\s.*$/, " ") // "bond angle / °"
+    .replace(/e[-\u2212\u207b]/g, "e ") // "valence e-"
+    .replace(/[_\-./\\:?#*|]+/g, " ")
+    .replace(/\bcentral\s+atom's\b/g, "central atom")
+    .replace(/\s+/g, " ")
+    .trim()
+    .replace(TRAILING_UNITS, "")
+    .trim();
+}
+
+/** What the column under `header` holds, or undefined for any other column (ids, lots, notes). */
+export function meaningOfHeader(header: string): ColumnMeaning | undefined {
+  const normalized = normalizeHeader(header);
+  const known = HEADERS.get(normalized) ?? HEADERS.get(normalized.replace(/^(?:the|predicted|expected|ideal|vsepr) /, ""));
+  if (known) return known;
+  // Longer headers that still say it plainly: "lone pairs (on N)", "hybridization of S".
+  if (/^lone pairs?\b/.test(normalized)) return "lonePairs";
+  if (/^hybridi[sz]ation\b/.test(normalized)) return "hybridization";
+  if (/^valence electrons?\b/.test(normalized)) return "valenceElectrons";
+  if (/^electron (?:domain |pair |group )?geometry\b/.test(normalized)) return "electronGeometry";
+  if (/^molecular (?:geometry|shape)\b/.test(normalized)) return "molecularGeometry";
+  if (/^bond angles?\b/.test(normalized)) return "bondAngle";
+  return undefined;
+}
+
+/** Headers that name a formula column, preferred over a "species" column that may hold names. */
+export function isFormulaHeader(header: string): boolean {
+  return /formula/.test(normalizeHeader(header));
+}

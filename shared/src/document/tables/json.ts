@@ -1,0 +1,97 @@
+/**
+ * JSON (and JSON with comments) documents: every object with a key that names a species column
+ * is a record; so is an object stored under a key that is itself a species ({"SF4": {...}}).
+ * Offsets come from jsonc-parser's syntax tree; syntax errors become problems with ranges.
+ */
+import { parseTree, printParseErrorCode, type Node, type ParseError } from "jsonc-parser";
+import type { SpeciesReader } from "../speciesReader";
+import type { Finding } from "../types";
+import { isFormulaHeader, meaningOfHeader } from "./headers";
+import { addRecord, type RecordField, type RecordSink } from "./records";
+
+const MESSAGES: Readonly<Record<string, string>> = {
+  InvalidSymbol: "Unexpected character.",
+  InvalidNumberFormat: "This number is not written the way JSON allows.",
+  PropertyNameExpected: "A property name in double quotes belongs here.",
+  ValueExpected: "A value belongs here.",
+  ColonExpected: "A colon belongs here.",
+  CommaExpected: "A comma belongs here.",
+  CloseBraceExpected: "A closing } belongs here.",
+  CloseBracketExpected: "A closing ] belongs here.",
+  EndOfFileExpected: "Nothing more belongs after the end of the JSON value.",
+  UnexpectedEndOfString: "This string is never closed.",
+  InvalidEscapeCharacter: "This escape is not allowed in a JSON string.",
+  InvalidCharacter: "This character is not allowed here.",
+};
+
+/** Reads a JSON document into `sink`; returns its syntax problems. */
+export function readJsonRecords(text: string, read: SpeciesReader, sink: RecordSink): readonly Finding[] {
+  const errors: ParseError[] = [];
+  let root: Node | undefined;
+  try {
+    root = parseTree(text, errors, { allowTrailingComma: true, disallowComments: false });
+  } catch {
+    // Nesting deep enough to exhaust the stack: say so rather than fail.
+    return [{ range: { start: 0, end: 0 }, severity: "error", code: "json-syntax", message: "This JSON is nested too deeply to read." }];
+  }
+  const problems = errors.map((error): Finding => {
+    const name = printParseErrorCode(error.error);
+    return {
+      range: { start: error.offset, end: error.offset + Math.max(error.length, 1) },
+      severity: "error",
+      code: "json-syntax",
+      message: MESSAGES[name] ?? `JSON syntax error (${name}).`,
+    };
+  });
+  if (root) walk(root, text, read, sink);
+  return problems;
+}
+
+/** Visits every object without recursion, so deep documents cannot exhaust the stack. */
+function walk(root: Node, text: string, read: SpeciesReader, sink: RecordSink): void {
+  const pending: Node[] = [root];
+  while (pending.length > 0) {
+    const node = pending.pop()!;
+    if (node.type === "object") objectRecord(node, text, read, sink);
+    const children = node.children ?? [];
+    for (let index = children.length - 1; index >= 0; index--) {
+      const child = children[index];
+      if (child.type === "property") {
+        const value = child.children?.[1];
+        if (value && (value.type === "object" || value.type === "array")) pending.push(value);
+      } else if (child.type === "object" || child.type === "array") pending.push(child);
+    }
+  }
+}
+
+function objectRecord(node: Node, text: string, read: SpeciesReader, sink: RecordSink): void {
+  const fields: RecordField[] = [];
+  for (const property of node.children ?? []) {
+    const [key, value] = property.children ?? [];
+    if (!key || !value || typeof key.value !== "string") continue;
+    const meaning = meaningOfHeader(key.value);
+    const field = meaning && valueField(value, text);
+    if (meaning && field) fields.push({ meaning, formulaHeader: isFormulaHeader(key.value), ...field });
+  }
+  if (fields.length === 0) return;
+  if (!fields.some((field) => field.meaning === "species" || field.meaning === "name")) {
+    // {"SF4": {"lone pairs": 1}}: the key the object sits under names the species.
+    const key = node.parent?.type === "property" ? node.parent.children?.[0] : undefined;
+    if (!key || typeof key.value !== "string" || !read(key.value).ok) return;
+    fields.unshift({ meaning: "species", formulaHeader: true, ...stringField(key) });
+  }
+  addRecord(fields, read, sink);
+}
+
+function valueField(value: Node, text: string): { text: string; range: { start: number; end: number } } | undefined {
+  if (value.type === "string") return stringField(value);
+  if (value.type === "number" || value.type === "boolean") {
+    return { text: text.slice(value.offset, value.offset + value.length), range: { start: value.offset, end: value.offset + value.length } };
+  }
+  return undefined;
+}
+
+/** A string's value and the range inside its quotes. */
+function stringField(node: Node): { text: string; range: { start: number; end: number } } {
+  return { text: String(node.value), range: { start: node.offset + 1, end: node.offset + node.length - 1 } };
+}

@@ -1,0 +1,78 @@
+/**
+ * Turns the recognised fields of one row or object into a TableRecord: which field names the
+ * species (a formula, or failing that a name) and which cells the checks can compare.
+ */
+import type { TextRange } from "../../chemistry/types";
+import { occurrenceAt, unreadableAt, type ScanSink, type SpeciesReader } from "../speciesReader";
+import type { ColumnMeaning, SpeciesOccurrence, TableCell, TableRecord, UnreadableSpecies } from "../types";
+
+/** A value in a row or object, with the header or key it sits under. */
+export interface RecordField {
+  readonly meaning: ColumnMeaning;
+  /** Written under a header that says "formula": preferred as the record's species. */
+  readonly formulaHeader: boolean;
+  readonly text: string;
+  readonly range: TextRange;
+}
+
+/** Where records and the species they name are collected while a table is read. */
+export interface RecordSink extends ScanSink {
+  readonly records: TableRecord[];
+}
+
+/** The field's value without surrounding whitespace, and the matching narrower range. */
+export function trimmedField<T extends { text: string; range: TextRange }>(field: T): T {
+  const { text, range } = field;
+  const leading = text.length - text.trimStart().length;
+  const trimmed = text.trim();
+  if (trimmed.length === text.length) return field;
+  // Escapes make the written range longer than the value; only move the range when they agree.
+  if (range.end - range.start !== text.length) return { ...field, text: trimmed };
+  const start = range.start + leading;
+  return { ...field, text: trimmed, range: { start, end: start + trimmed.length } };
+}
+
+/** Markdown emphasis or code ticks around a whole cell: **SF4**, `SF4`, _SF4_. */
+function unwrapped(field: RecordField): RecordField {
+  const match = /^(\*\*|__|\*|_|`)(.+)\1$/.exec(field.text);
+  if (!match) return field;
+  const inner = match[2];
+  const start = field.range.start + match[1].length;
+  return field.range.end - field.range.start === field.text.length
+    ? { ...field, text: inner, range: { start, end: start + inner.length } }
+    : { ...field, text: inner };
+}
+
+/** Adds the record for `fields` (if any field names a species) to `sink`. */
+export function addRecord(fields: readonly RecordField[], read: SpeciesReader, sink: RecordSink): void {
+  const present = fields.map(trimmedField).filter((field) => field.text.length > 0);
+  const naming = present
+    .filter((field) => field.meaning === "species" || field.meaning === "name")
+    .map(unwrapped)
+    // Formula columns first, then other species columns, then names.
+    .sort((a, b) => rank(a) - rank(b));
+  if (naming.length === 0) return;
+  const found: SpeciesOccurrence[] = [];
+  const failed: UnreadableSpecies[] = [];
+  for (const field of naming) {
+    const result = read(field.text);
+    if (result.ok) found.push(occurrenceAt(result.value, field.text, field.range.start));
+    else if (field.meaning === "species") failed.push(unreadableAt(field.text, field.range.start, result));
+  }
+  for (const occurrence of found) sink.occurrences.push(occurrence);
+  // A name the reader does not know is no mistake when another column names the species; a
+  // formula it cannot read always is.
+  for (const unreadable of failed) {
+    if (unreadable.problem.code !== "unknown-name" || found.length === 0) sink.unreadable.push(unreadable);
+  }
+  if (found.length === 0) return;
+  const cells: TableCell[] = present
+    .filter((field) => field.meaning !== "species" && field.meaning !== "name")
+    .map((field) => ({ meaning: field.meaning, range: field.range, text: field.text }));
+  sink.records.push({ species: found[0], cells });
+}
+
+function rank(field: RecordField): number {
+  if (field.meaning === "species") return field.formulaHeader ? 0 : 1;
+  return 2;
+}

@@ -1,0 +1,99 @@
+/**
+ * YAML documents: every mapping with a key that names a species column is a record; so is a
+ * mapping stored under a key that is itself a species (`SF4: {lone pairs: 1}`). Ranges come from
+ * the `yaml` package's node ranges; syntax errors become problems. Aliases are not followed, so
+ * an alias bomb costs nothing.
+ */
+import { isMap, isPair, isScalar, isSeq, parseAllDocuments, Scalar, type Node, type Pair, type YAMLMap } from "yaml";
+import type { SpeciesReader } from "../speciesReader";
+import type { Finding } from "../types";
+import { isFormulaHeader, meaningOfHeader } from "./headers";
+import { addRecord, type RecordField, type RecordSink } from "./records";
+
+/** Reads a YAML stream (one or more documents) into `sink`; returns its syntax problems. */
+export function readYamlRecords(text: string, read: SpeciesReader, sink: RecordSink): readonly Finding[] {
+  const problems: Finding[] = [];
+  let documents;
+  try {
+    documents = parseAllDocuments(text, { prettyErrors: false, keepSourceTokens: false });
+  } catch {
+    return [{ range: { start: 0, end: 0 }, severity: "error", code: "yaml-syntax", message: "This YAML could not be read." }];
+  }
+  const list = Array.isArray(documents) ? documents : [];
+  for (const document of list) {
+    for (const error of document.errors) {
+      problems.push({
+        range: { start: error.pos[0], end: Math.max(error.pos[1], error.pos[0] + 1) },
+        severity: "error",
+        code: "yaml-syntax",
+        message: firstLine(error.message),
+      });
+    }
+    if (document.contents) walk(document.contents as Node, text, read, sink);
+  }
+  return problems;
+}
+
+function firstLine(message: string): string {
+  const line = message.split("\n")[0].trim();
+  return line.length > 0 ? line : "YAML syntax error.";
+}
+
+interface Pending {
+  readonly node: Node;
+  /** The key this node is the value of, when it sits in a mapping. */
+  readonly key?: Scalar;
+}
+
+/** Visits every mapping without recursion, so deep documents cannot exhaust the stack. */
+function walk(root: Node, text: string, read: SpeciesReader, sink: RecordSink): void {
+  const pending: Pending[] = [{ node: root }];
+  while (pending.length > 0) {
+    const { node, key } = pending.pop()!;
+    if (isMap(node)) {
+      mappingRecord(node, key, text, read, sink);
+      for (let index = node.items.length - 1; index >= 0; index--) {
+        const pair = node.items[index];
+        if (!isPair(pair)) continue;
+        const value = pair.value as Node | null;
+        if (value && (isMap(value) || isSeq(value))) pending.push({ node: value, key: isScalar(pair.key) ? pair.key : undefined });
+      }
+    } else if (isSeq(node)) {
+      for (let index = node.items.length - 1; index >= 0; index--) {
+        const item = node.items[index] as Node | null;
+        if (item && (isMap(item) || isSeq(item))) pending.push({ node: item });
+      }
+    }
+  }
+}
+
+function mappingRecord(node: YAMLMap, key: Scalar | undefined, text: string, read: SpeciesReader, sink: RecordSink): void {
+  const fields: RecordField[] = [];
+  for (const pair of node.items as Pair[]) {
+    if (!isScalar(pair.key) || !isScalar(pair.value)) continue;
+    const header = String(pair.key.value);
+    const meaning = meaningOfHeader(header);
+    const field = meaning && scalarField(pair.value, text);
+    if (meaning && field) fields.push({ meaning, formulaHeader: isFormulaHeader(header), ...field });
+  }
+  if (fields.length === 0) return;
+  if (!fields.some((field) => field.meaning === "species" || field.meaning === "name")) {
+    // SF4: {lone pairs: 1}: the key the mapping sits under names the species.
+    const keyField = key && scalarField(key, text);
+    if (!keyField || !read(keyField.text).ok) return;
+    fields.unshift({ meaning: "species", formulaHeader: true, ...keyField });
+  }
+  addRecord(fields, read, sink);
+}
+
+/** A scalar's written value and the range of its characters (inside quotes when quoted). */
+function scalarField(scalar: Scalar, text: string): { text: string; range: { start: number; end: number } } | undefined {
+  const range = scalar.range;
+  if (!range || scalar.value === null || scalar.value === undefined) return undefined;
+  const [start, valueEnd] = range;
+  if (scalar.type === Scalar.QUOTE_DOUBLE || scalar.type === Scalar.QUOTE_SINGLE) {
+    return { text: String(scalar.value), range: { start: start + 1, end: valueEnd - 1 } };
+  }
+  if (scalar.type === Scalar.BLOCK_FOLDED || scalar.type === Scalar.BLOCK_LITERAL) return undefined;
+  return { text: text.slice(start, valueEnd), range: { start, end: valueEnd } };
+}
