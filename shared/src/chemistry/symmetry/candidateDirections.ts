@@ -61,16 +61,16 @@ export function candidateAxes(molecule: CentredMolecule, tolerance: number): Can
     .sort((a, b) => a.length - b.length);
   const smallest = offCentre[0] ?? [];
   const positions = smallest.map((index) => molecule.atoms[index].position);
+  const sides = positions.map((from) => positions.map((to) => distance(from, to)));
   for (let apex = 0; apex < positions.length; apex++) {
+    const fromApex = sides[apex];
     for (let first = 0; first < positions.length; first++) {
       if (first === apex) continue;
-      const firstSide = distance(positions[apex], positions[first]);
       for (let second = first + 1; second < positions.length; second++) {
-        if (second === apex) continue;
-        if (Math.abs(distance(positions[apex], positions[second]) - firstSide) > 2 * tolerance) continue;
+        if (second === apex || Math.abs(fromApex[second] - fromApex[first]) > 2 * tolerance) continue;
         const normal = cross(sub(positions[first], positions[apex]), sub(positions[second], positions[apex]));
         // Scaled by 1/side so that the strength is a length, comparable with the other sources.
-        collector.add(scale(normal, 1 / Math.max(firstSide, tolerance)));
+        collector.add(scale(normal, 1 / Math.max(fromApex[first], tolerance)));
       }
     }
   }

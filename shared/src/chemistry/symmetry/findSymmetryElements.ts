@@ -80,6 +80,7 @@ interface Rotation {
  * moves every off-axis atom through a ring of exactly n.
  */
 function highestRotation(molecule: MatchableMolecule, axis: Vec3, tolerance: number): Rotation | undefined {
+  if (!firstAtomsHaveRingPartners(molecule, axis, 2 * tolerance)) return undefined;
   const ringSizeDivisor = ringSizeCommonDivisor(molecule, axis, 2 * tolerance);
   for (let order = ringSizeDivisor; order >= 2; order--) {
     if (ringSizeDivisor % order !== 0) continue;
@@ -115,6 +116,29 @@ function inversePermutation(permutation: readonly number[]): number[] {
 
 function samePermutation(a: readonly number[], b: readonly number[]): boolean {
   return a.length === b.length && a.every((image, index) => image === b[index]);
+}
+
+/**
+ * Quick rejection before the full ring count: a few off-axis atoms must each have another atom of
+ * their element at the same height and distance from the axis. Most candidates fail here.
+ */
+function firstAtomsHaveRingPartners(molecule: MatchableMolecule, axis: Vec3, ringTolerance: number): boolean {
+  const atoms = molecule.atoms;
+  let checked = 0;
+  for (let i = 0; i < atoms.length && checked < 3; i++) {
+    const height = dot(atoms[i].position, axis);
+    const radius = Math.sqrt(Math.max(0, dot(atoms[i].position, atoms[i].position) - height * height));
+    if (radius <= ringTolerance) continue;
+    checked++;
+    const hasPartner = molecule.indicesByElement[atoms[i].elementId].some((j) => {
+      if (j === i) return false;
+      const otherHeight = dot(atoms[j].position, axis);
+      const otherRadius = Math.sqrt(Math.max(0, dot(atoms[j].position, atoms[j].position) - otherHeight * otherHeight));
+      return Math.abs(otherHeight - height) <= ringTolerance && Math.abs(otherRadius - radius) <= ringTolerance;
+    });
+    if (!hasPartner) return false;
+  }
+  return true;
 }
 
 /**
