@@ -5,7 +5,7 @@ import { atomTraits } from "../lewis/electronBookkeeping";
 import { add, norm, type Vec3 } from "../geometry/vectors";
 import type { CentreAnalysis, MolecularGraph } from "../types";
 import { assignSites, type Ligand, type SiteAssignment } from "./assignSites";
-import { expectedAngles, idealAnglesOf } from "./expectedAngles";
+import { expectedAngles, idealAnglesFor, type AngleContext } from "./expectedAngles";
 import {
   axeNotation,
   ELECTRON_GEOMETRY_BY_STERIC_NUMBER,
@@ -52,6 +52,21 @@ export function analyzeCentre(graph: MolecularGraph, index: number, radical: boo
   const loneSum = sites.lonePairDirections.reduce<Vec3>((sum, d) => add(sum, d), [0, 0, 0]);
   const hybridization = HYBRIDIZATION_BY_STERIC_NUMBER[stericNumber];
 
+  const angleContext: AngleContext = {
+    electronGeometry,
+    stericNumber,
+    loneDomains,
+    lonePairsBalanced: loneDomains > 0 && norm(loneSum) < 1e-9 && atom.unpairedElectrons === 0,
+    centrePeriod: traits.element.period,
+    identicalNeighbours,
+    hasMultipleBond: ligands.some((l) => l.bondOrder > 1),
+    multipleBondCount: ligands.filter((l) => l.bondOrder > 1).length,
+    bulkyNeighbours: ligands.some((l) => atomTraits(l.symbol).element.period > traits.element.period),
+    radical,
+    ligandDirections: sites.ligandDirections,
+    ligandSiteKinds: sites.ligandSiteKinds,
+  };
+
   const centre: CentreAnalysis = {
     index,
     atom: atom.symbol,
@@ -62,21 +77,8 @@ export function analyzeCentre(graph: MolecularGraph, index: number, radical: boo
     unpairedElectrons: atom.unpairedElectrons,
     electronGeometry,
     molecularGeometry,
-    idealAngles: idealAnglesOf(sites.ligandDirections),
-    expectedAngles: expectedAngles({
-      electronGeometry,
-      stericNumber,
-      loneDomains,
-      lonePairsBalanced: loneDomains > 0 && norm(loneSum) < 1e-9 && atom.unpairedElectrons === 0,
-      centrePeriod: traits.element.period,
-      identicalNeighbours,
-      hasMultipleBond: ligands.some((l) => l.bondOrder > 1),
-      multipleBondCount: ligands.filter((l) => l.bondOrder > 1).length,
-      bulkyNeighbours: ligands.some((l) => atomTraits(l.symbol).element.period > traits.element.period),
-      radical,
-      ligandDirections: sites.ligandDirections,
-      ligandSiteKinds: sites.ligandSiteKinds,
-    }),
+    idealAngles: idealAnglesFor(angleContext),
+    expectedAngles: expectedAngles(angleContext),
     hybridization,
     ...(stericNumber >= 5 ? { hybridizationNote: EXPANDED_NOTE } : {}),
   };

@@ -29,15 +29,6 @@ export interface AngleContext {
 
 const round1 = (value: number) => Math.round(value * 10) / 10;
 
-/** Distinct ideal angles between bonded neighbours, ascending. */
-export function idealAnglesOf(directions: readonly Vec3[]): number[] {
-  const angles = new Set<number>();
-  for (let i = 0; i < directions.length; i++) {
-    for (let j = i + 1; j < directions.length; j++) angles.add(round1(angleDegrees(directions[i], directions[j])));
-  }
-  return [...angles].sort((a, b) => a - b);
-}
-
 function pairLabel(context: AngleContext, i: number, j: number, ideal: number): string | undefined {
   const g = context.electronGeometry;
   if (g === "trigonal bipyramidal" || g === "pentagonal bipyramidal") {
@@ -49,18 +40,43 @@ function pairLabel(context: AngleContext, i: number, j: number, ideal: number): 
 }
 
 export function expectedAngles(context: AngleContext): AngleExpectation[] {
-  const groups = new Map<string, { ideal: number; between?: string }>();
+  return angleGroups(context).map(({ ideal, between }) => ({
+    ...rangeFor(context, ideal, between),
+    ideal,
+    ...(between ? { between } : {}),
+  }));
+}
+
+interface AngleGroup {
+  readonly ideal: number;
+  readonly between?: string;
+}
+
+// The set of bonded sites depends only on the electron geometry and the number of lone-pair
+// domains, so the kinds of angle a centre has are worked out once per pair of those.
+const angleGroupCache = new Map<string, readonly AngleGroup[]>();
+
+function angleGroups(context: AngleContext): readonly AngleGroup[] {
+  const key = `${context.electronGeometry}|${context.loneDomains}`;
+  const cached = angleGroupCache.get(key);
+  if (cached) return cached;
+  const groups = new Map<string, AngleGroup>();
   const directions = context.ligandDirections;
   for (let i = 0; i < directions.length; i++) {
     for (let j = i + 1; j < directions.length; j++) {
       const ideal = round1(angleDegrees(directions[i], directions[j]));
       const between = pairLabel(context, i, j, ideal);
-      groups.set(`${ideal}|${between ?? ""}`, { ideal, between });
+      groups.set(`${ideal}|${between ?? ""}`, between ? { ideal, between } : { ideal });
     }
   }
-  return [...groups.values()]
-    .sort((a, b) => a.ideal - b.ideal)
-    .map(({ ideal, between }) => ({ ...rangeFor(context, ideal, between), ideal, ...(between ? { between } : {}) }));
+  const sorted = [...groups.values()].sort((a, b) => a.ideal - b.ideal);
+  angleGroupCache.set(key, sorted);
+  return sorted;
+}
+
+/** Distinct ideal angles of a centre, ascending, from its cached angle groups. */
+export function idealAnglesFor(context: AngleContext): number[] {
+  return [...new Set(angleGroups(context).map((group) => group.ideal))];
 }
 
 function rangeFor(
