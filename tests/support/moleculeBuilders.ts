@@ -4,7 +4,7 @@
  * Bond lengths are rounded textbook values in ångströms; symmetry does not depend on them.
  */
 import { idealDirections, lonePairSiteOrder } from "../../shared/src/chemistry/geometry/idealDirections";
-import { add, cross, dot, normalize, scale, type Vec3 } from "../../shared/src/chemistry/geometry/vectors";
+import { add, cross, normalize, scale, type Vec3 } from "../../shared/src/chemistry/geometry/vectors";
 import type { ElectronGeometry } from "../../shared/src/chemistry/types";
 
 export interface Atom {
@@ -323,14 +323,4 @@ export function orthocarbonicAcidS4(): Atom[] {
     hydrogen = s4(hydrogen);
   }
   return atoms;
-}
-
-/** Checks used by builders' callers: the smallest interatomic distance. */
-export function shortestDistance(atoms: readonly Atom[]): number {
-  let shortest = Infinity;
-  for (let i = 0; i < atoms.length; i++) for (let j = i + 1; j < atoms.length; j++) {
-    const d = atoms[i].position.map((value, k) => value - atoms[j].position[k]);
-    shortest = Math.min(shortest, Math.sqrt(dot(d as unknown as Vec3, d as unknown as Vec3)));
-  }
-  return shortest;
 }
