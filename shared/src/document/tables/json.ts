@@ -3,7 +3,9 @@
  * is a record; so is an object stored under a key that is itself a species ({"SF4": {...}}).
  * Offsets come from jsonc-parser's syntax tree; syntax errors become problems with ranges.
  */
-import { parseTree, printParseErrorCode, type Node, type ParseError } from "jsonc-parser";
+// The ES module build: the package's default UMD build loads its parts with a dynamic require
+// that bundlers cannot follow.
+import { parseTree, printParseErrorCode, type Node, type ParseError } from "jsonc-parser/lib/esm/main.js";
 import type { SpeciesReader } from "../speciesReader";
 import type { Finding } from "../types";
 import { isFormulaHeader, meaningOfHeader } from "./headers";

@@ -1,0 +1,32 @@
+/**
+ * Bond angles as tables write them: "104.5", "104.5°", "~107", "≈ 107 deg", "<109.5", "90, 120",
+ * "90/180", "102-104".
+ */
+
+export type AngleRelation = "equal" | "about" | "below" | "above";
+
+export interface WrittenAngles {
+  readonly degrees: readonly number[];
+  readonly relation: AngleRelation;
+}
+
+/** The angles in a cell and how they are stated, or undefined when it holds no angle. */
+export function parseAngles(cell: string): WrittenAngles | undefined {
+  const plain = cell.trim().toLowerCase();
+  const numbers = [...plain.matchAll(/\d+(?:\.\d+)?/g)].map((match) => Number(match[0]));
+  if (numbers.length === 0 || numbers.some((value) => value > 360)) return undefined;
+  // Anything but numbers, separators, degree marks and relation words: not a plain angle.
+  if (/[a-z]/.test(plain.replace(/deg(?:rees?)?|ca\.?|about|approx\.?|approximately|less than|under|slightly|and/g, ""))) return undefined;
+  let relation: AngleRelation = "equal";
+  if (/^(?:<|≤|less than|under|slightly less)/.test(plain)) relation = "below";
+  else if (/^(?:>|≥)/.test(plain)) relation = "above";
+  else if (/^(?:~|≈|ca|about|approx)/.test(plain)) relation = "about";
+  return { degrees: numbers, relation };
+}
+
+/** A computed angle written like `cell`: with its degree sign and "~" when the cell has them. */
+export function angleInStyleOf(degrees: number, cell: string): string {
+  const prefix = /^\s*[~≈]/.test(cell) ? cell.trim()[0] : "";
+  const suffix = cell.includes("\u00b0") ? "\u00b0" : /deg/i.test(cell) ? " deg" : "";
+  return `${prefix}${degrees}${suffix}`;
+}

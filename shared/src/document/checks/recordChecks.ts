@@ -1,0 +1,145 @@
+/**
+ * Compares the cells of one table record with what the core works out for its species, and
+ * proposes the computed value, written in the cell's own style, where they disagree.
+ */
+import type { CentreAnalysis, SpeciesAnalysis } from "../../chemistry/types";
+import type { Finding, TableCell, TableRecord } from "../types";
+import { angleInStyleOf, parseAngles } from "./angleText";
+import { axeInStyleOf, parseAxe } from "./axeText";
+import { computedGeometry, normalizeGeometry } from "./geometryText";
+import { hybridizationInStyleOf, normalizeHybridization } from "./hybridizationText";
+import { parsePolarity, polarityInStyleOf } from "./polarityText";
+import { inStyleOf } from "./textStyle";
+
+const MODEL = "(VSEPR model prediction)";
+
+/** Every disagreement between `record`'s cells and `analysis`. */
+export function checkRecord(record: TableRecord, analysis: SpeciesAnalysis): Finding[] {
+  const findings: Finding[] = [];
+  const species = record.species.text;
+  const centre = analysis.centres[0];
+  for (const cell of record.cells) {
+    const finding = checkCell(cell, species, analysis, centre);
+    if (finding) findings.push(finding);
+  }
+  return findings;
+}
+
+function checkCell(cell: TableCell, species: string, analysis: SpeciesAnalysis, centre: CentreAnalysis | undefined): Finding | undefined {
+  switch (cell.meaning) {
+    case "valenceElectrons":
+      return checkCount(cell, analysis.valenceElectrons, "table-valence-electrons", (value) => `Valence electrons for ${species} are ${value}, the table says ${cell.text}.`);
+    case "lonePairs":
+      return centre && checkCount(cell, centre.lonePairs, "table-lone-pairs", (value) =>
+        `Lone pairs on the central ${centre.atom} of ${species}: ${value} ${MODEL}, the table says ${cell.text}.`);
+    case "axe":
+      return centre && checkAxe(cell, species, centre);
+    case "electronGeometry":
+      return centre && checkGeometry(cell, centre.electronGeometry, "table-electron-geometry", `Electron geometry of ${species}`);
+    case "molecularGeometry": {
+      const geometry = centre?.molecularGeometry ?? (atomCount(analysis) === 2 ? "linear" : undefined);
+      return geometry && checkGeometry(cell, geometry, "table-molecular-geometry", `Molecular geometry of ${species}`);
+    }
+    case "hybridization":
+      return centre && checkHybridization(cell, species, centre);
+    case "polarity":
+      return checkPolarity(cell, species, analysis);
+    case "bondAngle":
+      return centre && checkAngle(cell, species, analysis, centre);
+    default:
+      return undefined;
+  }
+}
+
+function atomCount(analysis: SpeciesAnalysis): number {
+  return analysis.reading.composition.reduce((sum, part) => sum + part.count, 0);
+}
+
+function mismatch(cell: TableCell, code: string, message: string, newText: string): Finding {
+  return {
+    range: cell.range,
+    severity: "warning",
+    code,
+    message,
+    fix: { range: cell.range, newText, title: `Change to ${newText}` },
+  };
+}
+
+function checkCount(cell: TableCell, computed: number, code: string, message: (value: number) => string): Finding | undefined {
+  const match = /^(\d+)\s*(?:e-?|e\u207b|electrons?|pairs?|lps?)?$/i.exec(cell.text.trim());
+  if (!match || Number(match[1]) === computed) return undefined;
+  return mismatch(cell, code, message(computed), cell.text.trim().replace(match[1], String(computed)));
+}
+
+function checkAxe(cell: TableCell, species: string, centre: CentreAnalysis): Finding | undefined {
+  const written = parseAxe(cell.text);
+  const computed = parseAxe(centre.axe);
+  if (!written || !computed) return undefined;
+  if (written.bonded === computed.bonded && written.lonePairs === computed.lonePairs) return undefined;
+  const newText = axeInStyleOf(computed, cell.text);
+  return mismatch(cell, "table-axe", `AXE class of ${species} is ${centre.axe} ${MODEL}, the table says ${cell.text}.`, newText);
+}
+
+function checkGeometry(cell: TableCell, computed: string, code: string, subject: string): Finding | undefined {
+  const written = normalizeGeometry(cell.text);
+  if (written === undefined || !/[a-z]/.test(written) || written === computedGeometry(computed)) return undefined;
+  return mismatch(cell, code, `${subject} is ${computed} ${MODEL}, the table says ${cell.text}.`, inStyleOf(computed, cell.text));
+}
+
+function checkHybridization(cell: TableCell, species: string, centre: CentreAnalysis): Finding | undefined {
+  const written = normalizeHybridization(cell.text);
+  if (written === undefined || written === centre.hybridization) return undefined;
+  return mismatch(
+    cell,
+    "table-hybridization",
+    `Hybridization of the central ${centre.atom} in ${species} is ${centre.hybridization} (a model description), the table says ${cell.text}.`,
+    hybridizationInStyleOf(centre.hybridization, cell.text),
+  );
+}
+
+function checkPolarity(cell: TableCell, species: string, analysis: SpeciesAnalysis): Finding | undefined {
+  const written = parsePolarity(cell.text);
+  const polar = analysis.polarity.polar;
+  if (written === undefined || written === polar) return undefined;
+  return mismatch(
+    cell,
+    "table-polarity",
+    `${species} is ${polar ? "polar" : "nonpolar"} by the model (${analysis.polarity.reason}), the table says ${cell.text}.`,
+    polarityInStyleOf(polar, cell.text),
+  );
+}
+
+/** How far a written angle may sit outside the expected range before it is called wrong. */
+const TOLERANCE = 1;
+
+function checkAngle(cell: TableCell, species: string, analysis: SpeciesAnalysis, centre: CentreAnalysis): Finding | undefined {
+  const written = parseAngles(cell.text);
+  const expected = centre.expectedAngles;
+  if (!written || expected.length === 0) return undefined;
+  const slack = written.relation === "about" ? TOLERANCE * 2 : TOLERANCE;
+  const fits = (degrees: number): boolean => {
+    switch (written.relation) {
+      case "below":
+        return expected.some((range) => range.min < degrees);
+      case "above":
+        return expected.some((range) => range.max > degrees);
+      default:
+        return (
+          expected.some((range) => degrees >= range.min - slack && degrees <= range.max + slack) ||
+          centre.idealAngles.some((ideal) => Math.abs(ideal - degrees) <= slack) ||
+          analysis.measuredAngles.some((measured) => Math.abs(measured.degrees - degrees) <= slack)
+        );
+    }
+  };
+  if (written.degrees.every(fits)) return undefined;
+  const description = expected
+    .map((range) => {
+      const span = range.min === range.max ? `${range.ideal}°` : `${range.min}–${range.max}°`;
+      return range.between ? `${span} (${range.between})` : span;
+    })
+    .join(", ");
+  const message = `Bond angle for ${species}: expected ${description} ${MODEL}, the table says ${cell.text}.`;
+  if (expected.length !== 1) return { range: cell.range, severity: "warning", code: "table-bond-angle", message };
+  const measured = analysis.measuredAngles.length === 1 ? analysis.measuredAngles[0].degrees : undefined;
+  return mismatch(cell, "table-bond-angle", message, angleInStyleOf(measured ?? expected[0].ideal, cell.text));
+}
