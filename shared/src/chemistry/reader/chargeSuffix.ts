@@ -2,6 +2,7 @@
  * Finds the charge written at the end of a formula, in every spelling people use: NH4+, NH4^+,
  * SO4^2-, SO4 2-, SO4(2-), SO4^{2-}, [PO4]3-, SO4--, SO₄²⁻, Fe2+.
  */
+import { elementBySymbol } from "../elements";
 import type { Problem } from "../types";
 import {
   asciiDigitValue,
@@ -12,6 +13,7 @@ import {
   superscriptDigitValue,
 } from "./characters";
 import { chargeText } from "./chargeText";
+import { NONMETALS } from "./nonmetals";
 import { problemAt } from "./problem";
 
 /** Where the formula body ends and what charge follows it. */
@@ -157,8 +159,8 @@ function signEndedCharge(text: string, start: number, end: number): ChargeSuffix
   if (previous === CARET || isSpace(previous) || previous === 0x5d) return finishCharge(text, start, digitStart, end);
   const digitCount = signStart - digitStart;
   const signCount = end - signStart;
-  // "Fe2+", "O2-": a lone element with one digit and one sign is a monatomic ion.
-  if (digitCount === 1 && signCount === 1 && isLoneElement(text, start, digitStart)) {
+  // "Fe2+", "Cu2+": a lone metal with one digit and one sign is a monatomic ion.
+  if (digitCount === 1 && signCount === 1 && isLoneMetal(text, start, digitStart)) {
     return finishCharge(text, start, digitStart, end);
   }
   const lastDigit = text.charCodeAt(signStart - 1);
@@ -192,10 +194,14 @@ function finishCharge(text: string, start: number, chargeStart: number, end: num
   return charged(bodyEnd, value);
 }
 
-/** True when `text[start, end)` is one element symbol other than hydrogen (H2+ is a molecule). */
-function isLoneElement(text: string, start: number, end: number): boolean {
+/**
+ * True when `text[start, end)` is one metal symbol. Only metals: "Fe2+" is iron(2+), but "N3-" and
+ * "I3-" are azide and triiodide, as digits after a nonmetal are counts.
+ */
+function isLoneMetal(text: string, start: number, end: number): boolean {
   const length = end - start;
   if (length < 1 || length > 2 || !isUpperLetter(text.charCodeAt(start))) return false;
   if (length === 2 && !isLowerLetter(text.charCodeAt(start + 1))) return false;
-  return !(length === 1 && text.charCodeAt(start) === 0x48);
+  const symbol = text.slice(start, end);
+  return elementBySymbol(symbol) !== undefined && !NONMETALS.has(symbol);
 }

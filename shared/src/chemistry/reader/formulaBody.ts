@@ -103,7 +103,7 @@ function scan(text: string, start: number, end: number): FormulaBody {
     }
     if (isCloseBracket(code)) {
       if (frame.kind !== "bracket") {
-        fail("malformed-formula", "This closing bracket has no opening bracket.", i, i + 1);
+        fail("unbalanced-brackets", "This closing bracket has no opening bracket.", i, i + 1);
       }
       if (closingFor(frame.openCode) !== code) {
         fail("unbalanced-brackets", "This bracket closes a different kind of bracket.", frame.openAt, i + 1);

@@ -7,15 +7,10 @@
  */
 import { elementByName, elementBySymbol } from "../../elements";
 import type { ElementData, FormulaPart } from "../../types";
+import { NONMETALS } from "../nonmetals";
 import { anionRootByName, anionRootBySymbol } from "./anionRoots";
 import { joinPrefix, prefixFor, prefixReadings } from "./greekPrefixes";
 import { ionByName } from "./ionNames";
-
-/** Nonmetals and metalloids: the elements that form binary covalent compounds named with prefixes. */
-const COVALENT_FORMERS: ReadonlySet<string> = new Set([
-  "H", "He", "B", "C", "N", "O", "F", "Ne", "Si", "P", "S", "Cl", "Ar",
-  "Ge", "As", "Se", "Br", "Kr", "Sb", "Te", "I", "Xe", "At", "Rn",
-]);
 
 const ROMAN_NUMERALS: readonly string[] = ["i", "ii", "iii", "iv", "v", "vi", "vii", "viii"];
 
@@ -47,7 +42,7 @@ export function formulaForCompoundName(words: readonly string[]): string | undef
   if (element.symbol === "H" && anion.singleElement) return part("H", -anionCharge) + anion.body;
   const usual = usualCationCharge(element);
   if (usual !== undefined) return balanced(cation, usual, anion, anionCharge);
-  if (COVALENT_FORMERS.has(element.symbol) && anion.singleElement) return cation.body + anion.body;
+  if (NONMETALS.has(element.symbol) && anion.singleElement) return cation.body + anion.body;
   return undefined;
 }
 
@@ -69,7 +64,7 @@ export function binaryCovalentName(sequence: readonly FormulaPart[], charge: num
     return fits ? `${firstElement.name} ${anion.root}` : undefined;
   }
   // hydrides of nonmetals go by parent-hydride names (methane, silane), never "carbon tetrahydride"
-  if (!COVALENT_FORMERS.has(first.symbol) || second.symbol === "H") return undefined;
+  if (!NONMETALS.has(first.symbol) || second.symbol === "H") return undefined;
   const firstPrefix = first.count === 1 ? "" : prefixFor(first.count);
   const secondPrefix = prefixFor(second.count);
   if (firstPrefix === undefined || secondPrefix === undefined) return undefined;
