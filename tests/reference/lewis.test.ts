@@ -7,10 +7,12 @@ import {
   FULL_OCTETS,
   HUB_FORMAL_CHARGES,
   ION_SHAPES,
+  MOLECULE_SHAPES,
   MULTI_CENTRE,
   PENDING_MULTI_CENTRE,
   NAMES,
   NOT_RADICALS,
+  NOTATIONS,
   NO_EXPANDED_OCTET,
   RADICALS,
   RESONANCE_FORMS,
@@ -163,8 +165,8 @@ describe("expanded octets", () => {
   });
 });
 
-describe("ions", () => {
-  it.each(ION_SHAPES)("$species: $centre is $axe, $molecularGeometry", ({ species, centre, axe, molecularGeometry }) => {
+describe("ions and other centres", () => {
+  it.each([...ION_SHAPES, ...MOLECULE_SHAPES])("$species: $centre is $axe, $molecularGeometry", ({ species, centre, axe, molecularGeometry }) => {
     const found = centreOf(analysisOf(species), centre);
     expect({ axe: found.axe, molecularGeometry: found.molecularGeometry }, species).toEqual({ axe, molecularGeometry });
   });
@@ -178,7 +180,7 @@ describe("several centres, H on O", () => {
     expect(got, `${species}: ${describeGraph(analysis)}`).toEqual(want);
   });
   // Condensed formulas with a carbon chain need the structural-formula builder.
-  it.todo.each(PENDING_MULTI_CENTRE)("%s per-atom centres from the condensed formula");
+  for (const species of PENDING_MULTI_CENTRE) it.todo(`${species} per-atom centres from the condensed formula`);
 });
 
 describe("names analyse like their formulas", () => {
@@ -198,5 +200,17 @@ describe("names analyse like their formulas", () => {
       };
     };
     expect(summary(byName), name).toEqual(summary(byFormula));
+  });
+});
+
+describe("other notations analyse like the plain formula", () => {
+  it.each(NOTATIONS)("$written is $plain", ({ written, plain, centre }) => {
+    const summary = (analysis: SpeciesAnalysis) => ({
+      formula: analysis.reading.formula,
+      charge: analysis.reading.charge,
+      valenceElectrons: analysis.valenceElectrons,
+      axe: centreOf(analysis, centre).axe,
+    });
+    expect(summary(analysisOf(written)), written).toEqual(summary(analysisOf(plain)));
   });
 });

@@ -2,6 +2,7 @@ import { describe, expect, it } from "vitest";
 import type { AngleExpectation } from "../../shared/src/index";
 import { analysisOf, centreOf, sameAngle } from "./analysisHelpers";
 import { MEASURED_ANGLES, MEASURED_ANGLE_SOURCE, type MeasuredAngleCase } from "./data/measuredAngles";
+import { angleKey } from "./angleLabels";
 import { labelFitsPair } from "./positionLabels";
 
 function describeExpectation(expectation: AngleExpectation): string {
@@ -54,5 +55,32 @@ describe("bond angles against measured gas-phase structures", () => {
       expect(expectation.max).toBeLessThanOrEqual(180);
       expect(expectation.note.trim().length, `${row.species}: empty note`).toBeGreaterThan(0);
     }
+  });
+});
+
+describe("the measured angles the engine shows agree with the reference table", () => {
+  // Tables quote gas-phase angles to 0.1°; different structure determinations differ by a few tenths.
+  const AGREEMENT = 0.5;
+  const speciesMeasured = [...new Set(MEASURED_ANGLES.map((row) => row.species))];
+  let compared = 0;
+
+  it.each(speciesMeasured)("%s", (species) => {
+    const analysis = analysisOf(species);
+    const reference = MEASURED_ANGLES.filter((row) => row.species === species);
+    for (const shown of analysis.measuredAngles) {
+      expect(shown.source.trim().length, `${species} ${shown.between}: no source`).toBeGreaterThan(0);
+      const match = reference.find((row) => angleKey(row.angle) === angleKey(shown.between));
+      if (!match) continue;
+      compared += 1;
+      expect(
+        Math.abs(shown.degrees - match.degrees),
+        `${species} ${shown.between}: engine shows ${shown.degrees}°, reference ${match.degrees}° (${MEASURED_ANGLE_SOURCE})`,
+      ).toBeLessThanOrEqual(AGREEMENT);
+    }
+  });
+
+  it("matched at least one shown angle per two reference species", () => {
+    // guards the label matching above: a silent mismatch of labels would compare nothing
+    expect(compared).toBeGreaterThanOrEqual(speciesMeasured.length / 2);
   });
 });

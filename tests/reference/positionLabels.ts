@@ -4,7 +4,7 @@
  */
 import type { PositionPair } from "./data/measuredAngles";
 
-type PositionKind = "axial" | "equatorial";
+export type PositionKind = "axial" | "equatorial";
 
 // Square-pyramid "apical" sits where the bipyramid's "axial" does; "basal" plays "equatorial".
 const KIND_OF_WORD: Readonly<Record<string, PositionKind>> = {
@@ -26,6 +26,11 @@ const KINDS_OF_PAIR: Readonly<Record<PositionPair, readonly PositionKind[]>> = {
   "equatorial-equatorial": ["equatorial", "equatorial"],
   "apical-basal": ["axial", "equatorial"],
 };
+
+/** The kind of position a word names ("apical" is axial), or undefined for other words. */
+export function positionKindOfWord(word: string): PositionKind | undefined {
+  return KIND_OF_WORD[word.toLowerCase()];
+}
 
 /** True when `label` names the same two kinds of position as `pair`, in either order. */
 export function labelFitsPair(label: string | undefined, pair: PositionPair): boolean {

@@ -45,6 +45,16 @@ export const ANALYSIS_REFUSALS: readonly RefusalCase[] = [
   { input: "C2H6O", code: "ambiguous-connectivity", why: "ethanol or dimethyl ether" },
   { input: "C3H8O", code: "ambiguous-connectivity", why: "two propanols or methyl ethyl ether" },
   { input: "C4H10", code: "ambiguous-connectivity", why: "butane or isobutane" },
+  // common practice: bridged dimers such as Al2Cl6 (two AlCl4 tetrahedra sharing an edge) and B2H6
+  // need their bridges written out; no single centre carries all the other atoms
+  { input: "Al2Cl6", code: "ambiguous-connectivity", why: "bridged dimer of two tetrahedral Al" },
+  { input: "B2H6", code: "ambiguous-connectivity", why: "hydrogen-bridged dimer of two B" },
+  // common practice: fluorine takes one bond, so three F atoms leave nothing to sit in the middle
+  { input: "F3", code: "no-central-atom", why: "no atom can take two bonds" },
+  // common practice: helium's shell holds two electrons, so it forms no bonds; the problem is helium's
+  // shell, and the message must not blame hydrogen
+  { input: "HeF2", code: "octet-exceeded", why: "helium would need 10 electrons", mentions: "helium" },
+  { input: "He2", code: "octet-exceeded", why: "a He-He bond would give helium 4 electrons", mentions: "helium" },
 ];
 
 /** Problems found while reading: there is no reading to show. */

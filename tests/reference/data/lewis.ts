@@ -143,6 +143,31 @@ export const ION_SHAPES: readonly IonShapeCase[] = [
   { species: "N3-", centre: "N", axe: "AX2", molecularGeometry: "linear" },
 ];
 
+// from memory: inorganic text conventions for interhalogens, noble-gas compounds and small hydrides
+export const MOLECULE_SHAPES: readonly IonShapeCase[] = [
+  { species: "KrF2", centre: "Kr", axe: "AX2E3", molecularGeometry: "linear" },
+  { species: "ICl3", centre: "I", axe: "AX3E2", molecularGeometry: "T-shaped" },
+  { species: "XeO3", centre: "Xe", axe: "AX3E1", molecularGeometry: "trigonal pyramidal" },
+  { species: "XeO4", centre: "Xe", axe: "AX4", molecularGeometry: "tetrahedral" },
+  { species: "XeOF4", centre: "Xe", axe: "AX5E1", molecularGeometry: "square pyramidal" },
+  { species: "ClF5", centre: "Cl", axe: "AX5E1", molecularGeometry: "square pyramidal" },
+  { species: "IF5", centre: "I", axe: "AX5E1", molecularGeometry: "square pyramidal" },
+  { species: "BrF3", centre: "Br", axe: "AX3E2", molecularGeometry: "T-shaped" },
+  { species: "SeF4", centre: "Se", axe: "AX4E1", molecularGeometry: "seesaw" },
+  { species: "TeCl4", centre: "Te", axe: "AX4E1", molecularGeometry: "seesaw" },
+  { species: "BeH2", centre: "Be", axe: "AX2", molecularGeometry: "linear" },
+  { species: "Br3-", centre: "Br", axe: "AX2E3", molecularGeometry: "linear" },
+  { species: "Cl3+", centre: "Cl", axe: "AX2E2", molecularGeometry: "bent" },
+  { species: "H2F+", centre: "F", axe: "AX2E2", molecularGeometry: "bent" },
+  { species: "S2O3^2-", centre: "S", axe: "AX4", molecularGeometry: "tetrahedral" },
+  { species: "POCl3", centre: "P", axe: "AX4", molecularGeometry: "tetrahedral" },
+  { species: "SOCl2", centre: "S", axe: "AX3E1", molecularGeometry: "trigonal pyramidal" },
+  { species: "COCl2", centre: "C", axe: "AX3", molecularGeometry: "trigonal planar" },
+  { species: "NOCl", centre: "N", axe: "AX2E1", molecularGeometry: "bent" },
+  { species: "HCN", centre: "C", axe: "AX2", molecularGeometry: "linear" },
+  { species: "N2O", centre: "N", axe: "AX2", molecularGeometry: "linear" },
+];
+
 export interface CentreShape {
   readonly atom: string;
   /** How many centres of this element have this shape. */
@@ -221,4 +246,45 @@ export const NAMES: readonly NameCase[] = [
   { name: "carbon dioxide", formula: "CO2", centre: "C" },
   { name: "nitrogen trifluoride", formula: "NF3", centre: "N" },
   { name: "sulfur hexafluoride", formula: "SF6", centre: "S" },
+  { name: "sulphur tetrafluoride", formula: "SF4", centre: "S" },
+  { name: "Sulfur Tetrafluoride", formula: "SF4", centre: "S" },
+  { name: "xenon difluoride", formula: "XeF2", centre: "Xe" },
+  { name: "chlorine trifluoride", formula: "ClF3", centre: "Cl" },
+  { name: "bromine pentafluoride", formula: "BrF5", centre: "Br" },
+  { name: "boron trifluoride", formula: "BF3", centre: "B" },
+  { name: "phosphorus trichloride", formula: "PCl3", centre: "P" },
+  { name: "nitrogen dioxide", formula: "NO2", centre: "N" },
+  { name: "chlorine dioxide", formula: "ClO2", centre: "Cl" },
+  { name: "dinitrogen monoxide", formula: "N2O", centre: "N" },
+  { name: "ozone", formula: "O3", centre: "O" },
+  { name: "methane", formula: "CH4", centre: "C" },
+  { name: "carbonate", formula: "CO3^2-", centre: "C" },
+  { name: "phosphate", formula: "PO4^3-", centre: "P" },
+  { name: "nitrite", formula: "NO2-", centre: "N" },
+  { name: "chlorate", formula: "ClO3-", centre: "Cl" },
+  { name: "sulfite", formula: "SO3^2-", centre: "S" },
+  { name: "azide", formula: "N3-", centre: "N" },
+  { name: "hydronium", formula: "H3O+", centre: "O" },
+];
+
+export interface NotationCase {
+  readonly written: string;
+  readonly plain: string;
+  readonly centre: string;
+}
+
+// common practice: how chemists write the same species in prose, mhchem and Unicode
+export const NOTATIONS: readonly NotationCase[] = [
+  { written: "\\ce{SF4}", plain: "SF4", centre: "S" },
+  { written: "\\ce{NO3-}", plain: "NO3-", centre: "N" },
+  { written: "\\ce{SO4^2-}", plain: "SO4^2-", centre: "S" },
+  { written: "SF₄", plain: "SF4", centre: "S" },
+  { written: "SO₄²⁻", plain: "SO4^2-", centre: "S" },
+  { written: "NH₄⁺", plain: "NH4+", centre: "N" },
+  { written: "SO4 2-", plain: "SO4^2-", centre: "S" },
+  { written: "SO4(2-)", plain: "SO4^2-", centre: "S" },
+  { written: "SO4^{2-}", plain: "SO4^2-", centre: "S" },
+  { written: "SO4--", plain: "SO4^2-", centre: "S" },
+  { written: "[PO4]3-", plain: "PO4^3-", centre: "P" },
+  { written: "NH4^+", plain: "NH4+", centre: "N" },
 ];
