@@ -5,4 +5,9 @@
 export * from "./chemistry/types";
 export { ELEMENTS, elementBySymbol, elementByName } from "./chemistry/elements";
 export { readSpecies } from "./chemistry/reader/readSpecies";
-export { analyzeSpecies, analyzeReading } from "./chemistry/analyze";
+export { analyzeSpecies, analyzeReading, analyzeSmiles } from "./chemistry/analyze";
+export { parseSmiles, kekulize, writeSmiles, smilesFormula, smilesNetCharge } from "./chemistry/smiles";
+export type { SmilesAtom, SmilesBond, SmilesMolecule, SmilesResult } from "./chemistry/smiles";
+export { findPointGroup } from "./chemistry/symmetry/pointGroup";
+export { idealDirections, siteKind, lonePairSiteOrder } from "./chemistry/geometry/idealDirections";
+export type { Vec3 } from "./chemistry/geometry/vectors";

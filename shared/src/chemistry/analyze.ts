@@ -8,6 +8,7 @@ import { readSpecies } from "./reader/readSpecies";
 import type { AnalysisResult, Problem, SpeciesReading } from "./types";
 import { buildAnalysis } from "./analysis/buildAnalysis";
 import { chooseSkeletonStructure } from "./analysis/chooseSkeletonStructure";
+import { smilesStructure } from "./analysis/fromSmiles";
 
 const MEMO_LIMIT = 20_000;
 const memo = new Map<string, AnalysisResult>();
@@ -28,8 +29,32 @@ export function analyzeSpecies(text: string): AnalysisResult {
   return result;
 }
 
+const smilesMemo = new Map<string, AnalysisResult>();
+
+/** Analyse a molecule written as SMILES (the whole text); never throws. */
+export function analyzeSmiles(text: string): AnalysisResult {
+  const cached = smilesMemo.get(text);
+  if (cached) return cached;
+  let result: AnalysisResult;
+  try {
+    const outcome = smilesStructure(text);
+    result = outcome.ok
+      ? {
+          ok: true,
+          value: buildAnalysis(outcome.value.reading, outcome.value.structure, undefined, outcome.value.aromaticAtoms),
+        }
+      : { ok: false, ...(outcome.reading ? { reading: outcome.reading } : {}), problem: outcome.problem };
+  } catch (error) {
+    result = { ok: false, problem: { code: "no-valid-structure", message: `internal error: ${String(error)}` } };
+  }
+  if (smilesMemo.size >= MEMO_LIMIT) smilesMemo.delete(smilesMemo.keys().next().value as string);
+  smilesMemo.set(text, result);
+  return result;
+}
+
 /** Analyse a species that has already been read. */
 export function analyzeReading(reading: SpeciesReading): AnalysisResult {
+  if (reading.notation === "smiles") return analyzeSmiles(reading.text);
   const scope = outOfScope(reading);
   if (scope) return { ok: false, reading, problem: scope };
   const chosen = chooseSkeletonStructure(reading);

@@ -16,6 +16,7 @@ import {
   type LewisStructure,
 } from "../lewis/chooseLewisStructure";
 import type { Problem, SpeciesReading } from "../types";
+import { condensedSkeletons, looksCondensed } from "./condensedFormula";
 
 export type ChosenStructure =
   | { readonly ok: true; readonly structure: LewisStructure; readonly centre: number | undefined }
@@ -44,6 +45,11 @@ export function chooseSkeletonStructure(reading: SpeciesReading): ChosenStructur
   }
   if (symbols.every((symbol) => symbol === "H")) {
     return fail("hydrogen-overbonded", `${formula}: a hydrogen atom can form only one bond, so ${symbols.length} hydrogens cannot share a centre.`);
+  }
+
+  if (looksCondensed(reading.writtenSequence)) {
+    const fromCondensed = chooseCondensedStructure(reading);
+    if (fromCondensed) return fromCondensed;
   }
 
   let best: RankedSkeleton | undefined;
@@ -84,6 +90,32 @@ export function chooseSkeletonStructure(reading: SpeciesReading): ChosenStructur
   }
   if (chainAtoms >= 2) return needsStructure(reading);
   return explainFailure(reading, symbols, firstFailure?.failure ?? "no-structure", firstFailure?.atom);
+}
+
+/**
+ * The best skeleton a condensed structural formula allows; undefined when the text is not a
+ * condensed formula this reader understands (the molecular-formula path then has its say).
+ */
+function chooseCondensedStructure(reading: SpeciesReading): ChosenStructure | undefined {
+  const skeletons = condensedSkeletons(reading.formula);
+  if (!skeletons || skeletons.length === 0) return undefined;
+  let best: { structure: LewisStructure; centre: number } | undefined;
+  for (const skeleton of skeletons) {
+    const outcome = chooseLewisStructure(skeleton, reading.charge);
+    if (!outcome.ok) continue;
+    // Skeletons arrive with the most recent parent first, so ties keep the chain as written.
+    if (!best || compareScores(outcome.structure.score, best.structure.score) < 0) {
+      best = { structure: outcome.structure, centre: skeleton.centre };
+    }
+  }
+  if (!best) return undefined;
+  if (best.structure.score.shellDeficit > 0) {
+    return fail(
+      "no-valid-structure",
+      `${reading.formula}: as written, some atom is left without a full octet; check the structural formula.`,
+    );
+  }
+  return { ok: true, structure: best.structure, centre: best.centre };
 }
 
 interface RankedSkeleton {

@@ -46,7 +46,7 @@ export type LewisOutcome =
 
 const MAX_DOMAINS = 7;
 /** Beyond this many bonds that could be multiple, the exhaustive search would be too slow. */
-const MAX_FLEXIBLE_BONDS = 10;
+const MAX_FLEXIBLE_BONDS = 12;
 
 export function compareScores(a: LewisScore, b: LewisScore): number {
   return (
@@ -90,6 +90,8 @@ export function chooseLewisStructure(skeleton: Skeleton, charge: number): LewisO
   skeleton.bonds.forEach(([from, to], index) => {
     const blocks = (atom: number) =>
       traits[atom].isHydrogen ||
+      // A period-2 atom with four neighbours has no room left for a multiple bond.
+      (traits[atom].shellCapacity === 8 && degree[atom] >= 4) ||
       traits[atom].element.symbol === "F" ||
       (traits[atom].isHalogen && degree[atom] === 1);
     if (!blocks(from) && !blocks(to)) flexibleBonds.push(index);

@@ -23,6 +23,9 @@ const EXPANDED_NOTE =
   "sp3d/sp3d2 labels are bookkeeping for five or more domains: d orbitals contribute little, and " +
   "the bonding is better described with three-centre four-electron bonds.";
 
+const CONJUGATED_NOTE =
+  "one lone pair is shared with the neighbouring pi system (conjugation), so this atom is sp2 and planar rather than sp3.";
+
 export function neighboursOf(graph: MolecularGraph, atom: number): Ligand[] {
   const ligands: Ligand[] = [];
   for (const bond of graph.bonds) {
@@ -35,11 +38,19 @@ export function neighboursOf(graph: MolecularGraph, atom: number): Ligand[] {
 }
 
 /** Undefined when the atom has fewer than two neighbours or an unsupported domain count. */
-export function analyzeCentre(graph: MolecularGraph, index: number, radical: boolean): CentreDetail | undefined {
+export function analyzeCentre(
+  graph: MolecularGraph,
+  index: number,
+  radical: boolean,
+  lonePairInPiSystem = false,
+): CentreDetail | undefined {
   const atom = graph.atoms[index];
   const ligands = neighboursOf(graph, index);
   if (ligands.length < 2) return undefined;
-  const loneDomains = atom.lonePairs + (atom.unpairedElectrons > 0 ? 1 : 0);
+  // A lone pair shared with a neighbouring pi system (amide N, pyrrole N, furan O) sits in a
+  // p orbital, so it takes no site of its own: the atom is sp2 and planar.
+  const delocalised = lonePairInPiSystem && atom.lonePairs > 0 ? 1 : 0;
+  const loneDomains = atom.lonePairs - delocalised + (atom.unpairedElectrons > 0 ? 1 : 0);
   const stericNumber = ligands.length + loneDomains;
   const electronGeometry = ELECTRON_GEOMETRY_BY_STERIC_NUMBER[stericNumber];
   const molecularGeometry = molecularGeometryFor(stericNumber, loneDomains);
@@ -80,7 +91,11 @@ export function analyzeCentre(graph: MolecularGraph, index: number, radical: boo
     idealAngles: idealAnglesFor(angleContext),
     expectedAngles: expectedAngles(angleContext),
     hybridization,
-    ...(stericNumber >= 5 ? { hybridizationNote: EXPANDED_NOTE } : {}),
+    ...(stericNumber >= 5
+      ? { hybridizationNote: EXPANDED_NOTE }
+      : delocalised
+        ? { hybridizationNote: CONJUGATED_NOTE }
+        : {}),
   };
   return { centre, ligands, sites };
 }

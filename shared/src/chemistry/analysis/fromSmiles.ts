@@ -1,0 +1,138 @@
+/**
+ * A SMILES string already says which atoms bond, with what order and charge; the Lewis structure
+ * follows directly: each atom's remaining valence electrons are its lone pairs (and an odd one is
+ * a radical). Aromatic rings are read as one Kekulé structure.
+ */
+import { elementBySymbol } from "../elements";
+import { atomTraits } from "../lewis/electronBookkeeping";
+import type { LewisStructure } from "../lewis/chooseLewisStructure";
+import { kekulize, parseSmiles, smilesFormula, smilesNetCharge } from "../smiles";
+import type { FormulaPart, GraphAtom, GraphBond, Problem, SpeciesReading } from "../types";
+
+export interface SmilesStructure {
+  readonly reading: SpeciesReading;
+  readonly structure: LewisStructure;
+  /** Atoms written in lower case: members of an aromatic ring. */
+  readonly aromaticAtoms: ReadonlySet<number>;
+}
+
+export type SmilesOutcome =
+  | { readonly ok: true; readonly value: SmilesStructure }
+  | { readonly ok: false; readonly reading?: SpeciesReading; readonly problem: Problem };
+
+/** Read a SMILES string (the whole of `text`, surrounding spaces aside) into a Lewis structure. */
+export function smilesStructure(text: string): SmilesOutcome {
+  const start = text.length - text.trimStart().length;
+  const trimmed = text.trim();
+  const parsed = parseSmiles(trimmed);
+  if (!parsed.ok) return { ok: false, problem: shift(parsed.problem, start) };
+  const aromaticAtoms = new Set<number>();
+  parsed.value.atoms.forEach((atom, index) => atom.aromatic && aromaticAtoms.add(index));
+  const kekule = kekulize(parsed);
+  if (!kekule.ok) return { ok: false, problem: shift(kekule.problem, start) };
+  const molecule = kekule.value;
+
+  const symbols = molecule.atoms.map((atom) => atom.symbol);
+  const bonds: GraphBond[] = molecule.bonds.map((bond) => ({ from: bond.from, to: bond.to, order: bond.order }));
+  const charges = molecule.atoms.map((atom) => atom.charge);
+  molecule.atoms.forEach((atom, index) => {
+    for (let k = 0; k < atom.hydrogens; k++) {
+      bonds.push({ from: index, to: symbols.length, order: 1 });
+      symbols.push("H");
+      charges.push(0);
+    }
+  });
+
+  const composition = compositionOf(symbols);
+  const charge = smilesNetCharge(molecule);
+  const reading: SpeciesReading = {
+    text: trimmed,
+    range: { start, end: start + trimmed.length },
+    notation: "smiles",
+    composition,
+    writtenSequence: composition,
+    charge,
+    formula: smilesFormula(molecule),
+  };
+
+  const metal = symbols.find((symbol) => {
+    const category = elementBySymbol(symbol)?.category;
+    return category === "transition-metal" || category === "lanthanide" || category === "actinide";
+  });
+  if (metal) {
+    return {
+      ok: false,
+      reading,
+      problem: {
+        code: "transition-metal-centre",
+        message: `${trimmed} contains ${elementBySymbol(metal)!.name}, a transition metal: VSEPR does not apply to d-block centres. No shape is predicted.`,
+      },
+    };
+  }
+
+  const orderSums = new Array<number>(symbols.length).fill(0);
+  for (const bond of bonds) {
+    orderSums[bond.from] += bond.order;
+    orderSums[bond.to] += bond.order;
+  }
+  let electrons = 0;
+  const atoms: GraphAtom[] = [];
+  for (let index = 0; index < symbols.length; index++) {
+    const traits = atomTraits(symbols[index]);
+    electrons += traits.valenceElectrons - charges[index];
+    const nonBonding = traits.valenceElectrons - charges[index] - orderSums[index];
+    const shell = 2 * orderSums[index] + Math.max(0, nonBonding);
+    if (nonBonding < 0 || shell > traits.shellCapacity) {
+      const element = traits.element;
+      return {
+        ok: false,
+        reading,
+        problem: {
+          code: element.period <= 2 ? "octet-exceeded" : "no-valid-structure",
+          message:
+            element.period <= 2
+              ? `${trimmed}: the ${element.name} atom written at position ${index + 1} would need more than ${traits.fullShell} electrons around it.`
+              : `${trimmed}: the ${element.name} atom written at position ${index + 1} has more bonds than its electrons allow; check its charge.`,
+        },
+      };
+    }
+    atoms.push({
+      symbol: symbols[index],
+      lonePairs: nonBonding >> 1,
+      unpairedElectrons: nonBonding & 1,
+      formalCharge: charges[index],
+    });
+  }
+
+  const sumAbs = charges.reduce((sum, c) => sum + Math.abs(c), 0);
+  return {
+    ok: true,
+    value: {
+      reading,
+      aromaticAtoms,
+      structure: {
+        graph: { atoms, bonds },
+        score: {
+          shellDeficit: 0,
+          sumAbsFormalCharge: sumAbs,
+          sumSquareFormalCharge: charges.reduce((sum, c) => sum + c * c, 0),
+          expandedAtoms: 0,
+          chargeTimesElectronegativity: 0,
+        },
+        resonanceForms: 1,
+        valenceElectrons: electrons,
+      },
+    },
+  };
+}
+
+function compositionOf(symbols: readonly string[]): FormulaPart[] {
+  const counts = new Map<string, number>();
+  for (const symbol of symbols) counts.set(symbol, (counts.get(symbol) ?? 0) + 1);
+  return [...counts.entries()].map(([symbol, count]) => ({ symbol, count }));
+}
+
+function shift(problem: Problem, offset: number): Problem {
+  if (!problem.range || offset === 0) return problem;
+  return { ...problem, range: { start: problem.range.start + offset, end: problem.range.end + offset } };
+}
