@@ -58,7 +58,7 @@ export function chooseSkeletonStructure(reading: SpeciesReading): ChosenStructur
   if (candidates.length === 0) {
     return symbols.includes("H")
       ? fail("hydrogen-overbonded", `${formula}: only hydrogen could sit in the middle, and hydrogen forms just one bond.`)
-      : fail("no-valid-structure", `${formula}: fluorine is never a central atom, so these atoms have no Lewis structure.`);
+      : fail("no-central-atom", `${formula}: fluorine forms only one bond, so none of these atoms can hold the others together.`);
   }
   for (const skeleton of candidates) {
     const outcome = chooseLewisStructure(skeleton, charge);
@@ -170,8 +170,14 @@ function explainFailure(
           `${formula}: ${element.name} is in period 2 and can hold at most four electron pairs (an octet), but ${formula} would need more around it. Expanded octets start in period 3.`,
         );
       }
-      if (element && element.period === 1) {
+      if (element && element.symbol === "H") {
         return fail("hydrogen-overbonded", `${formula}: hydrogen would have to form more than one bond.`);
+      }
+      if (element && element.period === 1) {
+        return fail(
+          "octet-exceeded",
+          `${formula}: ${element.name} holds at most two electrons (a full first shell), so it cannot bond here.`,
+        );
       }
       return fail("octet-exceeded", `${formula}: the central atom would need more than seven electron domains.`);
     }

@@ -170,7 +170,8 @@ export function chooseLewisStructure(skeleton: Skeleton, charge: number): LewisO
         const domains = degree[atom] + lonePairs[atom] + (atom === unpairedAtom ? 1 : 0);
         if (domains > MAX_DOMAINS) return;
       }
-      if (t.mustCompleteShell && shell < t.fullShell) shellDeficit += t.fullShell - shell;
+      // B, Be and Al may stay short of an octet as centres (BF3), never as outer atoms.
+      if ((t.mustCompleteShell || degree[atom] <= 1) && shell < t.fullShell) shellDeficit += t.fullShell - shell;
       const formal =
         t.valenceElectrons - 2 * lonePairs[atom] - (atom === unpairedAtom ? 1 : 0) - bondOrderSum[atom];
       sumAbs += Math.abs(formal);

@@ -1,0 +1,184 @@
+/**
+ * The turn of a newly placed atom's frame about the bond to its parent. The site pointing back
+ * at the parent is already aligned with the bond; what is left is the torsion, chosen from a few
+ * candidates by these rules, in order:
+ *
+ * 1. a ring closes as well as it can (a neighbour already placed lands at bond length);
+ * 2. round a ring, the next ring atom is cis to the previous one (rings curl shut, and planar
+ *    rings stay planar);
+ * 3. across a bond between two tetrahedral atoms that both carry lone pairs, as few lone pairs as
+ *    possible are anti to each other: each lone pair prefers a bond anti to it, which gives the
+ *    skew (gauche) forms of hydrazine and hydrogen peroxide;
+ * 4. the least repulsion between atoms (and, more weakly, lone pairs) that are not bonded.
+ *
+ * Candidates: staggered for two tetrahedral atoms, eclipsed or anti (0° or 180°) for two
+ * trigonal planar atoms so their p orbitals stay parallel, and every 15° otherwise.
+ */
+import type { AtomSites } from "./atomSites";
+import {
+  composeRotations,
+  perpendicularTo,
+  rotate,
+  rotationAboutAxis,
+  rotationAligning,
+  signedAngleAbout,
+  type Rotation,
+} from "./rotation";
+import { add, distance, dot, norm, normalize, scale, sub, type Vec3 } from "./vectors";
+
+/** What the torsion rules read about the molecule placed so far. */
+export interface PlacementState {
+  readonly sites: readonly AtomSites[];
+  readonly positions: readonly (Vec3 | undefined)[];
+  readonly rotations: readonly (Rotation | undefined)[];
+  readonly bondLength: (first: number, second: number) => number;
+  readonly bonded: (first: number, second: number) => boolean;
+  /** The parent's and the child's ring neighbours when the bond is on a ring. */
+  readonly ringNeighbours: (parent: number, child: number) => { beforeParent: number; afterChild: number } | undefined;
+}
+
+/** How far a lone pair's stand-in point sits from its atom, in ångströms. */
+const LONE_PAIR_REACH = 0.5;
+const LONE_PAIR_WEIGHT = 0.3;
+const ANTI_THRESHOLD = (150 * Math.PI) / 180;
+const GRID_STEP = Math.PI / 12;
+
+interface Candidate {
+  readonly rotation: Rotation;
+  readonly keys: readonly number[];
+}
+
+/** The child's rotation, given its parent's placement and the child's position. */
+export function chooseChildRotation(state: PlacementState, parent: number, child: number): Rotation {
+  const childPosition = state.positions[child]!;
+  const parentPosition = state.positions[parent]!;
+  const parentRotation = state.rotations[parent]!;
+  const childSites = state.sites[child];
+  const backSite = childSites.ligands.find((ligand) => ligand.atom === parent)!;
+  const axis = normalize(sub(childPosition, parentPosition));
+  // The smallest turn that points the back site at the parent keeps the rest of the frame predictable.
+  const aligned = rotationAligning(backSite.direction, scale(axis, -1));
+
+  const parentSites = state.sites[parent];
+  const parentOthers = [
+    ...parentSites.ligands.filter((l) => l.atom !== child).map((l) => rotate(parentRotation, l.direction)),
+    ...parentSites.loneDomains.map((d) => rotate(parentRotation, d.direction)),
+  ];
+  const childOthers = [
+    ...childSites.ligands.filter((l) => l.atom !== parent).map((l) => rotate(aligned, l.direction)),
+    ...childSites.loneDomains.map((d) => rotate(aligned, d.direction)),
+  ];
+  const perpendicular = (v: Vec3) => sub(v, scale(axis, dot(v, axis)));
+  const childReference = childOthers.map(perpendicular).find((v) => norm(v) > 1e-6);
+  if (!childReference) return aligned; // nothing off the bond axis: the turn changes nothing
+  const parentReference = parentOthers.map(perpendicular).find((v) => norm(v) > 1e-6) ?? perpendicularTo(axis);
+  const eclipsed = signedAngleAbout(axis, childReference, parentReference);
+
+  const bothTetrahedral = parentSites.tetrahedral && childSites.tetrahedral;
+  const offsets = bothTetrahedral
+    ? [Math.PI / 3, Math.PI, (5 * Math.PI) / 3]
+    : parentSites.trigonalPlanar && childSites.trigonalPlanar
+      ? [0, Math.PI]
+      : Array.from({ length: 24 }, (_, k) => k * GRID_STEP);
+  const countLoneAnti = bothTetrahedral && parentSites.loneDomains.length > 0 && childSites.loneDomains.length > 0;
+
+  let best: Candidate | undefined;
+  for (const offset of offsets) {
+    const rotation = composeRotations(rotationAboutAxis(axis, eclipsed + offset), aligned);
+    const candidate = { rotation, keys: scoreKeys(state, parent, child, axis, rotation, countLoneAnti) };
+    if (!best || isBetter(candidate.keys, best.keys)) best = candidate;
+  }
+  return best!.rotation;
+}
+
+function scoreKeys(
+  state: PlacementState,
+  parent: number,
+  child: number,
+  axis: Vec3,
+  rotation: Rotation,
+  countLoneAnti: boolean,
+): number[] {
+  const childPosition = state.positions[child]!;
+  const childSites = state.sites[child];
+  let closure = 0;
+  let repulsion = 0;
+  const newAtoms: { atom: number; position: Vec3 }[] = [];
+  for (const ligand of childSites.ligands) {
+    if (ligand.atom === parent) continue;
+    const position = add(childPosition, scale(rotate(rotation, ligand.direction), state.bondLength(child, ligand.atom)));
+    const placed = state.positions[ligand.atom];
+    if (placed) closure += distance(position, placed) ** 2;
+    else newAtoms.push({ atom: ligand.atom, position });
+  }
+  const newLonePairs = childSites.loneDomains.map((d) => add(childPosition, scale(rotate(rotation, d.direction), LONE_PAIR_REACH)));
+
+  state.positions.forEach((placed, atom) => {
+    if (!placed || atom === child) return;
+    for (const fresh of newAtoms) {
+      if (!state.bonded(atom, fresh.atom)) repulsion += push(distance(placed, fresh.position));
+    }
+    for (const pair of newLonePairs) repulsion += LONE_PAIR_WEIGHT * push(distance(placed, pair));
+    const placedRotation = state.rotations[atom];
+    if (!placedRotation) return;
+    for (const domain of state.sites[atom].loneDomains) {
+      const placedPair = add(placed, scale(rotate(placedRotation, domain.direction), LONE_PAIR_REACH));
+      for (const fresh of newAtoms) repulsion += LONE_PAIR_WEIGHT * push(distance(placedPair, fresh.position));
+    }
+  });
+
+  return [
+    quantize(closure, 1e-3),
+    quantize(ringTwist(state, parent, child, axis, rotation), 1e-3),
+    countLoneAnti ? loneAntiCount(state, parent, child, axis, rotation) : 0,
+    repulsion,
+  ];
+}
+
+/** Soft repulsion between two points that are not bonded. */
+function push(length: number): number {
+  return 1 / Math.max(length, 0.1) ** 4;
+}
+
+function quantize(value: number, step: number): number {
+  return Math.round(value / step);
+}
+
+/** |dihedral| between the parent's previous ring atom and the child's next one; 0 off rings. */
+function ringTwist(state: PlacementState, parent: number, child: number, axis: Vec3, rotation: Rotation): number {
+  const ring = state.ringNeighbours(parent, child);
+  if (!ring) return 0;
+  const parentSite = state.sites[parent].ligands.find((l) => l.atom === ring.beforeParent);
+  const childSite = state.sites[child].ligands.find((l) => l.atom === ring.afterChild);
+  if (!parentSite || !childSite) return 0;
+  const before = rotate(state.rotations[parent]!, parentSite.direction);
+  const after = rotate(rotation, childSite.direction);
+  const perpendicular = (v: Vec3) => sub(v, scale(axis, dot(v, axis)));
+  const p = perpendicular(before);
+  const c = perpendicular(after);
+  if (norm(p) < 1e-6 || norm(c) < 1e-6) return 0;
+  return Math.abs(signedAngleAbout(axis, p, c));
+}
+
+/** Lone pairs of the parent anti-periplanar to lone pairs of the child. */
+function loneAntiCount(state: PlacementState, parent: number, child: number, axis: Vec3, rotation: Rotation): number {
+  const perpendicular = (v: Vec3) => sub(v, scale(axis, dot(v, axis)));
+  const parentPairs = state.sites[parent].loneDomains.map((d) => perpendicular(rotate(state.rotations[parent]!, d.direction)));
+  const childPairs = state.sites[child].loneDomains.map((d) => perpendicular(rotate(rotation, d.direction)));
+  let count = 0;
+  for (const p of parentPairs) {
+    for (const c of childPairs) {
+      if (Math.abs(signedAngleAbout(axis, p, c)) > ANTI_THRESHOLD) count++;
+    }
+  }
+  return count;
+}
+
+/** Lexicographic comparison; the last key (repulsion) counts as tied within a relative 1e-9. */
+function isBetter(candidate: readonly number[], best: readonly number[]): boolean {
+  const last = candidate.length - 1;
+  for (let k = 0; k < last; k++) {
+    if (candidate[k] !== best[k]) return candidate[k] < best[k];
+  }
+  return candidate[last] < best[last] * (1 - 1e-9) - 1e-12;
+}
