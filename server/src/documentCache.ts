@@ -20,39 +20,32 @@ export interface AnalysedDocument {
 }
 
 export interface DocumentCache {
-  /** The model of the document's current version, analysing it if needed. */
-  get(document: TextDocument): AnalysedDocument;
-  /** The kind of document, without analysing it. */
-  kindOf(document: TextDocument): DocumentKind;
+  /** The model of the document's current version, analysing it as `kind` if needed. */
+  get(document: TextDocument, kind: DocumentKind): AnalysedDocument;
+  /** The kind of document, or undefined when lonepair has nothing to read in it. Cheap. */
+  kindOf(document: TextDocument): DocumentKind | undefined;
   delete(uri: string): void;
   readonly size: number;
 }
 
 const EMPTY_MODEL = (kind: DocumentKind): DocumentModel => ({ kind, occurrences: [], records: [], problems: [] });
 
+/** Enough of the start of a document to tell a table saved as .txt from prose. */
+const SNIFF_LENGTH = 4096;
+
 /** Creates a cache holding at most `capacity` documents, least recently used dropped first. */
 export function createDocumentCache(capacity = 32): DocumentCache {
   const entries = new Map<string, AnalysedDocument>();
-  const kinds = new Map<string, DocumentKind>();
-
-  const kindOf = (document: TextDocument): DocumentKind => {
-    const known = kinds.get(document.uri);
-    if (known) return known;
-    const kind = documentKindFor(fileNameOf(document.uri), document.languageId, document.getText().slice(0, 512)) ?? "plaintext";
-    kinds.set(document.uri, kind);
-    return kind;
-  };
-
   return {
-    get(document) {
+    get(document, kind) {
       const cached = entries.get(document.uri);
-      if (cached && cached.version === document.version) {
+      if (cached && cached.version === document.version && cached.kind === kind) {
         // Re-insert so the map's order stays least-recently-used first.
         entries.delete(document.uri);
         entries.set(document.uri, cached);
         return cached;
       }
-      const entry = analyse(document, kindOf(document));
+      const entry = analyse(document, kind);
       entries.delete(document.uri);
       entries.set(document.uri, entry);
       while (entries.size > capacity) {
@@ -61,15 +54,21 @@ export function createDocumentCache(capacity = 32): DocumentCache {
       }
       return entry;
     },
-    kindOf,
+    kindOf(document) {
+      // Recomputed per call: a header typed into a new .txt file can turn it into a table.
+      return documentKindFor(fileNameOf(document.uri), document.languageId, document.getText(firstBytesRange(document)));
+    },
     delete(uri) {
       entries.delete(uri);
-      kinds.delete(uri);
     },
     get size() {
       return entries.size;
     },
   };
+}
+
+function firstBytesRange(document: TextDocument) {
+  return { start: { line: 0, character: 0 }, end: document.positionAt(SNIFF_LENGTH) };
 }
 
 function analyse(document: TextDocument, kind: DocumentKind): AnalysedDocument {

@@ -35,6 +35,7 @@ export async function enabledDocument(context: ServerContext, uri: string): Prom
   // Settings came back asynchronously: a newer edit may have arrived meanwhile.
   const current = context.documents.get(uri);
   if (!current) return undefined;
-  if (!settings.enabledLanguages.includes(context.cache.kindOf(current))) return undefined;
-  return { document: current, analysed: context.cache.get(current), settings };
+  const kind = context.cache.kindOf(current);
+  if (!kind || !settings.enabledLanguages.includes(kind)) return undefined;
+  return { document: current, analysed: context.cache.get(current, kind), settings };
 }

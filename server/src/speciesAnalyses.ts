@@ -1,19 +1,15 @@
 /**
- * Memoised species analysis: the same formula written a thousand times in a table is
- * analysed once. Bounded so that a document full of distinct formulas cannot grow it forever.
+ * The analysis behind a species occurrence. The text is analysed exactly as the document
+ * checks analyse it, so a hover never disagrees with a diagnostic; the core memoises by text.
  */
 import { analyzeSpecies, type AnalysisResult, type SpeciesOccurrence } from "./core";
 
-const CAPACITY = 4096;
-const memo = new Map<string, AnalysisResult>();
-
 /** The analysis of the species an occurrence names. */
 export function analysisOf(occurrence: SpeciesOccurrence): AnalysisResult {
-  const key = occurrence.text.trim();
-  const known = memo.get(key);
-  if (known) return known;
-  const result = analyzeSpecies(key);
-  if (memo.size >= CAPACITY) memo.delete(memo.keys().next().value as string);
-  memo.set(key, result);
-  return result;
+  try {
+    return analyzeSpecies(occurrence.text);
+  } catch (error) {
+    // The core promises not to throw; if it ever does, one species fails, not the request.
+    return { ok: false, reading: occurrence.reading, problem: { code: "no-valid-structure", message: `internal error: ${String(error)}` } };
+  }
 }

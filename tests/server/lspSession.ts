@@ -93,9 +93,11 @@ export async function startSession(options: SessionOptions = {}): Promise<LspSes
     published.push(params);
     for (const wake of waiters) wake();
   });
-  connection.onNotification(LogMessageNotification.type, (params) => logs.push(params.message));
+  connection.onNotification(LogMessageNotification.type, (params) => {
+    logs.push(typeof params.message === "string" ? params.message : JSON.stringify(params.message));
+  });
   connection.onRequest(ConfigurationRequest.type, (params) => params.items.map(() => options.configuration?.() ?? null));
-  connection.onRequest(RegistrationRequest.type, () => null);
+  connection.onRequest(RegistrationRequest.type, () => undefined);
   connection.onError(() => undefined);
   connection.listen();
 

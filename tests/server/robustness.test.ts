@@ -10,6 +10,7 @@ import {
   ExecuteCommandRequest,
   HoverRequest,
   InlayHintRequest,
+  LSPErrorCodes,
   RequestType,
   ResponseError,
   type MarkupContent,
@@ -111,7 +112,7 @@ describe("protocol abuse", () => {
       );
     source.cancel();
     const result = await pending;
-    if ("error" in result) expect((result.error as ResponseError<unknown>).code).toBe(ErrorCodes.RequestCancelled ?? -32800);
+    if ("error" in result) expect((result.error as ResponseError<unknown>).code).toBe(LSPErrorCodes.RequestCancelled);
     await stillAnswers();
   });
 });

@@ -4,7 +4,7 @@
  */
 import { InlayHintKind, type InlayHint, type InlayHintParams } from "vscode-languageserver";
 import { HOVER_CAUTION } from "../../../shared/src/report/hoverMarkdown";
-import type { DocumentKind, DocumentModel, SpeciesAnalysis, SpeciesOccurrence } from "../core";
+import type { DocumentKind, DocumentModel, SpeciesAnalysis, SpeciesOccurrence, TextRange } from "../core";
 import { guarded } from "../guardedHandler";
 import { offsetRange } from "../ranges";
 import { enabledDocument, type ServerContext } from "../serverContext";
@@ -46,11 +46,15 @@ function hintsWanted(kind: DocumentKind, settings: ServerSettings): boolean {
   return PROSE_KINDS.includes(kind) ? settings.inlayHints.prose : settings.inlayHints.dataFiles;
 }
 
-/** In prose, a table's species cells are data and get no hint; in data files every species does. */
+/**
+ * In prose a table's species cells are data and get no hint. In data files only each record's
+ * species cell does: a name cell beside the formula would repeat it.
+ */
 function hintedOccurrences(model: DocumentModel): readonly SpeciesOccurrence[] {
-  if (!PROSE_KINDS.includes(model.kind)) return model.occurrences;
-  const tableCells = new Set(model.records.map((record) => `${record.species.range.start}:${record.species.range.end}`));
-  return model.occurrences.filter((occurrence) => !tableCells.has(`${occurrence.range.start}:${occurrence.range.end}`));
+  if (!PROSE_KINDS.includes(model.kind)) return model.records.map((record) => record.species);
+  const key = (range: TextRange): string => `${range.start}:${range.end}`;
+  const speciesCells = new Set(model.records.map((record) => key(record.species.range)));
+  return model.occurrences.filter((occurrence) => !speciesCells.has(key(occurrence.range)));
 }
 
 /** "seesaw" for one centre; "C: tetrahedral, O: bent" when the centres differ. */
