@@ -41,6 +41,16 @@ export const DIPOLE_MOMENTS: readonly DipoleCase[] = [
   { species: "HCl", debye: 1.11 }, // from memory: CRC Handbook, Dipole Moments table
   { species: "HBr", debye: 0.827 }, // from memory: CRC Handbook, Dipole Moments table
   { species: "CO", debye: 0.11 }, // from memory: CRC Handbook, Dipole Moments table
+  { species: "OCS", debye: 0.715 }, // from memory: CRC Handbook, Dipole Moments table (linear yet polar)
+  { species: "ClCN", debye: 2.83 }, // from memory: CRC Handbook, Dipole Moments table (linear yet polar)
+  { species: "CH2F2", debye: 1.97 }, // from memory: CRC Handbook, Dipole Moments table
+  { species: "CHF3", debye: 1.65 }, // from memory: CRC Handbook, Dipole Moments table
+  { species: "CH3Br", debye: 1.82 }, // from memory: CRC Handbook, Dipole Moments table
+  { species: "BrF3", debye: 1.19 }, // from memory: CRC Handbook, Dipole Moments table
+  { species: "ClF", debye: 0.89 }, // from memory: CRC Handbook, Dipole Moments table
+  { species: "ICl", debye: 1.24 }, // from memory: CRC Handbook, Dipole Moments table
+  { species: "NO", debye: 0.159 }, // from memory: CRC Handbook, Dipole Moments table
+  { species: "NOCl", debye: 1.9 }, // from memory: CRC Handbook, Dipole Moments table
   // Nonpolar: the point group has no direction a permanent dipole could point along.
   { species: "CO2", debye: 0 }, // common practice: linear D∞h, no permanent dipole
   { species: "CS2", debye: 0 }, // common practice: linear D∞h, no permanent dipole
@@ -57,6 +67,12 @@ export const DIPOLE_MOMENTS: readonly DipoleCase[] = [
   { species: "PCl5", debye: 0 }, // common practice: trigonal bipyramidal D3h, no permanent dipole
   { species: "PF5", debye: 0 }, // common practice: trigonal bipyramidal D3h, no permanent dipole
   { species: "SF6", debye: 0 }, // common practice: octahedral Oh, no permanent dipole
+  { species: "SeF6", debye: 0 }, // common practice: octahedral Oh, no permanent dipole
+  { species: "IF7", debye: 0 }, // common practice: pentagonal bipyramidal D5h, no permanent dipole
+  { species: "KrF2", debye: 0 }, // common practice: linear D∞h, no permanent dipole
+  { species: "BH3", debye: 0 }, // common practice: trigonal planar D3h, no permanent dipole
+  { species: "GeH4", debye: 0 }, // common practice: tetrahedral Td, no permanent dipole
+  { species: "XeO4", debye: 0 }, // common practice: tetrahedral Td, no permanent dipole
   { species: "XeF4", debye: 0 }, // common practice: square planar D4h, no permanent dipole
   { species: "N2", debye: 0 }, // common practice: homonuclear diatomic, no permanent dipole
   { species: "Cl2", debye: 0 }, // common practice: homonuclear diatomic, no permanent dipole

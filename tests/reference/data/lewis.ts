@@ -48,9 +48,6 @@ export const RESONANCE_FORMS: readonly ResonanceCase[] = [
   { species: "NO2-", forms: 2 },
 ];
 
-/** Species whose resonance count depends on the model (octet vs expanded octet); reported, not judged. */
-export const MODEL_DEPENDENT_RESONANCE: readonly string[] = ["SO4^2-", "SO2", "SO3", "PO4^3-", "ClO4-", "N3-", "N2O", "HNO3"];
-
 export interface FormalChargeCase {
   readonly species: string;
   /** Element of the atom with the most bonds. */
