@@ -63,5 +63,5 @@ function isShouted(word: string): boolean {
 export function isWordContext(text: string, start: number, end: number): boolean {
   if (isShouted(wordBefore(text, start)) || isShouted(wordAfter(text, end))) return true;
   const before = text.slice(Math.max(0, start - LOOK_AROUND), start);
-  return /[A-Z][a-z]+,[ \t]*$/.test(before) && /^(?:[ \t]+\d{5}|[ \t]*(?:[.;)]|$))/.test(text.slice(end, end + 8));
+  return /[A-Z][a-z]+,[ \t]*$/.test(before) && /^(?:[ \t]+\d{5}|[ \t]*(?:[.;)\r\n]|$))/.test(text.slice(end, end + 8));
 }

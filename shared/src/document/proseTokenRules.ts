@@ -13,7 +13,7 @@ const HOMONUCLEAR = new Set([
 const LONE_ATOMS = new Set(["Xe", "Kr", "Ar", "Ne", "Rn"]);
 
 /** All-capital species without digits that chemists write often enough to trust. */
-const CAPITAL_SPECIES = new Set(["CO", "NO", "HF", "HCN", "OCS", "KI"]);
+const CAPITAL_SPECIES = new Set(["CO", "NO", "HF", "HCN", "OCS", "COS", "KI", "KF", "KOH", "KCN"]);
 
 /** Single-letter symbols that also serve as grades, rails and labels (B+, C-, V+, U+00B7). */
 const LABEL_LETTERS = new Set(["A", "B", "C", "D", "E", "G", "J", "L", "M", "P", "Q", "R", "T", "U", "V", "W", "X", "Y", "Z"]);
