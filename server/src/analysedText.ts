@@ -3,8 +3,11 @@
  * document, and nothing of binary content.
  */
 
-/** Documents longer than this (UTF-16 code units) are analysed only up to here. */
-export const MAX_ANALYSED_LENGTH = 2 * 1024 * 1024;
+/**
+ * Documents longer than this (UTF-16 code units) are analysed only up to here. A megabyte of
+ * prose takes the core a few seconds, and every edit re-analyses, so more would make typing lag.
+ */
+export const MAX_ANALYSED_LENGTH = 1024 * 1024;
 
 /** How far back from the cap we look for a line break to cut at. */
 const CUT_SEARCH_WINDOW = 64 * 1024;

@@ -22,6 +22,11 @@ export const DIAGNOSTIC_SOURCE = "lonepair";
 /** How long typing must pause before pushed diagnostics are recomputed. */
 const PUSH_DELAY_MS = 150;
 
+/** Large documents cost more to re-analyse, so they wait longer: one more millisecond per kilobyte, up to a second. */
+function pushDelay(length: number): number {
+  return PUSH_DELAY_MS + Math.min(1000, Math.floor(length / 1024));
+}
+
 const SEVERITIES: Readonly<Record<FindingSeverity, DiagnosticSeverity>> = {
   error: DiagnosticSeverity.Error,
   warning: DiagnosticSeverity.Warning,
@@ -107,7 +112,8 @@ function registerPush(context: ServerContext): DiagnosticsFeature {
 
   const schedule = (uri: string): void => {
     clearTimeout(timers.get(uri));
-    timers.set(uri, setTimeout(() => void publish(uri), PUSH_DELAY_MS));
+    const length = context.documents.get(uri)?.getText().length ?? 0;
+    timers.set(uri, setTimeout(() => void publish(uri), pushDelay(length)));
   };
 
   return {
