@@ -9,7 +9,6 @@ import {
   ION_SHAPES,
   MOLECULE_SHAPES,
   MULTI_CENTRE,
-  PENDING_MULTI_CENTRE,
   NAMES,
   NOT_RADICALS,
   NOTATIONS,
@@ -177,10 +176,18 @@ describe("several centres, H on O", () => {
     const analysis = analysisOf(species);
     const got = analysis.centres.map((c) => `${c.atom} ${c.axe} ${c.molecularGeometry}`).sort();
     const want = centres.flatMap((c) => Array.from({ length: c.count }, () => `${c.atom} ${c.axe} ${c.molecularGeometry}`)).sort();
-    expect(got, `${species}: ${describeGraph(analysis)}`).toEqual(want);
+    expect(got, `${species}: got [${got.join(", ")}], want [${want.join(", ")}]; ${describeGraph(analysis)}`).toEqual(want);
   });
-  // Condensed formulas with a carbon chain need the structural-formula builder.
-  for (const species of PENDING_MULTI_CENTRE) it.todo(`${species} per-atom centres from the condensed formula`);
+
+  it.each(MULTI_CENTRE)("$species: every centre's AXE agrees with its lone pairs and steric number", ({ species }) => {
+    // common practice: AX(n)E(m) means n bonding domains and m lone pairs, steric number n + m
+    for (const centre of analysisOf(species).centres) {
+      const lonePart = centre.lonePairs > 0 ? `E${centre.lonePairs}` : "";
+      const where = `${species} ${centre.atom}${centre.index} (${centre.axe}, ${centre.lonePairs} lone pairs, steric number ${centre.stericNumber})`;
+      expect(centre.axe, where).toBe(`AX${centre.bondingDomains}${lonePart}`);
+      expect(centre.stericNumber, where).toBe(centre.bondingDomains + centre.lonePairs);
+    }
+  });
 });
 
 describe("names analyse like their formulas", () => {

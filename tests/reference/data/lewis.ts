@@ -215,10 +215,78 @@ export const MULTI_CENTRE: readonly MultiCentreCase[] = [
       { atom: "O", count: 1, axe: "AX2E2", molecularGeometry: "bent" },
     ],
   },
+  // common practice: AXE counts every lone pair on the atom, so a hydroxyl O next to C=O stays AX2E2
+  // (its measured C-O-H angle, about 106°, sits near 109.5°, not 120°)
+  {
+    species: "HCOOH",
+    centres: [
+      { atom: "C", count: 1, axe: "AX3", molecularGeometry: "trigonal planar" },
+      { atom: "O", count: 1, axe: "AX2E2", molecularGeometry: "bent" },
+    ],
+  },
+  {
+    species: "CH3COOH",
+    centres: [
+      { atom: "C", count: 1, axe: "AX4", molecularGeometry: "tetrahedral" },
+      { atom: "C", count: 1, axe: "AX3", molecularGeometry: "trigonal planar" },
+      { atom: "O", count: 1, axe: "AX2E2", molecularGeometry: "bent" },
+    ],
+  },
+  {
+    species: "CH3CH2OH",
+    centres: [
+      { atom: "C", count: 2, axe: "AX4", molecularGeometry: "tetrahedral" },
+      { atom: "O", count: 1, axe: "AX2E2", molecularGeometry: "bent" },
+    ],
+  },
+  {
+    species: "CH3OCH3",
+    centres: [
+      { atom: "C", count: 2, axe: "AX4", molecularGeometry: "tetrahedral" },
+      { atom: "O", count: 1, axe: "AX2E2", molecularGeometry: "bent" },
+    ],
+  },
+  {
+    species: "(CH3)2CO",
+    centres: [
+      { atom: "C", count: 2, axe: "AX4", molecularGeometry: "tetrahedral" },
+      { atom: "C", count: 1, axe: "AX3", molecularGeometry: "trigonal planar" },
+    ],
+  },
+  {
+    species: "CH3CHO",
+    centres: [
+      { atom: "C", count: 1, axe: "AX4", molecularGeometry: "tetrahedral" },
+      { atom: "C", count: 1, axe: "AX3", molecularGeometry: "trigonal planar" },
+    ],
+  },
+  {
+    species: "CH3CN",
+    centres: [
+      { atom: "C", count: 1, axe: "AX4", molecularGeometry: "tetrahedral" },
+      { atom: "C", count: 1, axe: "AX2", molecularGeometry: "linear" },
+    ],
+  },
+  {
+    species: "HCCH",
+    centres: [{ atom: "C", count: 2, axe: "AX2", molecularGeometry: "linear" }],
+  },
+  {
+    species: "CH3NH2",
+    centres: [
+      { atom: "C", count: 1, axe: "AX4", molecularGeometry: "tetrahedral" },
+      { atom: "N", count: 1, axe: "AX3E1", molecularGeometry: "trigonal pyramidal" },
+    ],
+  },
+  {
+    species: "H2O2",
+    centres: [{ atom: "O", count: 2, axe: "AX2E2", molecularGeometry: "bent" }],
+  },
+  {
+    species: "N2H4",
+    centres: [{ atom: "N", count: 2, axe: "AX3E1", molecularGeometry: "trigonal pyramidal" }],
+  },
 ];
-
-/** Condensed structural formulas with several carbon centres: the structure builder for these is still to come. */
-export const PENDING_MULTI_CENTRE: readonly string[] = ["CH3COOH", "CH3CH2OH", "(CH3)2CO"];
 
 export interface NameCase {
   readonly name: string;

@@ -33,6 +33,9 @@ export const MEASURED_ANGLES: readonly MeasuredAngleCase[] = [
   { species: "Cl2O", centre: "O", angle: "Cl-O-Cl", degrees: 110.9, axe: "AX2E2", ideal: 109.5 }, // from memory: CRC Handbook, Structures of Free Molecules in the Gas Phase
   { species: "SCl2", centre: "S", angle: "Cl-S-Cl", degrees: 102.8, axe: "AX2E2", ideal: 109.5 }, // from memory: CRC Handbook, Structures of Free Molecules in the Gas Phase
   { species: "HOCl", centre: "O", angle: "H-O-Cl", degrees: 103.0, axe: "AX2E2", ideal: 109.5 }, // from memory: CRC Handbook, Structures of Free Molecules in the Gas Phase
+  { species: "CH3OH", centre: "O", angle: "C-O-H", degrees: 108.5, axe: "AX2E2", ideal: 109.5 }, // from memory: CRC Handbook, Structures of Free Molecules in the Gas Phase
+  { species: "CH3OCH3", centre: "O", angle: "C-O-C", degrees: 111.7, axe: "AX2E2", ideal: 109.5 }, // from memory: CRC Handbook, Structures of Free Molecules in the Gas Phase
+  { species: "HCOOH", centre: "O", angle: "C-O-H", degrees: 106.3, axe: "AX2E2", ideal: 109.5 }, // from memory: CRC Handbook, Structures of Free Molecules in the Gas Phase
   { species: "ClO2", centre: "Cl", angle: "O-Cl-O", degrees: 117.4, axe: "AX2E2", ideal: 109.5 }, // from memory: CRC Handbook, Structures of Free Molecules in the Gas Phase
   // AX3E1, ideal 109.5.
   { species: "NH3", centre: "N", angle: "H-N-H", degrees: 106.7, axe: "AX3E1", ideal: 109.5 }, // from memory: CRC Handbook, Structures of Free Molecules in the Gas Phase
@@ -64,6 +67,7 @@ export const MEASURED_ANGLES: readonly MeasuredAngleCase[] = [
   { species: "CO2", centre: "C", angle: "O-C-O", degrees: 180, axe: "AX2", ideal: 180 }, // from memory: CRC Handbook, Structures of Free Molecules in the Gas Phase
   { species: "CS2", centre: "C", angle: "S-C-S", degrees: 180, axe: "AX2", ideal: 180 }, // from memory: CRC Handbook, Structures of Free Molecules in the Gas Phase
   { species: "HCN", centre: "C", angle: "H-C-N", degrees: 180, axe: "AX2", ideal: 180 }, // from memory: CRC Handbook, Structures of Free Molecules in the Gas Phase
+  { species: "HCCH", centre: "C", angle: "H-C-C", degrees: 180, axe: "AX2", ideal: 180 }, // from memory: CRC Handbook, Structures of Free Molecules in the Gas Phase
   // AX4, ideal 109.5: double bonds to O open O-X-O and close the others.
   { species: "CH4", centre: "C", angle: "H-C-H", degrees: 109.5, axe: "AX4", ideal: 109.5 }, // from memory: CRC Handbook, Structures of Free Molecules in the Gas Phase
   { species: "SiH4", centre: "Si", angle: "H-Si-H", degrees: 109.5, axe: "AX4", ideal: 109.5 }, // from memory: CRC Handbook, Structures of Free Molecules in the Gas Phase
