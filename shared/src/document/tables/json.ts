@@ -39,7 +39,8 @@ export function readJsonRecords(text: string, read: SpeciesReader, sink: RecordS
   const problems = errors.map((error): Finding => {
     const name = printParseErrorCode(error.error);
     return {
-      range: { start: error.offset, end: error.offset + Math.max(error.length, 1) },
+      // At least one character, but never past the end of the text.
+      range: { start: Math.min(error.offset, text.length), end: Math.min(error.offset + Math.max(error.length, 1), text.length) },
       severity: "error",
       code: "json-syntax",
       message: MESSAGES[name] ?? `JSON syntax error (${name}).`,

@@ -23,7 +23,7 @@ export function readYamlRecords(text: string, read: SpeciesReader, sink: RecordS
   for (const document of list) {
     for (const error of document.errors) {
       problems.push({
-        range: { start: error.pos[0], end: Math.max(error.pos[1], error.pos[0] + 1) },
+        range: { start: Math.min(error.pos[0], text.length), end: Math.min(Math.max(error.pos[1], error.pos[0] + 1), text.length) },
         severity: "error",
         code: "yaml-syntax",
         message: firstLine(error.message),

@@ -1,0 +1,57 @@
+/**
+ * Column meanings from headers as people write them.
+ */
+import { describe, expect, it } from "vitest";
+import { meaningOfHeader } from "../../shared/src/document/tables/headers";
+
+describe("meaningOfHeader", () => {
+  // common practice: the column names chemists use in VSEPR summary tables
+  it.each([
+    ["formula", "species"],
+    ["Species", "species"],
+    ["Compound", "species"],
+    ["molecule", "species"],
+    ["Ion", "species"],
+    ["Chemical formula", "species"],
+    ["name", "name"],
+    ["Common name", "name"],
+    ["valence electrons", "valenceElectrons"],
+    ["Valence_Electrons", "valenceElectrons"],
+    ["valence e-", "valenceElectrons"],
+    ["Valence e⁻", "valenceElectrons"],
+    ["VE", "valenceElectrons"],
+    ["# valence electrons", "valenceElectrons"],
+    ["lone pairs on central atom", "lonePairs"],
+    ["Lone pairs on centre", "lonePairs"],
+    ["LP", "lonePairs"],
+    ["lone-pairs", "lonePairs"],
+    ["lone pairs (on S)", "lonePairs"],
+    ["AXE", "axe"],
+    ["AXE notation", "axe"],
+    ["electron domain geometry", "electronGeometry"],
+    ["Electron-pair geometry", "electronGeometry"],
+    ["electron geometry", "electronGeometry"],
+    ["shape", "molecularGeometry"],
+    ["geometry", "molecularGeometry"],
+    ["Molecular Geometry", "molecularGeometry"],
+    ["molecular_shape", "molecularGeometry"],
+    ["angle (deg)", "bondAngle"],
+    ["bond angle / °", "bondAngle"],
+    ["Bond angle (°)", "bondAngle"],
+    ["bond_angle_deg", "bondAngle"],
+    ["hybridisation", "hybridization"],
+    ["Hybridization of central atom", "hybridization"],
+    ["polar?", "polarity"],
+    ["Polarity", "polarity"],
+    ["polar (y/n)", "polarity"],
+  ])("%j means %s", (header, meaning) => {
+    expect(meaningOfHeader(header)).toBe(meaning);
+  });
+
+  it.each(["id", "cylinder", "supplier lot", "notes", "pressure / kPa", "room", "date", "dipole moment (D)"])(
+    "%j means nothing to the checks",
+    (header) => {
+      expect(meaningOfHeader(header)).toBeUndefined();
+    },
+  );
+});
