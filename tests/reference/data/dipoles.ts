@@ -74,6 +74,7 @@ export const DIPOLE_MOMENTS: readonly DipoleCase[] = [
   { species: "GeH4", debye: 0 }, // common practice: tetrahedral Td, no permanent dipole
   { species: "XeO4", debye: 0 }, // common practice: tetrahedral Td, no permanent dipole
   { species: "XeF4", debye: 0 }, // common practice: square planar D4h, no permanent dipole
+  { species: "CH3", debye: 0 }, // from memory: spectroscopic structure of the methyl radical, planar D3h, no permanent dipole
   { species: "N2", debye: 0 }, // common practice: homonuclear diatomic, no permanent dipole
   { species: "Cl2", debye: 0 }, // common practice: homonuclear diatomic, no permanent dipole
 ];

@@ -16,6 +16,7 @@ export interface RefusalCase {
 export const ANALYSIS_REFUSALS: readonly RefusalCase[] = [
   // common practice: a positive charge cannot remove more electrons than the atoms bring
   { input: "CH4^10+", code: "too-few-electrons", why: "8 valence electrons minus 10 is negative" },
+  { input: "H^3+", code: "too-few-electrons", why: "one valence electron cannot lose three" },
   { input: "NH3^8+", code: "too-few-electrons", why: "8 valence electrons minus 8 leaves none to bond with" },
   // common practice: four single bonds need 8 electrons
   { input: "CH4^4+", code: "too-few-electrons", why: "4 electrons cannot make the 4 bonds CH4 needs" },
@@ -63,6 +64,8 @@ export const READING_REFUSALS: readonly RefusalCase[] = [
   { input: "   ", code: "empty-input", why: "only spaces" },
   // common practice: element symbols are one capital, optionally one lower-case letter
   { input: "Sf4", code: "unknown-element", why: "Sf is no element; SF4 was meant", suggestion: "SF4", mentions: "Sf" },
+  { input: "Xef4", code: "unknown-element", why: "lower-case f; XeF4 was meant", suggestion: "XeF4" },
+  { input: "sf6", code: "unknown-element", why: "all lower case; SF6 was meant", suggestion: "SF6" },
   { input: "Xx2", code: "unknown-element", why: "Xx is no element", mentions: "Xx" },
   { input: "Ca(OH2", code: "unbalanced-brackets", why: "an opening bracket is never closed" },
   { input: "Ca(OH))2", code: "unbalanced-brackets", why: "a closing bracket has no partner" },

@@ -90,6 +90,11 @@ export const SKELETONS: readonly SkeletonCase[] = [
   { species: "SOCl2", hub: "S", neighbours: ["Cl", "Cl", "O"] },
   { species: "POCl3", hub: "P", neighbours: ["Cl", "Cl", "Cl", "O"] },
   { species: "XeOF4", hub: "Xe", neighbours: ["F", "F", "F", "F", "O"] },
+  // from memory: thiazyl fluoride is N≡S-F, bent at sulfur, whatever order the formula is written in
+  { species: "NSF", hub: "S", neighbours: ["F", "N"] },
+  { species: "FSN", hub: "S", neighbours: ["F", "N"] },
+  // from memory: thiazyl trifluoride is N≡SF3, tetrahedral at sulfur
+  { species: "NSF3", hub: "S", neighbours: ["F", "F", "F", "N"] },
 ];
 
 // from memory: general chemistry text conventions (incomplete octet, no multiple bonds drawn)
