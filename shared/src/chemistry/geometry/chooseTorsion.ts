@@ -3,7 +3,8 @@
  * at the parent is already aligned with the bond; what is left is the torsion, chosen from a few
  * candidates by these rules, in order:
  *
- * 1. a ring closes as well as it can (a neighbour already placed lands at bond length);
+ * 1. a ring closes as well as it can: a neighbour already placed lands at bond length, and an
+ *    atom placed two bonds away through an unplaced atom lands at the ideal 1,3 distance;
  * 2. round a ring, the next ring atom is cis to the previous one (rings curl shut, and planar
  *    rings stay planar);
  * 3. across a bond between two tetrahedral atoms that both carry lone pairs, as few lone pairs as
@@ -11,8 +12,9 @@
  *    skew (gauche) forms of hydrazine and hydrogen peroxide;
  * 4. the least repulsion between atoms (and, more weakly, lone pairs) that are not bonded.
  *
- * Candidates: staggered for two tetrahedral atoms, eclipsed or anti (0° or 180°) for two
- * trigonal planar atoms so their p orbitals stay parallel, and every 15° otherwise.
+ * Candidates: staggered for two tetrahedral atoms; eclipsed or anti (0° or 180°) for two
+ * trigonal planar atoms, so their p orbitals stay parallel, and for a trigonal planar atom next
+ * to a lone-pair-bearing tetrahedral one; every 15° otherwise.
  */
 import type { AtomSites } from "./atomSites";
 import {
@@ -77,7 +79,7 @@ export function chooseChildRotation(state: PlacementState, parent: number, child
   const bothTetrahedral = parentSites.tetrahedral && childSites.tetrahedral;
   const offsets = bothTetrahedral
     ? [Math.PI / 3, Math.PI, (5 * Math.PI) / 3]
-    : parentSites.trigonalPlanar && childSites.trigonalPlanar
+    : keepsPlane(parentSites, childSites)
       ? [0, Math.PI]
       : Array.from({ length: 24 }, (_, k) => k * GRID_STEP);
   const countLoneAnti = bothTetrahedral && parentSites.loneDomains.length > 0 && childSites.loneDomains.length > 0;
@@ -89,6 +91,20 @@ export function chooseChildRotation(state: PlacementState, parent: number, child
     if (!best || isBetter(candidate.keys, best.keys)) best = candidate;
   }
   return best!.rotation;
+}
+
+/**
+ * Two trigonal planar atoms, or a trigonal planar atom next to a tetrahedral one with a lone pair
+ * (the OH of an acid, an ester oxygen): the lone pair joins the π system, so the bond keeps its
+ * substituents in one plane.
+ */
+function keepsPlane(first: AtomSites, second: AtomSites): boolean {
+  const donor = (sites: AtomSites) => sites.tetrahedral && sites.loneDomains.length > 0;
+  return (
+    (first.trigonalPlanar && second.trigonalPlanar) ||
+    (first.trigonalPlanar && donor(second)) ||
+    (second.trigonalPlanar && donor(first))
+  );
 }
 
 function scoreKeys(
@@ -111,6 +127,7 @@ function scoreKeys(
     if (placed) closure += distance(position, placed) ** 2;
     else newAtoms.push({ atom: ligand.atom, position });
   }
+  for (const fresh of newAtoms) closure += oneAheadClosure(state, child, fresh.atom, fresh.position);
   const newLonePairs = childSites.loneDomains.map((d) => add(childPosition, scale(rotate(rotation, d.direction), LONE_PAIR_REACH)));
 
   state.positions.forEach((placed, atom) => {
@@ -133,6 +150,30 @@ function scoreKeys(
     countLoneAnti ? loneAntiCount(state, parent, child, axis, rotation) : 0,
     repulsion,
   ];
+}
+
+/**
+ * Looks one bond ahead: where a new atom and an atom already placed share a neighbour not yet
+ * placed, their distance should be the one the ideal angle at that neighbour gives. This is what
+ * makes a six-membered ring of tetrahedral atoms close as a chair.
+ */
+function oneAheadClosure(state: PlacementState, child: number, atom: number, position: Vec3): number {
+  let error = 0;
+  for (const shared of state.sites[atom].ligands) {
+    if (shared.atom === child || state.positions[shared.atom]) continue;
+    const sharedSites = state.sites[shared.atom];
+    for (const other of sharedSites.ligands) {
+      const placed = state.positions[other.atom];
+      if (other.atom === atom || other.atom === child || !placed) continue;
+      const toAtom = sharedSites.ligands.find((l) => l.atom === atom)!.direction;
+      const cosine = dot(toAtom, other.direction);
+      const a = state.bondLength(shared.atom, atom);
+      const b = state.bondLength(shared.atom, other.atom);
+      const target = Math.sqrt(Math.max(0, a * a + b * b - 2 * a * b * cosine));
+      error += (distance(position, placed) - target) ** 2;
+    }
+  }
+  return error;
 }
 
 /** Soft repulsion between two points that are not bonded. */
