@@ -110,6 +110,44 @@ describe("lonepair analyze --json", () => {
   });
 });
 
+describe("lonepair analyze --smiles", () => {
+  it("reads benzene as SMILES: six sp2 trigonal planar carbons, hydrogens are not centres", () => {
+    const run = runCli("analyze", "--smiles", "--json", "c1ccccc1");
+    expect(run.status).toBe(0);
+    const [benzene] = JSON.parse(run.stdout);
+    // source: RDKit (WebAssembly build): c1ccccc1 is C6H6 with all six carbons SP2
+    expect(benzene).toMatchObject({ input: "c1ccccc1", ok: true, charge: 0 });
+    expect(benzene.formula).toMatch(/^C6H6$/);
+    // common practice: each aromatic carbon has three sigma neighbours and no lone pair (AX3)
+    expect(benzene.centers.map((centre: any) => [centre.index, centre.atom, centre.axe, centre.molecularGeometry, centre.hybridization])).toEqual(
+      [0, 1, 2, 3, 4, 5].map((index) => [index, "C", "AX3", "trigonal planar", "sp2"]),
+    );
+  });
+
+  it("prints a text card for each SMILES and fails on one it cannot read", () => {
+    const run = runCli("analyze", "--smiles", "CC(=O)O", "C1CC");
+    expect(run.status).toBe(1);
+    // common practice: acetic acid has an sp3 methyl carbon and an sp2 carboxyl carbon
+    expect(run.stdout).toContain("C2H4O2");
+    expect(run.stdout).toContain("tetrahedral");
+    expect(run.stdout).toContain("trigonal planar");
+    expect(run.stdout).toContain("not analysed");
+    expect(run.stdout).toContain("2 species: 1 analysed, 1 not analysed");
+  });
+
+  it("without --smiles the same text is read as a formula, not as SMILES", () => {
+    // common practice: "CO" as a formula is carbon monoxide; as SMILES it is methanol, CH3OH
+    const asFormula = JSON.parse(runCli("analyze", "--json", "CO").stdout)[0];
+    const asSmiles = JSON.parse(runCli("analyze", "--json", "--smiles", "CO").stdout)[0];
+    expect(asFormula.formula).toBe("CO");
+    expect(asSmiles.formula).toBe("CH4O");
+    expect(asSmiles.centers.map((centre: any) => [centre.atom, centre.molecularGeometry])).toEqual([
+      ["C", "tetrahedral"],
+      ["O", "bent"],
+    ]);
+  });
+});
+
 describe("lonepair analyze (text)", () => {
   it("prints a card with the shape, the caution and no colour codes when piped", () => {
     const run = runCli("analyze", "SF4");
@@ -135,6 +173,7 @@ describe("usage", () => {
     { case: "no arguments", args: [] as string[] },
     { case: "analyze without species", args: ["analyze"] },
     { case: "analyze --json without species", args: ["analyze", "--json"] },
+    { case: "analyze --smiles without species", args: ["analyze", "--smiles"] },
     { case: "unknown command", args: ["shapes", "SF4"] },
     { case: "unknown option", args: ["analyze", "--fast", "SF4"] },
     { case: "unknown top-level option", args: ["--fast"] },
@@ -156,7 +195,8 @@ describe("usage", () => {
   it("analyze --help explains the command and exits 0", () => {
     const run = runCli("analyze", "--help");
     expect(run.status).toBe(0);
-    expect(run.stdout).toContain("lonepair analyze [--json] <species...>");
+    expect(run.stdout).toContain("lonepair analyze [--json] [--smiles] <species...>");
+    expect(run.stdout).toContain("--smiles");
   });
 
   it("--version prints the package version", () => {

@@ -1,23 +1,28 @@
 /**
- * `lonepair analyze [--json] <species...>`: one card (or JSON object) per argument.
- * Exit 0 when every species was analysed, 1 when any was not, 2 on a usage error.
+ * `lonepair analyze [--json] [--smiles] <species...>`: one card (or JSON object) per argument.
+ * With `--smiles` every argument is read as a SMILES string (a whole molecule, every atom with
+ * two or more neighbours described). Exit 0 when every species was analysed, 1 when any was
+ * not, 2 on a usage error.
  */
 import { parseArgs } from "node:util";
-import { analyzeSpecies } from "../../../../shared/src/index";
+import { analyzeSmiles, analyzeSpecies } from "../../../../shared/src/index";
 import { formatAnalysisCard } from "../../../../shared/src/report/analysisCard";
 import { toAnalysisJson } from "../../../../shared/src/report/analysisJson";
 import type { CliCommand, CliIo } from "../cliCommand";
 import { EXIT_FAILURE, EXIT_OK, EXIT_USAGE } from "../cliCommand";
 import { cardStyle } from "../terminalStyle";
 
-const HELP = `Usage: lonepair analyze [--json] <species...>
+const HELP = `Usage: lonepair analyze [--json] [--smiles] <species...>
 
 Works out the Lewis structure and VSEPR shape of each species: a formula (SF4, NH4+,
-SO4^2-), an mhchem span (\\ce{XeF4}) or a name ("sulfur tetrafluoride"). Quote names
-and anything your shell might expand. Each argument is one species.
+SO4^2-), a condensed structural formula (CH3COOH), an mhchem span (\\ce{XeF4}) or a
+name ("sulfur tetrafluoride"). Quote names and anything your shell might expand. Each
+argument is one species.
 
 Options:
   --json    print a JSON array, one object per species, instead of text cards
+  --smiles  read every argument as a SMILES string ('c1ccccc1', 'CC(=O)O') and describe
+            each atom with two or more neighbours
   --help    show this help
 
 Exit status: 0 every species analysed, 1 any species not analysed, 2 usage error.
@@ -35,7 +40,7 @@ function runAnalyze(args: readonly string[], io: CliIo): number {
   try {
     parsed = parseArgs({
       args: [...args],
-      options: { json: { type: "boolean" }, help: { type: "boolean" } },
+      options: { json: { type: "boolean" }, smiles: { type: "boolean" }, help: { type: "boolean" } },
       allowPositionals: true,
       strict: true,
     });
@@ -53,7 +58,9 @@ function runAnalyze(args: readonly string[], io: CliIo): number {
     return EXIT_USAGE;
   }
 
-  const results = speciesTexts.map((text) => ({ text, result: analyzeSpecies(text) }));
+  // A SMILES string such as "CO" or "NO" is also a formula, so the reader is told, never left to guess.
+  const analyze = parsed.values.smiles ? analyzeSmiles : analyzeSpecies;
+  const results = speciesTexts.map((text) => ({ text, result: analyze(text) }));
   const failures = results.filter(({ result }) => !result.ok).length;
 
   if (parsed.values.json) {
