@@ -86,9 +86,9 @@ export function buildAnalysis(
 }
 
 /**
- * Atoms whose lone pair joins a carbon pi system next to them: N, O or S bonded to an aromatic
- * carbon or to a carbon with a multiple bond (amides, esters, phenols, anilines), and lone-pair
- * atoms inside aromatic rings (pyrrole N, furan O, thiophene S).
+ * Atoms whose lone pair joins a pi system: lone-pair atoms inside aromatic rings (pyrrole N,
+ * furan O, thiophene S), and three-bonded N next to a carbon with a multiple bond or an aromatic
+ * carbon (amides, anilines).
  */
 function lonePairsInPiSystems(graph: SpeciesAnalysis["graph"], aromaticAtoms: ReadonlySet<number>): Set<number> {
   const atomCount = graph.atoms.length;
@@ -106,12 +106,16 @@ function lonePairsInPiSystems(graph: SpeciesAnalysis["graph"], aromaticAtoms: Re
   graph.atoms.forEach((atom, index) => {
     if (atom.lonePairs === 0 || neighbours[index].length < 2) return;
     if (!["N", "O", "S"].includes(atom.symbol)) return;
+    // Inside an aromatic ring any of them joins the pi system; outside one, only a three-bonded
+    // N (amides, anilines) flattens: the O of an ester or acid keeps its bent, sp3-like angle.
+
     const hasOwnMultipleBond = graph.bonds.some((b) => (b.from === index || b.to === index) && b.order > 1);
     if (hasOwnMultipleBond) return;
     if (aromaticAtoms.has(index)) {
       result.add(index);
       return;
     }
+    if (atom.symbol !== "N" || neighbours[index].length !== 3) return;
     const nextToPi = neighbours[index].some(
       (other) => multiplyBondedCarbon[other] || (aromaticAtoms.has(other) && graph.atoms[other].symbol === "C"),
     );

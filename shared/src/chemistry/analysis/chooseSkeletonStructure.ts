@@ -127,7 +127,8 @@ interface RankedSkeleton {
 
 /**
  * Formal charges first; when they tie, the skeleton whose centre is the one atom of its element
- * (Cl2O is Cl-O-Cl, ClO2 is O-Cl-O), then the usual tie-breaks, then the less electronegative centre.
+ * (Cl2O is Cl-O-Cl, ClO2 is O-Cl-O), then the less electronegative centre (NSF is N≡S-F), then
+ * the remaining tie-breaks of the Lewis search.
  */
 function compareSkeletons(a: RankedSkeleton, b: RankedSkeleton): number {
   const sa = a.structure.score;
@@ -137,8 +138,8 @@ function compareSkeletons(a: RankedSkeleton, b: RankedSkeleton): number {
     sa.sumAbsFormalCharge - sb.sumAbsFormalCharge ||
     sa.sumSquareFormalCharge - sb.sumSquareFormalCharge ||
     Number(b.centreIsUnique) - Number(a.centreIsUnique) ||
-    compareScores(sa, sb) ||
-    a.electronegativity - b.electronegativity
+    a.electronegativity - b.electronegativity ||
+    compareScores(sa, sb)
   );
 }
 

@@ -50,7 +50,10 @@ export function analyzeCentre(
   // A lone pair shared with a neighbouring pi system (amide N, pyrrole N, furan O) sits in a
   // p orbital, so it takes no site of its own: the atom is sp2 and planar.
   const delocalised = lonePairInPiSystem && atom.lonePairs > 0 ? 1 : 0;
-  const loneDomains = atom.lonePairs - delocalised + (atom.unpairedElectrons > 0 ? 1 : 0);
+  // An odd electron on an atom with no lone pair sits in a p orbital and takes no site: the
+  // methyl radical is planar. Next to lone pairs it does count as a (weak) domain: NO2, ClO2.
+  const oddElectronDomain = atom.unpairedElectrons > 0 && atom.lonePairs > 0 ? 1 : 0;
+  const loneDomains = atom.lonePairs - delocalised + oddElectronDomain;
   const stericNumber = ligands.length + loneDomains;
   const electronGeometry = ELECTRON_GEOMETRY_BY_STERIC_NUMBER[stericNumber];
   const molecularGeometry = molecularGeometryFor(stericNumber, loneDomains);
@@ -72,7 +75,10 @@ export function analyzeCentre(
     identicalNeighbours,
     hasMultipleBond: ligands.some((l) => l.bondOrder > 1),
     multipleBondCount: ligands.filter((l) => l.bondOrder > 1).length,
-    bulkyNeighbours: ligands.some((l) => atomTraits(l.symbol).element.period > traits.element.period),
+    // Heavier neighbours, or two groups with their own substituents (C-O-C in CH3OCH3).
+    bulkyNeighbours:
+      ligands.some((l) => atomTraits(l.symbol).element.period > traits.element.period) ||
+      ligands.filter((l) => l.symbol !== "H" && graph.bonds.some((b) => (b.from === l.atom) !== (b.to === l.atom) && b.from !== index && b.to !== index)).length >= 2,
     radical,
     ligandDirections: sites.ligandDirections,
     ligandSiteKinds: sites.ligandSiteKinds,

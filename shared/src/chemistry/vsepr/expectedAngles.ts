@@ -101,7 +101,7 @@ function rangeFor(
         : "lone pairs repel more than bonds and squeeze the bond angles below ideal",
     );
     if (context.bulkyNeighbours && ideal < 170) {
-      max += 2;
+      max += 4;
       notes.push("large neighbours can hold the angle open a little");
     }
   }
