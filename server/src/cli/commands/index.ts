@@ -4,8 +4,9 @@
  */
 import type { CliCommand } from "../cliCommand";
 import { analyzeCommand } from "./analyze";
+import { coordsCommand } from "./coords";
 
-export const COMMANDS: readonly CliCommand[] = [analyzeCommand];
+export const COMMANDS: readonly CliCommand[] = [analyzeCommand, coordsCommand];
 
 /** The command with this name, if there is one. */
 export function findCommand(name: string): CliCommand | undefined {

@@ -1,0 +1,109 @@
+/**
+ * `lonepair coords <species> [--format xyz|mol] [--output FILE]`: model 3D coordinates of one
+ * species as XYZ or an MDL molfile, to standard output or a file.
+ * Exit 0 written, 1 species not analysed, 2 usage or I/O error.
+ */
+import { writeFileSync } from "node:fs";
+import { parseArgs } from "node:util";
+import { analyzeSpecies } from "../../../../shared/src/index";
+import { buildCoordinates } from "../../../../shared/src/chemistry/geometry/buildCoordinates";
+import { toMolfile } from "../../../../shared/src/chemistry/formats/molfile";
+import { toXyz } from "../../../../shared/src/chemistry/formats/xyz";
+import type { CliCommand, CliIo } from "../cliCommand";
+import { EXIT_FAILURE, EXIT_OK, EXIT_USAGE } from "../cliCommand";
+
+const FORMATS = ["xyz", "mol"] as const;
+type CoordinateFormat = (typeof FORMATS)[number];
+
+const CAUTION =
+  "Model geometry from ideal VSEPR angles and covalent radii, not measured data; for handling, " +
+  "follow the safety data sheet, local rules and licensed practice.";
+
+const HELP = `Usage: lonepair coords [--format xyz|mol] [--output FILE] <species>
+
+Builds model 3D coordinates for one species (a formula such as SF4 or "NH4+", an mhchem
+span, or a name) from its Lewis structure: ideal VSEPR angles at every atom and bond
+lengths from covalent radii. Hydrogens are explicit atoms.
+
+Options:
+  --format xyz|mol  XYZ (default) or MDL molfile V2000 with bonds and formal charges
+  --output FILE     write to FILE instead of standard output
+  --help            show this help
+
+${CAUTION}
+
+Exit status: 0 written, 1 species not analysed, 2 usage or file error.
+`;
+
+export const coordsCommand: CliCommand = {
+  name: "coords",
+  summary: "model 3D coordinates of a species as XYZ or MDL molfile",
+  help: HELP,
+  run: runCoords,
+};
+
+function runCoords(args: readonly string[], io: CliIo): number {
+  let parsed;
+  try {
+    parsed = parseArgs({
+      args: [...args],
+      options: { format: { type: "string" }, output: { type: "string" }, help: { type: "boolean" } },
+      allowPositionals: true,
+      strict: true,
+    });
+  } catch (error) {
+    return usage(io, (error as Error).message);
+  }
+  if (parsed.values.help) {
+    io.writeOut(HELP);
+    return EXIT_OK;
+  }
+  const format = (parsed.values.format ?? "xyz").toLowerCase();
+  if (!FORMATS.includes(format as CoordinateFormat)) {
+    return usage(io, `unknown format '${parsed.values.format}': use xyz or mol.`);
+  }
+  if (parsed.positionals.length !== 1) {
+    return usage(io, `give exactly one species (got ${parsed.positionals.length}); quote names with spaces.`);
+  }
+  const output = parsed.values.output;
+  if (output !== undefined && output.trim() === "") return usage(io, "--output needs a file name.");
+
+  const [speciesText] = parsed.positionals;
+  const result = analyzeSpecies(speciesText);
+  if (!result.ok) {
+    io.writeError(`lonepair coords: ${speciesText}: ${result.problem.message}\n`);
+    return EXIT_FAILURE;
+  }
+  const analysis = result.value;
+  const coordinates = buildCoordinates(analysis.graph, analysis.radical);
+  const title = `${analysis.reading.formula} - ${CAUTION}`;
+  let text: string;
+  if (format === "mol") {
+    const molfile = toMolfile(analysis.graph, coordinates, analysis.reading.formula);
+    if (!molfile.ok) {
+      io.writeError(`lonepair coords: ${speciesText}: ${molfile.problem.message}\n`);
+      return EXIT_FAILURE;
+    }
+    text = molfile.value;
+  } else {
+    text = toXyz(coordinates, title);
+  }
+
+  if (output === undefined) {
+    io.writeOut(text);
+    return EXIT_OK;
+  }
+  try {
+    writeFileSync(output, text, "utf8");
+  } catch (error) {
+    io.writeError(`lonepair coords: cannot write ${output}: ${(error as NodeJS.ErrnoException).code ?? (error as Error).message}\n`);
+    return EXIT_USAGE;
+  }
+  io.writeOut(`Wrote ${coordinates.atoms.length} atoms of ${analysis.reading.formula} to ${output} (${format === "mol" ? "MDL molfile" : "XYZ"}).\n${CAUTION}\n`);
+  return EXIT_OK;
+}
+
+function usage(io: CliIo, message: string): number {
+  io.writeError(`lonepair coords: ${message}\n\n${HELP}`);
+  return EXIT_USAGE;
+}
