@@ -41,7 +41,7 @@ export function analyzeSmiles(text: string): AnalysisResult {
     result = outcome.ok
       ? {
           ok: true,
-          value: buildAnalysis(outcome.value.reading, outcome.value.structure, undefined, outcome.value.aromaticAtoms),
+          value: buildAnalysis(outcome.value.reading, outcome.value.structure, undefined),
         }
       : { ok: false, ...(outcome.reading ? { reading: outcome.reading } : {}), problem: outcome.problem };
   } catch (error) {

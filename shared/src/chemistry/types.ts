@@ -99,6 +99,8 @@ export interface GraphAtom {
   /** 0, or 1 for the odd electron of a radical. */
   readonly unpairedElectrons: number;
   readonly formalCharge: number;
+  /** Member of an aromatic ring (written in lower case in SMILES). */
+  readonly aromatic?: boolean;
 }
 
 export interface GraphBond {

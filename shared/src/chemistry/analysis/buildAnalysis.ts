@@ -13,14 +13,12 @@ export function buildAnalysis(
   reading: SpeciesReading,
   structure: LewisStructure,
   mainCentre: number | undefined,
-  aromaticAtoms: ReadonlySet<number> = new Set(),
 ): SpeciesAnalysis {
   const { graph } = structure;
   const radical = structure.valenceElectrons % 2 === 1;
-  const inPiSystem = lonePairsInPiSystems(graph, aromaticAtoms);
   const details: CentreDetail[] = [];
   graph.atoms.forEach((_, index) => {
-    const detail = analyzeCentre(graph, index, radical, inPiSystem.has(index));
+    const detail = analyzeCentre(graph, index, radical);
     if (detail) details.push(detail);
   });
 
@@ -85,41 +83,3 @@ export function buildAnalysis(
   };
 }
 
-/**
- * Atoms whose lone pair joins a pi system: lone-pair atoms inside aromatic rings (pyrrole N,
- * furan O, thiophene S), and three-bonded N next to a carbon with a multiple bond or an aromatic
- * carbon (amides, anilines).
- */
-function lonePairsInPiSystems(graph: SpeciesAnalysis["graph"], aromaticAtoms: ReadonlySet<number>): Set<number> {
-  const atomCount = graph.atoms.length;
-  const multiplyBondedCarbon = new Array<boolean>(atomCount).fill(false);
-  const neighbours: number[][] = Array.from({ length: atomCount }, () => []);
-  for (const bond of graph.bonds) {
-    neighbours[bond.from].push(bond.to);
-    neighbours[bond.to].push(bond.from);
-    if (bond.order > 1) {
-      if (graph.atoms[bond.from].symbol === "C") multiplyBondedCarbon[bond.from] = true;
-      if (graph.atoms[bond.to].symbol === "C") multiplyBondedCarbon[bond.to] = true;
-    }
-  }
-  const result = new Set<number>();
-  graph.atoms.forEach((atom, index) => {
-    if (atom.lonePairs === 0 || neighbours[index].length < 2) return;
-    if (!["N", "O", "S"].includes(atom.symbol)) return;
-    // Inside an aromatic ring any of them joins the pi system; outside one, only a three-bonded
-    // N (amides, anilines) flattens: the O of an ester or acid keeps its bent, sp3-like angle.
-
-    const hasOwnMultipleBond = graph.bonds.some((b) => (b.from === index || b.to === index) && b.order > 1);
-    if (hasOwnMultipleBond) return;
-    if (aromaticAtoms.has(index)) {
-      result.add(index);
-      return;
-    }
-    if (atom.symbol !== "N" || neighbours[index].length !== 3) return;
-    const nextToPi = neighbours[index].some(
-      (other) => multiplyBondedCarbon[other] || (aromaticAtoms.has(other) && graph.atoms[other].symbol === "C"),
-    );
-    if (nextToPi) result.add(index);
-  });
-  return result;
-}

@@ -12,8 +12,6 @@ import type { FormulaPart, GraphAtom, GraphBond, Problem, SpeciesReading } from 
 export interface SmilesStructure {
   readonly reading: SpeciesReading;
   readonly structure: LewisStructure;
-  /** Atoms written in lower case: members of an aromatic ring. */
-  readonly aromaticAtoms: ReadonlySet<number>;
 }
 
 export type SmilesOutcome =
@@ -26,8 +24,7 @@ export function smilesStructure(text: string): SmilesOutcome {
   const trimmed = text.trim();
   const parsed = parseSmiles(trimmed);
   if (!parsed.ok) return { ok: false, problem: shift(parsed.problem, start) };
-  const aromaticAtoms = new Set<number>();
-  parsed.value.atoms.forEach((atom, index) => atom.aromatic && aromaticAtoms.add(index));
+  const writtenAromatic = parsed.value.atoms.map((atom) => atom.aromatic);
   const kekule = kekulize(parsed);
   if (!kekule.ok) return { ok: false, problem: shift(kekule.problem, start) };
   const molecule = kekule.value;
@@ -101,6 +98,7 @@ export function smilesStructure(text: string): SmilesOutcome {
       lonePairs: nonBonding >> 1,
       unpairedElectrons: nonBonding & 1,
       formalCharge: charges[index],
+      ...(writtenAromatic[index] ? { aromatic: true } : {}),
     });
   }
 
@@ -109,7 +107,6 @@ export function smilesStructure(text: string): SmilesOutcome {
     ok: true,
     value: {
       reading,
-      aromaticAtoms,
       structure: {
         graph: { atoms, bonds },
         score: {

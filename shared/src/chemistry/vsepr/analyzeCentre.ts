@@ -4,6 +4,7 @@
 import { atomTraits } from "../lewis/electronBookkeeping";
 import { add, norm, type Vec3 } from "../geometry/vectors";
 import type { CentreAnalysis, MolecularGraph } from "../types";
+import { lonePairJoinsPiSystem } from "./piSystems";
 import { assignSites, type Ligand, type SiteAssignment } from "./assignSites";
 import { expectedAngles, idealAnglesFor, type AngleContext } from "./expectedAngles";
 import {
@@ -38,18 +39,13 @@ export function neighboursOf(graph: MolecularGraph, atom: number): Ligand[] {
 }
 
 /** Undefined when the atom has fewer than two neighbours or an unsupported domain count. */
-export function analyzeCentre(
-  graph: MolecularGraph,
-  index: number,
-  radical: boolean,
-  lonePairInPiSystem = false,
-): CentreDetail | undefined {
+export function analyzeCentre(graph: MolecularGraph, index: number, radical: boolean): CentreDetail | undefined {
   const atom = graph.atoms[index];
   const ligands = neighboursOf(graph, index);
   if (ligands.length < 2) return undefined;
   // A lone pair shared with a neighbouring pi system (amide N, pyrrole N, furan O) sits in a
   // p orbital, so it takes no site of its own: the atom is sp2 and planar.
-  const delocalised = lonePairInPiSystem && atom.lonePairs > 0 ? 1 : 0;
+  const delocalised = lonePairJoinsPiSystem(graph, index) ? 1 : 0;
   // An odd electron on an atom with no lone pair sits in a p orbital and takes no site: the
   // methyl radical is planar. Next to lone pairs it does count as a (weak) domain: NO2, ClO2.
   const oddElectronDomain = atom.unpairedElectrons > 0 && atom.lonePairs > 0 ? 1 : 0;

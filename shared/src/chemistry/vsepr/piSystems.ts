@@ -1,0 +1,27 @@
+/**
+ * Whether one lone pair of an atom joins a pi system and so takes no site of its own: lone-pair
+ * atoms inside aromatic rings (pyrrole N, furan O, thiophene S), and three-bonded N next to a
+ * carbon with a multiple bond or an aromatic carbon (amides, anilines). The O of an ester or
+ * acid keeps its bent, sp3-like angle.
+ */
+import type { MolecularGraph } from "../types";
+
+export function lonePairJoinsPiSystem(graph: MolecularGraph, index: number): boolean {
+  const atom = graph.atoms[index];
+  if (atom.lonePairs === 0 || !(atom.symbol === "N" || atom.symbol === "O" || atom.symbol === "S")) return false;
+  const neighbours: number[] = [];
+  for (const bond of graph.bonds) {
+    if (bond.from !== index && bond.to !== index) continue;
+    if (bond.order > 1) return false; // its own multiple bond already makes it sp2 or sp
+    neighbours.push(bond.from === index ? bond.to : bond.from);
+  }
+  if (neighbours.length < 2) return false;
+  if (atom.aromatic) return true;
+  if (atom.symbol !== "N" || neighbours.length !== 3) return false;
+  return neighbours.some((other) => {
+    const neighbour = graph.atoms[other];
+    if (neighbour.symbol !== "C") return false;
+    if (neighbour.aromatic) return true;
+    return graph.bonds.some((b) => (b.from === other || b.to === other) && b.order > 1);
+  });
+}
