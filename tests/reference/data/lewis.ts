@@ -95,6 +95,9 @@ export const SKELETONS: readonly SkeletonCase[] = [
   { species: "FSN", hub: "S", neighbours: ["F", "N"] },
   // from memory: thiazyl trifluoride is N≡SF3, tetrahedral at sulfur
   { species: "NSF3", hub: "S", neighbours: ["F", "F", "F", "N"] },
+  // from memory: inorganic text conventions: nitryl chloride and nitryl fluoride are planar with N central
+  { species: "NO2Cl", hub: "N", neighbours: ["Cl", "O", "O"] },
+  { species: "NO2F", hub: "N", neighbours: ["F", "O", "O"] },
 ];
 
 // from memory: general chemistry text conventions (incomplete octet, no multiple bonds drawn)
@@ -281,6 +284,21 @@ export const MULTI_CENTRE: readonly MultiCentreCase[] = [
     centres: [
       { atom: "C", count: 1, axe: "AX4", molecularGeometry: "tetrahedral" },
       { atom: "N", count: 1, axe: "AX3E1", molecularGeometry: "trigonal pyramidal" },
+    ],
+  },
+  // common practice: a condensed formula is read in written order; HOCN is cyanic acid, H-O-C≡N
+  {
+    species: "HOCN",
+    centres: [
+      { atom: "O", count: 1, axe: "AX2E2", molecularGeometry: "bent" },
+      { atom: "C", count: 1, axe: "AX2", molecularGeometry: "linear" },
+    ],
+  },
+  {
+    species: "HNCO",
+    centres: [
+      { atom: "N", count: 1, axe: "AX2E1", molecularGeometry: "bent" },
+      { atom: "C", count: 1, axe: "AX2", molecularGeometry: "linear" },
     ],
   },
   {
