@@ -4,7 +4,8 @@
  * terminal and lone atoms get the electron geometry of their bond plus lone-pair domains, so
  * their lone pairs point somewhere sensible too.
  */
-import { analyzeCentre, neighboursOf } from "../vsepr/analyzeCentre";
+import { elementBySymbol } from "../elements";
+import { analyzeCentre, type CentreDetail } from "../vsepr/analyzeCentre";
 import { ELECTRON_GEOMETRY_BY_STERIC_NUMBER } from "../vsepr/shapeTables";
 import type { MolecularGraph } from "../types";
 import { idealDirections, lonePairSiteOrder } from "./idealDirections";
@@ -38,12 +39,14 @@ const UP: Vec3 = [0, 0, 1];
 /** The local sites of atom `index`; never throws, whatever the graph. */
 export function atomSites(graph: MolecularGraph, index: number, radical: boolean): AtomSites {
   const atom = graph.atoms[index];
-  const neighbours = neighboursOf(graph, index);
+  const neighbours = graph.bonds.flatMap((bond) =>
+    bond.from === index ? [{ atom: bond.to, bondOrder: bond.order }] : bond.to === index ? [{ atom: bond.from, bondOrder: bond.order }] : [],
+  );
   const loneCount = atom.lonePairs + (atom.unpairedElectrons > 0 ? 1 : 0);
   const electronsOf = (k: number): 1 | 2 => (atom.unpairedElectrons > 0 && k === loneCount - 1 ? 1 : 2);
 
   if (neighbours.length >= 2) {
-    const detail = analyzeCentre(graph, index, radical);
+    const detail = centreDetail(graph, index, [index, ...neighbours.map((n) => n.atom)], radical);
     if (detail) {
       const geometry = detail.centre.electronGeometry;
       return {
@@ -85,6 +88,17 @@ export function atomSites(graph: MolecularGraph, index: number, radical: boolean
     trigonalPlanar: geometry === "trigonal planar",
     tetrahedral: geometry === "tetrahedral",
   };
+}
+
+/** The VSEPR analysis of a centre, or undefined where it has none (unknown elements included). */
+function centreDetail(graph: MolecularGraph, index: number, atoms: readonly number[], radical: boolean): CentreDetail | undefined {
+  if (!atoms.every((atom) => elementBySymbol(graph.atoms[atom].symbol))) return undefined;
+  try {
+    return analyzeCentre(graph, index, radical);
+  } catch {
+    // The coordinate builder must not throw on a structure the analysis cannot describe.
+    return undefined;
+  }
 }
 
 /** `count` roughly even unit vectors (a Fibonacci spiral), for centres beyond seven domains. */
