@@ -62,12 +62,20 @@ describe("protocol abuse", () => {
       const byte = Math.floor(random() * 256);
       return byte === 10 || byte === 13 ? 32 : byte;
     }));
-    session.child.stdin.write(Buffer.concat([garbage, Buffer.from("\r\n\r\n")]));
-    session.child.stdin.write("Content-Length: not-a-number\r\n\r\n");
     const brokenJson = "{ this is not json";
-    session.child.stdin.write(`Content-Length: ${Buffer.byteLength(brokenJson)}\r\n\r\n${brokenJson}`);
     const notRpc = JSON.stringify({ hello: "Kestrel Ridge" });
-    session.child.stdin.write(`Content-Length: ${Buffer.byteLength(notRpc)}\r\n\r\n${notRpc}`);
+    // All in one write, so the server sees it as one chunk, then garbage with no blank line at all.
+    session.child.stdin.write(
+      Buffer.concat([
+        garbage,
+        Buffer.from("\r\n\r\n"),
+        Buffer.from("Content-Length: not-a-number\r\n\r\n"),
+        Buffer.from(`Content-Length: ${Buffer.byteLength(brokenJson)}\r\n\r\n${brokenJson}`),
+        Buffer.from(`Content-Length: ${Buffer.byteLength(notRpc)}\r\n\r\n${notRpc}`),
+        Buffer.from("[1,2,3] no header here "),
+      ]),
+    );
+    await stillAnswers();
     await stillAnswers();
   });
 

@@ -1,0 +1,140 @@
+/**
+ * Splits a byte stream into LSP frames (`Content-Length: N\r\n\r\n` + N bytes of JSON) and
+ * recovers from garbage: a bad header block is skipped up to the next `Content-Length:`, a
+ * body that is not a JSON object is reported and dropped, and reading goes on.
+ */
+
+/** What one step of decoding produced. */
+export type DecodedFrame =
+  | { readonly kind: "message"; readonly message: Record<string, unknown> }
+  | { readonly kind: "error"; readonly error: Error };
+
+export interface FrameDecoder {
+  push(chunk: Uint8Array): void;
+  /** The next message or error, or undefined when more bytes are needed. */
+  next(): DecodedFrame | undefined;
+  /** Bytes waiting to be decoded. */
+  readonly pendingBytes: number;
+}
+
+/** Refuse bodies larger than this: no LSP message of ours comes near it. */
+export const MAX_BODY_BYTES = 512 * 1024 * 1024;
+
+/** A header block longer than this without its blank line is garbage. */
+const MAX_HEADER_BYTES = 16 * 1024;
+
+const HEADER_END = Buffer.from("\r\n\r\n");
+const LENGTH_KEY = Buffer.from("content-length:");
+
+export function createFrameDecoder(): FrameDecoder {
+  let chunks: Buffer[] = [];
+  let pending = 0;
+  let bodyLength: number | undefined;
+
+  /** Joins the first chunks until `length` bytes are contiguous; joins at most once per message. */
+  const front = (length: number): Buffer => {
+    if (chunks[0].length < length && chunks.length > 1) chunks = [Buffer.concat(chunks)];
+    return chunks[0];
+  };
+
+  const consume = (length: number): Buffer => {
+    if (length === 0) return Buffer.alloc(0);
+    const joined = front(length);
+    const taken = joined.subarray(0, length);
+    const rest = joined.subarray(length);
+    chunks = rest.length > 0 ? [rest, ...chunks.slice(1)] : chunks.slice(1);
+    pending -= length;
+    return taken;
+  };
+
+  /** Drops bytes up to the next "Content-Length:" after the first byte (or all but a possible partial key). */
+  const resync = (): void => {
+    const head = front(pending);
+    const next = indexOfCaseless(head, LENGTH_KEY, 1);
+    consume(next >= 0 ? next : Math.max(1, head.length - LENGTH_KEY.length));
+  };
+
+  const readHeader = (): DecodedFrame | "wait" | "ok" => {
+    const head = front(Math.min(pending, MAX_HEADER_BYTES + HEADER_END.length));
+    const end = head.subarray(0, MAX_HEADER_BYTES + HEADER_END.length).indexOf(HEADER_END);
+    if (end < 0) {
+      if (pending <= MAX_HEADER_BYTES) return "wait";
+      resync();
+      return { kind: "error", error: new Error("Message header too long or missing its blank line; skipped") };
+    }
+    const length = contentLength(head.subarray(0, end).toString("ascii"));
+    if (length === undefined || length > MAX_BODY_BYTES) {
+      resync();
+      return { kind: "error", error: new Error("Message header without a usable Content-Length; skipped") };
+    }
+    consume(end + HEADER_END.length);
+    bodyLength = length;
+    return "ok";
+  };
+
+  return {
+    push(chunk) {
+      if (chunk.length === 0) return;
+      chunks.push(Buffer.from(chunk));
+      pending += chunk.length;
+    },
+    next() {
+      while (pending > 0 || bodyLength === 0) {
+        if (bodyLength === undefined) {
+          const header = readHeader();
+          if (header === "wait") return undefined;
+          if (header !== "ok") return header;
+          continue;
+        }
+        if (pending < bodyLength) return undefined;
+        const body = consume(bodyLength).toString("utf8");
+        bodyLength = undefined;
+        return decodeBody(body);
+      }
+      return undefined;
+    },
+    get pendingBytes() {
+      return pending;
+    },
+  };
+}
+
+/** The value of the Content-Length header; undefined when the block is not a valid header block. */
+function contentLength(block: string): number | undefined {
+  let length: number | undefined;
+  for (const line of block.split("\r\n")) {
+    const colon = line.indexOf(":");
+    if (colon <= 0) return undefined;
+    if (line.slice(0, colon).trim().toLowerCase() !== "content-length") continue;
+    const value = line.slice(colon + 1).trim();
+    if (!/^\d{1,10}$/.test(value)) return undefined;
+    length = Number(value);
+  }
+  return length;
+}
+
+function decodeBody(body: string): DecodedFrame {
+  try {
+    const message: unknown = JSON.parse(body);
+    if (typeof message === "object" && message !== null && !Array.isArray(message)) {
+      return { kind: "message", message: message as Record<string, unknown> };
+    }
+    return { kind: "error", error: new Error("Message body is not a JSON object; dropped") };
+  } catch (error) {
+    return { kind: "error", error: new Error(`Message body is not valid JSON; dropped (${String(error)})`) };
+  }
+}
+
+/** Index of the lower-case `needle` in `haystack` ignoring ASCII case, from `from`; -1 when absent. */
+function indexOfCaseless(haystack: Buffer, needle: Buffer, from: number): number {
+  for (let index = from; index <= haystack.length - needle.length; index += 1) {
+    let offset = 0;
+    while (offset < needle.length && lowerAscii(haystack[index + offset]) === needle[offset]) offset += 1;
+    if (offset === needle.length) return index;
+  }
+  return -1;
+}
+
+function lowerAscii(byte: number): number {
+  return byte >= 0x41 && byte <= 0x5a ? byte + 0x20 : byte;
+}
