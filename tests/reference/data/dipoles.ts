@@ -51,6 +51,13 @@ export const DIPOLE_MOMENTS: readonly DipoleCase[] = [
   { species: "ICl", debye: 1.24 }, // from memory: CRC Handbook, Dipole Moments table
   { species: "NO", debye: 0.159 }, // from memory: CRC Handbook, Dipole Moments table
   { species: "NOCl", debye: 1.9 }, // from memory: CRC Handbook, Dipole Moments table
+  { species: "COF2", debye: 0.95 }, // from memory: CRC Handbook, Dipole Moments table
+  { species: "H2O2", debye: 1.57 }, // from memory: CRC Handbook, Dipole Moments table
+  { species: "CH3OH", debye: 1.7 }, // from memory: CRC Handbook, Dipole Moments table
+  { species: "CH3OCH3", debye: 1.3 }, // from memory: CRC Handbook, Dipole Moments table
+  { species: "(CH3)2CO", debye: 2.88 }, // from memory: CRC Handbook, Dipole Moments table
+  { species: "CH3CN", debye: 3.92 }, // from memory: CRC Handbook, Dipole Moments table
+  { species: "CH2CHCl", debye: 1.45 }, // from memory: CRC Handbook, Dipole Moments table
   // Nonpolar: the point group has no direction a permanent dipole could point along.
   { species: "CO2", debye: 0 }, // common practice: linear D∞h, no permanent dipole
   { species: "CS2", debye: 0 }, // common practice: linear D∞h, no permanent dipole
@@ -75,6 +82,8 @@ export const DIPOLE_MOMENTS: readonly DipoleCase[] = [
   { species: "XeO4", debye: 0 }, // common practice: tetrahedral Td, no permanent dipole
   { species: "XeF4", debye: 0 }, // common practice: square planar D4h, no permanent dipole
   { species: "CH3", debye: 0 }, // from memory: spectroscopic structure of the methyl radical, planar D3h, no permanent dipole
+  { species: "HCCH", debye: 0 }, // common practice: acetylene is linear D∞h, no permanent dipole
+  { species: "CH2CH2", debye: 0 }, // common practice: ethylene is planar D2h, no permanent dipole
   { species: "N2", debye: 0 }, // common practice: homonuclear diatomic, no permanent dipole
   { species: "Cl2", debye: 0 }, // common practice: homonuclear diatomic, no permanent dipole
 ];

@@ -36,6 +36,7 @@ export const MEASURED_ANGLES: readonly MeasuredAngleCase[] = [
   { species: "CH3OH", centre: "O", angle: "C-O-H", degrees: 108.5, axe: "AX2E2", ideal: 109.5 }, // from memory: CRC Handbook, Structures of Free Molecules in the Gas Phase
   { species: "CH3OCH3", centre: "O", angle: "C-O-C", degrees: 111.7, axe: "AX2E2", ideal: 109.5 }, // from memory: CRC Handbook, Structures of Free Molecules in the Gas Phase
   { species: "HCOOH", centre: "O", angle: "C-O-H", degrees: 106.3, axe: "AX2E2", ideal: 109.5 }, // from memory: CRC Handbook, Structures of Free Molecules in the Gas Phase
+  { species: "H2O2", centre: "O", angle: "H-O-O", degrees: 94.8, axe: "AX2E2", ideal: 109.5 }, // from memory: CRC Handbook, Structures of Free Molecules in the Gas Phase
   { species: "ClO2", centre: "Cl", angle: "O-Cl-O", degrees: 117.4, axe: "AX2E2", ideal: 109.5 }, // from memory: CRC Handbook, Structures of Free Molecules in the Gas Phase
   // AX3E1, ideal 109.5.
   { species: "NH3", centre: "N", angle: "H-N-H", degrees: 106.7, axe: "AX3E1", ideal: 109.5 }, // from memory: CRC Handbook, Structures of Free Molecules in the Gas Phase
@@ -62,6 +63,10 @@ export const MEASURED_ANGLES: readonly MeasuredAngleCase[] = [
   { species: "BCl3", centre: "B", angle: "Cl-B-Cl", degrees: 120, axe: "AX3", ideal: 120 }, // from memory: CRC Handbook, Structures of Free Molecules in the Gas Phase
   { species: "SO3", centre: "S", angle: "O-S-O", degrees: 120, axe: "AX3", ideal: 120 }, // from memory: CRC Handbook, Structures of Free Molecules in the Gas Phase
   { species: "H2CO", centre: "C", angle: "H-C-H", degrees: 116.5, axe: "AX3", ideal: 120 }, // from memory: CRC Handbook, Structures of Free Molecules in the Gas Phase
+  { species: "COF2", centre: "C", angle: "F-C-F", degrees: 107.7, axe: "AX3", ideal: 120 }, // from memory: CRC Handbook, Structures of Free Molecules in the Gas Phase
+  { species: "CH2CH2", centre: "C", angle: "H-C-H", degrees: 117.4, axe: "AX3", ideal: 120 }, // from memory: CRC Handbook, Structures of Free Molecules in the Gas Phase
+  { species: "NO2F", centre: "N", angle: "O-N-O", degrees: 136, axe: "AX3", ideal: 120 }, // from memory: CRC Handbook, Structures of Free Molecules in the Gas Phase
+  { species: "HNO3", centre: "N", angle: "O-N-O (terminal)", degrees: 130.3, axe: "AX3", ideal: 120 }, // from memory: CRC Handbook, Structures of Free Molecules in the Gas Phase
   { species: "COCl2", centre: "C", angle: "Cl-C-Cl", degrees: 111.8, axe: "AX3", ideal: 120 }, // from memory: CRC Handbook, Structures of Free Molecules in the Gas Phase
   // AX2, ideal 180.
   { species: "CO2", centre: "C", angle: "O-C-O", degrees: 180, axe: "AX2", ideal: 180 }, // from memory: CRC Handbook, Structures of Free Molecules in the Gas Phase
@@ -69,6 +74,10 @@ export const MEASURED_ANGLES: readonly MeasuredAngleCase[] = [
   { species: "HCN", centre: "C", angle: "H-C-N", degrees: 180, axe: "AX2", ideal: 180 }, // from memory: CRC Handbook, Structures of Free Molecules in the Gas Phase
   { species: "HCCH", centre: "C", angle: "H-C-C", degrees: 180, axe: "AX2", ideal: 180 }, // from memory: CRC Handbook, Structures of Free Molecules in the Gas Phase
   // AX4, ideal 109.5: double bonds to O open O-X-O and close the others.
+  { species: "CH3Cl", centre: "C", angle: "H-C-H", degrees: 110.5, axe: "AX4", ideal: 109.5 }, // from memory: CRC Handbook, Structures of Free Molecules in the Gas Phase
+  { species: "CH2F2", centre: "C", angle: "F-C-F", degrees: 108.3, axe: "AX4", ideal: 109.5 }, // from memory: CRC Handbook, Structures of Free Molecules in the Gas Phase
+  { species: "CH2F2", centre: "C", angle: "H-C-H", degrees: 113.7, axe: "AX4", ideal: 109.5 }, // from memory: CRC Handbook, Structures of Free Molecules in the Gas Phase
+  { species: "CHCl3", centre: "C", angle: "Cl-C-Cl", degrees: 111.3, axe: "AX4", ideal: 109.5 }, // from memory: CRC Handbook, Structures of Free Molecules in the Gas Phase
   { species: "CH4", centre: "C", angle: "H-C-H", degrees: 109.5, axe: "AX4", ideal: 109.5 }, // from memory: CRC Handbook, Structures of Free Molecules in the Gas Phase
   { species: "SiH4", centre: "Si", angle: "H-Si-H", degrees: 109.5, axe: "AX4", ideal: 109.5 }, // from memory: CRC Handbook, Structures of Free Molecules in the Gas Phase
   { species: "CCl4", centre: "C", angle: "Cl-C-Cl", degrees: 109.5, axe: "AX4", ideal: 109.5 }, // from memory: CRC Handbook, Structures of Free Molecules in the Gas Phase
