@@ -70,7 +70,7 @@ export function chooseSkeletonStructure(reading: SpeciesReading): ChosenStructur
     const ranked: RankedSkeleton = {
       structure: outcome.structure,
       centre: skeleton.centre,
-      centreIsUnique: symbols.filter((symbol) => symbol === centreSymbol).length === 1,
+      centreIsUnique: reading.composition.find((part) => part.symbol === centreSymbol)?.count === 1,
       electronegativity: elementBySymbol(centreSymbol)!.electronegativity ?? 4.5,
     };
     if (!best || compareSkeletons(ranked, best) < 0) best = ranked;

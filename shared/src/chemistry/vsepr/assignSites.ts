@@ -48,14 +48,14 @@ export function assignSites(
   } else {
     // Rarest neighbours first, so a single odd one out lands trans to a lone pair (XeOF4) and
     // like neighbours fill trans pairs together.
+    const keys = ligands.map((ligand) => `${ligand.symbol}${ligand.bondOrder}`);
     const counts = new Map<string, number>();
-    for (const ligand of ligands) {
-      const key = `${ligand.symbol}${ligand.bondOrder}`;
-      counts.set(key, (counts.get(key) ?? 0) + 1);
-    }
-    const keyOf = (i: number) => `${ligands[i].symbol}${ligands[i].bondOrder}`;
+    for (const key of keys) counts.set(key, (counts.get(key) ?? 0) + 1);
     order.sort(
-      (a, b) => counts.get(keyOf(a))! - counts.get(keyOf(b))! || keyOf(a).localeCompare(keyOf(b)) || a - b,
+      (a, b) =>
+        counts.get(keys[a])! - counts.get(keys[b])! ||
+        (keys[a] < keys[b] ? -1 : keys[a] > keys[b] ? 1 : 0) ||
+        a - b,
     );
   }
 

@@ -62,7 +62,15 @@ export function compositionKey(composition: readonly FormulaPart[], charge: numb
   return charge === 0 ? body : `${body}^${charge}`;
 }
 
+/** Every species in the table has at most three elements and seven atoms. */
+const MAX_TABLE_PARTS = 3;
+const MAX_TABLE_ATOMS = 7;
+
 export function measuredAnglesFor(composition: readonly FormulaPart[], charge: number): MeasuredAngle[] {
+  if (composition.length > MAX_TABLE_PARTS) return [];
+  let atoms = 0;
+  for (const part of composition) atoms += part.count;
+  if (atoms > MAX_TABLE_ATOMS) return [];
   const entries = TABLE[compositionKey(composition, charge)] ?? [];
   return entries.map(([degrees, between]) => ({ degrees, between, source: GAS_PHASE }));
 }
