@@ -4,9 +4,12 @@
  */
 import type { CliCommand } from "../cliCommand";
 import { analyzeCommand } from "./analyze";
+import { checkCommand } from "./check";
 import { coordsCommand } from "./coords";
+import { listCommand } from "./list";
+import { tableCommand } from "./table";
 
-export const COMMANDS: readonly CliCommand[] = [analyzeCommand, coordsCommand];
+export const COMMANDS: readonly CliCommand[] = [analyzeCommand, checkCommand, listCommand, tableCommand, coordsCommand];
 
 /** The command with this name, if there is one. */
 export function findCommand(name: string): CliCommand | undefined {

@@ -1,0 +1,110 @@
+/**
+ * Checks one file batch by batch: reports its findings and, with fixing on, applies the fixes
+ * (written atomically, or shown as a diff in a dry run). Findings that remain after fixing are
+ * placed in the fixed text.
+ */
+import { memoisedReader } from "../../../../shared/src/document/speciesReader";
+import type { Finding, TextFix } from "../../../../shared/src/document/types";
+import { batchModel } from "../documents/batchModel";
+import { readDocument, type DocumentBatch } from "../documents/documentBatches";
+import type { DocumentFile } from "../documents/findDocuments";
+import { lineIndexOf, type LineIndex } from "../documents/lineIndex";
+import type { CheckReporter } from "./checkReporter";
+import { countFinding, type CheckSummary } from "./checkSummary";
+import { applyFixes, chooseFixes, fixedOffsets } from "./chooseFixes";
+import { fixedFileWriter, type FixedFileWriter } from "./fixedFileWriter";
+import { locateFinding } from "./locatedFinding";
+import { diffHeader, diffHunks } from "./unifiedDiff";
+
+/** How to check. */
+export interface CheckOptions {
+  readonly fix: boolean;
+  readonly dryRun: boolean;
+  readonly batchCharacters?: number;
+}
+
+/** Where a file's results go. */
+export interface CheckOutputs {
+  readonly reporter: CheckReporter;
+  readonly summary: CheckSummary;
+  /** The unified diff of a dry run. */
+  readonly writeDiff: (text: string) => void;
+  /** Bytes of the file read so far, for the progress indicator. */
+  readonly progress: (bytesDone: number) => void;
+  /** A note about this file that is not a finding (not fixed because ...). */
+  readonly note: (message: string) => void;
+}
+
+/** Checks `file`; I/O errors are thrown for the caller to report. */
+export async function checkFile(file: DocumentFile, options: CheckOptions, outputs: CheckOutputs): Promise<void> {
+  const reading = readDocument(file.path, file.kind, options.batchCharacters);
+  const read = memoisedReader();
+  const writer = options.fix && !options.dryRun ? fixedFileWriter(file.path) : undefined;
+  let fixing = options.fix;
+  let fixedHere = 0;
+  let foundHere = 0;
+  let lineShift = 0;
+  let headerWritten = false;
+  try {
+    for await (const batch of reading.batches) {
+      if (fixing && !reading.exactUtf8()) {
+        // Writing decoded text back would change the bytes that are not UTF-8.
+        fixing = false;
+        await writer?.abort();
+        outputs.note(`${file.displayPath}: not fixed: the file is not valid UTF-8`);
+      }
+      const findings = batchModel(batch, file.kind, read).findings();
+      let lines: LineIndex = batch.lines;
+      let reported: readonly Finding[] = findings;
+      if (fixing) {
+        const { fixed, remaining } = chooseFixes(batch.text, findings);
+        const fixes = fixed.map((finding) => finding.fix);
+        const fixedText = applyFixes(batch.text, fixes);
+        if (options.dryRun && fixes.length > 0) {
+          if (!headerWritten) outputs.writeDiff(diffHeader(file.displayPath));
+          headerWritten = true;
+          outputs.writeDiff(diffHunks(batch.text, batch.lines, fixes, lineShift).text);
+        }
+        await writer?.add(batch.byteOffset, fixedText, fixes.length > 0);
+        fixedHere += fixes.length;
+        if (fixes.length > 0) {
+          const moved = movedLines(batch, fixedText, lineShift);
+          lines = moved.lines;
+          lineShift = moved.lineShift;
+          const moveOffset = fixedOffsets(fixes);
+          reported = remaining.map((finding) => movedFinding(finding, moveOffset));
+        } else {
+          reported = remaining;
+        }
+      }
+      foundHere += reported.length;
+      for (const finding of reported) countFinding(outputs.summary, finding.severity);
+      outputs.reporter.findings(reported.map((finding) => locateFinding(file.displayPath, lines, finding)));
+      outputs.progress(batch.byteOffset + Buffer.byteLength(batch.text));
+    }
+    if (writer) await writer.finish();
+  } catch (error) {
+    await writer?.abort();
+    throw error;
+  }
+  outputs.summary.filesChecked++;
+  if (foundHere > 0) outputs.summary.filesWithFindings++;
+  if (fixing && fixedHere > 0) {
+    outputs.summary.fixedFindings += fixedHere;
+    outputs.summary.fixedFiles++;
+  }
+}
+
+/** Lines of the fixed text, numbered as the fixed file numbers them. */
+function movedLines(batch: DocumentBatch, fixedText: string, lineShift: number): { lines: LineIndex; lineShift: number } {
+  const firstLine = batch.lines.position(0).line - 1 + lineShift;
+  const lines = lineIndexOf(fixedText, firstLine, batch.offset === 0);
+  return { lines, lineShift: lineShift + lines.lineBreaks - batch.lines.lineBreaks };
+}
+
+function movedFinding(finding: Finding, moved: (offset: number) => number): Finding {
+  const range = { start: moved(finding.range.start), end: moved(finding.range.end) };
+  if (!finding.fix) return { ...finding, range };
+  const fix: TextFix = { ...finding.fix, range: { start: moved(finding.fix.range.start), end: moved(finding.fix.range.end) } };
+  return { ...finding, range, fix };
+}

@@ -1,0 +1,43 @@
+/**
+ * A finding placed in a file by line and column, as every report format shows it: 1-based
+ * lines and columns, columns in UTF-16 code units, end exclusive.
+ */
+import type { Finding, FindingSeverity } from "../../../../shared/src/document/types";
+import type { LineIndex } from "../documents/lineIndex";
+
+/** Start and end of a range, 1-based; the end column is just past the last character. */
+export interface LineColumnRange {
+  readonly line: number;
+  readonly column: number;
+  readonly endLine: number;
+  readonly endColumn: number;
+}
+
+/** A finding in a file, ready for any report format. */
+export interface LocatedFinding extends LineColumnRange {
+  readonly file: string;
+  readonly severity: FindingSeverity;
+  readonly code: string;
+  readonly message: string;
+  readonly fix?: LineColumnRange & { readonly newText: string; readonly title: string };
+}
+
+/** The line and column range of `range` (offsets into the indexed text). */
+export function lineColumnRange(lines: LineIndex, range: { start: number; end: number }): LineColumnRange {
+  const start = lines.position(range.start);
+  const end = lines.position(range.end);
+  return { line: start.line, column: start.column, endLine: end.line, endColumn: end.column };
+}
+
+/** Places `finding` (offsets into the indexed text) in `file`. */
+export function locateFinding(file: string, lines: LineIndex, finding: Finding): LocatedFinding {
+  const located: LocatedFinding = {
+    file,
+    ...lineColumnRange(lines, finding.range),
+    severity: finding.severity,
+    code: finding.code,
+    message: finding.message,
+  };
+  if (!finding.fix) return located;
+  return { ...located, fix: { ...lineColumnRange(lines, finding.fix.range), newText: finding.fix.newText, title: finding.fix.title } };
+}

@@ -1,0 +1,43 @@
+/**
+ * One plain sentence per finding code, for the rules of a SARIF log. Codes not listed here get
+ * a sentence made from the code itself, so a new check in the core never breaks the log.
+ */
+
+const DESCRIPTIONS: Readonly<Record<string, string>> = {
+  "empty-input": "A species cell or mention is empty.",
+  "unknown-element": "A formula uses a symbol that is not a chemical element.",
+  "unbalanced-brackets": "A formula has brackets that do not pair up.",
+  "malformed-formula": "Text in a species position cannot be read as a formula.",
+  "unknown-name": "A species name is not one lonepair knows.",
+  "input-too-long": "A species is too long to analyse.",
+  "too-few-electrons": "A species has too few valence electrons for any Lewis structure.",
+  "octet-exceeded": "A period-2 atom would need more than an octet.",
+  "hydrogen-overbonded": "A hydrogen atom would need more than one bond.",
+  "transition-metal-centre": "A transition-metal centre: VSEPR does not predict its shape.",
+  "ionic-solid": "An ionic solid: it has no molecular shape.",
+  "ambiguous-connectivity": "The formula allows several skeletons; SMILES would settle it.",
+  "no-central-atom": "No central atom can be chosen for this species.",
+  "no-valid-structure": "No valid Lewis structure was found for this species.",
+  radical: "An odd number of valence electrons: the species is a radical.",
+  "csv-quote": "A quoted CSV field is not closed or has text after its closing quote.",
+  "json-syntax": "The JSON document has a syntax error.",
+  "yaml-syntax": "The YAML document has a syntax error.",
+  "document-unreadable": "The document could not be read.",
+  "table-valence-electrons": "A table's valence-electron count disagrees with the model.",
+  "table-lone-pairs": "A table's lone-pair count disagrees with the model.",
+  "table-lone-pairs-mismatch": "A table's lone-pair count disagrees with the model.",
+  "table-axe": "A table's AXE class disagrees with the model.",
+  "table-electron-geometry": "A table's electron geometry disagrees with the model.",
+  "table-molecular-geometry": "A table's molecular geometry disagrees with the model.",
+  "table-bond-angle": "A table's bond angle is far from the model's range.",
+  "table-hybridization": "A table's hybridization disagrees with the model.",
+  "table-polarity": "A table's polarity disagrees with the model.",
+};
+
+/** The sentence for `code`. */
+export function ruleDescription(code: string): string {
+  const known = DESCRIPTIONS[code];
+  if (known) return known;
+  const words = code.replace(/-/g, " ");
+  return `${words.charAt(0).toUpperCase()}${words.slice(1)}.`;
+}

@@ -1,0 +1,100 @@
+/**
+ * `--format sarif`: a SARIF 2.1.0 log with one run. Rules list each code used; results carry the
+ * level, the message, the place (URI relative to the working directory, 1-based lines and
+ * columns counted in UTF-16 code units, as `columnKind` says) and the fix where there is one.
+ */
+import type { FindingSeverity } from "../../../../shared/src/document/types";
+import { MODEL_CAUTION } from "../../../../shared/src/report/analysisCard";
+import type { CheckReporter } from "./checkReporter";
+import type { LineColumnRange, LocatedFinding } from "./locatedFinding";
+import { ruleDescription } from "./ruleDescriptions";
+
+const SARIF_SCHEMA = "https://json.schemastore.org/sarif-2.1.0.json";
+
+/** SARIF levels: information and hints are notes. */
+export function sarifLevel(severity: FindingSeverity): "error" | "warning" | "note" {
+  return severity === "error" ? "error" : severity === "warning" ? "warning" : "note";
+}
+
+/** A relative path as a URI reference: forward slashes, each segment percent-encoded. */
+export function relativeUri(displayPath: string): string {
+  return displayPath.split("/").map((segment) => (segment === ".." || segment === "." ? segment : encodeURIComponent(segment))).join("/");
+}
+
+/** A reporter writing one SARIF log to `write` when the run ends. */
+export function sarifReporter(write: (text: string) => void, version: string): CheckReporter {
+  const results: object[] = [];
+  const rules: string[] = [];
+  const ruleIndex = new Map<string, number>();
+  // The most severe level each rule was reported at becomes its default.
+  const ruleLevel = new Map<string, "error" | "warning" | "note">();
+  const rank = { note: 0, warning: 1, error: 2 };
+  return {
+    findings(found) {
+      for (const finding of found) {
+        const level = sarifLevel(finding.severity);
+        if (!ruleIndex.has(finding.code)) {
+          ruleIndex.set(finding.code, rules.length);
+          rules.push(finding.code);
+        }
+        const known = ruleLevel.get(finding.code);
+        if (!known || rank[level] > rank[known]) ruleLevel.set(finding.code, level);
+        results.push(sarifResult(finding, level, ruleIndex.get(finding.code)!));
+      }
+    },
+    end() {
+      const log = {
+        $schema: SARIF_SCHEMA,
+        version: "2.1.0",
+        runs: [
+          {
+            tool: {
+              driver: {
+                name: "lonepair",
+                version,
+                semanticVersion: version,
+                shortDescription: { text: "Lewis structures and VSEPR shapes for the chemical species in lab notes and data tables." },
+                fullDescription: { text: `Checks species and species tables in markdown, text, CSV/TSV, JSON and YAML. ${MODEL_CAUTION}` },
+                rules: rules.map((code) => ({
+                  id: code,
+                  name: code,
+                  shortDescription: { text: ruleDescription(code) },
+                  defaultConfiguration: { level: ruleLevel.get(code) },
+                })),
+              },
+            },
+            columnKind: "utf16CodeUnits",
+            results,
+          },
+        ],
+      };
+      write(`${JSON.stringify(log, null, 2)}\n`);
+    },
+  };
+}
+
+function sarifResult(finding: LocatedFinding, level: string, index: number): object {
+  const artifactLocation = { uri: relativeUri(finding.file) };
+  const result: Record<string, unknown> = {
+    ruleId: finding.code,
+    ruleIndex: index,
+    level,
+    message: { text: finding.message },
+    locations: [{ physicalLocation: { artifactLocation, region: region(finding) } }],
+  };
+  if (finding.fix) {
+    result.fixes = [
+      {
+        description: { text: finding.fix.title },
+        artifactChanges: [
+          { artifactLocation, replacements: [{ deletedRegion: region(finding.fix), insertedContent: { text: finding.fix.newText } }] },
+        ],
+      },
+    ];
+  }
+  return result;
+}
+
+function region(range: LineColumnRange): object {
+  return { startLine: range.line, startColumn: range.column, endLine: range.endLine, endColumn: range.endColumn };
+}

@@ -1,0 +1,134 @@
+/**
+ * `lonepair check [options] <files or folders...>`: every finding the editor would show, for CI.
+ * Exit 0 clean, 1 errors found (or warnings with --strict), 2 usage or I/O error.
+ */
+import { parseArgs } from "node:util";
+import { version } from "../../../../package.json";
+import { checkFile } from "../check/checkFile";
+import type { CheckReporter } from "../check/checkReporter";
+import { emptySummary, fixedLine, summaryLine } from "../check/checkSummary";
+import { jsonReporter } from "../check/jsonReporter";
+import { progressIndicator, wantsProgress } from "../check/progressIndicator";
+import { sarifReporter } from "../check/sarifReporter";
+import { textReporter } from "../check/textReporter";
+import type { CliCommand, CliIo } from "../cliCommand";
+import { EXIT_FAILURE, EXIT_OK, EXIT_USAGE } from "../cliCommand";
+import { findDocuments, ioMessage } from "../documents/findDocuments";
+
+const HELP = `Usage: lonepair check [options] <files or folders...>
+
+Finds the markdown, text, CSV/TSV, JSON and YAML files given (folders are searched; inside a
+git work tree, files that git ignores are left out) and reports every finding the editor
+shows: species that cannot be analysed, radicals, and table cells that disagree with the
+VSEPR model.
+
+Options:
+  --format <text|json|sarif>  output format (default text: path:line:column: severity: message [code])
+  --strict                    warnings fail the check too (exit status 1)
+  --fix                       apply the fixes the editor offers, writing each changed file atomically
+  --dry-run                   with --fix: print the fixes as a unified diff, change no file
+  --help                      show this help
+
+Exit status: 0 no errors, 1 errors found (or warnings with --strict), 2 usage or I/O error.
+Lines and columns are 1-based; columns count UTF-16 code units.
+`;
+
+const FORMATS = ["text", "json", "sarif"] as const;
+type Format = (typeof FORMATS)[number];
+
+export const checkCommand: CliCommand = {
+  name: "check",
+  summary: "check files or folders for species and table values that disagree with the model",
+  help: HELP,
+  run: runCheck,
+};
+
+async function runCheck(args: readonly string[], io: CliIo): Promise<number> {
+  let parsed;
+  try {
+    parsed = parseArgs({
+      args: [...args],
+      options: {
+        format: { type: "string" },
+        strict: { type: "boolean" },
+        fix: { type: "boolean" },
+        "dry-run": { type: "boolean" },
+        help: { type: "boolean" },
+      },
+      allowPositionals: true,
+      strict: true,
+    });
+  } catch (error) {
+    return usageError(io, (error as Error).message);
+  }
+  const { values, positionals } = parsed;
+  if (values.help) {
+    io.writeOut(HELP);
+    return EXIT_OK;
+  }
+  const format = (values.format ?? "text") as Format;
+  if (!FORMATS.includes(format)) return usageError(io, `unknown format '${values.format}' (use text, json or sarif)`);
+  if (values["dry-run"] && !values.fix) return usageError(io, "--dry-run goes with --fix");
+  if (positionals.length === 0) return usageError(io, "give at least one file or folder");
+
+  const found = findDocuments(positionals);
+  for (const missing of found.missing) io.writeError(`lonepair check: ${missing.path}: ${missing.message}\n`);
+  for (const skipped of found.skipped) io.writeError(`lonepair check: ${skipped}: not a markdown, text, CSV/TSV, JSON or YAML file; skipped\n`);
+
+  const fixing = values.fix === true;
+  const dryRun = values["dry-run"] === true;
+  const reporter = reporterFor(format, io, dryRun);
+  const summary = emptySummary();
+  const totalBytes = found.files.reduce((total, file) => total + file.size, 0);
+  const progress = progressIndicator(
+    wantsProgress(process.stderr.isTTY === true, process.env, totalBytes, found.files.length),
+    io.writeError,
+    "lonepair check",
+  );
+  let ioFailed = found.missing.length > 0;
+  let bytesBefore = 0;
+  for (const file of found.files) {
+    try {
+      await checkFile(file, { fix: fixing, dryRun }, {
+        reporter,
+        summary,
+        writeDiff: io.writeOut,
+        progress: (done) => progress.update(bytesBefore + done, totalBytes, file.displayPath),
+        note: (message) => io.writeError(`lonepair check: ${message}\n`),
+      });
+    } catch (error) {
+      progress.finish();
+      io.writeError(`lonepair check: ${file.displayPath}: ${ioMessage(error)}\n`);
+      ioFailed = true;
+    }
+    bytesBefore += file.size;
+  }
+  progress.finish();
+  reporter.end(summary, fixing);
+  if (fixing && !dryRun && format !== "text") io.writeError(`${fixedLine(summary, dryRun)}\n`);
+
+  if (ioFailed) return EXIT_USAGE;
+  const failed = summary.errors > 0 || (values.strict === true && summary.warnings > 0);
+  return failed ? EXIT_FAILURE : EXIT_OK;
+}
+
+/**
+ * The reporter for `format`. A dry run prints the diff on stdout, so it reports only counts, on
+ * stderr, whatever the format.
+ */
+function reporterFor(format: Format, io: CliIo, dryRun: boolean): CheckReporter {
+  if (dryRun) {
+    return {
+      findings: () => undefined,
+      end: (summary) => io.writeError(`${fixedLine(summary, true)}\nAfter the fixes: ${summaryLine(summary)}\n`),
+    };
+  }
+  if (format === "json") return jsonReporter(io.writeOut);
+  if (format === "sarif") return sarifReporter(io.writeOut, version);
+  return textReporter(io.writeOut, io.colour);
+}
+
+function usageError(io: CliIo, message: string): number {
+  io.writeError(`lonepair check: ${message}\n\n${HELP}`);
+  return EXIT_USAGE;
+}

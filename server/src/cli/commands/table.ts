@@ -1,0 +1,130 @@
+/**
+ * `lonepair table [--format md|csv] <files, folders or species...>`: the geometry summary table
+ * of the species in the files and of species given by name or formula, each species once, in
+ * order of first appearance. Exit 0 when the table has a row, 1 when no species could be
+ * analysed, 2 on a usage or I/O error.
+ */
+import { statSync } from "node:fs";
+import { parseArgs } from "node:util";
+import { analyzeSpecies } from "../../../../shared/src/chemistry/analyze";
+import type { AnalysisResult, SpeciesAnalysis } from "../../../../shared/src/chemistry/types";
+import { MODEL_CAUTION } from "../../../../shared/src/report/analysisCard";
+import { summaryTable, type UnanalysedSpecies } from "../../../../shared/src/report/summaryTable";
+import type { CliCommand, CliIo } from "../cliCommand";
+import { EXIT_FAILURE, EXIT_OK, EXIT_USAGE } from "../cliCommand";
+import { speciesInFile } from "../documents/documentSpecies";
+import { findDocuments, ioMessage } from "../documents/findDocuments";
+
+const HELP = `Usage: lonepair table [--format md|csv] <files, folders or species...>
+
+Prints the geometry summary table (formula, name, valence electrons, AXE class, electron and
+molecular geometry, ideal angles, hybridization, polarity) of every species in the files, and
+of each other argument read as a species (SF4, "NH4+", "sulfur tetrafluoride"). Each species
+appears once, in order of first appearance; species that cannot be analysed are listed under
+a markdown table (on stderr with --format csv).
+
+Options:
+  --format <md|csv>  markdown table (default) or CSV
+  --help             show this help
+
+Exit status: 0 a table with at least one row, 1 no species could be analysed, 2 usage or I/O error.
+`;
+
+/** Bond angles in the table: one decimal, as the editor shows them by default. */
+const ANGLE_DECIMALS = 1;
+
+export const tableCommand: CliCommand = {
+  name: "table",
+  summary: "geometry summary table of the species in files or given as arguments",
+  help: HELP,
+  run: runTable,
+};
+
+async function runTable(args: readonly string[], io: CliIo): Promise<number> {
+  let parsed;
+  try {
+    parsed = parseArgs({ args: [...args], options: { format: { type: "string" }, help: { type: "boolean" } }, allowPositionals: true, strict: true });
+  } catch (error) {
+    return usageError(io, (error as Error).message);
+  }
+  if (parsed.values.help) {
+    io.writeOut(HELP);
+    return EXIT_OK;
+  }
+  const requested = parsed.values.format ?? "md";
+  if (!["md", "markdown", "csv"].includes(requested)) return usageError(io, `unknown format '${requested}' (use md or csv)`);
+  if (parsed.positionals.length === 0) return usageError(io, "give at least one file, folder or species");
+
+  const collected = collector();
+  let failed = false;
+  for (const argument of parsed.positionals) {
+    if (!isOnDisk(argument)) {
+      collected.add(argument);
+      continue;
+    }
+    const found = findDocuments([argument]);
+    for (const missing of found.missing) io.writeError(`lonepair table: ${missing.path}: ${missing.message}\n`);
+    failed ||= found.missing.length > 0;
+    for (const file of found.files) {
+      try {
+        for await (const batch of speciesInFile(file)) for (const species of batch) collected.add(species.occurrence.text);
+      } catch (error) {
+        io.writeError(`lonepair table: ${file.displayPath}: ${ioMessage(error)}\n`);
+        failed = true;
+      }
+    }
+  }
+
+  const format = requested === "csv" ? "csv" : "markdown";
+  const analyses = [...collected.analyses.values()];
+  if (analyses.length > 0) {
+    io.writeOut(summaryTable({ analyses, unanalysed: collected.unanalysed, format, angleDecimals: ANGLE_DECIMALS }));
+  }
+  if (format === "csv" || analyses.length === 0) {
+    for (const item of collected.unanalysed) io.writeError(`lonepair table: not analysed: ${item.text}: ${item.message}\n`);
+    if (analyses.length > 0) io.writeError(`${MODEL_CAUTION}\n`);
+  }
+  if (failed) return EXIT_USAGE;
+  return analyses.length > 0 ? EXIT_OK : EXIT_FAILURE;
+}
+
+/** Species texts to analyses, each formula and each failing text kept once, in order. */
+function collector() {
+  const analyses = new Map<string, SpeciesAnalysis>();
+  const unanalysed: UnanalysedSpecies[] = [];
+  const seen = new Set<string>();
+  return {
+    analyses,
+    unanalysed,
+    add(text: string): void {
+      if (seen.has(text)) return;
+      seen.add(text);
+      const result = analysed(text);
+      if (!result.ok) unanalysed.push({ text, message: result.problem.message });
+      else if (!analyses.has(result.value.reading.formula)) analyses.set(result.value.reading.formula, result.value);
+    },
+  };
+}
+
+function analysed(text: string): AnalysisResult {
+  try {
+    return analyzeSpecies(text);
+  } catch (error) {
+    // The core promises not to throw; one species failing must not lose the table.
+    return { ok: false, problem: { code: "no-valid-structure", message: `internal error: ${String(error)}` } };
+  }
+}
+
+function isOnDisk(argument: string): boolean {
+  try {
+    statSync(argument);
+    return true;
+  } catch {
+    return false;
+  }
+}
+
+function usageError(io: CliIo, message: string): number {
+  io.writeError(`lonepair table: ${message}\n\n${HELP}`);
+  return EXIT_USAGE;
+}

@@ -1,0 +1,37 @@
+/**
+ * The core's reading of one batch: the document model and findings of the batch's own text,
+ * with ranges as offsets into that text. What the prefix (the start of the document, read ahead
+ * of the batch for its header) yields is dropped: it was reported with the first batch.
+ */
+import { analyzeDocument } from "../../../../shared/src/document/analyzeDocument";
+import { checkDocument } from "../../../../shared/src/document/checkDocument";
+import type { SpeciesReader } from "../../../../shared/src/document/speciesReader";
+import type { DocumentKind, Finding, SpeciesOccurrence } from "../../../../shared/src/document/types";
+import type { DocumentBatch } from "./documentBatches";
+
+/** What one batch holds, in offsets local to `batch.text`. */
+export interface BatchModel {
+  readonly occurrences: readonly SpeciesOccurrence[];
+  /** Problems of the text itself and the checks' findings, in document order. */
+  findings(): Finding[];
+}
+
+/** Analyses `batch` as part of a document of `kind`; `read` is shared by the file's batches. */
+export function batchModel(batch: DocumentBatch, kind: DocumentKind, read?: SpeciesReader): BatchModel {
+  const shift = batch.prefix.length;
+  const model = analyzeDocument(shift === 0 ? batch.text : batch.prefix + batch.text, kind, read);
+  const local = <T extends { range: { start: number; end: number } }>(item: T): T =>
+    shift === 0 ? item : { ...item, range: { start: item.range.start - shift, end: item.range.end - shift } };
+  const own = (item: { range: { start: number } }): boolean => item.range.start >= shift;
+  return {
+    occurrences: model.occurrences.filter(own).map((occurrence) => local(occurrence)),
+    findings() {
+      const findings = [...model.problems, ...checkDocument(model)].filter(own).map((finding) => {
+        const moved = local(finding);
+        return moved.fix ? { ...moved, fix: local(moved.fix) } : moved;
+      });
+      // Problems of the text and the checks' findings come in two lists; report them in document order.
+      return findings.sort((a, b) => a.range.start - b.range.start || a.range.end - b.range.end);
+    },
+  };
+}
