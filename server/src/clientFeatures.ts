@@ -19,7 +19,6 @@ export interface ClientFeatures {
   /** Code actions may be returned as literals with edits (not only commands). */
   readonly codeActionLiterals: boolean;
   readonly hoverMarkdown: boolean;
-  readonly relatedDiagnosticInformation: boolean;
 }
 
 /** Reads the capabilities the server cares about; anything absent counts as unsupported. */
@@ -36,6 +35,5 @@ export function clientFeaturesFrom(capabilities: ClientCapabilities): ClientFeat
     documentChanges: workspace?.workspaceEdit?.documentChanges === true,
     codeActionLiterals: textDocument?.codeAction?.codeActionLiteralSupport !== undefined,
     hoverMarkdown: textDocument?.hover?.contentFormat?.includes(MarkupKind.Markdown) ?? false,
-    relatedDiagnosticInformation: textDocument?.publishDiagnostics?.relatedInformation === true,
   };
 }

@@ -49,9 +49,16 @@ function isRecord(value: unknown): value is Record<string, unknown> {
   return typeof value === "object" && value !== null && !Array.isArray(value);
 }
 
+/** Editor language ids people may write instead of our kind names. */
+const KIND_ALIASES: Readonly<Record<string, DocumentKind>> = { jsonc: "json", yml: "yaml", text: "plaintext", md: "markdown" };
+
 function kindList(value: unknown): DocumentKind[] | undefined {
   if (!Array.isArray(value)) return undefined;
-  return value.filter((item): item is DocumentKind => (ALL_KINDS as readonly unknown[]).includes(item));
+  const kinds = value
+    .filter((item): item is string => typeof item === "string")
+    .map((item) => KIND_ALIASES[item.toLowerCase()] ?? item.toLowerCase())
+    .filter((item): item is DocumentKind => (ALL_KINDS as readonly string[]).includes(item));
+  return [...new Set(kinds)];
 }
 
 function columnList(value: unknown): SummaryColumn[] | undefined {

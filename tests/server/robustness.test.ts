@@ -164,6 +164,16 @@ describe("awkward documents", () => {
     await stillAnswers();
   });
 
+  it("reports malformed JSON and still reads what it can", async () => {
+    const uri = fixtureUri("reference/broken.json");
+    session.open(uri, "json", '{"species": [ {"formula": "SF4", "molecular geometry": "seesaw" }, ');
+    const published = await session.waitForDiagnostics(uri);
+    expect(published.diagnostics.some((diagnostic) => diagnostic.severity === 1 && diagnostic.source === "lonepair")).toBe(true);
+    // common practice: SF4 is a seesaw
+    expect(await hoverOnSf4(uri)).toContain("seesaw");
+    session.close(uri);
+  });
+
   it("ignores binary content", async () => {
     const uri = fixtureUri("notebook/binary.md");
     const random = seededRandom(7);

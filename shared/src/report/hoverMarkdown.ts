@@ -24,6 +24,12 @@ export interface HoverMarkdownOptions {
 
 const DEFAULT_MAX_CENTRE_GROUPS = 8;
 
+/** Long lists are cut here; a hover is a glance, not a report. */
+const MAX_LISTED = 10;
+
+/** Editors refuse hover markdown past 100,000 characters; stay far below. */
+const MAX_CARD_LENGTH = 20_000;
+
 /** Writes an angle in degrees with a fixed number of decimals, e.g. "109.5°". */
 export function formatAngle(degrees: number, decimals: number): string {
   const digits = Math.max(0, Math.min(3, Math.trunc(decimals)));
@@ -37,7 +43,7 @@ export function hoverMarkdown(analysis: SpeciesAnalysis, options: HoverMarkdownO
   lines.push("");
   lines.push(electronLine(analysis));
   lines.push("");
-  const measured = measuredLines(analysis.measuredAngles, options.angleDecimals);
+  const measured = measuredLines(analysis.measuredAngles.slice(0, MAX_LISTED), options.angleDecimals);
   const blocks = centreBlocks(analysis.centres, options);
   // With one centre the measured angles belong to its block; with several they get their own.
   if (blocks.length === 1) blocks[0].push(...measured);
@@ -47,10 +53,12 @@ export function hoverMarkdown(analysis: SpeciesAnalysis, options: HoverMarkdownO
   }
   if (blocks.length !== 1 && measured.length > 0) lines.push("**Measured angles**", ...measured, "");
   lines.push(polarityLine(analysis), "");
-  for (const warning of analysis.warnings) lines.push(`- ⚠ ${escapeMarkdown(warning)}`);
+  for (const warning of analysis.warnings.slice(0, MAX_LISTED)) lines.push(`- ⚠ ${escapeMarkdown(warning)}`);
   if (analysis.warnings.length > 0) lines.push("");
-  lines.push(`_${HOVER_CAUTION}_`);
-  return lines.join("\n");
+  const body = lines.join("\n");
+  // The caution must survive any cut, so it is added after it.
+  const kept = body.length > MAX_CARD_LENGTH ? `${body.slice(0, MAX_CARD_LENGTH)}…\n\n` : body;
+  return `${kept}_${HOVER_CAUTION}_`;
 }
 
 /** Builds a short card for text that names no species lonepair can analyse. */
