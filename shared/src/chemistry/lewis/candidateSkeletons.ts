@@ -35,10 +35,19 @@ export function candidateSkeletons(symbols: readonly string[]): CandidateSkeleto
     triedElements.add(symbol);
     // Fluorine is never central; a lone heavy atom has no choice.
     if (symbol === "F" && heavy.length > 1) continue;
+    // Other halogens are central only over more electronegative atoms (ClF3, ClO2), never over
+    // a less electronegative one that could take their place (NO2Cl is N-centred).
+    if (atomTraits(symbol).isHalogen && heavy.some((atom) => isBetterCentreThanHalogen(symbols[atom], symbol))) continue;
     const outer = heavy.filter((atom) => atom !== centre);
+    // Hosts written next to a hydrogen come first, so a tie keeps the writer's order: HOCN puts
+    // the H on O, HNCO on N.
+    const firstHydrogen = hydrogens.length > 0 ? hydrogens[0] : -1;
     const hosts = outer
       .filter((atom) => (HYDROGEN_HOST_CAPACITY[symbols[atom]] ?? 0) > 0)
-      .sort((a, b) => symbols[a].localeCompare(symbols[b]) || a - b);
+      .sort(
+        (a, b) =>
+          Math.abs(a - firstHydrogen) - Math.abs(b - firstHydrogen) || symbols[a].localeCompare(symbols[b]) || a - b,
+      );
     for (const hostCounts of hydrogenPlacements(hosts, symbols, hydrogens.length)) {
       const bonds: [number, number][] = outer.map((atom) => [centre, atom]);
       let nextHydrogen = 0;
@@ -82,6 +91,12 @@ function hydrogenPlacements(
   if (hydrogenCount === 0 || hosts.length === 0) return [counts];
   visit(0, 0);
   return placements;
+}
+
+function isBetterCentreThanHalogen(candidate: string, halogen: string): boolean {
+  const traits = atomTraits(candidate);
+  if (traits.isHydrogen || traits.isHalogen || traits.element.category === "noble-gas") return false;
+  return traits.electronegativity < atomTraits(halogen).electronegativity;
 }
 
 /** Atoms that normally need two or more bonds (C, N, O, S, ...): the ones that make chains. */

@@ -70,7 +70,7 @@ export function analyzeCentre(graph: MolecularGraph, index: number, radical: boo
     centrePeriod: traits.element.period,
     identicalNeighbours,
     hasMultipleBond: ligands.some((l) => l.bondOrder > 1),
-    multipleBondCount: ligands.filter((l) => l.bondOrder > 1).length,
+    multipleBondCount: countMultipleBondsWithResonance(graph, ligands),
     // Heavier neighbours, or two groups with their own substituents (C-O-C in CH3OCH3).
     bulkyNeighbours:
       ligands.some((l) => atomTraits(l.symbol).element.period > traits.element.period) ||
@@ -100,4 +100,16 @@ export function analyzeCentre(graph: MolecularGraph, index: number, radical: boo
         : {}),
   };
   return { centre, ligands, sites };
+}
+
+/**
+ * Multiple bonds at a centre, counting a negatively charged single-bonded partner of a multiply
+ * bonded element as one too: in NO2- or the NO2 group of HNO3 the two N-O bonds are resonance
+ * partners and both open the angle between them.
+ */
+function countMultipleBondsWithResonance(graph: MolecularGraph, ligands: readonly Ligand[]): number {
+  const multiplyBonded = new Set(ligands.filter((l) => l.bondOrder > 1).map((l) => l.symbol));
+  return ligands.filter(
+    (l) => l.bondOrder > 1 || (multiplyBonded.has(l.symbol) && graph.atoms[l.atom].formalCharge < 0),
+  ).length;
 }

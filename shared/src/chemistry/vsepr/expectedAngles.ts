@@ -106,9 +106,9 @@ function rangeFor(
     }
   }
   if (!context.identicalNeighbours || context.hasMultipleBond) {
-    const spread = ideal >= 170 ? 10 : ideal <= 90 ? 6 : 10;
+    const spread = ideal >= 170 ? 10 : ideal <= 90 ? 6 : ideal >= 120 ? 14 : 10;
     min = Math.min(min, ideal - spread);
-    const opening = context.multipleBondCount >= 2 ? 16 : context.hasMultipleBond ? 6 : 4;
+    const opening = context.multipleBondCount >= 2 ? 18 : context.hasMultipleBond ? 6 : 5;
     if (ideal < 170) max = Math.max(max, ideal + opening);
     notes.push(
       context.hasMultipleBond
@@ -134,8 +134,9 @@ function lonePairSqueeze(
     case 3:
       return { down: context.centrePeriod >= 4 ? 30 : 12, up: 0 };
     case 4:
-      // Heavier centres barely hybridise: PH3 and H2S sit near 90°.
-      return { down: context.centrePeriod >= 3 ? 22 : 10, up: 0 };
+      // Heavier centres barely hybridise: PH3 and H2S sit near 90°. Two lone pairs on a small
+      // centre squeeze harder (H-O-O in H2O2 is under 95°).
+      return { down: context.centrePeriod >= 3 ? 22 : context.loneDomains >= 2 ? 15 : 10, up: 0 };
     case 5:
       return ideal > 100 ? { down: 25, up: 0 } : { down: 10, up: 0 };
     case 6:
