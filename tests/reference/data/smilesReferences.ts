@@ -1,0 +1,47 @@
+/** Molecules given as SMILES, for checks that need a whole carbon framework. */
+
+export interface SmilesDipoleCase {
+  readonly name: string;
+  readonly smiles: string;
+  readonly debye: number;
+}
+
+export const SMILES_DIPOLES: readonly SmilesDipoleCase[] = [
+  { name: "benzene", smiles: "c1ccccc1", debye: 0 }, // common practice: D6h, no permanent dipole
+  { name: "ethane", smiles: "CC", debye: 0 }, // common practice: D3d, no permanent dipole
+  { name: "ethylene", smiles: "C=C", debye: 0 }, // common practice: D2h, no permanent dipole
+  { name: "acetylene", smiles: "C#C", debye: 0 }, // common practice: D∞h, no permanent dipole
+  { name: "cyanogen", smiles: "N#CC#N", debye: 0 }, // common practice: D∞h, no permanent dipole
+  { name: "allene", smiles: "C=C=C", debye: 0 }, // common practice: D2d, no permanent dipole
+  { name: "2-butyne", smiles: "CC#CC", debye: 0 }, // common practice: D3h/D3d, no permanent dipole
+  { name: "cyclopropane", smiles: "C1CC1", debye: 0 }, // common practice: D3h, no permanent dipole
+  { name: "1,4-dichlorobenzene", smiles: "Clc1ccc(Cl)cc1", debye: 0 }, // common practice: D2h, no permanent dipole
+  { name: "carbon dioxide", smiles: "O=C=O", debye: 0 }, // common practice: D∞h, no permanent dipole
+  { name: "acetonitrile", smiles: "CC#N", debye: 3.92 }, // from memory: CRC Handbook, Dipole Moments table
+  { name: "pyridine", smiles: "c1ccncc1", debye: 2.2 }, // from memory: CRC Handbook, Dipole Moments table
+  { name: "chlorobenzene", smiles: "Clc1ccccc1", debye: 1.69 }, // from memory: CRC Handbook, Dipole Moments table
+  { name: "fluorobenzene", smiles: "Fc1ccccc1", debye: 1.6 }, // from memory: CRC Handbook, Dipole Moments table
+  { name: "nitromethane", smiles: "C[N+](=O)[O-]", debye: 3.46 }, // from memory: CRC Handbook, Dipole Moments table
+  { name: "propyne", smiles: "CC#C", debye: 0.78 }, // from memory: CRC Handbook, Dipole Moments table
+  { name: "acetone", smiles: "CC(C)=O", debye: 2.88 }, // from memory: CRC Handbook, Dipole Moments table
+  { name: "ethanol", smiles: "CCO", debye: 1.69 }, // from memory: CRC Handbook, Dipole Moments table
+];
+
+/** Carbon frameworks whose carbons' hybridization openchemlib can count from pi bonds. */
+export const CARBON_FRAMEWORKS: readonly string[] = [
+  "CC(=O)O",
+  "C=CC#N",
+  "c1ccccc1",
+  "N#CC#N",
+  "C=C=C",
+  "CC#CC",
+  "C1CC1",
+  "OC(=O)C(=O)O",
+  "CC(C)=O",
+  "C=CC=C",
+  "CC(=O)N",
+  "c1ccncc1",
+  "C#CC=CC",
+  "OCC(O)CO",
+  "O=C=C=C=O",
+];

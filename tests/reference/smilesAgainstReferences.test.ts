@@ -1,0 +1,44 @@
+import { describe, expect, it } from "vitest";
+import { Molecule } from "openchemlib";
+import { analyzeSmiles } from "../../shared/src/index";
+import type { SpeciesAnalysis } from "../../shared/src/index";
+import { CARBON_FRAMEWORKS, SMILES_DIPOLES } from "./data/smilesReferences";
+
+function smilesAnalysis(smiles: string): SpeciesAnalysis {
+  const result = analyzeSmiles(smiles);
+  if (!result.ok) throw new Error(`expected ${smiles} to be analysed, got ${result.problem.code}: ${result.problem.message}`);
+  return result.value;
+}
+
+// common practice: a carbon with no pi bond is sp3, with one sp2, with two sp
+const HYBRIDIZATION_BY_PI: readonly string[] = ["sp3", "sp2", "sp"];
+
+/** Hybridization of every carbon, from openchemlib's count of pi bonds (aromatic rings count one). */
+function openchemlibCarbonHybridization(smiles: string): string[] {
+  const molecule = Molecule.fromSmiles(smiles);
+  const labels: string[] = [];
+  for (let atom = 0; atom < molecule.getAllAtoms(); atom += 1) {
+    if (molecule.getAtomLabel(atom) === "C") labels.push(HYBRIDIZATION_BY_PI[molecule.getAtomPi(atom)]);
+  }
+  return labels.sort();
+}
+
+describe("polarity of SMILES molecules against measured dipoles and symmetry", () => {
+  it.each(SMILES_DIPOLES)("$name $smiles (measured $debye D)", ({ name, smiles, debye }) => {
+    const { polarity } = smilesAnalysis(smiles);
+    expect(
+      polarity.polar,
+      `${name}: measured ${debye} D; engine said ${polarity.polar ? "polar" : "nonpolar"} because "${polarity.reason}"`,
+    ).toBe(debye > 0);
+  });
+});
+
+describe("carbon hybridization against openchemlib", () => {
+  it.each(CARBON_FRAMEWORKS)("%s", (smiles) => {
+    // source: openchemlib (pi-bond count per atom)
+    const reference = openchemlibCarbonHybridization(smiles);
+    const analysis = smilesAnalysis(smiles);
+    const engine = analysis.centres.filter((centre) => centre.atom === "C").map((centre) => centre.hybridization).sort();
+    expect(engine, `${smiles}: openchemlib says [${reference.join(", ")}]`).toEqual(reference);
+  });
+});
