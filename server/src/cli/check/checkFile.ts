@@ -33,6 +33,8 @@ export interface CheckOutputs {
   readonly progress: (bytesDone: number) => void;
   /** A note about this file that is not a finding (not fixed because ...). */
   readonly note: (message: string) => void;
+  /** Waits while the output is backed up, so a huge report does not pile up in memory. */
+  readonly drain?: () => Promise<void>;
 }
 
 /** Checks `file`; I/O errors are thrown for the caller to report. */
@@ -81,6 +83,7 @@ export async function checkFile(file: DocumentFile, options: CheckOptions, outpu
       for (const finding of reported) countFinding(outputs.summary, finding.severity);
       outputs.reporter.findings(reported.map((finding) => locateFinding(file.displayPath, lines, finding)));
       outputs.progress(batch.byteOffset + Buffer.byteLength(batch.text));
+      await outputs.drain?.();
     }
     if (writer) await writer.finish();
   } catch (error) {

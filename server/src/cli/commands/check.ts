@@ -2,6 +2,7 @@
  * `lonepair check [options] <files or folders...>`: every finding the editor would show, for CI.
  * Exit 0 clean, 1 errors found (or warnings with --strict), 2 usage or I/O error.
  */
+import { once } from "node:events";
 import { parseArgs } from "node:util";
 import { version } from "../../../../package.json";
 import { checkFile } from "../check/checkFile";
@@ -95,6 +96,7 @@ async function runCheck(args: readonly string[], io: CliIo): Promise<number> {
         writeDiff: io.writeOut,
         progress: (done) => progress.update(bytesBefore + done, totalBytes, file.displayPath),
         note: (message) => io.writeError(`lonepair check: ${message}\n`),
+        drain: stdoutDrained,
       });
     } catch (error) {
       progress.finish();
@@ -126,6 +128,11 @@ function reporterFor(format: Format, io: CliIo, dryRun: boolean): CheckReporter 
   if (format === "json") return jsonReporter(io.writeOut);
   if (format === "sarif") return sarifReporter(io.writeOut, version);
   return textReporter(io.writeOut, io.colour);
+}
+
+/** Resolves once stdout has taken what was written (at once when nothing is backed up). */
+async function stdoutDrained(): Promise<void> {
+  if (process.stdout.writableNeedDrain) await once(process.stdout, "drain");
 }
 
 function usageError(io: CliIo, message: string): number {
