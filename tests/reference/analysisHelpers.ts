@@ -2,12 +2,15 @@
  * Small helpers shared by the reference tests: analyse through the public facade and pick out the
  * centre a table row is about, failing with a message that says what the engine returned instead.
  */
-import { analyzeSpecies } from "../../shared/src/index";
+import { analyzeSmiles, analyzeSpecies } from "../../shared/src/index";
 import type { CentreAnalysis, SpeciesAnalysis } from "../../shared/src/index";
 
-/** Analyses `text` and fails the test with the engine's own problem when it cannot. */
-export function analysisOf(text: string): SpeciesAnalysis {
-  const result = analyzeSpecies(text);
+/**
+ * Analyses `text` (a formula or name, or SMILES when `asSmiles`) and fails the test with the
+ * engine's own problem when it cannot.
+ */
+export function analysisOf(text: string, asSmiles = false): SpeciesAnalysis {
+  const result = asSmiles ? analyzeSmiles(text) : analyzeSpecies(text);
   if (!result.ok) {
     throw new Error(
       `expected "${text}" to be analysed, but got ${result.problem.code}: ${result.problem.message}`,

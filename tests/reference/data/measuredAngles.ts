@@ -17,6 +17,8 @@ export interface MeasuredAngleCase {
   /** Ideal angle of the electron geometry for this pair of positions. */
   readonly ideal: number;
   readonly positions?: PositionPair;
+  /** `species` is SMILES, for molecules a formula cannot pin down (rings, chains). */
+  readonly smiles?: boolean;
 }
 
 const GAS_PHASE = "CRC Handbook, Structures of Free Molecules in the Gas Phase";
@@ -64,6 +66,7 @@ export const MEASURED_ANGLES: readonly MeasuredAngleCase[] = [
   { species: "SO3", centre: "S", angle: "O-S-O", degrees: 120, axe: "AX3", ideal: 120 }, // from memory: CRC Handbook, Structures of Free Molecules in the Gas Phase
   { species: "H2CO", centre: "C", angle: "H-C-H", degrees: 116.5, axe: "AX3", ideal: 120 }, // from memory: CRC Handbook, Structures of Free Molecules in the Gas Phase
   { species: "COF2", centre: "C", angle: "F-C-F", degrees: 107.7, axe: "AX3", ideal: 120 }, // from memory: CRC Handbook, Structures of Free Molecules in the Gas Phase
+  { species: "c1ccccc1", smiles: true, centre: "C", angle: "C-C-C (benzene)", degrees: 120, axe: "AX3", ideal: 120 }, // from memory: CRC Handbook, Structures of Free Molecules in the Gas Phase
   { species: "CH2CH2", centre: "C", angle: "H-C-H", degrees: 117.4, axe: "AX3", ideal: 120 }, // from memory: CRC Handbook, Structures of Free Molecules in the Gas Phase
   { species: "NO2F", centre: "N", angle: "O-N-O", degrees: 136, axe: "AX3", ideal: 120 }, // from memory: CRC Handbook, Structures of Free Molecules in the Gas Phase
   { species: "HNO3", centre: "N", angle: "O-N-O (terminal)", degrees: 130.3, axe: "AX3", ideal: 120 }, // from memory: CRC Handbook, Structures of Free Molecules in the Gas Phase
@@ -78,6 +81,10 @@ export const MEASURED_ANGLES: readonly MeasuredAngleCase[] = [
   { species: "CH2F2", centre: "C", angle: "F-C-F", degrees: 108.3, axe: "AX4", ideal: 109.5 }, // from memory: CRC Handbook, Structures of Free Molecules in the Gas Phase
   { species: "CH2F2", centre: "C", angle: "H-C-H", degrees: 113.7, axe: "AX4", ideal: 109.5 }, // from memory: CRC Handbook, Structures of Free Molecules in the Gas Phase
   { species: "CHCl3", centre: "C", angle: "Cl-C-Cl", degrees: 111.3, axe: "AX4", ideal: 109.5 }, // from memory: CRC Handbook, Structures of Free Molecules in the Gas Phase
+  { species: "CCC", smiles: true, centre: "C", angle: "C-C-C (propane)", degrees: 112.4, axe: "AX4", ideal: 109.5 }, // from memory: CRC Handbook, Structures of Free Molecules in the Gas Phase
+  // common practice: a three-membered ring forces 60° whatever the electron geometry says
+  { species: "C1CC1", smiles: true, centre: "C", angle: "C-C-C (cyclopropane)", degrees: 60, axe: "AX4", ideal: 109.5 }, // from memory: CRC Handbook, Structures of Free Molecules in the Gas Phase
+  { species: "C1CCC1", smiles: true, centre: "C", angle: "C-C-C (cyclobutane)", degrees: 88, axe: "AX4", ideal: 109.5 }, // from memory: CRC Handbook, Structures of Free Molecules in the Gas Phase
   { species: "CH4", centre: "C", angle: "H-C-H", degrees: 109.5, axe: "AX4", ideal: 109.5 }, // from memory: CRC Handbook, Structures of Free Molecules in the Gas Phase
   { species: "SiH4", centre: "Si", angle: "H-Si-H", degrees: 109.5, axe: "AX4", ideal: 109.5 }, // from memory: CRC Handbook, Structures of Free Molecules in the Gas Phase
   { species: "CCl4", centre: "C", angle: "Cl-C-Cl", degrees: 109.5, axe: "AX4", ideal: 109.5 }, // from memory: CRC Handbook, Structures of Free Molecules in the Gas Phase
