@@ -107,7 +107,14 @@
       const from = atoms[bond.from];
       const to = atoms[bond.to];
       if (!from || !to) continue;
-      items.push({ depth: (from.screen.depth + to.screen.depth) / 2 - 0.01, draw: () => drawBond(from, to, number(bond.order, 1), scale) });
+      // The stick runs between the balls' surfaces, so it shows only where it leaves a ball.
+      const start = vector(from.atom.position);
+      const end = vector(to.atom.position);
+      const length = Math.hypot(end[0] - start[0], end[1] - start[1], end[2] - start[2]) || 1;
+      const along = (t) => start.map((value, k) => value + ((end[k] - start[k]) * t) / length);
+      const a = project(along(0.92 * number(from.atom.radius, 0.3)));
+      const b = project(along(length - 0.92 * number(to.atom.radius, 0.3)));
+      items.push({ depth: (from.screen.depth + to.screen.depth) / 2, draw: () => drawBond(a, b, number(bond.order, 1), scale) });
     }
     const electronView = state.mode === "electron";
     for (const lonePair of Array.isArray(model.lonePairs) ? model.lonePairs : []) {
@@ -132,6 +139,10 @@
     for (const item of items) svg.appendChild(item.draw());
 
     for (const angle of Array.isArray(model.angles) ? model.angles : []) svg.appendChild(drawAngle(angle, project));
+    // Symbols last, so sticks never cover them; a symbol whose atom is hidden behind a nearer ball is left out.
+    for (const item of atoms) {
+      if (!hiddenBehindNearerBall(item, atoms, scale)) svg.appendChild(drawAtomLabel(item));
+    }
   }
 
   function gradientMaker(defs) {
@@ -155,19 +166,31 @@
     const group = element("g", { class: atom.isCentre ? "atom centre" : "atom" });
     const radius = Math.max(4, number(atom.radius, 0.3) * scale);
     group.appendChild(element("circle", { cx: screen.x, cy: screen.y, r: radius, fill: `url(#${gradientFor(atom.colour)})`, class: "ball" }));
-    const label = element("text", { x: screen.x, y: screen.y, class: "atom-label", "text-anchor": "middle", "dominant-baseline": "central" });
-    label.textContent = String(atom.symbol);
-    group.appendChild(label);
     const title = element("title");
     title.textContent = String(atom.symbol);
     group.appendChild(title);
     return group;
   }
 
+  function drawAtomLabel(item) {
+    const label = element("text", { x: item.screen.x, y: item.screen.y, class: "atom-label", "text-anchor": "middle", "dominant-baseline": "central" });
+    label.textContent = String(item.atom.symbol);
+    return label;
+  }
+
+  function hiddenBehindNearerBall(item, atoms, scale) {
+    return atoms.some(
+      (other) =>
+        other !== item &&
+        other.screen.depth > item.screen.depth &&
+        Math.hypot(other.screen.x - item.screen.x, other.screen.y - item.screen.y) < 0.8 * number(other.atom.radius, 0.3) * scale,
+    );
+  }
+
   function drawBond(from, to, order, scale) {
     const group = element("g", { class: "bond" });
-    const dx = to.screen.x - from.screen.x;
-    const dy = to.screen.y - from.screen.y;
+    const dx = to.x - from.x;
+    const dy = to.y - from.y;
     const length = Math.hypot(dx, dy) || 1;
     const offsetX = (-dy / length) * Math.max(3, 0.07 * scale);
     const offsetY = (dx / length) * Math.max(3, 0.07 * scale);
@@ -176,10 +199,10 @@
       const shift = line - (count - 1) / 2;
       group.appendChild(
         element("line", {
-          x1: from.screen.x + offsetX * shift,
-          y1: from.screen.y + offsetY * shift,
-          x2: to.screen.x + offsetX * shift,
-          y2: to.screen.y + offsetY * shift,
+          x1: from.x + offsetX * shift,
+          y1: from.y + offsetY * shift,
+          x2: to.x + offsetX * shift,
+          y2: to.y + offsetY * shift,
           class: "stick",
           "stroke-width": count === 1 ? Math.max(3, 0.09 * scale) : Math.max(2, 0.05 * scale),
         }),

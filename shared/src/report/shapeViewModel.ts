@@ -115,8 +115,12 @@ const ELEMENT_COLOURS: Readonly<Record<string, string>> = {
 const NOBLE_GAS_COLOUR = "#5cc4d6";
 const OTHER_COLOUR = "#d27fc4";
 
-const ANGLE_ARC_RADIUS = 0.42;
+/** How far outside the centre atom's ball the arc runs, and its label beyond that (ångströms). */
+const ARC_CLEARANCE = 0.22;
+const LABEL_CLEARANCE = 0.3;
 const ARC_STEPS = 12;
+/** Directions tried when choosing the side a straight angle's arc bends to. */
+const STRAIGHT_ARC_CANDIDATES = 36;
 /** Angles closer than this (degrees) share one label. */
 const SAME_ANGLE = 0.5;
 
@@ -138,7 +142,11 @@ export function shapeViewModel(analysis: SpeciesAnalysis, coordinates: ShapeCoor
     .map((bond) => ({ from: bond.from, to: bond.to, order: bond.order }));
   const neighbours = neighbourLists(bonds, atomCount);
   const lonePairs = centreLonePairs(analysis, coordinates, atoms, neighbours);
-  const angles = analysis.centres.flatMap((centre) => (centre.index < atomCount ? labelledAngles(centre.index, atoms, neighbours[centre.index]) : []));
+  const angles = analysis.centres.flatMap((centre) =>
+    centre.index < atomCount
+      ? labelledAngles(centre.index, atoms, neighbours[centre.index], lonePairs.filter((lonePair) => lonePair.atom === centre.index).map((lonePair) => lonePair.direction))
+      : [],
+  );
   const reading = analysis.reading;
   return {
     title: reading.text,
@@ -162,7 +170,7 @@ export function shapeViewModel(analysis: SpeciesAnalysis, coordinates: ShapeCoor
     })),
     polarity: { polar: analysis.polarity.polar, reason: analysis.polarity.reason },
     warnings: [...analysis.warnings],
-    extent: extentOf(atoms, lonePairs),
+    extent: extentOf(atoms, lonePairs, angles),
     caution: HOVER_CAUTION,
   };
 }
@@ -235,8 +243,14 @@ function meanBondLength(atom: ShapeViewAtom, neighbourIndices: readonly number[]
 }
 
 /** One label per distinct angle at a centre (SF4: about 90, 120 and 180), the first pair found. */
-function labelledAngles(centre: number, atoms: readonly ShapeViewAtom[], neighbourIndices: readonly number[]): ShapeViewAngle[] {
+function labelledAngles(
+  centre: number,
+  atoms: readonly ShapeViewAtom[],
+  neighbourIndices: readonly number[],
+  lonePairDirections: readonly Vec3[],
+): ShapeViewAngle[] {
   const origin = atoms[centre].position;
+  const arcRadius = atoms[centre].radius + ARC_CLEARANCE;
   const labelled: ShapeViewAngle[] = [];
   for (let first = 0; first < neighbourIndices.length; first++) {
     for (let second = first + 1; second < neighbourIndices.length; second++) {
@@ -247,18 +261,24 @@ function labelledAngles(centre: number, atoms: readonly ShapeViewAtom[], neighbo
       if (norm(a) === 0 || norm(b) === 0) continue;
       const degrees = angleDegrees(a, b);
       if (labelled.some((angle) => Math.abs(angle.degrees - degrees) < SAME_ANGLE)) continue;
-      const otherDirections = neighbourIndices.filter((index) => index !== from && index !== to).map((index) => sub(atoms[index].position, origin));
-      const arc = arcPoints(origin, normalize(a), normalize(b), otherDirections);
+      const otherDirections = [
+        ...neighbourIndices.filter((index) => index !== from && index !== to).map((index) => normalize(sub(atoms[index].position, origin))),
+        ...lonePairDirections,
+      ];
+      const arc = arcPoints(origin, normalize(a), normalize(b), otherDirections, arcRadius);
       labelled.push({ centre, from, to, degrees: round(degrees), arc: arc.points, labelPosition: arc.label });
     }
   }
   return labelled.sort((x, y) => x.degrees - y.degrees);
 }
 
-/** A circular arc from unit vector `a` to `b` round `origin`; a straight angle bends away from the other bonds. */
-function arcPoints(origin: Vec3, a: Vec3, b: Vec3, others: readonly Vec3[]): { points: Vec3[]; label: Vec3 } {
+/**
+ * A circular arc from unit vector `a` to `b` round `origin`; a straight angle bends towards the
+ * emptiest side, away from the other bonds and lone pairs.
+ */
+function arcPoints(origin: Vec3, a: Vec3, b: Vec3, others: readonly Vec3[], radius: number): { points: Vec3[]; label: Vec3 } {
   let axis = cross(a, b);
-  if (norm(axis) < 1e-6) axis = cross(a, perpendicularAwayFrom(a, others));
+  if (norm(axis) < 1e-6) axis = cross(a, emptiestPerpendicular(a, others));
   const normal = normalize(axis);
   // In-plane unit vector at 90° from a, towards b: rotating a about `normal` sweeps the arc.
   const towards = cross(normal, a);
@@ -267,21 +287,32 @@ function arcPoints(origin: Vec3, a: Vec3, b: Vec3, others: readonly Vec3[]): { p
     const angle = sweep * fraction;
     return roundVector(add(origin, scale(add(scale(a, Math.cos(angle)), scale(towards, Math.sin(angle))), radius)));
   };
-  const points = Array.from({ length: ARC_STEPS + 1 }, (_, step) => pointAt(step / ARC_STEPS, ANGLE_ARC_RADIUS));
-  return { points, label: pointAt(0.5, ANGLE_ARC_RADIUS * 1.9) };
+  const points = Array.from({ length: ARC_STEPS + 1 }, (_, step) => pointAt(step / ARC_STEPS, radius));
+  return { points, label: pointAt(0.5, radius + LABEL_CLEARANCE) };
 }
 
-/** A direction at right angles to `a`, pointing away from the other bonds where there are any. */
-function perpendicularAwayFrom(a: Vec3, others: readonly Vec3[]): Vec3 {
-  const sum = others.reduce<Vec3>((total, other) => add(total, other), [0, 0, 0]);
-  const away = sub(scale(a, dot(sum, a)), sum);
-  if (norm(away) > 1e-6) return normalize(away);
+/** Of the directions at right angles to `a`, the one farthest (in angle) from every direction in `others`. */
+function emptiestPerpendicular(a: Vec3, others: readonly Vec3[]): Vec3 {
   const helper: Vec3 = Math.abs(a[0]) < 0.9 ? [1, 0, 0] : [0, 1, 0];
-  return normalize(cross(a, cross(helper, a)));
+  const first = normalize(cross(a, helper));
+  const second = cross(a, first);
+  let best = first;
+  let bestClearance = -Infinity;
+  for (let step = 0; step < STRAIGHT_ARC_CANDIDATES; step++) {
+    const turn = (2 * Math.PI * step) / STRAIGHT_ARC_CANDIDATES;
+    const candidate = add(scale(first, Math.cos(turn)), scale(second, Math.sin(turn)));
+    const clearance = Math.min(Math.PI, ...others.map((other) => Math.acos(Math.max(-1, Math.min(1, dot(candidate, normalize(other)))))));
+    if (clearance > bestClearance + 1e-9) {
+      best = candidate;
+      bestClearance = clearance;
+    }
+  }
+  return best;
 }
 
-function extentOf(atoms: readonly ShapeViewAtom[], lonePairs: readonly ShapeViewLonePair[]): number {
+function extentOf(atoms: readonly ShapeViewAtom[], lonePairs: readonly ShapeViewLonePair[], angles: readonly ShapeViewAngle[]): number {
   let extent = 0.5;
+  for (const angle of angles) extent = Math.max(extent, norm(angle.labelPosition) + 0.2, ...angle.arc.map((point) => norm(point)));
   for (const atom of atoms) extent = Math.max(extent, norm(atom.position) + atom.radius);
   for (const lonePair of lonePairs) extent = Math.max(extent, norm(lonePair.sitePosition) + 0.3);
   return round(extent);
@@ -291,8 +322,10 @@ function isFiniteVector(vector: Vec3): boolean {
   return vector.length === 3 && vector.every((component) => Number.isFinite(component));
 }
 
+/** Three decimals, and never -0 (JSON would write it as 0). */
 function round(value: number): number {
-  return Math.round(value * 1000) / 1000;
+  const rounded = Math.round(value * 1000) / 1000;
+  return rounded === 0 ? 0 : rounded;
 }
 
 function roundVector(vector: Vec3): Vec3 {

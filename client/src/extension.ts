@@ -1,0 +1,49 @@
+/**
+ * The lonepair extension: starts the language server and adds what needs the editor itself:
+ * the summary-table insertion, the 3D shape panel, the workspace check, coordinate export and a
+ * status-bar count.
+ */
+import * as vscode from "vscode";
+import type { LanguageClient } from "vscode-languageclient/node";
+import { checkWorkspace } from "./commands/checkWorkspace";
+import { exportCoordinates } from "./commands/exportCoordinates";
+import { insertSummaryTable } from "./commands/insertSummaryTable";
+import { showShape } from "./commands/showShape";
+import { startLanguageClient } from "./languageClient";
+import { forgetLocalModel } from "./localDocumentModel";
+import { createShapePanelController } from "./shapePanel";
+import { createStatusBar } from "./statusBar";
+
+let client: LanguageClient | undefined;
+
+export async function activate(context: vscode.ExtensionContext): Promise<void> {
+  const log = vscode.window.createOutputChannel("lonepair", { log: true });
+  context.subscriptions.push(log);
+  try {
+    client = await startLanguageClient(context.extensionUri, log);
+  } catch (error) {
+    log.appendLine(`The lonepair language server did not start: ${String(error)}`);
+    void vscode.window.showErrorMessage("lonepair: the language server did not start (see the lonepair output).");
+    return;
+  }
+  const started = client;
+  // Problems found by the workspace check in files that are not open; an opened file is the server's.
+  const workspaceProblems = vscode.languages.createDiagnosticCollection("lonepair-workspace");
+  const shapePanel = createShapePanelController(context.extensionUri, started, log);
+  context.subscriptions.push(
+    workspaceProblems,
+    shapePanel,
+    createStatusBar(),
+    vscode.workspace.onDidOpenTextDocument((document) => workspaceProblems.delete(document.uri)),
+    vscode.workspace.onDidCloseTextDocument((document) => forgetLocalModel(document.uri)),
+    vscode.commands.registerCommand("lonepair.insertSummaryTable", () => insertSummaryTable(started, log)),
+    vscode.commands.registerCommand("lonepair.showShape", () => showShape(shapePanel)),
+    vscode.commands.registerCommand("lonepair.checkWorkspace", () => checkWorkspace(started, workspaceProblems, log)),
+    vscode.commands.registerCommand("lonepair.exportCoordinates", () => exportCoordinates(started, log)),
+  );
+}
+
+export async function deactivate(): Promise<void> {
+  await client?.stop();
+  client = undefined;
+}

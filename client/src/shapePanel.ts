@@ -1,0 +1,119 @@
+/**
+ * The 3D shape panel: one webview beside the editor showing the species under the cursor,
+ * updated by message as the cursor moves. Scripts run only under a nonce-based policy, and the
+ * page may load files from the extension's media folder only.
+ */
+import { randomBytes } from "node:crypto";
+import * as vscode from "vscode";
+import type { LanguageClient } from "vscode-languageclient/node";
+import { shapePageHtml } from "./shapePageHtml";
+import { shapeOf } from "./speciesShape";
+import { speciesAtCursor } from "./speciesAtCursor";
+import { DOCUMENT_SELECTOR } from "./documentSelector";
+
+const VIEW_TYPE = "lonepair.shapeView";
+/** Cursor moves closer together than this are one update. */
+const FOLLOW_DELAY_MS = 200;
+
+/** What the page is told. */
+type PageMessage =
+  | { readonly type: "show"; readonly model: unknown }
+  | { readonly type: "problem"; readonly text: string; readonly message: string }
+  | { readonly type: "clear" };
+
+/** Opens (or reveals) the panel and keeps it following the cursor; dispose to stop. */
+export interface ShapePanelController extends vscode.Disposable {
+  show(editor: vscode.TextEditor | undefined): Promise<void>;
+}
+
+export function createShapePanelController(extensionUri: vscode.Uri, client: LanguageClient, log: vscode.OutputChannel): ShapePanelController {
+  const mediaRoot = vscode.Uri.joinPath(extensionUri, "client", "media");
+  let panel: vscode.WebviewPanel | undefined;
+  let lastMessage: PageMessage = { type: "clear" };
+  let lastKey = "";
+  let timer: NodeJS.Timeout | undefined;
+  let pending: vscode.CancellationTokenSource | undefined;
+
+  const post = (message: PageMessage): void => {
+    lastMessage = message;
+    void panel?.webview.postMessage(message);
+  };
+
+  const update = async (editor: vscode.TextEditor | undefined): Promise<void> => {
+    if (!panel || !editor || vscode.languages.match(DOCUMENT_SELECTOR, editor.document) === 0) return;
+    pending?.cancel();
+    const cancellation = new vscode.CancellationTokenSource();
+    pending = cancellation;
+    try {
+      const found = await speciesAtCursor(client, editor.document, editor.selection.active, cancellation.token);
+      if (cancellation.token.isCancellationRequested || !found) return;
+      // The same species again (the cursor moved inside it): keep the page and its rotation as they are.
+      const key = `${editor.document.uri.toString()}|${found.text}|${found.analysis.ok ? found.analysis.value.reading.formula : ""}`;
+      if (key === lastKey) return;
+      lastKey = key;
+      if (!found.analysis.ok) {
+        post({ type: "problem", text: found.text, message: found.analysis.problem.message });
+        return;
+      }
+      const model = shapeOf(found.analysis.value);
+      post(model ? { type: "show", model } : { type: "problem", text: found.text, message: "No 3D model could be built for this species." });
+    } catch (error) {
+      log.appendLine(`3D view: could not read the species under the cursor: ${String(error)}`);
+    }
+  };
+
+  const scheduleUpdate = (editor: vscode.TextEditor): void => {
+    if (!panel) return;
+    if (timer) clearTimeout(timer);
+    timer = setTimeout(() => void update(editor), FOLLOW_DELAY_MS);
+  };
+
+  const createPanel = (): vscode.WebviewPanel => {
+    const created = vscode.window.createWebviewPanel(
+      VIEW_TYPE,
+      "lonepair: 3D shape",
+      { viewColumn: vscode.ViewColumn.Beside, preserveFocus: true },
+      { enableScripts: true, localResourceRoots: [mediaRoot] },
+    );
+    const webview = created.webview;
+    webview.html = shapePageHtml({
+      cspSource: webview.cspSource,
+      nonce: randomBytes(18).toString("base64"),
+      scriptUri: webview.asWebviewUri(vscode.Uri.joinPath(mediaRoot, "shapeView.js")).toString(),
+      styleUri: webview.asWebviewUri(vscode.Uri.joinPath(mediaRoot, "shapeView.css")).toString(),
+    });
+    const subscriptions = [
+      webview.onDidReceiveMessage((message: { type?: unknown }) => {
+        // The page asks once it has loaded (or reloaded after being hidden): give it the current species.
+        if (message?.type === "ready") void webview.postMessage(lastMessage);
+      }),
+      created.onDidDispose(() => {
+        panel = undefined;
+        lastKey = "";
+        lastMessage = { type: "clear" };
+        for (const subscription of subscriptions) subscription.dispose();
+      }),
+    ];
+    return created;
+  };
+
+  const following = [
+    vscode.window.onDidChangeTextEditorSelection((event) => scheduleUpdate(event.textEditor)),
+    vscode.window.onDidChangeActiveTextEditor((editor) => editor && scheduleUpdate(editor)),
+  ];
+
+  return {
+    async show(editor) {
+      if (panel) panel.reveal(undefined, true);
+      else panel = createPanel();
+      lastKey = "";
+      await update(editor);
+    },
+    dispose() {
+      if (timer) clearTimeout(timer);
+      pending?.cancel();
+      for (const subscription of following) subscription.dispose();
+      panel?.dispose();
+    },
+  };
+}

@@ -1,0 +1,208 @@
+/**
+ * The 3D shape page rendered standalone in headless Chromium under the same Content-Security-
+ * Policy the extension gives it: the page's files are served from a made-up origin by request
+ * interception (no network), and `acquireVsCodeApi` is stood in for by an init script.
+ */
+import { existsSync, mkdirSync, mkdtempSync, readFileSync, rmSync } from "node:fs";
+import { tmpdir } from "node:os";
+import { join } from "node:path";
+import { randomBytes } from "node:crypto";
+import { fileURLToPath } from "node:url";
+import { chromium, type BrowserContext, type Page } from "playwright-core";
+import { afterAll, beforeAll, describe, expect, it } from "vitest";
+import { shapePageHtml } from "../../client/src/shapePageHtml";
+import { analyzeSpecies } from "../../shared/src/index";
+import { buildCoordinates } from "../../shared/src/chemistry/geometry/buildCoordinates";
+import { shapeViewModel, type ShapeViewModel } from "../../shared/src/report/shapeViewModel";
+
+const CHROMIUM = "/usr/bin/chromium";
+const ORIGIN = "https://lonepair-webview.test";
+const ROOT = fileURLToPath(new URL("../..", import.meta.url));
+const MEDIA = join(ROOT, "client", "media");
+const ARTIFACTS = join(ROOT, ".test-artifacts");
+const INJECTED = "<script>alert(1)</script>";
+
+/** What the tests touch in the page's global scope (the project's type-check has no DOM library). */
+interface PageGlobals {
+  posted: { type: string }[];
+  savedState: unknown;
+  acquireVsCodeApi: () => unknown;
+  ranInjected?: boolean;
+  postMessage(message: unknown, targetOrigin: string): void;
+  document: { createElement(tag: string): { textContent: string }; body: { appendChild(node: unknown): void } };
+}
+
+function viewOf(text: string): ShapeViewModel {
+  const result = analyzeSpecies(text);
+  if (!result.ok) throw new Error(`${text} was not analysed: ${result.problem.message}`);
+  return shapeViewModel(result.value, buildCoordinates(result.value.graph, result.value.radical));
+}
+
+// CI installs Chromium (.ci/run); elsewhere a missing browser skips the page tests.
+const haveBrowser = existsSync(CHROMIUM) || process.env.CI !== undefined;
+
+describe.skipIf(!haveBrowser)("3D shape page in headless Chromium", () => {
+  let context: BrowserContext;
+  let userDataDir: string;
+
+  beforeAll(async () => {
+    userDataDir = mkdtempSync(join(tmpdir(), "lonepair-chromium-"));
+    context = await chromium.launchPersistentContext(userDataDir, {
+      executablePath: CHROMIUM,
+      headless: true,
+      viewport: { width: 960, height: 560 },
+      args: [
+        "--headless",
+        "--no-sandbox",
+        "--disable-gpu",
+        "--disable-quic",
+        "--no-first-run",
+        "--disable-background-networking",
+        "--disable-component-update",
+        "--disable-sync",
+      ],
+    });
+  });
+
+  afterAll(async () => {
+    await context?.close();
+    if (userDataDir) rmSync(userDataDir, { recursive: true, force: true });
+  });
+
+  /** Opens the page as the extension builds it; collects console errors, page errors and dialogs. */
+  async function openPage(): Promise<{ page: Page; errors: string[]; dialogs: string[] }> {
+    const page = await context.newPage();
+    const errors: string[] = [];
+    const dialogs: string[] = [];
+    page.on("console", (message) => {
+      if (message.type() === "error") errors.push(message.text());
+    });
+    page.on("pageerror", (error) => errors.push(error.message));
+    page.on("dialog", (dialog) => {
+      dialogs.push(dialog.message());
+      void dialog.dismiss();
+    });
+    const nonce = randomBytes(18).toString("base64");
+    const html = shapePageHtml({ cspSource: ORIGIN, nonce, scriptUri: `${ORIGIN}/media/shapeView.js`, styleUri: `${ORIGIN}/media/shapeView.css` });
+    await page.route(`${ORIGIN}/**`, async (route) => {
+      const path = new URL(route.request().url()).pathname;
+      if (path === "/index.html") return route.fulfill({ contentType: "text/html", body: html });
+      const file = { "/media/shapeView.js": "text/javascript", "/media/shapeView.css": "text/css" }[path];
+      if (!file) return route.fulfill({ status: 404, body: "" });
+      return route.fulfill({ contentType: file, body: readFileSync(join(MEDIA, path.slice("/media/".length))) });
+    });
+    // The editor injects acquireVsCodeApi; this stand-in records what the page posts and saves.
+    await page.addInitScript(() => {
+      const record = globalThis as unknown as PageGlobals;
+      record.posted = [];
+      record.savedState = undefined;
+      record.acquireVsCodeApi = () => ({
+        postMessage: (message: { type: string }) => record.posted.push(message),
+        getState: () => record.savedState,
+        setState: (state: unknown) => {
+          record.savedState = state;
+        },
+      });
+    });
+    await page.goto(`${ORIGIN}/index.html`);
+    await page.waitForFunction(() => (globalThis as unknown as PageGlobals).posted.some((message) => message.type === "ready"));
+    return { page, errors, dialogs };
+  }
+
+  async function show(page: Page, model: unknown): Promise<void> {
+    await page.evaluate((message) => (globalThis as unknown as PageGlobals).postMessage(message, "*"), { type: "show", model });
+  }
+
+  it("draws SF4: five atoms, one lone-pair lobe, three labelled angles and the legend", async () => {
+    const { page, errors, dialogs } = await openPage();
+    await show(page, viewOf("SF4"));
+    await page.waitForSelector("g.atom");
+    // common practice: SF4 is AX4E1, a seesaw in a trigonal bipyramid, sp3d, angles 90/120/180 ideal.
+    expect(await page.locator("g.atom").count()).toBe(5);
+    expect(await page.locator("g.lone-pair").count()).toBe(1);
+    expect(await page.locator("g.lone-pair.lobe").count()).toBe(1);
+    expect(await page.locator("g.bond").count()).toBe(4);
+    expect(await page.locator(".angle-label").allTextContents()).toEqual(["90.0°", "120.0°", "180.0°"]);
+    const legend = await page.locator(".legend").innerText();
+    for (const expected of ["AX4E1", "trigonal bipyramidal", "seesaw", "sp3d"]) expect(legend).toContain(expected);
+    expect(await page.locator("#caution").textContent()).toMatch(/model prediction, not measured data/i);
+
+    mkdirSync(ARTIFACTS, { recursive: true });
+    await page.screenshot({ path: join(ARTIFACTS, "shape-view-SF4-molecular.png") });
+
+    // Electron geometry: the lone pair becomes a ghost site; still one lone-pair element.
+    await page.click("#show-electron");
+    expect(await page.locator("g.lone-pair.ghost").count()).toBe(1);
+    expect(await page.locator("g.lone-pair.lobe").count()).toBe(0);
+    expect(await page.locator("#show-electron").getAttribute("aria-pressed")).toBe("true");
+    expect(await page.locator("dd.current").textContent()).toBe("trigonal bipyramidal");
+    await page.screenshot({ path: join(ARTIFACTS, "shape-view-SF4-electron.png") });
+
+    expect(errors).toEqual([]);
+    expect(dialogs).toEqual([]);
+    await page.close();
+  });
+
+  it("rotates on drag and keeps the rotation and the mode in the saved state", async () => {
+    const { page, errors } = await openPage();
+    await show(page, viewOf("XeF4"));
+    await page.waitForSelector("g.atom");
+    await page.click("#show-electron");
+    const before = await page.locator("g.atom circle").evaluateAll((circles) => circles.map((circle) => circle.getAttribute("cx")));
+    const box = (await page.locator("#model").boundingBox())!;
+    await page.mouse.move(box.x + box.width / 2, box.y + box.height / 2);
+    await page.mouse.down();
+    await page.mouse.move(box.x + box.width / 2 + 120, box.y + box.height / 2 + 40, { steps: 6 });
+    await page.mouse.up();
+    const after = await page.locator("g.atom circle").evaluateAll((circles) => circles.map((circle) => circle.getAttribute("cx")));
+    expect(after).not.toEqual(before);
+    const saved = await page.evaluate(() => (globalThis as unknown as PageGlobals).savedState as { mode: string; rotation: number[]; model: { formula: string } });
+    expect(saved.mode).toBe("electron");
+    expect(saved.model.formula).toBe("XeF4");
+    expect(saved.rotation).toHaveLength(9);
+    expect(errors).toEqual([]);
+    await page.close();
+  });
+
+  it("keeps an injected script in the species text as inert text", async () => {
+    const { page, errors, dialogs } = await openPage();
+    const model = viewOf("SF4");
+    const hostile = {
+      ...model,
+      title: INJECTED,
+      name: `<img src=x onerror=alert(2)>`,
+      warnings: [INJECTED],
+      centres: model.centres.map((centre) => ({ ...centre, molecularGeometry: INJECTED })),
+      atoms: model.atoms.map((atom) => ({ ...atom, symbol: `${atom.symbol}${INJECTED}`, colour: `red" onload="alert(3)` })),
+    };
+    await show(page, hostile);
+    await page.waitForSelector("g.atom");
+    expect(await page.locator("#title").textContent()).toBe(INJECTED);
+    expect(await page.locator("#warnings li").textContent()).toBe(INJECTED);
+    // One script element only: the page's own.
+    expect(await page.locator("script").count()).toBe(1);
+    expect(await page.locator("img").count()).toBe(0);
+    await page.evaluate((message) => (globalThis as unknown as PageGlobals).postMessage(message, "*"), { type: "problem", text: INJECTED, message: INJECTED });
+    expect(await page.locator("#title").textContent()).toBe(INJECTED);
+    expect(await page.locator("script").count()).toBe(1);
+    await page.waitForTimeout(200);
+    expect(dialogs).toEqual([]);
+    expect(errors).toEqual([]);
+    await page.close();
+  });
+
+  it("refuses an inline script the policy does not allow", async () => {
+    const { page, errors } = await openPage();
+    // A script added without the nonce must not run; Chromium reports the refusal on the console.
+    await page.evaluate(() => {
+      const { document } = globalThis as unknown as PageGlobals;
+      const script = document.createElement("script");
+      script.textContent = "window.ranInjected = true";
+      document.body.appendChild(script);
+    });
+    await page.waitForTimeout(100);
+    expect(await page.evaluate(() => (globalThis as unknown as PageGlobals).ranInjected)).toBeUndefined();
+    expect(errors.some((error) => /Content Security Policy/i.test(error))).toBe(true);
+    await page.close();
+  });
+});
