@@ -97,6 +97,18 @@ describe("hover", () => {
     expect(text.length).toBeLessThan(100_000);
   });
 
+  it("explains a species it cannot analyse, with the caution // common practice: carbon makes at most four bonds", async () => {
+    const document = opened.get(MARKDOWN)!;
+    const result = await session.connection.sendRequest(HoverRequest.type, {
+      textDocument: { uri: MARKDOWN },
+      position: positionOf(document, "CH5", 1),
+    });
+    const text = hoverText(result);
+    expect(text).toContain("not analysed");
+    expect(text).toContain("carbon");
+    expect(text).toContain(CAUTION);
+  });
+
   it("answers null away from any species", async () => {
     const document = opened.get(MARKDOWN)!;
     const result = await session.connection.sendRequest(HoverRequest.type, {
@@ -196,6 +208,24 @@ describe("code actions", () => {
       const index = beforeLines.findIndex((line) => line.startsWith(untouched));
       expect(afterLines[index]).toBe(beforeLines[index]);
     }
+  });
+});
+
+describe("source actions", () => {
+  it("offers fix all as a source.fixAll action when only that kind is asked for", async () => {
+    const document = opened.get(JSON_URI)!;
+    const result = (await session.connection.sendRequest(CodeActionRequest.type, {
+      textDocument: { uri: JSON_URI },
+      range: { start: { line: 0, character: 0 }, end: { line: 0, character: 0 } },
+      context: { diagnostics: [], only: ["source.fixAll"] },
+    })) as CodeAction[];
+    expect(result.map((action) => [action.title, action.kind])).toEqual([["Fix all lonepair table values in this file", "source.fixAll.lonepair"]]);
+    const edits = (result[0].edit?.documentChanges?.[0] as { edits: TextEdit[] }).edits;
+    const after = applyEdits(document, edits);
+    // common practice: NH3 trigonal pyramidal; from memory: XeF4 has 36 valence electrons
+    expect(after).toContain('"name": "ammonia", "valence electrons": 8, "molecular geometry": "trigonal pyramidal"');
+    expect(after).toContain('"name": "xenon tetrafluoride", "valence electrons": 36,');
+    expect(after.split("\n").length).toBe(document.getText().split("\n").length);
   });
 });
 
