@@ -34,6 +34,12 @@ function expectRefusal(row: RefusalCase): Extract<AnalysisResult, { ok: false }>
   expect(message).not.toMatch(/undefined|\[object |\bat .+:\d+:\d+|Error:/);
   if (row.mentions) expect(message, `message should name ${row.mentions}`).toContain(row.mentions);
   if (row.suggestion) expect(refused.problem.suggestion).toBe(row.suggestion);
+  if (row.marks) {
+    // common practice: a diagnostic points at the culprit, not at the whole input
+    const range = refused.problem.range;
+    expect(range, `${shortInput(row.input)}: the problem should carry a range`).toBeDefined();
+    expect(row.input.slice(range!.start, range!.end)).toBe(row.marks);
+  }
   return refused;
 }
 

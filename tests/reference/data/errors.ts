@@ -10,6 +10,8 @@ export interface RefusalCase {
   readonly suggestion?: string;
   /** Text the message should mention so the writer can find the culprit. */
   readonly mentions?: string;
+  /** The slice of the input the problem's range should cover: the culprit itself. */
+  readonly marks?: string;
 }
 
 /** Problems found after the species was read: the reading is known, no structure is drawn. */
@@ -63,16 +65,16 @@ export const READING_REFUSALS: readonly RefusalCase[] = [
   { input: "", code: "empty-input", why: "nothing to read" },
   { input: "   ", code: "empty-input", why: "only spaces" },
   // common practice: element symbols are one capital, optionally one lower-case letter
-  { input: "Sf4", code: "unknown-element", why: "Sf is no element; SF4 was meant", suggestion: "SF4", mentions: "Sf" },
+  { input: "Sf4", code: "unknown-element", why: "Sf is no element; SF4 was meant", suggestion: "SF4", mentions: "Sf", marks: "Sf" },
   { input: "Xef4", code: "unknown-element", why: "lower-case f; XeF4 was meant", suggestion: "XeF4" },
   { input: "sf6", code: "unknown-element", why: "all lower case; SF6 was meant", suggestion: "SF6" },
-  { input: "Xx2", code: "unknown-element", why: "Xx is no element", mentions: "Xx" },
-  { input: "Ca(OH2", code: "unbalanced-brackets", why: "an opening bracket is never closed" },
-  { input: "Ca(OH))2", code: "unbalanced-brackets", why: "a closing bracket has no partner" },
-  { input: "[Fe(CN)6", code: "unbalanced-brackets", why: "the square bracket is never closed" },
+  { input: "Xx2", code: "unknown-element", why: "Xx is no element", mentions: "Xx", marks: "Xx" },
+  { input: "Ca(OH2", code: "unbalanced-brackets", why: "an opening bracket is never closed", marks: "(" },
+  { input: "Ca(OH))2", code: "unbalanced-brackets", why: "a closing bracket has no partner", marks: ")" },
+  { input: "[Fe(CN)6", code: "unbalanced-brackets", why: "the square bracket is never closed", marks: "[" },
   { input: "unobtainium tetrafluoride", code: "unknown-name", why: "not a chemical name" },
   { input: "blue gas", code: "unknown-name", why: "not a chemical name" },
   // common practice: "SO42-" could be SO4 2- or SO 42-; the digits must be separated from the charge
-  { input: "SO42-", code: "malformed-formula", why: "digits glued to the charge are ambiguous" },
+  { input: "SO42-", code: "malformed-formula", why: "digits glued to the charge are ambiguous", marks: "42-" },
   { input: "C".repeat(100_000), code: "input-too-long", why: "far longer than any species" },
 ];
