@@ -28,12 +28,21 @@ export function clientFeaturesFrom(capabilities: ClientCapabilities): ClientFeat
   return {
     configuration: workspace?.configuration === true,
     configurationRegistration: workspace?.didChangeConfiguration?.dynamicRegistration === true,
-    pullDiagnostics: textDocument?.diagnostic !== undefined,
+    pullDiagnostics: isObject(textDocument?.diagnostic),
     diagnosticRefresh: workspace?.diagnostics?.refreshSupport === true,
-    inlayHints: textDocument?.inlayHint !== undefined,
+    inlayHints: isObject(textDocument?.inlayHint),
     inlayHintRefresh: workspace?.inlayHint?.refreshSupport === true,
     documentChanges: workspace?.workspaceEdit?.documentChanges === true,
-    codeActionLiterals: textDocument?.codeAction?.codeActionLiteralSupport !== undefined,
-    hoverMarkdown: textDocument?.hover?.contentFormat?.includes(MarkupKind.Markdown) ?? false,
+    codeActionLiterals: isObject(textDocument?.codeAction?.codeActionLiteralSupport),
+    hoverMarkdown: arrayIncludes(textDocument?.hover?.contentFormat, MarkupKind.Markdown),
   };
+}
+
+/** Clients send what they send: a missing or malformed list counts as empty. */
+function arrayIncludes(list: unknown, value: string): boolean {
+  return Array.isArray(list) && list.includes(value);
+}
+
+function isObject(value: unknown): boolean {
+  return typeof value === "object" && value !== null;
 }

@@ -32,8 +32,7 @@ export function startServer(connection: Connection): void {
   const documents = new TextDocuments(TextDocument);
   let features: ClientFeatures | undefined;
   let diagnostics: DiagnosticsFeature | undefined;
-  let initialSettings: unknown;
-  const settings = createSettingsStore(connection, () => features?.configuration ?? false, undefined, log);
+  const settings = createSettingsStore(connection, () => features?.configuration ?? false, log);
   const context: ServerContext = {
     connection,
     documents,
@@ -45,7 +44,8 @@ export function startServer(connection: Connection): void {
 
   connection.onInitialize((params: InitializeParams): InitializeResult => {
     features = clientFeaturesFrom(params.capabilities ?? {});
-    initialSettings = (params.initializationOptions as { settings?: unknown } | undefined)?.settings;
+    // Clients without workspace/configuration may hand settings over here: { settings: { lonepair: {...} } }.
+    const initialSettings = (params.initializationOptions as { settings?: unknown } | null | undefined)?.settings;
     if (initialSettings !== undefined) settings.changed(initialSettings);
     registerHover(context);
     registerCodeActions(context);

@@ -25,10 +25,9 @@ const CONFIGURATION_TIMEOUT_MS = 3000;
 export function createSettingsStore(
   connection: Connection,
   canAskClient: () => boolean,
-  initial: unknown,
   log: ServerLog,
 ): SettingsStore {
-  let global: ServerSettings = initial === undefined ? DEFAULT_SETTINGS : settingsFrom(initial);
+  let global: ServerSettings = DEFAULT_SETTINGS;
   let generation = 0;
   const perUri = new Map<string, Promise<ServerSettings>>();
 
