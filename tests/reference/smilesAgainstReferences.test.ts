@@ -1,4 +1,4 @@
-import { describe, expect, it } from "vitest";
+import { beforeAll, describe, expect, it } from "vitest";
 import { Molecule } from "openchemlib";
 import { analyzeSmiles } from "../../shared/src/index";
 import type { SpeciesAnalysis } from "../../shared/src/index";
@@ -34,6 +34,11 @@ describe("polarity of SMILES molecules against measured dipoles and symmetry", (
 });
 
 describe("carbon hybridization against openchemlib", () => {
+  // openchemlib builds its lookup tables on first use (seconds); do it once, outside any one case
+  beforeAll(() => {
+    Molecule.fromSmiles("C");
+  });
+
   it.each(CARBON_FRAMEWORKS)("%s", (smiles) => {
     // source: openchemlib (pi-bond count per atom)
     const reference = openchemlibCarbonHybridization(smiles);
