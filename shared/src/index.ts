@@ -11,3 +11,5 @@ export type { SmilesAtom, SmilesBond, SmilesMolecule, SmilesResult } from "./che
 export { findPointGroup } from "./chemistry/symmetry/pointGroup";
 export { idealDirections, siteKind, lonePairSiteOrder } from "./chemistry/geometry/idealDirections";
 export type { Vec3 } from "./chemistry/geometry/vectors";
+export { shapeOf, pointGroupAllowsDipole } from "./chemistry/analysis/shape3d";
+export type { SpeciesShape } from "./chemistry/analysis/shape3d";

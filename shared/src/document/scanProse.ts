@@ -97,18 +97,21 @@ function codeSpan(scan: ProseScan, open: number): number {
   const length = ticksEnd - open;
   scan.previousWord = undefined;
   if (scan.unclosedTicks.has(length)) return ticksEnd;
+  // Search only this stretch of prose: a span never closes in a later paragraph.
+  const stretch = text.slice(ticksEnd, end);
   const fence = "`".repeat(length);
-  let close = text.indexOf(fence, ticksEnd);
-  while (close >= 0 && close < end && text.charCodeAt(close + length) === 0x60) {
+  let close = stretch.indexOf(fence);
+  while (close >= 0 && stretch.charCodeAt(close + length) === 0x60) {
     // A longer run does not close this span; skip past it.
     let runEnd = close;
-    while (text.charCodeAt(runEnd) === 0x60) runEnd++;
-    close = text.indexOf(fence, runEnd);
+    while (stretch.charCodeAt(runEnd) === 0x60) runEnd++;
+    close = stretch.indexOf(fence, runEnd);
   }
-  if (close < 0 || close >= end) {
+  if (close < 0) {
     scan.unclosedTicks.add(length);
     return ticksEnd;
   }
+  close += ticksEnd;
   const found = smilesOccurrence(text, ticksEnd, close);
   if (found && isOccurrence(found)) scan.sink.occurrences.push(found);
   else if (found) scan.sink.unreadable.push(found);
@@ -134,14 +137,15 @@ function scanChunk(scan: ProseScan, start: number, end: number): void {
     scan.previousWord = undefined;
     return;
   }
+  const chunk = text.slice(start, end);
   // A markdown link: the text before "](" is prose, the destination after it is not.
-  const link = text.indexOf("](", start);
-  if (link >= 0 && link < end) {
-    scanChunk(scan, start, link + 1);
+  const link = chunk.indexOf("](");
+  if (link >= 0) {
+    scanChunk(scan, start, start + link + 1);
     scan.previousWord = undefined;
     return;
   }
-  if (URL_OR_MAIL.test(text.slice(start, end))) {
+  if (URL_OR_MAIL.test(chunk)) {
     scan.previousWord = undefined;
     return;
   }
@@ -149,29 +153,48 @@ function scanChunk(scan: ProseScan, start: number, end: number): void {
   scanFormulas(scan, start, end);
 }
 
-const LEADING_PUNCTUATION = /^[(\["'*_<\u201c\u2018]*/;
-const TRAILING_PUNCTUATION = /[)\]"'*_,.;:!?>\u201d\u2019]*$/;
+/** Punctuation that may sit before a word: ( [ " ' * _ < and curly quotes. */
+function isLeadingPunctuation(code: number): boolean {
+  return code === 0x28 || code === 0x5b || code === 0x22 || code === 0x27 || code === 0x2a || code === 0x5f || code === 0x3c || code === 0x201c || code === 0x2018;
+}
+
+/** Punctuation that may sit after a word: ) ] " ' * _ , . ; : ! ? > and curly quotes. */
+function isTrailingPunctuation(code: number): boolean {
+  return (
+    code === 0x29 || code === 0x5d || code === 0x22 || code === 0x27 || code === 0x2a || code === 0x5f || code === 0x2c ||
+    code === 0x2e || code === 0x3b || code === 0x3a || code === 0x21 || code === 0x3f || code === 0x3e || code === 0x201d || code === 0x2019
+  );
+}
+
+function isLetter(code: number): boolean {
+  return (code >= 0x41 && code <= 0x5a) || (code >= 0x61 && code <= 0x7a);
+}
 
 /** Names: a word ending "-ide/-ate/-ite/-ium" after another word, or a known one-word name. */
 function scanWord(scan: ProseScan, start: number, end: number): void {
-  const chunk = scan.text.slice(start, end);
-  const leading = LEADING_PUNCTUATION.exec(chunk)![0].length;
-  const trailing = TRAILING_PUNCTUATION.exec(chunk.slice(leading))![0].length;
-  const core = chunk.slice(leading, chunk.length - trailing);
-  if (!/^[A-Za-z]+$/.test(core)) {
+  const { text } = scan;
+  let wordStart = start;
+  while (wordStart < end && isLeadingPunctuation(text.charCodeAt(wordStart))) wordStart++;
+  let wordEnd = end;
+  while (wordEnd > wordStart && isTrailingPunctuation(text.charCodeAt(wordEnd - 1))) wordEnd--;
+  let letters = wordEnd > wordStart;
+  for (let index = wordStart; letters && index < wordEnd; index++) letters = isLetter(text.charCodeAt(index));
+  if (!letters) {
     scan.previousWord = undefined;
     return;
   }
-  const word: Word = {
-    start: start + leading,
-    end: end - trailing,
-    lower: core.toLowerCase(),
-    open: trailing === 0 || /^[*_]+$/.test(chunk.slice(chunk.length - trailing)),
-  };
+  let open = true;
+  for (let index = wordEnd; index < end; index++) {
+    const code = text.charCodeAt(index);
+    // Emphasis may close around a name; any other punctuation ends it.
+    if (code !== 0x2a && code !== 0x5f) open = false;
+  }
+  const word: Word = { start: wordStart, end: wordEnd, lower: text.slice(wordStart, wordEnd).toLowerCase(), open };
   const previous = scan.previousWord;
   scan.previousWord = word;
+  if (word.lower.length < 5) return;
   if (mayEndName(word.lower)) {
-    if (previous && previous.open && leading === 0 && !/\n[ \t]*\n/.test(scan.text.slice(previous.end, word.start))) {
+    if (previous && previous.open && wordStart === start && !/\n[ \t]*\n/.test(text.slice(previous.end, word.start))) {
       if (tryName(scan, previous.start, word.end, `${previous.lower} ${word.lower}`)) return;
     }
   }
@@ -272,8 +295,8 @@ function chargeEnd(text: string, bodyEnd: number, end: number): number {
   if (text.charCodeAt(index) === 0x5e) {
     index++;
     if (text.charCodeAt(index) === 0x7b) {
-      const close = text.indexOf("}", index);
-      return close > 0 && close < end && close - index <= 5 ? close + 1 : bodyEnd;
+      const close = text.slice(index, Math.min(end, index + 6)).indexOf("}");
+      return close > 0 ? index + close + 1 : bodyEnd;
     }
     while (index < end && text.charCodeAt(index) >= 0x30 && text.charCodeAt(index) <= 0x39) index++;
   }

@@ -8,6 +8,7 @@ import type { SpeciesAnalysis, SpeciesReading } from "../types";
 import { analyzeCentre, type CentreDetail } from "../vsepr/analyzeCentre";
 import { measuredAnglesFor } from "../vsepr/measuredAngles";
 import { judgePolarity } from "../vsepr/polarity";
+import { computeShape, polarityFromShape, rememberShape } from "./shape3d";
 
 export function buildAnalysis(
   reading: SpeciesReading,
@@ -68,7 +69,13 @@ export function buildAnalysis(
   let resonanceForms = structure.resonanceForms;
   if (!Number.isFinite(resonanceForms) || resonanceForms < 1) resonanceForms = 1;
 
-  return {
+  // One centre: ideal directions settle polarity exactly. Several: judge the whole 3D model.
+  const shape = details.length > 1 ? computeShape(graph, radical) : undefined;
+  const polarity = shape
+    ? polarityFromShape(graph, shape, reading.charge)
+    : judgePolarity(graph, details, mainCentre, reading.charge);
+
+  const analysis: SpeciesAnalysis = {
     reading,
     valenceElectrons: structure.valenceElectrons,
     radical,
@@ -77,9 +84,11 @@ export function buildAnalysis(
     graph,
     resonanceForms,
     centres: details.map((d) => d.centre),
-    polarity: judgePolarity(graph, details, mainCentre, reading.charge),
+    polarity,
     measuredAngles: measuredAnglesFor(reading.composition, reading.charge),
     warnings,
   };
+  if (shape) rememberShape(analysis, shape);
+  return analysis;
 }
 

@@ -3,7 +3,7 @@
  */
 import { atomTraits } from "../lewis/electronBookkeeping";
 import { add, norm, type Vec3 } from "../geometry/vectors";
-import type { CentreAnalysis, MolecularGraph } from "../types";
+import type { AngleExpectation, CentreAnalysis, MolecularGraph } from "../types";
 import { lonePairJoinsPiSystem } from "./piSystems";
 import { assignSites, type Ligand, type SiteAssignment } from "./assignSites";
 import { expectedAngles, idealAnglesFor, type AngleContext } from "./expectedAngles";
@@ -86,12 +86,13 @@ export function analyzeCentre(graph: MolecularGraph, index: number, radical: boo
     axe: axeNotation(ligands.length, loneDomains),
     stericNumber,
     bondingDomains: ligands.length,
-    lonePairs: atom.lonePairs,
+    // Lone pairs that take a site; a delocalised pair is named in the hybridization note.
+    lonePairs: atom.lonePairs - delocalised,
     unpairedElectrons: atom.unpairedElectrons,
     electronGeometry,
     molecularGeometry,
     idealAngles: idealAnglesFor(angleContext),
-    expectedAngles: expectedAngles(angleContext),
+    expectedAngles: withRingAngle(expectedAngles(angleContext), smallestRingThrough(graph, index, ligands)),
     hybridization,
     ...(stericNumber >= 5
       ? { hybridizationNote: EXPANDED_NOTE }
@@ -112,4 +113,59 @@ function countMultipleBondsWithResonance(graph: MolecularGraph, ligands: readonl
   return ligands.filter(
     (l) => l.bondOrder > 1 || (multiplyBonded.has(l.symbol) && graph.atoms[l.atom].formalCharge < 0),
   ).length;
+}
+
+/** Rings this small force their interior angle on the atom, whatever its hybridization. */
+const STRAINED_RING_LIMIT = 5;
+
+/**
+ * Size of the smallest ring through the centre (3 to 5), found by a breadth-first search from
+ * each neighbour back to another neighbour without passing the centre; undefined otherwise.
+ */
+function smallestRingThrough(graph: MolecularGraph, centre: number, ligands: readonly Ligand[]): number | undefined {
+  if (ligands.length < 2) return undefined;
+  const adjacency = new Map<number, number[]>();
+  for (const bond of graph.bonds) {
+    (adjacency.get(bond.from) ?? adjacency.set(bond.from, []).get(bond.from)!).push(bond.to);
+    (adjacency.get(bond.to) ?? adjacency.set(bond.to, []).get(bond.to)!).push(bond.from);
+  }
+  let best: number | undefined;
+  for (const start of ligands) {
+    const distance = new Map<number, number>([[start.atom, 0]]);
+    let frontier = [start.atom];
+    for (let depth = 1; depth <= STRAINED_RING_LIMIT - 2 && frontier.length > 0; depth++) {
+      const next: number[] = [];
+      for (const atom of frontier) {
+        for (const other of adjacency.get(atom) ?? []) {
+          if (other === centre || distance.has(other)) continue;
+          distance.set(other, depth);
+          next.push(other);
+        }
+      }
+      frontier = next;
+    }
+    for (const end of ligands) {
+      if (end.atom === start.atom) continue;
+      const d = distance.get(end.atom);
+      if (d !== undefined && (best === undefined || d + 2 < best)) best = d + 2;
+    }
+  }
+  return best;
+}
+
+/** Add the interior angle of a small ring the centre sits in (60° in C3, about 88° in C4). */
+function withRingAngle(angles: AngleExpectation[], ringSize: number | undefined): AngleExpectation[] {
+  if (ringSize === undefined || angles.length === 0) return angles;
+  const polygon = 180 - 360 / ringSize;
+  return [
+    ...angles,
+    {
+      // Still measured against the electron geometry's ideal; the ring pulls it far below.
+      ideal: angles[0].ideal,
+      min: Math.round((polygon - 4) * 10) / 10,
+      max: Math.round((polygon + 4) * 10) / 10,
+      note: `held near the interior angle of its ${ringSize}-membered ring (ring strain)`,
+      between: `in ${ringSize}-membered ring`,
+    },
+  ];
 }

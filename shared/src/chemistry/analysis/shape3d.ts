@@ -1,0 +1,82 @@
+/**
+ * The 3D side of an analysis: model coordinates, the point group found in them, and polarity
+ * judged from the whole molecule's bond dipoles. Worked out on demand and kept per analysis,
+ * since editors ask for it only when a view or an export needs it.
+ */
+import { buildCoordinates, type MolecularCoordinates } from "../geometry/buildCoordinates";
+import { add, norm, normalize, scale, sub, type Vec3 } from "../geometry/vectors";
+import { atomTraits } from "../lewis/electronBookkeeping";
+import { findPointGroup } from "../symmetry/pointGroup";
+import type { MolecularGraph, PolarityVerdict, SpeciesAnalysis } from "../types";
+
+export interface SpeciesShape {
+  readonly coordinates: MolecularCoordinates;
+  /** Schoenflies symbol of the model geometry, e.g. "C2v"; undefined if the search failed. */
+  readonly pointGroup: string | undefined;
+}
+
+const shapes = new WeakMap<SpeciesAnalysis, SpeciesShape>();
+
+/** Groups whose symmetry allows a permanent dipole: C1, Cs, Cn, Cnv and C∞v. */
+export function pointGroupAllowsDipole(symbol: string): boolean {
+  return /^(C1|Cs|C\d+|C\d+v|C∞v)$/.test(symbol);
+}
+
+/** Coordinates and point group of an analysed species. */
+export function shapeOf(analysis: SpeciesAnalysis): SpeciesShape {
+  const cached = shapes.get(analysis);
+  if (cached) return cached;
+  const shape = computeShape(analysis.graph, analysis.radical);
+  shapes.set(analysis, shape);
+  return shape;
+}
+
+/** Record a shape worked out while the analysis was built, so it is not built twice. */
+export function rememberShape(analysis: SpeciesAnalysis, shape: SpeciesShape): void {
+  shapes.set(analysis, shape);
+}
+
+export function computeShape(graph: MolecularGraph, radical: boolean): SpeciesShape {
+  const coordinates = buildCoordinates(graph, radical);
+  const found = findPointGroup(coordinates.atoms.map((atom) => ({ element: atom.symbol, position: atom.position })));
+  return { coordinates, pointGroup: found.ok ? found.value.symbol : undefined };
+}
+
+/** Weight of one lone pair against a bond dipole of one electronegativity unit (a model choice). */
+const LONE_PAIR_WEIGHT = 0.5;
+const ZERO = 1e-3;
+
+/**
+ * Polarity of a molecule with several centres: the point group decides whether a dipole is
+ * allowed; the vector sum of bond dipoles and lone pairs gives the size of the model estimate.
+ */
+export function polarityFromShape(graph: MolecularGraph, shape: SpeciesShape, charge: number): PolarityVerdict {
+  const positions = shape.coordinates.atoms.map((atom) => atom.position);
+  let sum: Vec3 = [0, 0, 0];
+  for (const bond of graph.bonds) {
+    const difference =
+      atomTraits(graph.atoms[bond.to].symbol).electronegativity -
+      atomTraits(graph.atoms[bond.from].symbol).electronegativity;
+    if (difference === 0) continue;
+    sum = add(sum, scale(normalize(sub(positions[bond.to], positions[bond.from])), difference));
+  }
+  for (const lonePair of shape.coordinates.lonePairs) {
+    sum = add(sum, scale(lonePair.direction, (LONE_PAIR_WEIGHT * lonePair.electrons) / 2));
+  }
+  const dipoleEstimate = Math.round(norm(sum) * 100) / 100;
+  const group = shape.pointGroup;
+  const polar = group ? pointGroupAllowsDipole(group) : norm(sum) > ZERO;
+  const reason = group
+    ? polar
+      ? `the model geometry has ${group} symmetry, which leaves the bond dipoles and lone pairs uncancelled`
+      : `bond dipoles cancel by symmetry (the model geometry is ${group})`
+    : polar
+      ? "bond dipoles and lone pairs do not cancel"
+      : "bond dipoles cancel";
+  const verdict: PolarityVerdict = { polar, reason, dipoleEstimate: polar ? dipoleEstimate : 0 };
+  if (charge === 0) return verdict;
+  return {
+    ...verdict,
+    reason: `an ion (net charge ${charge > 0 ? "+" : ""}${charge}); its charge distribution is ${polar ? "asymmetric" : "symmetric"}: ${reason}`,
+  };
+}
