@@ -1,0 +1,66 @@
+// Measures the language server over stdio: time to first diagnostics, hover latency, and the
+// cost of a large document. Run after `npm run build`: node tests/server/latency.bench.mjs
+import { spawn } from "node:child_process";
+import { readFileSync } from "node:fs";
+import { fileURLToPath } from "node:url";
+import {
+  DidOpenTextDocumentNotification,
+  ExitNotification,
+  HoverRequest,
+  InitializeRequest,
+  InitializedNotification,
+  PublishDiagnosticsNotification,
+  ShutdownRequest,
+  StreamMessageReader,
+  StreamMessageWriter,
+  createProtocolConnection,
+} from "vscode-languageserver-protocol/node";
+
+const root = fileURLToPath(new URL("../..", import.meta.url));
+const child = spawn(process.execPath, [`${root}dist/server.js`, "--stdio"], { stdio: "pipe" });
+const connection = createProtocolConnection(new StreamMessageReader(child.stdout), new StreamMessageWriter(child.stdin));
+const waiting = new Map();
+connection.onNotification(PublishDiagnosticsNotification.type, (params) => waiting.get(params.uri)?.(params));
+connection.listen();
+
+const diagnosticsFor = (uri) => new Promise((resolve) => waiting.set(uri, resolve));
+const percentile = (values, p) => [...values].sort((a, b) => a - b)[Math.min(values.length - 1, Math.floor((p / 100) * values.length))];
+
+await connection.sendRequest(InitializeRequest.type, {
+  processId: process.pid,
+  rootUri: null,
+  capabilities: { textDocument: { hover: { contentFormat: ["markdown"] }, publishDiagnostics: { versionSupport: true } } },
+});
+await connection.sendNotification(InitializedNotification.type, {});
+
+async function open(uri, languageId, text) {
+  const started = performance.now();
+  const published = diagnosticsFor(uri);
+  await connection.sendNotification(DidOpenTextDocumentNotification.type, { textDocument: { uri, languageId, version: 1, text } });
+  const params = await published;
+  return { ms: performance.now() - started, count: params.diagnostics.length };
+}
+
+const notes = readFileSync(`${root}tests/fixtures/server/run-21-cylinder-audit.md`, "utf8");
+const first = await open("file:///bench/run-21.md", "markdown", notes);
+console.log(`fixture notebook (${notes.length} chars): first diagnostics after ${first.ms.toFixed(0)} ms (includes the 150 ms pause), ${first.count} diagnostics`);
+
+const hoverTimes = [];
+const line = notes.split("\n").findIndex((text) => text.startsWith("SF4 is the one"));
+for (let index = 0; index < 500; index += 1) {
+  const started = performance.now();
+  await connection.sendRequest(HoverRequest.type, { textDocument: { uri: "file:///bench/run-21.md" }, position: { line, character: 1 } });
+  hoverTimes.push(performance.now() - started);
+}
+console.log(`hover on SF4, 500 requests: p50 ${percentile(hoverTimes, 50).toFixed(2)} ms, p99 ${percentile(hoverTimes, 99).toFixed(2)} ms`);
+
+for (const megabytes of [0.25, 1, 50]) {
+  const paragraph = "Run 22 note: the SF4 cylinder KR-0812 was weighed and returned to bay C.\n";
+  const text = paragraph.repeat(Math.ceil((megabytes * 1024 * 1024) / paragraph.length));
+  const result = await open(`file:///bench/large-${megabytes}.md`, "markdown", text);
+  console.log(`markdown of ${megabytes} MB: first diagnostics after ${result.ms.toFixed(0)} ms, ${result.count} diagnostics`);
+}
+
+await connection.sendRequest(ShutdownRequest.type);
+await connection.sendNotification(ExitNotification.type);
+connection.dispose();
