@@ -6,7 +6,7 @@ import type { TextRange } from "../chemistry/types";
 import { occurrenceAt, unreadableAt, type ScanSink, type SpeciesReader } from "./speciesReader";
 
 /** Longest `\ce{...}` body looked at; longer spans are not notes but pasted data. */
-const MAX_SPAN = 2000;
+const MAX_SPAN = 400;
 
 /** Where a `\ce{` opened at `open` ends (just past its closing brace), or -1 when it does not close. */
 export function mhchemSpanEnd(text: string, open: number, limit: number): number {

@@ -51,6 +51,8 @@ function words(meaning: ColumnMeaning, headers: readonly string[]): [string, Col
   return headers.map((header) => [header, meaning]);
 }
 
+const MAX_HEADER = 80;
+
 /** Unit words that may trail a header without brackets: "angle deg", "bond angle degrees". */
 const TRAILING_UNITS = /\s+(?:deg|degs|degree|degrees|in degrees|count|no|number|y n|yes no)$/;
 
@@ -72,6 +74,8 @@ export function normalizeHeader(header: string): string {
 
 /** What the column under `header` holds, or undefined for any other column (ids, lots, notes). */
 export function meaningOfHeader(header: string): ColumnMeaning | undefined {
+  // Headers are a few words; anything longer is data, and not worth a regular expression's time.
+  if (header.length > MAX_HEADER) return undefined;
   const normalized = normalizeHeader(header);
   const known = HEADERS.get(normalized) ?? HEADERS.get(normalized.replace(/^(?:the|predicted|expected|ideal|vsepr) /, ""));
   if (known) return known;
@@ -87,5 +91,5 @@ export function meaningOfHeader(header: string): ColumnMeaning | undefined {
 
 /** Headers that name a formula column, preferred over a "species" column that may hold names. */
 export function isFormulaHeader(header: string): boolean {
-  return /formula/.test(normalizeHeader(header));
+  return header.length <= MAX_HEADER && /formula/.test(normalizeHeader(header));
 }
