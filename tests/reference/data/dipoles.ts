@@ -72,6 +72,7 @@ export const DIPOLE_MOMENTS: readonly DipoleCase[] = [
   { species: "BCl3", debye: 0 }, // common practice: trigonal planar D3h, no permanent dipole
   { species: "SO3", debye: 0 }, // common practice: trigonal planar D3h, no permanent dipole
   { species: "PCl5", debye: 0 }, // common practice: trigonal bipyramidal D3h, no permanent dipole
+  { species: "PCl3F2", debye: 0 }, // common practice: both F take the axial sites (D3h), no permanent dipole
   { species: "PF5", debye: 0 }, // common practice: trigonal bipyramidal D3h, no permanent dipole
   { species: "SF6", debye: 0 }, // common practice: octahedral Oh, no permanent dipole
   { species: "SeF6", debye: 0 }, // common practice: octahedral Oh, no permanent dipole

@@ -17,6 +17,14 @@ export const SMILES_DIPOLES: readonly SmilesDipoleCase[] = [
   { name: "cyclopropane", smiles: "C1CC1", debye: 0 }, // common practice: D3h, no permanent dipole
   { name: "1,4-dichlorobenzene", smiles: "Clc1ccc(Cl)cc1", debye: 0 }, // common practice: D2h, no permanent dipole
   { name: "carbon dioxide", smiles: "O=C=O", debye: 0 }, // common practice: D∞h, no permanent dipole
+  { name: "cyclohexane", smiles: "C1CCCCC1", debye: 0 }, // common practice: chair D3d, no permanent dipole
+  { name: "cubane", smiles: "C12C3C4C1C5C2C3C45", debye: 0 }, // common practice: Oh, no permanent dipole
+  { name: "trans-1,2-dichloroethene", smiles: "Cl/C=C/Cl", debye: 0 }, // common practice: C2h, no permanent dipole
+  { name: "cis-1,2-dichloroethene", smiles: "Cl/C=C\\Cl", debye: 1.9 }, // from memory: CRC Handbook, Dipole Moments table
+  { name: "trans-difluorodiazene", smiles: "F/N=N/F", debye: 0 }, // common practice: C2h, no permanent dipole
+  { name: "cis-difluorodiazene", smiles: "F/N=N\\F", debye: 0.16 }, // from memory: CRC Handbook, Dipole Moments table
+  { name: "1,2-dichlorobenzene", smiles: "Clc1ccccc1Cl", debye: 2.5 }, // from memory: CRC Handbook, Dipole Moments table
+  { name: "1,3-dichlorobenzene", smiles: "Clc1cccc(Cl)c1", debye: 1.72 }, // from memory: CRC Handbook, Dipole Moments table
   { name: "acetonitrile", smiles: "CC#N", debye: 3.92 }, // from memory: CRC Handbook, Dipole Moments table
   { name: "pyridine", smiles: "c1ccncc1", debye: 2.2 }, // from memory: CRC Handbook, Dipole Moments table
   { name: "chlorobenzene", smiles: "Clc1ccccc1", debye: 1.69 }, // from memory: CRC Handbook, Dipole Moments table
