@@ -2,7 +2,7 @@ import { beforeAll, describe, expect, it } from "vitest";
 import { Molecule } from "openchemlib";
 import { analyzeSmiles } from "../../shared/src/index";
 import type { SpeciesAnalysis } from "../../shared/src/index";
-import { CARBON_FRAMEWORKS, SMILES_DIPOLES } from "./data/smilesReferences";
+import { CARBON_FRAMEWORKS, SMILES_DIPOLES, SMILES_RESONANCE } from "./data/smilesReferences";
 
 function smilesAnalysis(smiles: string): SpeciesAnalysis {
   const result = analyzeSmiles(smiles);
@@ -45,5 +45,11 @@ describe("carbon hybridization against openchemlib", () => {
     const analysis = smilesAnalysis(smiles);
     const engine = analysis.centres.filter((centre) => centre.atom === "C").map((centre) => centre.hybridization).sort();
     expect(engine, `${smiles}: openchemlib says [${reference.join(", ")}]`).toEqual(reference);
+  });
+});
+
+describe("resonance counted from SMILES", () => {
+  it.each(SMILES_RESONANCE)("$name $smiles has $forms equivalent structures", ({ name, smiles, forms }) => {
+    expect(smilesAnalysis(smiles).resonanceForms, name).toBe(forms);
   });
 });

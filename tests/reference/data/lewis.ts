@@ -46,6 +46,10 @@ export const RESONANCE_FORMS: readonly ResonanceCase[] = [
   { species: "CO3^2-", forms: 3 },
   { species: "O3", forms: 2 },
   { species: "NO2-", forms: 2 },
+  { species: "HCOO-", forms: 2 },
+  { species: "CH3COO-", forms: 2 },
+  { species: "CH3CO2-", forms: 2 },
+  { species: "HCO3-", forms: 2 },
 ];
 
 export interface FormalChargeCase {
@@ -234,6 +238,15 @@ export const MULTI_CENTRE: readonly MultiCentreCase[] = [
   },
   {
     species: "CH3COOH",
+    centres: [
+      { atom: "C", count: 1, axe: "AX4", molecularGeometry: "tetrahedral" },
+      { atom: "C", count: 1, axe: "AX3", molecularGeometry: "trigonal planar" },
+      { atom: "O", count: 1, axe: "AX2E2", molecularGeometry: "bent" },
+    ],
+  },
+  // common practice: CO2H after a carbon is the carboxyl group, the usual way to write acetic acid
+  {
+    species: "CH3CO2H",
     centres: [
       { atom: "C", count: 1, axe: "AX4", molecularGeometry: "tetrahedral" },
       { atom: "C", count: 1, axe: "AX3", molecularGeometry: "trigonal planar" },

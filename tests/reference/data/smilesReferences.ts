@@ -53,3 +53,20 @@ export const CARBON_FRAMEWORKS: readonly string[] = [
   "OCC(O)CO",
   "O=C=C=C=O",
 ];
+
+export interface SmilesResonanceCase {
+  readonly name: string;
+  readonly smiles: string;
+  readonly forms: number;
+}
+
+// from memory: general chemistry and organic text conventions (equivalent Kekulé or charge-shifted
+// structures); a species must count the same whichever notation it arrives in
+export const SMILES_RESONANCE: readonly SmilesResonanceCase[] = [
+  { name: "benzene", smiles: "c1ccccc1", forms: 2 },
+  { name: "naphthalene", smiles: "c1ccc2ccccc2c1", forms: 3 },
+  { name: "carbonate", smiles: "[O-]C(=O)[O-]", forms: 3 },
+  { name: "acetate", smiles: "CC(=O)[O-]", forms: 2 },
+  { name: "nitromethane", smiles: "C[N+](=O)[O-]", forms: 2 },
+  { name: "nitrate", smiles: "[O-][N+](=O)[O-]", forms: 3 },
+];
