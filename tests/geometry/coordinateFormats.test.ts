@@ -1,12 +1,22 @@
 // XYZ and MDL molfile output read back: our own XYZ parser, OpenChemLib and RDKit.
 import { createRequire } from "node:module";
-import type { RDKitModule } from "@rdkit/rdkit";
 import { beforeAll, describe, expect, it } from "vitest";
 import { analyzeSpecies, type MolecularGraph } from "../../shared/src/index";
 import { buildCoordinates, type MolecularCoordinates } from "../../shared/src/chemistry/geometry/buildCoordinates";
 import { toMolfile } from "../../shared/src/chemistry/formats/molfile";
 import { toXyz } from "../../shared/src/chemistry/formats/xyz";
 import { graphFromSmiles } from "./graphFromSmiles";
+
+/** The few calls of RDKit's JavaScript build that these tests use. */
+interface RDKitMolecule {
+  is_valid(): boolean;
+  get_json(): string;
+  get_molblock(): string;
+  delete(): void;
+}
+interface RDKitModule {
+  get_mol(input: string, options?: string): RDKitMolecule | null;
+}
 
 const require = createRequire(import.meta.url);
 const OCL = require("openchemlib");
