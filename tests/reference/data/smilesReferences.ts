@@ -31,6 +31,10 @@ export const SMILES_DIPOLES: readonly SmilesDipoleCase[] = [
   { name: "fluorobenzene", smiles: "Fc1ccccc1", debye: 1.6 }, // from memory: CRC Handbook, Dipole Moments table
   { name: "nitromethane", smiles: "C[N+](=O)[O-]", debye: 3.46 }, // from memory: CRC Handbook, Dipole Moments table
   { name: "propyne", smiles: "CC#C", debye: 0.78 }, // from memory: CRC Handbook, Dipole Moments table
+  // Hydrocarbons whose point group allows a dipole (C3v, Cs). Propane (0.08 D) and isobutane (0.13 D)
+  // are left out: practice calls them nonpolar although their point groups allow a dipole.
+  { name: "toluene", smiles: "Cc1ccccc1", debye: 0.375 }, // from memory: CRC Handbook, Dipole Moments table
+  { name: "propene", smiles: "CC=C", debye: 0.366 }, // from memory: CRC Handbook, Dipole Moments table
   { name: "acetone", smiles: "CC(C)=O", debye: 2.88 }, // from memory: CRC Handbook, Dipole Moments table
   { name: "ethanol", smiles: "CCO", debye: 1.69 }, // from memory: CRC Handbook, Dipole Moments table
 ];
