@@ -18,6 +18,8 @@ export interface ClientFeatures {
   readonly documentChanges: boolean;
   /** Code actions may be returned as literals with edits (not only commands). */
   readonly codeActionLiterals: boolean;
+  /** Code actions may leave out their edit and have it filled in by `codeAction/resolve`. */
+  readonly codeActionResolveEdit: boolean;
   readonly hoverMarkdown: boolean;
 }
 
@@ -34,6 +36,8 @@ export function clientFeaturesFrom(capabilities: ClientCapabilities): ClientFeat
     inlayHintRefresh: workspace?.inlayHint?.refreshSupport === true,
     documentChanges: workspace?.workspaceEdit?.documentChanges === true,
     codeActionLiterals: isObject(textDocument?.codeAction?.codeActionLiteralSupport),
+    codeActionResolveEdit:
+      textDocument?.codeAction?.dataSupport === true && arrayIncludes(textDocument?.codeAction?.resolveSupport?.properties, "edit"),
     hoverMarkdown: arrayIncludes(textDocument?.hover?.contentFormat, MarkupKind.Markdown),
   };
 }

@@ -92,7 +92,10 @@ function serverCapabilities(features: ClientFeatures): InitializeResult["capabil
     textDocumentSync: { openClose: true, change: TextDocumentSyncKind.Incremental },
     hoverProvider: true,
     codeActionProvider: features.codeActionLiterals
-      ? { codeActionKinds: [CodeActionKind.QuickFix, `${CodeActionKind.SourceFixAll}.lonepair`] }
+      ? {
+          codeActionKinds: [CodeActionKind.QuickFix, `${CodeActionKind.SourceFixAll}.lonepair`],
+          resolveProvider: features.codeActionResolveEdit,
+        }
       : false,
     inlayHintProvider: features.inlayHints ? { resolveProvider: false } : undefined,
     diagnosticProvider: features.pullDiagnostics

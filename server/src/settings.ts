@@ -45,7 +45,8 @@ export function settingsFrom(raw: unknown): ServerSettings {
   };
 }
 
-function isRecord(value: unknown): value is Record<string, unknown> {
+/** A plain object (not null, not an array), as settings sections are. */
+export function isRecord(value: unknown): value is Record<string, unknown> {
   return typeof value === "object" && value !== null && !Array.isArray(value);
 }
 

@@ -6,7 +6,7 @@
 import type { Connection } from "vscode-languageserver";
 import type { ServerLog } from "./guardedHandler";
 import { describeError } from "./guardedHandler";
-import { DEFAULT_SETTINGS, settingsFrom, type ServerSettings } from "./settings";
+import { DEFAULT_SETTINGS, isRecord, settingsFrom, type ServerSettings } from "./settings";
 
 export interface SettingsStore {
   /** Settings for one document. Never rejects. */
@@ -67,10 +67,6 @@ export function createSettingsStore(
       return generation;
     },
   };
-}
-
-function isRecord(value: unknown): value is Record<string, unknown> {
-  return typeof value === "object" && value !== null;
 }
 
 /** Resolves `undefined` when `promise` takes longer than `milliseconds`. */

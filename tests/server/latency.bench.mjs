@@ -4,6 +4,7 @@ import { spawn } from "node:child_process";
 import { readFileSync } from "node:fs";
 import { fileURLToPath } from "node:url";
 import {
+  CodeActionRequest,
   DidOpenTextDocumentNotification,
   ExitNotification,
   HoverRequest,
@@ -29,7 +30,13 @@ const percentile = (values, p) => [...values].sort((a, b) => a - b)[Math.min(val
 await connection.sendRequest(InitializeRequest.type, {
   processId: process.pid,
   rootUri: null,
-  capabilities: { textDocument: { hover: { contentFormat: ["markdown"] }, publishDiagnostics: { versionSupport: true } } },
+  capabilities: {
+    textDocument: {
+      hover: { contentFormat: ["markdown"] },
+      publishDiagnostics: { versionSupport: true },
+      codeAction: { codeActionLiteralSupport: { codeActionKind: { valueSet: ["quickfix"] } } },
+    },
+  },
 });
 await connection.sendNotification(InitializedNotification.type, {});
 
@@ -60,6 +67,24 @@ for (const megabytes of [0.25, 1, 50]) {
   const result = await open(`file:///bench/large-${megabytes}.md`, "markdown", text);
   console.log(`markdown of ${megabytes} MB: first diagnostics after ${result.ms.toFixed(0)} ms, ${result.count} diagnostics`);
 }
+
+const header = "id,species,formula,valence electrons,lone pairs on central atom,molecular geometry,polarity,supplier lot\n";
+const row = "CYL-102,ammonia,NH3,8,1,trigonal planar,polar,KR-0813\n";
+const table = header + row.repeat(Math.floor((1024 * 1024 - header.length) / row.length));
+const csv = await open("file:///bench/cylinders.csv", "plaintext", table);
+console.log(`CSV of ${(table.length / 1e6).toFixed(2)} M chars: first diagnostics after ${csv.ms.toFixed(0)} ms, ${csv.count} diagnostics`);
+const actionTimes = [];
+for (let index = 0; index < 20; index += 1) {
+  const started = performance.now();
+  const actions = await connection.sendRequest(CodeActionRequest.type, {
+    textDocument: { uri: "file:///bench/cylinders.csv" },
+    range: { start: { line: 1 + index, character: 30 }, end: { line: 1 + index, character: 30 } },
+    context: { diagnostics: [] },
+  });
+  actionTimes.push(performance.now() - started);
+  if (index === 0) console.log(`code actions at a row: ${actions.length} (fix-all edits: ${actions.at(-1)?.edit?.changes?.["file:///bench/cylinders.csv"]?.length})`);
+}
+console.log(`code actions on that CSV, 20 requests: p50 ${percentile(actionTimes, 50).toFixed(1)} ms, max ${Math.max(...actionTimes).toFixed(1)} ms`);
 
 await connection.sendRequest(ShutdownRequest.type);
 await connection.sendNotification(ExitNotification.type);

@@ -4,6 +4,8 @@
  */
 import { afterAll, beforeAll, describe, expect, it } from "vitest";
 import {
+  CodeActionRequest,
+  CodeActionResolveRequest,
   DidChangeConfigurationNotification,
   DocumentDiagnosticReportKind,
   DocumentDiagnosticRequest,
@@ -11,14 +13,20 @@ import {
   HoverRequest,
   InlayHintRequest,
   type ClientCapabilities,
+  type CodeAction,
+  type TextEdit,
   type FullDocumentDiagnosticReport,
   type MarkupContent,
 } from "vscode-languageserver-protocol/node";
-import { FULL_CAPABILITIES, fixture, fixtureUri, positionOf, startSession, type LspSession } from "./lspSession";
+import { FULL_CAPABILITIES, applyEdits, fixture, fixtureUri, positionOf, startSession, type LspSession } from "./lspSession";
 
 const PULLING_CLIENT: ClientCapabilities = {
   ...FULL_CAPABILITIES,
-  textDocument: { ...FULL_CAPABILITIES.textDocument, diagnostic: { dynamicRegistration: false } },
+  textDocument: {
+    ...FULL_CAPABILITIES.textDocument,
+    diagnostic: { dynamicRegistration: false },
+    codeAction: { ...FULL_CAPABILITIES.textDocument?.codeAction, dataSupport: true, resolveSupport: { properties: ["edit"] } },
+  },
   workspace: { ...FULL_CAPABILITIES.workspace, configuration: true },
 };
 
@@ -105,6 +113,29 @@ describe("with workspace settings and pull diagnostics", () => {
     const lines = result.text.trim().split(/\r?\n/);
     expect(lines[0]).toBe("Formula,Hybridization");
     expect(lines).toContain("SF4,sp3d");
+  });
+});
+
+describe("with a client that resolves code action edits", () => {
+  it("sends fix all without its edit and fills it in on resolve, for the current version only", async () => {
+    const uri = fixtureUri("inventory/cylinders-resolve.csv");
+    const document = session.open(uri, "plaintext", fixture("cylinders-bay-c.csv"));
+    const actions = (await session.connection.sendRequest(CodeActionRequest.type, {
+      textDocument: { uri },
+      range: { start: { line: 0, character: 0 }, end: { line: 0, character: 0 } },
+      context: { diagnostics: [] },
+    })) as CodeAction[];
+    const fixAll = actions.find((action) => action.title === "Fix all lonepair table values in this file")!;
+    expect(fixAll.edit).toBeUndefined();
+    const resolved = await session.connection.sendRequest(CodeActionResolveRequest.type, fixAll);
+    const edits = (resolved.edit?.documentChanges?.[0] as { edits: TextEdit[] }).edits;
+    // from memory: NF3 has 26 valence electrons; common practice: NH3 is trigonal pyramidal
+    const after = applyEdits(document, edits);
+    expect(after).toContain("CYL-102,ammonia,NH3,8,1,trigonal pyramidal,polar");
+    expect(after).toContain("CYL-103,nitrogen trifluoride,NF3,26,1,");
+    session.change(uri, [{ range: { start: { line: 0, character: 0 }, end: { line: 0, character: 0 } }, text: "" }]);
+    const stale = await session.connection.sendRequest(CodeActionResolveRequest.type, fixAll);
+    expect(stale.edit).toBeUndefined();
   });
 });
 

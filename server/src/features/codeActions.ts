@@ -11,7 +11,8 @@ import {
   type WorkspaceEdit,
 } from "vscode-languageserver";
 import type { TextDocument } from "vscode-languageserver-textdocument";
-import type { DocumentModel, Finding, TextFix } from "../core";
+import type { DocumentModel, Finding, TextFix, TextRange } from "../core";
+import type { AnalysedDocument } from "../documentCache";
 import { guarded } from "../guardedHandler";
 import { lspRange, offsetRange, rangesTouch, rangeWithin } from "../ranges";
 import { enabledDocument, type ServerContext } from "../serverContext";
@@ -23,7 +24,13 @@ export const FIX_ALL_TITLE = "Fix all lonepair table values in this file";
 /** Kind of the fix-all action when the client asks for source actions. */
 const FIX_ALL_KIND = `${CodeActionKind.SourceFixAll}.lonepair`;
 
-/** Registers the code action handler. */
+/** What a deferred fix-all action carries until the client asks for its edit. */
+interface FixAllData {
+  readonly uri: string;
+  readonly version: number;
+}
+
+/** Registers the code action handler, and the resolve handler when the client resolves edits. */
 export function registerCodeActions(context: ServerContext): void {
   context.connection.onCodeAction(
     guarded<CodeActionParams, CodeAction[]>(context.log, "code actions", [], async (params, token) => {
@@ -44,14 +51,44 @@ export function registerCodeActions(context: ServerContext): void {
           actions.push(quickFix(context, document, finding, finding.fix, params.context.diagnostics));
         }
       }
-      const tableFixes = tableValueFixes(analysed.model, findings);
-      if (tableFixes.length > 0) {
-        const kind = wants(CodeActionKind.QuickFix) ? CodeActionKind.QuickFix : wants(FIX_ALL_KIND) ? FIX_ALL_KIND : undefined;
-        if (kind) actions.push({ title: FIX_ALL_TITLE, kind, edit: workspaceEdit(context, document, tableFixes.map((fix) => textEdit(document, fix))) });
+      const kind = wants(CodeActionKind.QuickFix) ? CodeActionKind.QuickFix : wants(FIX_ALL_KIND) ? FIX_ALL_KIND : undefined;
+      if (kind && tableFixesOf(analysed).length > 0) {
+        const action: CodeAction = { title: FIX_ALL_TITLE, kind };
+        // A big table's fix-all edit is large: where the client resolves edits, it is built only when chosen.
+        if (context.clientFeatures().codeActionResolveEdit) action.data = { uri: document.uri, version: document.version } satisfies FixAllData;
+        else action.edit = fixAllEdit(context, document, analysed);
+        actions.push(action);
       }
       return actions;
     }),
   );
+  if (!context.clientFeatures().codeActionResolveEdit) return;
+  context.connection.onCodeActionResolve(
+    guarded<CodeAction, CodeAction>(context.log, "code action resolve", { title: FIX_ALL_TITLE }, async (action) => {
+      const data = action.data as Partial<FixAllData> | undefined;
+      if (action.title !== FIX_ALL_TITLE || typeof data?.uri !== "string") return action;
+      const enabled = await enabledDocument(context, data.uri);
+      // An edit for an older version would land in the wrong places: offer none.
+      if (!enabled || enabled.document.version !== data.version) return action;
+      return { ...action, edit: fixAllEdit(context, enabled.document, enabled.analysed) };
+    }),
+  );
+}
+
+function fixAllEdit(context: ServerContext, document: TextDocument, analysed: AnalysedDocument): WorkspaceEdit {
+  return workspaceEdit(context, document, tableFixesOf(analysed).map((fix) => textEdit(document, fix)));
+}
+
+/** Table fixes per analysed version: the lightbulb asks on every cursor move. */
+const tableFixMemo = new WeakMap<AnalysedDocument, readonly TextFix[]>();
+
+function tableFixesOf(analysed: AnalysedDocument): readonly TextFix[] {
+  let fixes = tableFixMemo.get(analysed);
+  if (!fixes) {
+    fixes = tableValueFixes(analysed.model, analysed.findings());
+    tableFixMemo.set(analysed, fixes);
+  }
+  return fixes;
 }
 
 function quickFix(
@@ -79,10 +116,12 @@ function quickFix(
  * (two findings may want to rewrite the same cell; the first wins).
  */
 export function tableValueFixes(model: DocumentModel, findings: readonly Finding[]): TextFix[] {
-  const cells = model.records.flatMap((record) => [record.species.range, ...record.cells.map((cell) => cell.range)]);
+  const cells = model.records
+    .flatMap((record) => [record.species.range, ...record.cells.map((cell) => cell.range)])
+    .sort((a, b) => a.start - b.start);
   const fixes = findings
     .map((finding) => finding.fix)
-    .filter((fix): fix is TextFix => fix !== undefined && cells.some((cell) => rangeWithin(fix.range, cell)))
+    .filter((fix): fix is TextFix => fix !== undefined && insideSomeCell(fix.range, cells))
     .sort((a, b) => a.range.start - b.range.start);
   const chosen: TextFix[] = [];
   for (const fix of fixes) {
@@ -90,6 +129,26 @@ export function tableValueFixes(model: DocumentModel, findings: readonly Finding
     if (!previous || previous.range.end <= fix.range.start) chosen.push(fix);
   }
   return chosen;
+}
+
+/**
+ * Cells do not overlap, so the only candidate is the last cell starting at or before the range:
+ * a binary search keeps a table of thousands of rows cheap on every lightbulb request.
+ */
+function insideSomeCell(range: TextRange, sortedCells: readonly TextRange[]): boolean {
+  let low = 0;
+  let high = sortedCells.length - 1;
+  let candidate = -1;
+  while (low <= high) {
+    const middle = (low + high) >> 1;
+    if (sortedCells[middle].start <= range.start) {
+      candidate = middle;
+      low = middle + 1;
+    } else {
+      high = middle - 1;
+    }
+  }
+  return candidate >= 0 && rangeWithin(range, sortedCells[candidate]);
 }
 
 function textEdit(document: TextDocument, fix: TextFix): TextEdit {
