@@ -131,7 +131,7 @@ describe("awkward documents", () => {
     const paragraph = "Run 22 note: the SF4 cylinder KR-0812 was weighed and returned to bay C.\n";
     const text = paragraph.repeat(Math.ceil((50 * 1024 * 1024) / paragraph.length));
     session.open(uri, "markdown", text);
-    const published = await session.waitForDiagnostics(uri, undefined, 60_000);
+    const published = await session.waitForDiagnostics(uri, undefined, 100_000);
     const notes = published.diagnostics.filter((diagnostic) => diagnostic.code === "document-partly-analysed");
     expect(notes).toHaveLength(1);
     expect(notes[0].severity).toBe(3);
@@ -145,7 +145,7 @@ describe("awkward documents", () => {
     expect(late).toBeNull();
     session.close(uri);
     await stillAnswers();
-  });
+  }, 120_000);
 
   it("handles a 1 MB single line", async () => {
     const uri = fixtureUri("notebook/one-line.md");
@@ -162,7 +162,7 @@ describe("awkward documents", () => {
     expect(hints?.map((hint) => hint.label)).toEqual([": seesaw", ": seesaw", ": seesaw"]);
     session.close(uri);
     await stillAnswers();
-  });
+  }, 120_000);
 
   it("reports malformed JSON and still reads what it can", async () => {
     const uri = fixtureUri("reference/broken.json");
