@@ -366,6 +366,13 @@ export const NAMES: readonly NameCase[] = [
   { name: "sulfite", formula: "SO3^2-", centre: "S" },
   { name: "azide", formula: "N3-", centre: "N" },
   { name: "hydronium", formula: "H3O+", centre: "O" },
+  { name: "sulfur(VI) fluoride", formula: "SF6", centre: "S" },
+  { name: "thionyl chloride", formula: "SOCl2", centre: "S" },
+  { name: "sulfuryl chloride", formula: "SO2Cl2", centre: "S" },
+  { name: "nitrosyl chloride", formula: "NOCl", centre: "N" },
+  // from memory: inorganic text conventions; both are common in gas-handling notes
+  { name: "phosphoryl chloride", formula: "POCl3", centre: "P" },
+  { name: "nitryl chloride", formula: "NO2Cl", centre: "N" },
 ];
 
 export interface NotationCase {
