@@ -42,7 +42,7 @@ export interface MolecularCoordinates {
 const CONTACT_FACTOR = 1.5;
 /** Strain (Å²) below which a relaxed ring system is kept without trying other starts. */
 const ACCEPTED_STRAIN = 0.05;
-const MAX_RING_RESTARTS = 8;
+const MAX_RING_RESTARTS = 4;
 
 /**
  * Builds model coordinates for any molecular graph (chains, branches, rings, several fragments).

@@ -8,7 +8,7 @@
  * torsion choices) end with angles a few degrees off ideal, shared round the ring.
  */
 import type { AtomSites } from "./atomSites";
-import { add, angleDegrees, distance, scale, sub, type Vec3 } from "./vectors";
+import { angleDegrees, type Vec3 } from "./vectors";
 
 /** One distance the model wants: atoms, target length in ångströms, stiffness. */
 interface Spring {
@@ -43,18 +43,23 @@ export interface RelaxResult {
 
 /** Positions after relaxation; the input when nothing needs to move. */
 export function relaxRings(input: RelaxInput): RelaxResult {
-  const springs = springsOf(input);
-  let positions = [...input.positions];
+  const springs = packSprings(springsOf(input));
+  let positions = Float64Array.from(input.positions.flat());
   let energy = energyOf(springs, positions);
   let step = 0.02;
-  const iterations = Math.min(MAX_ITERATIONS, Math.floor(WORK_BUDGET / Math.max(1, springs.length)));
+  const gradient = new Float64Array(positions.length);
+  let trial = new Float64Array(positions.length);
+  const iterations = Math.min(MAX_ITERATIONS, Math.floor(WORK_BUDGET / Math.max(1, springs.count)));
   for (let k = 0; k < iterations && energy > 1e-14; k++) {
-    const gradient = gradientOf(springs, positions);
-    const trial = positions.map((p, atom) => sub(p, scale(gradient[atom], step)));
+    gradientOf(springs, positions, gradient);
+    for (let i = 0; i < positions.length; i++) trial[i] = positions[i] - step * gradient[i];
     const trialEnergy = energyOf(springs, trial);
     if (trialEnergy < energy) {
-      if (energy - trialEnergy < 1e-15) break;
+      // Converged once a step gains next to nothing relative to the strain left.
+      if (energy - trialEnergy < 1e-13 + 1e-10 * energy) break;
+      const previous = positions;
       positions = trial;
+      trial = previous;
       energy = trialEnergy;
       step *= 1.2;
     } else {
@@ -62,7 +67,29 @@ export function relaxRings(input: RelaxInput): RelaxResult {
       if (step < 1e-12) break;
     }
   }
-  return { positions, strain: energy };
+  const result: Vec3[] = input.positions.map((_, atom) => [positions[3 * atom], positions[3 * atom + 1], positions[3 * atom + 2]]);
+  return { positions: result, strain: energy };
+}
+
+/** Springs in flat typed arrays: the inner loops run thousands of times. */
+interface PackedSprings {
+  readonly count: number;
+  readonly first: Int32Array;
+  readonly second: Int32Array;
+  readonly length: Float64Array;
+  readonly weight: Float64Array;
+  readonly repulsiveOnly: Uint8Array;
+}
+
+function packSprings(springs: readonly Spring[]): PackedSprings {
+  return {
+    count: springs.length,
+    first: Int32Array.from(springs, (s) => 3 * s.first),
+    second: Int32Array.from(springs, (s) => 3 * s.second),
+    length: Float64Array.from(springs, (s) => s.length),
+    weight: Float64Array.from(springs, (s) => s.weight),
+    repulsiveOnly: Uint8Array.from(springs, (s) => (s.repulsiveOnly ? 1 : 0)),
+  };
 }
 
 function springsOf(input: RelaxInput): Spring[] {
@@ -101,26 +128,38 @@ function springsOf(input: RelaxInput): Spring[] {
   return springs;
 }
 
-function energyOf(springs: readonly Spring[], positions: readonly Vec3[]): number {
+function energyOf(springs: PackedSprings, positions: Float64Array): number {
   let energy = 0;
-  for (const spring of springs) {
-    const stretch = distance(positions[spring.first], positions[spring.second]) - spring.length;
-    if (spring.repulsiveOnly && stretch >= 0) continue;
-    energy += spring.weight * stretch * stretch;
+  for (let k = 0; k < springs.count; k++) {
+    const a = springs.first[k];
+    const b = springs.second[k];
+    const dx = positions[a] - positions[b];
+    const dy = positions[a + 1] - positions[b + 1];
+    const dz = positions[a + 2] - positions[b + 2];
+    const stretch = Math.sqrt(dx * dx + dy * dy + dz * dz) - springs.length[k];
+    if (springs.repulsiveOnly[k] && stretch >= 0) continue;
+    energy += springs.weight[k] * stretch * stretch;
   }
   return energy;
 }
 
-function gradientOf(springs: readonly Spring[], positions: readonly Vec3[]): Vec3[] {
-  const gradient: Vec3[] = positions.map(() => [0, 0, 0]);
-  for (const spring of springs) {
-    const delta = sub(positions[spring.first], positions[spring.second]);
-    const length = Math.max(1e-9, Math.hypot(delta[0], delta[1], delta[2]));
-    const stretch = length - spring.length;
-    if (spring.repulsiveOnly && stretch >= 0) continue;
-    const pull = scale(delta, (2 * spring.weight * stretch) / length);
-    gradient[spring.first] = add(gradient[spring.first], pull);
-    gradient[spring.second] = sub(gradient[spring.second], pull);
+function gradientOf(springs: PackedSprings, positions: Float64Array, gradient: Float64Array): void {
+  gradient.fill(0);
+  for (let k = 0; k < springs.count; k++) {
+    const a = springs.first[k];
+    const b = springs.second[k];
+    const dx = positions[a] - positions[b];
+    const dy = positions[a + 1] - positions[b + 1];
+    const dz = positions[a + 2] - positions[b + 2];
+    const length = Math.max(1e-9, Math.sqrt(dx * dx + dy * dy + dz * dz));
+    const stretch = length - springs.length[k];
+    if (springs.repulsiveOnly[k] && stretch >= 0) continue;
+    const factor = (2 * springs.weight[k] * stretch) / length;
+    gradient[a] += factor * dx;
+    gradient[a + 1] += factor * dy;
+    gradient[a + 2] += factor * dz;
+    gradient[b] -= factor * dx;
+    gradient[b + 1] -= factor * dy;
+    gradient[b + 2] -= factor * dz;
   }
-  return gradient;
 }
