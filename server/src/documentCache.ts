@@ -25,7 +25,6 @@ export interface DocumentCache {
   /** The kind of document, or undefined when lonepair has nothing to read in it. Cheap. */
   kindOf(document: TextDocument): DocumentKind | undefined;
   delete(uri: string): void;
-  readonly size: number;
 }
 
 const EMPTY_MODEL = (kind: DocumentKind): DocumentModel => ({ kind, occurrences: [], records: [], problems: [] });
@@ -60,9 +59,6 @@ export function createDocumentCache(capacity = 32): DocumentCache {
     },
     delete(uri) {
       entries.delete(uri);
-    },
-    get size() {
-      return entries.size;
     },
   };
 }

@@ -16,7 +16,7 @@ export function registerHover(context: ServerContext): void {
       const enabled = await enabledDocument(context, params.textDocument.uri);
       if (!enabled) return null;
       const { document, analysed, settings } = enabled;
-      const occurrence = occurrenceAt(analysed.model.occurrences, document.offsetAt(params.position));
+      const occurrence = occurrenceUnderCursor(analysed.model.occurrences, document.offsetAt(params.position));
       if (!occurrence) return null;
       const result = analysisOf(occurrence);
       const markdown = result.ok
@@ -31,7 +31,7 @@ export function registerHover(context: ServerContext): void {
 }
 
 /** The narrowest occurrence containing the offset; the cursor just after a species counts. */
-export function occurrenceAt(occurrences: readonly SpeciesOccurrence[], offset: number): SpeciesOccurrence | undefined {
+export function occurrenceUnderCursor(occurrences: readonly SpeciesOccurrence[], offset: number): SpeciesOccurrence | undefined {
   let best: SpeciesOccurrence | undefined;
   for (const occurrence of occurrences) {
     if (occurrence.range.start > offset) break;
