@@ -85,7 +85,7 @@ describe("check exit codes", () => {
     [["--dry-run", "examples"], 2, "--dry-run without --fix"],
     [[], 2, "no path"],
     [["--no-such-option", "examples"], 2, "unknown option"],
-  ] as const)("check %j exits %i (%s)", (args, status) => {
+  ] as [string[], number, string][])("check %j exits %i (%s)", (args, status) => {
     expect(runCli(["check", ...args]).status).toBe(status);
   });
 

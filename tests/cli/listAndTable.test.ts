@@ -76,7 +76,7 @@ describe("table", () => {
     [["CH5"], 1, "nothing could be analysed"],
     [["--format", "html", "SF4"], 2, "unknown format"],
     [[], 2, "no argument"],
-  ] as const)("table %j exits %i (%s)", (args, status) => {
+  ] as [string[], number, string][])("table %j exits %i (%s)", (args, status) => {
     expect(runCli(["table", ...args]).status).toBe(status);
   });
 });

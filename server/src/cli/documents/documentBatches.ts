@@ -38,7 +38,7 @@ export interface DocumentReading {
 }
 
 /** Batches of at least this many characters (one record may make a batch longer). */
-export const DEFAULT_BATCH_CHARACTERS = 1 << 20;
+export const DEFAULT_BATCH_CHARACTERS = 1 << 18;
 
 /** Bytes read from disk at a time. */
 const CHUNK_BYTES = 1 << 20;

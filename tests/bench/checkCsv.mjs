@@ -1,0 +1,134 @@
+// Benchmark of `lonepair check` on large CSV files (dist/cli.js, run as a child process like a
+// user would): rows per second, the ratio to a plain streaming line count of the same file in
+// the same run, and the checker's peak memory. Files are generated under the system temp folder
+// and deleted afterwards. `npm run bench` builds first; `--strict` makes a missed aim exit 1.
+import { spawn } from "node:child_process";
+import { createReadStream, createWriteStream, existsSync, mkdtempSync, rmSync, statSync } from "node:fs";
+import { tmpdir } from "node:os";
+import { join } from "node:path";
+import { fileURLToPath } from "node:url";
+
+const cliPath = fileURLToPath(new URL("../../dist/cli.js", import.meta.url));
+if (!existsSync(cliPath)) {
+  console.error("dist/cli.js is missing: run `npm run build` (or `npm run bench`, which builds first).");
+  process.exit(2);
+}
+
+const AIM_RATIO_TO_LINE_COUNT = 5;
+const AIM_PEAK_MEGABYTES = 200;
+const strict = process.argv.includes("--strict");
+const missed = [];
+
+// A cylinder store's export: mostly correct rows, one mistake in every 997.
+const SPECIES = [
+  ["sulfur hexafluoride", "SF6", 48, 0, "octahedral", "nonpolar"],
+  ["nitrogen trifluoride", "NF3", 26, 1, "trigonal pyramidal", "polar"],
+  ["chlorine trifluoride", "ClF3", 28, 2, "T-shaped", "polar"],
+  ["boron trifluoride", "BF3", 24, 0, "trigonal planar", "nonpolar"],
+  ["ammonia", "NH3", 8, 1, "trigonal pyramidal", "polar"],
+  ["carbon dioxide", "CO2", 16, 0, "linear", "nonpolar"],
+  ["sulfur dioxide", "SO2", 18, 1, "bent", "polar"],
+  ["xenon tetrafluoride", "XeF4", 36, 2, "square planar", "nonpolar"],
+];
+const HEADER = "id,species,formula,valence electrons,lone pairs on central atom,molecular geometry,polarity,supplier lot\n";
+
+function row(index) {
+  const [name, formula, electrons, lonePairs, shape, polarity] = SPECIES[index % SPECIES.length];
+  const written = index % 997 === 5 ? electrons - 2 : electrons;
+  return `CYL-${index},${name},${formula},${written},${lonePairs},${shape},${polarity},KR-${String(index % 9000).padStart(4, "0")}\n`;
+}
+
+/** Writes a CSV of `rows` rows, or of about `bytes` bytes; resolves to the number of rows. */
+async function generate(path, { rows, bytes }) {
+  const out = createWriteStream(path);
+  let written = HEADER.length;
+  out.write(HEADER);
+  let index = 0;
+  const more = () => (rows !== undefined ? index < rows : written < bytes);
+  while (more()) {
+    let chunk = "";
+    for (let count = 0; count < 10_000 && more(); count++, index++) {
+      const line = row(index);
+      chunk += line;
+      written += line.length;
+    }
+    if (!out.write(chunk)) await new Promise((resolve) => out.once("drain", resolve));
+  }
+  await new Promise((resolve, reject) => out.end((error) => (error ? reject(error) : resolve())));
+  return index;
+}
+
+/** Seconds to count the lines of `path` with a plain stream: the floor for any line-wise reader. */
+async function lineCountSeconds(path) {
+  const start = process.hrtime.bigint();
+  let lines = 0;
+  for await (const chunk of createReadStream(path, { highWaterMark: 1 << 20 })) {
+    for (let index = chunk.indexOf(10); index >= 0; index = chunk.indexOf(10, index + 1)) lines++;
+  }
+  return { seconds: Number(process.hrtime.bigint() - start) / 1e9, lines };
+}
+
+/** Runs `lonepair check --format json` on `path`; resolves to seconds, peak memory and findings. */
+function checkRun(path) {
+  // The child reports its own peak resident memory when it exits.
+  const script = `process.argv = [process.argv[0], ${JSON.stringify(cliPath)}, "check", "--format", "json", ${JSON.stringify(path)}];
+process.on("exit", () => require("node:fs").writeSync(2, "\\nPEAK_KB " + process.resourceUsage().maxRSS + "\\n"));
+require(${JSON.stringify(cliPath)});`;
+  return new Promise((resolve, reject) => {
+    const start = process.hrtime.bigint();
+    const child = spawn(process.execPath, ["-e", script], { stdio: ["ignore", "pipe", "pipe"] });
+    let findings = 0;
+    let stderr = "";
+    child.stdout.on("data", (chunk) => {
+      for (let index = chunk.indexOf(10); index >= 0; index = chunk.indexOf(10, index + 1)) findings++;
+    });
+    child.stderr.on("data", (chunk) => (stderr += chunk));
+    child.on("error", reject);
+    child.on("close", (status) => {
+      const seconds = Number(process.hrtime.bigint() - start) / 1e9;
+      const peak = /PEAK_KB (\d+)/.exec(stderr);
+      // The JSON array has one finding a line between "[" and "]".
+      resolve({ seconds, status, peakMegabytes: peak ? Number(peak[1]) / 1024 : NaN, findings: Math.max(findings - 2, 0), stderr });
+    });
+  });
+}
+
+const grouped = (value) => Math.round(value).toLocaleString("en-US");
+const verdict = (met, label) => {
+  if (!met) missed.push(label);
+  return met ? "meets aim" : "MISSES aim";
+};
+
+async function bench(label, path, size) {
+  const rows = await generate(path, size);
+  const megabytes = statSync(path).size / (1024 * 1024);
+  const count = await lineCountSeconds(path);
+  const check = await checkRun(path);
+  const ratio = check.seconds / count.seconds;
+  const expectedFindings = Math.floor((rows - 6) / 997) + 1;
+  console.log(
+    `check ${label.padEnd(16)} ${grouped(rows).padStart(10)} rows ${megabytes.toFixed(0).padStart(4)} MB` +
+      `  ${grouped(rows / check.seconds).padStart(8)} rows/s  (${check.seconds.toFixed(1)} s; line count ${count.seconds.toFixed(2)} s)`,
+  );
+  console.log(
+    `      ${"".padEnd(16)} ratio to line count ${ratio.toFixed(1).padStart(6)}x   aim <= ${AIM_RATIO_TO_LINE_COUNT}x   ${verdict(ratio <= AIM_RATIO_TO_LINE_COUNT, `${label} ratio`)}` +
+      `;  peak memory ${check.peakMegabytes.toFixed(0)} MB` +
+      (size.bytes ? `   aim < ${AIM_PEAK_MEGABYTES} MB   ${verdict(check.peakMegabytes < AIM_PEAK_MEGABYTES, `${label} memory`)}` : ""),
+  );
+  if (check.findings !== expectedFindings || check.status !== 0) {
+    console.log(`      unexpected result: ${check.findings} findings (expected ${expectedFindings}), exit status ${check.status}`);
+    missed.push(`${label} result`);
+  }
+}
+
+const folder = mkdtempSync(join(tmpdir(), "lonepair-bench-"));
+try {
+  await bench("100,000 rows", join(folder, "rows-100k.csv"), { rows: 100_000 });
+  await bench("200 MB", join(folder, "store-200mb.csv"), { bytes: 200 * 1024 * 1024 });
+} finally {
+  rmSync(folder, { recursive: true, force: true });
+}
+if (missed.length > 0) {
+  console.log(`missed aims: ${missed.join(", ")}`);
+  if (strict) process.exitCode = 1;
+}
