@@ -2,6 +2,7 @@
  * A plain-text card for one analysis, for terminals and logs. The core never decides on
  * colour: the caller passes a `CardStyle` (the command line does, when stdout is a terminal).
  */
+import { shapeOf } from "../chemistry/analysis/shape3d";
 import type {
   AngleExpectation,
   AnalysisResult,
@@ -78,6 +79,8 @@ function successLines(input: string, analysis: SpeciesAnalysis, style: CardStyle
     lines.push(...centreLines(centre, position === 0 ? analysis.measuredAngles : [], style)),
   );
   if (analysis.centres.length === 0) lines.push(row(style, "Centres", "none (no atom has two or more neighbours)"));
+  const pointGroup = shapeOf(analysis).pointGroup;
+  if (pointGroup) lines.push(row(style, "Point group", pointGroup));
   lines.push(row(style, "Polarity", `${analysis.polarity.polar ? "polar" : "nonpolar"} - ${analysis.polarity.reason}`));
   if (analysis.warnings.length === 0) {
     lines.push(row(style, "Warnings", "none"));

@@ -3,6 +3,7 @@
  * The leading field names are a published contract (scripts and CI read them); extra
  * fields may be added after them, never renamed or reordered.
  */
+import { shapeOf } from "../chemistry/analysis/shape3d";
 import type {
   AngleExpectation,
   AnalysisResult,
@@ -62,6 +63,8 @@ export interface AnalysisJsonSuccess {
   readonly warnings: readonly string[];
   // extras after the fixed fields
   readonly polarityReason: string;
+  /** Schoenflies point group of the model geometry, found by a search for symmetry elements. */
+  readonly pointGroup: string | null;
   readonly lewis: LewisJson;
   readonly measuredAngles: readonly MeasuredAngle[];
 }
@@ -109,6 +112,7 @@ function successJson(input: string, analysis: SpeciesAnalysis): AnalysisJsonSucc
     polar: analysis.polarity.polar,
     warnings: [...analysis.warnings],
     polarityReason: analysis.polarity.reason,
+    pointGroup: shapeOf(analysis).pointGroup ?? null,
     lewis: lewisJson(analysis),
     measuredAngles: analysis.measuredAngles.map((angle) => ({ ...angle })),
   };

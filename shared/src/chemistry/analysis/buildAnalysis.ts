@@ -4,11 +4,11 @@
  */
 import { atomTraits } from "../lewis/electronBookkeeping";
 import type { LewisStructure } from "../lewis/chooseLewisStructure";
-import type { SpeciesAnalysis, SpeciesReading } from "../types";
+import type { PolarityVerdict, SpeciesAnalysis, SpeciesReading } from "../types";
 import { analyzeCentre, type CentreDetail } from "../vsepr/analyzeCentre";
 import { measuredAnglesFor } from "../vsepr/measuredAngles";
 import { judgePolarity } from "../vsepr/polarity";
-import { computeShape, polarityFromShape, rememberShape } from "./shape3d";
+import { polarityFromShape, shapeOf } from "./shape3d";
 
 export function buildAnalysis(
   reading: SpeciesReading,
@@ -69,12 +69,6 @@ export function buildAnalysis(
   let resonanceForms = structure.resonanceForms;
   if (!Number.isFinite(resonanceForms) || resonanceForms < 1) resonanceForms = 1;
 
-  // One centre: ideal directions settle polarity exactly. Several: judge the whole 3D model.
-  const shape = details.length > 1 ? computeShape(graph, radical) : undefined;
-  const polarity = shape
-    ? polarityFromShape(graph, shape, reading.charge)
-    : judgePolarity(graph, details, mainCentre, reading.charge);
-
   const analysis: SpeciesAnalysis = {
     reading,
     valenceElectrons: structure.valenceElectrons,
@@ -84,11 +78,19 @@ export function buildAnalysis(
     graph,
     resonanceForms,
     centres: details.map((d) => d.centre),
-    polarity,
+    // One centre: ideal directions settle polarity exactly, at once. Several: the whole 3D
+    // model is needed, which costs milliseconds, so it is built the first time anyone asks.
+    get polarity(): PolarityVerdict {
+      const verdict =
+        details.length > 1
+          ? polarityFromShape(graph, shapeOf(analysis), reading.charge)
+          : judgePolarity(graph, details, mainCentre, reading.charge);
+      Object.defineProperty(analysis, "polarity", { value: verdict, enumerable: true });
+      return verdict;
+    },
     measuredAngles: measuredAnglesFor(reading.composition, reading.charge),
     warnings,
   };
-  if (shape) rememberShape(analysis, shape);
   return analysis;
 }
 

@@ -183,7 +183,8 @@ function flatten(parsed: ParsedSequence): FlatAtom[] | undefined {
 export function condensedSkeletons(formulaText: string): CandidateSkeleton[] | undefined {
   const caret = formulaText.indexOf("^");
   const body = caret >= 0 ? formulaText.slice(0, caret) : formulaText;
-  const parsed = parseCondensed(body);
+  // CO2H and CO2- are the carboxyl group written short: C(=O)OH and C(=O)O-.
+  const parsed = parseCondensed(body.replace(/CO2(?=H|$|[-−+]|C)/g, "COO"));
   if (!parsed) return undefined;
   const atoms = flatten(parsed);
   if (!atoms || atoms.length < 2) return undefined;

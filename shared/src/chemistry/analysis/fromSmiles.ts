@@ -4,6 +4,7 @@
  * a radical). Aromatic rings are read as one Kekulé structure.
  */
 import { elementBySymbol } from "../elements";
+import { countEquivalentStructures } from "./equivalentStructures";
 import { atomTraits } from "../lewis/electronBookkeeping";
 import type { LewisStructure } from "../lewis/chooseLewisStructure";
 import { kekulize, parseSmiles, smilesFormula, smilesNetCharge } from "../smiles";
@@ -116,7 +117,7 @@ export function smilesStructure(text: string): SmilesOutcome {
           expandedAtoms: 0,
           chargeTimesElectronegativity: 0,
         },
-        resonanceForms: 1,
+        resonanceForms: countEquivalentStructures(atoms, bonds),
         valenceElectrons: electrons,
       },
     },

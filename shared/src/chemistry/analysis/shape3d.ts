@@ -31,11 +31,6 @@ export function shapeOf(analysis: SpeciesAnalysis): SpeciesShape {
   return shape;
 }
 
-/** Record a shape worked out while the analysis was built, so it is not built twice. */
-export function rememberShape(analysis: SpeciesAnalysis, shape: SpeciesShape): void {
-  shapes.set(analysis, shape);
-}
-
 export function computeShape(graph: MolecularGraph, radical: boolean): SpeciesShape {
   const coordinates = buildCoordinates(graph, radical);
   const found = findPointGroup(coordinates.atoms.map((atom) => ({ element: atom.symbol, position: atom.position })));
@@ -44,7 +39,8 @@ export function computeShape(graph: MolecularGraph, radical: boolean): SpeciesSh
 
 /** Weight of one lone pair against a bond dipole of one electronegativity unit (a model choice). */
 const LONE_PAIR_WEIGHT = 0.5;
-const ZERO = 1e-3;
+/** Below this summed dipole (electronegativity units) the model calls a molecule nonpolar. */
+const NEGLIGIBLE_DIPOLE = 0.02;
 
 /**
  * Polarity of a molecule with several centres: the point group decides whether a dipole is
@@ -53,10 +49,9 @@ const ZERO = 1e-3;
 export function polarityFromShape(graph: MolecularGraph, shape: SpeciesShape, charge: number): PolarityVerdict {
   const positions = shape.coordinates.atoms.map((atom) => atom.position);
   let sum: Vec3 = [0, 0, 0];
+  const electronegativity = effectiveElectronegativities(graph);
   for (const bond of graph.bonds) {
-    const difference =
-      atomTraits(graph.atoms[bond.to].symbol).electronegativity -
-      atomTraits(graph.atoms[bond.from].symbol).electronegativity;
+    const difference = electronegativity[bond.to] - electronegativity[bond.from];
     if (difference === 0) continue;
     sum = add(sum, scale(normalize(sub(positions[bond.to], positions[bond.from])), difference));
   }
@@ -65,18 +60,39 @@ export function polarityFromShape(graph: MolecularGraph, shape: SpeciesShape, ch
   }
   const dipoleEstimate = Math.round(norm(sum) * 100) / 100;
   const group = shape.pointGroup;
-  const polar = group ? pointGroupAllowsDipole(group) : norm(sum) > ZERO;
-  const reason = group
+  // Symmetry decides; the summed dipole is the model's estimate of its size. (Pairwise
+  // electronegativity differences cancel along hydrocarbon chains, so the sum alone would call
+  // propyne or toluene nonpolar.)
+  const polar = group ? pointGroupAllowsDipole(group) : norm(sum) > NEGLIGIBLE_DIPOLE;
+  const reason = !group
     ? polar
-      ? `the model geometry has ${group} symmetry, which leaves the bond dipoles and lone pairs uncancelled`
-      : `bond dipoles cancel by symmetry (the model geometry is ${group})`
-    : polar
       ? "bond dipoles and lone pairs do not cancel"
-      : "bond dipoles cancel";
-  const verdict: PolarityVerdict = { polar, reason, dipoleEstimate: polar ? dipoleEstimate : 0 };
+      : "bond dipoles cancel"
+    : polar
+      ? `the model geometry has ${group} symmetry, which allows a permanent dipole`
+      : `bond dipoles cancel by symmetry (the model geometry is ${group})`;
+  const verdict: PolarityVerdict = { polar, reason, dipoleEstimate };
   if (charge === 0) return verdict;
   return {
     ...verdict,
     reason: `an ion (net charge ${charge > 0 ? "+" : ""}${charge}); its charge distribution is ${polar ? "asymmetric" : "symmetric"}: ${reason}`,
   };
+}
+
+/** Each pi bond makes a carbon more electronegative (sp 3.29 > sp2 2.75 > sp3 2.48 on hybrid scales). */
+const CARBON_SHIFT_PER_PI_BOND = 0.1;
+
+/**
+ * Pauling electronegativities, with carbon nudged up by its pi bonds so that sp and sp2 carbons
+ * pull harder than sp3 ones (the dipole of propyne or toluene comes from that difference).
+ */
+function effectiveElectronegativities(graph: MolecularGraph): number[] {
+  const values = graph.atoms.map((atom) => atomTraits(atom.symbol).electronegativity);
+  for (const bond of graph.bonds) {
+    if (bond.order < 2) continue;
+    for (const atom of [bond.from, bond.to]) {
+      if (graph.atoms[atom].symbol === "C") values[atom] += CARBON_SHIFT_PER_PI_BOND * (bond.order - 1);
+    }
+  }
+  return values;
 }

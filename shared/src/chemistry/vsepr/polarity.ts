@@ -8,6 +8,7 @@ import type { MolecularGraph, PolarityVerdict } from "../types";
 import type { CentreDetail } from "./analyzeCentre";
 
 const ZERO = 1e-6;
+const LONE_PAIR_WEIGHT = 0.5;
 
 export function judgePolarity(
   graph: MolecularGraph,
@@ -50,7 +51,8 @@ function judgeNeutralShape(
     bondSum = add(bondSum, scale(main.sites.ligandDirections[k], difference));
   });
   const loneSum = main.sites.lonePairDirections.reduce<Vec3>((sum, d) => add(sum, d), [0, 0, 0]);
-  const dipoleEstimate = round2(norm(bondSum));
+  // Same model as for whole molecules: a lone pair counts half an electronegativity unit.
+  const dipoleEstimate = round2(norm(add(bondSum, scale(loneSum, LONE_PAIR_WEIGHT))));
 
   // Outer groups that are themselves bent (O-H in H2SO4, N-H2 in hydrazine) point their dipoles
   // off the main axes, so nothing cancels them in the model.
