@@ -9,6 +9,7 @@ import { analyzeDocument } from "../../shared/src/document/analyzeDocument";
 import { checkDocument } from "../../shared/src/document/checkDocument";
 import { batchModel } from "../../server/src/cli/documents/batchModel";
 import { readDocument } from "../../server/src/cli/documents/documentBatches";
+import { lineIndexOf } from "../../server/src/cli/documents/lineIndex";
 
 const folder = mkdtempSync(join(tmpdir(), "lonepair-batches-"));
 
@@ -25,15 +26,19 @@ async function streamed(text: string, kind: "csv" | "tsv", batchCharacters: numb
   writeFileSync(path, text);
   const findings = [];
   const species = [];
+  const positions = [];
   let rebuilt = "";
   for await (const batch of readDocument(path, kind, batchCharacters).batches) {
     rebuilt += batch.text;
     const model = batchModel(batch, kind);
     const move = (range: { start: number; end: number }) => ({ start: range.start + batch.offset, end: range.end + batch.offset });
     for (const finding of model.findings()) findings.push({ ...finding, range: move(finding.range), ...(finding.fix ? { fix: { ...finding.fix, range: move(finding.fix.range) } } : {}) });
-    for (const occurrence of model.occurrences) species.push([occurrence.range.start + batch.offset, occurrence.text]);
+    for (const occurrence of model.occurrences) {
+      species.push([occurrence.range.start + batch.offset, occurrence.text]);
+      positions.push(batch.lines.position(occurrence.range.start));
+    }
   }
-  return { rebuilt, findings, species };
+  return { rebuilt, findings, species, positions };
 }
 
 const ROWS = [
@@ -65,6 +70,9 @@ describe("CSV in batches", () => {
           expect(actual.rebuilt).toBe(text);
           expect(actual.findings).toEqual(expected.findings);
           expect(actual.species).toEqual(expected.species);
+          // Lines and columns carried across batches equal those counted over the whole text.
+          const wholeLines = lineIndexOf(text);
+          expect(actual.positions).toEqual(expected.species.map(([start]) => wholeLines.position(start as number)));
         },
       ),
       { numRuns: 150, seed: 2207 },
