@@ -1,12 +1,14 @@
 // Benchmark of the bundled core (dist/core.js): cold analyses of distinct species, cached
-// lookups, and the reader's worst cases. `npm run bench` builds first. Figures are printed with
-// the aims beside them; `--strict` makes a missed aim exit with status 1 (for CI machines we trust).
+// lookups, the reader's worst cases, and whole drug-sized SMILES against RDKit (smilesAnalysis.mjs).
+// `npm run bench` builds first. Figures are printed with the aims beside them; `--strict` makes a
+// missed aim exit with status 1 (for CI machines we trust).
 import { createRequire } from "node:module";
 import { existsSync } from "node:fs";
 import { availableParallelism, loadavg } from "node:os";
 import { fileURLToPath } from "node:url";
 import { generateSpecies } from "./speciesGenerator.mjs";
 import { randomStrings } from "./randomStrings.mjs";
+import { runSmilesAnalysisBench } from "./smilesAnalysis.mjs";
 
 const corePath = fileURLToPath(new URL("../../dist/core.js", import.meta.url));
 if (!existsSync(corePath)) {
@@ -119,6 +121,7 @@ console.log(
 const species = benchCold();
 benchCached(species);
 benchReader();
+missed.push(...(await runSmilesAnalysisBench()));
 if (missed.length > 0) {
   console.log(`\nmissed: ${missed.join(", ")}`);
   if (strict) process.exitCode = 1;
