@@ -5,6 +5,7 @@
  */
 import { analyzeSpecies } from "../chemistry/analyze";
 import type { AnalysisResult, Problem, ProblemCode } from "../chemistry/types";
+import { analyzeOccurrence } from "./analyzeOccurrence";
 import { checkRecord } from "./checks/recordChecks";
 import type { DocumentModel, Finding, FindingSeverity, SpeciesOccurrence, UnreadableSpecies } from "./types";
 
@@ -20,12 +21,10 @@ const OUTSIDE_THE_MODEL: ReadonlySet<ProblemCode> = new Set([
 export function checkDocument(model: DocumentModel, analyze: (text: string) => AnalysisResult = analyzeSpecies): Finding[] {
   const memo = new Map<string, AnalysisResult>();
   const analysisOf = (occurrence: SpeciesOccurrence): AnalysisResult | undefined => {
-    // SMILES carry connectivity the formula analysis would throw away; they are not checked here.
-    if (occurrence.reading.notation === "smiles") return undefined;
     let result = memo.get(occurrence.text);
     if (!result) {
       try {
-        result = analyze(occurrence.text);
+        result = analyzeOccurrence(occurrence, analyze);
       } catch (error) {
         result = { ok: false, problem: { code: "no-valid-structure", message: String(error) } };
       }

@@ -180,7 +180,11 @@ function explainFailure(
           `${formula}: ${element.name} holds at most two electrons (a full first shell), so it cannot bond here.`,
         );
       }
-      return fail("octet-exceeded", `${formula}: the central atom would need more than seven electron domains.`);
+      const limit = element && element.period <= 4 ? "six" : "seven";
+      return fail(
+        "octet-exceeded",
+        `${formula}: ${element?.name ?? "the central atom"} would need more electron domains than it can hold (at most ${limit} around an atom of period ${element?.period ?? "?"}).`,
+      );
     }
     default:
       return fail("no-valid-structure", `${formula}: no Lewis structure fits these atoms and this electron count.`);

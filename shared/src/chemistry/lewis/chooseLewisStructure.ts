@@ -44,7 +44,13 @@ export type LewisOutcome =
   | { readonly ok: true; readonly structure: LewisStructure }
   | { readonly ok: false; readonly failure: LewisFailure; readonly atom?: number };
 
-const MAX_DOMAINS = 7;
+/**
+ * Most electron domains an atom of each period carries: four in period 2, six in periods 3 and
+ * 4 (SF6, BrF5), seven only for the large atoms from period 5 on (IF7, XeF6). SF7 does not exist.
+ */
+function maxDomains(period: number): number {
+  return period <= 2 ? 4 : period <= 4 ? 6 : 7;
+}
 /** Beyond this many bonds that could be multiple, the exhaustive search would be too slow. */
 const MAX_FLEXIBLE_BONDS = 12;
 
@@ -80,7 +86,7 @@ export function chooseLewisStructure(skeleton: Skeleton, charge: number): LewisO
     const t = traits[atom];
     if (t.isHydrogen && degree[atom] > 1) return { ok: false, failure: "hydrogen-overbonded", atom };
     if (2 * degree[atom] > t.shellCapacity) return { ok: false, failure: "shell-overflow", atom };
-    if (degree[atom] > MAX_DOMAINS) return { ok: false, failure: "too-many-domains", atom };
+    if (degree[atom] > maxDomains(t.element.period)) return { ok: false, failure: "too-many-domains", atom };
   }
   const spare = electrons - 2 * skeleton.bonds.length;
   if (spare < 0) return { ok: false, failure: "too-few-electrons-to-bond" };
@@ -142,7 +148,7 @@ export function chooseLewisStructure(skeleton: Skeleton, charge: number): LewisO
       if (left < 2) break;
       const roomInShell = (traits[atom].shellCapacity - shellOf(atom, unpairedAtom)) >> 1;
       const roomForDomains =
-        MAX_DOMAINS - degree[atom] - lonePairs[atom] - (atom === unpairedAtom ? 1 : 0);
+        maxDomains(traits[atom].element.period) - degree[atom] - lonePairs[atom] - (atom === unpairedAtom ? 1 : 0);
       const pairs = Math.min(roomInShell, roomForDomains, left >> 1);
       if (pairs <= 0) continue;
       lonePairs[atom] += pairs;
@@ -168,7 +174,7 @@ export function chooseLewisStructure(skeleton: Skeleton, charge: number): LewisO
       }
       if (degree[atom] > 1) {
         const domains = degree[atom] + lonePairs[atom] + (atom === unpairedAtom ? 1 : 0);
-        if (domains > MAX_DOMAINS) return;
+        if (domains > maxDomains(t.element.period)) return;
       }
       // B, Be and Al may stay short of an octet as centres (BF3), never as outer atoms.
       if ((t.mustCompleteShell || degree[atom] <= 1) && shell < t.fullShell) shellDeficit += t.fullShell - shell;
