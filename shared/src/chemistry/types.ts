@@ -110,10 +110,18 @@ export interface GraphBond {
   readonly order: number;
 }
 
+/** The cis/trans arrangement written for a double bond a=b with neighbours x (on a) and y (on b). */
+export interface DoubleBondStereo {
+  readonly atoms: readonly [x: number, a: number, b: number, y: number];
+  readonly relation: "cis" | "trans";
+}
+
 /** A Lewis structure: atoms, bonds with orders, lone pairs and formal charges. */
 export interface MolecularGraph {
   readonly atoms: readonly GraphAtom[];
   readonly bonds: readonly GraphBond[];
+  /** Double-bond geometry the writer fixed (SMILES / and \ marks); absent when none was. */
+  readonly doubleBondStereo?: readonly DoubleBondStereo[];
 }
 
 export type ElectronGeometry =

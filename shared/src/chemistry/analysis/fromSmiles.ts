@@ -8,7 +8,16 @@ import { countEquivalentStructures } from "./equivalentStructures";
 import { atomTraits } from "../lewis/electronBookkeeping";
 import type { LewisStructure } from "../lewis/chooseLewisStructure";
 import { kekulize, parseSmiles, smilesFormula, smilesNetCharge } from "../smiles";
-import type { FormulaPart, GraphAtom, GraphBond, Problem, SpeciesReading } from "../types";
+import type { SmilesMolecule } from "../smiles";
+import type {
+  DoubleBondStereo,
+  FormulaPart,
+  GraphAtom,
+  GraphBond,
+  MolecularGraph,
+  Problem,
+  SpeciesReading,
+} from "../types";
 
 export interface SmilesStructure {
   readonly reading: SpeciesReading;
@@ -109,7 +118,7 @@ export function smilesStructure(text: string): SmilesOutcome {
     value: {
       reading,
       structure: {
-        graph: { atoms, bonds },
+        graph: withStereo({ atoms, bonds }, doubleBondStereo(molecule)),
         score: {
           shellDeficit: 0,
           sumAbsFormalCharge: sumAbs,
@@ -133,4 +142,37 @@ function compositionOf(symbols: readonly string[]): FormulaPart[] {
 function shift(problem: Problem, offset: number): Problem {
   if (!problem.range || offset === 0) return problem;
   return { ...problem, range: { start: problem.range.start + offset, end: problem.range.end + offset } };
+}
+
+const flip = (mark: "/" | "\\"): "/" | "\\" => (mark === "/" ? "\\" : "/");
+
+/**
+ * cis/trans relations written with / and \ around double bonds: each mark is turned to point
+ * outward from the double-bond atom; equal outward marks on both ends mean cis (F/C=C\F).
+ */
+function doubleBondStereo(molecule: SmilesMolecule): DoubleBondStereo[] {
+  const relations: DoubleBondStereo[] = [];
+  const outward = (atom: number, other: number): { neighbour: number; mark: "/" | "\\" } | undefined => {
+    for (const bond of molecule.bonds) {
+      if (!bond.direction) continue;
+      if (bond.from === atom && bond.to !== other) return { neighbour: bond.to, mark: bond.direction };
+      if (bond.to === atom && bond.from !== other) return { neighbour: bond.from, mark: flip(bond.direction) };
+    }
+    return undefined;
+  };
+  for (const bond of molecule.bonds) {
+    if (bond.order !== 2) continue;
+    const left = outward(bond.from, bond.to);
+    const right = outward(bond.to, bond.from);
+    if (!left || !right) continue;
+    relations.push({
+      atoms: [left.neighbour, bond.from, bond.to, right.neighbour],
+      relation: left.mark === right.mark ? "cis" : "trans",
+    });
+  }
+  return relations;
+}
+
+function withStereo(graph: MolecularGraph, stereo: DoubleBondStereo[]): MolecularGraph {
+  return stereo.length > 0 ? { ...graph, doubleBondStereo: stereo } : graph;
 }

@@ -3,6 +3,7 @@
  * judged from the whole molecule's bond dipoles. Worked out on demand and kept per analysis,
  * since editors ask for it only when a view or an export needs it.
  */
+import { applyDoubleBondStereo } from "../geometry/applyDoubleBondStereo";
 import { buildCoordinates, type MolecularCoordinates } from "../geometry/buildCoordinates";
 import { add, norm, normalize, scale, sub, type Vec3 } from "../geometry/vectors";
 import { atomTraits } from "../lewis/electronBookkeeping";
@@ -32,7 +33,7 @@ export function shapeOf(analysis: SpeciesAnalysis): SpeciesShape {
 }
 
 export function computeShape(graph: MolecularGraph, radical: boolean): SpeciesShape {
-  const coordinates = buildCoordinates(graph, radical);
+  const coordinates = applyDoubleBondStereo(graph, buildCoordinates(graph, radical));
   const found = findPointGroup(coordinates.atoms.map((atom) => ({ element: atom.symbol, position: atom.position })));
   return { coordinates, pointGroup: found.ok ? found.value.symbol : undefined };
 }

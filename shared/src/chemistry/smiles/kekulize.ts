@@ -71,7 +71,9 @@ export function kekulize(result: SmilesResult): SmilesResult {
   const keptBonds: SmilesBond[] = bonds.map((bond) => {
     if (!bond.aromatic) return bond;
     const order = mate[bond.from] === bond.to ? 2 : 1;
-    return { from: bond.from, to: bond.to, order, aromatic: false };
+    return bond.direction
+      ? { from: bond.from, to: bond.to, order, aromatic: false, direction: bond.direction }
+      : { from: bond.from, to: bond.to, order, aromatic: false };
   });
   return { ok: true, value: { atoms: keptAtoms, bonds: keptBonds } };
 }

@@ -48,6 +48,7 @@ interface BondRecord {
   to: number;
   order: 1 | 2 | 3 | 4;
   aromatic: boolean;
+  direction?: "/" | "\\";
 }
 
 function failure(problem: Problem): SmilesResult {
@@ -106,10 +107,12 @@ export function parseSmiles(text: string): SmilesResult {
   let previous = -1;
   let state = AFTER_NOTHING;
   let bondKind = BOND_UNWRITTEN;
+  // "/" or "\" as written before the next atom: kept on chain bonds for double-bond geometry.
+  let bondDirection: "/" | "\\" | undefined;
   let bondStart = -1;
   let bondFollowsAtom = false;
 
-  const addBond = (from: number, to: number, kind: number, onChain: boolean): void => {
+  const addBond = (from: number, to: number, kind: number, onChain: boolean, direction?: "/" | "\\"): void => {
     let order: 1 | 2 | 3 | 4 = 1;
     let aromatic = false;
     if (kind === BOND_UNWRITTEN || kind === BOND_DIRECTIONAL) {
@@ -120,7 +123,7 @@ export function parseSmiles(text: string): SmilesResult {
     } else {
       order = kind as 1 | 2 | 3 | 4;
     }
-    bonds.push({ from, to, order, aromatic });
+    bonds.push(direction ? { from, to, order, aromatic, direction } : { from, to, order, aromatic });
     bondOrderSums[from] += order;
     bondOrderSums[to] += order;
   };
@@ -130,9 +133,10 @@ export function parseSmiles(text: string): SmilesResult {
     atoms.push(atom);
     bondOrderSums.push(0);
     firstBondOfAtom.push(bonds.length);
-    if (previous >= 0) addBond(previous, index, bondKind, true);
+    if (previous >= 0) addBond(previous, index, bondKind, true, bondDirection);
     previous = index;
     bondKind = BOND_UNWRITTEN;
+    bondDirection = undefined;
     state = AFTER_ATOM;
   };
 
@@ -244,6 +248,7 @@ export function parseSmiles(text: string): SmilesResult {
           openRings--;
         }
         bondKind = BOND_UNWRITTEN;
+        bondDirection = undefined;
         state = AFTER_ATOM;
         continue;
       }
@@ -255,6 +260,7 @@ export function parseSmiles(text: string): SmilesResult {
           }
           bondFollowsAtom = state === AFTER_ATOM;
           bondKind = kind;
+          bondDirection = code === 47 ? "/" : code === 92 ? "\\" : undefined;
           bondStart = i;
           state = AFTER_BOND;
           i++;

@@ -26,6 +26,8 @@ export interface SmilesBond {
   readonly order: 1 | 2 | 3 | 4;
   /** Part of an aromatic ring system; `kekulize` turns these into single and double bonds. */
   readonly aromatic: boolean;
+  /** "/" or "\\" written on this bond (from `from` towards `to`): double-bond geometry. */
+  readonly direction?: "/" | "\\";
 }
 
 /** The molecular graph read from a SMILES string. */
