@@ -2,6 +2,7 @@
  * Turn a chosen Lewis structure into everything the writer sees: centres, polarity, measured
  * angles and plain-language warnings.
  */
+import { graphIndex } from "../graphIndex";
 import { atomTraits } from "../lewis/electronBookkeeping";
 import type { LewisStructure } from "../lewis/chooseLewisStructure";
 import type { PolarityVerdict, SpeciesAnalysis, SpeciesReading } from "../types";
@@ -23,12 +24,13 @@ export function buildAnalysis(
     if (detail) details.push(detail);
   });
 
+  const orderSums = graphIndex(graph).bondOrderSums;
   let electronDeficient = false;
   let expandedOctet = false;
   const warnings: string[] = [];
   graph.atoms.forEach((atom, index) => {
     const traits = atomTraits(atom.symbol);
-    const bondOrders = graph.bonds.reduce((sum, b) => sum + (b.from === index || b.to === index ? b.order : 0), 0);
+    const bondOrders = orderSums[index];
     const shell = 2 * bondOrders + 2 * atom.lonePairs + atom.unpairedElectrons;
     if (graph.atoms.length > 1 && !traits.isHydrogen && !traits.mustCompleteShell && shell < 8) {
       electronDeficient = true;

@@ -1,6 +1,7 @@
 /**
  * The VSEPR description of one atom with two or more neighbours in a Lewis structure.
  */
+import { graphIndex, ringAtoms } from "../graphIndex";
 import { atomTraits } from "../lewis/electronBookkeeping";
 import { add, norm, type Vec3 } from "../geometry/vectors";
 import type { AngleExpectation, CentreAnalysis, MolecularGraph } from "../types";
@@ -28,21 +29,17 @@ const CONJUGATED_NOTE =
   "one lone pair is shared with the neighbouring pi system (conjugation), so this atom is sp2 and planar rather than sp3.";
 
 export function neighboursOf(graph: MolecularGraph, atom: number): Ligand[] {
-  const ligands: Ligand[] = [];
-  for (const bond of graph.bonds) {
-    const other = bond.from === atom ? bond.to : bond.to === atom ? bond.from : -1;
-    if (other < 0) continue;
+  return graphIndex(graph).neighbours[atom].map(({ atom: other, order }) => {
     const symbol = graph.atoms[other].symbol;
-    ligands.push({ atom: other, symbol, electronegativity: atomTraits(symbol).electronegativity, bondOrder: bond.order });
-  }
-  return ligands;
+    return { atom: other, symbol, electronegativity: atomTraits(symbol).electronegativity, bondOrder: order };
+  });
 }
 
 /** Undefined when the atom has fewer than two neighbours or an unsupported domain count. */
 export function analyzeCentre(graph: MolecularGraph, index: number, radical: boolean): CentreDetail | undefined {
   const atom = graph.atoms[index];
+  if (graphIndex(graph).neighbours[index].length < 2) return undefined;
   const ligands = neighboursOf(graph, index);
-  if (ligands.length < 2) return undefined;
   // A lone pair shared with a neighbouring pi system (amide N, pyrrole N, furan O) sits in a
   // p orbital, so it takes no site of its own: the atom is sp2 and planar.
   const delocalised = lonePairJoinsPiSystem(graph, index) ? 1 : 0;
@@ -55,8 +52,22 @@ export function analyzeCentre(graph: MolecularGraph, index: number, radical: boo
   const molecularGeometry = molecularGeometryFor(stericNumber, loneDomains);
   if (!electronGeometry || !molecularGeometry) return undefined;
 
-  const sites = assignSites(electronGeometry, loneDomains, ligands);
   const traits = atomTraits(atom.symbol);
+  const multipleBondCount = countMultipleBondsWithResonance(graph, ligands);
+  // Heavier neighbours, or two groups with their own substituents (C-O-C in CH3OCH3).
+  const bulkyNeighbours =
+    ligands.some((l) => atomTraits(l.symbol).element.period > traits.element.period) ||
+    ligands.filter((l) => l.symbol !== "H" && graphIndex(graph).neighbours[l.atom].length > 1).length >= 2;
+  const ringSize = smallestRingThrough(graph, index, ligands);
+
+  // Everything below depends only on these facts, so centres alike in them (the many CH2 and
+  // aromatic CH of a large molecule) share one worked-out description.
+  let signature = `${atom.symbol}|${atom.lonePairs}|${atom.unpairedElectrons}|${delocalised}|${radical}|${multipleBondCount}|${bulkyNeighbours}|${ringSize}|`;
+  for (const ligand of ligands) signature += `${ligand.symbol}${ligand.bondOrder},`;
+  const known = centreMemo.get(signature);
+  if (known) return { centre: { ...known.centre, index }, ligands, sites: known.sites };
+
+  const sites = assignSites(electronGeometry, loneDomains, ligands);
   const first = ligands[0];
   const identicalNeighbours = ligands.every((l) => l.symbol === first.symbol && l.bondOrder === first.bondOrder);
   const loneSum = sites.lonePairDirections.reduce<Vec3>((sum, d) => add(sum, d), [0, 0, 0]);
@@ -70,11 +81,8 @@ export function analyzeCentre(graph: MolecularGraph, index: number, radical: boo
     centrePeriod: traits.element.period,
     identicalNeighbours,
     hasMultipleBond: ligands.some((l) => l.bondOrder > 1),
-    multipleBondCount: countMultipleBondsWithResonance(graph, ligands),
-    // Heavier neighbours, or two groups with their own substituents (C-O-C in CH3OCH3).
-    bulkyNeighbours:
-      ligands.some((l) => atomTraits(l.symbol).element.period > traits.element.period) ||
-      ligands.filter((l) => l.symbol !== "H" && graph.bonds.some((b) => (b.from === l.atom) !== (b.to === l.atom) && b.from !== index && b.to !== index)).length >= 2,
+    multipleBondCount,
+    bulkyNeighbours,
     radical,
     ligandDirections: sites.ligandDirections,
     ligandSiteKinds: sites.ligandSiteKinds,
@@ -92,7 +100,7 @@ export function analyzeCentre(graph: MolecularGraph, index: number, radical: boo
     electronGeometry,
     molecularGeometry,
     idealAngles: idealAnglesFor(angleContext),
-    expectedAngles: withRingAngle(expectedAngles(angleContext), smallestRingThrough(graph, index, ligands)),
+    expectedAngles: withRingAngle(expectedAngles(angleContext), ringSize),
     hybridization,
     ...(stericNumber >= 5
       ? { hybridizationNote: EXPANDED_NOTE }
@@ -100,8 +108,13 @@ export function analyzeCentre(graph: MolecularGraph, index: number, radical: boo
         ? { hybridizationNote: CONJUGATED_NOTE }
         : {}),
   };
+  if (centreMemo.size >= CENTRE_MEMO_LIMIT) centreMemo.clear();
+  centreMemo.set(signature, { centre, sites });
   return { centre, ligands, sites };
 }
+
+const CENTRE_MEMO_LIMIT = 5_000;
+const centreMemo = new Map<string, { readonly centre: CentreAnalysis; readonly sites: SiteAssignment }>();
 
 /**
  * Multiple bonds at a centre, counting a negatively charged single-bonded partner of a multiply
@@ -123,20 +136,17 @@ const STRAINED_RING_LIMIT = 5;
  * each neighbour back to another neighbour without passing the centre; undefined otherwise.
  */
 function smallestRingThrough(graph: MolecularGraph, centre: number, ligands: readonly Ligand[]): number | undefined {
-  if (ligands.length < 2) return undefined;
-  const adjacency = new Map<number, number[]>();
-  for (const bond of graph.bonds) {
-    (adjacency.get(bond.from) ?? adjacency.set(bond.from, []).get(bond.from)!).push(bond.to);
-    (adjacency.get(bond.to) ?? adjacency.set(bond.to, []).get(bond.to)!).push(bond.from);
-  }
+  const index = graphIndex(graph);
+  if (!index.mayHaveRings || ligands.length < 2 || ringAtoms(graph)[centre] === 0) return undefined;
   let best: number | undefined;
   for (const start of ligands) {
+    if (index.neighbours[start.atom].length < 2) continue; // a terminal atom closes no ring
     const distance = new Map<number, number>([[start.atom, 0]]);
     let frontier = [start.atom];
     for (let depth = 1; depth <= STRAINED_RING_LIMIT - 2 && frontier.length > 0; depth++) {
       const next: number[] = [];
       for (const atom of frontier) {
-        for (const other of adjacency.get(atom) ?? []) {
+        for (const { atom: other } of index.neighbours[atom]) {
           if (other === centre || distance.has(other)) continue;
           distance.set(other, depth);
           next.push(other);

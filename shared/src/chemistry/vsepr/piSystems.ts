@@ -4,24 +4,21 @@
  * carbon with a multiple bond or an aromatic carbon (amides, anilines). The O of an ester or
  * acid keeps its bent, sp3-like angle.
  */
+import { graphIndex } from "../graphIndex";
 import type { MolecularGraph } from "../types";
 
 export function lonePairJoinsPiSystem(graph: MolecularGraph, index: number): boolean {
   const atom = graph.atoms[index];
   if (atom.lonePairs === 0 || !(atom.symbol === "N" || atom.symbol === "O" || atom.symbol === "S")) return false;
-  const neighbours: number[] = [];
-  for (const bond of graph.bonds) {
-    if (bond.from !== index && bond.to !== index) continue;
-    if (bond.order > 1) return false; // its own multiple bond already makes it sp2 or sp
-    neighbours.push(bond.from === index ? bond.to : bond.from);
-  }
-  if (neighbours.length < 2) return false;
+  const { neighbours, bondOrderSums } = graphIndex(graph);
+  const own = neighbours[index];
+  if (own.length < 2) return false;
+  if (own.some((n) => n.order > 1)) return false; // its own multiple bond already makes it sp2 or sp
   if (atom.aromatic) return true;
-  if (atom.symbol !== "N" || neighbours.length !== 3) return false;
-  return neighbours.some((other) => {
+  if (atom.symbol !== "N" || own.length !== 3) return false;
+  return own.some(({ atom: other }) => {
     const neighbour = graph.atoms[other];
     if (neighbour.symbol !== "C") return false;
-    if (neighbour.aromatic) return true;
-    return graph.bonds.some((b) => (b.from === other || b.to === other) && b.order > 1);
+    return neighbour.aromatic === true || bondOrderSums[other] > neighbours[other].length;
   });
 }

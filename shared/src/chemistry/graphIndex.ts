@@ -1,0 +1,57 @@
+/**
+ * Neighbour lists and bond-order sums of a molecular graph, built once per graph and shared by
+ * every per-atom question (a centre's ligands, its ring, its pi neighbours), so analysing a
+ * large molecule stays linear in its size.
+ */
+import { findBridges } from "./smiles/bridges";
+import type { MolecularGraph } from "./types";
+
+export interface Neighbour {
+  readonly atom: number;
+  readonly order: number;
+}
+
+export interface GraphIndex {
+  readonly neighbours: readonly (readonly Neighbour[])[];
+  readonly bondOrderSums: readonly number[];
+  /** False for trees and forests: no ring anywhere, so ring searches can be skipped. */
+  readonly mayHaveRings: boolean;
+}
+
+const ringAtomSets = new WeakMap<MolecularGraph, Uint8Array>();
+
+/** 1 for every atom that lies on some ring (it has a bond that is not a bridge). */
+export function ringAtoms(graph: MolecularGraph): Uint8Array {
+  const cached = ringAtomSets.get(graph);
+  if (cached) return cached;
+  const flags = new Uint8Array(graph.atoms.length);
+  if (graphIndex(graph).mayHaveRings) {
+    const bridges = findBridges(graph.atoms.length, graph.bonds);
+    graph.bonds.forEach((bond, k) => {
+      if (bridges[k] === 0) {
+        flags[bond.from] = 1;
+        flags[bond.to] = 1;
+      }
+    });
+  }
+  ringAtomSets.set(graph, flags);
+  return flags;
+}
+
+const indexes = new WeakMap<MolecularGraph, GraphIndex>();
+
+export function graphIndex(graph: MolecularGraph): GraphIndex {
+  const cached = indexes.get(graph);
+  if (cached) return cached;
+  const neighbours: Neighbour[][] = graph.atoms.map(() => []);
+  const bondOrderSums = new Array<number>(graph.atoms.length).fill(0);
+  for (const bond of graph.bonds) {
+    neighbours[bond.from]?.push({ atom: bond.to, order: bond.order });
+    neighbours[bond.to]?.push({ atom: bond.from, order: bond.order });
+    bondOrderSums[bond.from] += bond.order;
+    bondOrderSums[bond.to] += bond.order;
+  }
+  const index: GraphIndex = { neighbours, bondOrderSums, mayHaveRings: graph.bonds.length >= graph.atoms.length };
+  indexes.set(graph, index);
+  return index;
+}
