@@ -2,7 +2,7 @@ import { beforeAll, describe, expect, it } from "vitest";
 import { Molecule } from "openchemlib";
 import { analyzeSmiles } from "../../shared/src/index";
 import type { SpeciesAnalysis } from "../../shared/src/index";
-import { CARBON_FRAMEWORKS, SMILES_DIPOLES, SMILES_RESONANCE } from "./data/smilesReferences";
+import { CAGE_DIPOLES, CARBON_FRAMEWORKS, SMILES_DIPOLES, SMILES_RESONANCE } from "./data/smilesReferences";
 
 function smilesAnalysis(smiles: string): SpeciesAnalysis {
   const result = analyzeSmiles(smiles);
@@ -30,6 +30,10 @@ describe("polarity of SMILES molecules against measured dipoles and symmetry", (
       polarity.polar,
       `${name}: measured ${debye} D; engine said ${polarity.polar ? "polar" : "nonpolar"} because "${polarity.reason}"`,
     ).toBe(debye > 0);
+  });
+  // Fails while cage coordinates lose their symmetry; turns red (and should become `it`) once fixed.
+  it.fails.each(CAGE_DIPOLES)("$name $smiles (measured $debye D): cage model keeps its symmetry", ({ smiles, debye }) => {
+    expect(smilesAnalysis(smiles).polarity.polar).toBe(debye > 0);
   });
 });
 

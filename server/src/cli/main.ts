@@ -4,6 +4,12 @@
 import { runCli } from "./runCli";
 import { shouldUseColour } from "./terminalStyle";
 
+// A reader that stops early (`lonepair check . | head`) closes the pipe: that is not an error.
+process.stdout.on("error", (error: NodeJS.ErrnoException) => {
+  if (error.code === "EPIPE") process.exit(process.exitCode ?? 0);
+  throw error;
+});
+
 const io = {
   writeOut: (text: string) => void process.stdout.write(text),
   writeError: (text: string) => void process.stderr.write(text),
