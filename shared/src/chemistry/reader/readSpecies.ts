@@ -27,6 +27,22 @@ const MHCHEM_OPEN = "\\ce{";
 
 /** Reads one species from `text`; the reading's range excludes surrounding whitespace. */
 export function readSpecies(text: string): ReadResult {
+  // Documents and tables name the same species over and over; results are immutable data.
+  const cached = typeof text === "string" ? readMemo.get(text) : undefined;
+  if (cached) return cached;
+  const result = readSpeciesUncached(text);
+  if (typeof text === "string" && text.length <= MEMO_MAX_TEXT) {
+    if (readMemo.size >= MEMO_LIMIT) readMemo.clear();
+    readMemo.set(text, result);
+  }
+  return result;
+}
+
+const MEMO_LIMIT = 20_000;
+const MEMO_MAX_TEXT = 120;
+const readMemo = new Map<string, ReadResult>();
+
+function readSpeciesUncached(text: string): ReadResult {
   if (typeof text !== "string") {
     return { ok: false, problem: problemAt("empty-input", "There is nothing to read.", 0, 0) };
   }
