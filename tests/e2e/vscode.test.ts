@@ -11,7 +11,7 @@ import { join } from "node:path";
 import { promisify } from "node:util";
 import { parse } from "csv-parse/sync";
 import type { Page } from "playwright-core";
-import { afterAll, beforeAll, beforeEach, describe, expect, it } from "vitest";
+import { afterAll, afterEach, beforeAll, beforeEach, describe, expect, it } from "vitest";
 import {
   REPOSITORY_ROOT,
   installExtension,
@@ -93,6 +93,7 @@ describe("lonepair in a real VS Code (code-server in headless Chromium)", () => 
   let page: Page;
 
   beforeAll(async () => {
+    rmSync(ARTIFACTS, { recursive: true, force: true });
     mkdirSync(ARTIFACTS, { recursive: true });
     scratch = mkdtempSync(join(tmpdir(), "lonepair-e2e-"));
     workspace = join(scratch, "workspace");
@@ -108,6 +109,11 @@ describe("lonepair in a real VS Code (code-server in headless Chromium)", () => 
 
   beforeEach(async () => {
     if (page) await dismissPopups(page);
+  });
+
+  afterEach(async (context) => {
+    // What the screen showed when a scenario failed is the first thing to look at.
+    if (page && context.task.result?.state === "fail") await screenshot(page, `failed-${context.task.name.replace(/\W+/g, "-")}`);
   });
 
   afterAll(async () => {
@@ -221,7 +227,7 @@ describe("lonepair in a real VS Code (code-server in headless Chromium)", () => 
       const offset = original.split("\n").slice(0, line - 1).join("\n").length + 1;
       await goTo(page, line, 1);
       await runCommand(page, "lonepair: Insert geometry summary table");
-      await page.locator(".tab.active.dirty").waitFor();
+      await page.locator(".editor-group-container.active .view-line", { hasText: "| Formula | Name |" }).first().waitFor();
       await screenshot(page, "4-table-inserted");
       await page.keyboard.press("Control+S");
       const withTable = await diskText(file, (text) => text !== original);

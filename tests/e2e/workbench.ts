@@ -38,12 +38,18 @@ export async function openWorkbench(serverUrl: string, folder: string, profile: 
 
 /** Opens a workspace file through quick open (Ctrl+P) and waits for its tab to be the active one. */
 export async function openFile(page: Page, fileName: string): Promise<void> {
-  await page.keyboard.press("Control+P");
-  await page.waitForSelector(".quick-input-widget input", { state: "visible" });
-  await page.keyboard.type(fileName);
-  // File search waits for the extension host's search provider, which is slow on a cold start.
-  await page.waitForSelector(`.quick-input-widget .monaco-list-row[aria-label^="${fileName}"]`, { timeout: 90_000 });
-  await page.keyboard.press("Enter");
+  const tab = page.locator(`.tab[aria-label^="${fileName}"]`);
+  if ((await tab.count()) > 0) {
+    await tab.first().click();
+  } else {
+    await page.keyboard.press("Control+P");
+    await page.waitForSelector(".quick-input-widget input", { state: "visible" });
+    await page.keyboard.type(fileName);
+    // Enter opens the focused row, which is the wanted file only once the list has caught up with the
+    // typing; file search also waits for the extension host's search provider on a cold start.
+    await page.waitForSelector(`.quick-input-widget .monaco-list-row.focused[aria-label^="${fileName}"]`, { timeout: 90_000 });
+    await page.keyboard.press("Enter");
+  }
   await page.waitForSelector(`.tab.active[aria-label^="${fileName}"]`);
   await page.waitForSelector(".editor-group-container.active .monaco-editor .view-lines");
 }
@@ -53,7 +59,7 @@ export async function runCommand(page: Page, title: string): Promise<void> {
   await page.keyboard.press("F1");
   await page.waitForSelector(".quick-input-widget input", { state: "visible" });
   await page.keyboard.type(title);
-  await page.waitForSelector(`.quick-input-widget .monaco-list-row[aria-label^="${title}"]`);
+  await page.waitForSelector(`.quick-input-widget .monaco-list-row.focused[aria-label^="${title}"]`);
   await page.keyboard.press("Enter");
   await page.waitForSelector(".quick-input-widget", { state: "hidden" });
 }
