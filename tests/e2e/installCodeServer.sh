@@ -26,7 +26,7 @@ exec 3>&1 1>&2
 # downloaded here; Kerberos headers build the editor's native kerberos module.
 command -v chromium >/dev/null || (apt-get update && apt-get install -y chromium)
 command -v rg >/dev/null || (apt-get update && apt-get install -y ripgrep)
-[[ -f /usr/include/krb5.h || -f /usr/include/krb5/krb5.h ]] || (apt-get update && apt-get install -y libkrb5-dev)
+dpkg -s libkrb5-dev >/dev/null 2>&1 || (apt-get update && apt-get install -y libkrb5-dev)
 # Native modules build against the running Node's own headers, which its package puts in
 # /usr/include/node (npm is pointed at /usr below). Debian's libnode-dev is an older Node, whose
 # headers would build modules this Node cannot load, so a missing header is reported, not patched.
