@@ -131,9 +131,8 @@ describe("lonepair in a real VS Code (code-server in headless Chromium)", () => 
       const text = readFileSync(join(workspace, "notebook", "run-14-fluorinating-agents.md"), "utf8");
       const at = positionOf(text, "\\ce{SF4}");
       await goTo(page, at.line, at.column);
-      const formula = await textBox(page, "\\ce{SF4", "SF4");
-      expect(formula).not.toBeNull();
-      const card = await hoverCard(page, formula!, "seesaw");
+      expect(await textBox(page, "\\ce{SF4", "SF4")).not.toBeNull();
+      const card = await hoverCard(page, () => textBox(page, "\\ce{SF4", "SF4"), "seesaw");
       await screenshot(page, "1-hover-sf4");
       // from memory: VSEPR tables (any general chemistry handbook) — SF4 is AX4E1, seesaw, polar
       expect(card).toContain("SF4");

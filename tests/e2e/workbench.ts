@@ -91,7 +91,15 @@ export interface TextBox {
  */
 export async function textBox(page: Page, context: string, target: string): Promise<TextBox | null> {
   if (!context.includes(target)) throw new Error(`"${target}" is not inside "${context}"`);
-  return page.evaluate(findTextInVisibleLines, { context, target });
+  // The editor may still be scrolling to reveal the cursor: trust a place only once it holds still.
+  let previous: TextBox | null = null;
+  for (let look = 0; look < 40; look++) {
+    const box = await page.evaluate(findTextInVisibleLines, { context, target });
+    if (box && previous && box.left === previous.left && box.top === previous.top) return box;
+    previous = box;
+    await page.waitForTimeout(150);
+  }
+  return previous;
 }
 
 /** Minimal DOM shapes for code that runs in the page (the project's type-check has no DOM library). */
@@ -157,12 +165,16 @@ export async function squiggleBoxes(page: Page, severity: "error" | "warning" | 
  * Hovers over a box the way a hand does: the mouse leaves, then comes back in small steps (the editor
  * ignores a pointer that jumps), retried because the first hover after opening can be dropped.
  */
-export async function hoverCard(page: Page, box: TextBox, expected: string): Promise<string> {
-  const x = (box.left + box.right) / 2;
-  const y = (box.top + box.bottom) / 2;
+export async function hoverCard(page: Page, where: () => Promise<TextBox | null>, expected: string): Promise<string> {
   const card = page.locator(".monaco-hover:visible", { hasText: expected });
   for (let attempt = 0; attempt < 4; attempt++) {
-    await page.mouse.move(x + 200, y + 150, { steps: 5 });
+    // Measured afresh each time: a hover card or a scroll may have moved the text.
+    const box = await where();
+    if (!box) throw new Error("the text to hover is not on screen");
+    const x = (box.left + box.right) / 2;
+    const y = (box.top + box.bottom) / 2;
+    // Away first, to the left along the same line (no other species on the way), then back.
+    await page.mouse.move(Math.max(box.left - 40, 0), y, { steps: 5 });
     await page.mouse.move(x, y, { steps: 15 });
     try {
       await card.first().waitFor({ state: "visible", timeout: 8_000 });
