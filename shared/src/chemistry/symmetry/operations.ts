@@ -3,6 +3,7 @@
  * a molecule onto itself.
  */
 import type { Matrix3 } from "../geometry/symmetricEigen";
+import { rotationAboutAxis } from "../geometry/rotation";
 import type { Vec3 } from "../geometry/vectors";
 
 /** An atom after centring: an integer id per element (same element, same id) and a position. */
@@ -19,15 +20,7 @@ export interface MatchableMolecule {
 
 /** Proper rotation by `angle` radians about a unit `axis` (right-hand rule). */
 export function rotationMatrix(axis: Vec3, angle: number): Matrix3 {
-  const [x, y, z] = axis;
-  const c = Math.cos(angle);
-  const s = Math.sin(angle);
-  const t = 1 - c;
-  return [
-    [t * x * x + c, t * x * y - s * z, t * x * z + s * y],
-    [t * x * y + s * z, t * y * y + c, t * y * z - s * x],
-    [t * x * z - s * y, t * y * z + s * x, t * z * z + c],
-  ];
+  return rotationAboutAxis(axis, angle);
 }
 
 /** Reflection through the plane through the origin with unit normal `normal`. */
