@@ -62,10 +62,14 @@ export function analyzeCentre(graph: MolecularGraph, index: number, radical: boo
 
   // Everything below depends only on these facts, so centres alike in them (the many CH2 and
   // aromatic CH of a large molecule) share one worked-out description.
-  let signature = `${atom.symbol}|${atom.lonePairs}|${atom.unpairedElectrons}|${delocalised}|${radical}|${multipleBondCount}|${bulkyNeighbours}|${ringSize}|`;
-  for (const ligand of ligands) signature += `${ligand.symbol}${ligand.bondOrder},`;
-  const known = centreMemo.get(signature);
-  if (known) return { centre: { ...known.centre, index }, ligands, sites: known.sites };
+  // Small species have one or two centres: for them the bookkeeping costs more than it saves.
+  let signature: string | undefined;
+  if (graph.atoms.length >= SHARED_CENTRE_MIN_ATOMS) {
+    signature = `${atom.symbol}|${atom.lonePairs}|${atom.unpairedElectrons}|${delocalised}|${radical}|${multipleBondCount}|${bulkyNeighbours}|${ringSize}|`;
+    for (const ligand of ligands) signature += `${ligand.symbol}${ligand.bondOrder},`;
+    const known = centreMemo.get(signature);
+    if (known) return { centre: { ...known.centre, index }, ligands, sites: known.sites };
+  }
 
   const sites = assignSites(electronGeometry, loneDomains, ligands);
   const first = ligands[0];
@@ -108,12 +112,15 @@ export function analyzeCentre(graph: MolecularGraph, index: number, radical: boo
         ? { hybridizationNote: CONJUGATED_NOTE }
         : {}),
   };
-  if (centreMemo.size >= CENTRE_MEMO_LIMIT) centreMemo.clear();
-  centreMemo.set(signature, { centre, sites });
+  if (signature !== undefined) {
+    if (centreMemo.size >= CENTRE_MEMO_LIMIT) centreMemo.clear();
+    centreMemo.set(signature, { centre, sites });
+  }
   return { centre, ligands, sites };
 }
 
 const CENTRE_MEMO_LIMIT = 5_000;
+const SHARED_CENTRE_MIN_ATOMS = 12;
 const centreMemo = new Map<string, { readonly centre: CentreAnalysis; readonly sites: SiteAssignment }>();
 
 /**

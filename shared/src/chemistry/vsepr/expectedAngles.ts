@@ -40,11 +40,10 @@ function pairLabel(context: AngleContext, i: number, j: number, ideal: number): 
 }
 
 export function expectedAngles(context: AngleContext): AngleExpectation[] {
-  return angleGroups(context).map(({ ideal, between }) => ({
-    ...rangeFor(context, ideal, between),
-    ideal,
-    ...(between ? { between } : {}),
-  }));
+  return angleGroups(context).map(({ ideal, between }) => {
+    const { min, max, note } = rangeFor(context, ideal, between);
+    return between ? { ideal, min, max, note, between } : { ideal, min, max, note };
+  });
 }
 
 interface AngleGroup {
