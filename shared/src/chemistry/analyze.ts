@@ -9,6 +9,7 @@ import type { AnalysisResult, Problem, SpeciesReading } from "./types";
 import { buildAnalysis } from "./analysis/buildAnalysis";
 import { chooseSkeletonStructure } from "./analysis/chooseSkeletonStructure";
 import { smilesStructure } from "./analysis/fromSmiles";
+import { candidateStructuresFor, singleStructureFor, structureForName } from "./analysis/structuresByFormula";
 
 const MEMO_LIMIT = 20_000;
 const memo = new Map<string, AnalysisResult>();
@@ -58,8 +59,54 @@ export function analyzeReading(reading: SpeciesReading): AnalysisResult {
   const scope = outOfScope(reading);
   if (scope) return { ok: false, reading, problem: scope };
   const chosen = chooseSkeletonStructure(reading);
-  if (!chosen.ok) return { ok: false, reading, problem: chosen.problem };
+  if (!chosen.ok) {
+    if (chosen.problem.code === "ambiguous-connectivity") return readIntoFormula(reading, chosen.problem);
+    return { ok: false, reading, problem: chosen.problem };
+  }
   return { ok: true, value: buildAnalysis(reading, chosen.structure, chosen.centre) };
+}
+
+/**
+ * A molecular formula whose connectivity is not written: analyse the one ordinary structure it
+ * stands for (C2H4 is ethene), or name the familiar candidates when there are several.
+ */
+function readIntoFormula(reading: SpeciesReading, problem: Problem): AnalysisResult {
+  // A name (or a written phenyl group) says which structure is meant; a bare formula only when
+  // it has one ordinary structure.
+  const byName = reading.notation === "name" || reading.formula.includes("C6H5") ? structureForName(reading.name) : undefined;
+  const single = byName ?? singleStructureFor(reading.composition, reading.charge);
+  if (single) {
+    const known = single.smiles ? analyzeSmiles(single.written) : analyzeSpecies(single.written);
+    if (known.ok) {
+      const { value } = known;
+      return {
+        ok: true,
+        value: {
+          ...value,
+          polarity: value.polarity,
+          reading: { ...reading, name: reading.name ?? single.name },
+          warnings: [
+            ...value.warnings,
+            reading.notation === "name"
+              ? `Read as the structure of ${single.name} (${single.smiles ? `SMILES ${single.written}` : single.written}).`
+              : `Read as ${single.name} (${single.smiles ? `SMILES ${single.written}` : single.written}), the one ordinary structure with this formula; write a structural formula or SMILES for anything else.`,
+          ],
+        },
+      };
+    }
+  }
+  const candidates = candidateStructuresFor(reading.composition, reading.charge);
+  if (candidates.length === 0) return { ok: false, reading, problem };
+  const named = candidates.map((c) => `${c.name} (${c.smiles ? `SMILES ${c.written}` : c.written})`);
+  const list = named.length === 2 ? named.join(" or ") : `${named.slice(0, -1).join(", ")} or ${named[named.length - 1]}`;
+  return {
+    ok: false,
+    reading,
+    problem: {
+      code: "ambiguous-connectivity",
+      message: `${reading.formula} can be ${list}: write the structural formula or SMILES you mean.`,
+    },
+  };
 }
 
 const IONIC_GROUPS = new Set([1, 2]);

@@ -194,7 +194,7 @@ function explainFailure(
 function needsStructure(reading: SpeciesReading): ChosenStructure {
   return fail(
     "ambiguous-connectivity",
-    `${reading.formula} has more than one atom that needs two or more bonds, so the formula alone does not say how the atoms connect. Write a structural formula (for example CH3CH2OH or CH3OCH3) or a SMILES string.`,
+    `${reading.formula} has more than one atom that needs two or more bonds, so the formula alone does not say how the atoms connect. Write a structural formula (such as CH3CH2CH3) or a SMILES string.`,
   );
 }
 
