@@ -145,29 +145,46 @@ const STRAINED_RING_LIMIT = 5;
 function smallestRingThrough(graph: MolecularGraph, centre: number, ligands: readonly Ligand[]): number | undefined {
   const index = graphIndex(graph);
   if (!index.mayHaveRings || ligands.length < 2 || ringAtoms(graph)[centre] === 0) return undefined;
+  // Depth-limited search with a reused stamp array instead of a Map per start: ring atoms are
+  // most atoms of a drug-sized molecule.
+  const { stamp, depthOf } = scratchFor(graph.atoms.length);
   let best: number | undefined;
   for (const start of ligands) {
     if (index.neighbours[start.atom].length < 2) continue; // a terminal atom closes no ring
-    const distance = new Map<number, number>([[start.atom, 0]]);
+    const mark = ++stampCounter;
+    stamp[start.atom] = mark;
+    depthOf[start.atom] = 0;
     let frontier = [start.atom];
     for (let depth = 1; depth <= STRAINED_RING_LIMIT - 2 && frontier.length > 0; depth++) {
       const next: number[] = [];
       for (const atom of frontier) {
         for (const { atom: other } of index.neighbours[atom]) {
-          if (other === centre || distance.has(other)) continue;
-          distance.set(other, depth);
+          if (other === centre || stamp[other] === mark) continue;
+          stamp[other] = mark;
+          depthOf[other] = depth;
           next.push(other);
         }
       }
       frontier = next;
     }
     for (const end of ligands) {
-      if (end.atom === start.atom) continue;
-      const d = distance.get(end.atom);
-      if (d !== undefined && (best === undefined || d + 2 < best)) best = d + 2;
+      if (end.atom === start.atom || stamp[end.atom] !== mark) continue;
+      const size = depthOf[end.atom] + 2;
+      if (best === undefined || size < best) best = size;
     }
   }
   return best;
+}
+
+let stampCounter = 0;
+let scratch = { stamp: new Int32Array(64), depthOf: new Int8Array(64) };
+
+function scratchFor(atomCount: number): { stamp: Int32Array; depthOf: Int8Array } {
+  if (scratch.stamp.length < atomCount || stampCounter > 2_000_000_000) {
+    scratch = { stamp: new Int32Array(Math.max(atomCount, 2 * scratch.stamp.length)), depthOf: new Int8Array(Math.max(atomCount, 2 * scratch.stamp.length)) };
+    stampCounter = 0;
+  }
+  return scratch;
 }
 
 /** Add the interior angle of a small ring the centre sits in (60° in C3, about 88° in C4). */
