@@ -23,8 +23,12 @@ export function batchModel(batch: DocumentBatch, kind: DocumentKind, read?: Spec
   const local = <T extends { range: { start: number; end: number } }>(item: T): T =>
     shift === 0 ? item : { ...item, range: { start: item.range.start - shift, end: item.range.end - shift } };
   const own = (item: { range: { start: number } }): boolean => item.range.start >= shift;
+  let occurrences: readonly SpeciesOccurrence[] | undefined;
   return {
-    occurrences: model.occurrences.filter(own).map((occurrence) => local(occurrence)),
+    // Worked out only when asked: checking a file needs the findings alone.
+    get occurrences() {
+      return (occurrences ??= model.occurrences.filter(own).map((occurrence) => local(occurrence)));
+    },
     findings() {
       const findings = [...model.problems, ...checkDocument(model)].filter(own).map((finding) => {
         const moved = local(finding);

@@ -2,7 +2,7 @@
  * Compares the cells of one table record with what the core works out for its species, and
  * proposes the computed value, written in the cell's own style, where they disagree.
  */
-import type { CentreAnalysis, SpeciesAnalysis } from "../../chemistry/types";
+import type { CentreAnalysis, SpeciesAnalysis, TextRange } from "../../chemistry/types";
 import type { Finding, TableCell, TableRecord } from "../types";
 import { angleInStyleOf, parseAngles } from "./angleText";
 import { axeInStyleOf, parseAxe } from "./axeText";
@@ -19,10 +19,43 @@ export function checkRecord(record: TableRecord, analysis: SpeciesAnalysis): Fin
   const species = record.species.text;
   const centre = analysis.centres[0];
   for (const cell of record.cells) {
-    const finding = checkCell(cell, species, analysis, centre);
+    const finding = knownCheck(cell, species, analysis, centre);
     if (finding) findings.push(finding);
   }
   return findings;
+}
+
+/**
+ * Past results per analysis, keyed by column meaning, species text and cell text: a table repeats
+ * the same values, and the same value for the same species always gets the same finding, only at
+ * another range. Weakly held, so an analysis dropped by the core's memo takes its results along.
+ */
+const pastChecks = new WeakMap<SpeciesAnalysis, Map<string, Finding | null>>();
+
+/** Distinct cells remembered per analysis; a column of free text must not grow this without end. */
+const PAST_CHECKS_LIMIT = 4096;
+
+function knownCheck(cell: TableCell, species: string, analysis: SpeciesAnalysis, centre: CentreAnalysis | undefined): Finding | undefined {
+  let past = pastChecks.get(analysis);
+  if (!past) {
+    past = new Map();
+    pastChecks.set(analysis, past);
+  }
+  // The species' length keeps "a" + "bc" apart from "ab" + "c".
+  const key = `${cell.meaning}:${species.length}:${species}${cell.text}`;
+  const known = past.get(key);
+  if (known === null) return undefined;
+  if (known) return placedAt(known, cell.range);
+  const finding = checkCell(cell, species, analysis, centre);
+  if (past.size >= PAST_CHECKS_LIMIT) past.clear();
+  past.set(key, finding ?? null);
+  return finding;
+}
+
+/** A remembered finding moved to another cell: the finding and its fix cover the whole cell. */
+function placedAt(finding: Finding, range: TextRange): Finding {
+  if (finding.range === range) return finding;
+  return finding.fix ? { ...finding, range, fix: { ...finding.fix, range } } : { ...finding, range };
 }
 
 function checkCell(cell: TableCell, species: string, analysis: SpeciesAnalysis, centre: CentreAnalysis | undefined): Finding | undefined {

@@ -32,8 +32,25 @@ const BOM = 0xfeff;
 
 /** Splits `text` into rows and fields separated by `delimiter` (one character). */
 export function readDelimited(text: string, delimiter: string): DelimitedTable {
-  const separator = delimiter.charCodeAt(0);
   const rows: DelimitedRow[] = [];
+  const problems = visitDelimitedRows(text, delimiter, (cells, range) => {
+    rows.push({ cells, range });
+  });
+  return { rows, problems };
+}
+
+/**
+ * Receives each row as soon as it is read. `cells` belongs to the row: the tokenizer does not
+ * reuse it. Rows arrive in document order.
+ */
+export type DelimitedRowVisitor = (cells: DelimitedCell[], range: TextRange) => void;
+
+/**
+ * Tokenizes `text` like `readDelimited`, handing each row to `visit` instead of collecting them,
+ * so a large table's rows can be dropped as soon as they are used; returns the problems.
+ */
+export function visitDelimitedRows(text: string, delimiter: string, visit: DelimitedRowVisitor): Finding[] {
+  const separator = delimiter.charCodeAt(0);
   const problems: Finding[] = [];
   const length = text.length;
   let index = text.charCodeAt(0) === BOM ? 1 : 0;
@@ -65,16 +82,16 @@ export function readDelimited(text: string, delimiter: string): DelimitedTable {
       continue;
     }
     // A line end closes the row.
-    rows.push({ cells, range: { start: rowStart, end: cell.range.end + (cell.quoted ? 1 : 0) } });
+    visit(cells, { start: rowStart, end: cell.range.end + (cell.quoted ? 1 : 0) });
     index += code === CR && text.charCodeAt(index + 1) === LF ? 2 : 1;
     cells = [];
     rowStart = index;
   }
   if (cells.length > 0) {
     const last = cells[cells.length - 1];
-    rows.push({ cells, range: { start: rowStart, end: last.range.end + (last.quoted ? 1 : 0) } });
+    visit(cells, { start: rowStart, end: last.range.end + (last.quoted ? 1 : 0) });
   }
-  return { rows, problems };
+  return problems;
 }
 
 /** A field that opens with a quote; returns it and the index just past its closing quote. */

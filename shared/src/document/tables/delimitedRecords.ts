@@ -2,7 +2,7 @@
  * CSV and TSV documents: the first non-empty row is the header, every later row a record.
  */
 import type { SpeciesReader } from "../speciesReader";
-import { readDelimited, sniffDelimiter } from "./csv";
+import { sniffDelimiter, visitDelimitedRows } from "./csv";
 import { isFormulaHeader, meaningOfHeader } from "./headers";
 import { addRecord, type RecordField, type RecordSink } from "./records";
 import type { ColumnMeaning, Finding } from "../types";
@@ -20,24 +20,29 @@ export function readDelimitedRecords(
   sink: RecordSink,
 ): readonly Finding[] {
   const delimiter = kind === "tsv" ? "\t" : sniffDelimiter(text, ",");
-  const table = readDelimited(text, delimiter);
   let columns: (Column | undefined)[] | undefined;
-  for (const row of table.rows) {
+  // A header without a species or name column: the rest is tokenized (for its problems) but not read.
+  let noSpecies = false;
+  // Rows are used as the tokenizer hands them on and then dropped: a large batch never holds them all.
+  return visitDelimitedRows(text, delimiter, (cells) => {
+    if (noSpecies) return;
     if (columns === undefined) {
-      if (row.cells.every((cell) => cell.text.trim() === "")) continue;
-      columns = row.cells.map((cell) => {
+      if (cells.every((cell) => cell.text.trim() === "")) return;
+      columns = cells.map((cell) => {
         const meaning = meaningOfHeader(cell.text);
         return meaning ? { meaning, formulaHeader: isFormulaHeader(cell.text) } : undefined;
       });
-      if (!columns.some((column) => column?.meaning === "species" || column?.meaning === "name")) break;
-      continue;
+      noSpecies = !columns.some((column) => column?.meaning === "species" || column?.meaning === "name");
+      return;
     }
     const fields: RecordField[] = [];
-    row.cells.forEach((cell, index) => {
-      const column = columns![index];
-      if (column) fields.push({ ...column, text: cell.text, range: cell.range });
-    });
+    const count = Math.min(cells.length, columns.length);
+    for (let index = 0; index < count; index++) {
+      const column = columns[index];
+      if (!column) continue;
+      const cell = cells[index];
+      fields.push({ meaning: column.meaning, formulaHeader: column.formulaHeader, text: cell.text, range: cell.range });
+    }
     addRecord(fields, read, sink);
-  }
-  return table.problems;
+  });
 }

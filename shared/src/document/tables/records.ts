@@ -23,6 +23,8 @@ export interface RecordSink extends ScanSink {
 /** The field's value without surrounding whitespace, and the matching narrower range. */
 export function trimmedField<T extends { text: string; range: TextRange }>(field: T): T {
   const { text, range } = field;
+  // Most cells have nothing to trim; checking the two ends is cheaper than trimming.
+  if (text.length === 0 || (isPlainVisible(text.charCodeAt(0)) && isPlainVisible(text.charCodeAt(text.length - 1)))) return field;
   const leading = text.length - text.trimStart().length;
   const trimmed = text.trim();
   if (trimmed.length === text.length) return field;
@@ -32,8 +34,20 @@ export function trimmedField<T extends { text: string; range: TextRange }>(field
   return { ...field, text: trimmed, range: { start, end: start + trimmed.length } };
 }
 
+/** A printable ASCII character other than the space: never trimmed. */
+function isPlainVisible(code: number): boolean {
+  return code > 0x20 && code < 0x7f;
+}
+
+const ASTERISK = 0x2a;
+const UNDERSCORE = 0x5f;
+const BACKTICK = 0x60;
+
 /** Markdown emphasis or code ticks around a whole cell: **SF4**, `SF4`, _SF4_. */
 function unwrapped(field: RecordField): RecordField {
+  // Only a cell opening with one of the marks can be wrapped; skip the expression for the rest.
+  const first = field.text.charCodeAt(0);
+  if (first !== ASTERISK && first !== UNDERSCORE && first !== BACKTICK) return field;
   const match = /^(\*\*|__|\*|_|`)(.+)\1$/.exec(field.text);
   if (!match) return field;
   const inner = match[2];
@@ -45,30 +59,32 @@ function unwrapped(field: RecordField): RecordField {
 
 /** Adds the record for `fields` (if any field names a species) to `sink`. */
 export function addRecord(fields: readonly RecordField[], read: SpeciesReader, sink: RecordSink): void {
-  const present = fields.map(trimmedField).filter((field) => field.text.length > 0);
-  const naming = present
-    .filter((field) => field.meaning === "species" || field.meaning === "name")
-    .map(unwrapped)
-    // Formula columns first, then other species columns, then names.
-    .sort((a, b) => rank(a) - rank(b));
+  // One pass over the fields, without intermediate lists: tables call this once a row.
+  const naming: RecordField[] = [];
+  const cells: TableCell[] = [];
+  for (const written of fields) {
+    const field = trimmedField(written);
+    if (field.text.length === 0) continue;
+    if (field.meaning === "species" || field.meaning === "name") naming.push(unwrapped(field));
+    else cells.push({ meaning: field.meaning, range: field.range, text: field.text });
+  }
   if (naming.length === 0) return;
+  // Formula columns first, then other species columns, then names (the sort is stable).
+  if (naming.length > 1) naming.sort((a, b) => rank(a) - rank(b));
   const found: SpeciesOccurrence[] = [];
-  const failed: UnreadableSpecies[] = [];
+  let failed: UnreadableSpecies[] | undefined;
   for (const field of naming) {
     const result = read(field.text);
     if (result.ok) found.push(occurrenceAt(result.value, field.text, field.range.start));
-    else if (field.meaning === "species") failed.push(unreadableAt(field.text, field.range.start, result));
+    else if (field.meaning === "species") (failed ??= []).push(unreadableAt(field.text, field.range.start, result));
   }
   for (const occurrence of found) sink.occurrences.push(occurrence);
   // A name the reader does not know is no mistake when another column names the species; a
   // formula it cannot read always is.
-  for (const unreadable of failed) {
+  for (const unreadable of failed ?? []) {
     if (unreadable.problem.code !== "unknown-name" || found.length === 0) sink.unreadable.push(unreadable);
   }
   if (found.length === 0) return;
-  const cells: TableCell[] = present
-    .filter((field) => field.meaning !== "species" && field.meaning !== "name")
-    .map((field) => ({ meaning: field.meaning, range: field.range, text: field.text }));
   sink.records.push({ species: found[0], cells });
 }
 
