@@ -87,4 +87,28 @@ describe("CSV in batches", () => {
     // common practice: NF3 has 26 valence electrons; six rows say 24
     expect(actual.findings.map((finding) => finding.code)).toEqual(Array(6).fill("table-valence-electrons"));
   });
+  it("cuts a file larger than one disk read into batches that each end at the first record end past the batch size", async () => {
+    // More than a megabyte, so one read from disk holds several batches.
+    const rows = Array.from({ length: 24_000 }, (_, index) =>
+      index % 997 === 5 ? `KR-${index},NF3,24,trigonal pyramidal` : `KR-${index},SF6,48,octahedral`,
+    );
+    const text = `id,formula,valence electrons,molecular geometry\n${rows.join("\n")}\n`;
+    const path = join(folder, "large.csv");
+    writeFileSync(path, text);
+    const batchCharacters = 5000;
+    const batches = [];
+    for await (const batch of readDocument(path, "csv", batchCharacters).batches) batches.push(batch);
+    expect(batches.map((batch) => batch.text).join("")).toBe(text);
+    expect(batches.length).toBeGreaterThan(text.length / (batchCharacters * 1.1));
+    for (const batch of batches.slice(0, -1)) {
+      // Ends at a record end, and the record before that one ended short of the batch size.
+      expect(batch.text.endsWith("\n")).toBe(true);
+      expect(batch.text.lastIndexOf("\n", batch.text.length - 2) + 1).toBeLessThan(batchCharacters);
+      expect(batch.text.length).toBeGreaterThanOrEqual(batchCharacters);
+    }
+    const actual = await streamed(text, "csv", batchCharacters);
+    expect(actual.findings).toEqual(whole(text, "csv").findings);
+    // common practice: NF3 has 26 valence electrons; the rows at 5, 1002, ... say 24
+    expect(actual.findings.map((finding) => finding.code)).toEqual(Array(Math.floor((24_000 - 6) / 997) + 1).fill("table-valence-electrons"));
+  });
 });

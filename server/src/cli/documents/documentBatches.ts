@@ -37,8 +37,12 @@ export interface DocumentReading {
   exactUtf8(): boolean;
 }
 
-/** Batches of at least this many characters (one record may make a batch longer). */
-export const DEFAULT_BATCH_CHARACTERS = 1 << 18;
+/**
+ * Batches of at least this many characters, ending at the first record end past it (one record
+ * may make a batch longer). Small enough that a batch's records die young in the garbage
+ * collector's eyes, large enough that the prefix read again with each batch costs little.
+ */
+export const DEFAULT_BATCH_CHARACTERS = 1 << 16;
 
 /** Bytes read from disk at a time. */
 const CHUNK_BYTES = 1 << 20;
@@ -140,11 +144,16 @@ async function* delimitedBatches(
         else if (ended) prefixLength = pending.length;
         else continue;
       }
-      if (ended) break;
-      const boundary = scanner.scan(pending);
-      if (pending.length >= batchCharacters && boundary > 0 && (offset > 0 || boundary >= prefixLength)) {
+      // As many batches as the text read so far holds, each ending at the first record end past
+      // `batchCharacters` (the first one past the prefix too): one chunk from disk may give several.
+      for (;;) {
+        const target = offset === 0 ? Math.max(batchCharacters, prefixLength) : batchCharacters;
+        if (pending.length < target) break;
+        const boundary = scanner.scan(pending, target);
+        if (boundary < target) break;
         yield cut(boundary, false);
       }
+      if (ended) break;
     }
     yield cut(pending.length, true);
   } finally {
