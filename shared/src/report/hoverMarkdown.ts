@@ -9,6 +9,7 @@ import type {
   MolecularGraph,
   SpeciesAnalysis,
 } from "../chemistry/types";
+import { shapeSketchSvg, svgDataUri } from "./shapeSketch";
 
 /** The caution every editor-facing result carries (hover cards and summary tables). */
 export const HOVER_CAUTION =
@@ -30,6 +31,12 @@ const MAX_LISTED = 10;
 /** Editors refuse hover markdown past 100,000 characters; stay far below. */
 const MAX_CARD_LENGTH = 20_000;
 
+/**
+ * A sketch longer than this is left out. It comes right after the title, so with this bound the
+ * cut at MAX_CARD_LENGTH never falls inside its URI.
+ */
+const MAX_SKETCH_LENGTH = 16_000;
+
 /** Writes an angle in degrees with a fixed number of decimals, e.g. "109.5°". */
 export function formatAngle(degrees: number, decimals: number): string {
   const digits = Math.max(0, Math.min(3, Math.trunc(decimals)));
@@ -41,6 +48,8 @@ export function hoverMarkdown(analysis: SpeciesAnalysis, options: HoverMarkdownO
   const lines: string[] = [];
   lines.push(titleLine(analysis));
   lines.push("");
+  const sketch = sketchLine(analysis);
+  if (sketch) lines.push(sketch, "");
   lines.push(electronLine(analysis));
   lines.push("");
   const measured = measuredLines(analysis.measuredAngles.slice(0, MAX_LISTED), options.angleDecimals);
@@ -70,6 +79,18 @@ function titleLine(analysis: SpeciesAnalysis): string {
   const formula = `\`${analysis.reading.formula}\``;
   const name = analysis.reading.name;
   return name ? `**${escapeMarkdown(name)}** · ${formula}` : `**${formula}**`;
+}
+
+/** A markdown image (editors drop raw HTML and remote SVG in hovers), alt text naming the shape. */
+function sketchLine(analysis: SpeciesAnalysis): string | undefined {
+  const svg = shapeSketchSvg(analysis);
+  if (!svg) return undefined;
+  const uri = svgDataUri(svg);
+  if (uri.length > MAX_SKETCH_LENGTH) return undefined;
+  const geometries = [...new Set(analysis.centres.map((centre) => centre.molecularGeometry))].slice(0, 3);
+  // Two atoms and no centre: the only shape there is.
+  const shape = geometries.length > 0 ? geometries.join(", ") : "linear";
+  return `![ball-and-stick sketch of ${escapeMarkdown(analysis.reading.formula)}, ${shape}](${uri})`;
 }
 
 function electronLine(analysis: SpeciesAnalysis): string {
