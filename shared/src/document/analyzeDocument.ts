@@ -11,17 +11,31 @@ import type { RecordSink } from "./tables/records";
 import { readYamlRecords } from "./tables/yaml";
 import type { DocumentKind, DocumentModel, Finding, SpeciesOccurrence } from "./types";
 
+/** What a caller may already know about a document. */
+export interface AnalyzeOptions {
+  /**
+   * The delimiter of a CSV, when the caller has already guessed it from the same start of the
+   * document (a file read in batches guesses once, not once a batch).
+   */
+  readonly delimiter?: string;
+}
+
 /**
  * Reads `text` as a document of `kind`: CSV/TSV as a header row and records, JSON/YAML as
  * records, markdown as prose and tables, plain text as prose. Malformed JSON or YAML gives
  * `problems` with ranges, not an exception.
  */
-export function analyzeDocument(text: string, kind: DocumentKind, read: SpeciesReader = memoisedReader()): DocumentModel {
+export function analyzeDocument(
+  text: string,
+  kind: DocumentKind,
+  read: SpeciesReader = memoisedReader(),
+  options: AnalyzeOptions = {},
+): DocumentModel {
   const sink: RecordSink = { occurrences: [], unreadable: [], records: [] };
   let problems: readonly Finding[] = [];
   try {
     const source = typeof text === "string" ? text : "";
-    problems = readByKind(source, kind, read, sink);
+    problems = readByKind(source, kind, read, sink, options);
   } catch (error) {
     // Every reader is written not to throw; this keeps a document usable if one still does.
     problems = [
@@ -42,11 +56,11 @@ export function analyzeDocument(text: string, kind: DocumentKind, read: SpeciesR
   };
 }
 
-function readByKind(text: string, kind: DocumentKind, read: SpeciesReader, sink: RecordSink): readonly Finding[] {
+function readByKind(text: string, kind: DocumentKind, read: SpeciesReader, sink: RecordSink, options: AnalyzeOptions): readonly Finding[] {
   switch (kind) {
     case "csv":
     case "tsv":
-      return readDelimitedRecords(text, kind, read, sink);
+      return readDelimitedRecords(text, kind, read, sink, options.delimiter);
     case "json":
       return readJsonRecords(text, read, sink);
     case "yaml":

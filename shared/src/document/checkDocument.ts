@@ -43,7 +43,7 @@ export function checkDocument(model: DocumentModel, analyze: (text: string) => A
   }
   for (const record of model.records) {
     const result = analysisOf(record.species);
-    if (result?.ok) findings.push(...checkRecord(record, result.value));
+    if (result?.ok) checkRecord(record, result.value, findings);
   }
   return findings.sort((a, b) => a.range.start - b.range.start);
 }

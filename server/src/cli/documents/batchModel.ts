@@ -19,7 +19,8 @@ export interface BatchModel {
 /** Analyses `batch` as part of a document of `kind`; `read` is shared by the file's batches. */
 export function batchModel(batch: DocumentBatch, kind: DocumentKind, read?: SpeciesReader): BatchModel {
   const shift = batch.prefix.length;
-  const model = analyzeDocument(shift === 0 ? batch.text : batch.prefix + batch.text, kind, read);
+  const text = shift === 0 ? batch.text : batch.prefix + batch.text;
+  const model = analyzeDocument(text, kind, read, { delimiter: batch.delimiter });
   const local = <T extends { range: { start: number; end: number } }>(item: T): T =>
     shift === 0 ? item : { ...item, range: { start: item.range.start - shift, end: item.range.end - shift } };
   const own = (item: { range: { start: number } }): boolean => item.range.start >= shift;

@@ -28,6 +28,8 @@ export interface DocumentBatch {
   readonly prefix: string;
   /** True for the batch that ends the document. */
   readonly last: boolean;
+  /** A CSV's delimiter, guessed once from the start of the document (the core guesses the same). */
+  readonly delimiter?: string;
 }
 
 /** How a file is being read. */
@@ -104,6 +106,7 @@ async function* delimitedBatches(
     let pending = "";
     let ended = false;
     let scanner: RecordBoundaryScanner | undefined;
+    let delimiter: string | undefined;
     // The first batch must reach past the lines the delimiter is guessed from; they become the prefix.
     let prefixLength = -1;
     let prefix = "";
@@ -115,7 +118,7 @@ async function* delimitedBatches(
       const text = length === pending.length ? pending : pending.slice(0, length);
       pending = length === pending.length ? "" : pending.slice(length);
       const lines = lineIndexOf(text, line, offset === 0);
-      const batch: DocumentBatch = { text, offset, byteOffset, lines, prefix, last };
+      const batch: DocumentBatch = { text, offset, byteOffset, lines, prefix, last, delimiter };
       if (offset === 0) prefix = text.slice(0, prefixLength);
       offset += text.length;
       byteOffset += Buffer.byteLength(text, "utf8");
@@ -134,7 +137,7 @@ async function* delimitedBatches(
       }
       if (!scanner) {
         if (!ended && pending.length < SNIFF_CHARACTERS) continue;
-        const delimiter = kind === "tsv" ? "\t" : sniffDelimiter(pending, ",");
+        delimiter = kind === "tsv" ? "\t" : sniffDelimiter(pending, ",");
         scanner = recordBoundaryScanner(delimiter, pending.charCodeAt(0) === 0xfeff ? 1 : 0);
       }
       if (prefixLength < 0) {

@@ -13,42 +13,65 @@ import { inStyleOf } from "./textStyle";
 
 const MODEL = "(VSEPR model prediction)";
 
-/** Every disagreement between `record`'s cells and `analysis`. */
-export function checkRecord(record: TableRecord, analysis: SpeciesAnalysis): Finding[] {
-  const findings: Finding[] = [];
+/** Every disagreement between `record`'s cells and `analysis`, added to `into` (returned). */
+export function checkRecord(record: TableRecord, analysis: SpeciesAnalysis, into: Finding[] = []): Finding[] {
   const species = record.species.text;
   const centre = analysis.centres[0];
+  let past: PastChecks | undefined;
   for (const cell of record.cells) {
-    const finding = knownCheck(cell, species, analysis, centre);
-    if (finding) findings.push(finding);
+    past ??= pastChecksOf(analysis, species);
+    const finding = knownCheck(past, cell, species, analysis, centre);
+    if (finding) into.push(finding);
   }
-  return findings;
+  return into;
 }
 
-/**
- * Past results per analysis, keyed by column meaning, species text and cell text: a table repeats
- * the same values, and the same value for the same species always gets the same finding, only at
- * another range. Weakly held, so an analysis dropped by the core's memo takes its results along.
- */
-const pastChecks = new WeakMap<SpeciesAnalysis, Map<string, Finding | null>>();
+/** Past results by column meaning, then cell text; `null` when the cell was found right. */
+type PastChecks = Map<string, Map<string, Finding | null>>;
 
-/** Distinct cells remembered per analysis; a column of free text must not grow this without end. */
+/**
+ * Past results per analysis and species text: a table repeats the same values, and the same value
+ * for the same species always gets the same finding, only at another range. Weakly held, so an
+ * analysis dropped by the core's memo takes its results along.
+ */
+const pastChecks = new WeakMap<SpeciesAnalysis, Map<string, PastChecks>>();
+
+/** Distinct cells remembered per analysis and column; free text must not grow this without end. */
 const PAST_CHECKS_LIMIT = 4096;
 
-function knownCheck(cell: TableCell, species: string, analysis: SpeciesAnalysis, centre: CentreAnalysis | undefined): Finding | undefined {
-  let past = pastChecks.get(analysis);
-  if (!past) {
-    past = new Map();
-    pastChecks.set(analysis, past);
+function pastChecksOf(analysis: SpeciesAnalysis, species: string): PastChecks {
+  let bySpecies = pastChecks.get(analysis);
+  if (!bySpecies) {
+    bySpecies = new Map();
+    pastChecks.set(analysis, bySpecies);
   }
-  // The species' length keeps "a" + "bc" apart from "ab" + "c".
-  const key = `${cell.meaning}:${species.length}:${species}${cell.text}`;
-  const known = past.get(key);
+  let past = bySpecies.get(species);
+  if (!past) {
+    if (bySpecies.size >= PAST_CHECKS_LIMIT) bySpecies.clear();
+    past = new Map();
+    bySpecies.set(species, past);
+  }
+  return past;
+}
+
+function knownCheck(
+  past: PastChecks,
+  cell: TableCell,
+  species: string,
+  analysis: SpeciesAnalysis,
+  centre: CentreAnalysis | undefined,
+): Finding | undefined {
+  let column = past.get(cell.meaning);
+  if (!column) {
+    column = new Map();
+    past.set(cell.meaning, column);
+  }
+  const known = column.get(cell.text);
   if (known === null) return undefined;
   if (known) return placedAt(known, cell.range);
   const finding = checkCell(cell, species, analysis, centre);
-  if (past.size >= PAST_CHECKS_LIMIT) past.clear();
-  past.set(key, finding ?? null);
+  if (column.size >= PAST_CHECKS_LIMIT) column.clear();
+  column.set(cell.text, finding ?? null);
   return finding;
 }
 

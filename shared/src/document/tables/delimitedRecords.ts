@@ -12,14 +12,33 @@ interface Column {
   readonly formulaHeader: boolean;
 }
 
-/** Reads a delimited document into `sink`; returns the problems of the text itself. */
+/** Header text -> column, so a file read in batches works out its header once. */
+const knownHeaders = new Map<string, Column | null>();
+const KNOWN_HEADERS_LIMIT = 1024;
+
+/** The column under `header`, or undefined for a column no check reads. */
+function columnUnder(header: string): Column | undefined {
+  const known = knownHeaders.get(header);
+  if (known !== undefined) return known ?? undefined;
+  const meaning = meaningOfHeader(header);
+  const column = meaning ? { meaning, formulaHeader: isFormulaHeader(header) } : undefined;
+  if (knownHeaders.size >= KNOWN_HEADERS_LIMIT) knownHeaders.clear();
+  knownHeaders.set(header, column ?? null);
+  return column;
+}
+
+/**
+ * Reads a delimited document into `sink`; returns the problems of the text itself. A CSV's
+ * delimiter is guessed from the text unless `knownDelimiter` (guessed from the same start) is given.
+ */
 export function readDelimitedRecords(
   text: string,
   kind: "csv" | "tsv",
   read: SpeciesReader,
   sink: RecordSink,
+  knownDelimiter?: string,
 ): readonly Finding[] {
-  const delimiter = kind === "tsv" ? "\t" : sniffDelimiter(text, ",");
+  const delimiter = kind === "tsv" ? "\t" : knownDelimiter ?? sniffDelimiter(text, ",");
   let columns: (Column | undefined)[] | undefined;
   // A header without a species or name column: the rest is tokenized (for its problems) but not read.
   let noSpecies = false;
@@ -28,10 +47,7 @@ export function readDelimitedRecords(
     if (noSpecies) return;
     if (columns === undefined) {
       if (cells.every((cell) => cell.text.trim() === "")) return;
-      columns = cells.map((cell) => {
-        const meaning = meaningOfHeader(cell.text);
-        return meaning ? { meaning, formulaHeader: isFormulaHeader(cell.text) } : undefined;
-      });
+      columns = cells.map((cell) => columnUnder(cell.text));
       noSpecies = !columns.some((column) => column?.meaning === "species" || column?.meaning === "name");
       return;
     }

@@ -69,8 +69,7 @@ export function addRecord(fields: readonly RecordField[], read: SpeciesReader, s
     else cells.push({ meaning: field.meaning, range: field.range, text: field.text });
   }
   if (naming.length === 0) return;
-  // Formula columns first, then other species columns, then names (the sort is stable).
-  if (naming.length > 1) naming.sort((a, b) => rank(a) - rank(b));
+  if (naming.length > 1) inRankOrder(naming);
   const found: SpeciesOccurrence[] = [];
   let failed: UnreadableSpecies[] | undefined;
   for (const field of naming) {
@@ -86,6 +85,22 @@ export function addRecord(fields: readonly RecordField[], read: SpeciesReader, s
   }
   if (found.length === 0) return;
   sink.records.push({ species: found[0], cells });
+}
+
+/**
+ * Formula columns first, then other species columns, then names; fields of equal rank keep their
+ * order. An insertion sort: a record has two or three such fields.
+ */
+function inRankOrder(naming: RecordField[]): void {
+  for (let index = 1; index < naming.length; index++) {
+    const field = naming[index];
+    let place = index;
+    while (place > 0 && rank(naming[place - 1]) > rank(field)) {
+      naming[place] = naming[place - 1];
+      place--;
+    }
+    naming[place] = field;
+  }
 }
 
 function rank(field: RecordField): number {
