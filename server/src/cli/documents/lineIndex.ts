@@ -26,8 +26,35 @@ const BOM = 0xfeff;
 /**
  * Indexes `text`. `firstLine` is the 0-based line of its first character in the document;
  * `atDocumentStart` says a leading byte-order mark is not a column (editors do not show it).
+ * Line starts are worked out when first needed: most batches of a large file have no finding.
  */
 export function lineIndexOf(text: string, firstLine = 0, atDocumentStart = true): LineIndex {
+  let lineStarts: number[] | undefined;
+  const starts = (): number[] => (lineStarts ??= lineStartsOf(text));
+  // Without carriage returns, line feeds alone end lines and indexOf counts them fast.
+  const lineBreaks = text.indexOf("\r") < 0 ? countLineFeeds(text) : starts().length - 1;
+  const bomWidth = atDocumentStart && text.charCodeAt(0) === BOM ? 1 : 0;
+  return {
+    lineBreaks,
+    get lineStarts() {
+      return starts();
+    },
+    position(offset) {
+      const known = starts();
+      const line = lineOf(known, offset);
+      const skip = line === 0 ? bomWidth : 0;
+      return { line: firstLine + line + 1, column: Math.max(offset - known[line] - skip, 0) + 1 };
+    },
+  };
+}
+
+function countLineFeeds(text: string): number {
+  let count = 0;
+  for (let index = text.indexOf("\n"); index >= 0; index = text.indexOf("\n", index + 1)) count++;
+  return count;
+}
+
+function lineStartsOf(text: string): number[] {
   const lineStarts = [0];
   for (let index = 0; index < text.length; index++) {
     const code = text.charCodeAt(index);
@@ -37,16 +64,7 @@ export function lineIndexOf(text: string, firstLine = 0, atDocumentStart = true)
       lineStarts.push(index + 1);
     }
   }
-  const bomWidth = atDocumentStart && text.charCodeAt(0) === BOM ? 1 : 0;
-  return {
-    lineBreaks: lineStarts.length - 1,
-    lineStarts,
-    position(offset) {
-      const line = lineOf(lineStarts, offset);
-      const skip = line === 0 ? bomWidth : 0;
-      return { line: firstLine + line + 1, column: Math.max(offset - lineStarts[line] - skip, 0) + 1 };
-    },
-  };
+  return lineStarts;
 }
 
 /** The last line whose start is at or before `offset` (binary search). */
