@@ -42,6 +42,7 @@ export function readDelimitedRecords(
   let columns: (Column | undefined)[] | undefined;
   // A header without a species or name column: the rest is tokenized (for its problems) but not read.
   let noSpecies = false;
+  const fields: RecordField[] = [];
   // Rows are used as the tokenizer hands them on and then dropped: a large batch never holds them all.
   return visitDelimitedRows(text, delimiter, (cells) => {
     if (noSpecies) return;
@@ -51,7 +52,8 @@ export function readDelimitedRecords(
       noSpecies = !columns.some((column) => column?.meaning === "species" || column?.meaning === "name");
       return;
     }
-    const fields: RecordField[] = [];
+    // addRecord keeps the fields, not the list: one list serves every row.
+    fields.length = 0;
     const count = Math.min(cells.length, columns.length);
     for (let index = 0; index < count; index++) {
       const column = columns[index];

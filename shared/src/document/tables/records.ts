@@ -80,8 +80,10 @@ export function addRecord(fields: readonly RecordField[], read: SpeciesReader, s
   for (const occurrence of found) sink.occurrences.push(occurrence);
   // A name the reader does not know is no mistake when another column names the species; a
   // formula it cannot read always is.
-  for (const unreadable of failed ?? []) {
-    if (unreadable.problem.code !== "unknown-name" || found.length === 0) sink.unreadable.push(unreadable);
+  if (failed) {
+    for (const unreadable of failed) {
+      if (unreadable.problem.code !== "unknown-name" || found.length === 0) sink.unreadable.push(unreadable);
+    }
   }
   if (found.length === 0) return;
   sink.records.push({ species: found[0], cells });
