@@ -3,12 +3,17 @@
  * every per-atom question (a centre's ligands, its ring, its pi neighbours), so analysing a
  * large molecule stays linear in its size.
  */
+import { atomTraits } from "./lewis/electronBookkeeping";
 import { findBridges } from "./smiles/bridges";
 import type { MolecularGraph } from "./types";
 
+/** A bonded neighbour, shaped so the VSEPR code can use it as a ligand without copying. */
 export interface Neighbour {
   readonly atom: number;
   readonly order: number;
+  readonly bondOrder: number;
+  readonly symbol: string;
+  readonly electronegativity: number;
 }
 
 export interface GraphIndex {
@@ -16,6 +21,12 @@ export interface GraphIndex {
   readonly bondOrderSums: readonly number[];
   /** False for trees and forests: no ring anywhere, so ring searches can be skipped. */
   readonly mayHaveRings: boolean;
+}
+
+function neighbour(graph: MolecularGraph, atom: number, order: number): Neighbour {
+  const symbol = graph.atoms[atom]?.symbol ?? "";
+  const electronegativity = symbol ? atomTraits(symbol).electronegativity : 0;
+  return { atom, order, bondOrder: order, symbol, electronegativity };
 }
 
 const ringAtomSets = new WeakMap<MolecularGraph, Uint8Array>();
@@ -46,8 +57,8 @@ export function graphIndex(graph: MolecularGraph): GraphIndex {
   const neighbours: Neighbour[][] = graph.atoms.map(() => []);
   const bondOrderSums = new Array<number>(graph.atoms.length).fill(0);
   for (const bond of graph.bonds) {
-    neighbours[bond.from]?.push({ atom: bond.to, order: bond.order });
-    neighbours[bond.to]?.push({ atom: bond.from, order: bond.order });
+    neighbours[bond.from]?.push(neighbour(graph, bond.to, bond.order));
+    neighbours[bond.to]?.push(neighbour(graph, bond.from, bond.order));
     bondOrderSums[bond.from] += bond.order;
     bondOrderSums[bond.to] += bond.order;
   }

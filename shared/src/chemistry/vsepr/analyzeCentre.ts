@@ -3,7 +3,6 @@
  */
 import { graphIndex, ringAtoms } from "../graphIndex";
 import { atomTraits } from "../lewis/electronBookkeeping";
-import { add, norm, type Vec3 } from "../geometry/vectors";
 import type { AngleExpectation, CentreAnalysis, MolecularGraph } from "../types";
 import { lonePairJoinsPiSystem } from "./piSystems";
 import { assignSites, type Ligand, type SiteAssignment } from "./assignSites";
@@ -28,11 +27,9 @@ const EXPANDED_NOTE =
 const CONJUGATED_NOTE =
   "one lone pair is shared with the neighbouring pi system (conjugation), so this atom is sp2 and planar rather than sp3.";
 
-export function neighboursOf(graph: MolecularGraph, atom: number): Ligand[] {
-  return graphIndex(graph).neighbours[atom].map(({ atom: other, order }) => {
-    const symbol = graph.atoms[other].symbol;
-    return { atom: other, symbol, electronegativity: atomTraits(symbol).electronegativity, bondOrder: order };
-  });
+export function neighboursOf(graph: MolecularGraph, atom: number): readonly Ligand[] {
+  // The graph index already holds each neighbour in ligand shape; shared, never copied.
+  return graphIndex(graph).neighbours[atom];
 }
 
 /** Undefined when the atom has fewer than two neighbours or an unsupported domain count. */
@@ -74,14 +71,21 @@ export function analyzeCentre(graph: MolecularGraph, index: number, radical: boo
   const sites = assignSites(electronGeometry, loneDomains, ligands);
   const first = ligands[0];
   const identicalNeighbours = ligands.every((l) => l.symbol === first.symbol && l.bondOrder === first.bondOrder);
-  const loneSum = sites.lonePairDirections.reduce<Vec3>((sum, d) => add(sum, d), [0, 0, 0]);
+  let loneX = 0;
+  let loneY = 0;
+  let loneZ = 0;
+  for (const [x, y, z] of sites.lonePairDirections) {
+    loneX += x;
+    loneY += y;
+    loneZ += z;
+  }
   const hybridization = HYBRIDIZATION_BY_STERIC_NUMBER[stericNumber];
 
   const angleContext: AngleContext = {
     electronGeometry,
     stericNumber,
     loneDomains,
-    lonePairsBalanced: loneDomains > 0 && norm(loneSum) < 1e-9 && atom.unpairedElectrons === 0,
+    lonePairsBalanced: loneDomains > 0 && Math.hypot(loneX, loneY, loneZ) < 1e-9 && atom.unpairedElectrons === 0,
     centrePeriod: traits.element.period,
     identicalNeighbours,
     hasMultipleBond: ligands.some((l) => l.bondOrder > 1),
