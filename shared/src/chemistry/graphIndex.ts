@@ -49,10 +49,14 @@ export function ringAtoms(graph: MolecularGraph): Uint8Array {
   return flags;
 }
 
-const indexes = new WeakMap<MolecularGraph, GraphIndex>();
+// Kept on the graph itself under a private symbol (not enumerable, so never serialised): a
+// WeakMap entry per graph costs the collector noticeably more when thousands of small species
+// are analysed.
+const INDEX = Symbol("graphIndex");
+type Indexed = MolecularGraph & { [INDEX]?: GraphIndex };
 
 export function graphIndex(graph: MolecularGraph): GraphIndex {
-  const cached = indexes.get(graph);
+  const cached = (graph as Indexed)[INDEX];
   if (cached) return cached;
   const neighbours: Neighbour[][] = graph.atoms.map(() => []);
   const bondOrderSums = new Array<number>(graph.atoms.length).fill(0);
@@ -63,6 +67,6 @@ export function graphIndex(graph: MolecularGraph): GraphIndex {
     bondOrderSums[bond.to] += bond.order;
   }
   const index: GraphIndex = { neighbours, bondOrderSums, mayHaveRings: graph.bonds.length >= graph.atoms.length };
-  indexes.set(graph, index);
+  if (Object.isExtensible(graph)) Object.defineProperty(graph, INDEX, { value: index, enumerable: false });
   return index;
 }
