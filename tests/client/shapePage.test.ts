@@ -8,14 +8,14 @@ import { tmpdir } from "node:os";
 import { join } from "node:path";
 import { randomBytes } from "node:crypto";
 import { fileURLToPath } from "node:url";
-import { chromium, type BrowserContext, type Page } from "playwright-core";
+import type { BrowserContext, Page } from "playwright-core";
+import { CHROMIUM, launchHeadlessChromium } from "../support/headlessChromium";
 import { afterAll, beforeAll, describe, expect, it } from "vitest";
 import { shapePageHtml } from "../../client/src/shapePageHtml";
 import { analyzeSpecies } from "../../shared/src/index";
 import { buildCoordinates } from "../../shared/src/chemistry/geometry/buildCoordinates";
 import { shapeViewModel, type ShapeViewModel } from "../../shared/src/report/shapeViewModel";
 
-const CHROMIUM = "/usr/bin/chromium";
 const ORIGIN = "https://lonepair-webview.test";
 const ROOT = fileURLToPath(new URL("../..", import.meta.url));
 const MEDIA = join(ROOT, "client", "media");
@@ -47,21 +47,7 @@ describe.skipIf(!haveBrowser)("3D shape page in headless Chromium", () => {
 
   beforeAll(async () => {
     userDataDir = mkdtempSync(join(tmpdir(), "lonepair-chromium-"));
-    context = await chromium.launchPersistentContext(userDataDir, {
-      executablePath: CHROMIUM,
-      headless: true,
-      viewport: { width: 960, height: 560 },
-      args: [
-        "--headless",
-        "--no-sandbox",
-        "--disable-gpu",
-        "--disable-quic",
-        "--no-first-run",
-        "--disable-background-networking",
-        "--disable-component-update",
-        "--disable-sync",
-      ],
-    });
+    context = await launchHeadlessChromium(userDataDir, { viewport: { width: 960, height: 560 } });
   });
 
   afterAll(async () => {

@@ -2,9 +2,9 @@
  * Driving the VS Code workbench in Debian's headless Chromium the way a person would: keyboard
  * shortcuts, the quick-open box, the command palette and the mouse.
  */
-import { chromium, type BrowserContext, type Frame, type Page } from "playwright-core";
+import type { BrowserContext, Frame, Page } from "playwright-core";
+import { launchHeadlessChromium } from "../support/headlessChromium";
 
-const CHROMIUM = "/usr/bin/chromium";
 
 /** The browser with its own fresh profile, showing the workbench on one folder. */
 export interface Workbench {
@@ -13,21 +13,7 @@ export interface Workbench {
 }
 
 export async function openWorkbench(serverUrl: string, folder: string, profile: string): Promise<Workbench> {
-  const context = await chromium.launchPersistentContext(profile, {
-    executablePath: CHROMIUM,
-    headless: true,
-    viewport: { width: 1400, height: 900 },
-    args: [
-      "--headless",
-      "--no-sandbox",
-      "--disable-gpu",
-      "--disable-quic",
-      "--no-first-run",
-      "--disable-background-networking",
-      "--disable-component-update",
-      "--disable-sync",
-    ],
-  });
+  const context = await launchHeadlessChromium(profile, { viewport: { width: 1400, height: 900 } });
   const page = context.pages()[0] ?? (await context.newPage());
   page.setDefaultTimeout(60_000);
   await page.goto(`${serverUrl}/?folder=${encodeURIComponent(folder)}`);

@@ -6,13 +6,13 @@ import { existsSync, mkdirSync, mkdtempSync, rmSync } from "node:fs";
 import { tmpdir } from "node:os";
 import { join } from "node:path";
 import { fileURLToPath } from "node:url";
-import { chromium, type BrowserContext } from "playwright-core";
+import type { BrowserContext } from "playwright-core";
+import { CHROMIUM, launchHeadlessChromium } from "../support/headlessChromium";
 import { afterAll, beforeAll, describe, expect, it } from "vitest";
 import { analyzeSmiles, analyzeSpecies, type SpeciesAnalysis } from "../../shared/src/index";
 import { hoverMarkdown } from "../../shared/src/report/hoverMarkdown";
 import { MAX_SKETCH_ATOMS, shapeSketchSvg, svgDataUri } from "../../shared/src/report/shapeSketch";
 
-const CHROMIUM = "/usr/bin/chromium";
 const ARTIFACTS = join(fileURLToPath(new URL("../..", import.meta.url)), ".test-artifacts");
 
 function analysis(text: string): SpeciesAnalysis {
@@ -153,22 +153,7 @@ describe.skipIf(!haveBrowser)("shape sketch in headless Chromium", () => {
 
   beforeAll(async () => {
     userDataDir = mkdtempSync(join(tmpdir(), "lonepair-sketch-"));
-    context = await chromium.launchPersistentContext(userDataDir, {
-      executablePath: CHROMIUM,
-      headless: true,
-      viewport: { width: 840, height: 392 },
-      deviceScaleFactor: 2,
-      args: [
-        "--headless",
-        "--no-sandbox",
-        "--disable-gpu",
-        "--disable-quic",
-        "--no-first-run",
-        "--disable-background-networking",
-        "--disable-component-update",
-        "--disable-sync",
-      ],
-    });
+    context = await launchHeadlessChromium(userDataDir, { viewport: { width: 840, height: 392 }, deviceScaleFactor: 2 });
   });
 
   afterAll(async () => {
