@@ -1,18 +1,8 @@
 import { describe, expect, it } from "vitest";
 import { readSpecies } from "../shared/src/chemistry/reader/readSpecies";
 import type { ReadResult } from "../shared/src/chemistry/types";
+import { seededRandom } from "./support/seededRandom";
 
-// Seeded so a failure names a case that can be replayed.
-function seededRandom(seed: number): () => number {
-  let state = seed >>> 0;
-  return () => {
-    state = (state + 0x6d2b79f5) >>> 0;
-    let t = state;
-    t = Math.imul(t ^ (t >>> 15), t | 1);
-    t ^= t + Math.imul(t ^ (t >>> 7), t | 61);
-    return ((t ^ (t >>> 14)) >>> 0) / 4294967296;
-  };
-}
 
 const VALID = [
   "SF4", "XeOF4", "H2SO4", "Ca(OH)2", "CuSO4·5H2O", "CH3COOH", "(CH3)2CO", "CH2=CH2", "HC≡CH",

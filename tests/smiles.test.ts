@@ -11,6 +11,7 @@ import {
   type SmilesResult,
 } from "../shared/src/chemistry/smiles";
 import type { ProblemCode } from "../shared/src/chemistry/types";
+import { seededRandom } from "./support/seededRandom";
 
 interface RDKitMol {
   get_json(): string;
@@ -338,17 +339,6 @@ describe("parseSmiles refuses bad input with a problem, never an exception", () 
   });
 });
 
-/** Small seeded generator so a failing fuzz case can be replayed. */
-function seededRandom(seed: number): () => number {
-  let state = seed >>> 0;
-  return () => {
-    state = (state + 0x6d2b79f5) >>> 0;
-    let t = state;
-    t = Math.imul(t ^ (t >>> 15), t | 1);
-    t ^= t + Math.imul(t ^ (t >>> 7), t | 61);
-    return ((t ^ (t >>> 14)) >>> 0) / 4294967296;
-  };
-}
 
 const FUZZ_ALPHABET = "CNOSPFIBclnosbp[]()=#$:/\\.%0123456789+-@HTHALSPxeZz* \u00e9\u{1F600}";
 

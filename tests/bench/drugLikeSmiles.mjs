@@ -3,17 +3,8 @@
 // ethers, amines, halogens and nitriles. Each fragment closes its own rings, so ring-closure
 // digits can be reused, and joins the next by a single bond from its last atom outside branches.
 
-/** Small seeded generator (mulberry32): the same seed gives the same molecules on every machine. */
-function seededRandom(seed) {
-  let state = seed >>> 0;
-  return () => {
-    state = (state + 0x6d2b79f5) >>> 0;
-    let mixed = state;
-    mixed = Math.imul(mixed ^ (mixed >>> 15), mixed | 1);
-    mixed ^= mixed + Math.imul(mixed ^ (mixed >>> 7), mixed | 61);
-    return ((mixed ^ (mixed >>> 14)) >>> 0) / 4294967296;
-  };
-}
+// The same seeded generator as the random strings, so every run builds the same molecules.
+import { seededRandom } from "./randomStrings.mjs";
 
 // head/tail: does the fragment start/end on a heteroatom (N, O, S, halogen)? Two heteroatoms are
 // joined only through a sulfonyl group, so no peroxides or hydrazines creep in.

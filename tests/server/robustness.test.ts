@@ -16,6 +16,7 @@ import {
   type MarkupContent,
 } from "vscode-languageserver-protocol/node";
 import { fixtureUri, positionOf, startSession, type LspSession } from "./lspSession";
+import { seededRandom } from "../support/seededRandom";
 
 let session: LspSession;
 
@@ -27,17 +28,6 @@ afterAll(async () => {
   await session?.stop();
 });
 
-/** A small deterministic generator, so a failing run can be replayed. */
-function seededRandom(seed: number): () => number {
-  let state = seed >>> 0;
-  return () => {
-    state = (state + 0x6d2b79f5) >>> 0;
-    let value = state;
-    value = Math.imul(value ^ (value >>> 15), value | 1);
-    value ^= value + Math.imul(value ^ (value >>> 7), value | 61);
-    return ((value ^ (value >>> 14)) >>> 0) / 4294967296;
-  };
-}
 
 /** Hovers on the first "SF4" of an open document and returns the card text. */
 async function hoverOnSf4(uri: string): Promise<string> {

@@ -2,17 +2,7 @@
 import type { Vec3 } from "../../shared/src/chemistry/geometry/vectors";
 import type { Atom } from "./moleculeBuilders";
 
-/** A small seeded generator of uniform numbers in [0, 1) (mulberry32). */
-export function seededRandom(seed: number): () => number {
-  let state = seed >>> 0;
-  return () => {
-    state = (state + 0x6d2b79f5) >>> 0;
-    let t = state;
-    t = Math.imul(t ^ (t >>> 15), t | 1);
-    t ^= t + Math.imul(t ^ (t >>> 7), t | 61);
-    return ((t ^ (t >>> 14)) >>> 0) / 4294967296;
-  };
-}
+export { seededRandom } from "./seededRandom";
 
 /** A uniformly random rotation matrix (from a random unit quaternion). */
 export function randomRotation(random: () => number): readonly [Vec3, Vec3, Vec3] {
