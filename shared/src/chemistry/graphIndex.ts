@@ -29,14 +29,12 @@ function neighbour(graph: MolecularGraph, atom: number, order: number): Neighbou
   return { atom, order, bondOrder: order, symbol, electronegativity };
 }
 
-const ringAtomSets = new WeakMap<MolecularGraph, Uint8Array>();
-
 /** 1 for every atom that lies on some ring (it has a bond that is not a bridge). */
 export function ringAtoms(graph: MolecularGraph): Uint8Array {
-  const cached = ringAtomSets.get(graph);
-  if (cached) return cached;
+  const index = graphIndex(graph) as IndexEntry;
+  if (index.ringFlags) return index.ringFlags;
   const flags = new Uint8Array(graph.atoms.length);
-  if (graphIndex(graph).mayHaveRings) {
+  if (index.mayHaveRings) {
     const bridges = findBridges(graph.atoms.length, graph.bonds);
     graph.bonds.forEach((bond, k) => {
       if (bridges[k] === 0) {
@@ -45,28 +43,45 @@ export function ringAtoms(graph: MolecularGraph): Uint8Array {
       }
     });
   }
-  ringAtomSets.set(graph, flags);
+  index.ringFlags = flags;
   return flags;
 }
 
-// Kept on the graph itself under a private symbol (not enumerable, so never serialised): a
-// WeakMap entry per graph costs the collector noticeably more when thousands of small species
-// are analysed.
-const INDEX = Symbol("graphIndex");
-type Indexed = MolecularGraph & { [INDEX]?: GraphIndex };
+interface IndexEntry extends GraphIndex {
+  ringFlags: Uint8Array | undefined;
+}
+
+// The index is wanted while one species is being analysed (and again while its 3D model is
+// built), so the last few are kept here rather than on the graph: held by the graph, every
+// memoised analysis would carry two neighbour records per bond for the rest of its life, which
+// the collector has to copy and trace again and again.
+const RECENT = 4;
+const recentGraphs: (MolecularGraph | undefined)[] = new Array(RECENT).fill(undefined);
+const recentIndexes: (IndexEntry | undefined)[] = new Array(RECENT).fill(undefined);
+let nextSlot = 0;
 
 export function graphIndex(graph: MolecularGraph): GraphIndex {
-  const cached = (graph as Indexed)[INDEX];
-  if (cached) return cached;
-  const neighbours: Neighbour[][] = graph.atoms.map(() => []);
-  const bondOrderSums = new Array<number>(graph.atoms.length).fill(0);
+  for (let slot = 0; slot < RECENT; slot++) {
+    if (recentGraphs[slot] === graph) return recentIndexes[slot]!;
+  }
+  const atomCount = graph.atoms.length;
+  const neighbours: Neighbour[][] = new Array(atomCount);
+  for (let atom = 0; atom < atomCount; atom++) neighbours[atom] = [];
+  const bondOrderSums = new Array<number>(atomCount).fill(0);
   for (const bond of graph.bonds) {
     neighbours[bond.from]?.push(neighbour(graph, bond.to, bond.order));
     neighbours[bond.to]?.push(neighbour(graph, bond.from, bond.order));
     bondOrderSums[bond.from] += bond.order;
     bondOrderSums[bond.to] += bond.order;
   }
-  const index: GraphIndex = { neighbours, bondOrderSums, mayHaveRings: graph.bonds.length >= graph.atoms.length };
-  if (Object.isExtensible(graph)) Object.defineProperty(graph, INDEX, { value: index, enumerable: false });
+  const index: IndexEntry = {
+    neighbours,
+    bondOrderSums,
+    mayHaveRings: graph.bonds.length >= atomCount,
+    ringFlags: undefined,
+  };
+  recentGraphs[nextSlot] = graph;
+  recentIndexes[nextSlot] = index;
+  nextSlot = (nextSlot + 1) % RECENT;
   return index;
 }

@@ -5,7 +5,7 @@
 import { graphIndex } from "../graphIndex";
 import { atomTraits } from "../lewis/electronBookkeeping";
 import type { LewisStructure } from "../lewis/chooseLewisStructure";
-import type { PolarityVerdict, SpeciesAnalysis, SpeciesReading } from "../types";
+import type { CentreAnalysis, MolecularGraph, PolarityVerdict, SpeciesAnalysis, SpeciesReading } from "../types";
 import { analyzeCentre, type CentreDetail } from "../vsepr/analyzeCentre";
 import { measuredAnglesFor } from "../vsepr/measuredAngles";
 import { judgePolarity } from "../vsepr/polarity";
@@ -17,60 +17,76 @@ export function buildAnalysis(
   mainCentre: number | undefined,
 ): SpeciesAnalysis {
   const { graph } = structure;
+  const atoms = graph.atoms;
+  const atomCount = atoms.length;
   const radical = structure.valenceElectrons % 2 === 1;
   const details: CentreDetail[] = [];
-  graph.atoms.forEach((_, index) => {
+  const centres: CentreAnalysis[] = [];
+  let allStericFourOrLess = true;
+  for (let index = 0; index < atomCount; index++) {
     const detail = analyzeCentre(graph, index, radical);
-    if (detail) details.push(detail);
-  });
+    if (!detail) continue;
+    details.push(detail);
+    centres.push(detail.centre);
+    if (detail.centre.stericNumber > 4) allStericFourOrLess = false;
+  }
 
   const orderSums = graphIndex(graph).bondOrderSums;
   let electronDeficient = false;
   let expandedOctet = false;
   const warnings: string[] = [];
-  graph.atoms.forEach((atom, index) => {
+  for (let index = 0; index < atomCount; index++) {
+    const atom = atoms[index];
+    const shell = 2 * orderSums[index] + 2 * atom.lonePairs + atom.unpairedElectrons;
+    // Most atoms of a large molecule have a full octet: look up traits only for the others.
+    if (shell === 8) continue;
+    if (shell > 8) {
+      expandedOctet = true;
+      continue;
+    }
     const traits = atomTraits(atom.symbol);
-    const bondOrders = orderSums[index];
-    const shell = 2 * bondOrders + 2 * atom.lonePairs + atom.unpairedElectrons;
-    if (graph.atoms.length > 1 && !traits.isHydrogen && !traits.mustCompleteShell && shell < 8) {
+    if (atomCount > 1 && !traits.isHydrogen && !traits.mustCompleteShell) {
       electronDeficient = true;
       warnings.push(
         `${atom.symbol} is electron-deficient: it has only ${shell} electrons around it, and it readily accepts a lone pair from a Lewis base.`,
       );
     }
-    if (shell > 8) expandedOctet = true;
-  });
+  }
 
   if (radical) {
-    const holder = graph.atoms.findIndex((atom) => atom.unpairedElectrons > 0);
+    const holder = atoms.findIndex((atom) => atom.unpairedElectrons > 0);
     warnings.push(
-      `Odd number of valence electrons (${structure.valenceElectrons}): a radical, with the unpaired electron drawn on ${graph.atoms[holder]?.symbol ?? "one atom"}. ` +
+      `Odd number of valence electrons (${structure.valenceElectrons}): a radical, with the unpaired electron drawn on ${atoms[holder]?.symbol ?? "one atom"}. ` +
         "The single electron is a weak domain, so small radicals can be flatter or wider than predicted.",
     );
   }
-  if (expandedOctet && details.every((d) => d.centre.stericNumber <= 4)) {
+  if (expandedOctet && allStericFourOrLess) {
     warnings.push(
       "Drawn with multiple bonds to the central atom to minimise formal charges (an expanded octet); an octet structure with separated charges describes the bonding as well. The shape is the same either way.",
     );
   }
-  if (graph.atoms.length === 2 && graph.atoms.every((a) => a.symbol === "O") && reading.charge === 0) {
+  if (atomCount === 2 && atoms.every((a) => a.symbol === "O") && reading.charge === 0) {
     warnings.push("The Lewis structure shows O=O with all electrons paired, but ground-state O2 has two unpaired electrons (a triplet).");
   }
-  for (const { centre } of details) {
+  for (const centre of centres) {
     if (centre.stericNumber === 7 && centre.lonePairs === 1) {
       warnings.push(
         `${centre.atom}: with six bonds and one lone pair the real molecule is fluxional; gas-phase XeF6 is a distorted octahedron rather than a clean pentagonal pyramid.`,
       );
     }
   }
-  if (details.length === 0 && graph.atoms.length === 2) {
+  if (details.length === 0 && atomCount === 2) {
     warnings.push("A diatomic species is linear by definition; there is no central atom.");
   }
-  if (graph.atoms.length === 1) warnings.push("A single atom or monatomic ion has no molecular shape.");
+  if (atomCount === 1) warnings.push("A single atom or monatomic ion has no molecular shape.");
 
   let resonanceForms = structure.resonanceForms;
   if (!Number.isFinite(resonanceForms) || resonanceForms < 1) resonanceForms = 1;
 
+  // One centre: ideal directions settle polarity exactly, at once. Several: the whole 3D
+  // model is needed, which costs milliseconds, so it is built the first time anyone asks.
+  const judge =
+    details.length > 1 ? judgeFromShape(graph, reading.charge) : judgeFromCentre(graph, details, mainCentre, reading.charge);
   const analysis: SpeciesAnalysis = {
     reading,
     valenceElectrons: structure.valenceElectrons,
@@ -79,14 +95,9 @@ export function buildAnalysis(
     expandedOctet,
     graph,
     resonanceForms,
-    centres: details.map((d) => d.centre),
-    // One centre: ideal directions settle polarity exactly, at once. Several: the whole 3D
-    // model is needed, which costs milliseconds, so it is built the first time anyone asks.
+    centres,
     get polarity(): PolarityVerdict {
-      const verdict =
-        details.length > 1
-          ? polarityFromShape(graph, shapeOf(analysis), reading.charge)
-          : judgePolarity(graph, details, mainCentre, reading.charge);
+      const verdict = judge(analysis);
       Object.defineProperty(analysis, "polarity", { value: verdict, enumerable: true });
       return verdict;
     },
@@ -96,3 +107,19 @@ export function buildAnalysis(
   return analysis;
 }
 
+// The polarity judges are made apart from buildAnalysis so that each closure keeps only what it
+// needs: a memoised analysis of a large molecule must not hold on to every centre's ligands and
+// sites through its polarity getter.
+
+function judgeFromShape(graph: MolecularGraph, charge: number): (analysis: SpeciesAnalysis) => PolarityVerdict {
+  return (analysis) => polarityFromShape(graph, shapeOf(analysis), charge);
+}
+
+function judgeFromCentre(
+  graph: MolecularGraph,
+  details: readonly CentreDetail[],
+  mainCentre: number | undefined,
+  charge: number,
+): (analysis: SpeciesAnalysis) => PolarityVerdict {
+  return () => judgePolarity(graph, details, mainCentre, charge);
+}
