@@ -10,6 +10,7 @@ import { checkDocument } from "../../shared/src/document/checkDocument";
 import { batchModel } from "../../server/src/cli/documents/batchModel";
 import { readDocument } from "../../server/src/cli/documents/documentBatches";
 import { lineIndexOf } from "../../server/src/cli/documents/lineIndex";
+import { delimitedRowMemo } from "../../shared/src/document/tables/delimitedFindings";
 
 const folder = mkdtempSync(join(tmpdir(), "lonepair-batches-"));
 
@@ -28,9 +29,11 @@ async function streamed(text: string, kind: "csv" | "tsv", batchCharacters: numb
   const species = [];
   const positions = [];
   let rebuilt = "";
+  // One memo of rows for the whole file, as `check` keeps it.
+  const context = { rows: delimitedRowMemo() };
   for await (const batch of readDocument(path, kind, batchCharacters).batches) {
     rebuilt += batch.text;
-    const model = batchModel(batch, kind);
+    const model = batchModel(batch, kind, context);
     const move = (range: { start: number; end: number }) => ({ start: range.start + batch.offset, end: range.end + batch.offset });
     for (const finding of model.findings()) findings.push({ ...finding, range: move(finding.range), ...(finding.fix ? { fix: { ...finding.fix, range: move(finding.fix.range) } } : {}) });
     for (const occurrence of model.occurrences) {

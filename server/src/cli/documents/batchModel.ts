@@ -6,7 +6,8 @@
 import { analyzeDocument } from "../../../../shared/src/document/analyzeDocument";
 import { checkDocument } from "../../../../shared/src/document/checkDocument";
 import type { SpeciesReader } from "../../../../shared/src/document/speciesReader";
-import type { DocumentKind, Finding, SpeciesOccurrence } from "../../../../shared/src/document/types";
+import { checkDelimitedText, type DelimitedRowMemo } from "../../../../shared/src/document/tables/delimitedFindings";
+import type { DocumentKind, DocumentModel, Finding, SpeciesOccurrence } from "../../../../shared/src/document/types";
 import type { DocumentBatch } from "./documentBatches";
 
 /** What one batch holds, in offsets local to `batch.text`. */
@@ -16,11 +17,19 @@ export interface BatchModel {
   findings(): Finding[];
 }
 
-/** Analyses `batch` as part of a document of `kind`; `read` is shared by the file's batches. */
-export function batchModel(batch: DocumentBatch, kind: DocumentKind, read?: SpeciesReader): BatchModel {
+/** What a file's batches share. */
+export interface BatchContext {
+  readonly read?: SpeciesReader;
+  /** The findings of table rows seen before, for CSV and TSV. */
+  readonly rows?: DelimitedRowMemo;
+}
+
+/** Analyses `batch` as part of a document of `kind`. */
+export function batchModel(batch: DocumentBatch, kind: DocumentKind, context: BatchContext = {}): BatchModel {
   const shift = batch.prefix.length;
   const text = shift === 0 ? batch.text : batch.prefix + batch.text;
-  const model = analyzeDocument(text, kind, read, { delimiter: batch.delimiter });
+  let model: DocumentModel | undefined;
+  const modelOf = (): DocumentModel => (model ??= analyzeDocument(text, kind, context.read, { delimiter: batch.delimiter }));
   const local = <T extends { range: { start: number; end: number } }>(item: T): T =>
     shift === 0 ? item : { ...item, range: { start: item.range.start - shift, end: item.range.end - shift } };
   const own = (item: { range: { start: number } }): boolean => item.range.start >= shift;
@@ -28,15 +37,27 @@ export function batchModel(batch: DocumentBatch, kind: DocumentKind, read?: Spec
   return {
     // Worked out only when asked: checking a file needs the findings alone.
     get occurrences() {
-      return (occurrences ??= model.occurrences.filter(own).map((occurrence) => local(occurrence)));
+      return (occurrences ??= modelOf().occurrences.filter(own).map((occurrence) => local(occurrence)));
     },
     findings() {
-      const findings = [...model.problems, ...checkDocument(model)].filter(own).map((finding) => {
-        const moved = local(finding);
-        return moved.fix ? { ...moved, fix: local(moved.fix) } : moved;
-      });
+      if (kind === "csv" || kind === "tsv") {
+        // Rows are checked once per distinct content; the result is the same as the whole reading's.
+        const found = checkDelimitedText(text, kind, { delimiter: batch.delimiter, from: shift, memo: context.rows, read: context.read });
+        return shift === 0 ? found : found.map(movedBack(shift));
+      }
+      const current = modelOf();
+      const findings = [...current.problems, ...checkDocument(current)].filter(own).map(movedBack(shift));
       // Problems of the text and the checks' findings come in two lists; report them in document order.
       return findings.sort((a, b) => a.range.start - b.range.start || a.range.end - b.range.end);
     },
+  };
+}
+
+function movedBack(shift: number): (finding: Finding) => Finding {
+  return (finding) => {
+    if (shift === 0) return finding;
+    const range = { start: finding.range.start - shift, end: finding.range.end - shift };
+    if (!finding.fix) return { ...finding, range };
+    return { ...finding, range, fix: { ...finding.fix, range: { start: finding.fix.range.start - shift, end: finding.fix.range.end - shift } } };
   };
 }

@@ -15,7 +15,10 @@ import { recordBoundaryScanner, type RecordBoundaryScanner } from "./recordBound
 export interface DocumentBatch {
   /** The batch's own text: a slice of the document. */
   readonly text: string;
-  /** UTF-16 offset of `text` in the document. */
+  /**
+   * UTF-16 offset of `text` in the document; after a resume (see `ResumeAt`) the offset from the
+   * resume point, counted from 1 so that it is never taken for the start of the document.
+   */
   readonly offset: number;
   /** Byte offset of `text` in the file (exact while the file is valid UTF-8). */
   readonly byteOffset: number;
@@ -56,11 +59,23 @@ const CHUNK_BYTES = 1 << 19;
 const SNIFF_CHARACTERS = 65_536;
 const SNIFF_LINES = 20;
 
-/** Reads `path` as a document of `kind`. */
-export function readDocument(path: string, kind: DocumentKind, batchCharacters = DEFAULT_BATCH_CHARACTERS): DocumentReading {
+/**
+ * Where to start reading a CSV/TSV other than at its beginning: a record start, the line it is
+ * on, the start of the document up to the end of its header row, and the delimiter.
+ */
+export interface ResumeAt {
+  readonly byteOffset: number;
+  /** 0-based line of the record at `byteOffset`. */
+  readonly line: number;
+  readonly prefix: string;
+  readonly delimiter: string;
+}
+
+/** Reads `path` as a document of `kind` (a CSV or TSV from `resume` on, when given). */
+export function readDocument(path: string, kind: DocumentKind, batchCharacters = DEFAULT_BATCH_CHARACTERS, resume?: ResumeAt): DocumentReading {
   const decoding = utf8Decoding();
   const batches =
-    kind === "csv" || kind === "tsv" ? delimitedBatches(path, kind, decoding, batchCharacters) : wholeDocument(path, decoding);
+    kind === "csv" || kind === "tsv" ? delimitedBatches(path, kind, decoding, batchCharacters, resume) : wholeDocument(path, decoding);
   return { batches, exactUtf8: () => decoding.exact };
 }
 
@@ -102,6 +117,7 @@ async function* delimitedBatches(
   kind: "csv" | "tsv",
   decoding: Utf8Decoding,
   batchCharacters: number,
+  resume?: ResumeAt,
 ): AsyncGenerator<DocumentBatch> {
   const handle = await open(path, "r");
   try {
@@ -116,6 +132,18 @@ async function* delimitedBatches(
     let offset = 0;
     let byteOffset = 0;
     let line = 0;
+    let position: number | null = null;
+    if (resume) {
+      // The start of the document is known already: it only goes in front of every batch.
+      delimiter = resume.delimiter;
+      scanner = recordBoundaryScanner(delimiter, 0);
+      prefix = resume.prefix;
+      prefixLength = 0;
+      offset = 1;
+      byteOffset = resume.byteOffset;
+      line = resume.line;
+      position = resume.byteOffset;
+    }
 
     const cut = (length: number, last: boolean): DocumentBatch => {
       const text = length === pending.length ? pending : pending.slice(0, length);
@@ -131,7 +159,8 @@ async function* delimitedBatches(
     };
 
     while (!ended) {
-      const { bytesRead } = await handle.read(buffer, 0, CHUNK_BYTES, null);
+      const { bytesRead } = await handle.read(buffer, 0, CHUNK_BYTES, position);
+      if (position !== null) position += bytesRead;
       if (bytesRead === 0) {
         pending += decoding.decode();
         ended = true;

@@ -24,7 +24,7 @@ export interface PlacedSpecies {
 export async function* speciesInFile(file: DocumentFile): AsyncGenerator<readonly PlacedSpecies[]> {
   const read = memoisedReader();
   for await (const batch of readDocument(file.path, file.kind).batches) {
-    const { occurrences } = batchModel(batch, file.kind, read);
+    const { occurrences } = batchModel(batch, file.kind, { read });
     yield occurrences.map((occurrence) => {
       const { line, column } = batch.lines.position(occurrence.range.start);
       return {

@@ -94,6 +94,37 @@ export function visitDelimitedRows(text: string, delimiter: string, visit: Delim
   return problems;
 }
 
+/**
+ * Where the row starting at `start` ends, read by the same rules as `visitDelimitedRows`: `end`
+ * just past its last field (before the line break), `next` just past the line break (or the
+ * text's end). A quoted field may hold delimiters and line breaks, or run to the end of the text.
+ */
+export function delimitedRowExtent(text: string, start: number, delimiter: string): { end: number; next: number } {
+  const separator = delimiter.charCodeAt(0);
+  const length = text.length;
+  const ignored: Finding[] = [];
+  let index = start;
+  while (index < length) {
+    if (text.charCodeAt(index) === QUOTE) {
+      index = quotedField(text, index, separator, ignored).next;
+    } else {
+      while (index < length) {
+        const code = text.charCodeAt(index);
+        if (code === separator || code === LF || code === CR) break;
+        index++;
+      }
+    }
+    if (index >= length) break;
+    const code = text.charCodeAt(index);
+    if (code === separator) {
+      index++;
+      continue;
+    }
+    return { end: index, next: index + (code === CR && text.charCodeAt(index + 1) === LF ? 2 : 1) };
+  }
+  return { end: length, next: length };
+}
+
 /** A field that opens with a quote; returns it and the index just past its closing quote. */
 function quotedField(
   text: string,

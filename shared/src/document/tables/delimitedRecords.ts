@@ -17,7 +17,7 @@ const knownHeaders = new Map<string, Column | null>();
 const KNOWN_HEADERS_LIMIT = 1024;
 
 /** The column under `header`, or undefined for a column no check reads. */
-function columnUnder(header: string): Column | undefined {
+export function columnUnder(header: string): Column | undefined {
   const known = knownHeaders.get(header);
   if (known !== undefined) return known ?? undefined;
   const meaning = meaningOfHeader(header);
