@@ -33,9 +33,16 @@ export function checkDocument(model: DocumentModel, analyze: (text: string) => A
     return result;
   };
 
+  // A name beside a formula for the same species would repeat the formula's note: say it once, on the formula.
+  const echoes = new Set<SpeciesOccurrence>();
+  for (const record of model.records) {
+    for (const other of record.otherNames ?? []) if (sameSpecies(other, record.species)) echoes.add(other);
+  }
+
   const findings: Finding[] = [];
   for (const unreadable of model.unreadable ?? []) findings.push(unreadableFinding(unreadable));
   for (const occurrence of model.occurrences) {
+    if (echoes.has(occurrence)) continue;
     const result = analysisOf(occurrence);
     if (!result) continue;
     if (!result.ok) findings.push(problemFinding(occurrence, result.problem));
@@ -46,6 +53,10 @@ export function checkDocument(model: DocumentModel, analyze: (text: string) => A
     if (result?.ok) checkRecord(record, result.value, findings);
   }
   return findings.sort((a, b) => a.range.start - b.range.start);
+}
+
+function sameSpecies(a: SpeciesOccurrence, b: SpeciesOccurrence): boolean {
+  return a.reading.formula === b.reading.formula && a.reading.charge === b.reading.charge;
 }
 
 function severityOf(code: ProblemCode): FindingSeverity {

@@ -39,6 +39,8 @@ export interface TableRecord {
   readonly species: SpeciesOccurrence;
   /** The other recognised cells of the same record. */
   readonly cells: readonly TableCell[];
+  /** Further cells of the record that name a species too (a name beside the formula). */
+  readonly otherNames?: readonly SpeciesOccurrence[];
 }
 
 export type FindingSeverity = "error" | "warning" | "information" | "hint";

@@ -86,7 +86,7 @@ export function addRecord(fields: readonly RecordField[], read: SpeciesReader, s
     }
   }
   if (found.length === 0) return;
-  sink.records.push({ species: found[0], cells });
+  sink.records.push(found.length === 1 ? { species: found[0], cells } : { species: found[0], cells, otherNames: found.slice(1) });
 }
 
 /**
