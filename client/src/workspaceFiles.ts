@@ -1,18 +1,31 @@
 /**
  * The files the workspace check reads: the selector's globs minus what the user excluded.
  * `workspace.findFiles` applies `files.exclude` only when given no exclude of its own, so both
- * `files.exclude` and `search.exclude` are turned into one exclude glob here. `.gitignore` is not
- * honoured: the stable API (1.91) has no way to ask for it.
+ * `files.exclude` and `search.exclude` are turned into one exclude glob here. The stable API has
+ * no way to ask for `.gitignore`, so in a trusted workspace git is asked which files it keeps, and
+ * files in a git work tree that git ignores are left out too.
  */
 import * as vscode from "vscode";
 import { WORKSPACE_GLOB } from "./documentSelector";
+import { gitKeptFiles, type GitKeptFiles } from "./gitKeptFiles";
 
 /** More than this and the check stops listing; it says so. */
 export const MAX_WORKSPACE_FILES = 100_000;
 
 /** Every file to check, in no particular order. */
-export function workspaceFilesToCheck(token: vscode.CancellationToken): Thenable<vscode.Uri[]> {
-  return vscode.workspace.findFiles(WORKSPACE_GLOB, excludeGlob(), MAX_WORKSPACE_FILES, token);
+export async function workspaceFilesToCheck(token: vscode.CancellationToken): Promise<vscode.Uri[]> {
+  const found = await vscode.workspace.findFiles(WORKSPACE_GLOB, excludeGlob(), MAX_WORKSPACE_FILES, token);
+  // Running git in a folder runs what its configuration names: only where the user trusts the folder.
+  if (!vscode.workspace.isTrusted) return found;
+  const kept = new Map<string, GitKeptFiles | undefined>();
+  for (const folder of vscode.workspace.workspaceFolders ?? []) {
+    if (folder.uri.scheme === "file") kept.set(folder.uri.toString(), await gitKeptFiles(folder.uri.fsPath));
+  }
+  return found.filter((uri) => {
+    const folder = vscode.workspace.getWorkspaceFolder(uri);
+    const keptHere = folder ? kept.get(folder.uri.toString()) : undefined;
+    return keptHere === undefined || keptHere.keeps(uri.fsPath);
+  });
 }
 
 /** `{a,b,...}` of every pattern switched on in files.exclude and search.exclude; null for none. */
