@@ -70,6 +70,11 @@ const CASES: readonly { name: string; condensed: string; smiles: string; centres
   { name: "acetyl chloride", condensed: "CH3COCl", smiles: "CC(Cl)=O", centres: [C_SP3, C_SP2] },
   { name: "formate", condensed: "HCOO-", smiles: "[O-]C=O", centres: [C_SP2] },
   { name: "propanoic acid", condensed: "CH3CH2COOH", smiles: "CCC(=O)O", centres: [C_SP3, C_SP3, C_SP2, O_SP3] },
+  // common practice: NO2 written after a carbon group is a nitro group, N bonded to C and both O,
+  // planar (AX3) like an amide N
+  { name: "nitroethane", condensed: "CH3CH2NO2", smiles: "CC[N+](=O)[O-]", centres: [C_SP3, C_SP3, N_AMIDE] },
+  { name: "2-methyl-2-nitropropane", condensed: "(CH3)3CNO2", smiles: "CC(C)(C)[N+](=O)[O-]", centres: [...times(4, C_SP3), N_AMIDE] },
+  { name: "tetranitromethane", condensed: "C(NO2)4", smiles: "C([N+](=O)[O-])([N+](=O)[O-])([N+](=O)[O-])[N+](=O)[O-]", centres: [C_SP3, ...times(4, N_AMIDE)] },
 ];
 
 function analysed(result: AnalysisResult, text: string): SpeciesAnalysis {
@@ -108,13 +113,25 @@ describe("condensed structural formulas", () => {
     expect(fromCondensed.valenceElectrons).toBe(fromSmiles.valenceElectrons);
   });
 
-  // Known disagreement, reported: the core builds carbamic acid H2N-C(=O)-OH from CH3NO2
-  // instead of nitromethane. `it.fails` turns red once the builder is fixed; then make it `it`.
-  // common practice: CH3NO2 written this way is nitromethane, CH3-NO2 (planar nitro N, AX3)
-  it.fails("nitromethane CH3NO2: sp3 methyl carbon and a planar nitro N, as C[N+](=O)[O-]", () => {
+  // common practice: CH3NO2 written this way is nitromethane, CH3-NO2 (planar nitro N, AX3), not
+  // carbamic acid H2N-C(=O)-OH
+  it("nitromethane CH3NO2: sp3 methyl carbon and a planar nitro N, as C[N+](=O)[O-]", () => {
     const analysis = analysed(analyzeSpecies("CH3NO2"), "CH3NO2");
     expect(centreMultiset(analysis)).toEqual([C_SP3, N_AMIDE].sort());
     expect(centreMultiset(analysis)).toEqual(centreMultiset(analysed(analyzeSmiles("C[N+](=O)[O-]"), "C[N+](=O)[O-]")));
+    // common practice: formal charges +1 on the nitro N and -1 on one O
+    const charges = analysis.graph.atoms.filter((atom) => atom.formalCharge !== 0).map((atom) => `${atom.symbol}${atom.formalCharge}`);
+    expect(charges.sort()).toEqual(["N1", "O-1"]);
+  });
+
+  // common practice: in the oxoacids HNO2 and HNO3 the hydrogen sits on an oxygen (H-O-N=O,
+  // H-O-NO2); a leading N with O2 is not a nitro group on hydrogen
+  it.each(["HNO2", "HNO3"])("%s keeps its hydrogen on oxygen", (text) => {
+    const { graph } = analysed(analyzeSpecies(text), text);
+    const hydrogenNeighbours = graph.bonds
+      .filter((bond) => graph.atoms[bond.from].symbol === "H" || graph.atoms[bond.to].symbol === "H")
+      .map((bond) => graph.atoms[graph.atoms[bond.from].symbol === "H" ? bond.to : bond.from].symbol);
+    expect(hydrogenNeighbours, `${text}: H should be bonded to O`).toEqual(["O"]);
   });
 });
 

@@ -42,15 +42,33 @@ function maxNeighbours(symbol: string): number {
   }
 }
 
-/** True when the written groups show structure: an element in two places, or a bond mark. */
-export function looksCondensed(sequence: readonly { symbol: string }[]): boolean {
+/**
+ * True when the written groups show structure: an element in two places, a bond mark, or a nitro
+ * group written after a carbon group (CH3NO2, CH3CH2NO2).
+ */
+export function looksCondensed(sequence: readonly { symbol: string; count?: number }[]): boolean {
   const seen = new Set<string>();
-  for (const part of sequence) {
+  for (let k = 0; k < sequence.length; k++) {
+    const part = sequence[k];
     if (part.symbol === "=" || part.symbol === "≡") return true;
     if (seen.has(part.symbol)) return true;
+    if (seen.has("C") && isNitroAt(sequence, k)) return true;
     seen.add(part.symbol);
   }
   return false;
+}
+
+/** N then O2, not followed by hydrogen: the nitro group, N bonded to both oxygens. */
+function isNitroAt(sequence: readonly { symbol: string; count?: number }[], index: number): boolean {
+  const nitrogen = sequence[index];
+  const oxygen = sequence[index + 1];
+  return (
+    nitrogen.symbol === "N" &&
+    (nitrogen.count ?? 1) === 1 &&
+    oxygen?.symbol === "O" &&
+    oxygen.count === 2 &&
+    sequence[index + 2]?.symbol !== "H"
+  );
 }
 
 /** Parse the body of a condensed formula (no charge); undefined when it is not one we read. */
@@ -114,6 +132,22 @@ function parseCondensed(text: string): ParsedSequence | undefined {
       // Halogens after an atom are its substituents, like hydrogens: CF3COOH, CCl3CH2OH.
       if (atomTraits(symbol).isHalogen && units.length > 0 && count > 1) {
         for (let k = 0; k < count; k++) units[units.length - 1].branches.push([{ symbol, hydrogens: 0, branches: [] }]);
+        continue;
+      }
+      // NO2 after another atom is a nitro group: both oxygens on the nitrogen (CH3NO2 is
+      // CH3-NO2, not carbamic acid). A leading N (HNO2, HNO3) is left to the formula path, and
+      // NO2H to the open search.
+      const previous = units[units.length - 1];
+      if (
+        symbol === "O" &&
+        count === 2 &&
+        previous?.symbol === "N" &&
+        previous.hydrogens === 0 &&
+        previous.branches.length === 0 &&
+        (units.length >= 2 || closing !== undefined) &&
+        text[position] !== "H"
+      ) {
+        previous.branches.push([{ symbol, hydrogens: 0, branches: [] }], [{ symbol, hydrogens: 0, branches: [] }]);
         continue;
       }
       // "C2H5" hides its own connectivity; leave such formulas to the molecular-formula path.
