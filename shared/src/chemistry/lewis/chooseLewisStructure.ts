@@ -64,6 +64,13 @@ export function compareScores(a: LewisScore, b: LewisScore): number {
   );
 }
 
+/** Sum of squared bond orders: lower when multiple bonds are shared out rather than piled on one bond. */
+function bondOrderSpread(orders: readonly number[]): number {
+  let sum = 0;
+  for (const order of orders) sum += order * order;
+  return sum;
+}
+
 /** Total valence electrons of the atoms, less the charge. */
 export function countValenceElectrons(symbols: readonly string[], charge: number): number {
   let total = -charge;
@@ -198,7 +205,14 @@ export function chooseLewisStructure(skeleton: Skeleton, charge: number): LewisO
       return;
     }
     const comparison = compareScores(score, best.score);
-    if (comparison === 0) resonanceForms++;
+    if (comparison === 0) {
+      resonanceForms++;
+      // Equally good forms are all counted; the one drawn spreads its bonds most evenly (H-N=N=N
+      // rather than H-N-N#N), as chemists draw the major form.
+      if (bondOrderSpread(bondOrders) < bondOrderSpread(best.orders)) {
+        best = { score, orders: [...bondOrders], lonePairs: [...lonePairs], unpaired: unpairedAtom };
+      }
+    }
     if (comparison < 0) {
       best = { score, orders: [...bondOrders], lonePairs: [...lonePairs], unpaired: unpairedAtom };
       resonanceForms = 1;
