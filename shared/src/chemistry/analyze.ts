@@ -111,7 +111,7 @@ function readIntoFormula(reading: SpeciesReading, problem: Problem): AnalysisRes
 
 const IONIC_GROUPS = new Set([1, 2]);
 
-/** Species VSEPR has nothing to say about: transition-metal centres and ionic solids. */
+/** Species VSEPR has nothing to say about: transition-metal centres, ionic solids, boranes. */
 function outOfScope(reading: SpeciesReading): Problem | undefined {
   const elements = reading.composition.map((part) => elementBySymbol(part.symbol)!);
   const metal = elements.find(
@@ -133,6 +133,20 @@ function outOfScope(reading: SpeciesReading): Problem | undefined {
       message:
         `${reading.formula} is an ionic compound of ${ionicMetal.name}: it forms a lattice of ions, ` +
         "not discrete molecules, so it has no VSEPR shape. Analyse its ions separately (for example the anion).",
+    };
+  }
+  const boranes = reading.composition.every((part) => part.symbol === "B" || part.symbol === "H");
+  const borons = reading.composition.reduce((total, part) => total + (part.symbol === "B" ? part.count : 0), 0);
+  if (boranes && borons >= 2 && distinctElements.size === 2) {
+    return {
+      code: "three-centre-bonding",
+      message:
+        `${reading.formula} is a borane: its boron atoms are held together by B-H-B bridges, bonds of two ` +
+        "electrons shared by three atoms, which a Lewis structure of two-atom bonds cannot draw, so VSEPR " +
+        "predicts no shape." +
+        (borons === 2 && reading.charge === 0 && reading.formula === "B2H6"
+          ? " (Each boron in diborane sits roughly tetrahedrally among two bridging and two end hydrogens.)"
+          : ""),
     };
   }
   return undefined;

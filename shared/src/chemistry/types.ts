@@ -76,6 +76,7 @@ export type ProblemCode =
   | "hydrogen-overbonded"
   | "transition-metal-centre"
   | "ionic-solid"
+  | "three-centre-bonding"
   | "ambiguous-connectivity"
   | "no-central-atom"
   | "no-valid-structure";

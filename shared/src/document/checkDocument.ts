@@ -13,6 +13,7 @@ import type { DocumentModel, Finding, FindingSeverity, SpeciesOccurrence, Unread
 const OUTSIDE_THE_MODEL: ReadonlySet<ProblemCode> = new Set([
   "transition-metal-centre",
   "ionic-solid",
+  "three-centre-bonding",
   "ambiguous-connectivity",
   "no-central-atom",
 ]);

@@ -48,10 +48,14 @@ export const ANALYSIS_REFUSALS: readonly RefusalCase[] = [
   { input: "C2H6O", code: "ambiguous-connectivity", why: "ethanol or dimethyl ether" },
   { input: "C3H8O", code: "ambiguous-connectivity", why: "two propanols or methyl ethyl ether" },
   { input: "C4H10", code: "ambiguous-connectivity", why: "butane or isobutane" },
-  // common practice: bridged dimers such as Al2Cl6 (two AlCl4 tetrahedra sharing an edge) and B2H6
-  // need their bridges written out; no single centre carries all the other atoms
+  // common practice: bridged dimers such as Al2Cl6 (two AlCl4 tetrahedra sharing an edge) need their
+  // bridges written out; no single centre carries all the other atoms
   { input: "Al2Cl6", code: "ambiguous-connectivity", why: "bridged dimer of two tetrahedral Al" },
-  { input: "B2H6", code: "ambiguous-connectivity", why: "hydrogen-bridged dimer of two B" },
+  // from memory: any inorganic chemistry text on boranes; B-H-B bridges are three-centre two-electron
+  // bonds, which Lewis structures of two-atom bonds cannot draw
+  { input: "B2H6", code: "three-centre-bonding", why: "diborane's hydrogen bridges", mentions: "B-H-B" },
+  { input: "B4H10", code: "three-centre-bonding", why: "tetraborane's hydrogen bridges" },
+  { input: "B10H14", code: "three-centre-bonding", why: "decaborane's cluster" },
   // common practice: fluorine takes one bond, so three F atoms leave nothing to sit in the middle
   { input: "F3", code: "no-central-atom", why: "no atom can take two bonds" },
   // common practice: helium's shell holds two electrons, so it forms no bonds; the problem is helium's

@@ -15,6 +15,7 @@ const DESCRIPTIONS: Readonly<Record<string, string>> = {
   "hydrogen-overbonded": "A hydrogen atom would need more than one bond.",
   "transition-metal-centre": "A transition-metal centre: VSEPR does not predict its shape.",
   "ionic-solid": "An ionic solid: it has no molecular shape.",
+  "three-centre-bonding": "Bonds shared by three atoms (a borane's B-H-B bridges): no Lewis structure or VSEPR shape.",
   "ambiguous-connectivity": "The formula allows several skeletons; SMILES would settle it.",
   "no-central-atom": "No central atom can be chosen for this species.",
   "no-valid-structure": "No valid Lewis structure was found for this species.",

@@ -23,6 +23,13 @@ const SINGLE: Readonly<Record<string, KnownStructure>> = {
   CH2O2: { name: "formic acid", written: "HCOOH" },
   CH5N: { name: "methylamine", written: "CH3NH2" },
   C2N2: { name: "cyanogen", written: "N#CC#N", smiles: true },
+  C3O2: { name: "carbon suboxide", written: "O=C=C=C=O", smiles: true },
+  N2O3: { name: "dinitrogen trioxide", written: "O=N[N+](=O)[O-]", smiles: true },
+  N2O4: { name: "dinitrogen tetroxide", written: "[O-][N+](=O)[N+]([O-])=O", smiles: true },
+  N2O5: { name: "dinitrogen pentoxide", written: "[O-][N+](=O)O[N+]([O-])=O", smiles: true },
+  F4N2: { name: "tetrafluorohydrazine", written: "FN(F)N(F)F", smiles: true },
+  H6Si2: { name: "disilane", written: "[SiH3][SiH3]", smiles: true },
+  Cl2O7: { name: "dichlorine heptoxide", written: "O=[Cl](=O)(=O)O[Cl](=O)(=O)=O", smiles: true },
 };
 
 const SEVERAL: Readonly<Record<string, readonly KnownStructure[]>> = {
