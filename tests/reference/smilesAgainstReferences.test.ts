@@ -31,8 +31,8 @@ describe("polarity of SMILES molecules against measured dipoles and symmetry", (
       `${name}: measured ${debye} D; engine said ${polarity.polar ? "polar" : "nonpolar"} because "${polarity.reason}"`,
     ).toBe(debye > 0);
   });
-  // Fails while cage coordinates lose their symmetry; turns red (and should become `it`) once fixed.
-  it.fails.each(CAGE_DIPOLES)("$name $smiles (measured $debye D): cage model keeps its symmetry", ({ smiles, debye }) => {
+  // Cages: the model must keep their full symmetry, or a nonpolar cage comes out polar.
+  it.each(CAGE_DIPOLES)("$name $smiles (measured $debye D): cage model keeps its symmetry", ({ smiles, debye }) => {
     expect(smilesAnalysis(smiles).polarity.polar).toBe(debye > 0);
   });
 });

@@ -12,6 +12,9 @@ export interface SmilesDipoleCase {
  */
 export const CAGE_DIPOLES: readonly SmilesDipoleCase[] = [
   { name: "cubane", smiles: "C12C3C4C1C5C2C3C45", debye: 0 }, // common practice: Oh, no permanent dipole
+  { name: "adamantane", smiles: "C1C2CC3CC1CC(C2)C3", debye: 0 }, // common practice: Td, no permanent dipole
+  { name: "bicyclo[2.2.2]octane", smiles: "C1CC2CCC1CC2", debye: 0 }, // common practice: D3h, no permanent dipole
+  { name: "prismane", smiles: "C12C3C1C4C2C34", debye: 0 }, // common practice: D3h, no permanent dipole
 ];
 
 export const SMILES_DIPOLES: readonly SmilesDipoleCase[] = [

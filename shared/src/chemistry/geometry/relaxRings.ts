@@ -1,11 +1,11 @@
 /**
  * Closes the rings the walk left open. A walk sets every bond and angle from its parent side, so
  * the last bond of a ring is usually too long or too short. This spreads that strain: it
- * minimises a small spring model (bond lengths; 1,3 distances that encode the ideal VSEPR angles;
- * a push apart for non-bonded atoms that come too close) by gradient descent from the walk's
- * placement. Benzene-like rings already close exactly and come back unchanged; saturated rings
- * whose ideal angles cannot all be met (cyclopropane, cyclobutane, chairs built from 109.47°
- * torsion choices) end with angles a few degrees off ideal, shared round the ring.
+ * minimises a small spring model (bond lengths; 1,3 distances that encode the ideal angles of
+ * each atom's sites; a push apart for non-bonded atoms that come too close) from the walk's
+ * placement. Benzene-like rings and chairs already close exactly and come back unchanged; rings
+ * whose angles cannot all be met (cyclopentane, bicyclo[1.1.1]pentane) end with the strain
+ * shared round the ring.
  */
 import type { AtomSites } from "./atomSites";
 import { angleDegrees, type Vec3 } from "./vectors";
@@ -20,9 +20,8 @@ interface Spring {
   readonly repulsiveOnly: boolean;
 }
 
-export interface RelaxInput {
+export interface SpringModelInput {
   readonly sites: readonly AtomSites[];
-  readonly positions: readonly Vec3[];
   readonly bondLength: (first: number, second: number) => number;
   /** Closest two non-bonded atoms should come, in ångströms. */
   readonly contactDistance: (first: number, second: number) => number;
@@ -33,7 +32,12 @@ const ANGLE_WEIGHT = 0.5;
 const CONTACT_WEIGHT = 0.5;
 /** Work budget: iterations × springs stays below this, so large molecules stay quick. */
 const WORK_BUDGET = 2e7;
-const MAX_ITERATIONS = 5000;
+const MAX_ITERATIONS = 2000;
+/** Steps remembered by the quasi-Newton update. */
+const HISTORY = 8;
+/** Converged when no coordinate feels a force above this (Å² per Å): atoms then sit within about
+ * 1e-6 Å of the minimum, far below what shows in a model or in the symmetry search. */
+const GRADIENT_TOLERANCE = 1e-7;
 
 export interface RelaxResult {
   readonly positions: Vec3[];
@@ -41,34 +45,135 @@ export interface RelaxResult {
   readonly strain: number;
 }
 
-/** Positions after relaxation; the input when nothing needs to move. */
-export function relaxRings(input: RelaxInput): RelaxResult {
+/** The spring model of one molecule, built once and used on several starting placements. */
+export interface SpringModel {
+  /** Strain of a placement in Å²: 0 when every bond and angle is ideal. */
+  strain(positions: readonly Vec3[]): number;
+  /** Positions after relaxation from `positions`; the input when nothing needs to move. */
+  relax(positions: readonly Vec3[]): RelaxResult;
+}
+
+/**
+ * The spring model of a molecule. The minimiser is a limited-
+ * memory quasi-Newton method (L-BFGS) with a backtracking line search: it converges to a tight
+ * force tolerance in a few hundred steps, where plain gradient descent crawls along the soft
+ * directions of a cage and stops short of its symmetric shape. Every step is a linear
+ * combination of forces, so a start that is symmetric stays exactly symmetric.
+ */
+export function springModel(input: SpringModelInput): SpringModel {
   const springs = packSprings(springsOf(input));
-  let positions = Float64Array.from(input.positions.flat());
-  let energy = energyOf(springs, positions);
-  let step = 0.02;
-  const gradient = new Float64Array(positions.length);
-  let trial = new Float64Array(positions.length);
   const iterations = Math.min(MAX_ITERATIONS, Math.floor(WORK_BUDGET / Math.max(1, springs.count)));
+  return {
+    strain: (start) => energyAndGradient(springs, Float64Array.from(start.flat()), new Float64Array(3 * start.length)),
+    relax(start) {
+      const positions = Float64Array.from(start.flat());
+      const strain = minimise(springs, positions, iterations);
+      const result: Vec3[] = start.map((_, atom) => [positions[3 * atom], positions[3 * atom + 1], positions[3 * atom + 2]]);
+      return { positions: result, strain };
+    },
+  };
+}
+
+/** Minimises the spring energy in place; returns the energy reached. */
+function minimise(springs: PackedSprings, positions: Float64Array, iterations: number): number {
+  const size = positions.length;
+  const gradient = new Float64Array(size);
+  const nextGradient = new Float64Array(size);
+  const direction = new Float64Array(size);
+  const trial = new Float64Array(size);
+  const steps: Float64Array[] = [];
+  const changes: Float64Array[] = [];
+  const curvatures: number[] = [];
+  const alphas = new Float64Array(HISTORY);
+  let energy = energyAndGradient(springs, positions, gradient);
   for (let k = 0; k < iterations && energy > 1e-14; k++) {
-    gradientOf(springs, positions, gradient);
-    for (let i = 0; i < positions.length; i++) trial[i] = positions[i] - step * gradient[i];
-    const trialEnergy = energyOf(springs, trial);
-    if (trialEnergy < energy) {
-      // Converged once a step gains next to nothing relative to the strain left.
-      if (energy - trialEnergy < 1e-13 + 1e-10 * energy) break;
-      const previous = positions;
-      positions = trial;
-      trial = previous;
-      energy = trialEnergy;
-      step *= 1.2;
-    } else {
-      step /= 2;
-      if (step < 1e-12) break;
+    if (largest(gradient) < GRADIENT_TOLERANCE) break;
+    searchDirection(gradient, steps, changes, curvatures, alphas, direction);
+    let slope = dotOf(direction, gradient);
+    if (!(slope < 0)) {
+      // The remembered curvature misleads here: forget it and go downhill.
+      steps.length = changes.length = curvatures.length = 0;
+      for (let i = 0; i < size; i++) direction[i] = -gradient[i];
+      slope = -dotOf(gradient, gradient);
     }
+    // Never move an atom more than a few tenths of an ångström in one step.
+    let length = Math.min(1, 0.3 / Math.max(1e-12, largest(direction)));
+    let trialEnergy = Infinity;
+    for (let tries = 0; tries < 40; tries++) {
+      for (let i = 0; i < size; i++) trial[i] = positions[i] + length * direction[i];
+      trialEnergy = energyAndGradient(springs, trial, nextGradient);
+      if (trialEnergy <= energy + 1e-4 * length * slope) break;
+      length /= 2;
+    }
+    if (!(trialEnergy < energy)) break; // no step lowers the strain any more: converged to rounding
+    const step = new Float64Array(size);
+    const change = new Float64Array(size);
+    for (let i = 0; i < size; i++) {
+      step[i] = trial[i] - positions[i];
+      change[i] = nextGradient[i] - gradient[i];
+    }
+    const curvature = dotOf(step, change);
+    if (curvature > 1e-16) {
+      if (steps.length === HISTORY) {
+        steps.shift();
+        changes.shift();
+        curvatures.shift();
+      }
+      steps.push(step);
+      changes.push(change);
+      curvatures.push(curvature);
+    }
+    positions.set(trial);
+    gradient.set(nextGradient);
+    energy = trialEnergy;
   }
-  const result: Vec3[] = input.positions.map((_, atom) => [positions[3 * atom], positions[3 * atom + 1], positions[3 * atom + 2]]);
-  return { positions: result, strain: energy };
+  return energy;
+}
+
+/** The L-BFGS two-loop recursion: an approximate Newton step -H·g from the remembered steps. */
+function searchDirection(
+  gradient: Float64Array,
+  steps: readonly Float64Array[],
+  changes: readonly Float64Array[],
+  curvatures: readonly number[],
+  alphas: Float64Array,
+  direction: Float64Array,
+): void {
+  for (let i = 0; i < gradient.length; i++) direction[i] = -gradient[i];
+  for (let m = steps.length - 1; m >= 0; m--) {
+    alphas[m] = dotOf(steps[m], direction) / curvatures[m];
+    axpy(-alphas[m], changes[m], direction);
+  }
+  if (steps.length > 0) {
+    const last = steps.length - 1;
+    const gamma = curvatures[last] / dotOf(changes[last], changes[last]);
+    for (let i = 0; i < direction.length; i++) direction[i] *= gamma;
+  } else {
+    // First step: a small plain descent step, scaled to the force.
+    const scaleBy = 0.1 / Math.max(1e-12, largest(gradient));
+    for (let i = 0; i < direction.length; i++) direction[i] *= Math.min(1, scaleBy);
+  }
+  for (let m = 0; m < steps.length; m++) {
+    const beta = dotOf(changes[m], direction) / curvatures[m];
+    axpy(alphas[m] - beta, steps[m], direction);
+  }
+}
+
+function dotOf(a: Float64Array, b: Float64Array): number {
+  let sum = 0;
+  for (let i = 0; i < a.length; i++) sum += a[i] * b[i];
+  return sum;
+}
+
+/** target += factor · source */
+function axpy(factor: number, source: Float64Array, target: Float64Array): void {
+  for (let i = 0; i < target.length; i++) target[i] += factor * source[i];
+}
+
+function largest(values: Float64Array): number {
+  let max = 0;
+  for (let i = 0; i < values.length; i++) max = Math.max(max, Math.abs(values[i]));
+  return max;
 }
 
 /** Springs in flat typed arrays: the inner loops run thousands of times. */
@@ -92,7 +197,7 @@ function packSprings(springs: readonly Spring[]): PackedSprings {
   };
 }
 
-function springsOf(input: RelaxInput): Spring[] {
+function springsOf(input: SpringModelInput): Spring[] {
   const springs: Spring[] = [];
   const near = new Set<string>();
   const key = (a: number, b: number) => (a < b ? `${a}-${b}` : `${b}-${a}`);
@@ -128,23 +233,10 @@ function springsOf(input: RelaxInput): Spring[] {
   return springs;
 }
 
-function energyOf(springs: PackedSprings, positions: Float64Array): number {
-  let energy = 0;
-  for (let k = 0; k < springs.count; k++) {
-    const a = springs.first[k];
-    const b = springs.second[k];
-    const dx = positions[a] - positions[b];
-    const dy = positions[a + 1] - positions[b + 1];
-    const dz = positions[a + 2] - positions[b + 2];
-    const stretch = Math.sqrt(dx * dx + dy * dy + dz * dz) - springs.length[k];
-    if (springs.repulsiveOnly[k] && stretch >= 0) continue;
-    energy += springs.weight[k] * stretch * stretch;
-  }
-  return energy;
-}
-
-function gradientOf(springs: PackedSprings, positions: Float64Array, gradient: Float64Array): void {
+/** Energy of the springs, with its gradient written into `gradient`. */
+function energyAndGradient(springs: PackedSprings, positions: Float64Array, gradient: Float64Array): number {
   gradient.fill(0);
+  let energy = 0;
   for (let k = 0; k < springs.count; k++) {
     const a = springs.first[k];
     const b = springs.second[k];
@@ -154,6 +246,7 @@ function gradientOf(springs: PackedSprings, positions: Float64Array, gradient: F
     const length = Math.max(1e-9, Math.sqrt(dx * dx + dy * dy + dz * dz));
     const stretch = length - springs.length[k];
     if (springs.repulsiveOnly[k] && stretch >= 0) continue;
+    energy += springs.weight[k] * stretch * stretch;
     const factor = (2 * springs.weight[k] * stretch) / length;
     gradient[a] += factor * dx;
     gradient[a + 1] += factor * dy;
@@ -162,4 +255,5 @@ function gradientOf(springs: PackedSprings, positions: Float64Array, gradient: F
     gradient[b + 1] -= factor * dy;
     gradient[b + 2] -= factor * dz;
   }
+  return energy;
 }
