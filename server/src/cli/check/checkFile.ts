@@ -48,7 +48,8 @@ export async function checkFile(file: DocumentFile, options: CheckOptions, outpu
   const context = { read: memoisedReader(), rows: delimitedRowMemo() };
   let foundHere = 0;
   let resume: ResumeAt | undefined;
-  if (!options.fix && !options.ordinaryReading && (file.kind === "csv" || file.kind === "tsv")) {
+  const utf8 = (file.encoding ?? "utf-8") === "utf-8";
+  if (!options.fix && !options.ordinaryReading && utf8 && (file.kind === "csv" || file.kind === "tsv")) {
     // Without fixing, a table is read as bytes as far as that goes; the batches read on from there.
     const quick = await checkDelimitedBytes(file, outputs, { ...context, bufferBytes: options.rowBufferBytes });
     foundHere = quick.found;
@@ -58,7 +59,7 @@ export async function checkFile(file: DocumentFile, options: CheckOptions, outpu
     }
     if (quick.resume !== "start") resume = quick.resume;
   }
-  const reading = readDocument(file.path, file.kind, options.batchCharacters, resume);
+  const reading = readDocument(file.path, file.kind, options.batchCharacters, resume, file.encoding);
   const writer = options.fix && !options.dryRun ? fixedFileWriter(file.path) : undefined;
   let fixing = options.fix;
   let fixedHere = 0;
@@ -70,7 +71,11 @@ export async function checkFile(file: DocumentFile, options: CheckOptions, outpu
         // Writing decoded text back would change the bytes that are not UTF-8.
         fixing = false;
         await writer?.abort();
-        outputs.note(`${file.displayPath}: not fixed: the file is not valid UTF-8`);
+        outputs.note(
+          utf8
+            ? `${file.displayPath}: not fixed: the file is not valid UTF-8`
+            : `${file.displayPath}: not fixed: the file is UTF-16, and fixes are written into UTF-8 files only`,
+        );
       }
       const findings = batchModel(batch, file.kind, context).findings();
       let lines: LineIndex = batch.lines;
@@ -99,7 +104,7 @@ export async function checkFile(file: DocumentFile, options: CheckOptions, outpu
       foundHere += reported.length;
       for (const finding of reported) countFinding(outputs.summary, finding.severity);
       outputs.reporter.findings(reported.map((finding) => locateFinding(file.displayPath, lines, finding)));
-      outputs.progress(batch.byteOffset + Buffer.byteLength(batch.text));
+      outputs.progress(batch.byteOffset + (utf8 ? Buffer.byteLength(batch.text) : 2 * batch.text.length));
       await outputs.drain?.();
     }
     if (writer) await writer.finish();

@@ -8,6 +8,7 @@
 import { open, readFile } from "node:fs/promises";
 import { sniffDelimiter } from "../../../../shared/src/document/tables/csv";
 import type { DocumentKind } from "../../../../shared/src/document/types";
+import type { TextEncoding } from "./findDocuments";
 import { lineIndexOf, type LineIndex } from "./lineIndex";
 import { recordBoundaryScanner, type RecordBoundaryScanner } from "./recordBoundaries";
 
@@ -72,16 +73,35 @@ export interface ResumeAt {
 }
 
 /** Reads `path` as a document of `kind` (a CSV or TSV from `resume` on, when given). */
-export function readDocument(path: string, kind: DocumentKind, batchCharacters = DEFAULT_BATCH_CHARACTERS, resume?: ResumeAt): DocumentReading {
-  const decoding = utf8Decoding();
+export function readDocument(
+  path: string,
+  kind: DocumentKind,
+  batchCharacters = DEFAULT_BATCH_CHARACTERS,
+  resume?: ResumeAt,
+  encoding: TextEncoding = "utf-8",
+): DocumentReading {
+  const decoding = encoding === "utf-8" ? utf8Decoding() : utf16Decoding(encoding);
   const batches =
     kind === "csv" || kind === "tsv" ? delimitedBatches(path, kind, decoding, batchCharacters, resume) : wholeDocument(path, decoding);
   return { batches, exactUtf8: () => decoding.exact };
 }
 
 interface Utf8Decoding {
+  /** True while the text is exactly the file's bytes read as UTF-8. */
   exact: boolean;
   decode(bytes?: Uint8Array): string;
+  /** Bytes the text takes in the file. */
+  byteLength(text: string): number;
+}
+
+/** UTF-16 text: never exact in the UTF-8 sense (fixes are written as UTF-8 only). */
+function utf16Decoding(encoding: "utf-16le" | "utf-16be"): Utf8Decoding {
+  const decoder = new TextDecoder(encoding, { ignoreBOM: true });
+  return {
+    exact: false,
+    decode: (bytes) => (bytes ? decoder.decode(bytes, { stream: true }) : decoder.decode()),
+    byteLength: (text) => 2 * text.length,
+  };
 }
 
 /**
@@ -93,6 +113,7 @@ function utf8Decoding(): Utf8Decoding {
   const run = (bytes?: Uint8Array): string => (bytes ? decoder.decode(bytes, { stream: true }) : decoder.decode());
   const decoding: Utf8Decoding = {
     exact: true,
+    byteLength: (text) => Buffer.byteLength(text, "utf8"),
     decode(bytes) {
       try {
         return run(bytes);
@@ -152,7 +173,7 @@ async function* delimitedBatches(
       const batch: DocumentBatch = { text, offset, byteOffset, lines, prefix, last, delimiter };
       if (offset === 0) prefix = text.slice(0, prefixLength);
       offset += text.length;
-      byteOffset += Buffer.byteLength(text, "utf8");
+      byteOffset += decoding.byteLength(text);
       line += lines.lineBreaks;
       scanner?.drop(length);
       return batch;

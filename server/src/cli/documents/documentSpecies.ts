@@ -23,7 +23,7 @@ export interface PlacedSpecies {
 /** The species of `file`, a batch at a time (I/O errors are thrown). */
 export async function* speciesInFile(file: DocumentFile): AsyncGenerator<readonly PlacedSpecies[]> {
   const read = memoisedReader();
-  for await (const batch of readDocument(file.path, file.kind).batches) {
+  for await (const batch of readDocument(file.path, file.kind, undefined, undefined, file.encoding).batches) {
     const { occurrences } = batchModel(batch, file.kind, { read });
     yield occurrences.map((occurrence) => {
       const { line, column } = batch.lines.position(occurrence.range.start);

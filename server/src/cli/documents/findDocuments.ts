@@ -17,6 +17,17 @@ export interface DocumentFile {
   readonly displayPath: string;
   readonly kind: DocumentKind;
   readonly size: number;
+  /** How the text is stored: UTF-8 (the default), or UTF-16 when the file opens with its byte-order mark. */
+  readonly encoding?: TextEncoding;
+}
+
+export type TextEncoding = "utf-8" | "utf-16le" | "utf-16be";
+
+/** UTF-16 by its byte-order mark (spreadsheets save "Unicode text" so); UTF-8 otherwise. */
+export function encodingOf(start: Uint8Array): TextEncoding {
+  if (start[0] === 0xff && start[1] === 0xfe) return "utf-16le";
+  if (start[0] === 0xfe && start[1] === 0xff) return "utf-16be";
+  return "utf-8";
 }
 
 /** What was found, and what could not be read or was skipped. */
@@ -94,9 +105,14 @@ function documentFile(absolute: string, workingDirectory: string): DocumentFile 
   } catch {
     return undefined;
   }
-  if (start.includes(0)) return undefined;
-  const kind = documentKindFor(absolute, undefined, start.toString("utf8").slice(0, SNIFF_CHARACTERS));
-  return kind ? { path: absolute, displayPath: displayPathOf(absolute, workingDirectory), kind, size } : undefined;
+  const encoding = encodingOf(start);
+  // NUL bytes mark a binary file, except in UTF-16, where every ASCII character has one.
+  if (encoding === "utf-8" && start.includes(0)) return undefined;
+  const text = encoding === "utf-8" ? start.toString("utf8") : new TextDecoder(encoding).decode(start);
+  const kind = documentKindFor(absolute, undefined, text.slice(0, SNIFF_CHARACTERS));
+  if (!kind) return undefined;
+  const file: DocumentFile = { path: absolute, displayPath: displayPathOf(absolute, workingDirectory), kind, size };
+  return encoding === "utf-8" ? file : { ...file, encoding };
 }
 
 function readStart(path: string): Buffer {
