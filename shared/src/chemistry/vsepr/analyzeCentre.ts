@@ -35,8 +35,9 @@ export function neighboursOf(graph: MolecularGraph, atom: number): readonly Liga
 /** Undefined when the atom has fewer than two neighbours or an unsupported domain count. */
 export function analyzeCentre(graph: MolecularGraph, index: number, radical: boolean): CentreDetail | undefined {
   const atom = graph.atoms[index];
-  if (graphIndex(graph).neighbours[index].length < 2) return undefined;
-  const ligands = neighboursOf(graph, index);
+  const { neighbours } = graphIndex(graph);
+  const ligands: readonly Ligand[] = neighbours[index];
+  if (ligands.length < 2) return undefined;
   // A lone pair shared with a neighbouring pi system (amide N, pyrrole N, furan O) sits in a
   // p orbital, so it takes no site of its own: the atom is sp2 and planar.
   const delocalised = lonePairJoinsPiSystem(graph, index) ? 1 : 0;
@@ -52,20 +53,37 @@ export function analyzeCentre(graph: MolecularGraph, index: number, radical: boo
   const traits = atomTraits(atom.symbol);
   const multipleBondCount = countMultipleBondsWithResonance(graph, ligands);
   // Heavier neighbours, or two groups with their own substituents (C-O-C in CH3OCH3).
-  const bulkyNeighbours =
-    ligands.some((l) => atomTraits(l.symbol).element.period > traits.element.period) ||
-    ligands.filter((l) => l.symbol !== "H" && graphIndex(graph).neighbours[l.atom].length > 1).length >= 2;
+  const centrePeriod = traits.element.period;
+  let heavierNeighbour = false;
+  let substitutedGroups = 0;
+  for (let k = 0; k < ligands.length; k++) {
+    const ligand = ligands[k];
+    if (atomTraits(ligand.symbol).element.period > centrePeriod) heavierNeighbour = true;
+    if (ligand.symbol !== "H" && neighbours[ligand.atom].length > 1) substitutedGroups++;
+  }
+  const bulkyNeighbours = heavierNeighbour || substitutedGroups >= 2;
   const ringSize = smallestRingThrough(graph, index, ligands);
 
   // Everything below depends only on these facts, so centres alike in them (the many CH2 and
   // aromatic CH of a large molecule) share one worked-out description.
   // Small species have one or two centres: for them the bookkeeping costs more than it saves.
-  let signature: string | undefined;
+  let memoKey: CentreKey | undefined;
   if (graph.atoms.length >= SHARED_CENTRE_MIN_ATOMS) {
-    signature = `${atom.symbol}|${atom.lonePairs}|${atom.unpairedElectrons}|${delocalised}|${radical}|${multipleBondCount}|${bulkyNeighbours}|${ringSize}|`;
-    for (const ligand of ligands) signature += `${ligand.symbol}${ligand.bondOrder},`;
-    const known = centreMemo.get(signature);
-    if (known) return { centre: { ...known.centre, index }, ligands, sites: known.sites };
+    memoKey = centreKey(
+      traits.element.atomicNumber,
+      atom.lonePairs,
+      atom.unpairedElectrons,
+      delocalised,
+      radical,
+      multipleBondCount,
+      bulkyNeighbours,
+      ringSize,
+      ligands,
+    );
+    if (memoKey !== undefined) {
+      const known = centreMemo.get(memoKey.facts)?.get(memoKey.ligands);
+      if (known) return { centre: { ...known.centre, index }, ligands, sites: known.sites };
+    }
   }
 
   const sites = assignSites(electronGeometry, loneDomains, ligands);
@@ -116,16 +134,97 @@ export function analyzeCentre(graph: MolecularGraph, index: number, radical: boo
         ? { hybridizationNote: CONJUGATED_NOTE }
         : {}),
   };
-  if (signature !== undefined) {
-    if (centreMemo.size >= CENTRE_MEMO_LIMIT) centreMemo.clear();
-    centreMemo.set(signature, { centre, sites });
-  }
+  if (memoKey !== undefined) rememberCentre(memoKey, { centre, sites });
   return { centre, ligands, sites };
 }
 
 const CENTRE_MEMO_LIMIT = 5_000;
 const SHARED_CENTRE_MIN_ATOMS = 12;
-const centreMemo = new Map<string, { readonly centre: CentreAnalysis; readonly sites: SiteAssignment }>();
+
+interface KnownCentre {
+  readonly centre: CentreAnalysis;
+  readonly sites: SiteAssignment;
+}
+
+/**
+ * A centre's surroundings as two small integers, so that looking up a shared description
+ * builds no string: `facts` packs the centre's own facts, `ligands` the element and bond order
+ * of each neighbour in order (through a small table of the pairs seen so far).
+ */
+interface CentreKey {
+  readonly facts: number;
+  readonly ligands: number;
+}
+
+// Remembered descriptions: by facts, then by the ligand list.
+const centreMemo = new Map<number, Map<number, KnownCentre>>();
+let centreMemoSize = 0;
+// Element-and-bond-order pairs of ligands, numbered 1..MAX_LIGAND_CODES as they are first seen.
+const ligandCodes = new Map<number, number>();
+const MAX_LIGAND_CODES = 31;
+// Five bits per ligand; six ligands keep the packed list inside a small integer.
+const MAX_KEYED_LIGANDS = 6;
+
+/** The key of a centre, or undefined when its facts do not fit (it is then worked out afresh). */
+function centreKey(
+  atomicNumber: number,
+  lonePairs: number,
+  unpairedElectrons: number,
+  delocalised: number,
+  radical: boolean,
+  multipleBondCount: number,
+  bulkyNeighbours: boolean,
+  ringSize: number | undefined,
+  ligands: readonly Ligand[],
+): CentreKey | undefined {
+  if (ligands.length > MAX_KEYED_LIGANDS || lonePairs > 7 || unpairedElectrons > 1 || multipleBondCount > 7) return undefined;
+  if (atomicNumber < 1 || atomicNumber > 127) return undefined;
+  const ring = ringSize === undefined ? 0 : ringSize - 2; // 3, 4, 5 -> 1, 2, 3
+  if (ring < 0 || ring > 3) return undefined;
+  let facts = atomicNumber;
+  facts = facts * 8 + lonePairs;
+  facts = facts * 2 + unpairedElectrons;
+  facts = facts * 2 + delocalised;
+  facts = facts * 2 + (radical ? 1 : 0);
+  facts = facts * 8 + multipleBondCount;
+  facts = facts * 2 + (bulkyNeighbours ? 1 : 0);
+  facts = facts * 4 + ring;
+  let packed = 0;
+  for (let k = 0; k < ligands.length; k++) {
+    const ligand = ligands[k];
+    const order = ligand.bondOrder;
+    if (order < 1 || order > 4) return undefined;
+    const pair = atomTraits(ligand.symbol).element.atomicNumber * 4 + (order - 1);
+    let code = ligandCodes.get(pair);
+    if (code === undefined) {
+      if (ligandCodes.size >= MAX_LIGAND_CODES) {
+        // Full: start both tables afresh rather than stop sharing for good.
+        ligandCodes.clear();
+        centreMemo.clear();
+        centreMemoSize = 0;
+        return undefined;
+      }
+      code = ligandCodes.size + 1;
+      ligandCodes.set(pair, code);
+    }
+    packed = packed * 32 + code;
+  }
+  return { facts, ligands: packed };
+}
+
+function rememberCentre(key: CentreKey, known: KnownCentre): void {
+  if (centreMemoSize >= CENTRE_MEMO_LIMIT) {
+    centreMemo.clear();
+    centreMemoSize = 0;
+  }
+  let byLigands = centreMemo.get(key.facts);
+  if (!byLigands) {
+    byLigands = new Map();
+    centreMemo.set(key.facts, byLigands);
+  }
+  byLigands.set(key.ligands, known);
+  centreMemoSize++;
+}
 
 /**
  * Multiple bonds at a centre, counting a negatively charged single-bonded partner of a multiply
@@ -133,10 +232,21 @@ const centreMemo = new Map<string, { readonly centre: CentreAnalysis; readonly s
  * partners and both open the angle between them.
  */
 function countMultipleBondsWithResonance(graph: MolecularGraph, ligands: readonly Ligand[]): number {
-  const multiplyBonded = new Set(ligands.filter((l) => l.bondOrder > 1).map((l) => l.symbol));
-  return ligands.filter(
-    (l) => l.bondOrder > 1 || (multiplyBonded.has(l.symbol) && graph.atoms[l.atom].formalCharge < 0),
-  ).length;
+  let multiple = 0;
+  for (let k = 0; k < ligands.length; k++) if (ligands[k].bondOrder > 1) multiple++;
+  if (multiple === 0) return 0;
+  let count = 0;
+  for (let k = 0; k < ligands.length; k++) {
+    const ligand = ligands[k];
+    if (ligand.bondOrder > 1) count++;
+    else if (graph.atoms[ligand.atom].formalCharge < 0 && multiplyBondedElement(ligands, ligand.symbol)) count++;
+  }
+  return count;
+}
+
+function multiplyBondedElement(ligands: readonly Ligand[], symbol: string): boolean {
+  for (let k = 0; k < ligands.length; k++) if (ligands[k].bondOrder > 1 && ligands[k].symbol === symbol) return true;
+  return false;
 }
 
 /** Rings this small force their interior angle on the atom, whatever its hybridization. */
@@ -149,31 +259,37 @@ const STRAINED_RING_LIMIT = 5;
 function smallestRingThrough(graph: MolecularGraph, centre: number, ligands: readonly Ligand[]): number | undefined {
   const index = graphIndex(graph);
   if (!index.mayHaveRings || ligands.length < 2 || ringAtoms(graph)[centre] === 0) return undefined;
-  // Depth-limited search with a reused stamp array instead of a Map per start: ring atoms are
-  // most atoms of a drug-sized molecule.
-  const { stamp, depthOf } = scratchFor(graph.atoms.length);
+  // Depth-limited search with reused stamp and queue arrays instead of a Map or new lists per
+  // start: ring atoms are most atoms of a drug-sized molecule.
+  const { stamp, depthOf, queue } = scratchFor(graph.atoms.length);
+  const neighbours = index.neighbours;
   let best: number | undefined;
-  for (const start of ligands) {
-    if (index.neighbours[start.atom].length < 2) continue; // a terminal atom closes no ring
+  for (let s = 0; s < ligands.length; s++) {
+    const start = ligands[s].atom;
+    if (neighbours[start].length < 2) continue; // a terminal atom closes no ring
     const mark = ++stampCounter;
-    stamp[start.atom] = mark;
-    depthOf[start.atom] = 0;
-    let frontier = [start.atom];
-    for (let depth = 1; depth <= STRAINED_RING_LIMIT - 2 && frontier.length > 0; depth++) {
-      const next: number[] = [];
-      for (const atom of frontier) {
-        for (const { atom: other } of index.neighbours[atom]) {
-          if (other === centre || stamp[other] === mark) continue;
-          stamp[other] = mark;
-          depthOf[other] = depth;
-          next.push(other);
-        }
+    stamp[start] = mark;
+    depthOf[start] = 0;
+    queue[0] = start;
+    let head = 0;
+    let tail = 1;
+    while (head < tail) {
+      const atom = queue[head++];
+      const depth = depthOf[atom] + 1;
+      if (depth > STRAINED_RING_LIMIT - 2) break; // breadth first: every later atom is as deep
+      const around = neighbours[atom];
+      for (let k = 0; k < around.length; k++) {
+        const other = around[k].atom;
+        if (other === centre || stamp[other] === mark) continue;
+        stamp[other] = mark;
+        depthOf[other] = depth;
+        queue[tail++] = other;
       }
-      frontier = next;
     }
-    for (const end of ligands) {
-      if (end.atom === start.atom || stamp[end.atom] !== mark) continue;
-      const size = depthOf[end.atom] + 2;
+    for (let e = 0; e < ligands.length; e++) {
+      const end = ligands[e].atom;
+      if (end === start || stamp[end] !== mark) continue;
+      const size = depthOf[end] + 2;
       if (best === undefined || size < best) best = size;
     }
   }
@@ -181,11 +297,12 @@ function smallestRingThrough(graph: MolecularGraph, centre: number, ligands: rea
 }
 
 let stampCounter = 0;
-let scratch = { stamp: new Int32Array(64), depthOf: new Int8Array(64) };
+let scratch = { stamp: new Int32Array(64), depthOf: new Int8Array(64), queue: new Int32Array(64) };
 
-function scratchFor(atomCount: number): { stamp: Int32Array; depthOf: Int8Array } {
+function scratchFor(atomCount: number): { stamp: Int32Array; depthOf: Int8Array; queue: Int32Array } {
   if (scratch.stamp.length < atomCount || stampCounter > 2_000_000_000) {
-    scratch = { stamp: new Int32Array(Math.max(atomCount, 2 * scratch.stamp.length)), depthOf: new Int8Array(Math.max(atomCount, 2 * scratch.stamp.length)) };
+    const size = Math.max(atomCount, 2 * scratch.stamp.length);
+    scratch = { stamp: new Int32Array(size), depthOf: new Int8Array(size), queue: new Int32Array(size) };
     stampCounter = 0;
   }
   return scratch;
