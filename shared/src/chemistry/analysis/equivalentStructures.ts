@@ -8,46 +8,64 @@ import type { GraphAtom, GraphBond } from "../types";
 
 const MAX_STEPS = 20_000;
 const MAX_COUNT = 1_000;
+const NONE = 0;
+const REQUIRED = 1;
+const OPTIONAL = 2;
 
 export function countEquivalentStructures(atoms: readonly GraphAtom[], bonds: readonly GraphBond[]): number {
   const atomCount = atoms.length;
-  const doubleCount = new Array<number>(atomCount).fill(0);
-  for (const bond of bonds) {
-    if (bond.order === 3) return 1; // triple bonds are left where they are written
+  let written = 0;
+  for (let k = 0; k < bonds.length; k++) {
+    const order = bonds[k].order;
+    if (order === 3) return 1; // triple bonds are left where they are written
+    if (order === 2) written++;
+  }
+  if (written === 0) return 1;
+  const doubleCount = new Int32Array(atomCount);
+  const degree = new Int32Array(atomCount);
+  for (let k = 0; k < bonds.length; k++) {
+    const bond = bonds[k];
+    degree[bond.from]++;
+    degree[bond.to]++;
     if (bond.order === 2) {
       doubleCount[bond.from]++;
       doubleCount[bond.to]++;
     }
   }
-  const written = bonds.filter((bond) => bond.order === 2).length;
-  if (written === 0) return 1;
 
   // Atoms with one double bond must keep one; a singly bonded negative O, S or N with a lone
   // pair may take one in place of its charge, as may the double-bonded end of such a pair.
-  const role = atoms.map((atom, index): "required" | "optional" | "none" => {
-    if (doubleCount[index] > 1) return "none";
+  const role = new Uint8Array(atomCount); // NONE, REQUIRED or OPTIONAL
+  let optionalWritten = 0;
+  const required: number[] = [];
+  for (let index = 0; index < atomCount; index++) {
+    if (doubleCount[index] > 1) continue;
+    const atom = atoms[index];
     const terminalHetero = atom.symbol === "O" || atom.symbol === "S" || atom.symbol === "N";
-    const degree = bonds.reduce((n, b) => n + (b.from === index || b.to === index ? 1 : 0), 0);
-    if (terminalHetero && degree === 1 && (atom.formalCharge === -1 || doubleCount[index] === 1)) return "optional";
-    return doubleCount[index] === 1 ? "required" : "none";
-  });
+    if (terminalHetero && degree[index] === 1 && (atom.formalCharge === -1 || doubleCount[index] === 1)) {
+      role[index] = OPTIONAL;
+      // An optional end may only swap with atoms of its own element and charge family: keep
+      // the count to structures equivalent to the written one (same number of charged atoms).
+      if (doubleCount[index] === 1) optionalWritten++;
+    } else if (doubleCount[index] === 1) {
+      role[index] = REQUIRED;
+      required.push(index);
+    }
+  }
 
-  const neighbours: number[][] = Array.from({ length: atomCount }, () => []);
-  for (const bond of bonds) {
+  const neighbours: number[][] = new Array(atomCount);
+  for (let k = 0; k < bonds.length; k++) {
+    const bond = bonds[k];
     if (bond.order > 2) continue;
     const a = bond.from;
     const b = bond.to;
-    if (role[a] === "none" || role[b] === "none") continue;
-    if (role[a] === "optional" && role[b] === "optional") continue;
-    neighbours[a].push(b);
-    neighbours[b].push(a);
+    if (role[a] === NONE || role[b] === NONE) continue;
+    if (role[a] === OPTIONAL && role[b] === OPTIONAL) continue;
+    (neighbours[a] ??= []).push(b);
+    (neighbours[b] ??= []).push(a);
   }
-  // An optional end may only swap with atoms of its own element and charge family: keep the
-  // count to structures equivalent to the written one (same number of charged atoms).
-  const optionalWritten = atoms.filter((_, i) => role[i] === "optional" && doubleCount[i] === 1).length;
 
-  const required = atoms.map((_, i) => i).filter((i) => role[i] === "required");
-  const matched = new Array<boolean>(atomCount).fill(false);
+  const matched = new Uint8Array(atomCount);
   let count = 0;
   let steps = 0;
   const visit = (position: number, optionalUsed: number) => {
@@ -58,14 +76,19 @@ export function countEquivalentStructures(atoms: readonly GraphAtom[], bonds: re
       return;
     }
     const atom = required[position];
-    matched[atom] = true;
-    for (const other of neighbours[atom]) {
-      if (matched[other]) continue;
-      matched[other] = true;
-      visit(position + 1, optionalUsed + (role[other] === "optional" ? 1 : 0));
-      matched[other] = false;
+    matched[atom] = 1;
+    const around = neighbours[atom];
+    if (around === undefined) {
+      matched[atom] = 0;
+      return;
     }
-    matched[atom] = false;
+    for (const other of around) {
+      if (matched[other]) continue;
+      matched[other] = 1;
+      visit(position + 1, optionalUsed + (role[other] === OPTIONAL ? 1 : 0));
+      matched[other] = 0;
+    }
+    matched[atom] = 0;
   };
   visit(0, 0);
   return Math.max(1, count);
