@@ -34,21 +34,39 @@ export function smilesStructure(text: string): SmilesOutcome {
   const trimmed = text.trim();
   const parsed = parseSmiles(trimmed);
   if (!parsed.ok) return { ok: false, problem: shift(parsed.problem, start) };
-  const writtenAromatic = parsed.value.atoms.map((atom) => atom.aromatic);
+  const writtenAtoms = parsed.value.atoms;
   const kekule = kekulize(parsed);
   if (!kekule.ok) return { ok: false, problem: shift(kekule.problem, start) };
   const molecule = kekule.value;
 
-  const symbols = molecule.atoms.map((atom) => atom.symbol);
-  const bonds: GraphBond[] = molecule.bonds.map((bond) => ({ from: bond.from, to: bond.to, order: bond.order }));
-  const charges = molecule.atoms.map((atom) => atom.charge);
-  molecule.atoms.forEach((atom, index) => {
-    for (let k = 0; k < atom.hydrogens; k++) {
-      bonds.push({ from: index, to: symbols.length, order: 1 });
-      symbols.push("H");
-      charges.push(0);
+  // Written atoms first, then each atom's hydrogens as atoms of their own, in atom order.
+  const heavyAtoms = molecule.atoms;
+  const heavyCount = heavyAtoms.length;
+  let atomCount = heavyCount;
+  for (let index = 0; index < heavyCount; index++) atomCount += heavyAtoms[index].hydrogens;
+  const symbols = new Array<string>(atomCount);
+  const charges = new Array<number>(atomCount);
+  const writtenBonds = molecule.bonds;
+  const bonds = new Array<GraphBond>(writtenBonds.length + atomCount - heavyCount);
+  for (let k = 0; k < writtenBonds.length; k++) {
+    const bond = writtenBonds[k];
+    bonds[k] = { from: bond.from, to: bond.to, order: bond.order };
+  }
+  let next = heavyCount;
+  let nextBond = writtenBonds.length;
+  for (let index = 0; index < heavyCount; index++) {
+    const atom = heavyAtoms[index];
+    symbols[index] = atom.symbol;
+    charges[index] = atom.charge;
+  }
+  for (let index = 0; index < heavyCount; index++) {
+    for (let k = heavyAtoms[index].hydrogens; k > 0; k--) {
+      bonds[nextBond++] = { from: index, to: next, order: 1 };
+      symbols[next] = "H";
+      charges[next] = 0;
+      next++;
     }
-  });
+  }
 
   const composition = compositionOf(symbols);
   const charge = smilesNetCharge(molecule);
@@ -62,10 +80,11 @@ export function smilesStructure(text: string): SmilesOutcome {
     formula: smilesFormula(molecule),
   };
 
-  const metal = symbols.find((symbol) => {
-    const category = elementBySymbol(symbol)?.category;
-    return category === "transition-metal" || category === "lanthanide" || category === "actinide";
-  });
+  let metal: string | undefined;
+  for (let index = 0; index < heavyCount && metal === undefined; index++) {
+    const category = elementBySymbol(symbols[index])?.category;
+    if (category === "transition-metal" || category === "lanthanide" || category === "actinide") metal = symbols[index];
+  }
   if (metal) {
     return {
       ok: false,
@@ -77,17 +96,22 @@ export function smilesStructure(text: string): SmilesOutcome {
     };
   }
 
-  const orderSums = new Array<number>(symbols.length).fill(0);
-  for (const bond of bonds) {
+  const orderSums = new Array<number>(atomCount).fill(0);
+  for (let k = 0; k < bonds.length; k++) {
+    const bond = bonds[k];
     orderSums[bond.from] += bond.order;
     orderSums[bond.to] += bond.order;
   }
   let electrons = 0;
-  const atoms: GraphAtom[] = [];
-  for (let index = 0; index < symbols.length; index++) {
-    const traits = atomTraits(symbols[index]);
-    electrons += traits.valenceElectrons - charges[index];
-    const nonBonding = traits.valenceElectrons - charges[index] - orderSums[index];
+  let sumAbs = 0;
+  let sumSquare = 0;
+  const atoms = new Array<GraphAtom>(atomCount);
+  for (let index = 0; index < atomCount; index++) {
+    const symbol = symbols[index];
+    const charge = charges[index];
+    const traits = atomTraits(symbol);
+    electrons += traits.valenceElectrons - charge;
+    const nonBonding = traits.valenceElectrons - charge - orderSums[index];
     const shell = 2 * orderSums[index] + Math.max(0, nonBonding);
     if (nonBonding < 0 || shell > traits.shellCapacity) {
       const element = traits.element;
@@ -103,16 +127,18 @@ export function smilesStructure(text: string): SmilesOutcome {
         },
       };
     }
-    atoms.push({
-      symbol: symbols[index],
-      lonePairs: nonBonding >> 1,
-      unpairedElectrons: nonBonding & 1,
-      formalCharge: charges[index],
-      ...(writtenAromatic[index] ? { aromatic: true } : {}),
-    });
+    sumAbs += Math.abs(charge);
+    sumSquare += charge * charge;
+    atoms[index] = sharedAtom(
+      traits.element.atomicNumber,
+      symbol,
+      nonBonding >> 1,
+      nonBonding & 1,
+      charge,
+      index < heavyCount && writtenAtoms[index].aromatic,
+    );
   }
 
-  const sumAbs = charges.reduce((sum, c) => sum + Math.abs(c), 0);
   return {
     ok: true,
     value: {
@@ -122,7 +148,7 @@ export function smilesStructure(text: string): SmilesOutcome {
         score: {
           shellDeficit: 0,
           sumAbsFormalCharge: sumAbs,
-          sumSquareFormalCharge: charges.reduce((sum, c) => sum + c * c, 0),
+          sumSquareFormalCharge: sumSquare,
           expandedAtoms: 0,
           chargeTimesElectronegativity: 0,
         },
@@ -131,6 +157,38 @@ export function smilesStructure(text: string): SmilesOutcome {
       },
     },
   };
+}
+
+// Graph atoms are plain read-only values with no index of their own, so every atom alike in
+// element, lone pairs, odd electron, charge and aromatic flag is one shared object: a large
+// molecule's many CH2 carbons and hydrogens then cost nothing to keep with its memoised analysis.
+const atomsAlike = new Map<number, GraphAtom>();
+
+function sharedAtom(
+  atomicNumber: number,
+  symbol: string,
+  lonePairs: number,
+  unpairedElectrons: number,
+  formalCharge: number,
+  aromatic: boolean,
+): GraphAtom {
+  const fits =
+    atomicNumber > 0 && atomicNumber < 128 && lonePairs >= 0 && lonePairs < 16 && formalCharge >= -15 && formalCharge <= 15;
+  if (!fits) return makeAtom(symbol, lonePairs, unpairedElectrons, formalCharge, aromatic);
+  const key = ((((atomicNumber * 16 + lonePairs) * 2 + unpairedElectrons) * 32 + formalCharge + 15) * 2) + (aromatic ? 1 : 0);
+  let atom = atomsAlike.get(key);
+  if (atom === undefined) {
+    atom = makeAtom(symbol, lonePairs, unpairedElectrons, formalCharge, aromatic);
+    atomsAlike.set(key, atom);
+  }
+  return atom;
+}
+
+function makeAtom(symbol: string, lonePairs: number, unpairedElectrons: number, formalCharge: number, aromatic: boolean): GraphAtom {
+  // Two literal shapes rather than a spread: aromatic is present only when written so.
+  return aromatic
+    ? { symbol, lonePairs, unpairedElectrons, formalCharge, aromatic: true }
+    : { symbol, lonePairs, unpairedElectrons, formalCharge };
 }
 
 function compositionOf(symbols: readonly string[]): FormulaPart[] {
