@@ -6,7 +6,7 @@ import { graphIndex } from "../graphIndex";
 import { atomTraits } from "../lewis/electronBookkeeping";
 import type { LewisStructure } from "../lewis/chooseLewisStructure";
 import type { CentreAnalysis, MolecularGraph, PolarityVerdict, SpeciesAnalysis, SpeciesReading } from "../types";
-import { analyzeCentre, type CentreDetail } from "../vsepr/analyzeCentre";
+import { describeCentre, type CentreDetail, type SharedCentreDetail } from "../vsepr/analyzeCentre";
 import { measuredAnglesFor } from "../vsepr/measuredAngles";
 import { judgePolarity } from "../vsepr/polarity";
 import { polarityFromShape, shapeOf } from "./shape3d";
@@ -20,15 +20,19 @@ export function buildAnalysis(
   const atoms = graph.atoms;
   const atomCount = atoms.length;
   const radical = structure.valenceElectrons % 2 === 1;
-  const details: CentreDetail[] = [];
-  const centres: CentreAnalysis[] = [];
+  // Each centre's description as worked out (shared by centres alike) and its own index; the
+  // centres themselves are put together the first time anyone asks for them.
+  const descriptions: CentreAnalysis[] = [];
+  const indices: number[] = [];
+  let single: SharedCentreDetail | undefined;
   let allStericFourOrLess = true;
   for (let index = 0; index < atomCount; index++) {
-    const detail = analyzeCentre(graph, index, radical);
-    if (!detail) continue;
-    details.push(detail);
-    centres.push(detail.centre);
-    if (detail.centre.stericNumber > 4) allStericFourOrLess = false;
+    const described = describeCentre(graph, index, radical);
+    if (!described) continue;
+    if (descriptions.length === 0) single = described;
+    descriptions.push(described.alike);
+    indices.push(index);
+    if (described.alike.stericNumber > 4) allStericFourOrLess = false;
   }
 
   const orderSums = graphIndex(graph).bondOrderSums;
@@ -68,14 +72,14 @@ export function buildAnalysis(
   if (atomCount === 2 && atoms.every((a) => a.symbol === "O") && reading.charge === 0) {
     warnings.push("The Lewis structure shows O=O with all electrons paired, but ground-state O2 has two unpaired electrons (a triplet).");
   }
-  for (const centre of centres) {
+  for (const centre of descriptions) {
     if (centre.stericNumber === 7 && centre.lonePairs === 1) {
       warnings.push(
         `${centre.atom}: with six bonds and one lone pair the real molecule is fluxional; gas-phase XeF6 is a distorted octahedron rather than a clean pentagonal pyramid.`,
       );
     }
   }
-  if (details.length === 0 && atomCount === 2) {
+  if (descriptions.length === 0 && atomCount === 2) {
     warnings.push("A diatomic species is linear by definition; there is no central atom.");
   }
   if (atomCount === 1) warnings.push("A single atom or monatomic ion has no molecular shape.");
@@ -86,7 +90,9 @@ export function buildAnalysis(
   // One centre: ideal directions settle polarity exactly, at once. Several: the whole 3D
   // model is needed, which costs milliseconds, so it is built the first time anyone asks.
   const judge =
-    details.length > 1 ? judgeFromShape(graph, reading.charge) : judgeFromCentre(graph, details, mainCentre, reading.charge);
+    descriptions.length > 1
+      ? judgeFromShape(graph, reading.charge)
+      : judgeFromCentre(graph, single ? [ownDetail(single, indices[0])] : [], mainCentre, reading.charge);
   const analysis: SpeciesAnalysis = {
     reading,
     valenceElectrons: structure.valenceElectrons,
@@ -95,7 +101,11 @@ export function buildAnalysis(
     expandedOctet,
     graph,
     resonanceForms,
-    centres,
+    get centres(): readonly CentreAnalysis[] {
+      const centres = ownCentres(descriptions, indices);
+      Object.defineProperty(analysis, "centres", { value: centres, enumerable: true });
+      return centres;
+    },
     get polarity(): PolarityVerdict {
       const verdict = judge(analysis);
       Object.defineProperty(analysis, "polarity", { value: verdict, enumerable: true });
@@ -105,6 +115,21 @@ export function buildAnalysis(
     warnings,
   };
   return analysis;
+}
+
+/** Each centre as its own object: a shared description gets the centre's own index. */
+function ownCentres(descriptions: readonly CentreAnalysis[], indices: readonly number[]): CentreAnalysis[] {
+  const centres = new Array<CentreAnalysis>(descriptions.length);
+  for (let k = 0; k < descriptions.length; k++) {
+    const alike = descriptions[k];
+    centres[k] = alike.index === indices[k] ? alike : { ...alike, index: indices[k] };
+  }
+  return centres;
+}
+
+function ownDetail(described: SharedCentreDetail, index: number): CentreDetail {
+  const { alike, ligands, sites } = described;
+  return { centre: alike.index === index ? alike : { ...alike, index }, ligands, sites };
 }
 
 // The polarity judges are made apart from buildAnalysis so that each closure keeps only what it

@@ -34,6 +34,27 @@ export function neighboursOf(graph: MolecularGraph, atom: number): readonly Liga
 
 /** Undefined when the atom has fewer than two neighbours or an unsupported domain count. */
 export function analyzeCentre(graph: MolecularGraph, index: number, radical: boolean): CentreDetail | undefined {
+  const described = describeCentre(graph, index, radical);
+  if (described === undefined) return undefined;
+  const { alike, ligands, sites } = described;
+  return { centre: alike.index === index ? alike : { ...alike, index }, ligands, sites };
+}
+
+/**
+ * A centre's description as worked out, possibly shared with other centres alike in their
+ * surroundings: `alike` says everything about this centre except, when shared, its `index`.
+ */
+export interface SharedCentreDetail {
+  readonly alike: CentreAnalysis;
+  readonly ligands: readonly Ligand[];
+  readonly sites: SiteAssignment;
+}
+
+/**
+ * Like analyzeCentre, without making this centre its own copy of a shared description: for
+ * callers that keep only what differs (the index) until the centre itself is asked for.
+ */
+export function describeCentre(graph: MolecularGraph, index: number, radical: boolean): SharedCentreDetail | undefined {
   const atom = graph.atoms[index];
   const { neighbours } = graphIndex(graph);
   const ligands: readonly Ligand[] = neighbours[index];
@@ -82,7 +103,7 @@ export function analyzeCentre(graph: MolecularGraph, index: number, radical: boo
     );
     if (memoKey !== undefined) {
       const known = centreMemo.get(memoKey.facts)?.get(memoKey.ligands);
-      if (known) return { centre: { ...known.centre, index }, ligands, sites: known.sites };
+      if (known) return { alike: known.centre, ligands, sites: known.sites };
     }
   }
 
@@ -135,7 +156,7 @@ export function analyzeCentre(graph: MolecularGraph, index: number, radical: boo
         : {}),
   };
   if (memoKey !== undefined) rememberCentre(memoKey, { centre, sites });
-  return { centre, ligands, sites };
+  return { alike: centre, ligands, sites };
 }
 
 const CENTRE_MEMO_LIMIT = 5_000;
