@@ -24,8 +24,9 @@ export function expandComposition(composition: readonly FormulaPart[]): string[]
 
 /** Every star-shaped skeleton (plus hydrogens on outer O, N, S) for the atoms given. */
 export function candidateSkeletons(symbols: readonly string[]): CandidateSkeleton[] {
-  const heavy = symbols.flatMap((symbol, index) => (symbol === "H" ? [] : [index]));
-  const hydrogens = symbols.flatMap((symbol, index) => (symbol === "H" ? [index] : []));
+  const heavy: number[] = [];
+  const hydrogens: number[] = [];
+  for (let index = 0; index < symbols.length; index++) (symbols[index] === "H" ? hydrogens : heavy).push(index);
   const candidates: CandidateSkeleton[] = [];
   const triedElements = new Set<string>();
 
@@ -46,7 +47,10 @@ export function candidateSkeletons(symbols: readonly string[]): CandidateSkeleto
       .filter((atom) => (HYDROGEN_HOST_CAPACITY[symbols[atom]] ?? 0) > 0)
       .sort(
         (a, b) =>
-          Math.abs(a - firstHydrogen) - Math.abs(b - firstHydrogen) || symbols[a].localeCompare(symbols[b]) || a - b,
+          Math.abs(a - firstHydrogen) - Math.abs(b - firstHydrogen) ||
+          // Hosts are O, S or N, whose plain character order is their alphabetical order.
+          (symbols[a] < symbols[b] ? -1 : symbols[a] > symbols[b] ? 1 : 0) ||
+          a - b,
       );
     for (const hostCounts of hydrogenPlacements(hosts, symbols, hydrogens.length)) {
       const bonds: [number, number][] = outer.map((atom) => [centre, atom]);

@@ -9,6 +9,7 @@
  */
 import type { GraphAtom, GraphBond, MolecularGraph } from "../types";
 import { atomTraits, type AtomTraits } from "./electronBookkeeping";
+import { sortSmall } from "../sortSmall";
 
 /** Which atoms are joined by at least a single bond. */
 export interface Skeleton {
@@ -78,6 +79,12 @@ export function countValenceElectrons(symbols: readonly string[], charge: number
   return total;
 }
 
+function atomIndices(count: number): number[] {
+  const indices = new Array<number>(count);
+  for (let k = 0; k < count; k++) indices[k] = k;
+  return indices;
+}
+
 export function chooseLewisStructure(skeleton: Skeleton, charge: number): LewisOutcome {
   const atomCount = skeleton.symbols.length;
   const traits: AtomTraits[] = skeleton.symbols.map(atomTraits);
@@ -112,7 +119,8 @@ export function chooseLewisStructure(skeleton: Skeleton, charge: number): LewisO
   if (flexibleBonds.length > MAX_FLEXIBLE_BONDS) return { ok: false, failure: "no-structure" };
 
   // Lone pairs fill outer atoms first (most electronegative first), then inner atoms.
-  const fillOrder = [...Array(atomCount).keys()].sort(
+  const fillOrder = sortSmall(
+    atomIndices(atomCount),
     (a, b) =>
       Number(degree[a] > 1) - Number(degree[b] > 1) ||
       traits[b].electronegativity - traits[a].electronegativity ||
@@ -120,14 +128,13 @@ export function chooseLewisStructure(skeleton: Skeleton, charge: number): LewisO
   );
   // Electrons left over after every shell is full go to inner atoms that can expand, least
   // electronegative first (the central atom of SF4 or I3-).
-  const expansionOrder = [...Array(atomCount).keys()]
-    .filter((atom) => traits[atom].shellCapacity > 8)
-    .sort(
-      (a, b) =>
-        Number(degree[a] <= 1) - Number(degree[b] <= 1) ||
-        traits[a].electronegativity - traits[b].electronegativity ||
-        a - b,
-    );
+  const expansionOrder = sortSmall(
+    atomIndices(atomCount).filter((atom) => traits[atom].shellCapacity > 8),
+    (a, b) =>
+      Number(degree[a] <= 1) - Number(degree[b] <= 1) ||
+      traits[a].electronegativity - traits[b].electronegativity ||
+      a - b,
+  );
 
   const bondOrders = new Array<number>(skeleton.bonds.length).fill(1);
   const bondOrderSum = [...degree];
@@ -192,31 +199,36 @@ export function chooseLewisStructure(skeleton: Skeleton, charge: number): LewisO
       weighted += formal * t.electronegativity;
     }
     if (isRadical && shellDeficit > 0) shellDeficit -= 1; // an odd count leaves one atom short by one
+    const chargeTimesElectronegativity = Math.round(weighted * 1000) / 1000;
+    // Compared field by field (as compareScores does) before any score is made: most leaves of
+    // the search lose, and need no objects at all.
+    let comparison = -1;
+    if (best) {
+      const b = best.score;
+      comparison =
+        shellDeficit - b.shellDeficit ||
+        sumAbs - b.sumAbsFormalCharge ||
+        sumSquare - b.sumSquareFormalCharge ||
+        expanded - b.expandedAtoms ||
+        chargeTimesElectronegativity - b.chargeTimesElectronegativity;
+    }
+    if (comparison > 0) return;
+    if (comparison === 0) {
+      resonanceForms++;
+      // Equally good forms are all counted; the one drawn spreads its bonds most evenly (H-N=N=N
+      // rather than H-N-N#N), as chemists draw the major form.
+      if (!(bondOrderSpread(bondOrders) < bondOrderSpread(best!.orders))) return;
+    } else {
+      resonanceForms = 1;
+    }
     const score: LewisScore = {
       shellDeficit,
       sumAbsFormalCharge: sumAbs,
       sumSquareFormalCharge: sumSquare,
       expandedAtoms: expanded,
-      chargeTimesElectronegativity: Math.round(weighted * 1000) / 1000,
+      chargeTimesElectronegativity,
     };
-    if (!best) {
-      best = { score, orders: [...bondOrders], lonePairs: [...lonePairs], unpaired: unpairedAtom };
-      resonanceForms = 1;
-      return;
-    }
-    const comparison = compareScores(score, best.score);
-    if (comparison === 0) {
-      resonanceForms++;
-      // Equally good forms are all counted; the one drawn spreads its bonds most evenly (H-N=N=N
-      // rather than H-N-N#N), as chemists draw the major form.
-      if (bondOrderSpread(bondOrders) < bondOrderSpread(best.orders)) {
-        best = { score, orders: [...bondOrders], lonePairs: [...lonePairs], unpaired: unpairedAtom };
-      }
-    }
-    if (comparison < 0) {
-      best = { score, orders: [...bondOrders], lonePairs: [...lonePairs], unpaired: unpairedAtom };
-      resonanceForms = 1;
-    }
+    best = { score, orders: [...bondOrders], lonePairs: [...lonePairs], unpaired: unpairedAtom };
   };
 
   const evaluateLeaf = (extraOrders: number) => {
