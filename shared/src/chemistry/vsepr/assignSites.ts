@@ -8,6 +8,7 @@
 import { idealDirections, lonePairSiteOrder, siteKind, type SiteKind } from "../geometry/idealDirections";
 import type { Vec3 } from "../geometry/vectors";
 import type { ElectronGeometry } from "../types";
+import { sortSmall } from "../sortSmall";
 
 export interface Ligand {
   readonly atom: number;
@@ -33,13 +34,16 @@ export function assignSites(
   const loneSites = siteOrder.slice(0, loneDomains);
   let freeSites = siteOrder.slice(loneDomains);
 
-  const order = [...ligands.keys()];
+  const order = new Array<number>(ligands.length);
+  for (let k = 0; k < ligands.length; k++) order[k] = k;
   if (electronGeometry === "trigonal bipyramidal") {
     // Equatorial sites are listed first among the free ones: give them the bulky bonds.
-    freeSites = [...freeSites].sort(
+    freeSites = sortSmall(
+      [...freeSites],
       (a, b) => Number(siteKind(electronGeometry, a) === "axial") - Number(siteKind(electronGeometry, b) === "axial"),
     );
-    order.sort(
+    sortSmall(
+      order,
       (a, b) =>
         ligands[b].bondOrder - ligands[a].bondOrder ||
         ligands[a].electronegativity - ligands[b].electronegativity ||
@@ -51,7 +55,8 @@ export function assignSites(
     const keys = ligands.map((ligand) => `${ligand.symbol}${ligand.bondOrder}`);
     const counts = new Map<string, number>();
     for (const key of keys) counts.set(key, (counts.get(key) ?? 0) + 1);
-    order.sort(
+    sortSmall(
+      order,
       (a, b) =>
         counts.get(keys[a])! - counts.get(keys[b])! ||
         (keys[a] < keys[b] ? -1 : keys[a] > keys[b] ? 1 : 0) ||

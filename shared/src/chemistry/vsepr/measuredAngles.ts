@@ -4,6 +4,7 @@
  * the species finds them.
  */
 import type { FormulaPart, MeasuredAngle } from "../types";
+import { compareCodeUnits, sortSmall } from "../sortSmall";
 
 const GAS_PHASE = "gas-phase structure (CRC Handbook of Chemistry and Physics, free molecules)";
 
@@ -55,8 +56,7 @@ const TABLE: Readonly<Record<string, readonly (readonly [number, string])[]>> = 
 export function compositionKey(composition: readonly FormulaPart[], charge: number): string {
   const counts = new Map<string, number>();
   for (const part of composition) counts.set(part.symbol, (counts.get(part.symbol) ?? 0) + part.count);
-  const body = [...counts.entries()]
-    .sort(([a], [b]) => (a < b ? -1 : a > b ? 1 : 0))
+  const body = sortSmall([...counts.entries()], ([a], [b]) => compareCodeUnits(a, b))
     .map(([symbol, count]) => (count === 1 ? symbol : `${symbol}${count}`))
     .join("");
   return charge === 0 ? body : `${body}^${charge}`;

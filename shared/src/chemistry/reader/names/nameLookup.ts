@@ -10,6 +10,7 @@ import { anionRootByName } from "./anionRoots";
 import { COMMON_NAMES } from "./commonNames";
 import { binaryCovalentName, formulaForCompoundName, usualCationCharge } from "./compoundNames";
 import { ION_NAMES, ionByName } from "./ionNames";
+import { compareCodeUnits, sortSmall } from "../../sortSmall";
 
 /** A name that was understood, with the formula text it stands for. */
 export interface NameMatch {
@@ -123,10 +124,10 @@ function nameIndex(): NameIndex {
 /** Element counts sorted by symbol, plus charge: equal for every way of writing one composition. */
 export function compositionKey(composition: readonly FormulaPart[], charge: number): string {
   return (
-    composition
-      .map((part) => `${part.symbol}${part.count}`)
-      .sort()
-      .join("") + `|${charge}`
+    sortSmall(
+      composition.map((part) => `${part.symbol}${part.count}`),
+      compareCodeUnits,
+    ).join("") + `|${charge}`
   );
 }
 
