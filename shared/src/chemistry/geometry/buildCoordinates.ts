@@ -3,7 +3,7 @@
  * from covalent radii (double bonds ×0.87, triple ×0.78, in between interpolated for the
  * resonance-averaged orders of `resonanceBondOrders`, so benzene's ring bonds are ×0.935), placed
  * by a walk over the bonds with torsions chosen to keep π systems planar and to stagger
- * single bonds, then rings closed by a short relaxation. Atoms in three- and four-membered rings
+ * single bonds, then each ring system closed by a short relaxation of its own (`relaxRingSystems`). Atoms in three- and four-membered rings
  * take 60° or 90° ring angles with their other bonds spread round them (`smallRingSites`), so
  * cages such as cubane reach their symmetric shape. Acyclic species, benzene-like rings, chairs
  * and strain-free cages keep every angle ideal; other rings carry a few degrees of strain. A model
@@ -13,7 +13,7 @@ import type { MolecularGraph } from "../types";
 import { atomSites, type AtomSites } from "./atomSites";
 import { covalentRadiusAngstrom, modelBondLength } from "./bondLength";
 import { placeByWalk } from "./placeByWalk";
-import { springModel, type SpringModel } from "./relaxRings";
+import { relaxRingSystems } from "./relaxRingSystems";
 import { resonanceBondOrders } from "./resonanceBondOrders";
 import { adjacencyOf, bondKey, perceiveRings, ringNeighboursAcross } from "./ringPerception";
 import { smallRingSites } from "./smallRingSites";
@@ -43,14 +43,6 @@ export interface MolecularCoordinates {
 
 /** Non-bonded atoms are pushed apart below this multiple of their summed covalent radii. */
 const CONTACT_FACTOR = 1.5;
-/** Strain (Å²) below which a relaxed ring system is kept without trying other starts. */
-const ACCEPTED_STRAIN = 0.05;
-/** Strain (Å²) of a placement whose bonds and angles are all ideal, up to rounding. */
-const EXACT_STRAIN = 1e-12;
-/** Further walks tried when the first does not close its rings exactly. */
-const MAX_WALK_STARTS = 6;
-/** Most starts relaxed, least strained first. */
-const MAX_RELAXATIONS = 4;
 
 /**
  * Builds model coordinates for any molecular graph (chains, branches, rings, several fragments).
@@ -81,22 +73,21 @@ export function buildCoordinates(graph: MolecularGraph, radical = false): Molecu
     bonded: (a: number, b: number) => lengths.has(bondKey(a, b)),
     ringNeighbours: (parent: number, child: number) => ringNeighboursAcross(rings, parent, child),
   };
-  let { positions, rotations } = placeByWalk(walkInput);
+  const walk = placeByWalk(walkInput);
+  let { positions, rotations } = walk;
   if (rings.smallestRingByBond.size > 0) {
-    const model = springModel({
-      sites,
-      bondLength,
-      contactDistance: (a, b) =>
-        CONTACT_FACTOR * (covalentRadiusAngstrom(clean.atoms[a].symbol) + covalentRadiusAngstrom(clean.atoms[b].symbol)),
-    });
-    const best = leastStrained(model, { positions, rotations, strain: model.strain(positions) }, () =>
-      walkRoots(sites, [...rings.smallestRingByBond.values()]).map((root) => {
-        const walk = placeByWalk(walkInput, root);
-        return { ...walk, strain: model.strain(walk.positions) };
-      }),
+    const ringBonds = clean.bonds.filter((bond) => rings.smallestRingByBond.has(bondKey(bond.from, bond.to)));
+    const closed = relaxRingSystems(
+      {
+        ...walkInput,
+        ringBonds: ringBonds.map((bond) => [bond.from, bond.to] as const),
+        contactDistance: (a, b) =>
+          CONTACT_FACTOR * (covalentRadiusAngstrom(clean.atoms[a].symbol) + covalentRadiusAngstrom(clean.atoms[b].symbol)),
+      },
+      walk,
     );
-    positions = best.positions;
-    rotations = best.rotations.map((rotation, atom) => refitRotation(sites[atom], atom, positions, rotation));
+    positions = closed.positions;
+    rotations = closed.rotations.map((rotation, atom) => refitRotation(sites[atom], atom, positions, rotation));
   }
 
   return {
@@ -109,52 +100,6 @@ export function buildCoordinates(graph: MolecularGraph, radical = false): Molecu
       })),
     ),
   };
-}
-
-interface Placement {
-  readonly positions: readonly Vec3[];
-  readonly rotations: readonly Rotation[];
-  readonly strain: number;
-}
-
-/**
- * The least strained relaxed placement. A walk that closes every ring exactly (benzene, a chair)
- * is kept as it is. Otherwise walks from other ring atoms are tried too: a cage or a ring with
- * unequal bonds may close badly from one root and exactly from another (1,4-dioxane closes as a
- * chair only from an oxygen), and relaxing a badly closed start can end in a twisted or tangled
- * shape. Starts are relaxed from the least strained up, until one relaxes well.
- */
-function leastStrained(model: SpringModel, first: Placement, otherStarts: () => Placement[]): Placement {
-  if (first.strain <= EXACT_STRAIN) return first;
-  const starts = [first, ...otherStarts()].sort((a, b) => a.strain - b.strain);
-  if (starts[0].strain <= EXACT_STRAIN) return starts[0];
-  let best: Placement | undefined;
-  for (const start of starts.slice(0, MAX_RELAXATIONS)) {
-    const relaxed = { ...model.relax(start.positions), rotations: start.rotations };
-    if (!best || relaxed.strain < best.strain - EXACT_STRAIN) best = relaxed;
-    if (best.strain <= ACCEPTED_STRAIN) break;
-  }
-  return best!;
-}
-
-/**
- * Ring atoms to root further walks at: one of each kind (element and number of neighbours) first,
- * so that different starts really differ, then the rest in index order.
- */
-function walkRoots(sites: readonly AtomSites[], rings: readonly (readonly number[])[]): number[] {
-  const ringAtoms = [...new Set(rings.flat())].sort((a, b) => a - b);
-  const kinds = new Set<string>();
-  const firstOfKind: number[] = [];
-  const rest: number[] = [];
-  for (const atom of ringAtoms) {
-    const kind = `${sites[atom].ligands.length}/${sites[atom].loneDomains.length}/${sites[atom].ligands.map((l) => l.bondOrder).join()}`;
-    if (kinds.has(kind)) rest.push(atom);
-    else {
-      kinds.add(kind);
-      firstOfKind.push(atom);
-    }
-  }
-  return [...firstOfKind, ...rest].slice(0, MAX_WALK_STARTS);
 }
 
 function withValidBonds(graph: MolecularGraph): MolecularGraph {

@@ -94,6 +94,16 @@ export function chooseChildRotation(state: PlacementState, parent: number, child
 }
 
 /**
+ * How many torsions about a bond the walk chooses from, evenly spaced round a full turn: three
+ * staggered ones between two tetrahedral atoms, two (eclipsed or anti) where the bond keeps its
+ * substituents in one plane, every 15° otherwise.
+ */
+export function torsionChoices(parentSites: AtomSites, childSites: AtomSites): number {
+  if (parentSites.tetrahedral && childSites.tetrahedral) return 3;
+  return keepsPlane(parentSites, childSites) ? 2 : 24;
+}
+
+/**
  * Two trigonal planar atoms, or a trigonal planar atom next to a tetrahedral one with a lone pair
  * (the OH of an acid, an ester oxygen): the lone pair joins the π system, so the bond keeps its
  * substituents in one plane.

@@ -23,6 +23,10 @@ export interface WalkResult {
   readonly positions: readonly Vec3[];
   /** Each atom's local frame turned into the molecule's frame. */
   readonly rotations: readonly Rotation[];
+  /** The atom whose frame placed each atom; -1 for the root of each fragment. */
+  readonly parents: readonly number[];
+  /** Atoms in the order their frames were fixed (each fragment from its root). */
+  readonly order: readonly number[];
 }
 
 /** Gap in ångströms between separate fragments of one graph, beyond their extent. */
@@ -35,6 +39,7 @@ export function placeByWalk(input: WalkInput, firstRoot?: number): WalkResult {
   const positions: (Vec3 | undefined)[] = new Array(count).fill(undefined);
   const rotations: (Rotation | undefined)[] = new Array(count).fill(undefined);
   const placedBy: number[] = new Array(count).fill(-1);
+  const order: number[] = [];
   const state: PlacementState = { ...input, positions, rotations };
   const placeNeighbours = (atom: number) => {
     for (const ligand of input.sites[atom].ligands) {
@@ -65,13 +70,14 @@ export function placeByWalk(input: WalkInput, firstRoot?: number): WalkResult {
         queue.push(child);
       }
     }
+    order.push(...queue);
     // Later fragments of a disconnected graph go beside the earlier ones, not on top of them.
     if (earlierExtent !== undefined) {
       const shift = earlierExtent + FRAGMENT_GAP - Math.min(...queue.map((atom) => positions[atom]![0]));
       for (const atom of queue) positions[atom] = add(positions[atom]!, [shift, 0, 0]);
     }
   }
-  return { positions: positions as Vec3[], rotations: rotations as Rotation[] };
+  return { positions: positions as Vec3[], rotations: rotations as Rotation[], parents: placedBy, order };
 }
 
 /** The unplaced atom with the most neighbours (lowest index on ties), or -1 when all are placed. */

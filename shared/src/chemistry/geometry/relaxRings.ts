@@ -49,8 +49,20 @@ export interface RelaxResult {
 export interface SpringModel {
   /** Strain of a placement in Å²: 0 when every bond and angle is ideal. */
   strain(positions: readonly Vec3[]): number;
-  /** Positions after relaxation from `positions`; the input when nothing needs to move. */
-  relax(positions: readonly Vec3[]): RelaxResult;
+  /** Strain of the contacts alone, in Å²: 0 when no two non-bonded atoms come too close. */
+  overlap(positions: readonly Vec3[]): number;
+  /**
+   * Positions after relaxation from `positions`; the input when nothing needs to move. A budget
+   * stops early, for a quick repair where exact convergence is not needed.
+   */
+  relax(positions: readonly Vec3[], budget?: RelaxBudget): RelaxResult;
+}
+
+/** Limits of one relaxation. */
+export interface RelaxBudget {
+  readonly maxIterations: number;
+  /** Stop once no coordinate feels a force above this (Å² per Å). */
+  readonly gradientTolerance: number;
 }
 
 /**
@@ -61,13 +73,24 @@ export interface SpringModel {
  * combination of forces, so a start that is symmetric stays exactly symmetric.
  */
 export function springModel(input: SpringModelInput): SpringModel {
-  const springs = packSprings(springsOf(input));
+  const springs = packSprings(springsOf(input), input.sites.length);
   const iterations = Math.min(MAX_ITERATIONS, Math.floor(WORK_BUDGET / Math.max(1, springs.count)));
   return {
     strain: (start) => energyAndGradient(springs, Float64Array.from(start.flat()), new Float64Array(3 * start.length)),
-    relax(start) {
+    overlap(start) {
       const positions = Float64Array.from(start.flat());
-      const strain = minimise(springs, positions, iterations);
+      refreshContacts(springs, positions);
+      let overlap = 0;
+      const near = springs.contacts.near;
+      const scratch = new Float64Array(positions.length);
+      for (let n = 0; n < springs.contacts.nearCount; n++) overlap += addSpring(springs, near[n], positions, scratch, true);
+      return overlap;
+    },
+    relax(start, budget) {
+      const positions = Float64Array.from(start.flat());
+      const strain = budget
+        ? minimise(springs, positions, Math.min(iterations, budget.maxIterations), budget.gradientTolerance)
+        : minimise(springs, positions, iterations, GRADIENT_TOLERANCE);
       const result: Vec3[] = start.map((_, atom) => [positions[3 * atom], positions[3 * atom + 1], positions[3 * atom + 2]]);
       return { positions: result, strain };
     },
@@ -75,7 +98,7 @@ export function springModel(input: SpringModelInput): SpringModel {
 }
 
 /** Minimises the spring energy in place; returns the energy reached. */
-function minimise(springs: PackedSprings, positions: Float64Array, iterations: number): number {
+function minimise(springs: PackedSprings, positions: Float64Array, iterations: number, tolerance: number): number {
   const size = positions.length;
   const gradient = new Float64Array(size);
   const nextGradient = new Float64Array(size);
@@ -87,7 +110,7 @@ function minimise(springs: PackedSprings, positions: Float64Array, iterations: n
   const alphas = new Float64Array(HISTORY);
   let energy = energyAndGradient(springs, positions, gradient);
   for (let k = 0; k < iterations && energy > 1e-14; k++) {
-    if (largest(gradient) < GRADIENT_TOLERANCE) break;
+    if (largest(gradient) < tolerance) break;
     searchDirection(gradient, steps, changes, curvatures, alphas, direction);
     let slope = dotOf(direction, gradient);
     if (!(slope < 0)) {
@@ -176,25 +199,85 @@ function largest(values: Float64Array): number {
   return max;
 }
 
-/** Springs in flat typed arrays: the inner loops run thousands of times. */
+/**
+ * Springs in flat typed arrays: the inner loops run thousands of times. Bonds and angles always
+ * pull or push; contacts only push, and only between atoms closer than the contact distance, so
+ * each evaluation visits just the contacts on a neighbour list (pairs within the contact distance
+ * plus {@link CONTACT_SKIN}), rebuilt whenever some atom has moved half the skin since the last
+ * build. A contact left off the list is then surely out of reach and would add nothing, so the
+ * energy and gradient are exactly those of the full model, summed in the same order.
+ */
 interface PackedSprings {
+  /** Every spring of the model, contacts included (the work budget counts them all). */
   readonly count: number;
+  /** Bonds and angles, then contacts. */
+  readonly fixedCount: number;
   readonly first: Int32Array;
   readonly second: Int32Array;
   readonly length: Float64Array;
   readonly weight: Float64Array;
-  readonly repulsiveOnly: Uint8Array;
+  readonly contacts: ContactList;
 }
 
-function packSprings(springs: readonly Spring[]): PackedSprings {
+/** The contact springs with the neighbour list over them. */
+interface ContactList {
+  /** Indices into the packed springs of the contacts that may be in reach, in spring order. */
+  readonly near: Int32Array;
+  nearCount: number;
+  /** Positions at the last build; NaN before the first. */
+  readonly builtAt: Float64Array;
+}
+
+/** Extra reach (Å) of the contact neighbour list beyond each contact distance. */
+const CONTACT_SKIN = 1;
+/** Rebuild the list once an atom has moved this far (Å); a little under half the skin. */
+const REBUILD_DISPLACEMENT = CONTACT_SKIN / 2 - 1e-6;
+
+function packSprings(springs: readonly Spring[], atomCount: number): PackedSprings {
+  const fixedCount = springs.filter((s) => !s.repulsiveOnly).length;
+  // Bonds and angles first, then contacts, each in the order they were made.
+  const ordered = [...springs.filter((s) => !s.repulsiveOnly), ...springs.filter((s) => s.repulsiveOnly)];
+  const builtAt = new Float64Array(3 * atomCount).fill(Number.NaN);
   return {
-    count: springs.length,
-    first: Int32Array.from(springs, (s) => 3 * s.first),
-    second: Int32Array.from(springs, (s) => 3 * s.second),
-    length: Float64Array.from(springs, (s) => s.length),
-    weight: Float64Array.from(springs, (s) => s.weight),
-    repulsiveOnly: Uint8Array.from(springs, (s) => (s.repulsiveOnly ? 1 : 0)),
+    count: ordered.length,
+    fixedCount,
+    first: Int32Array.from(ordered, (s) => 3 * s.first),
+    second: Int32Array.from(ordered, (s) => 3 * s.second),
+    length: Float64Array.from(ordered, (s) => s.length),
+    weight: Float64Array.from(ordered, (s) => s.weight),
+    contacts: { near: new Int32Array(ordered.length - fixedCount), nearCount: 0, builtAt },
   };
+}
+
+/** Makes sure the contact neighbour list holds every contact that can be in reach at `positions`. */
+function refreshContacts(springs: PackedSprings, positions: Float64Array): void {
+  const contacts = springs.contacts;
+  const builtAt = contacts.builtAt;
+  const limit = REBUILD_DISPLACEMENT * REBUILD_DISPLACEMENT;
+  let fresh = true;
+  for (let i = 0; i < positions.length; i += 3) {
+    const dx = positions[i] - builtAt[i];
+    const dy = positions[i + 1] - builtAt[i + 1];
+    const dz = positions[i + 2] - builtAt[i + 2];
+    // NaN (never built) fails this test too.
+    if (!(dx * dx + dy * dy + dz * dz <= limit)) {
+      fresh = false;
+      break;
+    }
+  }
+  if (fresh) return;
+  builtAt.set(positions);
+  let count = 0;
+  for (let k = springs.fixedCount; k < springs.count; k++) {
+    const a = springs.first[k];
+    const b = springs.second[k];
+    const dx = positions[a] - positions[b];
+    const dy = positions[a + 1] - positions[b + 1];
+    const dz = positions[a + 2] - positions[b + 2];
+    const reach = springs.length[k] + CONTACT_SKIN;
+    if (dx * dx + dy * dy + dz * dz < reach * reach) contacts.near[count++] = k;
+  }
+  contacts.nearCount = count;
 }
 
 function springsOf(input: SpringModelInput): Spring[] {
@@ -236,24 +319,31 @@ function springsOf(input: SpringModelInput): Spring[] {
 /** Energy of the springs, with its gradient written into `gradient`. */
 function energyAndGradient(springs: PackedSprings, positions: Float64Array, gradient: Float64Array): number {
   gradient.fill(0);
+  refreshContacts(springs, positions);
   let energy = 0;
-  for (let k = 0; k < springs.count; k++) {
-    const a = springs.first[k];
-    const b = springs.second[k];
-    const dx = positions[a] - positions[b];
-    const dy = positions[a + 1] - positions[b + 1];
-    const dz = positions[a + 2] - positions[b + 2];
-    const length = Math.max(1e-9, Math.sqrt(dx * dx + dy * dy + dz * dz));
-    const stretch = length - springs.length[k];
-    if (springs.repulsiveOnly[k] && stretch >= 0) continue;
-    energy += springs.weight[k] * stretch * stretch;
-    const factor = (2 * springs.weight[k] * stretch) / length;
-    gradient[a] += factor * dx;
-    gradient[a + 1] += factor * dy;
-    gradient[a + 2] += factor * dz;
-    gradient[b] -= factor * dx;
-    gradient[b + 1] -= factor * dy;
-    gradient[b + 2] -= factor * dz;
-  }
+  for (let k = 0; k < springs.fixedCount; k++) energy += addSpring(springs, k, positions, gradient, false);
+  const near = springs.contacts.near;
+  for (let n = 0; n < springs.contacts.nearCount; n++) energy += addSpring(springs, near[n], positions, gradient, true);
+  return energy;
+}
+
+/** Adds one spring's pull to `gradient` and returns its energy. */
+function addSpring(springs: PackedSprings, k: number, positions: Float64Array, gradient: Float64Array, pushOnly: boolean): number {
+  const a = springs.first[k];
+  const b = springs.second[k];
+  const dx = positions[a] - positions[b];
+  const dy = positions[a + 1] - positions[b + 1];
+  const dz = positions[a + 2] - positions[b + 2];
+  const length = Math.max(1e-9, Math.sqrt(dx * dx + dy * dy + dz * dz));
+  const stretch = length - springs.length[k];
+  if (pushOnly && stretch >= 0) return 0;
+  const energy = springs.weight[k] * stretch * stretch;
+  const factor = (2 * springs.weight[k] * stretch) / length;
+  gradient[a] += factor * dx;
+  gradient[a + 1] += factor * dy;
+  gradient[a + 2] += factor * dz;
+  gradient[b] -= factor * dx;
+  gradient[b + 1] -= factor * dy;
+  gradient[b + 2] -= factor * dz;
   return energy;
 }
