@@ -1,5 +1,6 @@
 // Benchmark of the bundled core (dist/core.js): cold analyses of distinct species, cached
-// lookups, the reader's worst cases, and whole drug-sized SMILES against RDKit (smilesAnalysis.mjs).
+// lookups, the reader's worst cases, whole drug-sized SMILES against RDKit (smilesAnalysis.mjs), and
+// 3D models of drug-sized SMILES (coordinates.mjs).
 // `npm run bench` builds first. Figures are printed with the aims beside them; `--strict` makes a
 // missed aim exit with status 1 (for CI machines we trust).
 import { createRequire } from "node:module";
@@ -9,6 +10,7 @@ import { fileURLToPath } from "node:url";
 import { generateSpecies } from "./speciesGenerator.mjs";
 import { randomStrings } from "./randomStrings.mjs";
 import { runSmilesAnalysisBench } from "./smilesAnalysis.mjs";
+import { runCoordinatesBench } from "./coordinates.mjs";
 
 const corePath = fileURLToPath(new URL("../../dist/core.js", import.meta.url));
 if (!existsSync(corePath)) {
@@ -122,6 +124,7 @@ const species = benchCold();
 benchCached(species);
 benchReader();
 missed.push(...(await runSmilesAnalysisBench()));
+missed.push(...runCoordinatesBench());
 if (missed.length > 0) {
   console.log(`\nmissed: ${missed.join(", ")}`);
   if (strict) process.exitCode = 1;
