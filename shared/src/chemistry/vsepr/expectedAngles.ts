@@ -89,19 +89,20 @@ function rangeFor(
 
   let min = ideal;
   let max = ideal;
-  const notes: string[] = [];
+  // Which of the notes apply, in order; the joined text is made once per combination and then
+  // shared, since every centre with the same reasons gets the same words.
+  let lonePairNote = 0; // 0 none, 1 bent axis, 2 squeezed angles
+  let bulkyNote = 0;
+  let neighbourNote = 0; // 0 none, 1 multiple bond, 2 unlike neighbours
+  let radicalNote = 0;
   if (context.loneDomains > 0 && !context.lonePairsBalanced) {
     const squeeze = lonePairSqueeze(context, ideal, between);
     min = ideal - squeeze.down;
     max = Math.min(180, ideal + squeeze.up);
-    notes.push(
-      ideal >= 170
-        ? "lone pairs bend the axis slightly"
-        : "lone pairs repel more than bonds and squeeze the bond angles below ideal",
-    );
+    lonePairNote = ideal >= 170 ? 1 : 2;
     if (context.bulkyNeighbours && ideal < 170) {
       max += 4;
-      notes.push("large neighbours can hold the angle open a little");
+      bulkyNote = 1;
     }
   }
   if (!context.identicalNeighbours || context.hasMultipleBond) {
@@ -109,18 +110,33 @@ function rangeFor(
     min = Math.min(min, ideal - spread);
     const opening = context.multipleBondCount >= 2 ? 18 : context.hasMultipleBond ? 6 : 5;
     if (ideal < 170) max = Math.max(max, ideal + opening);
-    notes.push(
-      context.hasMultipleBond
-        ? "a multiple bond takes more room and pushes the other bonds together"
-        : "unlike neighbours make the angles unequal",
-    );
+    neighbourNote = context.hasMultipleBond ? 1 : 2;
   }
   if (context.radical) {
     max = Math.min(180, max + 15);
     min -= 5;
-    notes.push("a single electron repels less than a pair, so the angle can open past the ideal");
+    radicalNote = 1;
   }
-  return { min: round1(min), max: round1(Math.min(180, max)), note: notes.join("; ") || "close to ideal" };
+  const note = joinedNote(lonePairNote, bulkyNote, neighbourNote, radicalNote);
+  return { min: round1(min), max: round1(Math.min(180, max)), note };
+}
+
+const joinedNotes: string[] = [];
+
+function joinedNote(lonePair: number, bulky: number, neighbour: number, radical: number): string {
+  const key = ((lonePair * 2 + bulky) * 3 + neighbour) * 2 + radical;
+  const known = joinedNotes[key];
+  if (known !== undefined) return known;
+  const notes: string[] = [];
+  if (lonePair === 1) notes.push("lone pairs bend the axis slightly");
+  if (lonePair === 2) notes.push("lone pairs repel more than bonds and squeeze the bond angles below ideal");
+  if (bulky === 1) notes.push("large neighbours can hold the angle open a little");
+  if (neighbour === 1) notes.push("a multiple bond takes more room and pushes the other bonds together");
+  if (neighbour === 2) notes.push("unlike neighbours make the angles unequal");
+  if (radical === 1) notes.push("a single electron repels less than a pair, so the angle can open past the ideal");
+  const note = notes.join("; ") || "close to ideal";
+  joinedNotes[key] = note;
+  return note;
 }
 
 function lonePairSqueeze(
