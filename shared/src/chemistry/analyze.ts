@@ -31,6 +31,13 @@ export function analyzeSpecies(text: string): AnalysisResult {
 }
 
 const smilesMemo = new Map<string, AnalysisResult>();
+/**
+ * SMILES memo budget in characters of SMILES text: a drug-sized molecule's analysis takes far more
+ * memory than a small species', so a long-running server keeps fewer of them (about 4,000 such
+ * molecules) rather than a fixed count.
+ */
+const SMILES_MEMO_CHARACTERS = 200_000;
+let smilesMemoCharacters = 0;
 
 /** Analyse a molecule written as SMILES (the whole text); never throws. */
 export function analyzeSmiles(text: string): AnalysisResult {
@@ -48,8 +55,13 @@ export function analyzeSmiles(text: string): AnalysisResult {
   } catch (error) {
     result = { ok: false, problem: { code: "no-valid-structure", message: `internal error: ${String(error)}` } };
   }
-  if (smilesMemo.size >= MEMO_LIMIT) smilesMemo.delete(smilesMemo.keys().next().value as string);
+  while (smilesMemo.size > 0 && (smilesMemo.size >= MEMO_LIMIT || smilesMemoCharacters + text.length > SMILES_MEMO_CHARACTERS)) {
+    const oldest = smilesMemo.keys().next().value as string;
+    smilesMemo.delete(oldest);
+    smilesMemoCharacters -= oldest.length;
+  }
   smilesMemo.set(text, result);
+  smilesMemoCharacters += text.length;
   return result;
 }
 
