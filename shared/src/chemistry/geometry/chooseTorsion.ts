@@ -84,10 +84,11 @@ export function chooseChildRotation(state: PlacementState, parent: number, child
       : Array.from({ length: 24 }, (_, k) => k * GRID_STEP);
   const countLoneAnti = bothTetrahedral && parentSites.loneDomains.length > 0 && childSites.loneDomains.length > 0;
 
+  const surroundings = surroundingsOf(state, parent, child);
   let best: Candidate | undefined;
   for (const offset of offsets) {
     const rotation = composeRotations(rotationAboutAxis(axis, eclipsed + offset), aligned);
-    const candidate = { rotation, keys: scoreKeys(state, parent, child, axis, rotation, countLoneAnti) };
+    const candidate = { rotation, keys: scoreKeys(state, surroundings, parent, child, axis, rotation, countLoneAnti) };
     if (!best || isBetter(candidate.keys, best.keys)) best = candidate;
   }
   return best!.rotation;
@@ -117,8 +118,60 @@ function keepsPlane(first: AtomSites, second: AtomSites): boolean {
   );
 }
 
+/**
+ * What the candidates of one torsion are scored against, worked out once for all of them: the
+ * atoms placed so far (the child aside) with their lone-pair stand-in points, and which of them
+ * are bonded to each of the child's unplaced neighbours.
+ */
+interface Surroundings {
+  /** The child's neighbours other than the parent that are not placed yet. */
+  readonly fresh: readonly LocalLigandRef[];
+  /** Coordinates of the placed atoms, three numbers each, in index order. */
+  readonly atoms: Float64Array;
+  /** Per placed atom, per fresh neighbour: 1 when the two are bonded (no repulsion then). */
+  readonly bondedToFresh: Uint8Array;
+  /** Lone-pair points of the placed atoms with a fixed frame, three numbers each. */
+  readonly lonePairs: Float64Array;
+  /** Placed atom k owns lone-pair points lonePairStart[k] .. lonePairStart[k + 1] - 1. */
+  readonly lonePairStart: Int32Array;
+}
+
+interface LocalLigandRef {
+  readonly atom: number;
+  readonly direction: Vec3;
+}
+
+function surroundingsOf(state: PlacementState, parent: number, child: number): Surroundings {
+  const fresh = state.sites[child].ligands.filter((ligand) => ligand.atom !== parent && !state.positions[ligand.atom]);
+  const placed: number[] = [];
+  state.positions.forEach((position, atom) => {
+    if (position && atom !== child) placed.push(atom);
+  });
+  const atoms = new Float64Array(3 * placed.length);
+  const bondedToFresh = new Uint8Array(placed.length * fresh.length);
+  const lonePairStart = new Int32Array(placed.length + 1);
+  const lonePairPoints: number[] = [];
+  placed.forEach((atom, k) => {
+    const position = state.positions[atom]!;
+    atoms.set(position, 3 * k);
+    fresh.forEach((ligand, f) => {
+      bondedToFresh[k * fresh.length + f] = state.bonded(atom, ligand.atom) ? 1 : 0;
+    });
+    lonePairStart[k] = lonePairPoints.length / 3;
+    const rotation = state.rotations[atom];
+    if (rotation) {
+      for (const domain of state.sites[atom].loneDomains) {
+        lonePairPoints.push(...add(position, scale(rotate(rotation, domain.direction), LONE_PAIR_REACH)));
+      }
+    }
+  });
+  lonePairStart[placed.length] = lonePairPoints.length / 3;
+  return { fresh, atoms, bondedToFresh, lonePairs: Float64Array.from(lonePairPoints), lonePairStart };
+}
+
 function scoreKeys(
   state: PlacementState,
+  surroundings: Surroundings,
   parent: number,
   child: number,
   axis: Vec3,
@@ -128,7 +181,6 @@ function scoreKeys(
   const childPosition = state.positions[child]!;
   const childSites = state.sites[child];
   let closure = 0;
-  let repulsion = 0;
   const newAtoms: { atom: number; position: Vec3 }[] = [];
   for (const ligand of childSites.ligands) {
     if (ligand.atom === parent) continue;
@@ -140,19 +192,26 @@ function scoreKeys(
   for (const fresh of newAtoms) closure += oneAheadClosure(state, child, fresh.atom, fresh.position);
   const newLonePairs = childSites.loneDomains.map((d) => add(childPosition, scale(rotate(rotation, d.direction), LONE_PAIR_REACH)));
 
-  state.positions.forEach((placed, atom) => {
-    if (!placed || atom === child) return;
-    for (const fresh of newAtoms) {
-      if (!state.bonded(atom, fresh.atom)) repulsion += push(distance(placed, fresh.position));
+  // Summed in the same order as atom by atom: each placed atom against the new atoms, the new
+  // lone pairs, then its own lone pairs against the new atoms.
+  const { atoms, bondedToFresh, lonePairs, lonePairStart } = surroundings;
+  const freshCount = newAtoms.length;
+  const placedCount = atoms.length / 3;
+  let repulsion = 0;
+  for (let k = 0; k < placedCount; k++) {
+    const x = atoms[3 * k];
+    const y = atoms[3 * k + 1];
+    const z = atoms[3 * k + 2];
+    for (let f = 0; f < freshCount; f++) {
+      if (bondedToFresh[k * freshCount + f] === 0) repulsion += pushAt(x, y, z, newAtoms[f].position);
     }
-    for (const pair of newLonePairs) repulsion += LONE_PAIR_WEIGHT * push(distance(placed, pair));
-    const placedRotation = state.rotations[atom];
-    if (!placedRotation) return;
-    for (const domain of state.sites[atom].loneDomains) {
-      const placedPair = add(placed, scale(rotate(placedRotation, domain.direction), LONE_PAIR_REACH));
-      for (const fresh of newAtoms) repulsion += LONE_PAIR_WEIGHT * push(distance(placedPair, fresh.position));
+    for (const pair of newLonePairs) repulsion += LONE_PAIR_WEIGHT * pushAt(x, y, z, pair);
+    for (let p = lonePairStart[k]; p < lonePairStart[k + 1]; p++) {
+      for (let f = 0; f < freshCount; f++) {
+        repulsion += LONE_PAIR_WEIGHT * pushAt(lonePairs[3 * p], lonePairs[3 * p + 1], lonePairs[3 * p + 2], newAtoms[f].position);
+      }
     }
-  });
+  }
 
   return [
     quantize(closure, 1e-3),
@@ -186,9 +245,13 @@ function oneAheadClosure(state: PlacementState, child: number, atom: number, pos
   return error;
 }
 
-/** Soft repulsion between two points that are not bonded. */
-function push(length: number): number {
-  return 1 / Math.max(length, 0.1) ** 4;
+/** Soft repulsion between two points that are not bonded: 1 / distance⁴, capped at 0.1 Å. */
+function pushAt(x: number, y: number, z: number, point: Vec3): number {
+  const dx = x - point[0];
+  const dy = y - point[1];
+  const dz = z - point[2];
+  const squared = Math.max(dx * dx + dy * dy + dz * dz, 0.01);
+  return 1 / (squared * squared);
 }
 
 function quantize(value: number, step: number): number {
