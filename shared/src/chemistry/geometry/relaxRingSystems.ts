@@ -36,6 +36,8 @@ const EXACT_STRAIN = 1e-12;
 const MAX_WALK_STARTS = 6;
 /** Most starts relaxed, least strained first. */
 const MAX_RELAXATIONS = 4;
+/** Relative difference below which two relaxed strains count as the same minimum. */
+const SAME_STRAIN = 1e-9;
 /** Contact strain (Å²) left alone: a pair pressed about 0.01 Å too close. */
 const ACCEPTED_OVERLAP = 1e-4;
 /** The repair of bumping atoms: enough to push them apart, not to converge tightly. */
@@ -319,8 +321,11 @@ function leastStrained(model: SpringModel, first: Placement, otherStarts: () => 
   let best: Placement | undefined;
   for (const start of starts.slice(0, MAX_RELAXATIONS)) {
     const relaxed = { ...model.relax(start.positions), rotations: start.rotations, inPlace: start.inPlace };
+    // Two starts that relax to the same strain have found the same shape: a strain the ring
+    // system cannot shed (a five-membered ring's), not a tangle another start would undo.
+    const agrees = best !== undefined && Math.abs(relaxed.strain - best.strain) <= SAME_STRAIN * best.strain + EXACT_STRAIN;
     if (!best || relaxed.strain < best.strain - EXACT_STRAIN) best = relaxed;
-    if (best.strain <= ACCEPTED_STRAIN) break;
+    if (best.strain <= ACCEPTED_STRAIN || agrees) break;
   }
   return best!;
 }
