@@ -10,14 +10,12 @@
 import type { AtomSites } from "./atomSites";
 import { angleDegrees, type Vec3 } from "./vectors";
 
-/** One distance the model wants: atoms, target length in ångströms, stiffness. */
+/** One bond or angle distance the model wants: atoms, target length in ångströms, stiffness. */
 interface Spring {
   readonly first: number;
   readonly second: number;
   readonly length: number;
   readonly weight: number;
-  /** Push only: counts only while the atoms are closer than `length`. */
-  readonly repulsiveOnly: boolean;
 }
 
 export interface SpringModelInput {
@@ -73,7 +71,7 @@ export interface RelaxBudget {
  * combination of forces, so a start that is symmetric stays exactly symmetric.
  */
 export function springModel(input: SpringModelInput): SpringModel {
-  const springs = packSprings(springsOf(input), input.sites.length);
+  const springs = packSprings(input);
   const iterations = Math.min(MAX_ITERATIONS, Math.floor(WORK_BUDGET / Math.max(1, springs.count)));
   return {
     strain: (start) => energyAndGradient(springs, Float64Array.from(start.flat()), new Float64Array(3 * start.length)),
@@ -233,19 +231,42 @@ const CONTACT_SKIN = 1;
 /** Rebuild the list once an atom has moved this far (Å); a little under half the skin. */
 const REBUILD_DISPLACEMENT = CONTACT_SKIN / 2 - 1e-6;
 
-function packSprings(springs: readonly Spring[], atomCount: number): PackedSprings {
-  const fixedCount = springs.filter((s) => !s.repulsiveOnly).length;
-  // Bonds and angles first, then contacts, each in the order they were made.
-  const ordered = [...springs.filter((s) => !s.repulsiveOnly), ...springs.filter((s) => s.repulsiveOnly)];
+function packSprings(input: SpringModelInput): PackedSprings {
+  const atomCount = input.sites.length;
+  const { fixed, near } = bondAndAngleSprings(input);
+  // Every pair that is neither bonded nor 1,3 gets a contact spring, in pair order.
+  const contactCount = (atomCount * (atomCount - 1)) / 2 - near.size;
+  const count = fixed.length + contactCount;
+  const first = new Int32Array(count);
+  const second = new Int32Array(count);
+  const length = new Float64Array(count);
+  const weight = new Float64Array(count);
+  fixed.forEach((spring, k) => {
+    first[k] = 3 * spring.first;
+    second[k] = 3 * spring.second;
+    length[k] = spring.length;
+    weight[k] = spring.weight;
+  });
+  let k = fixed.length;
+  for (let a = 0; a < atomCount; a++) {
+    for (let b = a + 1; b < atomCount; b++) {
+      if (near.has(a * atomCount + b)) continue;
+      first[k] = 3 * a;
+      second[k] = 3 * b;
+      length[k] = input.contactDistance(a, b);
+      weight[k] = CONTACT_WEIGHT;
+      k++;
+    }
+  }
   const builtAt = new Float64Array(3 * atomCount).fill(Number.NaN);
   return {
-    count: ordered.length,
-    fixedCount,
-    first: Int32Array.from(ordered, (s) => 3 * s.first),
-    second: Int32Array.from(ordered, (s) => 3 * s.second),
-    length: Float64Array.from(ordered, (s) => s.length),
-    weight: Float64Array.from(ordered, (s) => s.weight),
-    contacts: { near: new Int32Array(ordered.length - fixedCount), nearCount: 0, builtAt },
+    count,
+    fixedCount: fixed.length,
+    first,
+    second,
+    length,
+    weight,
+    contacts: { near: new Int32Array(contactCount), nearCount: 0, builtAt },
   };
 }
 
@@ -280,15 +301,17 @@ function refreshContacts(springs: PackedSprings, positions: Float64Array): void 
   contacts.nearCount = count;
 }
 
-function springsOf(input: SpringModelInput): Spring[] {
-  const springs: Spring[] = [];
-  const near = new Set<string>();
-  const key = (a: number, b: number) => (a < b ? `${a}-${b}` : `${b}-${a}`);
+/** Bond and angle springs, and the pairs they join (as `lower * atomCount + higher`). */
+function bondAndAngleSprings(input: SpringModelInput): { fixed: Spring[]; near: Set<number> } {
+  const atomCount = input.sites.length;
+  const fixed: Spring[] = [];
+  const near = new Set<number>();
+  const key = (a: number, b: number) => (a < b ? a * atomCount + b : b * atomCount + a);
   input.sites.forEach((site, atom) => {
     for (const ligand of site.ligands) {
       near.add(key(atom, ligand.atom));
       if (atom < ligand.atom) {
-        springs.push({ first: atom, second: ligand.atom, length: input.bondLength(atom, ligand.atom), weight: BOND_WEIGHT, repulsiveOnly: false });
+        fixed.push({ first: atom, second: ligand.atom, length: input.bondLength(atom, ligand.atom), weight: BOND_WEIGHT });
       }
     }
   });
@@ -303,17 +326,11 @@ function springsOf(input: SpringModelInput): Spring[] {
         const lb = input.bondLength(centre, b.atom);
         const cosine = Math.cos((angleDegrees(a.direction, b.direction) * Math.PI) / 180);
         const length = Math.sqrt(Math.max(0, la * la + lb * lb - 2 * la * lb * cosine));
-        springs.push({ first: a.atom, second: b.atom, length, weight: ANGLE_WEIGHT, repulsiveOnly: false });
+        fixed.push({ first: a.atom, second: b.atom, length, weight: ANGLE_WEIGHT });
       }
     });
   });
-  for (let a = 0; a < input.sites.length; a++) {
-    for (let b = a + 1; b < input.sites.length; b++) {
-      if (near.has(key(a, b))) continue;
-      springs.push({ first: a, second: b, length: input.contactDistance(a, b), weight: CONTACT_WEIGHT, repulsiveOnly: true });
-    }
-  }
-  return springs;
+  return { fixed, near };
 }
 
 /** Energy of the springs, with its gradient written into `gradient`. */
