@@ -3,7 +3,8 @@
  * from covalent radii (double bonds ×0.87, triple ×0.78, in between interpolated for the
  * resonance-averaged orders of `resonanceBondOrders`, so benzene's ring bonds are ×0.935), placed
  * by a walk over the bonds with torsions chosen to keep π systems planar and to stagger
- * single bonds, then each ring system closed by a short relaxation of its own (`relaxRingSystems`). Atoms in three- and four-membered rings
+ * single bonds, then each ring system closed by a short relaxation of its own
+ * (`relaxRingSystems`). Atoms in three- and four-membered rings
  * take 60° or 90° ring angles with their other bonds spread round them (`smallRingSites`), so
  * cages such as cubane reach their symmetric shape. Acyclic species, benzene-like rings, chairs
  * and strain-free cages keep every angle ideal; other rings carry a few degrees of strain. A model
