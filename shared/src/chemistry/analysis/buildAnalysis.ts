@@ -5,7 +5,7 @@
 import { graphIndex } from "../graphIndex";
 import { atomTraits } from "../lewis/electronBookkeeping";
 import type { LewisStructure } from "../lewis/chooseLewisStructure";
-import type { CentreAnalysis, MolecularGraph, PolarityVerdict, SpeciesAnalysis, SpeciesReading } from "../types";
+import type { CentreAnalysis, PolarityVerdict, SpeciesAnalysis, SpeciesReading } from "../types";
 import { describeCentre, type CentreDetail, type SharedCentreDetail } from "../vsepr/analyzeCentre";
 import { measuredAnglesFor } from "../vsepr/measuredAngles";
 import { judgePolarity } from "../vsepr/polarity";
@@ -24,12 +24,10 @@ export function buildAnalysis(
   // centres themselves are put together the first time anyone asks for them.
   const descriptions: CentreAnalysis[] = [];
   const indices: number[] = [];
-  let single: SharedCentreDetail | undefined;
   let allStericFourOrLess = true;
   for (let index = 0; index < atomCount; index++) {
     const described = describeCentre(graph, index, radical);
     if (!described) continue;
-    if (descriptions.length === 0) single = described;
     descriptions.push(described.alike);
     indices.push(index);
     if (described.alike.stericNumber > 4) allStericFourOrLess = false;
@@ -87,13 +85,7 @@ export function buildAnalysis(
   let resonanceForms = structure.resonanceForms;
   if (!Number.isFinite(resonanceForms) || resonanceForms < 1) resonanceForms = 1;
 
-  // One centre: ideal directions settle polarity exactly, at once. Several: the whole 3D
-  // model is needed, which costs milliseconds, so it is built the first time anyone asks.
-  const judge =
-    descriptions.length > 1
-      ? judgeFromShape(graph, reading.charge)
-      : judgeFromCentre(graph, single ? [ownDetail(single, indices[0])] : [], mainCentre, reading.charge);
-  const analysis: SpeciesAnalysis = {
+  const analysis = {
     reading,
     valenceElectrons: structure.valenceElectrons,
     radical,
@@ -101,20 +93,72 @@ export function buildAnalysis(
     expandedOctet,
     graph,
     resonanceForms,
-    get centres(): readonly CentreAnalysis[] {
-      const centres = ownCentres(descriptions, indices);
-      Object.defineProperty(analysis, "centres", { value: centres, enumerable: true });
-      return centres;
-    },
-    get polarity(): PolarityVerdict {
-      const verdict = judge(analysis);
-      Object.defineProperty(analysis, "polarity", { value: verdict, enumerable: true });
-      return verdict;
-    },
-    measuredAngles: measuredAnglesFor(reading.composition, reading.charge),
-    warnings,
-  };
-  return analysis;
+  } as Record<PropertyKey, unknown>;
+  // `centres` and `polarity` are worked out the first time they are read (one centre: ideal
+  // directions settle polarity at once; several: the whole 3D model is needed, which costs
+  // milliseconds). The getters are shared by every analysis and find what they need in a hidden
+  // property: getters written into an object literal would be new functions for each analysis
+  // and put the object in the slow dictionary mode, which costs more than the rest of a small
+  // analysis to make and to keep.
+  Object.defineProperty(analysis, "centres", CENTRES_ON_FIRST_READ);
+  Object.defineProperty(analysis, "polarity", POLARITY_ON_FIRST_READ);
+  analysis.measuredAngles = measuredAnglesFor(reading.composition, reading.charge);
+  // Kept with the memoised analysis: copied to arrays of their final size, since an array grown
+  // by push keeps room for more.
+  analysis.warnings = warnings.length === 0 ? warnings : warnings.slice();
+  const pending: PendingParts = { descriptions: descriptions.slice(), indices: indices.slice(), mainCentre };
+  Object.defineProperty(analysis, PENDING, { value: pending, writable: true, configurable: true });
+  return analysis as unknown as SpeciesAnalysis;
+}
+
+/** What the first read of `centres` or `polarity` needs that the analysis does not show. */
+interface PendingParts {
+  readonly descriptions: readonly CentreAnalysis[];
+  readonly indices: readonly number[];
+  readonly mainCentre: number | undefined;
+}
+
+const PENDING = Symbol("pending analysis parts");
+
+function pendingParts(analysis: SpeciesAnalysis): PendingParts {
+  return (analysis as unknown as Record<symbol, PendingParts>)[PENDING];
+}
+
+const CENTRES_ON_FIRST_READ: PropertyDescriptor = {
+  get(this: SpeciesAnalysis): readonly CentreAnalysis[] {
+    const { descriptions, indices } = pendingParts(this);
+    const centres = ownCentres(descriptions, indices);
+    Object.defineProperty(this, "centres", { value: centres, enumerable: true });
+    return centres;
+  },
+  enumerable: true,
+  configurable: true,
+};
+
+const POLARITY_ON_FIRST_READ: PropertyDescriptor = {
+  get(this: SpeciesAnalysis): PolarityVerdict {
+    const verdict = judge(this, pendingParts(this));
+    Object.defineProperty(this, "polarity", { value: verdict, enumerable: true });
+    return verdict;
+  },
+  enumerable: true,
+  configurable: true,
+};
+
+/**
+ * One centre: judged from its ideal directions. Its ligands and sites are worked out again here
+ * rather than kept from the analysis, so that a memoised analysis does not hold on to them.
+ */
+function judge(analysis: SpeciesAnalysis, parts: PendingParts): PolarityVerdict {
+  const { graph, reading } = analysis;
+  if (parts.descriptions.length > 1) return polarityFromShape(graph, shapeOf(analysis), reading.charge);
+  const details: CentreDetail[] = [];
+  if (parts.descriptions.length === 1) {
+    const index = parts.indices[0];
+    const described = describeCentre(graph, index, analysis.radical);
+    if (described) details.push(ownDetail(described, index));
+  }
+  return judgePolarity(graph, details, parts.mainCentre, reading.charge);
 }
 
 /** Each centre as its own object: a shared description gets the centre's own index. */
@@ -130,21 +174,4 @@ function ownCentres(descriptions: readonly CentreAnalysis[], indices: readonly n
 function ownDetail(described: SharedCentreDetail, index: number): CentreDetail {
   const { alike, ligands, sites } = described;
   return { centre: alike.index === index ? alike : { ...alike, index }, ligands, sites };
-}
-
-// The polarity judges are made apart from buildAnalysis so that each closure keeps only what it
-// needs: a memoised analysis of a large molecule must not hold on to every centre's ligands and
-// sites through its polarity getter.
-
-function judgeFromShape(graph: MolecularGraph, charge: number): (analysis: SpeciesAnalysis) => PolarityVerdict {
-  return (analysis) => polarityFromShape(graph, shapeOf(analysis), charge);
-}
-
-function judgeFromCentre(
-  graph: MolecularGraph,
-  details: readonly CentreDetail[],
-  mainCentre: number | undefined,
-  charge: number,
-): (analysis: SpeciesAnalysis) => PolarityVerdict {
-  return () => judgePolarity(graph, details, mainCentre, charge);
 }
