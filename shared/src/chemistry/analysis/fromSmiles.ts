@@ -8,6 +8,7 @@ import { countEquivalentStructures } from "./equivalentStructures";
 import { atomTraits } from "../lewis/electronBookkeeping";
 import type { LewisStructure } from "../lewis/chooseLewisStructure";
 import { kekulize, parseSmiles, smilesFormula, smilesNetCharge } from "../smiles";
+import { sharedAtom } from "../sharedAtoms";
 import type { SmilesMolecule } from "../smiles";
 import type {
   DoubleBondStereo,
@@ -157,38 +158,6 @@ export function smilesStructure(text: string): SmilesOutcome {
       },
     },
   };
-}
-
-// Graph atoms are plain read-only values with no index of their own, so every atom alike in
-// element, lone pairs, odd electron, charge and aromatic flag is one shared object: a large
-// molecule's many CH2 carbons and hydrogens then cost nothing to keep with its memoised analysis.
-const atomsAlike = new Map<number, GraphAtom>();
-
-function sharedAtom(
-  atomicNumber: number,
-  symbol: string,
-  lonePairs: number,
-  unpairedElectrons: number,
-  formalCharge: number,
-  aromatic: boolean,
-): GraphAtom {
-  const fits =
-    atomicNumber > 0 && atomicNumber < 128 && lonePairs >= 0 && lonePairs < 16 && formalCharge >= -15 && formalCharge <= 15;
-  if (!fits) return makeAtom(symbol, lonePairs, unpairedElectrons, formalCharge, aromatic);
-  const key = ((((atomicNumber * 16 + lonePairs) * 2 + unpairedElectrons) * 32 + formalCharge + 15) * 2) + (aromatic ? 1 : 0);
-  let atom = atomsAlike.get(key);
-  if (atom === undefined) {
-    atom = makeAtom(symbol, lonePairs, unpairedElectrons, formalCharge, aromatic);
-    atomsAlike.set(key, atom);
-  }
-  return atom;
-}
-
-function makeAtom(symbol: string, lonePairs: number, unpairedElectrons: number, formalCharge: number, aromatic: boolean): GraphAtom {
-  // Two literal shapes rather than a spread: aromatic is present only when written so.
-  return aromatic
-    ? { symbol, lonePairs, unpairedElectrons, formalCharge, aromatic: true }
-    : { symbol, lonePairs, unpairedElectrons, formalCharge };
 }
 
 function compositionOf(symbols: readonly string[]): FormulaPart[] {
