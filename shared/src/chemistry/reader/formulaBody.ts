@@ -156,19 +156,22 @@ function scan(text: string, start: number, end: number): FormulaBody {
   if (open.kind === "hydrate") closeHydrate(stack, end);
   if (root.items === 0) fail("malformed-formula", "There is no element in this formula.", start, end);
   const normalizedText = wholeBodyBracket ? root.text.slice(1, -1) : root.text;
-  const composition: FormulaPart[] = [];
-  for (const [symbol, count] of root.counts) composition.push({ symbol, count });
-  return { composition, writtenSequence: root.parts, normalizedText };
+  // Arrays of the final size: readings are memoised, and a grown array keeps its spare room.
+  const composition: FormulaPart[] = new Array(root.counts.size);
+  let next = 0;
+  for (const [symbol, count] of root.counts) composition[next++] = { symbol, count };
+  return { composition, writtenSequence: root.parts.slice(), normalizedText };
 }
 
 function readElement(text: string, i: number, end: number, frame: Frame): number {
   const code = text.charCodeAt(i);
   const twoLetters = i + 1 < end && isLowerLetter(text.charCodeAt(i + 1));
   const symbolEnd = twoLetters ? i + 2 : i + 1;
-  const symbol = text.slice(i, symbolEnd);
-  if (!isUpperLetter(code) || elementBySymbol(symbol) === undefined) {
-    fail("unknown-element", `"${symbol}" is not an element symbol.`, i, symbolEnd);
-  }
+  const written = text.slice(i, symbolEnd);
+  const element = isUpperLetter(code) ? elementBySymbol(written) : undefined;
+  if (element === undefined) fail("unknown-element", `"${written}" is not an element symbol.`, i, symbolEnd);
+  // The table's own string: one shared copy per element rather than one per reading.
+  const symbol = element.symbol;
   const { value: count, next } = readCount(text, symbolEnd, end);
   frame.parts.push({ symbol, count });
   addCount(frame.counts, symbol, count, i, next);
