@@ -330,7 +330,7 @@ function scratchFor(atomCount: number): { stamp: Int32Array; depthOf: Int8Array;
 }
 
 /** Add the interior angle of a small ring the centre sits in (60° in C3, about 88° in C4). */
-function withRingAngle(angles: AngleExpectation[], ringSize: number | undefined): AngleExpectation[] {
+function withRingAngle(angles: readonly AngleExpectation[], ringSize: number | undefined): readonly AngleExpectation[] {
   if (ringSize === undefined || angles.length === 0) return angles;
   const polygon = 180 - 360 / ringSize;
   return [

@@ -39,11 +39,55 @@ function pairLabel(context: AngleContext, i: number, j: number, ideal: number): 
   return undefined;
 }
 
-export function expectedAngles(context: AngleContext): AngleExpectation[] {
+/**
+ * The expected angles of a centre. The list depends only on a handful of small facts of the
+ * context, so it is worked out once per combination of them and then shared, read-only, by every
+ * centre alike in those facts (the many species of a table share a few dozen lists).
+ */
+export function expectedAngles(context: AngleContext): readonly AngleExpectation[] {
+  const key = expectationKey(context);
+  if (key < 0) return workOutExpectedAngles(context);
+  let byKey = expectationMemo.get(context.electronGeometry);
+  if (byKey === undefined) {
+    byKey = new Map();
+    expectationMemo.set(context.electronGeometry, byKey);
+  }
+  let known = byKey.get(key);
+  if (known === undefined) {
+    known = workOutExpectedAngles(context);
+    byKey.set(key, known);
+  }
+  return known;
+}
+
+function workOutExpectedAngles(context: AngleContext): AngleExpectation[] {
   return angleGroups(context).map(({ ideal, between }) => {
     const { min, max, note } = rangeFor(context, ideal, between);
     return between ? { ideal, min, max, note, between } : { ideal, min, max, note };
   });
+}
+
+// Remembered lists: by electron geometry, then by the packed facts below.
+const expectationMemo = new Map<string, Map<number, readonly AngleExpectation[]>>();
+
+/**
+ * Every fact of the context that angleGroups and rangeFor read, packed into one small integer
+ * (the electron geometry is the outer key); -1 when some fact is out of the packed range.
+ */
+function expectationKey(context: AngleContext): number {
+  const { stericNumber, loneDomains, centrePeriod } = context;
+  if (stericNumber < 0 || stericNumber > 15 || loneDomains < 0 || loneDomains > 15) return -1;
+  if (centrePeriod < 0 || centrePeriod > 15) return -1;
+  let key = stericNumber;
+  key = key * 16 + loneDomains;
+  key = key * 16 + centrePeriod;
+  key = key * 2 + (context.lonePairsBalanced ? 1 : 0);
+  key = key * 2 + (context.identicalNeighbours ? 1 : 0);
+  key = key * 2 + (context.hasMultipleBond ? 1 : 0);
+  key = key * 2 + (context.multipleBondCount >= 2 ? 1 : 0);
+  key = key * 2 + (context.bulkyNeighbours ? 1 : 0);
+  key = key * 2 + (context.radical ? 1 : 0);
+  return key;
 }
 
 interface AngleGroup {
@@ -73,10 +117,25 @@ function angleGroups(context: AngleContext): readonly AngleGroup[] {
   return sorted;
 }
 
-/** Distinct ideal angles of a centre, ascending, from its cached angle groups. */
-export function idealAnglesFor(context: AngleContext): number[] {
-  return [...new Set(angleGroups(context).map((group) => group.ideal))];
+/**
+ * Distinct ideal angles of a centre, ascending, from its cached angle groups; one shared,
+ * read-only list per electron geometry and number of lone-pair domains.
+ */
+export function idealAnglesFor(context: AngleContext): readonly number[] {
+  let byLoneDomains = idealAnglesMemo.get(context.electronGeometry);
+  if (byLoneDomains === undefined) {
+    byLoneDomains = [];
+    idealAnglesMemo.set(context.electronGeometry, byLoneDomains);
+  }
+  const small = context.loneDomains >= 0 && context.loneDomains < 16;
+  const known = small ? byLoneDomains[context.loneDomains] : undefined;
+  if (known !== undefined) return known;
+  const angles = [...new Set(angleGroups(context).map((group) => group.ideal))];
+  if (small) byLoneDomains[context.loneDomains] = angles;
+  return angles;
 }
+
+const idealAnglesMemo = new Map<string, (readonly number[] | undefined)[]>();
 
 function rangeFor(
   context: AngleContext,
