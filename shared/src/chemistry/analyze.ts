@@ -9,10 +9,11 @@ import type { AnalysisResult, Problem, SpeciesReading } from "./types";
 import { buildAnalysis } from "./analysis/buildAnalysis";
 import { chooseSkeletonStructure } from "./analysis/chooseSkeletonStructure";
 import { smilesStructure } from "./analysis/fromSmiles";
+import { boundedMemo } from "./boundedMemo";
 import { candidateStructuresFor, singleStructureFor, structureForName } from "./analysis/structuresByFormula";
 
 const MEMO_LIMIT = 20_000;
-const memo = new Map<string, AnalysisResult>();
+const memo = boundedMemo<AnalysisResult>(MEMO_LIMIT);
 
 /** Read and analyse one species; never throws. */
 export function analyzeSpecies(text: string): AnalysisResult {
@@ -25,19 +26,17 @@ export function analyzeSpecies(text: string): AnalysisResult {
   } catch (error) {
     result = { ok: false, problem: { code: "no-valid-structure", message: `internal error: ${String(error)}` } };
   }
-  if (memo.size >= MEMO_LIMIT) memo.delete(memo.keys().next().value as string);
   memo.set(text, result);
   return result;
 }
 
-const smilesMemo = new Map<string, AnalysisResult>();
 /**
  * SMILES memo budget in characters of SMILES text: a drug-sized molecule's analysis takes far more
  * memory than a small species', so a long-running server keeps fewer of them (about 4,000 such
  * molecules) rather than a fixed count.
  */
 const SMILES_MEMO_CHARACTERS = 200_000;
-let smilesMemoCharacters = 0;
+const smilesMemo = boundedMemo<AnalysisResult>(SMILES_MEMO_CHARACTERS, (text) => text.length);
 
 /** Analyse a molecule written as SMILES (the whole text); never throws. */
 export function analyzeSmiles(text: string): AnalysisResult {
@@ -55,13 +54,7 @@ export function analyzeSmiles(text: string): AnalysisResult {
   } catch (error) {
     result = { ok: false, problem: { code: "no-valid-structure", message: `internal error: ${String(error)}` } };
   }
-  while (smilesMemo.size > 0 && (smilesMemo.size >= MEMO_LIMIT || smilesMemoCharacters + text.length > SMILES_MEMO_CHARACTERS)) {
-    const oldest = smilesMemo.keys().next().value as string;
-    smilesMemo.delete(oldest);
-    smilesMemoCharacters -= oldest.length;
-  }
   smilesMemo.set(text, result);
-  smilesMemoCharacters += text.length;
   return result;
 }
 
