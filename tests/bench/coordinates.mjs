@@ -45,10 +45,14 @@ export function runCoordinatesBench() {
   const times = [];
   const atomCounts = [];
   let withoutGroup = 0;
+  let notAnalysed = 0;
   let slowest = { milliseconds: 0, smiles: "" };
   for (const smiles of measured) {
     const analysis = analyzeSmiles(smiles);
-    if (!analysis.ok) continue;
+    if (!analysis.ok) {
+      notAnalysed += 1;
+      continue;
+    }
     const start = cpuMilliseconds();
     const shape = shapeOf(analysis.value);
     const milliseconds = cpuMilliseconds() - start;
@@ -68,7 +72,8 @@ export function runCoordinatesBench() {
     `\n3D coordinates    load ${loadavg()[0].toFixed(2)} on ${availableParallelism()} CPUs; shapeOf on ${times.length} drug-sized molecules,` +
       ` ${Math.min(...heavy)}-${Math.max(...heavy)} heavy atoms (mean ${meanAtoms.toFixed(0)} atoms with H), seeded, CPU time`,
   );
-  const met = median < AIM_MEDIAN_MILLISECONDS;
+  // Molecules that were not analysed were not timed either: a median over the rest would flatter.
+  const met = median < AIM_MEDIAN_MILLISECONDS && notAnalysed === 0;
   if (!met) missed.push("3D coordinates");
   console.log(
     `  median ${median.toFixed(2)} ms  p95 ${at(0.95).toFixed(2)} ms per molecule` +
@@ -76,7 +81,7 @@ export function runCoordinatesBench() {
   );
   console.log(
     `  slowest ${slowest.milliseconds.toFixed(1)} ms (${countHeavyAtoms(slowest.smiles)} heavy atoms); ` +
-      `${withoutGroup} without a point group (aim 0)`,
+      `${withoutGroup} without a point group (aim 0); ${notAnalysed} not analysed (aim 0)`,
   );
   if (withoutGroup > 0) missed.push("3D point groups");
   return missed;
