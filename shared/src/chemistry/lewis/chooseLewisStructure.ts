@@ -10,6 +10,7 @@
 import type { GraphAtom, GraphBond, MolecularGraph } from "../types";
 import { atomTraits, type AtomTraits } from "./electronBookkeeping";
 import { sharedAtom } from "../sharedAtoms";
+import { sortSmall } from "../sortSmall";
 
 /** Which atoms are joined by at least a single bond. */
 export interface Skeleton {
@@ -190,30 +191,14 @@ export function chooseLewisStructure(skeleton: Skeleton, charge: number): LewisO
 
   // Lone pairs fill outer atoms first (most electronegative first), then inner atoms.
   for (let atom = 0; atom < atomCount; atom++) fillOrder[atom] = atom;
-  for (let i = 1; i < atomCount; i++) {
-    const item = fillOrder[i];
-    let j = i - 1;
-    while (j >= 0 && fillsAfter(fillOrder[j], item)) {
-      fillOrder[j + 1] = fillOrder[j];
-      j--;
-    }
-    fillOrder[j + 1] = item;
-  }
+  sortSmall(fillOrder, compareFillOrder, atomCount);
   // Electrons left over after every shell is full go to inner atoms that can expand, least
   // electronegative first (the central atom of SF4 or I3-).
   expansionCount = 0;
   for (let atom = 0; atom < atomCount; atom++) {
     if (shellCapacityOf[atom] > 8) expansionOrder[expansionCount++] = atom;
   }
-  for (let i = 1; i < expansionCount; i++) {
-    const item = expansionOrder[i];
-    let j = i - 1;
-    while (j >= 0 && expandsAfter(expansionOrder[j], item)) {
-      expansionOrder[j + 1] = expansionOrder[j];
-      j--;
-    }
-    expansionOrder[j + 1] = item;
-  }
+  sortSmall(expansionOrder, compareExpansionOrder, expansionCount);
 
   for (let bond = 0; bond < bondCount; bond++) bondOrders[bond] = 1;
   for (let atom = 0; atom < atomCount; atom++) {
@@ -288,6 +273,9 @@ function blocksMultipleBond(traits: readonly AtomTraits[], atom: number): boolea
 }
 
 /** Fill order: outer atoms before inner ones, then the more electronegative first, then by index. */
+const compareFillOrder = (a: number, b: number): number => (fillsAfter(a, b) ? 1 : 0);
+const compareExpansionOrder = (a: number, b: number): number => (expandsAfter(a, b) ? 1 : 0);
+
 function fillsAfter(a: number, b: number): boolean {
   const byRole = Number(degree[a] > 1) - Number(degree[b] > 1);
   if (byRole !== 0) return byRole > 0;
