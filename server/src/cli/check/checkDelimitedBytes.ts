@@ -20,7 +20,9 @@ import {
 } from "../../../../shared/src/document/tables/delimitedFindings";
 import type { SpeciesReader } from "../../../../shared/src/document/speciesReader";
 import type { Finding, FindingSeverity } from "../../../../shared/src/document/types";
+import { SNIFF_CHARACTERS } from "../documents/documentBatches";
 import type { DocumentFile } from "../documents/findDocuments";
+import { countLineFeeds } from "../documents/lineIndex";
 import type { DelimitedRowMemo } from "../../../../shared/src/document/tables/delimitedFindings";
 import { countFinding } from "./checkSummary";
 import type { CheckOutputs } from "./checkFile";
@@ -47,8 +49,6 @@ export interface ByteCheckResult {
 const BUFFER_BYTES = 1 << 20;
 /** The start of the file read first, for the delimiter guess and the header. */
 const START_BYTES = 1 << 19;
-/** The core guesses the delimiter from this many characters; the start must hold them. */
-const SNIFF_CHARACTERS = 65_536;
 
 /**
  * Bytes as a Latin-1 string (one character a byte: a key that tells any two byte runs apart).
@@ -292,10 +292,4 @@ function placed(file: string, line: number, before: number, finding: Finding): L
   if (!finding.fix) return located;
   const { range, newText, title } = finding.fix;
   return { ...located, fix: { line: line + 1, column: at(range.start), endLine: line + 1, endColumn: at(range.end), newText, title } };
-}
-
-function countLineFeeds(text: string): number {
-  let count = 0;
-  for (let index = text.indexOf("\n"); index >= 0; index = text.indexOf("\n", index + 1)) count++;
-  return count;
 }

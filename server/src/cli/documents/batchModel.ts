@@ -6,7 +6,7 @@
 import { analyzeDocument } from "../../../../shared/src/document/analyzeDocument";
 import { checkDocument } from "../../../../shared/src/document/checkDocument";
 import type { SpeciesReader } from "../../../../shared/src/document/speciesReader";
-import { checkDelimitedText, type DelimitedRowMemo } from "../../../../shared/src/document/tables/delimitedFindings";
+import { checkDelimitedText, moved, type DelimitedRowMemo } from "../../../../shared/src/document/tables/delimitedFindings";
 import type { DocumentKind, DocumentModel, Finding, SpeciesOccurrence } from "../../../../shared/src/document/types";
 import type { DocumentBatch } from "./documentBatches";
 
@@ -43,21 +43,12 @@ export function batchModel(batch: DocumentBatch, kind: DocumentKind, context: Ba
       if (kind === "csv" || kind === "tsv") {
         // Rows are checked once per distinct content; the result is the same as the whole reading's.
         const found = checkDelimitedText(text, kind, { delimiter: batch.delimiter, from: shift, memo: context.rows, read: context.read });
-        return shift === 0 ? found : found.map(movedBack(shift));
+        return shift === 0 ? found : found.map((finding) => moved(finding, -shift));
       }
       const current = modelOf();
-      const findings = [...current.problems, ...checkDocument(current)].filter(own).map(movedBack(shift));
+      const findings = [...current.problems, ...checkDocument(current)].filter(own).map((finding) => moved(finding, -shift));
       // Problems of the text and the checks' findings come in two lists; report them in document order.
       return findings.sort((a, b) => a.range.start - b.range.start || a.range.end - b.range.end);
     },
-  };
-}
-
-function movedBack(shift: number): (finding: Finding) => Finding {
-  return (finding) => {
-    if (shift === 0) return finding;
-    const range = { start: finding.range.start - shift, end: finding.range.end - shift };
-    if (!finding.fix) return { ...finding, range };
-    return { ...finding, range, fix: { ...finding.fix, range: { start: finding.fix.range.start - shift, end: finding.fix.range.end - shift } } };
   };
 }

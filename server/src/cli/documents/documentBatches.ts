@@ -57,7 +57,7 @@ export const DEFAULT_BATCH_CHARACTERS = 1 << 16;
 const CHUNK_BYTES = 1 << 19;
 
 /** The core guesses the delimiter from at most this many characters and lines of the start. */
-const SNIFF_CHARACTERS = 65_536;
+export const SNIFF_CHARACTERS = 65_536;
 const SNIFF_LINES = 20;
 
 /**

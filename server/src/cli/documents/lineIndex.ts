@@ -48,7 +48,8 @@ export function lineIndexOf(text: string, firstLine = 0, atDocumentStart = true)
   };
 }
 
-function countLineFeeds(text: string): number {
+/** Line feeds in `text`. */
+export function countLineFeeds(text: string): number {
   let count = 0;
   for (let index = text.indexOf("\n"); index >= 0; index = text.indexOf("\n", index + 1)) count++;
   return count;

@@ -91,18 +91,9 @@ export function checkDelimitedText(text: string, kind: "csv" | "tsv", options: D
     let index = start;
     for (; index < length; index++) {
       const code = text.charCodeAt(index);
+      // Above the quote only the delimiter matters; below it line ends and quotes too.
       if (code > QUOTE_CODE) {
-        if (code === separator) {
-          column++;
-          if (column === first) stretchStart = index + 1;
-          else if (column === last + 1 && stretchEnd < 0) stretchEnd = index;
-        }
-        continue;
-      }
-      if (code === separator) {
-        column++;
-        if (column === first) stretchStart = index + 1;
-        else if (column === last + 1 && stretchEnd < 0) stretchEnd = index;
+        if (code !== separator) continue;
       } else if (code === LF) {
         if (lineEnd < 0) lineEnd = index;
         break;
@@ -115,7 +106,13 @@ export function checkDelimitedText(text: string, kind: "csv" | "tsv", options: D
           break;
         }
         lineEnd = index;
+        continue;
+      } else if (code !== separator) {
+        continue;
       }
+      column++;
+      if (column === first) stretchStart = index + 1;
+      else if (column === last + 1 && stretchEnd < 0) stretchEnd = index;
     }
     if (lineEnd < 0) lineEnd = index;
     if (!plain) {
@@ -209,6 +206,7 @@ function documentFindings(text: string, kind: "csv" | "tsv", delimiter: string, 
   return findings.sort((a, b) => a.range.start - b.range.start || a.range.end - b.range.end);
 }
 
+/** `finding` with its range (and its fix's) moved `by` characters. */
 export function moved(finding: Finding, by: number): Finding {
   const range = { start: finding.range.start + by, end: finding.range.end + by };
   if (!finding.fix) return { ...finding, range };
