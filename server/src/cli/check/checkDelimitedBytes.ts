@@ -11,13 +11,7 @@
  */
 import { open } from "node:fs/promises";
 import { sniffDelimiter } from "../../../../shared/src/document/tables/csv";
-import {
-  findHeader,
-  MEMO_LIMIT,
-  recognisedColumns,
-  rowFindings,
-  TRIAL_ROWS,
-} from "../../../../shared/src/document/tables/delimitedFindings";
+import { findHeader, recognisedColumns, workOutRow } from "../../../../shared/src/document/tables/delimitedFindings";
 import type { SpeciesReader } from "../../../../shared/src/document/speciesReader";
 import type { Finding, FindingSeverity } from "../../../../shared/src/document/types";
 import { SNIFF_CHARACTERS } from "../documents/documentBatches";
@@ -107,17 +101,10 @@ export async function checkDelimitedBytes(file: DocumentFile, outputs: CheckOutp
     let ended = false;
     const state: ScanState = { position: 0, line: countLineFeeds(prefix), found: 0, located: [], counts: [] };
     const lenient = new TextDecoder("utf-8", { ignoreBOM: true });
-    const rowsOf = (key: string, from: number, to: number): readonly Finding[] | undefined => {
-      memo.worked++;
-      // Rows are mostly new: the ordinary reading is quicker for the rest.
-      if (memo.looked >= TRIAL_ROWS && memo.worked * 2 > memo.looked) return undefined;
-      const padding = delimiter.repeat(first);
-      const keyText = lenient.decode(buffer.subarray(from, to));
-      const known = rowFindings(header.text, padding + keyText, -padding.length, kind, delimiter, context.read);
-      if (memo.rows.size >= MEMO_LIMIT) memo.rows.clear();
-      memo.rows.set(key, known);
-      return known;
-    };
+    const rowTable = { header: header.text, first, kind, delimiter } as const;
+    // Undefined when rows are mostly new: the ordinary reading is quicker for the rest.
+    const rowsOf = (key: string, from: number, to: number): readonly Finding[] | undefined =>
+      workOutRow(memo, key, lenient.decode(buffer.subarray(from, to)), rowTable, context.read);
     const decodedLength = (from: number, to: number): number => lenient.decode(buffer.subarray(from, to)).length;
     const report = async (): Promise<void> => {
       if (state.located.length > 0) {

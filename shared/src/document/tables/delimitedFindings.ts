@@ -46,9 +46,9 @@ export interface DelimitedFindingOptions {
 }
 
 /** Distinct rows remembered; past this the memo starts afresh. */
-export const MEMO_LIMIT = 20_000;
+const MEMO_LIMIT = 20_000;
 /** After this many rows, a file where more than half were new is read the ordinary way. */
-export const TRIAL_ROWS = 2_000;
+const TRIAL_ROWS = 2_000;
 
 const QUOTE = '"';
 const QUOTE_CODE = 0x22;
@@ -130,26 +130,49 @@ export function checkDelimitedText(text: string, kind: "csv" | "tsv", options: D
     if (stretchEnd < 0) stretchEnd = lineEnd;
     const key = text.slice(stretchStart, stretchEnd);
     memo.looked++;
-    let known = memo.rows.get(key);
+    const known = memo.rows.get(key) ?? workOutRow(memo, key, key, { header: header.text, first, kind, delimiter }, read);
     if (!known) {
-      memo.worked++;
-      if (memo.looked >= TRIAL_ROWS && memo.worked * 2 > memo.looked) {
-        // Rows are mostly new: cutting and remembering them costs more than it saves.
-        memo.ordinary = true;
-        memo.rows.clear();
-        findings.push(...ordinary(start));
-        return findings;
-      }
-      const padding = delimiter.repeat(first);
-      known = rowFindings(header.text, padding + key, -padding.length, kind, delimiter, read);
-      if (known.length === 0) known = NO_FINDINGS;
-      if (memo.rows.size >= MEMO_LIMIT) memo.rows.clear();
-      memo.rows.set(key, known);
+      // Rows are mostly new: cutting and remembering them costs more than it saves.
+      memo.ordinary = true;
+      memo.rows.clear();
+      findings.push(...ordinary(start));
+      return findings;
     }
     for (const finding of known) findings.push(moved(finding, stretchStart));
     start = next;
   }
   return findings;
+}
+
+/** What a row's findings are read under. */
+export interface RowTable {
+  readonly header: string;
+  /** First recognised column: the padding put in front of a key. */
+  readonly first: number;
+  readonly kind: "csv" | "tsv";
+  readonly delimiter: string;
+}
+
+/**
+ * The findings of a new key (relative to its start), worked out and remembered; undefined once the
+ * rows have proved not to repeat (more than half new after the trial rows), so the caller can read
+ * the rest the ordinary way. `keyText` is the key's text (the key itself may be bytes as Latin-1).
+ */
+export function workOutRow(
+  memo: DelimitedRowMemo,
+  key: string,
+  keyText: string,
+  table: RowTable,
+  read: SpeciesReader,
+): readonly Finding[] | undefined {
+  memo.worked++;
+  if (memo.looked >= TRIAL_ROWS && memo.worked * 2 > memo.looked) return undefined;
+  const padding = table.delimiter.repeat(table.first);
+  const found = rowFindings(table.header, padding + keyText, -padding.length, table.kind, table.delimiter, read);
+  const known = found.length === 0 ? NO_FINDINGS : found;
+  if (memo.rows.size >= MEMO_LIMIT) memo.rows.clear();
+  memo.rows.set(key, known);
+  return known;
 }
 
 /**
