@@ -4,7 +4,7 @@ import { existsSync } from "node:fs";
 
 const entries = [
   { in: "server/src/cli/main.ts", out: "cli" },
-  { in: "server/src/main.ts", out: "server" },
+  { in: "server/src/lsp/main.ts", out: "server" },
   { in: "client/src/extension.ts", out: "client" },
   // The bundled core, for the benchmark (tests/bench/run.mjs) and other plain Node scripts.
   { in: "shared/src/index.ts", out: "core" },

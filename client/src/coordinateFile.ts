@@ -2,9 +2,9 @@
  * A species' model coordinates as file text: XYZ or MDL molfile, with a file name made from
  * the formula.
  */
-import { buildCoordinates } from "../../shared/src/chemistry/geometry/buildCoordinates";
-import { toMolfile } from "../../shared/src/chemistry/formats/molfile";
-import { toXyz } from "../../shared/src/chemistry/formats/xyz";
+import { buildCoordinates } from "../../shared/src/index";
+import { toMolfile } from "../../shared/src/index";
+import { toXyz } from "../../shared/src/index";
 import type { SpeciesAnalysis } from "./core";
 
 export type CoordinateFormat = "xyz" | "molfile";

@@ -4,7 +4,7 @@
  * Used by the workspace check while the server has no `lonepair/checkText` request.
  */
 import * as vscode from "vscode";
-import { analysedTextOf } from "../../server/src/analysedText";
+import { analysedTextOf } from "../../shared/src/index";
 import { analyzeDocument, checkDocument, documentKindFor, type DocumentKind, type Finding } from "./core";
 import { DIAGNOSTIC_SOURCE } from "./statusBar";
 

@@ -1,42 +1,24 @@
 /**
- * The custom requests the client sends to the lonepair language server. The summary table
- * request is the server's own; the other two are proposed here and answered client-side with
- * the bundled core until the server handles them (see `serverOrLocal.ts`).
+ * The custom requests the client sends to the lonepair language server, typed for the language
+ * client. Their method names and shapes are the core's (`shared/src/editorRequests.ts`), shared
+ * with the server that answers them. `speciesAt` and `checkText` are answered client-side with
+ * the bundled core when the server does not handle them (see `serverOrLocal.ts`).
  */
-import { RequestType, type Diagnostic, type Position, type Range } from "vscode-languageclient/node";
-import type { SummaryTableParams, SummaryTableResult } from "../../server/src/features/summaryTable";
+import { RequestType } from "vscode-languageclient/node";
+import {
+  CHECK_TEXT_METHOD,
+  SPECIES_AT_METHOD,
+  SUMMARY_TABLE_METHOD,
+  type CheckTextParams,
+  type CheckTextResult,
+  type SpeciesAtParams,
+  type SpeciesAtResult,
+  type SummaryTableParams,
+  type SummaryTableResult,
+} from "../../shared/src/index";
 
-export type { SummaryTableParams, SummaryTableResult };
+export type { CheckTextParams, CheckTextResult, SpeciesAtParams, SpeciesAtResult, SummaryTableParams, SummaryTableResult };
 
-/** `lonepair/summaryTable`: a geometry table of the species in a document or a range. */
-export const summaryTableRequest = new RequestType<SummaryTableParams, SummaryTableResult, void>("lonepair/summaryTable");
-
-/** Arguments of `lonepair/speciesAt`. */
-export interface SpeciesAtParams {
-  readonly uri: string;
-  readonly position: Position;
-}
-
-/** The species mention under a position: its text exactly as written and where it is. */
-export interface SpeciesAtResult {
-  readonly text: string;
-  readonly range: Range;
-}
-
-/** `lonepair/speciesAt`: the species mention covering a position in an open document, or null. */
-export const speciesAtRequest = new RequestType<SpeciesAtParams, SpeciesAtResult | null, void>("lonepair/speciesAt");
-
-/** Arguments of `lonepair/checkText`: a file that need not be open in the editor. */
-export interface CheckTextParams {
-  readonly uri: string;
-  readonly languageId?: string;
-  readonly text: string;
-}
-
-/** The same diagnostics the server would publish for the file were it open. */
-export interface CheckTextResult {
-  readonly diagnostics: Diagnostic[];
-}
-
-/** `lonepair/checkText`: check a file's text without opening it (the workspace check). */
-export const checkTextRequest = new RequestType<CheckTextParams, CheckTextResult, void>("lonepair/checkText");
+export const summaryTableRequest = new RequestType<SummaryTableParams, SummaryTableResult, void>(SUMMARY_TABLE_METHOD);
+export const speciesAtRequest = new RequestType<SpeciesAtParams, SpeciesAtResult | null, void>(SPECIES_AT_METHOD);
+export const checkTextRequest = new RequestType<CheckTextParams, CheckTextResult, void>(CHECK_TEXT_METHOD);

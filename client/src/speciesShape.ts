@@ -2,7 +2,7 @@
  * From a species analysis to the 3D view's data: model coordinates from the core, then the
  * view model the page draws.
  */
-import { buildCoordinates } from "../../shared/src/chemistry/geometry/buildCoordinates";
+import { buildCoordinates } from "../../shared/src/index";
 import { shapeViewModel, type ShapeViewModel, type SpeciesAnalysis } from "./core";
 
 /** The view model of an analysed species; undefined if the core could not place its atoms. */

@@ -18,3 +18,38 @@ export type { MolecularCoordinates, PlacedAtom, PlacedLonePair } from "./chemist
 export { toXyz } from "./chemistry/formats/xyz";
 export { toMolfile, MOLFILE_V2000_LIMIT } from "./chemistry/formats/molfile";
 export type { MolfileResult } from "./chemistry/formats/molfile";
+
+// Documents: finding species in text and tables, and checking what they claim.
+export { analyzeDocument } from "./document/analyzeDocument";
+export { analyzeOccurrence } from "./document/analyzeOccurrence";
+export { checkDocument } from "./document/checkDocument";
+export { documentKindFor } from "./document/documentKind";
+export { memoisedReader } from "./document/speciesReader";
+export type { SpeciesReader } from "./document/speciesReader";
+export { sniffDelimiter } from "./document/tables/csv";
+export {
+  checkDelimitedText,
+  delimitedRowMemo,
+  findHeader,
+  moved,
+  recognisedColumns,
+  workOutRow,
+} from "./document/tables/delimitedFindings";
+export type { DelimitedRowMemo } from "./document/tables/delimitedFindings";
+export type * from "./document/types";
+
+// Reports: cards, JSON, hovers, summary tables and the 3D view model.
+export { MODEL_CAUTION, PLAIN_CARD_STYLE, formatAnalysisCard } from "./report/analysisCard";
+export type { CardStyle } from "./report/analysisCard";
+export { toAnalysisJson } from "./report/analysisJson";
+export { HOVER_CAUTION, hoverMarkdown, problemMarkdown } from "./report/hoverMarkdown";
+export { shapeViewModel } from "./report/shapeViewModel";
+export type { ShapeViewModel } from "./report/shapeViewModel";
+export { SUMMARY_COLUMNS, isSummaryColumn, summaryTable } from "./report/summaryTable";
+export type { SummaryColumn, SummaryFormat, UnanalysedSpecies } from "./report/summaryTable";
+
+// Editors: the custom requests of the language server, as plain data.
+export { CHECK_TEXT_METHOD, SPECIES_AT_METHOD, SUMMARY_TABLE_METHOD } from "./editorRequests";
+export type * from "./editorRequests";
+export { analysedTextOf, MAX_ANALYSED_LENGTH } from "./document/analysedText";
+export type { AnalysedText } from "./document/analysedText";

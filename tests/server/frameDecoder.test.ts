@@ -3,7 +3,7 @@
  * body), whatever the chunking, and recovery from garbage between frames.
  */
 import { describe, expect, it } from "vitest";
-import { createFrameDecoder, type DecodedFrame } from "../../server/src/frameDecoder";
+import { createFrameDecoder, type DecodedFrame } from "../../server/src/lsp/frameDecoder";
 
 // source: LSP specification, base protocol: header part "Content-Length: N\r\n", then "\r\n", then N bytes
 function frame(message: unknown): Buffer {

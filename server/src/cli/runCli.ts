@@ -6,7 +6,7 @@ import { version } from "../../../package.json";
 import type { CliIo } from "./cliCommand";
 import { EXIT_FAILURE, EXIT_OK, EXIT_USAGE } from "./cliCommand";
 import { COMMANDS, findCommand } from "./commands/index";
-import { MODEL_CAUTION } from "../../../shared/src/report/analysisCard";
+import { MODEL_CAUTION } from "../../../shared/src/index";
 
 function topLevelHelp(): string {
   const width = Math.max(...COMMANDS.map((command) => command.name.length)) + 2;

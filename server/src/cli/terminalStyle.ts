@@ -2,8 +2,8 @@
  * Colour for the command line. The core only offers hooks (`CardStyle`); whether to colour is
  * decided here, once, from the terminal and the environment.
  */
-import type { CardStyle } from "../../../shared/src/report/analysisCard";
-import { PLAIN_CARD_STYLE } from "../../../shared/src/report/analysisCard";
+import type { CardStyle } from "../../../shared/src/index";
+import { PLAIN_CARD_STYLE } from "../../../shared/src/index";
 
 /** True when stdout is a terminal and the user has not set NO_COLOR. */
 export function shouldUseColour(stdoutIsTerminal: boolean, environment: NodeJS.ProcessEnv): boolean {

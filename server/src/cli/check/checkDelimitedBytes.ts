@@ -10,14 +10,14 @@
  * findings; tests compare the two.
  */
 import { open } from "node:fs/promises";
-import { sniffDelimiter } from "../../../../shared/src/document/tables/csv";
-import { findHeader, recognisedColumns, workOutRow } from "../../../../shared/src/document/tables/delimitedFindings";
-import type { SpeciesReader } from "../../../../shared/src/document/speciesReader";
-import type { Finding, FindingSeverity } from "../../../../shared/src/document/types";
+import { sniffDelimiter } from "../../../../shared/src/index";
+import { findHeader, recognisedColumns, workOutRow } from "../../../../shared/src/index";
+import type { SpeciesReader } from "../../../../shared/src/index";
+import type { Finding, FindingSeverity } from "../../../../shared/src/index";
 import { SNIFF_CHARACTERS } from "../documents/documentBatches";
 import type { DocumentFile } from "../documents/findDocuments";
 import { countLineFeeds } from "../documents/lineIndex";
-import type { DelimitedRowMemo } from "../../../../shared/src/document/tables/delimitedFindings";
+import type { DelimitedRowMemo } from "../../../../shared/src/index";
 import { countFinding } from "./checkSummary";
 import type { CheckOutputs } from "./checkFile";
 import type { LocatedFinding } from "./locatedFinding";

@@ -3,9 +3,9 @@
  * (written atomically, or shown as a diff in a dry run). Findings that remain after fixing are
  * placed in the fixed text.
  */
-import { memoisedReader } from "../../../../shared/src/document/speciesReader";
-import { delimitedRowMemo } from "../../../../shared/src/document/tables/delimitedFindings";
-import type { Finding, TextFix } from "../../../../shared/src/document/types";
+import { memoisedReader } from "../../../../shared/src/index";
+import { delimitedRowMemo } from "../../../../shared/src/index";
+import type { Finding, TextFix } from "../../../../shared/src/index";
 import { batchModel } from "../documents/batchModel";
 import { readDocument, type DocumentBatch, type ResumeAt } from "../documents/documentBatches";
 import type { DocumentFile } from "../documents/findDocuments";

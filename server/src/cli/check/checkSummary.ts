@@ -1,7 +1,7 @@
 /**
  * Counts of one `check` run, for the closing line and the exit status.
  */
-import type { FindingSeverity } from "../../../../shared/src/document/types";
+import type { FindingSeverity } from "../../../../shared/src/index";
 
 export interface CheckSummary {
   filesChecked: number;

@@ -3,7 +3,7 @@
  * offers, each over its own range only. When two fixes overlap the first in the document wins;
  * a fix that would change nothing is left out.
  */
-import type { Finding, TextFix } from "../../../../shared/src/document/types";
+import type { Finding, TextFix } from "../../../../shared/src/index";
 
 /** The findings whose fixes are applied (in document order), and those left as they are. */
 export interface FixChoice {

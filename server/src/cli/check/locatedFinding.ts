@@ -2,7 +2,7 @@
  * A finding placed in a file by line and column, as every report format shows it: 1-based
  * lines and columns, columns in UTF-16 code units, end exclusive.
  */
-import type { Finding, FindingSeverity } from "../../../../shared/src/document/types";
+import type { Finding, FindingSeverity } from "../../../../shared/src/index";
 import type { LineIndex } from "../documents/lineIndex";
 
 /** Start and end of a range, 1-based; the end column is just past the last character. */

@@ -3,8 +3,8 @@
  * level, the message, the place (URI relative to the working directory, 1-based lines and
  * columns counted in UTF-16 code units, as `columnKind` says) and the fix where there is one.
  */
-import type { FindingSeverity } from "../../../../shared/src/document/types";
-import { MODEL_CAUTION } from "../../../../shared/src/report/analysisCard";
+import type { FindingSeverity } from "../../../../shared/src/index";
+import { MODEL_CAUTION } from "../../../../shared/src/index";
 import type { CheckReporter } from "./checkReporter";
 import type { LineColumnRange, LocatedFinding } from "./locatedFinding";
 import { ruleDescription } from "./ruleDescriptions";

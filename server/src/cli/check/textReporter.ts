@@ -2,8 +2,8 @@
  * The human report: `path:line:column: severity: message [code]`, one finding a line as
  * compilers print them (editors and terminals turn these into links), then a summary.
  */
-import type { FindingSeverity } from "../../../../shared/src/document/types";
-import { MODEL_CAUTION } from "../../../../shared/src/report/analysisCard";
+import type { FindingSeverity } from "../../../../shared/src/index";
+import { MODEL_CAUTION } from "../../../../shared/src/index";
 import { cardStyle } from "../terminalStyle";
 import type { CheckReporter } from "./checkReporter";
 import { fixedLine, summaryLine } from "./checkSummary";

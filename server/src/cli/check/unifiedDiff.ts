@@ -3,7 +3,7 @@
  * needed: every changed line is known). Lines keep their own line ends, as `diff -u` prints them,
  * so the patch applies to CRLF files too.
  */
-import type { TextFix } from "../../../../shared/src/document/types";
+import type { TextFix } from "../../../../shared/src/index";
 import type { LineIndex } from "../documents/lineIndex";
 
 const CONTEXT_LINES = 3;

@@ -6,8 +6,8 @@
  */
 import { parseArgs } from "node:util";
 import { analyzeSmiles, analyzeSpecies } from "../../../../shared/src/index";
-import { formatAnalysisCard } from "../../../../shared/src/report/analysisCard";
-import { toAnalysisJson } from "../../../../shared/src/report/analysisJson";
+import { formatAnalysisCard } from "../../../../shared/src/index";
+import { toAnalysisJson } from "../../../../shared/src/index";
 import type { CliCommand, CliIo } from "../cliCommand";
 import { EXIT_FAILURE, EXIT_OK, EXIT_USAGE } from "../cliCommand";
 import { cardStyle } from "../terminalStyle";

@@ -6,9 +6,9 @@
 import { writeFileSync } from "node:fs";
 import { parseArgs } from "node:util";
 import { analyzeSpecies } from "../../../../shared/src/index";
-import { buildCoordinates } from "../../../../shared/src/chemistry/geometry/buildCoordinates";
-import { toMolfile } from "../../../../shared/src/chemistry/formats/molfile";
-import { toXyz } from "../../../../shared/src/chemistry/formats/xyz";
+import { buildCoordinates } from "../../../../shared/src/index";
+import { toMolfile } from "../../../../shared/src/index";
+import { toXyz } from "../../../../shared/src/index";
 import type { CliCommand, CliIo } from "../cliCommand";
 import { EXIT_FAILURE, EXIT_OK, EXIT_USAGE } from "../cliCommand";
 

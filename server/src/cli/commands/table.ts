@@ -6,10 +6,10 @@
  */
 import { statSync } from "node:fs";
 import { parseArgs } from "node:util";
-import { analyzeSpecies } from "../../../../shared/src/chemistry/analyze";
-import type { AnalysisResult, SpeciesAnalysis } from "../../../../shared/src/chemistry/types";
-import { MODEL_CAUTION } from "../../../../shared/src/report/analysisCard";
-import { summaryTable, type UnanalysedSpecies } from "../../../../shared/src/report/summaryTable";
+import { analyzeSpecies } from "../../../../shared/src/index";
+import type { AnalysisResult, SpeciesAnalysis } from "../../../../shared/src/index";
+import { MODEL_CAUTION } from "../../../../shared/src/index";
+import { summaryTable, type UnanalysedSpecies } from "../../../../shared/src/index";
 import type { CliCommand, CliIo } from "../cliCommand";
 import { EXIT_FAILURE, EXIT_OK, EXIT_USAGE } from "../cliCommand";
 import { speciesInFile } from "../documents/documentSpecies";

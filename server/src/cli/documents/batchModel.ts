@@ -3,11 +3,11 @@
  * with ranges as offsets into that text. What the prefix (the start of the document, read ahead
  * of the batch for its header) yields is dropped: it was reported with the first batch.
  */
-import { analyzeDocument } from "../../../../shared/src/document/analyzeDocument";
-import { checkDocument } from "../../../../shared/src/document/checkDocument";
-import type { SpeciesReader } from "../../../../shared/src/document/speciesReader";
-import { checkDelimitedText, moved, type DelimitedRowMemo } from "../../../../shared/src/document/tables/delimitedFindings";
-import type { DocumentKind, DocumentModel, Finding, SpeciesOccurrence } from "../../../../shared/src/document/types";
+import { analyzeDocument } from "../../../../shared/src/index";
+import { checkDocument } from "../../../../shared/src/index";
+import type { SpeciesReader } from "../../../../shared/src/index";
+import { checkDelimitedText, moved, type DelimitedRowMemo } from "../../../../shared/src/index";
+import type { DocumentKind, DocumentModel, Finding, SpeciesOccurrence } from "../../../../shared/src/index";
 import type { DocumentBatch } from "./documentBatches";
 
 /** What one batch holds, in offsets local to `batch.text`. */

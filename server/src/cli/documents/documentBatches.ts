@@ -6,8 +6,8 @@
  * inside the whole file. Memory stays near one batch whatever the size of the file.
  */
 import { open, readFile } from "node:fs/promises";
-import { sniffDelimiter } from "../../../../shared/src/document/tables/csv";
-import type { DocumentKind } from "../../../../shared/src/document/types";
+import { sniffDelimiter } from "../../../../shared/src/index";
+import type { DocumentKind } from "../../../../shared/src/index";
 import type { TextEncoding } from "./findDocuments";
 import { lineIndexOf, type LineIndex } from "./lineIndex";
 import { recordBoundaryScanner, type RecordBoundaryScanner } from "./recordBoundaries";

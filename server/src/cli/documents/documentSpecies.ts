@@ -2,8 +2,8 @@
  * Every species mention in a file, in document order, batch by batch, with the exact span as
  * written and its 1-based line and column.
  */
-import { memoisedReader } from "../../../../shared/src/document/speciesReader";
-import type { SpeciesOccurrence } from "../../../../shared/src/document/types";
+import { memoisedReader } from "../../../../shared/src/index";
+import type { SpeciesOccurrence } from "../../../../shared/src/index";
 import { batchModel } from "./batchModel";
 import { readDocument } from "./documentBatches";
 import type { DocumentFile } from "./findDocuments";

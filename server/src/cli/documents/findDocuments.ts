@@ -7,8 +7,8 @@
 import { execFileSync } from "node:child_process";
 import { closeSync, openSync, readdirSync, readSync, statSync } from "node:fs";
 import { join, relative, resolve, sep } from "node:path";
-import { documentKindFor } from "../../../../shared/src/document/documentKind";
-import type { DocumentKind } from "../../../../shared/src/document/types";
+import { documentKindFor } from "../../../../shared/src/index";
+import type { DocumentKind } from "../../../../shared/src/index";
 
 /** A file to read, with the path to show for it. */
 export interface DocumentFile {

@@ -3,7 +3,7 @@
  * range the editor asks for; prose and data files are switched on and off separately.
  */
 import { InlayHintKind, type InlayHint, type InlayHintParams } from "vscode-languageserver";
-import { HOVER_CAUTION } from "../../../shared/src/report/hoverMarkdown";
+import { HOVER_CAUTION } from "../../../../shared/src/index";
 import type { DocumentKind, DocumentModel, SpeciesAnalysis, SpeciesOccurrence, TextRange } from "../core";
 import { guarded } from "../guardedHandler";
 import { offsetRange } from "../ranges";

@@ -2,7 +2,7 @@
  * The `lonepair.*` settings the server reads, their defaults, and how a raw value from the
  * client becomes a checked settings object (anything malformed falls back to the default).
  */
-import { SUMMARY_COLUMNS, isSummaryColumn, type SummaryColumn } from "../../shared/src/report/summaryTable";
+import { SUMMARY_COLUMNS, isSummaryColumn, type SummaryColumn } from "../../../shared/src/index";
 import type { DocumentKind } from "./core";
 
 /** Settings that apply to one document. */

@@ -2,7 +2,7 @@
  * Hover: the species under the cursor, found among the model's occurrences, shown as a card.
  */
 import { MarkupKind, type Hover, type HoverParams } from "vscode-languageserver";
-import { hoverMarkdown, problemMarkdown } from "../../../shared/src/report/hoverMarkdown";
+import { hoverMarkdown, problemMarkdown } from "../../../../shared/src/index";
 import type { SpeciesOccurrence } from "../core";
 import { guarded } from "../guardedHandler";
 import { lspRange } from "../ranges";

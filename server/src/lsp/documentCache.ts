@@ -3,7 +3,7 @@
  * reads. Findings are worked out lazily, once per version, the first time a feature asks.
  */
 import type { TextDocument } from "vscode-languageserver-textdocument";
-import { analysedTextOf } from "./analysedText";
+import { analysedTextOf } from "../../../shared/src/index";
 import { analyzeDocument, checkDocument, documentKindFor, type DocumentKind, type DocumentModel, type Finding } from "./core";
 
 /** One analysed version of a document. */

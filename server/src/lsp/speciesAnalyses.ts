@@ -2,7 +2,7 @@
  * The analysis behind a species occurrence. The text is analysed exactly as the document
  * checks analyse it, so a hover never disagrees with a diagnostic; the core memoises by text.
  */
-import { analyzeOccurrence } from "../../shared/src/document/analyzeOccurrence";
+import { analyzeOccurrence } from "../../../shared/src/index";
 import type { AnalysisResult, SpeciesOccurrence } from "./core";
 
 /** The analysis of the species an occurrence names. */

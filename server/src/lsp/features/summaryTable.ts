@@ -2,8 +2,14 @@
  * Summary table: a geometry table of the species in a document or a range, as markdown or
  * CSV. Reachable as the command `lonepair.summaryTable` and as the request `lonepair/summaryTable`.
  */
-import { RequestType, type ExecuteCommandParams, type Range } from "vscode-languageserver";
-import { summaryTable, type SummaryFormat } from "../../../shared/src/report/summaryTable";
+import { RequestType, type ExecuteCommandParams } from "vscode-languageserver";
+import {
+  SUMMARY_TABLE_METHOD,
+  summaryTable,
+  type SummaryTableParams,
+  type SummaryTableResult,
+  type EditorRange,
+} from "../../../../shared/src/index";
 import type { SpeciesAnalysis } from "../core";
 import { guarded } from "../guardedHandler";
 import { offsetRange, rangesTouch } from "../ranges";
@@ -13,19 +19,7 @@ import { analysisOf } from "../speciesAnalyses";
 /** The command name, also listed in `executeCommandProvider`. */
 export const SUMMARY_TABLE_COMMAND = "lonepair.summaryTable";
 
-/** Arguments of both the command and the request. */
-export interface SummaryTableParams {
-  readonly uri: string;
-  readonly range?: Range;
-  readonly format?: SummaryFormat;
-}
-
-/** The answer: the table text (markdown tables end with the caution line). */
-export interface SummaryTableResult {
-  readonly text: string;
-}
-
-export const summaryTableRequest = new RequestType<SummaryTableParams, SummaryTableResult, void>("lonepair/summaryTable");
+export const summaryTableRequest = new RequestType<SummaryTableParams, SummaryTableResult, void>(SUMMARY_TABLE_METHOD);
 
 const EMPTY: SummaryTableResult = { text: "" };
 
@@ -78,8 +72,8 @@ function isParams(value: unknown): value is SummaryTableParams {
   return candidate.format === undefined || candidate.format === "markdown" || candidate.format === "csv";
 }
 
-function isRange(value: unknown): value is Range {
-  const range = value as Range | null;
+function isRange(value: unknown): value is EditorRange {
+  const range = value as EditorRange | null;
   return (
     typeof range === "object" &&
     range !== null &&

@@ -1,0 +1,73 @@
+/**
+ * The custom requests between an editor and the lonepair language server, as plain data: method
+ * names and the shapes of their parameters and answers. Both edges (the server that answers and
+ * the VS Code client that asks) read them from here, so they cannot drift apart. Positions are
+ * the protocol's zero-based line and UTF-16 character, written out structurally so the core needs
+ * no protocol library.
+ */
+import type { SummaryFormat } from "./report/summaryTable";
+
+/** A zero-based line and UTF-16 character offset in that line. */
+export interface EditorPosition {
+  readonly line: number;
+  readonly character: number;
+}
+
+/** A span between two positions, end exclusive. */
+export interface EditorRange {
+  readonly start: EditorPosition;
+  readonly end: EditorPosition;
+}
+
+/** `lonepair/summaryTable`: a geometry table of the species in a document or a range. */
+export const SUMMARY_TABLE_METHOD = "lonepair/summaryTable";
+
+/** Arguments of the summary table request and of the command of the same purpose. */
+export interface SummaryTableParams {
+  readonly uri: string;
+  readonly range?: EditorRange;
+  readonly format?: SummaryFormat;
+}
+
+/** The answer: the table text (markdown tables end with the caution line). */
+export interface SummaryTableResult {
+  readonly text: string;
+}
+
+/** `lonepair/speciesAt`: the species mention covering a position in an open document, or null. */
+export const SPECIES_AT_METHOD = "lonepair/speciesAt";
+
+export interface SpeciesAtParams {
+  readonly uri: string;
+  readonly position: EditorPosition;
+}
+
+/** The species mention under a position: its text exactly as written and where it is. */
+export interface SpeciesAtResult {
+  readonly text: string;
+  readonly range: EditorRange;
+}
+
+/** `lonepair/checkText`: check a file's text without opening it (the workspace check). */
+export const CHECK_TEXT_METHOD = "lonepair/checkText";
+
+export interface CheckTextParams {
+  readonly uri: string;
+  readonly languageId?: string;
+  readonly text: string;
+}
+
+/** One finding of a checked text, shaped as the protocol's diagnostic. */
+export interface CheckedTextDiagnostic {
+  readonly range: EditorRange;
+  /** 1 error, 2 warning, 3 information, 4 hint, as the protocol numbers them. */
+  readonly severity?: 1 | 2 | 3 | 4;
+  readonly code?: string | number;
+  readonly source?: string;
+  readonly message: string;
+}
+
+/** The same diagnostics the server would publish for the file were it open. */
+export interface CheckTextResult {
+  readonly diagnostics: CheckedTextDiagnostic[];
+}

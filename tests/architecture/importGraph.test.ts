@@ -1,0 +1,85 @@
+/**
+ * The shape of the project, kept by a test: the edges (language server, command line, VS Code
+ * client) reach the core only through its one door, `shared/src/index.ts`; the core imports no
+ * edge and nothing from the editor or the protocol; the client never imports the server.
+ */
+import { readdirSync, readFileSync } from "node:fs";
+import { dirname, join, relative, resolve } from "node:path";
+import { fileURLToPath } from "node:url";
+import { describe, expect, it } from "vitest";
+
+const ROOT = resolve(dirname(fileURLToPath(import.meta.url)), "../..");
+const CORE_DOOR = join(ROOT, "shared/src/index");
+
+function sourceFiles(folder: string): string[] {
+  const found: string[] = [];
+  for (const entry of readdirSync(join(ROOT, folder), { withFileTypes: true })) {
+    const path = join(folder, entry.name);
+    if (entry.isDirectory()) found.push(...sourceFiles(path));
+    else if (/\.(ts|mts|cts)$/.test(entry.name)) found.push(path);
+  }
+  return found;
+}
+
+interface ImportEdge {
+  readonly file: string;
+  readonly specifier: string;
+  /** The imported path relative to the project root, for relative specifiers. */
+  readonly target?: string;
+}
+
+const IMPORT_PATTERN = /(?:^|\n)\s*(?:import|export)\s[^;]*?\sfrom\s*["']([^"']+)["']|import\(\s*["']([^"']+)["']\s*\)/g;
+
+function importsOf(file: string): ImportEdge[] {
+  const text = readFileSync(join(ROOT, file), "utf8");
+  const edges: ImportEdge[] = [];
+  for (const match of text.matchAll(IMPORT_PATTERN)) {
+    const specifier = match[1] ?? match[2];
+    const target = specifier.startsWith(".") ? relative(ROOT, resolve(ROOT, dirname(file), specifier)) : undefined;
+    edges.push({ file, specifier, target });
+  }
+  return edges;
+}
+
+const edgeFiles = [...sourceFiles("server/src"), ...sourceFiles("client/src")];
+const coreFiles = sourceFiles("shared/src");
+
+describe("import graph", () => {
+  it("finds the files it judges", () => {
+    expect(edgeFiles.length).toBeGreaterThan(20);
+    expect(coreFiles.length).toBeGreaterThan(50);
+  });
+
+  it("edges reach the core only through shared/src/index", () => {
+    const deeper = edgeFiles
+      .flatMap(importsOf)
+      .filter((edge) => edge.target?.startsWith("shared/") && join(ROOT, edge.target) !== CORE_DOOR)
+      .map((edge) => `${edge.file} imports ${edge.specifier}`);
+    expect(deeper).toEqual([]);
+  });
+
+  it("the core imports no edge, no editor API, no protocol library and no Node I/O", () => {
+    const forbidden = /^(vscode|vscode-languageserver.*|vscode-languageclient.*|vscode-jsonrpc.*|(node:)?(fs|path|child_process|net|os|worker_threads|process)(\/.*)?)$/;
+    const outward = coreFiles
+      .flatMap(importsOf)
+      .filter((edge) => (edge.target ? !edge.target.startsWith("shared/") : forbidden.test(edge.specifier)))
+      .map((edge) => `${edge.file} imports ${edge.specifier}`);
+    expect(outward).toEqual([]);
+  });
+
+  it("the client never imports the server", () => {
+    const crossing = sourceFiles("client/src")
+      .flatMap(importsOf)
+      .filter((edge) => edge.target?.startsWith("server/"))
+      .map((edge) => `${edge.file} imports ${edge.specifier}`);
+    expect(crossing).toEqual([]);
+  });
+
+  it("the command line and the language server are siblings that do not import each other", () => {
+    const crossing = [
+      ...sourceFiles("server/src/cli").flatMap(importsOf).filter((edge) => edge.target?.startsWith("server/src/lsp")),
+      ...sourceFiles("server/src/lsp").flatMap(importsOf).filter((edge) => edge.target?.startsWith("server/src/cli")),
+    ].map((edge) => `${edge.file} imports ${edge.specifier}`);
+    expect(crossing).toEqual([]);
+  });
+});
