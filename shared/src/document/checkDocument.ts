@@ -4,19 +4,13 @@
  * are not repeated here; callers show both.
  */
 import { analyzeSpecies } from "../chemistry/analyze";
-import type { AnalysisResult, Problem, ProblemCode } from "../chemistry/types";
+import type { AnalysisResult, Problem } from "../chemistry/types";
 import { analyzeOccurrence } from "./analyzeOccurrence";
 import { checkRecord } from "./checks/recordChecks";
-import type { DocumentModel, Finding, FindingSeverity, SpeciesOccurrence, UnreadableSpecies } from "./types";
-
-/** Species VSEPR is not meant for: worth a note, not an error. */
-const OUTSIDE_THE_MODEL: ReadonlySet<ProblemCode> = new Set([
-  "transition-metal-centre",
-  "ionic-solid",
-  "three-centre-bonding",
-  "ambiguous-connectivity",
-  "no-central-atom",
-]);
+import { severityOf } from "./findingSeverity";
+import { isSafeSpellingFix, type AnalyzeText } from "./fixPolicy";
+import { groupAbbreviationIn } from "./groupAbbreviations";
+import type { DocumentModel, Finding, SpeciesOccurrence, UnreadableSpecies } from "./types";
 
 /** Findings for `model`, with `analyze` working out each distinct species once. */
 export function checkDocument(model: DocumentModel, analyze: (text: string) => AnalysisResult = analyzeSpecies): Finding[] {
@@ -41,12 +35,12 @@ export function checkDocument(model: DocumentModel, analyze: (text: string) => A
   }
 
   const findings: Finding[] = [];
-  for (const unreadable of model.unreadable ?? []) findings.push(unreadableFinding(unreadable));
+  for (const unreadable of model.unreadable ?? []) findings.push(unreadableFinding(unreadable, analyze));
   for (const occurrence of model.occurrences) {
     if (echoes.has(occurrence)) continue;
     const result = analysisOf(occurrence);
     if (!result) continue;
-    if (!result.ok) findings.push(problemFinding(occurrence, result.problem));
+    if (!result.ok) findings.push(problemFinding(occurrence, result.problem, analyze));
     else if (result.value.radical) findings.push(radicalFinding(occurrence, result.value.valenceElectrons));
   }
   for (const record of model.records) {
@@ -60,29 +54,37 @@ function sameSpecies(a: SpeciesOccurrence, b: SpeciesOccurrence): boolean {
   return a.reading.formula === b.reading.formula && a.reading.charge === b.reading.charge;
 }
 
-function severityOf(code: ProblemCode): FindingSeverity {
-  if (OUTSIDE_THE_MODEL.has(code)) return "information";
-  return code === "unknown-name" ? "warning" : "error";
+function unreadableFinding(unreadable: UnreadableSpecies, analyze: AnalyzeText): Finding {
+  const { problem, text, range } = unreadable;
+  const abbreviation = problem.code === "unknown-element" ? groupAbbreviationIn(text) : undefined;
+  if (abbreviation !== undefined) {
+    // "PhCH3", "CDCl3": right as written, in a notation lonepair does not read.
+    const message = `${text} is written with "${abbreviation}", a group or isotope symbol that lonepair does not read, so it is not analysed.`;
+    return { range, severity: "information", code: problem.code, message };
+  }
+  return withSafeFix({ range, severity: severityOf(problem.code), code: problem.code, message: problem.message }, text, problem, analyze);
 }
 
-function unreadableFinding(unreadable: UnreadableSpecies): Finding {
-  return withSuggestion(
-    { range: unreadable.range, severity: severityOf(unreadable.problem.code), code: unreadable.problem.code, message: unreadable.problem.message },
-    unreadable.problem,
-  );
-}
-
-function problemFinding(occurrence: SpeciesOccurrence, problem: Problem): Finding {
+function problemFinding(occurrence: SpeciesOccurrence, problem: Problem, analyze: AnalyzeText): Finding {
   const message = problem.message.includes(occurrence.reading.formula) || problem.message.includes(occurrence.text)
     ? problem.message
     : `${occurrence.text}: ${problem.message}`;
-  return withSuggestion({ range: occurrence.range, severity: severityOf(problem.code), code: problem.code, message }, problem);
+  return withSafeFix({ range: occurrence.range, severity: severityOf(problem.code), code: problem.code, message }, occurrence.text, problem, analyze);
 }
 
-/** Adds the reader's suggested spelling as a fix for the whole mention. */
-function withSuggestion(finding: Finding, problem: Problem): Finding {
-  if (!problem.suggestion) return finding;
-  return { ...finding, fix: { range: finding.range, newText: problem.suggestion, title: `Change to ${problem.suggestion}` } };
+/**
+ * Adds the reader's suggested spelling as a fix for the whole mention when the fix policy allows
+ * it; otherwise the suggestion stays a hint in the message.
+ */
+function withSafeFix(finding: Finding, written: string, problem: Problem, analyze: AnalyzeText): Finding {
+  const suggestion = problem.suggestion;
+  if (!suggestion) return finding;
+  if (!isSafeSpellingFix(written, suggestion, analyze)) {
+    // A respelt name is worth a hint; a word re-cased into symbols ("LiMoNeNe") is not.
+    const recased = suggestion.toLowerCase() === written.toLowerCase();
+    return recased || finding.message.includes(suggestion) ? finding : { ...finding, message: `${finding.message} Did you mean ${suggestion}?` };
+  }
+  return { ...finding, fix: { range: finding.range, newText: suggestion, title: `Change to ${suggestion}` } };
 }
 
 function radicalFinding(occurrence: SpeciesOccurrence, valenceElectrons: number): Finding {

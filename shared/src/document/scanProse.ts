@@ -4,6 +4,7 @@
  * Precision comes first: a token counts only when its shape and context leave no doubt, and the
  * species reader has the last word on every candidate.
  */
+import { isSafeSpellingFix } from "./fixPolicy";
 import { mhchemSpanEnd, scanMhchemBody } from "./mhchemSpan";
 import { isPartOfCode, isWordContext } from "./proseContext";
 import { isConfidentToken, needsCalmContext, shapeOf } from "./proseTokenRules";
@@ -282,9 +283,9 @@ function formulaToken(scan: ProseScan, start: number, end: number): number {
   if (result.ok) {
     scan.sink.occurrences.push(occurrenceAt(result.value, token, bodyStart, "formula"));
   } else if ((shape.hasCount || shape.hasCharge) && new Set(shape.symbols).size > 1) {
-    // Report only what comes with a better spelling that itself reads: "CLF3" -> "ClF3".
+    // Report only what comes with a safe better spelling: "CLF3" -> "ClF3", never "CDCl3" -> "CdCl3".
     const suggestion = result.problem.suggestion;
-    if (suggestion && scan.read(suggestion).ok) scan.sink.unreadable.push(unreadableAt(token, bodyStart, result));
+    if (suggestion && isSafeSpellingFix(token, suggestion)) scan.sink.unreadable.push(unreadableAt(token, bodyStart, result));
   }
   return next;
 }

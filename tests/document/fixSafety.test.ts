@@ -1,0 +1,200 @@
+/**
+ * Quick fixes are claims that the new text is right, and `check --fix` applies them unasked. What is
+ * offered, on documents in the styles people write; and the property that applying any offered fix
+ * never creates a new error and never touches text outside its range, over every fixture and example
+ * document and over random documents.
+ */
+import { readdirSync, readFileSync, statSync } from "node:fs";
+import { join, relative } from "node:path";
+import fc from "fast-check";
+import { describe, expect, it } from "vitest";
+import { analyzeDocument, checkDocument, documentKindFor, type DocumentKind, type Finding } from "../../shared/src/index";
+
+const ROOT = join(__dirname, "..", "..");
+
+/** Findings of a document as [severity, the text covered, the fix's replacement or "-"]. */
+function findingsOf(text: string, kind: DocumentKind): [string, string, string][] {
+  return checkDocument(analyzeDocument(text, kind)).map((finding) => [
+    finding.severity,
+    text.slice(finding.range.start, finding.range.end),
+    finding.fix?.newText ?? "-",
+  ]);
+}
+
+describe("which fixes are offered", () => {
+  it.each<[string, string, DocumentKind, [string, string, string][]]>([
+    // common practice: CDCl3 is deuterated chloroform, D the deuterium symbol; Ph is phenyl
+    ["deuterated and phenyl formulas in prose", "Spectra in CDCl3; the toluene (PhCH3) wash.", "markdown", []],
+    ["deuterated solvent in a formula column", "formula,name\nCDCl3,chloroform-d\n", "csv", [["information", "CDCl3", "-"]]],
+    // common practice: tBu is tert-butyl, Et ethyl, Me methyl
+    ["group abbreviations in a species column", "species\ntBuOH\nEt2O\nMeCN\nPhCH3\n", "csv", [
+      ["information", "tBuOH", "-"],
+      ["information", "Et2O", "-"],
+      ["information", "MeCN", "-"],
+      ["information", "PhCH3", "-"],
+    ]],
+    // common practice: limonene and krypton are words, not symbol strings to re-case
+    ["words in a species column are notes, never re-cased", "species\nLimonene\nKrypton\nnacl\n", "csv", [
+      ["information", "Limonene", "-"],
+      ["information", "Krypton", "-"],
+      ["information", "nacl", "-"],
+    ]],
+    ["words in a markdown species column", "| Species | Notes |\n|---|---|\n| Limonene | citrus |\n| KRYPTON | bay C |\n", "markdown", [
+      ["information", "Limonene", "-"],
+      ["information", "KRYPTON", "-"],
+    ]],
+    // common practice: element symbols are a capital and an optional lower-case letter
+    ["a mis-cased formula in prose", "The CLF3 line was weak.", "markdown", [["error", "CLF3", "ClF3"]]],
+    ["a mis-cased formula in a formula column", "formula\nSf6\nnh4+\n", "csv", [
+      ["error", "Sf6", "SF6"],
+      ["error", "nh4+", "NH4+"],
+    ]],
+    ["a mis-cased formula in mhchem", "\\ce{XEF4 + H2O}", "markdown", [["error", "XEF4", "XeF4"]]],
+    // from memory: sulfate is SO4 with charge 2-; "SO42-" runs the count and the charge together
+    ["a charge run into the count", "formula\nSO42-\n", "csv", [["error", "SO42-", "SO4^2-"]]],
+  ])("%s", (_, text, kind, expected) => {
+    expect(findingsOf(text, kind)).toEqual(expected);
+  });
+
+  it("keeps a respelt name as a hint in the message, not as a fix", () => {
+    // common practice: "amonia" is a misspelling of ammonia; the fix would re-spell a word
+    const [finding] = checkDocument(analyzeDocument("species\namonia\n", "csv"));
+    expect(finding).toMatchObject({ severity: "information", code: "unknown-name" });
+    expect(finding.fix).toBeUndefined();
+    expect(finding.message).toContain("ammonia");
+  });
+});
+
+/** Every document the repository keeps as an example or fixture, with its kind. */
+function repositoryDocuments(): { name: string; text: string; kind: DocumentKind }[] {
+  const documents: { name: string; text: string; kind: DocumentKind }[] = [];
+  const visit = (folder: string): void => {
+    for (const entry of readdirSync(folder)) {
+      const path = join(folder, entry);
+      if (statSync(path).isDirectory()) {
+        visit(path);
+        continue;
+      }
+      const kind = documentKindFor(path);
+      if (kind && !entry.startsWith("sarif-schema")) documents.push({ name: relative(ROOT, path), text: readFileSync(path, "utf8"), kind });
+    }
+  };
+  visit(join(ROOT, "tests", "fixtures"));
+  visit(join(ROOT, "examples"));
+  return documents;
+}
+
+/** An error, keyed by what it says and the text it covers. */
+function errorKey(text: string, finding: Finding, at: number): string {
+  return `${finding.code} ${at} ${text.slice(finding.range.start, finding.range.end)}`;
+}
+
+/**
+ * Applies each fix offered for `text` on its own and checks the outcome: only the fixed range
+ * changed, the new text there is no error, and every error elsewhere was already there.
+ * Returns a description of each violation.
+ */
+function fixViolations(text: string, kind: DocumentKind): string[] {
+  const findings = checkDocument(analyzeDocument(text, kind));
+  const violations: string[] = [];
+  for (const finding of findings) {
+    const fix = finding.fix;
+    if (!fix) continue;
+    if (fix.range.start < finding.range.start || fix.range.end > finding.range.end) {
+      violations.push(`fix for ${finding.code} reaches outside its finding`);
+      continue;
+    }
+    const fixed = text.slice(0, fix.range.start) + fix.newText + text.slice(fix.range.end);
+    const shift = fix.newText.length - (fix.range.end - fix.range.start);
+    const before = new Set(findings.filter((other) => other.severity === "error" && other !== finding).map((other) => errorKey(text, other, other.range.start)));
+    for (const after of checkDocument(analyzeDocument(fixed, kind))) {
+      if (after.severity !== "error") continue;
+      const inFix = after.range.start < fix.range.start + fix.newText.length && after.range.end > fix.range.start;
+      const original = after.range.start >= fix.range.start + fix.newText.length ? after.range.start - shift : after.range.start;
+      if (inFix || !before.has(errorKey(fixed, after, original))) {
+        violations.push(`"${text.slice(fix.range.start, fix.range.end)}" -> "${fix.newText}" leaves ${after.code} on "${fixed.slice(after.range.start, after.range.end)}"`);
+      }
+    }
+  }
+  return violations;
+}
+
+describe("applying a fix never creates an error", () => {
+  const documents = repositoryDocuments();
+
+  it("finds the repository's documents", () => {
+    expect(documents.length).toBeGreaterThan(10);
+  });
+
+  it.each(documents.map((document) => [document.name, document] as const))("in %s", (_, document) => {
+    expect(fixViolations(document.text, document.kind)).toEqual([]);
+  });
+
+  // common practice: how formulas, names, abbreviations and words appear in lab documents; each
+  // is right as written, so no fix may touch it
+  const CORRECT = [
+    "SF4", "ClF3", "SO4^2-", "CDCl3", "PhCH3", "tBuOH", "EtOH", "THF", "Limonene", "Krypton", "KRYPTON",
+    "NaCl", "Co2", "CO2", "NO", "US", "The", "water", "H2O", "Fe3+", "CO<sub>2</sub>", "\\ce{SF4 + H2O}",
+    "`smiles:CCO`", "2H2", "C", "+", "->", "→", "(aq)", "R–OH", "H315", "Ti6Al4V", "KR-0412", "NO2", "Ca+2",
+    "CO3-2", "Et2O", "MeCN", "D2O", "iPrOH",
+  ];
+  // common practice: mistakes people make typing formulas and names
+  const WRONG = ["Sf4", "CLF3", "XEF4", "nh4+", "SO42-", "nacl", "amonia", "sulfer tetrafluoride", "\\ce{Sf4}", "CH5", "Ch5"];
+  const SEPARATORS = [" ", ", ", "\n", "\n\n", " + ", " -> ", "; ", "("];
+  /** A document and the ranges of its correct pieces. */
+  interface Generated {
+    readonly text: string;
+    readonly correct: readonly { start: number; end: number }[];
+  }
+  const piece = fc.oneof(
+    fc.constantFrom(...CORRECT).map((text) => ({ text, correct: true })),
+    fc.constantFrom(...WRONG).map((text) => ({ text, correct: false })),
+  );
+  const prose = fc.array(fc.tuple(piece, fc.constantFrom(...SEPARATORS)), { maxLength: 30 }).map((parts): Generated => {
+    let text = "";
+    const correct: { start: number; end: number }[] = [];
+    for (const [{ text: written, correct: isCorrect }, separator] of parts) {
+      if (isCorrect) correct.push({ start: text.length, end: text.length + written.length });
+      text += written + separator;
+    }
+    return { text, correct };
+  });
+  const table = fc.array(fc.tuple(piece, piece), { minLength: 1, maxLength: 15 }).map((rows): Generated => {
+    let text = "formula,name\n";
+    const correct: { start: number; end: number }[] = [];
+    for (const row of rows) {
+      row.forEach(({ text: written, correct: isCorrect }, column) => {
+        if (isCorrect) correct.push({ start: text.length + 1, end: text.length + 1 + written.length });
+        text += `"${written}"${column === 0 ? "," : "\n"}`;
+      });
+    }
+    return { text, correct };
+  });
+
+  /** Fixes that would rewrite part of a piece that is right as written. */
+  function fixesOnCorrectText({ text, correct }: Generated, kind: DocumentKind): string[] {
+    return checkDocument(analyzeDocument(text, kind))
+      .filter((finding) => finding.fix && correct.some((range) => finding.fix!.range.start < range.end && finding.fix!.range.end > range.start))
+      .map((finding) => `"${text.slice(finding.fix!.range.start, finding.fix!.range.end)}" -> "${finding.fix!.newText}"`);
+  }
+
+  it.each<DocumentKind>(["markdown", "plaintext"])("in random %s documents", (kind) => {
+    fc.assert(
+      fc.property(prose, (generated) => {
+        expect(fixViolations(generated.text, kind)).toEqual([]);
+        expect(fixesOnCorrectText(generated, kind)).toEqual([]);
+      }),
+      { numRuns: 300, seed: 11 },
+    );
+  });
+
+  it("in random tables", () => {
+    fc.assert(
+      fc.property(table, (generated) => {
+        expect(fixViolations(generated.text, "csv")).toEqual([]);
+        expect(fixesOnCorrectText(generated, "csv")).toEqual([]);
+      }),
+      { numRuns: 200, seed: 12 },
+    );
+  });
+});
