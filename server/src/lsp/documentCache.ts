@@ -1,6 +1,8 @@
 /**
- * Parse once per (uri, version): a bounded cache of document models that every feature
- * reads. Findings are worked out lazily, once per version, the first time a feature asks.
+ * Parse once per text: a bounded cache of document models that every feature reads, keyed by
+ * a revision that changes with every open and every edit. Version numbers are the client's and
+ * may repeat (a document closed and reopened, a change that keeps its version), so they are
+ * never trusted to tell texts apart. Findings are worked out lazily, once per revision.
  */
 import type { TextDocument } from "vscode-languageserver-textdocument";
 import { analysedTextOf } from "../../../shared/src/index";
@@ -10,6 +12,8 @@ import { analyzeDocument, checkDocument, documentKindFor, type DocumentKind, typ
 export interface AnalysedDocument {
   readonly uri: string;
   readonly version: number;
+  /** The text's revision (see `DocumentCache.revisionOf`). */
+  readonly revision: number;
   readonly kind: DocumentKind;
   readonly model: DocumentModel;
   /** Set when only a prefix was analysed. */
@@ -20,10 +24,18 @@ export interface AnalysedDocument {
 }
 
 export interface DocumentCache {
-  /** The model of the document's current version, analysing it as `kind` if needed. */
+  /** The model of the document's current text, analysing it as `kind` if needed. */
   get(document: TextDocument, kind: DocumentKind): AnalysedDocument;
+  /** Call on every open and every change of `uri`: its text gets a new revision. */
+  contentChanged(uri: string): void;
+  /**
+   * A number that differs for every text a document has had while the server ran, across
+   * closes and reopens: results built from one text are told apart from another's by it.
+   */
+  revisionOf(uri: string): number;
   /** The kind of document, or undefined when lonepair has nothing to read in it. Cheap. */
   kindOf(document: TextDocument): DocumentKind | undefined;
+  /** Forgets a closed document: its model and its revision. */
   delete(uri: string): void;
 }
 
@@ -35,16 +47,28 @@ const SNIFF_LENGTH = 4096;
 /** Creates a cache holding at most `capacity` documents, least recently used dropped first. */
 export function createDocumentCache(capacity = 32): DocumentCache {
   const entries = new Map<string, AnalysedDocument>();
+  const revisions = new Map<string, number>();
+  let lastRevision = 0;
+  const revisionOf = (uri: string): number => {
+    let revision = revisions.get(uri);
+    if (revision === undefined) {
+      lastRevision += 1;
+      revision = lastRevision;
+      revisions.set(uri, revision);
+    }
+    return revision;
+  };
   return {
     get(document, kind) {
+      const revision = revisionOf(document.uri);
       const cached = entries.get(document.uri);
-      if (cached && cached.version === document.version && cached.kind === kind) {
+      if (cached && cached.revision === revision && cached.version === document.version && cached.kind === kind) {
         // Re-insert so the map's order stays least-recently-used first.
         entries.delete(document.uri);
         entries.set(document.uri, cached);
         return cached;
       }
-      const entry = analyse(document, kind);
+      const entry = analyse(document, kind, revision);
       entries.delete(document.uri);
       entries.set(document.uri, entry);
       while (entries.size > capacity) {
@@ -57,8 +81,14 @@ export function createDocumentCache(capacity = 32): DocumentCache {
       // Recomputed per call: a header typed into a new .txt file can turn it into a table.
       return documentKindFor(fileNameOf(document.uri), document.languageId, document.getText(firstBytesRange(document)));
     },
+    contentChanged(uri) {
+      lastRevision += 1;
+      revisions.set(uri, lastRevision);
+    },
+    revisionOf,
     delete(uri) {
       entries.delete(uri);
+      revisions.delete(uri);
     },
   };
 }
@@ -67,13 +97,14 @@ function firstBytesRange(document: TextDocument) {
   return { start: { line: 0, character: 0 }, end: document.positionAt(SNIFF_LENGTH) };
 }
 
-function analyse(document: TextDocument, kind: DocumentKind): AnalysedDocument {
+function analyse(document: TextDocument, kind: DocumentKind, revision: number): AnalysedDocument {
   const analysed = analysedTextOf(document.getText());
   const model = analysed.binary ? EMPTY_MODEL(kind) : analyzeDocument(analysed.text, kind);
   let findings: readonly Finding[] | undefined;
   return {
     uri: document.uri,
     version: document.version,
+    revision,
     kind,
     model,
     truncatedAt: analysed.truncatedAt,

@@ -1,8 +1,8 @@
 /**
- * Wraps a request handler so that a thrown error or a cancelled request is answered with an
- * empty result and a log line, never a crashed server.
+ * Wraps a request handler so that a thrown error is answered with an empty result and a log
+ * line, never a crashed server, and a cancelled request with the protocol's RequestCancelled.
  */
-import type { CancellationToken } from "vscode-languageserver";
+import { LSPErrorCodes, ResponseError, type CancellationToken } from "vscode-languageserver";
 
 /** Where the server writes log lines (the connection's console in production). */
 export interface ServerLog {
@@ -12,7 +12,8 @@ export interface ServerLog {
 
 /**
  * Returns a handler that yields to the event loop first (so a pending cancellation can
- * arrive), then runs `handler`, and answers `fallback` on cancellation or error.
+ * arrive), then runs `handler`. A cancelled request is answered with RequestCancelled (the
+ * client then knows the result was never computed), an error with `fallback`.
  */
 export function guarded<Params, Result>(
   log: ServerLog,
@@ -23,14 +24,20 @@ export function guarded<Params, Result>(
   return async (params, token) => {
     try {
       await yieldToEventLoop();
-      if (token.isCancellationRequested) return fallback;
+      if (token.isCancellationRequested) return cancelled(name);
       const result = await handler(params, token);
-      return token.isCancellationRequested ? fallback : result;
+      return token.isCancellationRequested ? cancelled(name) : result;
     } catch (error) {
+      // A protocol error (the cancellation above) is the answer itself, not a failure.
+      if (error instanceof ResponseError) throw error;
       log.error(`lonepair: ${name} failed: ${describeError(error)}`);
       return fallback;
     }
   };
+}
+
+function cancelled(name: string): never {
+  throw new ResponseError(LSPErrorCodes.RequestCancelled, `lonepair: ${name} was cancelled`);
 }
 
 /** Runs a notification handler; an error is logged and swallowed. */

@@ -75,7 +75,13 @@ export function startServer(connection: Connection): void {
     ),
   );
 
-  documents.onDidChangeContent(guardedNotification(log, "document change", (event) => diagnostics?.documentChanged(event.document.uri)));
+  documents.onDidChangeContent(
+    guardedNotification(log, "document change", (event) => {
+      // Every open and change is a new text, whatever version number the client gave it.
+      context.cache.contentChanged(event.document.uri);
+      diagnostics?.documentChanged(event.document.uri);
+    }),
+  );
   documents.onDidClose(
     guardedNotification(log, "document close", (event) => {
       context.cache.delete(event.document.uri);

@@ -18,7 +18,14 @@ export interface ServerSettings {
   /** Digits after the decimal point for angles, 0-3. */
   readonly angleDecimals: number;
   readonly summaryTable: { readonly columns: readonly SummaryColumn[] };
+  readonly diagnostics: {
+    /** At most this many diagnostics per document; one more says how many were left out. */
+    readonly maxPerDocument: number;
+  };
 }
+
+/** Bounds of `diagnostics.maxPerDocument`: at least one shown, and never a message of tens of megabytes. */
+export const MAX_DIAGNOSTICS_BOUNDS = { minimum: 1, maximum: 100_000 } as const;
 
 const ALL_KINDS: readonly DocumentKind[] = ["markdown", "plaintext", "csv", "tsv", "json", "yaml"];
 
@@ -27,6 +34,7 @@ export const DEFAULT_SETTINGS: ServerSettings = {
   inlayHints: { prose: true, dataFiles: false },
   angleDecimals: 1,
   summaryTable: { columns: SUMMARY_COLUMNS },
+  diagnostics: { maxPerDocument: 1000 },
 };
 
 /** Reads the `lonepair` section as the client sent it; never throws. */
@@ -34,6 +42,7 @@ export function settingsFrom(raw: unknown): ServerSettings {
   const section = isRecord(raw) ? raw : {};
   const hints = isRecord(section.inlayHints) ? section.inlayHints : {};
   const table = isRecord(section.summaryTable) ? section.summaryTable : {};
+  const diagnostics = isRecord(section.diagnostics) ? section.diagnostics : {};
   return {
     enabledLanguages: kindList(section.enabledLanguages) ?? DEFAULT_SETTINGS.enabledLanguages,
     inlayHints: {
@@ -42,6 +51,7 @@ export function settingsFrom(raw: unknown): ServerSettings {
     },
     angleDecimals: decimals(section.angleDecimals),
     summaryTable: { columns: columnList(table.columns) ?? DEFAULT_SETTINGS.summaryTable.columns },
+    diagnostics: { maxPerDocument: diagnosticLimit(diagnostics.maxPerDocument) },
   };
 }
 
@@ -71,4 +81,9 @@ function columnList(value: unknown): SummaryColumn[] | undefined {
 function decimals(value: unknown): number {
   if (typeof value !== "number" || !Number.isFinite(value)) return DEFAULT_SETTINGS.angleDecimals;
   return Math.max(0, Math.min(3, Math.round(value)));
+}
+
+function diagnosticLimit(value: unknown): number {
+  if (typeof value !== "number" || !Number.isFinite(value)) return DEFAULT_SETTINGS.diagnostics.maxPerDocument;
+  return Math.max(MAX_DIAGNOSTICS_BOUNDS.minimum, Math.min(MAX_DIAGNOSTICS_BOUNDS.maximum, Math.floor(value)));
 }

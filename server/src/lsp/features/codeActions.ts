@@ -28,6 +28,8 @@ const FIX_ALL_KIND = `${CodeActionKind.SourceFixAll}.lonepair`;
 interface FixAllData {
   readonly uri: string;
   readonly version: number;
+  /** The text's revision: a version number alone may repeat for a different text. */
+  readonly revision: number;
 }
 
 /** Registers the code action handler, and the resolve handler when the client resolves edits. */
@@ -55,7 +57,7 @@ export function registerCodeActions(context: ServerContext): void {
       if (kind && tableFixesOf(analysed).length > 0) {
         const action: CodeAction = { title: FIX_ALL_TITLE, kind };
         // A big table's fix-all edit is large: where the client resolves edits, it is built only when chosen.
-        if (context.clientFeatures().codeActionResolveEdit) action.data = { uri: document.uri, version: document.version } satisfies FixAllData;
+        if (context.clientFeatures().codeActionResolveEdit) action.data = { uri: document.uri, version: document.version, revision: analysed.revision } satisfies FixAllData;
         else action.edit = fixAllEdit(context, document, analysed);
         actions.push(action);
       }
@@ -69,7 +71,7 @@ export function registerCodeActions(context: ServerContext): void {
       if (action.title !== FIX_ALL_TITLE || typeof data?.uri !== "string") return action;
       const enabled = await enabledDocument(context, data.uri);
       // An edit for an older version would land in the wrong places: offer none.
-      if (!enabled || enabled.document.version !== data.version) return action;
+      if (!enabled || enabled.document.version !== data.version || enabled.analysed.revision !== data.revision) return action;
       return { ...action, edit: fixAllEdit(context, enabled.document, enabled.analysed) };
     }),
   );

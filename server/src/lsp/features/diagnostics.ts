@@ -59,25 +59,58 @@ export function registerDiagnostics(context: ServerContext): DiagnosticsFeature 
   return context.clientFeatures().pullDiagnostics ? registerPull(context) : registerPush(context);
 }
 
-async function currentDiagnostics(context: ServerContext, uri: string): Promise<{ version: number; items: Diagnostic[] } | undefined> {
+/** The diagnostics of a document's current text, at most `maxPerDocument` plus one summary. */
+async function currentDiagnostics(
+  context: ServerContext,
+  uri: string,
+): Promise<{ version: number; revision: number; items: Diagnostic[] } | undefined> {
   const enabled = await enabledDocument(context, uri);
   if (!enabled) return undefined;
-  return { version: enabled.document.version, items: diagnosticsOf(enabled.document, enabled.analysed.findings()) };
+  const { document, analysed, settings } = enabled;
+  const items = diagnosticsOf(document, cappedFindings(analysed.findings(), settings.diagnostics.maxPerDocument));
+  return { version: document.version, revision: analysed.revision, items };
+}
+
+const SEVERITY_RANK: Readonly<Record<FindingSeverity, number>> = { error: 0, warning: 1, information: 2, hint: 3 };
+
+/**
+ * Keeps the `limit` most serious findings (earlier first among equals), in document order, and
+ * adds one finding that says how many were left out, at the first of them. A document full of
+ * impossible species must not become a message of many megabytes sent on every pause in typing.
+ */
+export function cappedFindings(findings: readonly Finding[], limit: number): readonly Finding[] {
+  if (findings.length <= limit) return findings;
+  const rank = (finding: Finding): number => SEVERITY_RANK[finding.severity] ?? SEVERITY_RANK.information;
+  const order = findings.map((_, index) => index);
+  order.sort((a, b) => rank(findings[a]) - rank(findings[b]) || findings[a].range.start - findings[b].range.start || a - b);
+  const kept = order.slice(0, limit).sort((a, b) => findings[a].range.start - findings[b].range.start || a - b);
+  const left = order.slice(limit);
+  const firstLeft = left.reduce((first, index) => (findings[index].range.start < findings[first].range.start ? index : first), left[0]);
+  const mostSeriousLeft = findings[left[0]].severity;
+  const summary: Finding = {
+    range: { start: findings[firstLeft].range.start, end: findings[firstLeft].range.start },
+    severity: mostSeriousLeft === "error" || mostSeriousLeft === "warning" ? "warning" : "information",
+    code: "diagnostics-limit-reached",
+    message:
+      `${left.length.toLocaleString("en-US")} more problems in this document are not shown: ` +
+      `lonepair shows at most ${limit.toLocaleString("en-US")} per document (setting lonepair.diagnostics.maxPerDocument).`,
+  };
+  return [...kept.map((index) => findings[index]), summary];
 }
 
 function registerPull(context: ServerContext): DiagnosticsFeature {
   const empty: DocumentDiagnosticReport = { kind: DocumentDiagnosticReportKind.Full, items: [] };
+  // The result depends only on the text (its revision) and the settings; both are in the id.
+  const resultIdOf = (revision: number): string => `${revision}:${context.settings.generation}`;
   context.connection.languages.diagnostics.on(
     guarded<DocumentDiagnosticParams, DocumentDiagnosticReport>(context.log, "diagnostics", empty, async (params) => {
       const uri = params.textDocument.uri;
-      const document = context.documents.get(uri);
-      if (!document) return empty;
-      // The result depends only on the version and the settings, so an unchanged pair is reported as such.
-      const resultId = `${document.version}:${context.settings.generation}`;
+      if (!context.documents.get(uri)) return empty;
+      const resultId = resultIdOf(context.cache.revisionOf(uri));
       if (params.previousResultId === resultId) return { kind: DocumentDiagnosticReportKind.Unchanged, resultId };
       const current = await currentDiagnostics(context, uri);
-      if (!current) return { kind: DocumentDiagnosticReportKind.Full, items: [] };
-      return { kind: DocumentDiagnosticReportKind.Full, resultId: `${current.version}:${context.settings.generation}`, items: current.items };
+      if (!current) return empty;
+      return { kind: DocumentDiagnosticReportKind.Full, resultId: resultIdOf(current.revision), items: current.items };
     }),
   );
   return {
@@ -96,14 +129,14 @@ function registerPush(context: ServerContext): DiagnosticsFeature {
 
   const publish = async (uri: string): Promise<void> => {
     timers.delete(uri);
-    const requested = context.documents.get(uri);
-    if (!requested) return;
+    if (!context.documents.get(uri)) return;
+    const requestedRevision = context.cache.revisionOf(uri);
     try {
       const current = await currentDiagnostics(context, uri);
-      // A newer version or a close wins over this result: it is stale, drop it.
+      // A newer text or a close wins over this result: it is stale, drop it.
       const now = context.documents.get(uri);
-      if (!now || now.version !== requested.version) return;
-      if (current && current.version !== now.version) return;
+      if (!now || context.cache.revisionOf(uri) !== requestedRevision) return;
+      if (current && current.revision !== requestedRevision) return;
       await context.connection.sendDiagnostics({ uri, version: now.version, diagnostics: current?.items ?? [] });
     } catch (error) {
       context.log.error(`lonepair: diagnostics for ${uri} failed: ${String(error)}`);

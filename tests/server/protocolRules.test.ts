@@ -1,0 +1,222 @@
+/**
+ * The protocol's own rules, checked over stdio against the built server: the life cycle
+ * (nothing before `initialize`, one `initialize`, nothing after `shutdown`), cancelled requests,
+ * texts that change without a new version number, and the cap on diagnostics per document.
+ */
+import { afterAll, afterEach, beforeAll, describe, expect, it } from "vitest";
+import {
+  DiagnosticSeverity,
+  DidChangeTextDocumentNotification,
+  DidCloseTextDocumentNotification,
+  DidOpenTextDocumentNotification,
+  DocumentDiagnosticReportKind,
+  DocumentDiagnosticRequest,
+  ErrorCodes,
+  HoverRequest,
+  LSPErrorCodes,
+  type ClientCapabilities,
+  type Diagnostic,
+  type DocumentDiagnosticReport,
+  type FullDocumentDiagnosticReport,
+  type MarkupContent,
+} from "vscode-languageserver-protocol/node";
+import { FULL_CAPABILITIES, fixtureUri, startSession, type LspSession } from "./lspSession";
+import { startRawSession, type RawSession } from "./rawSession";
+
+const INITIALIZE_PARAMS = { processId: null, rootUri: null, capabilities: FULL_CAPABILITIES };
+const NOTE_URI = fixtureUri("notebook/run-31.md");
+const NOTE = "Run 31: the SF4 cylinder KR-0931 went back to bay C.\n";
+// Position of the S of SF4 in NOTE.
+const ON_SF4 = { line: 0, character: 12 };
+
+describe("life cycle", () => {
+  let raw: RawSession | undefined;
+  afterEach(() => raw?.kill());
+
+  it("refuses requests before initialize and after shutdown, and a second initialize", async () => {
+    raw = startRawSession();
+    raw.send(
+      { method: "textDocument/didOpen", params: { textDocument: { uri: NOTE_URI, languageId: "markdown", version: 1, text: NOTE } } },
+      { id: 1, method: "textDocument/hover", params: { textDocument: { uri: NOTE_URI }, position: ON_SF4 } },
+    );
+    // source: LSP 3.17 specification, "Initialize Request": ServerNotInitialized (-32002) before initialize
+    expect((await raw.responseTo(1)).error?.code).toBe(ErrorCodes.ServerNotInitialized);
+
+    raw.send({ id: 2, method: "initialize", params: INITIALIZE_PARAMS });
+    expect((await raw.responseTo(2)).result).toHaveProperty("capabilities");
+    raw.send({ id: 3, method: "initialize", params: INITIALIZE_PARAMS });
+    // source: LSP 3.17 specification: initialize may be sent only once
+    expect((await raw.responseTo(3)).error?.code).toBe(ErrorCodes.InvalidRequest);
+
+    // The didOpen sent before initialize was dropped, as the specification says: no document, no hover.
+    raw.send({ method: "initialized", params: {} }, { id: 4, method: "textDocument/hover", params: { textDocument: { uri: NOTE_URI }, position: ON_SF4 } });
+    expect((await raw.responseTo(4)).result).toBeNull();
+    raw.send(
+      { method: "textDocument/didOpen", params: { textDocument: { uri: NOTE_URI, languageId: "markdown", version: 1, text: NOTE } } },
+      { id: 5, method: "textDocument/hover", params: { textDocument: { uri: NOTE_URI }, position: ON_SF4 } },
+    );
+    // common practice: SF4 is a seesaw
+    expect(JSON.stringify((await raw.responseTo(5)).result)).toContain("seesaw");
+
+    raw.send({ id: 6, method: "shutdown" });
+    expect((await raw.responseTo(6)).error).toBeUndefined();
+    raw.send({ id: 7, method: "textDocument/hover", params: { textDocument: { uri: NOTE_URI }, position: ON_SF4 } });
+    // source: LSP 3.17 specification, "Shutdown Request": later requests fail with InvalidRequest
+    expect((await raw.responseTo(7)).error?.code).toBe(ErrorCodes.InvalidRequest);
+    raw.send({ method: "exit" });
+    expect(await raw.exited()).toBe(0);
+  });
+
+  it("answers a request cancelled before it ran with RequestCancelled", async () => {
+    raw = startRawSession();
+    raw.send({ id: 1, method: "initialize", params: INITIALIZE_PARAMS });
+    await raw.responseTo(1);
+    raw.send(
+      { method: "initialized", params: {} },
+      { method: "textDocument/didOpen", params: { textDocument: { uri: NOTE_URI, languageId: "markdown", version: 1, text: NOTE } } },
+      // The request and its cancellation arrive in one read, so the cancellation is always seen first.
+      { id: 2, method: "textDocument/hover", params: { textDocument: { uri: NOTE_URI }, position: ON_SF4 } },
+      { method: "$/cancelRequest", params: { id: 2 } },
+      { id: 3, method: "textDocument/hover", params: { textDocument: { uri: NOTE_URI }, position: ON_SF4 } },
+    );
+    // source: LSP 3.17 specification, "Cancellation Support": RequestCancelled (-32800)
+    expect((await raw.responseTo(2)).error?.code).toBe(LSPErrorCodes.RequestCancelled);
+    // The uncancelled twin is answered in full.
+    expect(JSON.stringify((await raw.responseTo(3)).result)).toContain("seesaw");
+  });
+});
+
+const PULLING_CLIENT: ClientCapabilities = {
+  ...FULL_CAPABILITIES,
+  textDocument: { ...FULL_CAPABILITIES.textDocument, diagnostic: { dynamicRegistration: false } },
+  workspace: { ...FULL_CAPABILITIES.workspace, configuration: true },
+};
+
+// common practice: carbon makes four bonds, so CH5 is an error and CH4 is fine.
+const WRONG = "A trainee wrote CH5 in the cylinder log.\n";
+const RIGHT = "A trainee wrote CH4 in the cylinder log.\n";
+
+/** The three ways a client can hand over a new text without a new version number. */
+type Replacement = (session: LspSession, uri: string, text: string) => Promise<void>;
+const SAME_VERSION_REPLACEMENTS: readonly [string, Replacement][] = [
+  [
+    "closed and reopened at the same version",
+    async (session, uri, text) => {
+      await session.connection.sendNotification(DidCloseTextDocumentNotification.type, { textDocument: { uri } });
+      await session.connection.sendNotification(DidOpenTextDocumentNotification.type, { textDocument: { uri, languageId: "markdown", version: 1, text } });
+    },
+  ],
+  [
+    "opened a second time without a close",
+    (session, uri, text) =>
+      session.connection.sendNotification(DidOpenTextDocumentNotification.type, { textDocument: { uri, languageId: "markdown", version: 1, text } }),
+  ],
+  [
+    "changed keeping its version number",
+    (session, uri, text) =>
+      session.connection.sendNotification(DidChangeTextDocumentNotification.type, { textDocument: { uri, version: 1 }, contentChanges: [{ text }] }),
+  ],
+];
+
+const errorsIn = (items: readonly Diagnostic[]): Diagnostic[] => items.filter((item) => item.severity === DiagnosticSeverity.Error);
+
+describe("a new text at the same version number", () => {
+  let pulling: LspSession;
+  let pushing: LspSession;
+  beforeAll(async () => {
+    [pulling, pushing] = await Promise.all([startSession({ capabilities: PULLING_CLIENT, configuration: () => ({}) }), startSession()]);
+  });
+  afterAll(async () => {
+    await Promise.all([pulling?.stop(), pushing?.stop()]);
+  });
+
+  it.each(SAME_VERSION_REPLACEMENTS)("pull diagnostics: %s gets a full report of the new text", async (label, replace) => {
+    const uri = fixtureUri(`notebook/pull-${label.replaceAll(" ", "-")}.md`);
+    await pulling.connection.sendNotification(DidOpenTextDocumentNotification.type, { textDocument: { uri, languageId: "markdown", version: 1, text: WRONG } });
+    const first = (await pulling.connection.sendRequest(DocumentDiagnosticRequest.type, { textDocument: { uri } })) as FullDocumentDiagnosticReport;
+    expect(errorsIn(first.items)).toHaveLength(1);
+    await replace(pulling, uri, RIGHT);
+    const second: DocumentDiagnosticReport = await pulling.connection.sendRequest(DocumentDiagnosticRequest.type, {
+      textDocument: { uri },
+      previousResultId: first.resultId,
+    });
+    expect(second.kind, "an unchanged report would keep the old text's error on screen").toBe(DocumentDiagnosticReportKind.Full);
+    expect(errorsIn((second as FullDocumentDiagnosticReport).items)).toEqual([]);
+    expect((second as FullDocumentDiagnosticReport).resultId).not.toBe(first.resultId);
+  });
+
+  it.each(SAME_VERSION_REPLACEMENTS)("pushed diagnostics: %s are those of the new text", async (label, replace) => {
+    const uri = fixtureUri(`notebook/push-${label.replaceAll(" ", "-")}.md`);
+    await pushing.connection.sendNotification(DidOpenTextDocumentNotification.type, { textDocument: { uri, languageId: "markdown", version: 1, text: WRONG } });
+    await pushing.waitForDiagnostics(uri, (params) => errorsIn(params.diagnostics).length === 1);
+    await replace(pushing, uri, RIGHT);
+    const after = await pushing.waitForDiagnostics(uri, undefined, 10_000);
+    expect(errorsIn(after.diagnostics), "the diagnostics after the new text still show the old text's error").toEqual([]);
+  });
+
+  it.each(SAME_VERSION_REPLACEMENTS)("hover: %s reads the new text", async (label, replace) => {
+    const uri = fixtureUri(`notebook/hover-${label.replaceAll(" ", "-")}.md`);
+    await pushing.connection.sendNotification(DidOpenTextDocumentNotification.type, {
+      textDocument: { uri, languageId: "markdown", version: 1, text: NOTE },
+    });
+    const hover = async (): Promise<string> =>
+      ((await pushing.connection.sendRequest(HoverRequest.type, { textDocument: { uri }, position: ON_SF4 }))?.contents as MarkupContent | undefined)
+        ?.value ?? "";
+    // common practice: SF4 is a seesaw, XeF4 square planar
+    expect(await hover()).toContain("seesaw");
+    await replace(pushing, uri, NOTE.replace("SF4", "XeF4"));
+    expect(await hover()).toContain("square planar");
+  });
+});
+
+/** A note with `count` impossible species, one per line. */
+function noteWithImpossibleSpecies(count: number): string {
+  return Array.from({ length: count }, (_, index) => `Line ${index + 1}: a trainee wrote CH5 again.`).join("\n") + "\n";
+}
+
+const LIMIT_CODE = "diagnostics-limit-reached";
+
+describe("diagnostics per document are capped", () => {
+  let pulling: LspSession;
+  let pushing: LspSession;
+  let limit = 10;
+  beforeAll(async () => {
+    [pulling, pushing] = await Promise.all([
+      startSession({ capabilities: PULLING_CLIENT, configuration: () => ({ diagnostics: { maxPerDocument: limit } }) }),
+      startSession(),
+    ]);
+  });
+  afterAll(async () => {
+    await Promise.all([pulling?.stop(), pushing?.stop()]);
+  });
+
+  it("pushes at most 1,000 by default, then one diagnostic counting the rest", async () => {
+    const uri = fixtureUri("notebook/many-mistakes.md");
+    pushing.open(uri, "markdown", noteWithImpossibleSpecies(2500));
+    const published = await pushing.waitForDiagnostics(uri, undefined, 60_000);
+    expect(published.diagnostics).toHaveLength(1001);
+    const summary = published.diagnostics.filter((diagnostic) => diagnostic.code === LIMIT_CODE);
+    expect(summary).toHaveLength(1);
+    expect(summary[0].message).toContain("1,500 more");
+    // The shown ones are the first in the document, and the summary sits at the first one left out.
+    expect(published.diagnostics.filter((diagnostic) => diagnostic.code !== LIMIT_CODE).map((diagnostic) => diagnostic.range.start.line)).toEqual(
+      Array.from({ length: 1000 }, (_, line) => line),
+    );
+    expect(summary[0].range.start.line).toBe(1000);
+  });
+
+  it.each([
+    [10, 25, 11],
+    [10, 10, 10],
+    [3, 4, 4],
+  ])("pulls at most the configured %i (of %i), plus the count of the rest: %i items", async (configured, mistakes, expected) => {
+    limit = configured;
+    const uri = fixtureUri(`notebook/mistakes-${configured}-${mistakes}.md`);
+    pulling.open(uri, "markdown", noteWithImpossibleSpecies(mistakes));
+    const report = (await pulling.connection.sendRequest(DocumentDiagnosticRequest.type, { textDocument: { uri } })) as FullDocumentDiagnosticReport;
+    expect(report.items).toHaveLength(expected);
+    const summaries = report.items.filter((item) => item.code === LIMIT_CODE);
+    expect(summaries).toHaveLength(mistakes > configured ? 1 : 0);
+    if (mistakes > configured) expect(summaries[0].message).toContain(`${mistakes - configured} more`);
+  });
+});
