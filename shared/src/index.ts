@@ -43,6 +43,7 @@ export { MODEL_CAUTION, PLAIN_CARD_STYLE, formatAnalysisCard } from "./report/an
 export type { CardStyle } from "./report/analysisCard";
 export { toAnalysisJson } from "./report/analysisJson";
 export { HOVER_CAUTION, hoverMarkdown, problemMarkdown } from "./report/hoverMarkdown";
+export type { HoverFormat } from "./report/hoverMarkdown";
 export { shapeViewModel } from "./report/shapeViewModel";
 export type { ShapeViewModel } from "./report/shapeViewModel";
 export { SUMMARY_COLUMNS, isSummaryColumn, summaryTable } from "./report/summaryTable";

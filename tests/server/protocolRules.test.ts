@@ -220,3 +220,49 @@ describe("diagnostics per document are capped", () => {
     if (mistakes > configured) expect(summaries[0].message).toContain(`${mistakes - configured} more`);
   });
 });
+
+describe("hover in the client's format", () => {
+  const sessions: LspSession[] = [];
+  afterAll(async () => {
+    await Promise.all(sessions.map((session) => session.stop()));
+  });
+
+  /** The hover of SF4 and of CH5 for a client listing `formats` (undefined: no hover capability at all). */
+  async function hoversFor(formats: string[] | undefined): Promise<MarkupContent[]> {
+    const capabilities: ClientCapabilities = {
+      ...FULL_CAPABILITIES,
+      textDocument: { ...FULL_CAPABILITIES.textDocument, hover: formats ? { contentFormat: formats as MarkupContent["kind"][] } : undefined },
+    };
+    const session = await startSession({ capabilities });
+    sessions.push(session);
+    const uri = fixtureUri("notebook/run-32.md");
+    session.open(uri, "markdown", `${NOTE}A trainee wrote CH5 in the log.\n`);
+    const onCh5 = { line: 1, character: 17 };
+    const results = await Promise.all(
+      [ON_SF4, onCh5].map((position) => session.connection.sendRequest(HoverRequest.type, { textDocument: { uri }, position })),
+    );
+    return results.map((result) => result?.contents as MarkupContent);
+  }
+
+  it.each([
+    [["plaintext"], "plaintext"],
+    [["plaintext", "markdown"], "plaintext"],
+    [undefined, "plaintext"],
+    [["markdown", "plaintext"], "markdown"],
+  ])("a client listing %j gets %s", async (formats, kind) => {
+    const hovers = await hoversFor(formats);
+    for (const hover of hovers) {
+      expect(hover.kind).toBe(kind);
+      // common practice: SF4 seesaw; CH5 is refused, and both cards keep the caution
+      expect(hover.value).toMatch(/seesaw|not analysed/);
+      expect(hover.value).toMatch(/model prediction, not measured data/i);
+    }
+    const markdownSyntax = /\*\*|`|!\[|\]\(|data:image|\\_|^_|_$/m;
+    if (kind === "plaintext") {
+      for (const hover of hovers) expect(hover.value, "plain text must not carry markdown syntax or an image").not.toMatch(markdownSyntax);
+    } else {
+      expect(hovers[0].value).toContain("data:image/svg+xml");
+      expect(hovers[0].value).toContain("**seesaw**");
+    }
+  });
+});

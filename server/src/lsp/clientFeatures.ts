@@ -3,6 +3,7 @@
  * this instead of the raw capabilities so that a missing capability degrades one feature.
  */
 import { MarkupKind, type ClientCapabilities } from "vscode-languageserver";
+import type { HoverFormat } from "../../../shared/src/index";
 
 export interface ClientFeatures {
   /** `workspace/configuration` can be asked for settings. */
@@ -20,7 +21,8 @@ export interface ClientFeatures {
   readonly codeActionLiterals: boolean;
   /** Code actions may leave out their edit and have it filled in by `codeAction/resolve`. */
   readonly codeActionResolveEdit: boolean;
-  readonly hoverMarkdown: boolean;
+  /** The client's preferred hover format among those we write; plain text when it names none. */
+  readonly hoverFormat: HoverFormat;
 }
 
 /** Reads the capabilities the server cares about; anything absent counts as unsupported. */
@@ -38,8 +40,18 @@ export function clientFeaturesFrom(capabilities: ClientCapabilities): ClientFeat
     codeActionLiterals: isObject(textDocument?.codeAction?.codeActionLiteralSupport),
     codeActionResolveEdit:
       textDocument?.codeAction?.dataSupport === true && arrayIncludes(textDocument?.codeAction?.resolveSupport?.properties, "edit"),
-    hoverMarkdown: arrayIncludes(textDocument?.hover?.contentFormat, MarkupKind.Markdown),
+    hoverFormat: preferredHoverFormat(textDocument?.hover?.contentFormat),
   };
+}
+
+/**
+ * `contentFormat` lists the client's formats in order of preference. A client that lists none
+ * gets plain text: markdown syntax shown raw is unreadable, plain text shown as markdown is not.
+ */
+function preferredHoverFormat(formats: unknown): HoverFormat {
+  if (!Array.isArray(formats)) return MarkupKind.PlainText;
+  const known = formats.find((format) => format === MarkupKind.Markdown || format === MarkupKind.PlainText) as HoverFormat | undefined;
+  return known ?? MarkupKind.PlainText;
 }
 
 /** Clients send what they send: a missing or malformed list counts as empty. */

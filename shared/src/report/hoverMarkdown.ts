@@ -1,5 +1,6 @@
 /**
- * Turns one species analysis into a short markdown card for an editor hover.
+ * Turns one species analysis into a short card for an editor hover, as markdown or, for
+ * clients that only show plain text, as the same card without markup or images.
  * Pure: takes the core's plain data, returns a string; no editor or protocol types.
  */
 import type {
@@ -15,10 +16,15 @@ import { shapeSketchSvg, svgDataUri } from "./shapeSketch";
 export const HOVER_CAUTION =
   "Model prediction, not measured data: follow the safety data sheet, local rules and licensed practice.";
 
-/** Options that change how numbers are written. */
+/** The text formats a hover card can be written in (the protocol's markup kinds). */
+export type HoverFormat = "markdown" | "plaintext";
+
+/** Options that change how the card and its numbers are written. */
 export interface HoverMarkdownOptions {
   /** Digits after the decimal point for angles (0-3). */
   readonly angleDecimals: number;
+  /** Markdown by default; plain text has no markup, no escapes and no sketch image. */
+  readonly format?: HoverFormat;
   /** At most this many distinct centre groups are listed; the rest are counted. */
   readonly maxCentreGroups?: number;
 }
@@ -43,42 +49,69 @@ export function formatAngle(degrees: number, decimals: number): string {
   return `${degrees.toFixed(digits)}°`;
 }
 
-/** Builds the hover card for one analysed species. */
+/** How emphasis, code and document text are written in one format. */
+interface Markup {
+  readonly strong: (text: string) => string;
+  readonly code: (text: string) => string;
+  readonly emphasis: (text: string) => string;
+  /** Text from the document or the core, made safe for the format. */
+  readonly text: (text: string) => string;
+  readonly images: boolean;
+}
+
+const MARKDOWN: Markup = {
+  strong: (text) => `**${text}**`,
+  code: (text) => `\`${text}\``,
+  emphasis: (text) => `_${text}_`,
+  text: escapeMarkdown,
+  images: true,
+};
+
+const same = (text: string): string => text;
+const PLAIN_TEXT: Markup = { strong: same, code: same, emphasis: same, text: same, images: false };
+
+function markupFor(format: HoverFormat | undefined): Markup {
+  return format === "plaintext" ? PLAIN_TEXT : MARKDOWN;
+}
+
+/** Builds the hover card for one analysed species (markdown unless `options.format` says otherwise). */
 export function hoverMarkdown(analysis: SpeciesAnalysis, options: HoverMarkdownOptions): string {
+  const markup = markupFor(options.format);
   const lines: string[] = [];
-  lines.push(titleLine(analysis));
+  lines.push(titleLine(analysis, markup));
   lines.push("");
-  const sketch = sketchLine(analysis);
+  const sketch = markup.images ? sketchLine(analysis) : undefined;
   if (sketch) lines.push(sketch, "");
   lines.push(electronLine(analysis));
   lines.push("");
-  const measured = measuredLines(analysis.measuredAngles.slice(0, MAX_LISTED), options.angleDecimals);
-  const blocks = centreBlocks(analysis.centres, options);
+  const measured = measuredLines(analysis.measuredAngles.slice(0, MAX_LISTED), options.angleDecimals, markup);
+  const blocks = centreBlocks(analysis.centres, options, markup);
   // With one centre the measured angles belong to its block; with several they get their own.
   if (blocks.length === 1) blocks[0].push(...measured);
   for (const block of blocks) lines.push(...block, "");
   if (analysis.centres.length === 0) {
     lines.push("No central atom: fewer than two atoms are bonded to any one atom.", "");
   }
-  if (blocks.length !== 1 && measured.length > 0) lines.push("**Measured angles**", ...measured, "");
-  lines.push(polarityLine(analysis), "");
-  for (const warning of analysis.warnings.slice(0, MAX_LISTED)) lines.push(`- ⚠ ${escapeMarkdown(warning)}`);
+  if (blocks.length !== 1 && measured.length > 0) lines.push(markup.strong("Measured angles"), ...measured, "");
+  lines.push(polarityLine(analysis, markup), "");
+  for (const warning of analysis.warnings.slice(0, MAX_LISTED)) lines.push(`- ⚠ ${markup.text(warning)}`);
   if (analysis.warnings.length > 0) lines.push("");
   const body = lines.join("\n");
   // The caution must survive any cut, so it is added after it.
   const kept = body.length > MAX_CARD_LENGTH ? `${body.slice(0, MAX_CARD_LENGTH)}…\n\n` : body;
-  return `${kept}_${HOVER_CAUTION}_`;
+  return `${kept}${markup.emphasis(HOVER_CAUTION)}`;
 }
 
 /** Builds a short card for text that names no species lonepair can analyse. */
-export function problemMarkdown(text: string, message: string): string {
-  return [`**${escapeMarkdown(text)}**: not analysed`, "", escapeMarkdown(message), "", `_${HOVER_CAUTION}_`].join("\n");
+export function problemMarkdown(text: string, message: string, format?: HoverFormat): string {
+  const markup = markupFor(format);
+  return [`${markup.strong(markup.text(text))}: not analysed`, "", markup.text(message), "", markup.emphasis(HOVER_CAUTION)].join("\n");
 }
 
-function titleLine(analysis: SpeciesAnalysis): string {
-  const formula = `\`${analysis.reading.formula}\``;
+function titleLine(analysis: SpeciesAnalysis, markup: Markup): string {
+  const formula = markup.code(analysis.reading.formula);
   const name = analysis.reading.name;
-  return name ? `**${escapeMarkdown(name)}** · ${formula}` : `**${formula}**`;
+  return name ? `${markup.strong(markup.text(name))} · ${formula}` : markup.strong(formula);
 }
 
 /** A markdown image (editors drop raw HTML and remote SVG in hovers), alt text naming the shape. */
@@ -135,7 +168,7 @@ function signed(value: number): string {
 }
 
 /** Identical centres (the six carbons of hexane) are listed once with a count. */
-function centreBlocks(centres: readonly CentreAnalysis[], options: HoverMarkdownOptions): string[][] {
+function centreBlocks(centres: readonly CentreAnalysis[], options: HoverMarkdownOptions, markup: Markup): string[][] {
   const groups = new Map<string, { centre: CentreAnalysis; count: number }>();
   for (const centre of centres) {
     const key = [centre.atom, centre.axe, centre.molecularGeometry, centre.hybridization].join("|");
@@ -145,7 +178,7 @@ function centreBlocks(centres: readonly CentreAnalysis[], options: HoverMarkdown
   }
   const limit = options.maxCentreGroups ?? DEFAULT_MAX_CENTRE_GROUPS;
   const listed = [...groups.values()].slice(0, limit);
-  const blocks = listed.map(({ centre, count }) => centreBlock(centre, count, centres.length > 1, options));
+  const blocks = listed.map(({ centre, count }) => centreBlock(centre, count, centres.length > 1, options, markup));
   const hidden = groups.size - listed.length;
   if (hidden > 0) blocks.push([`…and ${hidden} more kinds of centre.`]);
   return blocks;
@@ -156,12 +189,13 @@ function centreBlock(
   count: number,
   multiCentre: boolean,
   options: HoverMarkdownOptions,
+  markup: Markup,
 ): string[] {
-  const label = multiCentre ? `**Centre ${centre.atom}${count > 1 ? ` (×${count})` : ""}**` : `**Centre ${centre.atom}**`;
+  const label = markup.strong(multiCentre ? `Centre ${centre.atom}${count > 1 ? ` (×${count})` : ""}` : `Centre ${centre.atom}`);
   const lines = [
     `${label} · ${centre.axe} · steric number ${centre.stericNumber}`,
     `- Electron geometry: ${centre.electronGeometry}`,
-    `- Molecular geometry: **${centre.molecularGeometry}**`,
+    `- Molecular geometry: ${markup.strong(centre.molecularGeometry)}`,
   ];
   if (centre.idealAngles.length > 0) {
     lines.push(`- Ideal angles: ${centre.idealAngles.map((angle) => formatAngle(angle, options.angleDecimals)).join(", ")}`);
@@ -171,33 +205,32 @@ function centreBlock(
     // Several position pairs often share one reason; say it once.
     const note = expectation.note === previousNote ? undefined : expectation.note;
     previousNote = expectation.note;
-    lines.push(`- Expected: ${expectationText(expectation, note, options.angleDecimals)}`);
+    lines.push(`- Expected: ${expectationText(expectation, note, options.angleDecimals, markup)}`);
   }
-  const note = centre.hybridizationNote ? ` (${escapeMarkdown(centre.hybridizationNote)})` : "";
+  const note = centre.hybridizationNote ? ` (${markup.text(centre.hybridizationNote)})` : "";
   lines.push(`- Hybridization: ${centre.hybridization}${note}`);
   return lines;
 }
 
-function expectationText(expectation: AngleExpectation, note: string | undefined, decimals: number): string {
-  const between = expectation.between ? `${escapeMarkdown(expectation.between)} ` : "";
+function expectationText(expectation: AngleExpectation, note: string | undefined, decimals: number, markup: Markup): string {
+  const between = expectation.between ? `${markup.text(expectation.between)} ` : "";
   const span =
     expectation.min === expectation.max
       ? formatAngle(expectation.min, decimals)
       : `${formatAngle(expectation.min, decimals)}–${formatAngle(expectation.max, decimals)}`;
-  const reason = note ? `: ${escapeMarkdown(note)}` : "";
+  const reason = note ? `: ${markup.text(note)}` : "";
   return `${between}${span} (ideal ${formatAngle(expectation.ideal, decimals)})${reason}`;
 }
 
-function measuredLines(measured: readonly MeasuredAngle[], decimals: number): string[] {
+function measuredLines(measured: readonly MeasuredAngle[], decimals: number, markup: Markup): string[] {
   return measured.map(
-    (angle) =>
-      `- Measured: ${formatAngle(angle.degrees, decimals)} ${escapeMarkdown(angle.between)} (source: ${escapeMarkdown(angle.source)})`,
+    (angle) => `- Measured: ${formatAngle(angle.degrees, decimals)} ${markup.text(angle.between)} (source: ${markup.text(angle.source)})`,
   );
 }
 
-function polarityLine(analysis: SpeciesAnalysis): string {
+function polarityLine(analysis: SpeciesAnalysis, markup: Markup): string {
   const verdict = analysis.polarity.polar ? "polar" : "nonpolar";
-  return `Polarity: **${verdict}** (${escapeMarkdown(analysis.polarity.reason)})`;
+  return `Polarity: ${markup.strong(verdict)} (${markup.text(analysis.polarity.reason)})`;
 }
 
 /** Text from the document or the core goes into markdown; keep it from turning into markup. */

@@ -19,11 +19,13 @@ export function registerHover(context: ServerContext): void {
       const occurrence = occurrenceUnderCursor(analysed.model.occurrences, document.offsetAt(params.position));
       if (!occurrence) return null;
       const result = analysisOf(occurrence);
-      const markdown = result.ok
-        ? hoverMarkdown(result.value, { angleDecimals: settings.angleDecimals })
-        : problemMarkdown(occurrence.text, result.problem.message);
+      // The card is written in the format the client asked for, not merely labelled with it.
+      const format = context.clientFeatures().hoverFormat;
+      const value = result.ok
+        ? hoverMarkdown(result.value, { angleDecimals: settings.angleDecimals, format })
+        : problemMarkdown(occurrence.text, result.problem.message, format);
       return {
-        contents: { kind: context.clientFeatures().hoverMarkdown ? MarkupKind.Markdown : MarkupKind.PlainText, value: markdown },
+        contents: { kind: format === "markdown" ? MarkupKind.Markdown : MarkupKind.PlainText, value },
         range: lspRange(document, occurrence.range),
       };
     }),
