@@ -1,6 +1,7 @@
 // Benchmark of the bundled core (dist/core.js): cold analyses of distinct species, cached
 // lookups, the reader's worst cases, whole drug-sized SMILES against RDKit (smilesAnalysis.mjs), and
-// 3D models of drug-sized SMILES (coordinates.mjs).
+// 3D models of drug-sized SMILES (coordinates.mjs), and the precision and recall of species spotting
+// on the real-style corpus (realStyle.mjs).
 // `npm run bench` builds first. Figures are printed with the aims beside them; `--strict` makes a
 // missed aim exit with status 1 (for CI machines we trust).
 import { createRequire } from "node:module";
@@ -11,6 +12,7 @@ import { generateSpecies } from "./speciesGenerator.mjs";
 import { randomStrings } from "./randomStrings.mjs";
 import { runSmilesAnalysisBench } from "./smilesAnalysis.mjs";
 import { runCoordinatesBench } from "./coordinates.mjs";
+import { runRealStyleBench } from "./realStyle.mjs";
 
 const corePath = fileURLToPath(new URL("../../dist/core.js", import.meta.url));
 if (!existsSync(corePath)) {
@@ -125,6 +127,7 @@ benchCached(species);
 benchReader();
 missed.push(...(await runSmilesAnalysisBench()));
 missed.push(...runCoordinatesBench());
+missed.push(...(await runRealStyleBench()));
 if (missed.length > 0) {
   console.log(`\nmissed: ${missed.join(", ")}`);
   if (strict) process.exitCode = 1;
