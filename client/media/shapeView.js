@@ -1,12 +1,16 @@
 // The 3D shape page: draws a shape view model (plain JSON posted by the extension) as a
 // ball-and-stick SVG with an orthographic projection, and rotates it by dragging.
 // Every piece of text from the document goes in through textContent, never as markup.
+// Every message (and the saved state) is checked before it is drawn: anything malformed
+// shows "No model" with a reason instead of throwing.
 (function () {
   "use strict";
 
   const SVG = "http://www.w3.org/2000/svg";
   const IDENTITY = [1, 0, 0, 0, 1, 0, 0, 0, 1];
   const DEGREE = Math.PI / 180;
+  /** More atoms than any model the extension builds: a message this large is refused unread. */
+  const MAX_ATOMS = 20000;
   const host = acquireVsCodeApi();
 
   const svg = document.getElementById("model");
@@ -14,10 +18,135 @@
   const modeButtons = Array.from(document.querySelectorAll("button[data-mode]"));
 
   /** @type {{ model: any, problem: any, mode: "molecular" | "electron", rotation: number[] }} */
-  const state = Object.assign(
-    { model: null, problem: null, mode: "molecular", rotation: startingRotation() },
-    host.getState() || {},
-  );
+  const state = restoredState(host.getState());
+
+  function restoredState(saved) {
+    const fresh = { model: null, problem: null, mode: "molecular", rotation: startingRotation() };
+    if (!isObject(saved)) return fresh;
+    const checked = saved.model === null || saved.model === undefined ? { model: null } : checkedModel(saved.model);
+    return {
+      model: checked.model,
+      problem: checked.reason ? noModelProblem(checked.reason) : checkedProblem(saved.problem),
+      mode: saved.mode === "electron" ? "electron" : "molecular",
+      rotation: isRotation(saved.rotation) ? saved.rotation : fresh.rotation,
+    };
+  }
+
+  // ----- checking what the extension posts -----
+  // A model is drawn only when every part the drawing reads has the right type; the
+  // optional parts (angles, centres, warnings, polarity) must be well formed when present.
+
+  function isObject(value) {
+    return typeof value === "object" && value !== null && !Array.isArray(value);
+  }
+
+  function isFiniteNumber(value) {
+    return typeof value === "number" && Number.isFinite(value);
+  }
+
+  function isVector(value) {
+    return Array.isArray(value) && value.length === 3 && value.every(isFiniteNumber);
+  }
+
+  function isIndex(value, count) {
+    return Number.isInteger(value) && value >= 0 && value < count;
+  }
+
+  function isText(value) {
+    return typeof value === "string";
+  }
+
+  function optionalList(value) {
+    return value === undefined || value === null ? [] : Array.isArray(value) ? value : undefined;
+  }
+
+  /** The first thing wrong with an atom, or "" when it can be drawn. */
+  function atomFault(atom) {
+    if (!isObject(atom)) return "an atom is not an object";
+    if (!isText(atom.symbol) || atom.symbol.length === 0) return "an atom has no element symbol";
+    if (!isVector(atom.position)) return `atom ${atom.symbol} has no position`;
+    if (atom.radius !== undefined && !(isFiniteNumber(atom.radius) && atom.radius > 0)) return `atom ${atom.symbol} has a bad radius`;
+    if (atom.colour !== undefined && !isText(atom.colour)) return `atom ${atom.symbol} has a bad colour`;
+    return "";
+  }
+
+  function bondFault(bond, atomCount) {
+    if (!isObject(bond) || !isIndex(bond.from, atomCount) || !isIndex(bond.to, atomCount)) return "a bond joins atoms that are not in the model";
+    if (bond.order !== undefined && !isFiniteNumber(bond.order)) return "a bond has a bad order";
+    return "";
+  }
+
+  function lonePairFault(lonePair, atomCount) {
+    if (!isObject(lonePair) || !isIndex(lonePair.atom, atomCount)) return "a lone pair sits on an atom that is not in the model";
+    if (!isVector(lonePair.direction) || !isVector(lonePair.sitePosition)) return "a lone pair has no direction";
+    if (lonePair.lobeLength !== undefined && !isFiniteNumber(lonePair.lobeLength)) return "a lone pair has a bad length";
+    return "";
+  }
+
+  function angleFault(angle) {
+    if (!isObject(angle) || !isFiniteNumber(angle.degrees) || !isVector(angle.labelPosition)) return "an angle has no size or label position";
+    if (!Array.isArray(angle.arc) || !angle.arc.every(isVector)) return "an angle has a bad arc";
+    return "";
+  }
+
+  function centreFault(centre) {
+    if (!isObject(centre) || !isText(centre.symbol) || !isText(centre.axe)) return "a centre has no symbol or AXE class";
+    for (const key of ["electronGeometry", "molecularGeometry", "hybridization"]) {
+      if (!isText(centre[key])) return `centre ${centre.symbol} has no ${key}`;
+    }
+    if (!isFiniteNumber(centre.stericNumber) || !isFiniteNumber(centre.lonePairs)) return `centre ${centre.symbol} has bad counts`;
+    if (!Array.isArray(centre.idealAngles) || !centre.idealAngles.every(isFiniteNumber)) return `centre ${centre.symbol} has bad ideal angles`;
+    return "";
+  }
+
+  /** `{ model }` ready to draw, or `{ model: null, reason }` saying what was wrong. */
+  function checkedModel(raw) {
+    const refuse = (reason) => ({ model: null, reason });
+    if (!isObject(raw)) return refuse("the shape data is not an object");
+    if (!Array.isArray(raw.atoms) || raw.atoms.length === 0) return refuse("the shape data has no atoms");
+    if (raw.atoms.length > MAX_ATOMS) return refuse(`the shape data has more than ${MAX_ATOMS} atoms`);
+    if (!isText(raw.title) || !isText(raw.formula)) return refuse("the shape data has no title or formula");
+    if (raw.name !== undefined && raw.name !== null && !isText(raw.name)) return refuse("the shape data has a bad name");
+    if (raw.extent !== undefined && !isFiniteNumber(raw.extent)) return refuse("the shape data has a bad size");
+    const count = raw.atoms.length;
+    const bonds = optionalList(raw.bonds);
+    const lonePairs = optionalList(raw.lonePairs);
+    const angles = optionalList(raw.angles);
+    const centres = optionalList(raw.centres);
+    const warnings = optionalList(raw.warnings);
+    if (!bonds || !lonePairs || !angles || !centres || !warnings) return refuse("a list in the shape data is not a list");
+    const fault =
+      firstFault(raw.atoms, atomFault) ||
+      firstFault(bonds, (bond) => bondFault(bond, count)) ||
+      firstFault(lonePairs, (lonePair) => lonePairFault(lonePair, count)) ||
+      firstFault(angles, angleFault) ||
+      firstFault(centres, centreFault) ||
+      firstFault(warnings, (warning) => (isText(warning) ? "" : "a warning is not text"));
+    if (fault) return refuse(fault);
+    const polarity = raw.polarity;
+    if (polarity !== undefined && polarity !== null && !(isObject(polarity) && typeof polarity.polar === "boolean" && isText(polarity.reason))) {
+      return refuse("the polarity is malformed");
+    }
+    if (raw.caution !== undefined && !isText(raw.caution)) return refuse("the caution is not text");
+    return { model: Object.assign({}, raw, { bonds, lonePairs, angles, centres, warnings, polarity: polarity || null }) };
+  }
+
+  function firstFault(list, faultOf) {
+    for (const item of list) {
+      const fault = faultOf(item);
+      if (fault) return fault;
+    }
+    return "";
+  }
+
+  function noModelProblem(reason) {
+    return { text: "No model", message: `The shape could not be drawn: ${reason}.` };
+  }
+
+  function checkedProblem(raw) {
+    if (!isObject(raw)) return null;
+    return { text: isText(raw.text) ? raw.text : "", message: isText(raw.message) ? raw.message : "" };
+  }
 
   function startingRotation() {
     // A slight tilt, so a planar or linear species still reads as 3D.
@@ -78,7 +207,18 @@
     return Array.isArray(value) && value.length === 3 ? value.map((n) => number(n, 0)) : [0, 0, 0];
   }
 
+  /** Draws the state; should drawing fail all the same, the page says so instead of breaking. */
   function render() {
+    try {
+      draw();
+    } catch (error) {
+      state.model = null;
+      state.problem = noModelProblem(`drawing failed (${error && error.message ? error.message : String(error)})`);
+      draw();
+    }
+  }
+
+  function draw() {
     while (svg.firstChild) svg.removeChild(svg.firstChild);
     renderLegend();
     const model = state.model;
@@ -275,7 +415,7 @@
     const warnings = document.getElementById("warnings");
     while (warnings.firstChild) warnings.removeChild(warnings.firstChild);
     if (!model) {
-      text("title", problem ? String(problem.text) : "No species");
+      text("title", problem ? String(problem.text || "No model") : "No species");
       text("subtitle", problem ? String(problem.message) : "");
       text("mode-note", "");
       text("polarity", "");
@@ -380,13 +520,14 @@
 
   window.addEventListener("message", (event) => {
     const message = event.data;
-    if (!message || typeof message !== "object") return;
+    if (!isObject(message)) return;
     if (message.type === "show") {
-      state.model = message.model && typeof message.model === "object" ? message.model : null;
-      state.problem = null;
+      const checked = checkedModel(message.model);
+      state.model = checked.model;
+      state.problem = checked.reason ? noModelProblem(checked.reason) : null;
     } else if (message.type === "problem") {
       state.model = null;
-      state.problem = { text: String(message.text || ""), message: String(message.message || "") };
+      state.problem = checkedProblem(message);
     } else if (message.type === "clear") {
       state.model = null;
       state.problem = null;

@@ -56,7 +56,7 @@ describe.skipIf(!haveBrowser)("3D shape page in headless Chromium", () => {
   });
 
   /** Opens the page as the extension builds it; collects console errors, page errors and dialogs. */
-  async function openPage(): Promise<{ page: Page; errors: string[]; dialogs: string[] }> {
+  async function openPage(savedState?: unknown): Promise<{ page: Page; errors: string[]; dialogs: string[] }> {
     const page = await context.newPage();
     const errors: string[] = [];
     const dialogs: string[] = [];
@@ -78,10 +78,10 @@ describe.skipIf(!haveBrowser)("3D shape page in headless Chromium", () => {
       return route.fulfill({ contentType: file, body: readFileSync(join(MEDIA, path.slice("/media/".length))) });
     });
     // The editor injects acquireVsCodeApi; this stand-in records what the page posts and saves.
-    await page.addInitScript(() => {
+    await page.addInitScript((initialState) => {
       const record = globalThis as unknown as PageGlobals;
       record.posted = [];
-      record.savedState = undefined;
+      record.savedState = initialState;
       record.acquireVsCodeApi = () => ({
         postMessage: (message: { type: string }) => record.posted.push(message),
         getState: () => record.savedState,
@@ -89,7 +89,7 @@ describe.skipIf(!haveBrowser)("3D shape page in headless Chromium", () => {
           record.savedState = state;
         },
       });
-    });
+    }, savedState);
     await page.goto(`${ORIGIN}/index.html`);
     await page.waitForFunction(() => (globalThis as unknown as PageGlobals).posted.some((message) => message.type === "ready"));
     return { page, errors, dialogs };
@@ -189,6 +189,87 @@ describe.skipIf(!haveBrowser)("3D shape page in headless Chromium", () => {
     await page.waitForTimeout(100);
     expect(await page.evaluate(() => (globalThis as unknown as PageGlobals).ranInjected)).toBeUndefined();
     expect(errors.some((error) => /Content Security Policy/i.test(error))).toBe(true);
+    await page.close();
+  });
+
+  // Shapes of damaged messages: each must leave the page drawing nothing and saying "No model".
+  const sf4 = (): Record<string, unknown> => JSON.parse(JSON.stringify(viewOf("SF4"))) as Record<string, unknown>;
+  const withAtoms = (change: (atoms: Record<string, unknown>[]) => unknown): Record<string, unknown> => {
+    const model = sf4();
+    model.atoms = change(model.atoms as Record<string, unknown>[]);
+    return model;
+  };
+  const withFirst = (key: string, change: (item: Record<string, unknown>) => unknown): Record<string, unknown> => {
+    const model = sf4();
+    const list = model[key] as Record<string, unknown>[];
+    list[0] = change(list[0]) as Record<string, unknown>;
+    return model;
+  };
+  const MALFORMED: readonly [string, unknown][] = [
+    ["no atoms at all", { ...sf4(), atoms: undefined }],
+    ["an empty atom list", withAtoms(() => [])],
+    ["atoms that are not a list", withAtoms(() => "S F F F F")],
+    ["a null atom", withAtoms((atoms) => [null, ...atoms.slice(1)])],
+    ["a null symbol", withAtoms((atoms) => [{ ...atoms[0], symbol: null }, ...atoms.slice(1)])],
+    ["a numeric symbol", withAtoms((atoms) => [{ ...atoms[0], symbol: 16 }, ...atoms.slice(1)])],
+    ["an atom without a position", withAtoms((atoms) => [{ ...atoms[0], position: undefined }, ...atoms.slice(1)])],
+    ["a position of text", withAtoms((atoms) => [{ ...atoms[0], position: ["0", "0", "0"] }, ...atoms.slice(1)])],
+    ["a position of two numbers", withAtoms((atoms) => [{ ...atoms[0], position: [0, 0] }, ...atoms.slice(1)])],
+    ["a bond to a missing atom", withFirst("bonds", (bond) => ({ ...bond, to: 99 }))],
+    ["a bond with a fractional index", withFirst("bonds", (bond) => ({ ...bond, from: 0.5 }))],
+    ["a lone pair on a missing atom", withFirst("lonePairs", (lonePair) => ({ ...lonePair, atom: -1 }))],
+    ["a lone pair without a direction", withFirst("lonePairs", (lonePair) => ({ ...lonePair, direction: null }))],
+    ["an angle arc with a hole", withFirst("angles", (angle) => ({ ...angle, arc: [null] }))],
+    ["a centre without ideal angles", withFirst("centres", (centre) => ({ ...centre, idealAngles: null }))],
+    ["warnings that are not a list", { ...sf4(), warnings: "check the cylinder" }],
+    ["a polarity of the wrong type", { ...sf4(), polarity: { polar: "yes", reason: 3 } }],
+    ["a numeric title", { ...sf4(), title: 42 }],
+    ["a model that is text", "SF4"],
+    ["a model that is a list", [1, 2, 3]],
+  ];
+
+  it.each(MALFORMED)("shows no model for %s, without an error", async (_label, model) => {
+    const { page, errors } = await openPage();
+    await show(page, viewOf("SF4"));
+    await page.waitForSelector("g.atom");
+    await show(page, model);
+    await page.waitForFunction(() => (globalThis as unknown as { document: { getElementById(id: string): { textContent: string } } }).document.getElementById("title").textContent === "No model");
+    expect(await page.locator("g.atom").count()).toBe(0);
+    expect(await page.locator("#subtitle").textContent()).toMatch(/^The shape could not be drawn: .+\.$/);
+    expect(errors).toEqual([]);
+    // A good model afterwards is drawn again: the page is still alive.
+    await show(page, viewOf("XeF4"));
+    await page.waitForSelector("g.atom");
+    // common practice: XeF4 has five atoms
+    expect(await page.locator("g.atom").count()).toBe(5);
+    await page.close();
+  });
+
+  it.each([
+    ["not an object", 42],
+    ["an unknown type", { type: "explode", model: null }],
+    ["a problem with text that is not text", { type: "problem", text: { toString: null }, message: ["a"] }],
+    ["null", null],
+  ])("ignores or answers calmly a message that is %s", async (_label, message) => {
+    const { page, errors } = await openPage();
+    await page.evaluate((sent) => (globalThis as unknown as PageGlobals).postMessage(sent, "*"), message);
+    await page.waitForTimeout(50);
+    expect(await page.locator("g.atom").count()).toBe(0);
+    expect(errors).toEqual([]);
+    await page.close();
+  });
+
+  it.each([
+    ["a model with a null symbol", { model: withAtoms((atoms) => [{ ...atoms[0], symbol: null }, ...atoms.slice(1)]), mode: "electron", rotation: [1] }],
+    ["text", "garbage"],
+    ["a rotation of text", { model: null, problem: null, mode: 3, rotation: "abc" }],
+  ])("opens with a saved state that is %s without an error", async (_label, saved) => {
+    const { page, errors } = await openPage(saved);
+    expect(await page.locator("g.atom").count()).toBe(0);
+    expect(errors).toEqual([]);
+    await show(page, viewOf("SF4"));
+    await page.waitForSelector("g.atom");
+    expect(await page.locator("g.atom").count()).toBe(5);
     await page.close();
   });
 });
