@@ -32,9 +32,9 @@ export async function runRealStyleBench() {
   if (!existsSync(corePath)) {
     throw new Error("dist/core.js is missing: run `npm run build` (or `npm run bench`, which builds first).");
   }
-  const { analyzeDocument, documentKindFor } = createRequire(import.meta.url)(corePath);
+  const { analyzeDocument, documentKindFor, readSpecies } = createRequire(import.meta.url)(corePath);
   const { scoreRealStyleCorpus, formatScoreTable, PRECISION_AIM, RECALL_AIM } = await loadScorer();
-  const score = scoreRealStyleCorpus({ analyzeDocument, documentKindFor });
+  const score = scoreRealStyleCorpus({ analyzeDocument, documentKindFor, readSpecies });
   const { overall } = score;
   const missed = [];
   const verdict = (met, label) => {

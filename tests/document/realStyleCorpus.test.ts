@@ -3,7 +3,7 @@
  * (tests/fixtures/real-style, one folder per style), per style and overall.
  */
 import { describe, expect, it } from "vitest";
-import { analyzeDocument, documentKindFor } from "../../shared/src/index";
+import { analyzeDocument, documentKindFor, readSpecies } from "../../shared/src/index";
 import {
   formatScoreTable,
   PRECISION_AIM,
@@ -32,21 +32,21 @@ const OVERALL_FLOOR = { precision: 0.81, recall: 0.46 };
 
 const MINIMUM_LABELS = 600;
 
-const score = scoreRealStyleCorpus({ analyzeDocument, documentKindFor });
+const score = scoreRealStyleCorpus({ analyzeDocument, documentKindFor, readSpecies });
 
-/** Mentions grouped by cause, most common cause first, for the printed report. */
+/** Mentions grouped by how they are written and why they are listed, the largest group first. */
 function byCause(mentions: readonly Mention[]): string {
   const groups = new Map<string, Mention[]>();
   for (const mention of mentions) {
-    const cause = mention.cause.startsWith("found with another span") ? "found with another span" : mention.cause;
-    groups.set(cause, [...(groups.get(cause) ?? []), mention]);
+    const group = `${mention.form}; ${mention.cause}`;
+    groups.set(group, [...(groups.get(group) ?? []), mention]);
   }
   return [...groups.entries()]
     .sort((a, b) => b[1].length - a[1].length)
     .map(
-      ([cause, group]) =>
-        `  ${cause} (${group.length}):\n` +
-        group.map((mention) => `    ${mention.file}:${mention.where} ${JSON.stringify(mention.text)}  ${mention.cause}`).join("\n"),
+      ([group, members]) =>
+        `  ${group} (${members.length}):\n` +
+        members.map((mention) => `    ${mention.file}:${mention.where} ${JSON.stringify(mention.text)}${mention.detail ? `  (${mention.detail})` : ""}`).join("\n"),
     )
     .join("\n");
 }

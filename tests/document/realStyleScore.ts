@@ -9,13 +9,14 @@
  */
 import { readdirSync, readFileSync } from "node:fs";
 import { join } from "node:path";
-import type { DocumentKind, DocumentModel } from "../../shared/src/index";
+import type { DocumentKind, DocumentModel, ReadResult } from "../../shared/src/index";
 import { lineAndColumn, stripLabels } from "./labelledText";
 
-/** The two facade functions the score needs. */
+/** The facade functions the score needs; the reader only says why a label was missed. */
 export interface SpottingEngine {
   readonly analyzeDocument: (text: string, kind: DocumentKind) => DocumentModel;
   readonly documentKindFor: (fileName: string, languageId?: string, firstBytes?: string) => DocumentKind | undefined;
+  readonly readSpecies: (text: string) => ReadResult;
 }
 
 /** One labelled span or one reported span, placed for a reader of the test output. */
@@ -25,6 +26,10 @@ export interface Mention {
   readonly text: string;
   /** Why it is listed, in plain words (see `missCause` and `falseReportCause`). */
   readonly cause: string;
+  /** How the span is written (`writtenForm`), to group misses by what the engine must learn. */
+  readonly form: string;
+  /** More about the cause: the span found instead, or the label a wrong span overlaps. */
+  readonly detail?: string;
 }
 
 /** Counts for a set of documents; precision and recall are NaN when there is nothing to divide. */
@@ -75,20 +80,51 @@ function kindOf(engine: SpottingEngine, file: string, text: string): DocumentKin
   return engine.documentKindFor(file, undefined, text.slice(0, 4096)) ?? "plaintext";
 }
 
-/** Why a labelled span was not found: refused by the reader, found with another span, or not seen. */
-function missCause(label: Span, refused: ReadonlySet<string>, reportedSpans: readonly Span[]): string {
-  if (refused.has(keyOf(label))) return "spotted but refused by the reader";
-  const overlapping = reportedSpans.filter((span) => span.start < label.end && label.start < span.end);
-  if (overlapping.length > 0) return `found with another span: ${overlapping.map((span) => JSON.stringify(span.text)).join(", ")}`;
-  return "not spotted";
+/**
+ * Why a labelled span was not found: spotted but refused by the reader, found with another span,
+ * or not seen at all, and then whether the reader alone would read the text (a spotting gap) or
+ * not (a notation or vocabulary gap too).
+ */
+function missCause(engine: SpottingEngine, label: Span, refused: ReadonlyMap<string, string>, reportedSpans: readonly Span[]): string {
+  const refusal = refused.get(keyOf(label));
+  if (refusal !== undefined) return `spotted but refused by the reader (${refusal})`;
+  if (reportedSpans.some((span) => span.start < label.end && label.start < span.end)) return "found with another span";
+  const reading = engine.readSpecies(label.text);
+  return reading.ok ? "not spotted, though the reader reads it" : `not spotted, and the reader refuses it (${reading.problem.code})`;
 }
 
-/** Why a reported span is wrong: part of (or more than) a labelled span, or no species at all. */
-function falseReportCause(span: Span, labels: readonly Span[], refused: boolean): string {
+/**
+ * How a span is written, the first that applies: HTML tags, a hydrate or adduct, an isotope label,
+ * a state symbol, a charge written sign first, LaTeX sub- and superscripts, a name or lab
+ * abbreviation in mixed case, or else a plain formula or an abbreviation in capitals (DCM, KHP).
+ */
+export function writtenForm(text: string): string {
+  if (/<su[bp]>/i.test(text)) return "HTML sub/superscript";
+  if (/[A-Za-z0-9)\]]\s*[.·•*]\s*\d*\s*[A-Z]/.test(text) && !/\s[a-z]/.test(text)) return "hydrate or adduct";
+  if (/^(?:\^\{?\d|\d+[A-Z]|[¹²³⁰-⁹]+[A-Z])|[a-z]H[¹²³⁰-⁹]/.test(text)) return "isotope";
+  if (/\((?:aq|s|l|g)\)|_\{\((?:aq|s|l|g)\)\}/.test(text)) return "state symbol";
+  if (/[A-Za-z0-9)\]][+-]\d$/.test(text)) return "sign-first charge";
+  if (/[_^]|\\mathrm/.test(text)) return "LaTeX or mhchem notation";
+  if (/[a-z]{3}/.test(text) || /^(?:Et|Me|Ph|Bu|Ac|i?Pr)[A-Z0-9]/.test(text)) return "name or abbreviation";
+  return "formula or capitals";
+}
+
+/**
+ * Why a reported span is wrong: part of (or more than) a labelled span, or no species at all; with
+ * the labels it overlaps, whose written form says more than its own.
+ */
+function falseReport(file: string, where: string, span: Span, labels: readonly Span[], refused: boolean): Mention {
   const overlapping = labels.filter((label) => label.start < span.end && span.start < label.end);
   const what = refused ? "refused mention" : "species";
-  if (overlapping.length > 0) return `${what} with the wrong span for ${overlapping.map((label) => JSON.stringify(label.text)).join(", ")}`;
-  return `${what} where nothing is labelled`;
+  if (overlapping.length === 0) return { file, where, text: span.text, cause: `${what} where nothing is labelled`, form: writtenForm(span.text) };
+  return {
+    file,
+    where,
+    text: span.text,
+    cause: `${what} with the wrong span`,
+    form: writtenForm(overlapping[0].text),
+    detail: `labelled ${overlapping.map((label) => JSON.stringify(label.text)).join(", ")}`,
+  };
 }
 
 function scoreDocument(engine: SpottingEngine, directory: string, file: string): SpottingScore {
@@ -98,9 +134,12 @@ function scoreDocument(engine: SpottingEngine, directory: string, file: string):
   const read = new Map<string, Span>();
   for (const occurrence of model.occurrences) read.set(keyOf(occurrence.range), { ...occurrence.range, text: occurrence.text });
   const refused = new Map<string, Span>();
+  const refusals = new Map<string, string>();
   for (const unreadable of model.unreadable ?? []) {
     const key = keyOf(unreadable.range);
-    if (!read.has(key)) refused.set(key, { ...unreadable.range, text: unreadable.text });
+    if (read.has(key)) continue;
+    refused.set(key, { ...unreadable.range, text: unreadable.text });
+    refusals.set(key, unreadable.problem.code);
   }
   const labelKeys = new Set(labels.map(keyOf));
   const reportedSpans = [...read.values(), ...refused.values()];
@@ -108,11 +147,21 @@ function scoreDocument(engine: SpottingEngine, directory: string, file: string):
   const place = (span: Span): string => lineAndColumn(text, span.start);
   const misses = labels
     .filter((label) => !read.has(keyOf(label)))
-    .map((label) => ({ file, where: place(label), text: label.text, cause: missCause(label, refusedKeys, reportedSpans) }));
+    .map((label): Mention => {
+      const instead = reportedSpans.filter((span) => span.start < label.end && label.start < span.end);
+      return {
+        file,
+        where: place(label),
+        text: label.text,
+        cause: missCause(engine, label, refusals, reportedSpans),
+        form: writtenForm(label.text),
+        ...(instead.length > 0 ? { detail: `found ${instead.map((span) => JSON.stringify(span.text)).join(", ")}` } : {}),
+      };
+    });
   const falseReports = reportedSpans
     .filter((span) => !labelKeys.has(keyOf(span)))
     .sort((a, b) => a.start - b.start)
-    .map((span) => ({ file, where: place(span), text: span.text, cause: falseReportCause(span, labels, refusedKeys.has(keyOf(span))) }));
+    .map((span) => falseReport(file, place(span), span, labels, refusedKeys.has(keyOf(span))));
   return totals(1, labels.length, labels.length - misses.length, reportedSpans.length, misses, falseReports);
 }
 
