@@ -22,6 +22,8 @@ export type { MolfileResult } from "./chemistry/formats/molfile";
 // Documents: finding species in text and tables, and checking what they claim.
 export { analyzeDocument } from "./document/analyzeDocument";
 export { analyzeOccurrence } from "./document/analyzeOccurrence";
+export { analyzeOccurrenceSafely, internalErrorProblem, occurrenceAt, speciesAtOffset } from "./document/speciesAt";
+export type { SpeciesAtOffset } from "./document/speciesAt";
 export { checkDocument } from "./document/checkDocument";
 export { documentKindFor } from "./document/documentKind";
 export { memoisedReader } from "./document/speciesReader";
@@ -46,11 +48,20 @@ export { HOVER_CAUTION, hoverMarkdown, problemMarkdown } from "./report/hoverMar
 export type { HoverFormat } from "./report/hoverMarkdown";
 export { shapeViewModel } from "./report/shapeViewModel";
 export type { ShapeViewModel } from "./report/shapeViewModel";
-export { SUMMARY_COLUMNS, isSummaryColumn, summaryTable } from "./report/summaryTable";
-export type { SummaryColumn, SummaryFormat, UnanalysedSpecies } from "./report/summaryTable";
+export { coordinateFileOf, shapeViewModelOf } from "./report/speciesModel";
+export type { CoordinateFile, CoordinateFileResult, CoordinateFormat } from "./report/speciesModel";
+export { SUMMARY_COLUMNS, createSummaryCollector, isSummaryColumn, summaryTable } from "./report/summaryTable";
+export type { SummaryCollector, SummaryColumn, SummaryFormat, UnanalysedSpecies } from "./report/summaryTable";
 
 // Editors: the custom requests of the language server, as plain data.
-export { CHECK_TEXT_METHOD, SPECIES_AT_METHOD, SUMMARY_TABLE_METHOD } from "./editorRequests";
+export {
+  CHECK_TEXT_METHOD,
+  COORDINATES_METHOD,
+  DOCUMENT_SUMMARY_METHOD,
+  SHAPE_MODEL_METHOD,
+  SPECIES_AT_METHOD,
+  SUMMARY_TABLE_METHOD,
+} from "./editorRequests";
 export type * from "./editorRequests";
 export { analysedTextOf, MAX_ANALYSED_LENGTH } from "./document/analysedText";
 export type { AnalysedText } from "./document/analysedText";

@@ -1,5 +1,6 @@
 // `lonepair list` and `lonepair table` through the built command line.
-import { readFileSync } from "node:fs";
+import { mkdtempSync, readFileSync, writeFileSync } from "node:fs";
+import { tmpdir } from "node:os";
 import { join } from "node:path";
 import { parse as parseCsv } from "csv-parse/sync";
 import { beforeAll, describe, expect, it } from "vitest";
@@ -48,6 +49,17 @@ describe("list --json", () => {
 });
 
 describe("table", () => {
+  it("reads a smiles: span as SMILES, as the editor's table does", () => {
+    const folder = mkdtempSync(join(tmpdir(), "lonepair-table-"));
+    const note = join(folder, "run-16.md");
+    writeFileSync(note, "# Run 16\n\nSolvent blank: `smiles:CC(=O)C` and SF6.\n");
+    const run = runCli(["table", "--format", "csv", note]);
+    expect(run.status).toBe(0);
+    // source: RDKit reads CC(=O)C as acetone, C3H6O
+    expect((parseCsv(run.stdout, { columns: true }) as Record<string, string>[]).map((row) => row.Formula)).toEqual(["C3H6O", "SF6"]);
+    expect(run.stderr).not.toMatch(/not analysed/);
+  });
+
   it("prints the geometry summary table of a write-up, each species once, with the caution", () => {
     const run = runCli(["table", "tests/fixtures/cli/run-22-bay-d-audit.md"]);
     expect(run.status).toBe(0);
@@ -56,7 +68,7 @@ describe("table", () => {
     // common practice: SF4 AX4E1 seesaw, 34 electrons; ClF3 AX3E2 T-shaped, 28 electrons
     expect(lines[2]).toMatch(/^\| SF4 \| sulfur tetrafluoride \| 34 \| AX4E1 \| trigonal bipyramidal \| seesaw \|/);
     expect(lines[3]).toMatch(/^\| ClF3 \| chlorine trifluoride \| 28 \| AX3E2 \| trigonal bipyramidal \| T-shaped \|/);
-    expect(run.stdout).toMatch(/Not analysed: CH5 \(/);
+    expect(run.stdout).toMatch(/<!-- lonepair could not analyse: .*CH5 \(/);
     expect(run.stdout).toMatch(/_Model prediction, not measured data/);
   });
 

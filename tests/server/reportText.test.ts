@@ -7,6 +7,7 @@ import { describe, expect, it } from "vitest";
 import { analyzeSpecies, type SpeciesAnalysis } from "../../shared/src/index";
 import { HOVER_CAUTION, hoverMarkdown } from "../../shared/src/report/hoverMarkdown";
 import { summaryTable } from "../../shared/src/report/summaryTable";
+import { analyzeDocument, checkDocument, createSummaryCollector, type DocumentModel } from "../../shared/src/index";
 
 function analysis(text: string): SpeciesAnalysis {
   const result = analyzeSpecies(text);
@@ -93,7 +94,25 @@ describe("summary table", () => {
     });
     const rows = text.split("\n").filter((line) => line.startsWith("|"));
     expect(rows).toEqual(["| Formula | AXE |", "| --- | --- |", "| SF4 | AX4E1 |", "| XeF4 | AX4E2 |", "| NH3 | AX3E1 |"]);
-    expect(text).toContain("Not analysed: CH5");
+    expect(text).toContain("<!-- lonepair could not analyse: CH5 (carbon cannot make five bonds) -->");
     expect(text).toContain(HOVER_CAUTION);
+  });
+
+  it("inserted under a write-up, adds no problem the write-up did not already have", () => {
+    const note = "# Run 22: Bay D audit\n\nThe log lists CH5 and NH5 beside SF4 and XeF4; barium sulfate was weighed.\n";
+    const collected = createSummaryCollector();
+    const before = analyzeDocument(note, "markdown");
+    for (const occurrence of before.occurrences) collected.addOccurrence(occurrence);
+    expect(collected.unanalysed.map((item) => item.text)).toEqual(expect.arrayContaining(["CH5", "NH5"]));
+    const table = summaryTable({ analyses: collected.analyses, unanalysed: collected.unanalysed, format: "markdown", angleDecimals: 1 });
+    const after = analyzeDocument(`${note}\n${table}`, "markdown");
+    const problems = (model: DocumentModel) => [...model.problems, ...checkDocument(model)].filter((finding) => finding.severity === "error").length;
+    expect(problems(after)).toBe(problems(before));
+  });
+
+  it("writes a comment that the species list cannot close early", () => {
+    const text = summaryTable({ analyses: species, unanalysed: [{ text: "X-->Y", message: "a --> b" }], format: "markdown", angleDecimals: 1 });
+    const comment = text.split("\n").find((line) => line.startsWith("<!--"))!;
+    expect(comment.indexOf("-->")).toBe(comment.length - 3);
   });
 });

@@ -2,7 +2,9 @@
  * Builds a geometry table (markdown or CSV) for a list of analysed species.
  * Pure: the caller decides which species and in which order; duplicates are dropped here.
  */
-import type { CentreAnalysis, SpeciesAnalysis } from "../chemistry/types";
+import type { AnalysisResult, CentreAnalysis, SpeciesAnalysis } from "../chemistry/types";
+import { analyzeOccurrenceSafely } from "../document/speciesAt";
+import type { SpeciesOccurrence } from "../document/types";
 import { HOVER_CAUTION, formatAngle } from "./hoverMarkdown";
 
 /** A column the table can show. */
@@ -17,7 +19,7 @@ export type SummaryColumn =
   | "hybridization"
   | "polarity";
 
-export type SummaryFormat = "markdown" | "csv";
+export type SummaryFormat = "markdown" | "csv" | "tsv";
 
 /** Every column, in the order the table shows them by default. */
 export const SUMMARY_COLUMNS: readonly SummaryColumn[] = [
@@ -72,9 +74,9 @@ export function summaryTable(input: SummaryTableInput): string {
     columns.map((column) => cellText(analysis, column, input.angleDecimals)),
   );
   const headers = columns.map((column) => COLUMN_HEADERS[column]);
-  return input.format === "csv"
-    ? csvTable(headers, rows)
-    : markdownTable(headers, rows, uniqueUnanalysed(input.unanalysed ?? []));
+  if (input.format === "csv") return csvTable(headers, rows);
+  if (input.format === "tsv") return tsvTable(headers, rows);
+  return markdownTable(headers, rows, uniqueUnanalysed(input.unanalysed ?? []));
 }
 
 function uniqueByFormula(analyses: readonly SpeciesAnalysis[]): SpeciesAnalysis[] {
@@ -139,10 +141,18 @@ function markdownTable(headers: readonly string[], rows: readonly string[][], un
     "",
   ];
   if (unanalysed.length > 0) {
-    lines.push(`Not analysed: ${unanalysed.map((item) => `${escapeCell(item.text)} (${escapeCell(item.message)})`).join("; ")}`, "");
+    // An HTML comment: the writer sees the list in the source, and the document's own checks skip
+    // it, so inserting a table never adds problems for species the document already reports.
+    const listed = unanalysed.map((item) => `${item.text} (${item.message})`).join("; ");
+    lines.push(`<!-- lonepair could not analyse: ${commentSafe(listed)} -->`, "");
   }
   lines.push(`_${HOVER_CAUTION}_`, "");
   return lines.join("\n");
+}
+
+/** Text that cannot end an HTML comment early or span lines. */
+function commentSafe(text: string): string {
+  return text.replace(/-{2,}/g, (dashes) => dashes.split("").join(" ")).replace(/>/g, "&gt;").replace(/\r?\n/g, " ");
 }
 
 function markdownRow(cells: readonly string[]): string {
@@ -158,7 +168,48 @@ function csvTable(headers: readonly string[], rows: readonly string[][]): string
   return [headers, ...rows].map((row) => row.map(csvField).join(",")).join("\r\n") + "\r\n";
 }
 
+/** Tab-separated rows; a tab or line break inside a field becomes a space (TSV has no quoting). */
+function tsvTable(headers: readonly string[], rows: readonly string[][]): string {
+  return [headers, ...rows].map((row) => row.map((field) => field.replace(/[\t\r\n]+/g, " ")).join("\t")).join("\n") + "\n";
+}
+
 /** Quotes a field only when it has to (RFC 4180: comma, quote, CR or LF). */
 function csvField(text: string): string {
   return /[",\r\n]/.test(text) ? `"${text.replace(/"/g, '""')}"` : text;
+}
+
+/**
+ * Gathers the species of a table in order of first appearance: each formula once, each species
+ * that could not be analysed once. The command line and the editor fill it the same way.
+ */
+export interface SummaryCollector {
+  /** Adds a mention found in a document, analysed as the document's checks analyse it. */
+  addOccurrence(occurrence: SpeciesOccurrence): void;
+  /** Adds a species given as text with its analysis (a command-line argument). */
+  addResult(text: string, result: AnalysisResult): void;
+  readonly analyses: readonly SpeciesAnalysis[];
+  readonly unanalysed: readonly UnanalysedSpecies[];
+}
+
+export function createSummaryCollector(): SummaryCollector {
+  const analyses: SpeciesAnalysis[] = [];
+  const unanalysed: UnanalysedSpecies[] = [];
+  const formulas = new Set<string>();
+  const failedTexts = new Set<string>();
+  const addResult = (text: string, result: AnalysisResult): void => {
+    if (result.ok) {
+      if (formulas.has(result.value.reading.formula)) return;
+      formulas.add(result.value.reading.formula);
+      analyses.push(result.value);
+    } else if (!failedTexts.has(text)) {
+      failedTexts.add(text);
+      unanalysed.push({ text, message: result.problem.message });
+    }
+  };
+  return {
+    addOccurrence: (occurrence) => addResult(occurrence.text, analyzeOccurrenceSafely(occurrence)),
+    addResult,
+    analyses,
+    unanalysed,
+  };
 }

@@ -5,10 +5,7 @@
  */
 import { writeFileSync } from "node:fs";
 import { parseArgs } from "node:util";
-import { analyzeSpecies } from "../../../../shared/src/index";
-import { buildCoordinates } from "../../../../shared/src/index";
-import { toMolfile } from "../../../../shared/src/index";
-import { toXyz } from "../../../../shared/src/index";
+import { analyzeSpecies, coordinateFileOf, shapeOf } from "../../../../shared/src/index";
 import type { CliCommand, CliIo } from "../cliCommand";
 import { EXIT_FAILURE, EXIT_OK, EXIT_USAGE } from "../cliCommand";
 
@@ -75,19 +72,14 @@ function runCoords(args: readonly string[], io: CliIo): number {
     return EXIT_FAILURE;
   }
   const analysis = result.value;
-  const coordinates = buildCoordinates(analysis.graph, analysis.radical);
-  const title = `${analysis.reading.formula} - ${CAUTION}`;
-  let text: string;
-  if (format === "mol") {
-    const molfile = toMolfile(analysis.graph, coordinates, analysis.reading.formula);
-    if (!molfile.ok) {
-      io.writeError(`lonepair coords: ${speciesText}: ${molfile.problem.message}\n`);
-      return EXIT_FAILURE;
-    }
-    text = molfile.value;
-  } else {
-    text = toXyz(coordinates, title);
+  // The one model every edge uses, so the file keeps cis/trans and matches the hover's point group.
+  const file = coordinateFileOf(analysis, format === "mol" ? "molfile" : "xyz");
+  if (!file.ok) {
+    io.writeError(`lonepair coords: ${speciesText}: ${file.message}\n`);
+    return EXIT_FAILURE;
   }
+  const text = file.value.text;
+  const atomCount = shapeOf(analysis).coordinates.atoms.length;
 
   if (output === undefined) {
     io.writeOut(text);
@@ -99,7 +91,7 @@ function runCoords(args: readonly string[], io: CliIo): number {
     io.writeError(`lonepair coords: cannot write ${output}: ${(error as NodeJS.ErrnoException).code ?? (error as Error).message}\n`);
     return EXIT_USAGE;
   }
-  io.writeOut(`Wrote ${coordinates.atoms.length} atoms of ${analysis.reading.formula} to ${output} (${format === "mol" ? "MDL molfile" : "XYZ"}).\n${CAUTION}\n`);
+  io.writeOut(`Wrote ${atomCount} atoms of ${analysis.reading.formula} to ${output} (${format === "mol" ? "MDL molfile" : "XYZ"}).\n${CAUTION}\n`);
   return EXIT_OK;
 }
 

@@ -6,10 +6,7 @@
  */
 import { statSync } from "node:fs";
 import { parseArgs } from "node:util";
-import { analyzeSpecies } from "../../../../shared/src/index";
-import type { AnalysisResult, SpeciesAnalysis } from "../../../../shared/src/index";
-import { MODEL_CAUTION } from "../../../../shared/src/index";
-import { summaryTable, type UnanalysedSpecies } from "../../../../shared/src/index";
+import { MODEL_CAUTION, analyzeSpecies, createSummaryCollector, summaryTable } from "../../../../shared/src/index";
 import type { CliCommand, CliIo } from "../cliCommand";
 import { EXIT_FAILURE, EXIT_OK, EXIT_USAGE } from "../cliCommand";
 import { speciesInFile } from "../documents/documentSpecies";
@@ -55,11 +52,11 @@ async function runTable(args: readonly string[], io: CliIo): Promise<number> {
   if (!["md", "markdown", "csv"].includes(requested)) return usageError(io, `unknown format '${requested}' (use md or csv)`);
   if (parsed.positionals.length === 0) return usageError(io, "give at least one file, folder or species");
 
-  const collected = collector();
+  const collected = createSummaryCollector();
   let failed = false;
   for (const argument of parsed.positionals) {
     if (!isOnDisk(argument)) {
-      collected.add(argument);
+      collected.addResult(argument, analyzeSpecies(argument));
       continue;
     }
     const found = findDocuments([argument]);
@@ -67,7 +64,7 @@ async function runTable(args: readonly string[], io: CliIo): Promise<number> {
     failed ||= found.missing.length > 0;
     for (const file of found.files) {
       try {
-        for await (const batch of speciesInFile(file)) for (const species of batch) collected.add(species.occurrence.text);
+        for await (const batch of speciesInFile(file)) for (const species of batch) collected.addOccurrence(species.occurrence);
       } catch (error) {
         io.writeError(`lonepair table: ${file.displayPath}: ${ioMessage(error)}\n`);
         failed = true;
@@ -76,7 +73,7 @@ async function runTable(args: readonly string[], io: CliIo): Promise<number> {
   }
 
   const format = requested === "csv" ? "csv" : "markdown";
-  const analyses = [...collected.analyses.values()];
+  const analyses = collected.analyses;
   if (analyses.length > 0) {
     io.writeOut(summaryTable({ analyses, unanalysed: collected.unanalysed, format, angleDecimals: ANGLE_DECIMALS }));
   }
@@ -86,33 +83,6 @@ async function runTable(args: readonly string[], io: CliIo): Promise<number> {
   }
   if (failed) return EXIT_USAGE;
   return analyses.length > 0 ? EXIT_OK : EXIT_FAILURE;
-}
-
-/** Species texts to analyses, each formula and each failing text kept once, in order. */
-function collector() {
-  const analyses = new Map<string, SpeciesAnalysis>();
-  const unanalysed: UnanalysedSpecies[] = [];
-  const seen = new Set<string>();
-  return {
-    analyses,
-    unanalysed,
-    add(text: string): void {
-      if (seen.has(text)) return;
-      seen.add(text);
-      const result = analysed(text);
-      if (!result.ok) unanalysed.push({ text, message: result.problem.message });
-      else if (!analyses.has(result.value.reading.formula)) analyses.set(result.value.reading.formula, result.value);
-    },
-  };
-}
-
-function analysed(text: string): AnalysisResult {
-  try {
-    return analyzeSpecies(text);
-  } catch (error) {
-    // The core promises not to throw; one species failing must not lose the table.
-    return { ok: false, problem: { code: "no-valid-structure", message: `internal error: ${String(error)}` } };
-  }
 }
 
 function isOnDisk(argument: string): boolean {

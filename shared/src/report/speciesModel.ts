@@ -1,14 +1,17 @@
 /**
- * A species' model coordinates as file text: XYZ or MDL molfile, with a file name made from
- * the formula.
+ * The 3D side of a species for every edge: the view model the 3D page draws and the coordinate
+ * files an export writes, both from the one model of the species (`shapeOf`, which keeps cis/trans
+ * from the SMILES), so the view, the export and the hover's point group always agree.
  */
-import { buildCoordinates } from "../../shared/src/index";
-import { toMolfile } from "../../shared/src/index";
-import { toXyz } from "../../shared/src/index";
-import type { SpeciesAnalysis } from "./core";
+import { shapeOf } from "../chemistry/analysis/shape3d";
+import { toMolfile } from "../chemistry/formats/molfile";
+import { toXyz } from "../chemistry/formats/xyz";
+import type { SpeciesAnalysis } from "../chemistry/types";
+import { shapeViewModel, type ShapeViewModel } from "./shapeViewModel";
 
 export type CoordinateFormat = "xyz" | "molfile";
 
+/** A coordinate file ready to save. */
 export interface CoordinateFile {
   readonly text: string;
   /** A file name without extension that is safe on every file system ("SO4_2-"). */
@@ -18,9 +21,15 @@ export interface CoordinateFile {
 
 export type CoordinateFileResult = { readonly ok: true; readonly value: CoordinateFile } | { readonly ok: false; readonly message: string };
 
+/** The view model of an analysed species; undefined if no atoms could be placed. */
+export function shapeViewModelOf(analysis: SpeciesAnalysis): ShapeViewModel | undefined {
+  const { coordinates } = shapeOf(analysis);
+  return coordinates.atoms.length > 0 ? shapeViewModel(analysis, coordinates) : undefined;
+}
+
 /** The file for `analysis`, or why there is none (no atoms placed, too many for a V2000 molfile). */
-export function coordinateFile(analysis: SpeciesAnalysis, format: CoordinateFormat): CoordinateFileResult {
-  const coordinates = buildCoordinates(analysis.graph, analysis.radical);
+export function coordinateFileOf(analysis: SpeciesAnalysis, format: CoordinateFormat): CoordinateFileResult {
+  const { coordinates } = shapeOf(analysis);
   if (coordinates.atoms.length === 0) return { ok: false, message: "no 3D model could be built for this species." };
   const title = `${analysis.reading.formula} (lonepair model geometry, not measured data)`;
   const baseName = analysis.reading.formula.replace(/[^A-Za-z0-9+-]+/g, "_").replace(/^_+|_+$/g, "") || "species";
