@@ -6,6 +6,8 @@
  * no protocol library.
  */
 import type { SummaryFormat } from "./report/summaryTable";
+import type { ShapeViewModel } from "./report/shapeViewModel";
+import type { CoordinateFile, CoordinateFormat } from "./report/speciesModel";
 
 /** A zero-based line and UTF-16 character offset in that line. */
 export interface EditorPosition {
@@ -29,9 +31,11 @@ export interface SummaryTableParams {
   readonly format?: SummaryFormat;
 }
 
-/** The answer: the table text (markdown tables end with the caution line). */
+/** The answer: the table text (markdown tables end with the caution line) and its format. */
 export interface SummaryTableResult {
   readonly text: string;
+  /** The format written: the one asked for, else the document's own (CSV for CSV, TSV for TSV). */
+  readonly format?: SummaryFormat;
 }
 
 /** `lonepair/speciesAt`: the species mention covering a position in an open document, or null. */
@@ -42,10 +46,53 @@ export interface SpeciesAtParams {
   readonly position: EditorPosition;
 }
 
-/** The species mention under a position: its text exactly as written and where it is. */
+/** The species mention under a position: its text exactly as written, where it is, and its reading. */
 export interface SpeciesAtResult {
   readonly text: string;
   readonly range: EditorRange;
+  /** The formula as read (with charge), when the species could be analysed. */
+  readonly formula?: string;
+  /** Why the species could not be analysed, in the user's terms. */
+  readonly problem?: { readonly code: string; readonly message: string };
+}
+
+/** `lonepair/shapeModel`: the 3D view model of the species at a position, or null where there is none. */
+export const SHAPE_MODEL_METHOD = "lonepair/shapeModel";
+
+export type ShapeModelParams = SpeciesAtParams;
+
+export interface ShapeModelResult extends SpeciesAtResult {
+  /** What the 3D view draws; absent when the species has no model (see `problem`). */
+  readonly model?: ShapeViewModel;
+}
+
+/** `lonepair/coordinates`: model coordinates of the species at a position as a file's text, or null. */
+export const COORDINATES_METHOD = "lonepair/coordinates";
+
+export interface CoordinatesParams extends SpeciesAtParams {
+  readonly format: CoordinateFormat;
+}
+
+export interface CoordinatesResult extends SpeciesAtResult {
+  /** The file to save; absent when there is none (see `problem`). */
+  readonly file?: CoordinateFile;
+}
+
+/** `lonepair/documentSummary`: how many species mentions and problems an open document has, or null. */
+export const DOCUMENT_SUMMARY_METHOD = "lonepair/documentSummary";
+
+export interface DocumentSummaryParams {
+  readonly uri: string;
+}
+
+export interface DocumentSummaryResult {
+  /** The document's version the counts belong to. */
+  readonly version: number;
+  readonly species: number;
+  /** The diagnostics the server reports for this version. */
+  readonly problems: number;
+  /** Set when only the start of the document was checked: the characters checked. */
+  readonly checkedLength?: number;
 }
 
 /** `lonepair/checkText`: check a file's text without opening it (the workspace check). */

@@ -42,7 +42,7 @@ export interface DocumentCache {
 const EMPTY_MODEL = (kind: DocumentKind): DocumentModel => ({ kind, occurrences: [], records: [], problems: [] });
 
 /** Enough of the start of a document to tell a table saved as .txt from prose. */
-const SNIFF_LENGTH = 4096;
+export const SNIFF_LENGTH = 4096;
 
 /** Creates a cache holding at most `capacity` documents, least recently used dropped first. */
 export function createDocumentCache(capacity = 32): DocumentCache {
@@ -68,7 +68,7 @@ export function createDocumentCache(capacity = 32): DocumentCache {
         entries.set(document.uri, cached);
         return cached;
       }
-      const entry = analyse(document, kind, revision);
+      const entry = analyseDocument(document, kind, revision);
       entries.delete(document.uri);
       entries.set(document.uri, entry);
       while (entries.size > capacity) {
@@ -97,7 +97,8 @@ function firstBytesRange(document: TextDocument) {
   return { start: { line: 0, character: 0 }, end: document.positionAt(SNIFF_LENGTH) };
 }
 
-function analyse(document: TextDocument, kind: DocumentKind, revision: number): AnalysedDocument {
+/** Analyses one version of a document as `kind` (also for text that is not open). */
+export function analyseDocument(document: TextDocument, kind: DocumentKind, revision: number): AnalysedDocument {
   const analysed = analysedTextOf(document.getText());
   const model = analysed.binary ? EMPTY_MODEL(kind) : analyzeDocument(analysed.text, kind);
   let findings: readonly Finding[] | undefined;
@@ -131,7 +132,7 @@ function truncationNote(truncatedAt: number | undefined): Finding[] {
 }
 
 /** The last path segment of a URI, decoded, for recognising `.csv` and friends. */
-function fileNameOf(uri: string): string {
+export function fileNameOf(uri: string): string {
   const path = uri.split(/[?#]/)[0];
   const last = path.slice(path.lastIndexOf("/") + 1);
   try {

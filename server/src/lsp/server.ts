@@ -21,6 +21,7 @@ import { registerCodeActions } from "./features/codeActions";
 import { registerDiagnostics, type DiagnosticsFeature } from "./features/diagnostics";
 import { registerHover } from "./features/hover";
 import { registerInlayHints } from "./features/inlayHints";
+import { registerSpeciesRequests } from "./features/speciesRequests";
 import { SUMMARY_TABLE_COMMAND, registerSummaryTable, summaryTableCommand } from "./features/summaryTable";
 
 /** Starts serving on `connection`; returns once the handlers are registered. */
@@ -50,6 +51,7 @@ export function startServer(connection: Connection): void {
     registerHover(context);
     registerCodeActions(context);
     registerSummaryTable(context);
+    registerSpeciesRequests(context);
     if (features.inlayHints) registerInlayHints(context);
     diagnostics = registerDiagnostics(context);
     return { capabilities: serverCapabilities(features), serverInfo: { name: "lonepair" } };

@@ -2,12 +2,10 @@
  * Hover: the species under the cursor, found among the model's occurrences, shown as a card.
  */
 import { MarkupKind, type Hover, type HoverParams } from "vscode-languageserver";
-import { hoverMarkdown, problemMarkdown } from "../../../../shared/src/index";
-import type { SpeciesOccurrence } from "../core";
+import { analyzeOccurrenceSafely, hoverMarkdown, occurrenceAt, problemMarkdown } from "../../../../shared/src/index";
 import { guarded } from "../guardedHandler";
 import { lspRange } from "../ranges";
 import { enabledDocument, type ServerContext } from "../serverContext";
-import { analysisOf } from "../speciesAnalyses";
 
 /** Registers the hover handler. */
 export function registerHover(context: ServerContext): void {
@@ -16,9 +14,9 @@ export function registerHover(context: ServerContext): void {
       const enabled = await enabledDocument(context, params.textDocument.uri);
       if (!enabled) return null;
       const { document, analysed, settings } = enabled;
-      const occurrence = occurrenceUnderCursor(analysed.model.occurrences, document.offsetAt(params.position));
+      const occurrence = occurrenceAt(analysed.model.occurrences, document.offsetAt(params.position));
       if (!occurrence) return null;
-      const result = analysisOf(occurrence);
+      const result = analyzeOccurrenceSafely(occurrence);
       // The card is written in the format the client asked for, not merely labelled with it.
       const format = context.clientFeatures().hoverFormat;
       const value = result.ok
@@ -30,15 +28,4 @@ export function registerHover(context: ServerContext): void {
       };
     }),
   );
-}
-
-/** The narrowest occurrence containing the offset; the cursor just after a species counts. */
-export function occurrenceUnderCursor(occurrences: readonly SpeciesOccurrence[], offset: number): SpeciesOccurrence | undefined {
-  let best: SpeciesOccurrence | undefined;
-  for (const occurrence of occurrences) {
-    if (occurrence.range.start > offset) break;
-    if (offset > occurrence.range.end) continue;
-    if (!best || occurrence.range.end - occurrence.range.start < best.range.end - best.range.start) best = occurrence;
-  }
-  return best;
 }

@@ -3,13 +3,12 @@
  * range the editor asks for; prose and data files are switched on and off separately.
  */
 import { InlayHintKind, type InlayHint, type InlayHintParams } from "vscode-languageserver";
-import { HOVER_CAUTION } from "../../../../shared/src/index";
+import { HOVER_CAUTION, analyzeOccurrenceSafely } from "../../../../shared/src/index";
 import type { DocumentKind, DocumentModel, SpeciesAnalysis, SpeciesOccurrence, TextRange } from "../core";
 import { guarded } from "../guardedHandler";
 import { offsetRange } from "../ranges";
 import { enabledDocument, type ServerContext } from "../serverContext";
 import type { ServerSettings } from "../settings";
-import { analysisOf } from "../speciesAnalyses";
 
 const PROSE_KINDS: readonly DocumentKind[] = ["markdown", "plaintext"];
 
@@ -27,7 +26,7 @@ export function registerInlayHints(context: ServerContext): void {
         // Occurrences come in order of their start; a nested one may end before its parent.
         if (occurrence.range.start > requested.end) break;
         if (occurrence.range.end < requested.start || occurrence.range.end > requested.end) continue;
-        const result = analysisOf(occurrence);
+        const result = analyzeOccurrenceSafely(occurrence);
         const label = result.ok ? geometryLabel(result.value) : undefined;
         if (!label) continue;
         hints.push({

@@ -5,16 +5,16 @@
 import { RequestType, type ExecuteCommandParams } from "vscode-languageserver";
 import {
   SUMMARY_TABLE_METHOD,
+  createSummaryCollector,
   summaryTable,
+  type SummaryFormat,
   type SummaryTableParams,
   type SummaryTableResult,
   type EditorRange,
 } from "../../../../shared/src/index";
-import type { SpeciesAnalysis } from "../core";
 import { guarded } from "../guardedHandler";
 import { offsetRange, rangesTouch } from "../ranges";
 import { enabledDocument, type ServerContext } from "../serverContext";
-import { analysisOf } from "../speciesAnalyses";
 
 /** The command name, also listed in `executeCommandProvider`. */
 export const SUMMARY_TABLE_COMMAND = "lonepair.summaryTable";
@@ -46,22 +46,24 @@ export async function summaryTableFor(context: ServerContext, params: unknown): 
   if (!enabled) return EMPTY;
   const { document, analysed, settings } = enabled;
   const requested = params.range ? offsetRange(document, params.range) : undefined;
-  const analyses: SpeciesAnalysis[] = [];
-  const unanalysed: { text: string; message: string }[] = [];
+  const collected = createSummaryCollector();
   for (const occurrence of analysed.model.occurrences) {
-    if (requested && !rangesTouch(occurrence.range, requested)) continue;
-    const result = analysisOf(occurrence);
-    if (result.ok) analyses.push(result.value);
-    else unanalysed.push({ text: occurrence.text, message: result.problem.message });
+    if (!requested || rangesTouch(occurrence.range, requested)) collected.addOccurrence(occurrence);
   }
+  const format = params.format ?? defaultFormat(analysed.kind);
   const text = summaryTable({
-    analyses,
-    unanalysed,
+    analyses: collected.analyses,
+    unanalysed: collected.unanalysed,
     columns: settings.summaryTable.columns,
-    format: params.format === "csv" ? "csv" : "markdown",
+    format,
     angleDecimals: settings.angleDecimals,
   });
-  return { text };
+  return { text, format };
+}
+
+/** A table in the document's own format: rows for CSV and TSV files, a markdown table elsewhere. */
+function defaultFormat(kind: string): SummaryFormat {
+  return kind === "csv" ? "csv" : kind === "tsv" ? "tsv" : "markdown";
 }
 
 function isParams(value: unknown): value is SummaryTableParams {
@@ -69,7 +71,7 @@ function isParams(value: unknown): value is SummaryTableParams {
   const candidate = value as Record<string, unknown>;
   if (typeof candidate.uri !== "string") return false;
   if (candidate.range !== undefined && !isRange(candidate.range)) return false;
-  return candidate.format === undefined || candidate.format === "markdown" || candidate.format === "csv";
+  return candidate.format === undefined || candidate.format === "markdown" || candidate.format === "csv" || candidate.format === "tsv";
 }
 
 function isRange(value: unknown): value is EditorRange {

@@ -1,0 +1,126 @@
+/**
+ * The custom requests that give any LSP editor what the VS Code client shows: the species at a
+ * position, its 3D view model, its model coordinates as a file, a document's counts for a status
+ * line, and the check of a file's text that is not open. Every decision is the core's; this file
+ * only turns positions into offsets and back.
+ */
+import { TextDocument } from "vscode-languageserver-textdocument";
+import {
+  CHECK_TEXT_METHOD,
+  COORDINATES_METHOD,
+  DOCUMENT_SUMMARY_METHOD,
+  SHAPE_MODEL_METHOD,
+  SPECIES_AT_METHOD,
+  coordinateFileOf,
+  documentKindFor,
+  shapeViewModelOf,
+  speciesAtOffset,
+  type CheckTextParams,
+  type CheckTextResult,
+  type CoordinatesParams,
+  type CoordinatesResult,
+  type DocumentSummaryParams,
+  type DocumentSummaryResult,
+  type EditorPosition,
+  type ShapeModelResult,
+  type SpeciesAtOffset,
+  type SpeciesAtParams,
+  type SpeciesAtResult,
+} from "../../../../shared/src/index";
+import { analyseDocument, fileNameOf, SNIFF_LENGTH } from "../documentCache";
+import { guarded } from "../guardedHandler";
+import { lspRange } from "../ranges";
+import { enabledDocument, type ServerContext } from "../serverContext";
+import { diagnosticsOf } from "./diagnostics";
+
+/** Registers the five requests. */
+export function registerSpeciesRequests(context: ServerContext): void {
+  const { connection, log } = context;
+  connection.onRequest(
+    SPECIES_AT_METHOD,
+    guarded<unknown, SpeciesAtResult | null>(log, "species at position", null, async (params) => {
+      const found = await speciesAt(context, params);
+      return found ? describe(found.document, found.species) : null;
+    }),
+  );
+  connection.onRequest(
+    SHAPE_MODEL_METHOD,
+    guarded<unknown, ShapeModelResult | null>(log, "shape model", null, async (params) => {
+      const found = await speciesAt(context, params);
+      if (!found) return null;
+      const described = describe(found.document, found.species);
+      if (!found.species.analysis.ok) return described;
+      const model = shapeViewModelOf(found.species.analysis.value);
+      return model ? { ...described, model } : { ...described, problem: { code: "no-model", message: "No 3D model could be built for this species." } };
+    }),
+  );
+  connection.onRequest(
+    COORDINATES_METHOD,
+    guarded<unknown, CoordinatesResult | null>(log, "coordinates", null, async (params) => {
+      const format = (params as Partial<CoordinatesParams> | null)?.format;
+      if (format !== "xyz" && format !== "molfile") return null;
+      const found = await speciesAt(context, params);
+      if (!found) return null;
+      const described = describe(found.document, found.species);
+      if (!found.species.analysis.ok) return described;
+      const file = coordinateFileOf(found.species.analysis.value, format);
+      return file.ok ? { ...described, file: file.value } : { ...described, problem: { code: "no-coordinates", message: file.message } };
+    }),
+  );
+  connection.onRequest(
+    DOCUMENT_SUMMARY_METHOD,
+    guarded<unknown, DocumentSummaryResult | null>(log, "document summary", null, async (params) => {
+      const uri = (params as Partial<DocumentSummaryParams> | null)?.uri;
+      if (typeof uri !== "string") return null;
+      const enabled = await enabledDocument(context, uri);
+      if (!enabled) return null;
+      const { analysed } = enabled;
+      return {
+        version: analysed.version,
+        species: analysed.model.occurrences.length,
+        problems: analysed.findings().length,
+        ...(analysed.truncatedAt !== undefined ? { checkedLength: analysed.truncatedAt } : {}),
+      };
+    }),
+  );
+  connection.onRequest(
+    CHECK_TEXT_METHOD,
+    guarded<unknown, CheckTextResult>(log, "check text", { diagnostics: [] }, async (params) => checkText(context, params)),
+  );
+}
+
+/** The open document and the species at the asked position, or undefined. */
+async function speciesAt(context: ServerContext, params: unknown): Promise<{ document: TextDocument; species: SpeciesAtOffset } | undefined> {
+  const candidate = params as Partial<SpeciesAtParams> | null;
+  if (typeof candidate?.uri !== "string" || !isPosition(candidate.position)) return undefined;
+  const enabled = await enabledDocument(context, candidate.uri);
+  if (!enabled) return undefined;
+  const species = speciesAtOffset(enabled.analysed.model, enabled.document.offsetAt(candidate.position));
+  return species ? { document: enabled.document, species } : undefined;
+}
+
+function describe(document: TextDocument, species: SpeciesAtOffset): SpeciesAtResult {
+  const range = lspRange(document, species.range);
+  return species.analysis.ok
+    ? { text: species.text, range, formula: species.analysis.value.reading.formula }
+    : { text: species.text, range, problem: { code: species.analysis.problem.code, message: species.analysis.problem.message } };
+}
+
+/** The diagnostics the file would get were it open, with the settings of its URI. */
+async function checkText(context: ServerContext, params: unknown): Promise<CheckTextResult> {
+  const candidate = params as Partial<CheckTextParams> | null;
+  if (typeof candidate?.uri !== "string" || typeof candidate.text !== "string") return { diagnostics: [] };
+  const languageId = typeof candidate.languageId === "string" ? candidate.languageId : "";
+  const kind = documentKindFor(fileNameOf(candidate.uri), languageId, candidate.text.slice(0, SNIFF_LENGTH));
+  if (!kind) return { diagnostics: [] };
+  const settings = await context.settings.forUri(candidate.uri);
+  if (!settings.enabledLanguages.includes(kind)) return { diagnostics: [] };
+  const document = TextDocument.create(candidate.uri, languageId, 0, candidate.text);
+  const diagnostics = diagnosticsOf(document, analyseDocument(document, kind, 0).findings());
+  return { diagnostics: diagnostics.map((diagnostic) => ({ ...diagnostic, message: String(diagnostic.message) })) };
+}
+
+function isPosition(value: unknown): value is EditorPosition {
+  const position = value as EditorPosition | null | undefined;
+  return typeof position === "object" && position !== null && Number.isInteger(position.line) && Number.isInteger(position.character) && position.line >= 0 && position.character >= 0;
+}
