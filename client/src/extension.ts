@@ -10,7 +10,6 @@ import { exportCoordinates } from "./commands/exportCoordinates";
 import { insertSummaryTable } from "./commands/insertSummaryTable";
 import { showShape } from "./commands/showShape";
 import { startLanguageClient } from "./languageClient";
-import { forgetLocalModel } from "./localDocumentModel";
 import { createShapePanelController } from "./shapePanel";
 import { createStatusBar } from "./statusBar";
 
@@ -33,9 +32,8 @@ export async function activate(context: vscode.ExtensionContext): Promise<void> 
   context.subscriptions.push(
     workspaceProblems,
     shapePanel,
-    createStatusBar(),
+    createStatusBar(started),
     vscode.workspace.onDidOpenTextDocument((document) => workspaceProblems.delete(document.uri)),
-    vscode.workspace.onDidCloseTextDocument((document) => forgetLocalModel(document.uri)),
     vscode.commands.registerCommand("lonepair.insertSummaryTable", () => insertSummaryTable(started, log)),
     vscode.commands.registerCommand("lonepair.showShape", () => showShape(shapePanel)),
     vscode.commands.registerCommand("lonepair.checkWorkspace", () => checkWorkspace(started, workspaceProblems, log)),

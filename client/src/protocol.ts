@@ -1,24 +1,35 @@
 /**
  * The custom requests the client sends to the lonepair language server, typed for the language
  * client. Their method names and shapes are the core's (`shared/src/editorRequests.ts`), shared
- * with the server that answers them. `speciesAt` and `checkText` are answered client-side with
- * the bundled core when the server does not handle them (see `serverOrLocal.ts`).
+ * with the server that answers them; the client itself bundles no chemistry.
  */
 import { RequestType } from "vscode-languageclient/node";
 import {
   CHECK_TEXT_METHOD,
+  COORDINATES_METHOD,
+  DOCUMENT_SUMMARY_METHOD,
+  SHAPE_MODEL_METHOD,
   SPECIES_AT_METHOD,
   SUMMARY_TABLE_METHOD,
   type CheckTextParams,
   type CheckTextResult,
+  type CoordinatesParams,
+  type CoordinatesResult,
+  type DocumentSummaryParams,
+  type DocumentSummaryResult,
+  type ShapeModelParams,
+  type ShapeModelResult,
   type SpeciesAtParams,
   type SpeciesAtResult,
   type SummaryTableParams,
   type SummaryTableResult,
-} from "../../shared/src/index";
+} from "../../shared/src/editorRequests";
 
-export type { CheckTextParams, CheckTextResult, SpeciesAtParams, SpeciesAtResult, SummaryTableParams, SummaryTableResult };
+export type { CoordinatesResult, ShapeModelResult, SpeciesAtResult, SummaryTableParams, SummaryTableResult };
 
 export const summaryTableRequest = new RequestType<SummaryTableParams, SummaryTableResult, void>(SUMMARY_TABLE_METHOD);
 export const speciesAtRequest = new RequestType<SpeciesAtParams, SpeciesAtResult | null, void>(SPECIES_AT_METHOD);
+export const shapeModelRequest = new RequestType<ShapeModelParams, ShapeModelResult | null, void>(SHAPE_MODEL_METHOD);
+export const coordinatesRequest = new RequestType<CoordinatesParams, CoordinatesResult | null, void>(COORDINATES_METHOD);
+export const documentSummaryRequest = new RequestType<DocumentSummaryParams, DocumentSummaryResult | null, void>(DOCUMENT_SUMMARY_METHOD);
 export const checkTextRequest = new RequestType<CheckTextParams, CheckTextResult, void>(CHECK_TEXT_METHOD);

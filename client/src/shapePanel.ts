@@ -7,8 +7,8 @@ import { randomBytes } from "node:crypto";
 import * as vscode from "vscode";
 import type { LanguageClient } from "vscode-languageclient/node";
 import { shapePageHtml } from "./shapePageHtml";
-import { shapeOf } from "./speciesShape";
-import { speciesAtCursor } from "./speciesAtCursor";
+import { shapeModelRequest } from "./protocol";
+import { cursorParams } from "./speciesAtCursor";
 import { DOCUMENT_SELECTOR } from "./documentSelector";
 
 const VIEW_TYPE = "lonepair.shapeView";
@@ -45,18 +45,13 @@ export function createShapePanelController(extensionUri: vscode.Uri, client: Lan
     const cancellation = new vscode.CancellationTokenSource();
     pending = cancellation;
     try {
-      const found = await speciesAtCursor(client, editor.document, editor.selection.active, cancellation.token);
+      const found = await client.sendRequest(shapeModelRequest, cursorParams(client, editor.document, editor.selection.active), cancellation.token);
       if (cancellation.token.isCancellationRequested || !found) return;
       // The same species again (the cursor moved inside it): keep the page and its rotation as they are.
-      const key = `${editor.document.uri.toString()}|${found.text}|${found.analysis.ok ? found.analysis.value.reading.formula : ""}`;
+      const key = `${editor.document.uri.toString()}|${found.text}|${found.formula ?? ""}`;
       if (key === lastKey) return;
       lastKey = key;
-      if (!found.analysis.ok) {
-        post({ type: "problem", text: found.text, message: found.analysis.problem.message });
-        return;
-      }
-      const model = shapeOf(found.analysis.value);
-      post(model ? { type: "show", model } : { type: "problem", text: found.text, message: "No 3D model could be built for this species." });
+      post(found.model ? { type: "show", model: found.model } : { type: "problem", text: found.text, message: found.problem?.message ?? "No 3D model could be built for this species." });
     } catch (error) {
       log.appendLine(`3D view: could not read the species under the cursor: ${String(error)}`);
     }

@@ -1,7 +1,8 @@
 /**
- * The shape of the project, kept by a test: the edges (language server, command line, VS Code
- * client) reach the core only through its one door, `shared/src/index.ts`; the core imports no
- * edge and nothing from the editor or the protocol; the client never imports the server.
+ * The shape of the project, kept by a test: the language server and the command line reach the
+ * core only through its one door, `shared/src/index.ts`; the VS Code client bundles no chemistry
+ * and reads only the request contract (`shared/src/editorRequests.ts`); the core imports no edge
+ * and nothing from the editor or the protocol; the client never imports the server.
  */
 import { readdirSync, readFileSync } from "node:fs";
 import { dirname, join, relative, resolve } from "node:path";
@@ -10,6 +11,7 @@ import { describe, expect, it } from "vitest";
 
 const ROOT = resolve(dirname(fileURLToPath(import.meta.url)), "../..");
 const CORE_DOOR = join(ROOT, "shared/src/index");
+const REQUEST_CONTRACT = join(ROOT, "shared/src/editorRequests");
 
 function sourceFiles(folder: string): string[] {
   const found: string[] = [];
@@ -41,17 +43,19 @@ function importsOf(file: string): ImportEdge[] {
   return edges;
 }
 
-const edgeFiles = [...sourceFiles("server/src"), ...sourceFiles("client/src")];
+const serverFiles = sourceFiles("server/src");
+const clientFiles = sourceFiles("client/src");
 const coreFiles = sourceFiles("shared/src");
 
 describe("import graph", () => {
   it("finds the files it judges", () => {
-    expect(edgeFiles.length).toBeGreaterThan(20);
+    expect(serverFiles.length).toBeGreaterThan(20);
+    expect(clientFiles.length).toBeGreaterThan(5);
     expect(coreFiles.length).toBeGreaterThan(50);
   });
 
-  it("edges reach the core only through shared/src/index", () => {
-    const deeper = edgeFiles
+  it("the language server and the command line reach the core only through shared/src/index", () => {
+    const deeper = serverFiles
       .flatMap(importsOf)
       .filter((edge) => edge.target?.startsWith("shared/") && join(ROOT, edge.target) !== CORE_DOOR)
       .map((edge) => `${edge.file} imports ${edge.specifier}`);
@@ -65,6 +69,20 @@ describe("import graph", () => {
       .filter((edge) => (edge.target ? !edge.target.startsWith("shared/") : forbidden.test(edge.specifier)))
       .map((edge) => `${edge.file} imports ${edge.specifier}`);
     expect(outward).toEqual([]);
+  });
+
+  it("the client reads only the request contract from the core", () => {
+    const chemistry = clientFiles
+      .flatMap(importsOf)
+      .filter((edge) => edge.target?.startsWith("shared/") && join(ROOT, edge.target) !== REQUEST_CONTRACT)
+      .map((edge) => `${edge.file} imports ${edge.specifier}`);
+    expect(chemistry).toEqual([]);
+  });
+
+  it("the request contract imports nothing but types", () => {
+    const text = readFileSync(`${REQUEST_CONTRACT}.ts`, "utf8");
+    const valueImports = [...text.matchAll(/^import\s+(?!type\b)[^;]*;/gm)].map((match) => match[0]);
+    expect(valueImports).toEqual([]);
   });
 
   it("the client never imports the server", () => {

@@ -1,22 +1,18 @@
 /**
  * "Check all files in the workspace": lists the files, reads them a batch at a time, checks each
- * (with the server's `lonepair/checkText` when it has it, otherwise the bundled core) and fills
+ * with the server's `lonepair/checkText` (which applies the same settings as to open files) and fills
  * the Problems panel through a diagnostic collection. Cancellable; yields between batches so the
  * extension host stays responsive with 10,000 files. Files open in an editor are left to the
  * server, which already reports on them.
  */
 import * as vscode from "vscode";
 import type { LanguageClient } from "vscode-languageclient/node";
-import type { DocumentKind } from "../core";
-import { checkTextLocally } from "../localCheck";
 import { checkTextRequest } from "../protocol";
-import { serverOrLocal } from "../serverOrLocal";
 import { MAX_WORKSPACE_FILES, workspaceFilesToCheck } from "../workspaceFiles";
 
 const BATCH_SIZE = 25;
 /** Larger files are skipped: lab notes and tables are far smaller, and reading them would stall the check. */
 const MAX_FILE_BYTES = 8 * 1024 * 1024;
-const ALL_KINDS: readonly DocumentKind[] = ["markdown", "plaintext", "csv", "tsv", "json", "yaml"];
 
 /** What one run found, for the closing message and the tests. */
 export interface WorkspaceCheckSummary {
@@ -60,7 +56,6 @@ async function runCheck(
   if (files.length >= MAX_WORKSPACE_FILES) log.appendLine(`Workspace check: stopped listing at ${MAX_WORKSPACE_FILES} files.`);
   collection.clear();
   const open = new Set(vscode.workspace.textDocuments.map((document) => document.uri.toString()));
-  const enabledKinds = enabledLanguages();
   let checked = 0;
   let skipped = 0;
   let problems = 0;
@@ -72,7 +67,7 @@ async function runCheck(
       batch.map(async (uri) => {
         if (open.has(uri.toString())) return undefined;
         try {
-          return [uri, await checkFile(client, uri, enabledKinds, token)] as const;
+          return [uri, await checkFile(client, uri, token)] as const;
         } catch (error) {
           log.appendLine(`Workspace check: ${uri.fsPath}: ${String(error)}`);
           return undefined;
@@ -102,30 +97,12 @@ async function runCheck(
 async function checkFile(
   client: LanguageClient,
   uri: vscode.Uri,
-  enabledKinds: readonly DocumentKind[],
   token: vscode.CancellationToken,
 ): Promise<vscode.Diagnostic[] | undefined> {
   const stat = await vscode.workspace.fs.stat(uri);
   if (stat.size > MAX_FILE_BYTES) return undefined;
   const bytes = await vscode.workspace.fs.readFile(uri);
   const text = new TextDecoder("utf-8").decode(bytes);
-  return serverOrLocal(
-    checkTextRequest.method,
-    async () => {
-      const result = await client.sendRequest(checkTextRequest, { uri: uri.toString(), text }, token);
-      return client.protocol2CodeConverter.asDiagnostics(result.diagnostics);
-    },
-    () => checkTextLocally(uri.path, text, enabledKinds),
-  );
-}
-
-/** Editor language ids the server also accepts in the setting. */
-const KIND_ALIASES: Readonly<Record<string, DocumentKind>> = { jsonc: "json", yml: "yaml", text: "plaintext", md: "markdown" };
-
-/** The `lonepair.enabledLanguages` setting, as the server reads it. */
-function enabledLanguages(): readonly DocumentKind[] {
-  const value = vscode.workspace.getConfiguration("lonepair").get<unknown>("enabledLanguages");
-  if (!Array.isArray(value)) return ALL_KINDS;
-  const named = value.filter((item): item is string => typeof item === "string").map((item) => KIND_ALIASES[item.toLowerCase()] ?? item.toLowerCase());
-  return ALL_KINDS.filter((kind) => named.includes(kind));
+  const result = await client.sendRequest(checkTextRequest, { uri: uri.toString(), text }, token);
+  return client.protocol2CodeConverter.asDiagnostics(result.diagnostics);
 }

@@ -4,10 +4,11 @@
  */
 import * as vscode from "vscode";
 import type { LanguageClient } from "vscode-languageclient/node";
-import { coordinateFile, type CoordinateFormat } from "../coordinateFile";
-import { speciesAtCursor } from "../speciesAtCursor";
+import type { CoordinatesParams } from "../../../shared/src/editorRequests";
+import { coordinatesRequest } from "../protocol";
+import { cursorParams } from "../speciesAtCursor";
 
-const FORMATS: readonly { readonly label: string; readonly description: string; readonly format: CoordinateFormat }[] = [
+const FORMATS: readonly { readonly label: string; readonly description: string; readonly format: CoordinatesParams["format"] }[] = [
   { label: "XYZ", description: ".xyz: element symbols and positions in ångströms", format: "xyz" },
   { label: "MDL molfile", description: ".mol: atoms, bonds and charges (V2000)", format: "molfile" },
 ];
@@ -18,24 +19,28 @@ export async function exportCoordinates(client: LanguageClient, log: vscode.Outp
     void vscode.window.showInformationMessage("lonepair: put the cursor on a species in a lab note or data table first.");
     return;
   }
-  const found = await speciesAtCursor(client, editor.document, editor.selection.active);
+  const document = editor.document;
+  const position = editor.selection.active;
+  const picked = await vscode.window.showQuickPick(FORMATS, { title: "Export coordinates of the species under the cursor", placeHolder: "File format" });
+  if (!picked) return;
+  let found;
+  try {
+    found = await client.sendRequest(coordinatesRequest, { ...cursorParams(client, document, position), format: picked.format });
+  } catch (error) {
+    log.appendLine(`Export coordinates: the request failed: ${String(error)}`);
+    void vscode.window.showErrorMessage("lonepair: the language server could not build the coordinates (see the lonepair output).");
+    return;
+  }
   if (!found) {
     void vscode.window.showInformationMessage("lonepair: there is no species under the cursor.");
     return;
   }
-  if (!found.analysis.ok) {
-    void vscode.window.showWarningMessage(`lonepair: no coordinates for ${found.text}: ${found.analysis.problem.message}`);
+  if (!found.file) {
+    void vscode.window.showWarningMessage(`lonepair: no coordinates for ${found.text}: ${found.problem?.message ?? "no 3D model could be built."}`);
     return;
   }
-  const picked = await vscode.window.showQuickPick(FORMATS, { title: `Export coordinates of ${found.text}`, placeHolder: "File format" });
-  if (!picked) return;
-  const result = coordinateFile(found.analysis.value, picked.format);
-  if (!result.ok) {
-    void vscode.window.showWarningMessage(`lonepair: no coordinates for ${found.text}: ${result.message}`);
-    return;
-  }
-  const file = result.value;
-  const folder = vscode.workspace.getWorkspaceFolder(editor.document.uri)?.uri ?? vscode.Uri.joinPath(editor.document.uri, "..");
+  const file = found.file;
+  const folder = vscode.workspace.getWorkspaceFolder(document.uri)?.uri ?? vscode.Uri.joinPath(document.uri, "..");
   const target = await vscode.window.showSaveDialog({
     defaultUri: vscode.Uri.joinPath(folder, `${file.baseName}.${file.extension}`),
     filters: { [picked.label]: [file.extension] },

@@ -1,11 +1,10 @@
 /**
  * "Insert geometry summary table": the server builds the table of the species in the selection
  * (or the whole document); the client inserts it at every cursor in one edit, so one undo
- * removes it. Markdown tables in prose files, CSV rows in CSV, tab-separated rows in TSV.
+ * removes it. The server writes markdown tables for prose files, CSV rows for CSV and tab-separated rows for TSV.
  */
 import * as vscode from "vscode";
 import type { LanguageClient } from "vscode-languageclient/node";
-import { kindOfDocument } from "../localDocumentModel";
 import { summaryTableRequest } from "../protocol";
 
 export async function insertSummaryTable(client: LanguageClient, log: vscode.OutputChannel): Promise<void> {
@@ -15,16 +14,17 @@ export async function insertSummaryTable(client: LanguageClient, log: vscode.Out
     return;
   }
   const document = editor.document;
-  const kind = kindOfDocument(document);
   const selected = editor.selections.find((selection) => !selection.isEmpty);
   let text: string;
+  // The server writes the table in the document's own format (CSV rows, TSV rows or markdown).
+  let format: string;
   try {
     const result = await client.sendRequest(summaryTableRequest, {
       uri: document.uri.toString(),
       range: selected ? client.code2ProtocolConverter.asRange(selected) : undefined,
-      format: kind === "csv" || kind === "tsv" ? "csv" : "markdown",
     });
     text = result.text;
+    format = result.format ?? "markdown";
   } catch (error) {
     log.appendLine(`Summary table request failed: ${String(error)}`);
     void vscode.window.showErrorMessage("lonepair: the language server could not build the table (see the lonepair output).");
@@ -35,10 +35,10 @@ export async function insertSummaryTable(client: LanguageClient, log: vscode.Out
     return;
   }
   const eol = document.eol === vscode.EndOfLine.CRLF ? "\r\n" : "\n";
-  const table = withLineEndings(kind === "tsv" ? csvToTsv(text) : text, eol);
+  const table = withLineEndings(text, eol);
   const ok = await editor.edit((builder) => {
     for (const selection of editor.selections) {
-      builder.insert(selection.active, blockAt(document, selection.active, table, eol, kind === "markdown"));
+      builder.insert(selection.active, blockAt(document, selection.active, table, eol, format === "markdown"));
     }
   });
   if (!ok) void vscode.window.showWarningMessage("lonepair: the table could not be inserted (the document changed meanwhile).");
@@ -57,34 +57,4 @@ function blockAt(document: vscode.TextDocument, position: vscode.Position, table
 
 function withLineEndings(text: string, eol: string): string {
   return text.replace(/\r?\n/g, eol);
-}
-
-/** CSV as the server writes it (RFC 4180) to tab-separated fields; tabs inside a field become spaces. */
-export function csvToTsv(csv: string): string {
-  const lines: string[] = [];
-  let fields: string[] = [];
-  let field = "";
-  let quoted = false;
-  for (let index = 0; index < csv.length; index++) {
-    const character = csv[index];
-    if (quoted) {
-      if (character === '"' && csv[index + 1] === '"') {
-        field += '"';
-        index++;
-      } else if (character === '"') quoted = false;
-      else field += character === "\t" || character === "\r" || character === "\n" ? " " : character;
-    } else if (character === '"') quoted = true;
-    else if (character === ",") {
-      fields.push(field);
-      field = "";
-    } else if (character === "\n" || character === "\r") {
-      if (character === "\r" && csv[index + 1] === "\n") index++;
-      fields.push(field);
-      lines.push(fields.join("\t"));
-      fields = [];
-      field = "";
-    } else field += character;
-  }
-  if (field !== "" || fields.length > 0) lines.push([...fields, field].join("\t"));
-  return lines.map((line) => `${line}\n`).join("");
 }

@@ -14,7 +14,7 @@ import { checkDelimitedBytes } from "./checkDelimitedBytes";
 import type { CheckReporter } from "./checkReporter";
 import { countFinding, type CheckSummary } from "./checkSummary";
 import { applyFixes, chooseFixes, fixedOffsets } from "./chooseFixes";
-import { fixedFileWriter, type FixedFileWriter } from "./fixedFileWriter";
+import { fixedFileWriter } from "./fixedFileWriter";
 import { locateFinding } from "./locatedFinding";
 import { diffHeader, diffHunks } from "./unifiedDiff";
 
