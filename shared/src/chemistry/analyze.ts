@@ -5,7 +5,7 @@
  */
 import { elementBySymbol } from "./elements";
 import { readSpecies } from "./reader/readSpecies";
-import type { AnalysisResult, Problem, SpeciesReading } from "./types";
+import type { AnalysisResult, Problem, SpeciesAnalysis, SpeciesReading } from "./types";
 import { buildAnalysis } from "./analysis/buildAnalysis";
 import { chooseSkeletonStructure } from "./analysis/chooseSkeletonStructure";
 import { smilesStructure } from "./analysis/fromSmiles";
@@ -61,6 +61,7 @@ export function analyzeSmiles(text: string): AnalysisResult {
 /** Analyse a species that has already been read. */
 export function analyzeReading(reading: SpeciesReading): AnalysisResult {
   if (reading.notation === "smiles") return analyzeSmiles(reading.text);
+  if (reading.smiles !== undefined) return analyzeNamedStructure(reading, reading.smiles);
   const scope = outOfScope(reading);
   if (scope) return { ok: false, reading, problem: scope };
   const chosen = chooseSkeletonStructure(reading);
@@ -69,6 +70,19 @@ export function analyzeReading(reading: SpeciesReading): AnalysisResult {
     return { ok: false, reading, problem: chosen.problem };
   }
   return { ok: true, value: buildAnalysis(reading, chosen.structure, chosen.centre) };
+}
+
+/** A name that fixes its structure: the SMILES analysis of that structure, under the name. */
+function analyzeNamedStructure(reading: SpeciesReading, smiles: string): AnalysisResult {
+  const known = analyzeSmiles(smiles);
+  if (!known.ok) return { ok: false, reading, problem: known.problem };
+  // Copy the property descriptors, not the values: centres and polarity stay worked out on first
+  // read (a spread would build the 3D model of every named molecule at once).
+  const value = Object.defineProperties({}, Object.getOwnPropertyDescriptors(known.value)) as SpeciesAnalysis;
+  const note = `Read as the structure of ${reading.name ?? reading.text} (SMILES ${smiles}).`;
+  Object.defineProperty(value, "reading", { value: reading, enumerable: true });
+  Object.defineProperty(value, "warnings", { value: [...known.value.warnings, note], enumerable: true });
+  return { ok: true, value };
 }
 
 /**

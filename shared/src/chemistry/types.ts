@@ -59,6 +59,11 @@ export interface SpeciesReading {
   readonly formula: string;
   /** A name for the species where one is known ("sulfur tetrafluoride"). */
   readonly name?: string;
+  /**
+   * For a name whose connectivity its formula cannot show ("ethyl acetate", "glucose"): the
+   * structure the name stands for, as SMILES. Analysis follows it instead of guessing a skeleton.
+   */
+  readonly smiles?: string;
 }
 
 /** Stable codes for everything that stops a species from being read or analysed. */

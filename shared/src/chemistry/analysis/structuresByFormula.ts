@@ -5,6 +5,7 @@
  */
 import type { FormulaPart } from "../types";
 import { compositionKey } from "../vsepr/measuredAngles";
+import { smilesForName } from "../reader/names/nameLookup";
 
 export interface KnownStructure {
   readonly name: string;
@@ -72,16 +73,12 @@ const SEVERAL: Readonly<Record<string, readonly KnownStructure[]>> = {
   ],
 };
 
-/** Names whose formulas hide a ring: the structure the name means. */
-const BY_NAME: Readonly<Record<string, KnownStructure>> = {
-  benzene: { name: "benzene", written: "c1ccccc1", smiles: true },
-  toluene: { name: "toluene", written: "Cc1ccccc1", smiles: true },
-  phenol: { name: "phenol", written: "Oc1ccccc1", smiles: true },
-  cyclohexane: { name: "cyclohexane", written: "C1CCCCC1", smiles: true },
-};
-
+/** The structure a name means where the name vocabulary keeps one ("toluene" for C6H5CH3). */
 export function structureForName(name: string | undefined): KnownStructure | undefined {
-  return name === undefined ? undefined : BY_NAME[name.toLowerCase()];
+  if (name === undefined) return undefined;
+  const lower = name.toLowerCase();
+  const smiles = smilesForName(lower);
+  return smiles === undefined ? undefined : { name: lower, written: smiles, smiles: true };
 }
 
 export function singleStructureFor(composition: readonly FormulaPart[], charge: number): KnownStructure | undefined {

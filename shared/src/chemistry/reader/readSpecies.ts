@@ -12,10 +12,13 @@
  * order ("H2SO4", "SO4^2-", "NH4^+"); a condensed formula keeps its written groups ("CH3COOH",
  * "(CH3)2CO", "Ca(OH)2").
  */
-import type { ReadResult, SpeciesReading } from "../types";
+import { parseSmiles, smilesNetCharge } from "../smiles";
+import type { FormulaPart, ReadResult, SpeciesReading } from "../types";
 import { isAsciiLetter, isLowerLetter, isSpace } from "./characters";
-import { matchName, nameForFormula, normalizeName } from "./names/nameLookup";
+import { chargeText } from "./chargeText";
+import { matchName, nameForFormula, normalizeName, type NameMatch } from "./names/nameLookup";
 import { suggestName } from "./names/nameSuggestion";
+import { LAB_ABBREVIATIONS } from "./names/synonyms";
 import { problemAt } from "./problem";
 import { readFormulaSpan } from "./readFormula";
 import { recaseSuggestion } from "./recaseSuggestion";
@@ -65,8 +68,25 @@ function readSpeciesUncached(text: string): ReadResult {
     return { ok: false, problem: problemAt("empty-input", "There is nothing to read.", start, start) };
   }
   if (text.startsWith(MHCHEM_OPEN, start)) return withName(readMhchem(text, start, end));
+  // "DCM", "EtOH": exact case only, and before the formula reader sees "AcOH" as actinium
+  const abbreviated = end - start <= 6 ? LAB_ABBREVIATIONS.get(text.slice(start, end)) : undefined;
+  if (abbreviated !== undefined) return readName(text, start, end, abbreviated);
   if (looksLikeName(text, start, end)) return readName(text, start, end);
-  return withName(readFormulaSpan(text, start, end, "formula"));
+  const formula = withName(readFormulaSpan(text, start, end, "formula"));
+  // Inventories write names in capitals ("ACETONE", "COPPER SULFATE"): a name, when no formula
+  if (!formula.ok && end - start >= 4 && isCapitalWords(text, start, end)) {
+    const named = readName(text, start, end);
+    if (named.ok) return named;
+  }
+  return formula;
+}
+
+function isCapitalWords(text: string, start: number, end: number): boolean {
+  for (let i = start; i < end; i++) {
+    const code = text.charCodeAt(i);
+    if (isLowerLetter(code) || (!isAsciiLetter(code) && !isSpace(code) && code !== 0x28 && code !== 0x29 && code !== 0x2d)) return false;
+  }
+  return true;
 }
 
 /** `\ce{...}`: the formula inside, with the range covering the whole command. */
@@ -103,19 +123,27 @@ function readMhchem(text: string, start: number, end: number): ReadResult {
 
 /**
  * Words, not a formula: letters with spaces, hyphens or a Stock numeral, and either a lower-case
- * first letter, a space or two lower-case letters in a row (no element symbol has two).
+ * first letter, a space or two lower-case letters in a row (no element symbol has two). Locants
+ * of organic names ("propan-2-ol", "1,2-dichloroethane") count as words when a run of three
+ * lower-case letters shows that this is no formula.
  */
 function looksLikeName(text: string, start: number, end: number): boolean {
   let letters = 0;
   let lowerPair = false;
+  let lowerRun = 0;
+  let longestLowerRun = 0;
   let space = false;
+  let locants = false;
   for (let i = start; i < end; i++) {
     const code = text.charCodeAt(i);
     if (isAsciiLetter(code)) {
       letters++;
-      if (i > start && isLowerLetter(code) && isLowerLetter(text.charCodeAt(i - 1))) lowerPair = true;
+      lowerRun = isLowerLetter(code) ? lowerRun + 1 : 0;
+      if (lowerRun > longestLowerRun) longestLowerRun = lowerRun;
+      if (lowerRun >= 2) lowerPair = true;
       continue;
     }
+    lowerRun = 0;
     if (isSpace(code)) {
       space = true;
       continue;
@@ -123,33 +151,77 @@ function looksLikeName(text: string, start: number, end: number): boolean {
     const betweenLetters = i > start && i + 1 < end && isAsciiLetter(text.charCodeAt(i + 1));
     if ((code === 0x2d || code === 0x27 || code === 0x2c) && betweenLetters) continue;
     if (code === 0x28 || code === 0x29) continue;
+    if (isDigit(code) || ((code === 0x2d || code === 0x2c) && (isDigit(text.charCodeAt(i - 1)) || isDigit(text.charCodeAt(i + 1))))) {
+      locants = true;
+      continue;
+    }
     return false;
   }
   if (letters < 2) return false;
+  if (locants) return longestLowerRun >= 3 && isLocantHyphenated(text, start, end);
   return isLowerLetter(text.charCodeAt(start)) || space || lowerPair;
 }
 
-function readName(text: string, start: number, end: number): ReadResult {
+function isDigit(code: number): boolean {
+  return code >= 0x30 && code <= 0x39;
+}
+
+/** A digit joined by a hyphen to the word: "2-ol", "propan-2", "1,2-di". */
+function isLocantHyphenated(text: string, start: number, end: number): boolean {
+  for (let i = start + 1; i < end; i++) {
+    if (text.charCodeAt(i) !== 0x2d) continue;
+    if (isDigit(text.charCodeAt(i - 1)) || isDigit(text.charCodeAt(i + 1))) return true;
+  }
+  return false;
+}
+
+/** A name (or the name an abbreviation stands for, `spoken`) read into the species it names. */
+function readName(text: string, start: number, end: number, spoken?: string): ReadResult {
   const written = text.slice(start, end);
-  const normalized = normalizeName(written);
+  const normalized = spoken ?? normalizeName(written);
   const match = matchName(normalized);
   if (match === undefined) {
     const suggestion = suggestName(normalized) ?? formulaSpelling(text, start, end);
     const message = `"${written}" is not a name or formula lonepair knows.`;
     return { ok: false, problem: problemAt("unknown-name", message, start, end, suggestion) };
   }
-  const reading = readFormulaSpan(match.formula, 0, match.formula.length, "name");
-  if (!reading.ok) {
+  const value = structureReading(match);
+  if (value === undefined) {
     return { ok: false, problem: problemAt("unknown-name", `"${written}" names nothing lonepair can read.`, start, end) };
   }
-  const value = reading.value;
-  const name = nameForFormula(value.formula, value.composition, value.writtenSequence, value.charge);
   // a rule-built name shows its preferred spelling ("dinitrogen tetraoxide" -> "dinitrogen tetroxide")
-  const preferred = withStockNumeralCase(match.listed ? match.name : (name ?? match.name));
+  const name = match.listed ? undefined : nameForFormula(value.formula, value.composition, value.writtenSequence, value.charge);
+  const preferred = withStockNumeralCase(name ?? match.name);
   return {
     ok: true,
     value: { ...value, text: written, range: { start, end }, name: preferred },
   };
+}
+
+/** The reading of what a name stands for: its formula read, or the composition of its SMILES. */
+function structureReading(match: NameMatch): SpeciesReading | undefined {
+  if (match.formula !== undefined) {
+    const reading = readFormulaSpan(match.formula, 0, match.formula.length, "name");
+    if (!reading.ok) return undefined;
+    return match.smiles === undefined ? reading.value : { ...reading.value, smiles: match.smiles };
+  }
+  const parsed = parseSmiles(match.smiles);
+  if (!parsed.ok) return undefined;
+  const counts = new Map<string, number>();
+  for (const atom of parsed.value.atoms) {
+    counts.set(atom.symbol, (counts.get(atom.symbol) ?? 0) + 1);
+    if (atom.hydrogens > 0) counts.set("H", (counts.get("H") ?? 0) + atom.hydrogens);
+  }
+  // Hill order: carbon, hydrogen, then the rest alphabetically
+  const symbols = [...counts.keys()].sort((a, b) => hillRank(a) - hillRank(b) || (a < b ? -1 : a > b ? 1 : 0));
+  const composition: FormulaPart[] = symbols.map((symbol) => ({ symbol, count: counts.get(symbol) as number }));
+  const charge = smilesNetCharge(parsed.value);
+  const formula = composition.map((part) => (part.count === 1 ? part.symbol : `${part.symbol}${part.count}`)).join("") + chargeText(charge);
+  return { text: match.name, range: { start: 0, end: match.name.length }, notation: "name", composition, writtenSequence: composition, charge, formula, smiles: match.smiles };
+}
+
+function hillRank(symbol: string): number {
+  return symbol === "C" ? 0 : symbol === "H" ? 1 : 2;
 }
 
 /** Names are matched lower-case; Stock numerals are shown upper-case: "iron(III) oxide". */

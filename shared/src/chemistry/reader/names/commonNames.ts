@@ -1,7 +1,8 @@
 /**
  * Everyday names of molecules that systematic binary naming does not give (or gives differently),
  * each with a formula the formula reader reads. Condensed formulas keep the written connectivity
- * so a structure builder can use it.
+ * so a structure builder can use it. Names whose structure needs a SMILES (rings, isomers) are in
+ * namedStructures.ts.
  */
 // Preferred name first where two names share a formula: the first is the one shown for the formula.
 export const COMMON_NAMES: readonly (readonly [name: string, formula: string])[] = [
@@ -15,10 +16,6 @@ export const COMMON_NAMES: readonly (readonly [name: string, formula: string])[]
   ["ethylene", "CH2=CH2"],
   ["ethyne", "HC≡CH"],
   ["acetylene", "HC≡CH"],
-  ["benzene", "C6H6"],
-  ["toluene", "C6H5CH3"],
-  ["phenol", "C6H5OH"],
-  ["cyclohexane", "C6H12"],
   ["methanol", "CH3OH"],
   ["ethanol", "CH3CH2OH"],
   ["dimethyl ether", "CH3OCH3"],
@@ -89,4 +86,10 @@ export const COMMON_NAMES: readonly (readonly [name: string, formula: string])[]
   ["perchloric acid", "HClO4"],
   ["chloric acid", "HClO3"],
   ["hypochlorous acid", "HOCl"],
+  ["hydrobromic acid", "HBr"],
+  ["hydroiodic acid", "HI"],
+  ["boric acid", "B(OH)3"],
+  ["chromic acid", "H2CrO4"],
+  ["stibine", "SbH3"],
+  ["bismuthine", "BiH3"],
 ];

@@ -11,6 +11,7 @@ import { NONMETALS } from "../nonmetals";
 import { anionRootByName, anionRootBySymbol } from "./anionRoots";
 import { joinPrefix, prefixFor, prefixReadings } from "./greekPrefixes";
 import { ionByName } from "./ionNames";
+import { assumedCationCharge, cationByOldName, metalCation, type MetalCation } from "./metalCations";
 
 const ROMAN_NUMERALS: readonly string[] = ["i", "ii", "iii", "iv", "v", "vi", "vii", "viii"];
 
@@ -23,26 +24,43 @@ interface NamedPart {
   /** Charge of the bare ion where the name fixes it. */
   readonly charge?: number;
   readonly element?: ElementData;
+  /** The cation in Stock form when the name wrote it otherwise ("ferric" -> "iron(iii)"). */
+  readonly stockWord?: string;
+}
+
+/** What a compound name stands for: a formula, and the systematic name when it differs. */
+export interface CompoundNameReading {
+  readonly formula: string;
+  /** The Stock name for an old or numeral-free salt name ("ferric chloride" -> "iron(iii) chloride"). */
+  readonly systematicName?: string;
 }
 
 /** Formula text for a compound name split into lower-case words, or undefined. */
-export function formulaForCompoundName(words: readonly string[]): string | undefined {
+export function formulaForCompoundName(words: readonly string[]): CompoundNameReading | undefined {
   if (words.length < 2) return undefined;
   const cation = readCationWord(words[0]);
   const anion = readAnionWords(words.slice(1));
   if (cation === undefined || anion === undefined) return undefined;
   const anionCharge = anion.charge as number;
+  const systematic = (formula: string | undefined, stockWord = cation.stockWord): CompoundNameReading | undefined => {
+    if (formula === undefined) return undefined;
+    return stockWord === undefined ? { formula } : { formula, systematicName: [stockWord, ...words.slice(1)].join(" ") };
+  };
 
   if (cation.prefixed || anion.prefixed) {
     if (!cation.singleElement || !anion.singleElement || cation.charge !== undefined) return undefined;
-    return part(cation.body, cation.count) + part(anion.body, anion.count);
+    return { formula: part(cation.body, cation.count) + part(anion.body, anion.count) };
   }
-  if (cation.charge !== undefined) return balanced(cation, cation.charge, anion, anionCharge);
+  if (cation.charge !== undefined) return systematic(balanced(cation, cation.charge, anion, anionCharge));
   const element = cation.element as ElementData;
-  if (element.symbol === "H" && anion.singleElement) return part("H", -anionCharge) + anion.body;
+  if (element.symbol === "H" && anion.singleElement) return { formula: part("H", -anionCharge) + anion.body };
   const usual = usualCationCharge(element);
-  if (usual !== undefined) return balanced(cation, usual, anion, anionCharge);
-  if (NONMETALS.has(element.symbol) && anion.singleElement) return cation.body + anion.body;
+  if (usual !== undefined) return systematic(balanced(cation, usual, anion, anionCharge));
+  if (NONMETALS.has(element.symbol) && anion.singleElement) return { formula: cation.body + anion.body };
+  const assumed = assumedCationCharge(element.symbol);
+  if (assumed !== undefined) {
+    return systematic(balanced(cation, assumed, anion, anionCharge), `${words[0]}(${ROMAN_NUMERALS[assumed - 1]})`);
+  }
   return undefined;
 }
 
@@ -81,7 +99,13 @@ function readCationWord(word: string): NamedPart | undefined {
     const element = elementByName(word.slice(0, open));
     const numeral = ROMAN_NUMERALS.indexOf(word.slice(open + 1, -1));
     if (element === undefined || numeral < 0) return undefined;
-    return { body: element.symbol, singleElement: true, count: 1, prefixed: false, charge: numeral + 1, element };
+    return cationPart(metalCation(element.symbol, numeral + 1));
+  }
+  const old = cationByOldName(word);
+  if (old !== undefined) {
+    const numeral = ROMAN_NUMERALS[(old.body === "Hg2" ? 1 : old.charge) - 1];
+    const named = cationPart(old);
+    return named && { ...named, stockWord: `${old.element.name}(${numeral})` };
   }
   for (const reading of prefixReadings(word)) {
     const element = elementByName(reading.rest);
@@ -90,6 +114,11 @@ function readCationWord(word: string): NamedPart | undefined {
     }
   }
   return undefined;
+}
+
+function cationPart(cation: MetalCation | undefined): NamedPart | undefined {
+  if (cation === undefined) return undefined;
+  return { body: cation.body, singleElement: cation.singleAtom, count: 1, prefixed: false, charge: cation.charge, element: cation.element };
 }
 
 function readAnionWords(words: readonly string[]): NamedPart | undefined {

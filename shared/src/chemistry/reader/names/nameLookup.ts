@@ -1,6 +1,7 @@
 /**
- * Name -> formula and formula -> name. Names are matched lower-case with single spaces; the
- * formulas behind listed names are read by the formula reader once, on first use.
+ * Name -> structure and formula -> name: the one vocabulary of names, used by the species reader,
+ * by prose spotting and by table columns alike. Names are matched lower-case with single spaces;
+ * the formulas behind listed names are read by the formula reader once, on first use.
  */
 import { elementByName } from "../../elements";
 import type { FormulaPart } from "../../types";
@@ -10,18 +11,22 @@ import { anionRootByName } from "./anionRoots";
 import { COMMON_NAMES } from "./commonNames";
 import { binaryCovalentName, formulaForCompoundName, usualCationCharge } from "./compoundNames";
 import { ION_NAMES, ionByName } from "./ionNames";
+import { NAMED_STRUCTURES, type NamedStructure } from "./namedStructures";
+import { smilesForOrganicName } from "./organicNames";
+import { NAME_SYNONYMS } from "./synonyms";
+import { GREEK_PREFIXES } from "./greekPrefixes";
 import { compareCodeUnits, sortSmall } from "../../sortSmall";
 
-/** A name that was understood, with the formula text it stands for. */
-export interface NameMatch {
-  readonly formula: string;
-  /** The name in its preferred lower-case spelling. */
-  readonly name: string;
-  /** True for listed names (common molecules and ions), false for names built by rule. */
-  readonly listed: boolean;
-}
+/**
+ * A name that was understood, with the structure it stands for: a formula the formula reader
+ * reads, a SMILES, or both (the formula is then what is shown, the SMILES what is analysed).
+ */
+export type NameMatch =
+  | { readonly formula: string; readonly smiles?: string; readonly name: string; readonly listed: boolean }
+  | { readonly formula?: undefined; readonly smiles: string; readonly name: string; readonly listed: boolean };
 
 const COMMON_BY_NAME = new Map(COMMON_NAMES.map(([name, formula]) => [name, formula]));
+const STRUCTURE_BY_NAME = new Map<string, NamedStructure>(NAMED_STRUCTURES.map((entry) => [entry.name, entry]));
 
 /** Lower-case, runs of whitespace to one space, no space before "(" (so "iron (III)" = "iron(iii)"). */
 export function normalizeName(text: string): string {
@@ -40,15 +45,19 @@ export function normalizeName(text: string): string {
   return result;
 }
 
-/** The formula a normalised name stands for, or undefined. */
-export function matchName(name: string): NameMatch | undefined {
+/** The structure a normalised name stands for, or undefined. */
+export function matchName(written: string): NameMatch | undefined {
+  // British and older spellings of sulfur: one vocabulary for both
+  const name = written.includes("sulph") ? written.replaceAll("sulph", "sulf") : written;
   const direct = listedOrRuleName(name);
   if (direct !== undefined) return direct;
+  const hydrate = hydrateName(name);
+  if (hydrate !== undefined) return hydrate;
   for (const suffix of [" ion", " anion", " cation"]) {
     if (!name.endsWith(suffix)) continue;
     const bare = name.slice(0, -suffix.length);
     const listed = listedOrRuleName(bare);
-    if (listed !== undefined && listed.formula.includes("^")) return listed;
+    if (listed?.formula?.includes("^")) return listed;
     const cation = monatomicCation(bare);
     if (cation !== undefined) return cation;
   }
@@ -56,14 +65,44 @@ export function matchName(name: string): NameMatch | undefined {
 }
 
 function listedOrRuleName(name: string): NameMatch | undefined {
+  const synonym = NAME_SYNONYMS.get(name);
+  if (synonym !== undefined) return listedOrRuleName(synonym) ?? hydrateName(synonym);
   const common = COMMON_BY_NAME.get(name);
   if (common !== undefined) return { formula: common, name, listed: true };
+  const structure = STRUCTURE_BY_NAME.get(name);
+  if (structure !== undefined) {
+    return structure.formula === undefined
+      ? { smiles: structure.smiles, name, listed: true }
+      : { formula: structure.formula, smiles: structure.smiles, name, listed: true };
+  }
   const ion = ionByName(name);
   if (ion !== undefined) return { formula: ion.body + chargeText(ion.charge), name, listed: true };
   const root = anionRootByName(name);
   if (root !== undefined) return { formula: root.symbol + chargeText(root.charge), name, listed: true };
-  const formula = formulaForCompoundName(name.split(" "));
-  return formula === undefined ? undefined : { formula, name, listed: false };
+  const compound = formulaForCompoundName(name.split(" "));
+  if (compound !== undefined) return { formula: compound.formula, name: compound.systematicName ?? name, listed: false };
+  const smiles = smilesForOrganicName(name);
+  return smiles === undefined ? undefined : { smiles, name, listed: true };
+}
+
+/** "monohydrate" 1 ... "decahydrate" 10. */
+const HYDRATE_COUNTS = new Map(GREEK_PREFIXES.map((prefix, index) => [`${prefix}hydrate`, index + 1]));
+
+/** "copper(ii) sulfate pentahydrate" -> CuSO4·5H2O. */
+function hydrateName(name: string): NameMatch | undefined {
+  const space = name.lastIndexOf(" ");
+  if (space < 0) return undefined;
+  const count = HYDRATE_COUNTS.get(name.slice(space + 1));
+  if (count === undefined) return undefined;
+  const salt = listedOrRuleName(name.slice(0, space));
+  if (salt === undefined || salt.formula === undefined || salt.smiles !== undefined || salt.formula.includes("^")) return undefined;
+  const water = count === 1 ? "H2O" : `${count}H2O`;
+  return { formula: `${salt.formula}·${water}`, name: `${salt.name}${name.slice(space)}`, listed: salt.listed };
+}
+
+/** The SMILES of the structure a listed name means, where the vocabulary keeps one. */
+export function smilesForName(name: string): string | undefined {
+  return STRUCTURE_BY_NAME.get(name)?.smiles;
 }
 
 /** "sodium ion" -> Na^+, "iron(iii) ion" -> Fe^3+. */
@@ -81,9 +120,9 @@ function monatomicCation(name: string): NameMatch | undefined {
   return { formula: element.symbol + chargeText(charge), name: `${name} ion`, listed: false };
 }
 
-/** Every listed name, for spelling suggestions. */
+/** Every listed name and synonym, for spelling suggestions and for spotting names in prose. */
 export function listedNames(): readonly string[] {
-  return [...COMMON_BY_NAME.keys(), ...ION_NAMES.map((ion) => ion.name)];
+  return [...COMMON_BY_NAME.keys(), ...STRUCTURE_BY_NAME.keys(), ...ION_NAMES.map((ion) => ion.name), ...NAME_SYNONYMS.keys()];
 }
 
 interface NameIndex {
@@ -99,15 +138,18 @@ function nameIndex(): NameIndex {
   const byFormula = new Map<string, string>();
   const byComposition = new Map<string, string | null>();
   const formulaOfComposition = new Map<string, string>();
-  const entries: [string, string][] = [
-    ...COMMON_NAMES.map(([name, formula]): [string, string] => [name, formula]),
-    ...ION_NAMES.map((ion): [string, string] => [ion.name, ion.body + chargeText(ion.charge)]),
+  const entries: [string, string, boolean][] = [
+    ...COMMON_NAMES.map(([name, formula]): [string, string, boolean] => [name, formula, true]),
+    ...ION_NAMES.map((ion): [string, string, boolean] => [ion.name, ion.body + chargeText(ion.charge), true]),
+    // a structure with isomers names only its own written formula, never every formula of its composition
+    ...NAMED_STRUCTURES.flatMap((entry): [string, string, boolean][] => (entry.formula === undefined ? [] : [[entry.name, entry.formula, false]])),
   ];
-  for (const [name, formulaText] of entries) {
+  for (const [name, formulaText, byParts] of entries) {
     const reading = readFormulaSpan(formulaText, 0, formulaText.length, "formula");
     if (!reading.ok) continue;
     const { formula, composition, charge } = reading.value;
     if (!byFormula.has(formula)) byFormula.set(formula, name);
+    if (!byParts) continue;
     const key = compositionKey(composition, charge);
     const seen = formulaOfComposition.get(key);
     if (seen === undefined) {
