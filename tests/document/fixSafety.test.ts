@@ -26,11 +26,10 @@ describe("which fixes are offered", () => {
     // common practice: CDCl3 is deuterated chloroform, D the deuterium symbol; Ph is phenyl
     ["deuterated and phenyl formulas in prose", "Spectra in CDCl3; the toluene (PhCH3) wash.", "markdown", []],
     ["deuterated solvent in a formula column", "formula,name\nCDCl3,chloroform-d\n", "csv", [["information", "CDCl3", "-"]]],
-    // common practice: tBu is tert-butyl, Et ethyl, Me methyl
+    // common practice: tBu is tert-butyl, Et ethyl, Me methyl; Et2O (diethyl ether) and MeCN
+    // (acetonitrile) are abbreviations the name vocabulary knows, so they are species, not notes
     ["group abbreviations in a species column", "species\ntBuOH\nEt2O\nMeCN\nPhCH3\n", "csv", [
       ["information", "tBuOH", "-"],
-      ["information", "Et2O", "-"],
-      ["information", "MeCN", "-"],
       ["information", "PhCH3", "-"],
     ]],
     // common practice: limonene and krypton are words, not symbol strings to re-case
