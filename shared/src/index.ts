@@ -50,6 +50,8 @@ export type { HoverFormat } from "./report/hoverMarkdown";
 export { shapeViewModel } from "./report/shapeViewModel";
 export type { ShapeViewModel } from "./report/shapeViewModel";
 export { coordinateFileOf, shapeViewModelOf } from "./report/speciesModel";
+export { geometryHints, geometryLabel, isProseKind } from "./report/geometryHints";
+export type { GeometryHint } from "./report/geometryHints";
 export type { CoordinateFile, CoordinateFileResult, CoordinateFormat } from "./report/speciesModel";
 export { SUMMARY_COLUMNS, createSummaryCollector, isSummaryColumn, summaryTable } from "./report/summaryTable";
 export type { SummaryCollector, SummaryColumn, SummaryFormat, UnanalysedSpecies } from "./report/summaryTable";
