@@ -97,7 +97,7 @@ describe("hover", () => {
     expect(text.length).toBeLessThan(100_000);
   });
 
-  it("explains a species it cannot analyse, with the caution // common practice: carbon makes at most four bonds", async () => {
+  it("points to the problem of a species it cannot analyse instead of repeating it // common practice: carbon makes at most four bonds", async () => {
     const document = opened.get(MARKDOWN)!;
     const result = await session.connection.sendRequest(HoverRequest.type, {
       textDocument: { uri: MARKDOWN },
@@ -105,8 +105,11 @@ describe("hover", () => {
     });
     const text = hoverText(result);
     expect(text).toContain("not analysed");
-    expect(text).toContain("carbon");
+    expect(text).toContain("the reason is the problem reported on this text");
     expect(text).toContain(CAUTION);
+    const reported = diagnosticAt(MARKDOWN, "CH5", "A trainee wrote CH5");
+    expect(reported?.message).toContain("carbon");
+    expect(text).not.toContain(String(reported?.message));
   });
 
   it("answers null away from any species", async () => {

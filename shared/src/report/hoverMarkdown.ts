@@ -102,10 +102,20 @@ export function hoverMarkdown(analysis: SpeciesAnalysis, options: HoverMarkdownO
   return `${kept}${markup.emphasis(HOVER_CAUTION)}`;
 }
 
+/** How a refusal's card is shown. */
+export interface ProblemCardOptions {
+  /**
+   * The same sentence is already a problem on this text, which the editor shows beside the card:
+   * the card then says where to look instead of repeating it.
+   */
+  readonly alsoAProblem?: boolean;
+}
+
 /** Builds a short card for text that names no species lonepair can analyse. */
-export function problemMarkdown(text: string, message: string, format?: HoverFormat): string {
+export function problemMarkdown(text: string, message: string, format?: HoverFormat, options: ProblemCardOptions = {}): string {
   const markup = markupFor(format);
-  return [`${markup.strong(markup.text(text))}: not analysed`, "", markup.text(message), "", markup.emphasis(HOVER_CAUTION)].join("\n");
+  const reason = options.alsoAProblem ? "the reason is the problem reported on this text" : message;
+  return [`${markup.strong(markup.text(text))}: not analysed`, "", markup.text(reason), "", markup.emphasis(HOVER_CAUTION)].join("\n");
 }
 
 function titleLine(analysis: SpeciesAnalysis, markup: Markup): string {

@@ -2,7 +2,8 @@
  * Hover: the species under the cursor, found among the model's occurrences, shown as a card.
  */
 import { MarkupKind, type Hover, type HoverParams } from "vscode-languageserver";
-import { analyzeOccurrenceSafely, hoverMarkdown, occurrenceAt, problemMarkdown } from "../../../../shared/src/index";
+import { hoverMarkdown, problemMarkdown, speciesAtOffset } from "../../../../shared/src/index";
+import type { Finding, TextRange } from "../core";
 import { guarded } from "../guardedHandler";
 import { lspRange } from "../ranges";
 import { enabledDocument, type ServerContext } from "../serverContext";
@@ -14,18 +15,23 @@ export function registerHover(context: ServerContext): void {
       const enabled = await enabledDocument(context, params.textDocument.uri);
       if (!enabled) return null;
       const { document, analysed, settings } = enabled;
-      const occurrence = occurrenceAt(analysed.model.occurrences, document.offsetAt(params.position));
-      if (!occurrence) return null;
-      const result = analyzeOccurrenceSafely(occurrence);
+      const species = speciesAtOffset(analysed.model, document.offsetAt(params.position));
+      if (!species) return null;
+      const result = species.analysis;
       // The card is written in the format the client asked for, not merely labelled with it.
       const format = context.clientFeatures().hoverFormat;
       const value = result.ok
         ? hoverMarkdown(result.value, { angleDecimals: settings.angleDecimals, format })
-        : problemMarkdown(occurrence.text, result.problem.message, format);
+        : problemMarkdown(species.text, result.problem.message, format, { alsoAProblem: isReported(analysed.findings(), species.range, result.problem.message) });
       return {
         contents: { kind: format === "markdown" ? MarkupKind.Markdown : MarkupKind.PlainText, value },
-        range: lspRange(document, occurrence.range),
+        range: lspRange(document, species.range),
       };
     }),
   );
+}
+
+/** Whether the editor already shows `message` as a problem on `range` (the hover then need not repeat it). */
+function isReported(findings: readonly Finding[], range: TextRange, message: string): boolean {
+  return findings.some((finding) => finding.range.start === range.start && finding.range.end === range.end && finding.message.includes(message));
 }
