@@ -6,7 +6,7 @@ export * from "./chemistry/types";
 export { ELEMENTS, elementBySymbol, elementByName } from "./chemistry/elements";
 export { readSpecies } from "./chemistry/reader/readSpecies";
 export { listedNames as knownSpeciesNames } from "./chemistry/reader/names/nameLookup";
-export { analyzeSpecies, analyzeReading, analyzeSmiles } from "./chemistry/analyze";
+export { analyzeSpecies, analyzeReading, analyzeSmiles, analyzeTyped, SMILES_MARKER } from "./chemistry/analyze";
 export { parseSmiles, kekulize, writeSmiles, smilesFormula, smilesNetCharge } from "./chemistry/smiles";
 export type { SmilesAtom, SmilesBond, SmilesMolecule, SmilesResult } from "./chemistry/smiles";
 export { findPointGroup } from "./chemistry/symmetry/pointGroup";

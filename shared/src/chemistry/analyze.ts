@@ -170,3 +170,16 @@ function outOfScope(reading: SpeciesReading): Problem | undefined {
   }
   return undefined;
 }
+
+/** The marker that makes text a SMILES string, in documents (`` `smiles:CCO` ``) and as an argument alike. */
+export const SMILES_MARKER = "smiles:";
+
+/**
+ * Analyse one species as a person types it anywhere outside a document: `smiles:` and a SMILES
+ * string, or anything the species reader takes (formula, mhchem, name). Never throws.
+ */
+export function analyzeTyped(text: string): AnalysisResult {
+  const trimmed = text.trim();
+  if (trimmed.slice(0, SMILES_MARKER.length).toLowerCase() === SMILES_MARKER) return analyzeSmiles(trimmed.slice(SMILES_MARKER.length).trim());
+  return analyzeSpecies(text);
+}

@@ -2,12 +2,13 @@
  * SMILES in documents: an inline code span marked `smiles:` (`` `smiles:C1=CC=CC=C1` ``). The span
  * becomes an occurrence whose reading has notation "smiles" and the composition the SMILES spells.
  */
+import { SMILES_MARKER } from "../chemistry/analyze";
 import type { FormulaPart, SpeciesReading } from "../chemistry/types";
 import { parseSmiles } from "../chemistry/smiles/parseSmiles";
 import type { SmilesMolecule } from "../chemistry/smiles/types";
 import type { SpeciesOccurrence, UnreadableSpecies } from "./types";
 
-const PREFIX = "smiles:";
+const PREFIX = SMILES_MARKER;
 
 /** Longer code spans are not one species typed into a note. */
 const MAX_SMILES = 1000;

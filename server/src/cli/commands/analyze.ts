@@ -5,7 +5,7 @@
  * not, 2 on a usage error.
  */
 import { parseArgs } from "node:util";
-import { analyzeSmiles, analyzeSpecies } from "../../../../shared/src/index";
+import { analyzeSmiles, analyzeTyped } from "../../../../shared/src/index";
 import { formatAnalysisCard } from "../../../../shared/src/index";
 import { toAnalysisJson } from "../../../../shared/src/index";
 import type { CliCommand, CliIo } from "../cliCommand";
@@ -15,9 +15,10 @@ import { cardStyle } from "../terminalStyle";
 const HELP = `Usage: lonepair analyze [--json] [--smiles] <species...>
 
 Works out the Lewis structure and VSEPR shape of each species: a formula (SF4, NH4+,
-SO4^2-), a condensed structural formula (CH3COOH), an mhchem span (\\ce{XeF4}) or a
-name ("sulfur tetrafluoride"). Quote names and anything your shell might expand. Each
-argument is one species.
+SO4^2-), a condensed structural formula (CH3COOH), an mhchem span (\\ce{XeF4}), a
+name ("sulfur tetrafluoride") or a SMILES string after the marker smiles:
+('smiles:F/C=C\\F'). Quote names and anything your shell might expand. Each argument is one
+species.
 
 Options:
   --json    print a JSON array, one object per species, instead of text cards
@@ -59,7 +60,7 @@ function runAnalyze(args: readonly string[], io: CliIo): number {
   }
 
   // A SMILES string such as "CO" or "NO" is also a formula, so the reader is told, never left to guess.
-  const analyze = parsed.values.smiles ? analyzeSmiles : analyzeSpecies;
+  const analyze = parsed.values.smiles ? analyzeSmiles : analyzeTyped;
   const results = speciesTexts.map((text) => ({ text, result: analyze(text) }));
   const failures = results.filter(({ result }) => !result.ok).length;
 

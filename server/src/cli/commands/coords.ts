@@ -5,7 +5,7 @@
  */
 import { writeFileSync } from "node:fs";
 import { parseArgs } from "node:util";
-import { analyzeSpecies, coordinateFileOf, shapeOf } from "../../../../shared/src/index";
+import { analyzeTyped, coordinateFileOf, shapeOf } from "../../../../shared/src/index";
 import type { CliCommand, CliIo } from "../cliCommand";
 import { EXIT_FAILURE, EXIT_OK, EXIT_USAGE } from "../cliCommand";
 
@@ -19,8 +19,9 @@ const CAUTION =
 const HELP = `Usage: lonepair coords [--format xyz|mol] [--output FILE] <species>
 
 Builds model 3D coordinates for one species (a formula such as SF4 or "NH4+", an mhchem
-span, or a name) from its Lewis structure: ideal VSEPR angles at every atom and bond
-lengths from covalent radii. Hydrogens are explicit atoms.
+span, a name, or a SMILES string after the marker smiles:, which keeps cis/trans) from its
+Lewis structure: ideal VSEPR angles at every atom and bond lengths from covalent radii.
+Hydrogens are explicit atoms.
 
 Options:
   --format xyz|mol  XYZ (default) or MDL molfile V2000 with bonds and formal charges
@@ -66,7 +67,7 @@ function runCoords(args: readonly string[], io: CliIo): number {
   if (output !== undefined && output.trim() === "") return usage(io, "--output needs a file name.");
 
   const [speciesText] = parsed.positionals;
-  const result = analyzeSpecies(speciesText);
+  const result = analyzeTyped(speciesText);
   if (!result.ok) {
     io.writeError(`lonepair coords: ${speciesText}: ${result.problem.message}\n`);
     return EXIT_FAILURE;

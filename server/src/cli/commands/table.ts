@@ -6,7 +6,7 @@
  */
 import { statSync } from "node:fs";
 import { parseArgs } from "node:util";
-import { MODEL_CAUTION, analyzeSpecies, createSummaryCollector, summaryTable } from "../../../../shared/src/index";
+import { MODEL_CAUTION, analyzeTyped, createSummaryCollector, summaryTable } from "../../../../shared/src/index";
 import type { CliCommand, CliIo } from "../cliCommand";
 import { EXIT_FAILURE, EXIT_OK, EXIT_USAGE } from "../cliCommand";
 import { speciesInFile } from "../documents/documentSpecies";
@@ -56,7 +56,7 @@ async function runTable(args: readonly string[], io: CliIo): Promise<number> {
   let failed = false;
   for (const argument of parsed.positionals) {
     if (!isOnDisk(argument)) {
-      collected.addResult(argument, analyzeSpecies(argument));
+      collected.addResult(argument, analyzeTyped(argument));
       continue;
     }
     const found = findDocuments([argument]);
