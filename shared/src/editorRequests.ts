@@ -41,6 +41,7 @@ export interface SummaryTableResult {
 /** `lonepair/speciesAt`: the species mention covering a position in an open document, or null. */
 export const SPECIES_AT_METHOD = "lonepair/speciesAt";
 
+/** The document may also be named as `textDocument: { uri }`, as the protocol's own requests do. */
 export interface SpeciesAtParams {
   readonly uri: string;
   readonly position: EditorPosition;

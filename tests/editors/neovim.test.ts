@@ -44,6 +44,7 @@ interface NeovimReport {
     readonly text?: string;
     readonly error?: string;
   }[];
+  readonly coordinates?: { readonly word: string; readonly text?: string; readonly extension?: string; readonly error?: string };
 }
 
 interface NeovimRun {
@@ -132,7 +133,7 @@ describe.skipIf(!haveNeovim && !inCi)(title, () => {
 
   it("runs every step of the script and exits cleanly", () => {
     expect(report.error, `script failed after steps ${report.steps.join(", ")}`).toBeUndefined();
-    expect(report.steps).toEqual(["opened", "started", "initialized", "diagnostics", "hovers", "stopped"]);
+    expect(report.steps).toEqual(["opened", "started", "initialized", "diagnostics", "hovers", "coordinates", "stopped"]);
     expect(run.exitCode).toBe(0);
     // The markdown file type is what Neovim sends as the languageId.
     expect(report.filetype).toBe("markdown");
@@ -174,5 +175,14 @@ describe.skipIf(!haveNeovim && !inCi)(title, () => {
     expect(hover?.position).toEqual({ line: where.line, character: where.utf16Column });
     for (const word of expectedWords) expect(hover?.text).toContain(word);
     expect(hover?.text).toContain("Model prediction, not measured data");
+  });
+
+  it("exports coordinates of the species under the cursor with the custom request, as the README shows", () => {
+    expect(report.coordinates?.error).toBeUndefined();
+    expect(report.coordinates?.extension).toBe("xyz");
+    const lines = report.coordinates?.text?.trim().split("\n") ?? [];
+    // common practice: SF4 is one S and four F atoms; XYZ starts with the atom count.
+    expect(lines[0]).toBe("5");
+    expect(lines.slice(2).map((line) => line.trim().split(/\s+/)[0]).sort()).toEqual(["F", "F", "F", "F", "S"]);
   });
 });

@@ -96,6 +96,28 @@ local function hover_on(client, bufnr, word)
   return entry
 end
 
+-- The custom request an editor sends to export coordinates: position parameters as Neovim
+-- builds them, plus the format (the README's example does the same).
+local function coordinates_of(client, bufnr, word)
+  vim.api.nvim_win_set_cursor(0, { 1, 0 })
+  local found = vim.fn.searchpos("\\V\\C\\<" .. word .. "\\>", "cW")
+  if found[1] == 0 then
+    return { word = word, found = false }
+  end
+  vim.api.nvim_win_set_cursor(0, { found[1], found[2] - 1 })
+  local params = vim.lsp.util.make_position_params(0, client.offset_encoding)
+  params.format = "xyz"
+  local response, err = client.request_sync("lonepair/coordinates", params, timeout_ms, bufnr)
+  if response == nil then
+    return { word = word, error = tostring(err) }
+  elseif response.err ~= nil then
+    return { word = word, error = vim.inspect(response.err) }
+  elseif response.result == nil or response.result == vim.NIL or response.result.file == nil then
+    return { word = word, text = "" }
+  end
+  return { word = word, text = response.result.file.text, extension = response.result.file.extension }
+end
+
 local function run()
   assert(server_path and document_path and result_path, "LONEPAIR_SERVER, LONEPAIR_DOCUMENT and LONEPAIR_RESULT must be set")
   -- -u NONE / --clean leave file type detection off; the file type becomes the LSP languageId.
@@ -137,6 +159,11 @@ local function run()
     table.insert(report.hovers, hover_on(client, bufnr, word))
   end
   step("hovers")
+
+  if #hover_words > 0 then
+    report.coordinates = coordinates_of(client, bufnr, hover_words[1])
+  end
+  step("coordinates")
 
   client.stop()
   report.stopped = vim.wait(timeout_ms, function()

@@ -19,7 +19,6 @@ import {
   type CheckTextResult,
   type CoordinatesParams,
   type CoordinatesResult,
-  type DocumentSummaryParams,
   type DocumentSummaryResult,
   type EditorPosition,
   type ShapeModelResult,
@@ -70,8 +69,8 @@ export function registerSpeciesRequests(context: ServerContext): void {
   connection.onRequest(
     DOCUMENT_SUMMARY_METHOD,
     guarded<unknown, DocumentSummaryResult | null>(log, "document summary", null, async (params) => {
-      const uri = (params as Partial<DocumentSummaryParams> | null)?.uri;
-      if (typeof uri !== "string") return null;
+      const uri = documentUri(params);
+      if (uri === undefined) return null;
       const enabled = await enabledDocument(context, uri);
       if (!enabled) return null;
       const { analysed } = enabled;
@@ -92,8 +91,9 @@ export function registerSpeciesRequests(context: ServerContext): void {
 /** The open document and the species at the asked position, or undefined. */
 async function speciesAt(context: ServerContext, params: unknown): Promise<{ document: TextDocument; species: SpeciesAtOffset } | undefined> {
   const candidate = params as Partial<SpeciesAtParams> | null;
-  if (typeof candidate?.uri !== "string" || !isPosition(candidate.position)) return undefined;
-  const enabled = await enabledDocument(context, candidate.uri);
+  const uri = documentUri(params);
+  if (uri === undefined || !isPosition(candidate?.position)) return undefined;
+  const enabled = await enabledDocument(context, uri);
   if (!enabled) return undefined;
   const species = speciesAtOffset(enabled.analysed.model, enabled.document.offsetAt(candidate.position));
   return species ? { document: enabled.document, species } : undefined;
@@ -118,6 +118,16 @@ async function checkText(context: ServerContext, params: unknown): Promise<Check
   const document = TextDocument.create(candidate.uri, languageId, 0, candidate.text);
   const diagnostics = diagnosticsOf(document, analyseDocument(document, kind, 0).findings());
   return { diagnostics: diagnostics.map((diagnostic) => ({ ...diagnostic, message: String(diagnostic.message) })) };
+}
+
+/**
+ * The document a request names: `uri`, or `textDocument.uri` as in the protocol's own position
+ * parameters (what editors' helpers such as Neovim's `make_position_params` build).
+ */
+function documentUri(params: unknown): string | undefined {
+  const candidate = params as { uri?: unknown; textDocument?: { uri?: unknown } } | null;
+  if (typeof candidate?.uri === "string") return candidate.uri;
+  return typeof candidate?.textDocument?.uri === "string" ? candidate.textDocument.uri : undefined;
 }
 
 function isPosition(value: unknown): value is EditorPosition {
