@@ -27,29 +27,84 @@ const OPERATOR = /^(?:\+|-|=|->|<-|<=>|<->|<=>>|<<=>|<-->|\^|v|&|\\\\|\$.*\$|->\
 const COEFFICIENT = /^(?:\d+(?:\/\d+)?|\d*\.\d+)/;
 const STATE = /\((?:g|l|s|aq|cr)\)$/;
 
+/** An mhchem arrow that may carry text above and below it: "->[H2O]", "<=>[k_1][k_{-1}]". */
+const LABELLED_ARROW = /(?:<=>>|<<=>|<=>|<-->|<->|->|<-|<=>)(?=\[)/y;
+
+/** A piece of an mhchem body, and whether it sits in an arrow's label (text, not only species). */
+export interface MhchemPiece extends TextRange {
+  readonly inLabel: boolean;
+}
+
 /**
  * The species pieces of the body `text[start, end)`, as document ranges. A piece is a
  * whitespace-separated word that is not an operator, with a leading coefficient and a trailing
- * state symbol left out.
+ * state symbol left out. Text in braces ("{heat}") and math in dollars are not species; the
+ * labels of an arrow ("->[H2O]") are read too.
  */
-export function mhchemPieces(text: string, start: number, end: number): TextRange[] {
-  const pieces: TextRange[] = [];
-  const body = text.slice(start, end);
-  const word = /\S+/g;
-  for (let match = word.exec(body); match; match = word.exec(body)) {
-    let piece = match[0];
-    let pieceStart = start + match.index;
-    if (OPERATOR.test(piece) || /^\d+(?:\/\d+)?$/.test(piece)) continue;
-    const coefficient = COEFFICIENT.exec(piece);
-    if (coefficient && /^[A-Z(\[]/.test(piece.slice(coefficient[0].length))) {
-      pieceStart += coefficient[0].length;
-      piece = piece.slice(coefficient[0].length);
+export function mhchemPieces(text: string, start: number, end: number, inLabel = false): MhchemPiece[] {
+  const pieces: MhchemPiece[] = [];
+  let index = start;
+  while (index < end) {
+    const code = text.charCodeAt(index);
+    if (code === 0x20 || code === 0x0a || code === 0x09 || code === 0x0d) {
+      index++;
+      continue;
     }
-    const state = STATE.exec(piece);
-    if (state) piece = piece.slice(0, piece.length - state[0].length);
-    if (piece.length > 0) pieces.push({ start: pieceStart, end: pieceStart + piece.length });
+    if (code === 0x7b) {
+      index = closingIndex(text, index, end, 0x7b, 0x7d) + 1;
+      continue;
+    }
+    if (code === 0x24) {
+      const close = text.indexOf("$", index + 1);
+      index = close < 0 || close >= end ? end : close + 1;
+      continue;
+    }
+    LABELLED_ARROW.lastIndex = index;
+    const arrow = LABELLED_ARROW.exec(text);
+    if (arrow && LABELLED_ARROW.lastIndex <= end) {
+      index = LABELLED_ARROW.lastIndex;
+      while (index < end && text.charCodeAt(index) === 0x5b) {
+        const close = closingIndex(text, index, end, 0x5b, 0x5d);
+        pieces.push(...mhchemPieces(text, index + 1, Math.min(close, end), true));
+        index = close + 1;
+      }
+      continue;
+    }
+    let wordEnd = index;
+    while (wordEnd < end && !/\s/.test(text[wordEnd])) wordEnd++;
+    const piece = pieceOf(text, index, wordEnd, inLabel);
+    if (piece) pieces.push(piece);
+    index = wordEnd;
   }
   return pieces;
+}
+
+/** The bracket closing the one at `open` (depth counted), or `end` when it does not close. */
+function closingIndex(text: string, open: number, end: number, opener: number, closer: number): number {
+  let depth = 0;
+  for (let index = open; index < end; index++) {
+    const code = text.charCodeAt(index);
+    if (code === opener) depth++;
+    else if (code === closer && --depth === 0) return index;
+  }
+  return end;
+}
+
+/** The species part of the word `text[start, end)`, or undefined for an operator or a number. */
+function pieceOf(text: string, start: number, end: number, inLabel: boolean): MhchemPiece | undefined {
+  let piece = text.slice(start, end);
+  let pieceStart = start;
+  // A label is often a short note: "H2O, heat".
+  if (inLabel) piece = piece.replace(/[,;]+$/, "");
+  if (OPERATOR.test(piece) || /^\d+(?:\/\d+)?$/.test(piece)) return undefined;
+  const coefficient = COEFFICIENT.exec(piece);
+  if (coefficient && /^[A-Z(\[]/.test(piece.slice(coefficient[0].length))) {
+    pieceStart += coefficient[0].length;
+    piece = piece.slice(coefficient[0].length);
+  }
+  const state = STATE.exec(piece);
+  if (state) piece = piece.slice(0, piece.length - state[0].length);
+  return piece.length > 0 ? { start: pieceStart, end: pieceStart + piece.length, inLabel } : undefined;
 }
 
 /**
@@ -57,11 +112,17 @@ export function mhchemPieces(text: string, start: number, end: number): TextRang
  * chemistry by the writer's own say-so, so a formula-shaped piece that does not read is reported.
  */
 export function scanMhchemBody(text: string, start: number, end: number, read: SpeciesReader, sink: ScanSink): void {
-  for (const piece of mhchemPieces(text, start, end)) {
+  const pieces = mhchemPieces(text, start, end);
+  // "\ce{A ->[H2O] B}": a lone capital that is no element makes the equation a scheme, whose
+  // lone capitals (B too) stand for any species.
+  const schematic = pieces.some((piece) => piece.end - piece.start === 1 && !read(text[piece.start]).ok);
+  for (const piece of pieces) {
     const pieceText = text.slice(piece.start, piece.end);
+    if (pieceText.length === 1 && (schematic || !read(pieceText).ok)) continue;
     const result = read(pieceText);
     if (result.ok) sink.occurrences.push(occurrenceAt(result.value, pieceText, piece.start, "mhchem"));
-    else if (/^[A-Z(\[]/.test(pieceText) && result.problem.code !== "unknown-name") {
+    // A label may be any note ("Pt gauze"); only what is written as a species outside one is a mistake.
+    else if (!piece.inLabel && /^[A-Z(\[]/.test(pieceText) && result.problem.code !== "unknown-name") {
       sink.unreadable.push(unreadableAt(pieceText, piece.start, result));
     }
   }

@@ -4,7 +4,10 @@
  * Precision comes first: a token counts only when its shape and context leave no doubt, and the
  * species reader has the last word on every candidate.
  */
+import { htmlScriptEnd, withUnicodeScripts } from "../chemistry/reader/htmlScripts";
+import { isGluedCoefficient, isLoneReactant } from "./equationContext";
 import { isSafeSpellingFix } from "./fixPolicy";
+import { latexMathSpan, scanLatexMath, type MathSpan } from "./latexMathSpan";
 import { mhchemSpanEnd, scanMhchemBody } from "./mhchemSpan";
 import { isPartOfCode, isWordContext } from "./proseContext";
 import { isConfidentToken, needsCalmContext, shapeOf } from "./proseTokenRules";
@@ -68,6 +71,13 @@ export function scanProse(text: string, start: number, end: number, sink: ScanSi
       index = mhchemSpan(scan, index);
       continue;
     }
+    if (code === 0x24 || (code === 0x5c && (text.charCodeAt(index + 1) === 0x28 || text.charCodeAt(index + 1) === 0x5b))) {
+      const math = latexMathSpan(text, index, end);
+      if (math) {
+        index = mathSpan(scan, math);
+        continue;
+      }
+    }
     if (code === 0x3c && text.startsWith("<!--", index)) {
       // An unclosed comment hides the rest of the text.
       const close = text.indexOf("-->", index + 4);
@@ -79,6 +89,8 @@ export function scanProse(text: string, start: number, end: number, sink: ScanSi
     while (chunkEnd < end) {
       const next = text.charCodeAt(chunkEnd);
       if (isSpaceCode(next) || next === 0x60 || (next === 0x5c && text.startsWith("\\ce{", chunkEnd))) break;
+      // Math may open right after a bracket or quote: "($H_2O$)".
+      if (next === 0x24 && isLeadingPunctuation(text.charCodeAt(chunkEnd - 1))) break;
       chunkEnd++;
     }
     scanChunk(scan, index, chunkEnd);
@@ -127,6 +139,17 @@ function mhchemSpan(scan: ProseScan, open: number): number {
   if (spanEnd < 0) return open + 4;
   scanMhchemBody(text, open + 4, spanEnd - 1, scan.read, scan.sink);
   return spanEnd;
+}
+
+/** A LaTeX math span: species typed in math, or prose around a nested `\ce{...}`. */
+function mathSpan(scan: ProseScan, math: MathSpan): number {
+  scan.previousWord = undefined;
+  if (scan.text.slice(math.contentStart, math.contentEnd).includes("\\ce{")) {
+    scanProse(scan.text, math.contentStart, math.contentEnd, scan.sink, scan.read);
+  } else {
+    scanLatexMath(scan.text, math.contentStart, math.contentEnd, scan.read, scan.sink);
+  }
+  return math.end;
 }
 
 const URL_OR_MAIL = /:\/\/|^[<(\["']*www\.|[A-Za-z0-9._%+-]@[A-Za-z0-9-]+\.[A-Za-z]/;
@@ -216,12 +239,27 @@ function scanFormulas(scan: ProseScan, start: number, end: number): void {
   while (index < end) {
     const code = text.charCodeAt(index);
     const startsToken = isUpper(code) || code === 0x28 || code === 0x5b;
-    if (!startsToken || isWordCharacter(text.charCodeAt(index - 1))) {
+    if (!startsToken || (isWordCharacter(text.charCodeAt(index - 1)) && !afterCoefficient(text, start, index))) {
       index++;
       continue;
     }
     index = formulaToken(scan, index, end);
   }
+}
+
+/** "2H2O" at the start of a chunk, on an equation line: the formula starts after the digits. */
+function afterCoefficient(text: string, chunkStart: number, index: number): boolean {
+  if (!isUpper(text.charCodeAt(index))) return false;
+  let digitsStart = index;
+  while (digitsStart > chunkStart && isDigitCode(text.charCodeAt(digitsStart - 1))) digitsStart--;
+  if (digitsStart === index) return false;
+  // Only brackets or quotes may come before the coefficient inside the chunk.
+  for (let at = chunkStart; at < digitsStart; at++) if (!isLeadingPunctuation(text.charCodeAt(at))) return false;
+  return isGluedCoefficient(text, digitsStart, index);
+}
+
+function isDigitCode(code: number): boolean {
+  return code >= 0x30 && code <= 0x39;
 }
 
 function isUpper(code: number): boolean {
@@ -252,10 +290,27 @@ function isSign(code: number): boolean {
 function formulaToken(scan: ProseScan, start: number, end: number): number {
   const { text } = scan;
   let bodyEnd = start;
-  while (bodyEnd < end && isBodyCharacter(text.charCodeAt(bodyEnd))) bodyEnd++;
+  // HTML counts and charges: "Al<sub>2</sub>(CO<sub>3</sub>)<sub>3</sub>", "SO<sub>4</sub><sup>2−</sup>".
+  let html = false;
+  for (;;) {
+    while (bodyEnd < end && isBodyCharacter(text.charCodeAt(bodyEnd))) bodyEnd++;
+    const subscriptEnd = text.startsWith("<sub>", bodyEnd) ? htmlScriptEnd(text, bodyEnd, end) : -1;
+    if (subscriptEnd < 0) break;
+    bodyEnd = subscriptEnd;
+    html = true;
+  }
+  // "NaCl(aq)": the state symbol follows the species, it is not part of it.
+  const state = stateSymbolBefore(text, start, bodyEnd);
+  if (state > 0) bodyEnd -= state;
   let tokenEnd = bodyEnd;
-  while (tokenEnd < end && isSuperscript(text.charCodeAt(tokenEnd))) tokenEnd++;
-  if (tokenEnd === bodyEnd) tokenEnd = chargeEnd(text, bodyEnd, end);
+  const superscriptEnd = text.startsWith("<sup>", bodyEnd) ? htmlScriptEnd(text, bodyEnd, end) : -1;
+  if (superscriptEnd > 0) {
+    tokenEnd = superscriptEnd;
+    html = true;
+  } else {
+    while (tokenEnd < end && isSuperscript(text.charCodeAt(tokenEnd))) tokenEnd++;
+    if (tokenEnd === bodyEnd) tokenEnd = chargeEnd(text, bodyEnd, end);
+  }
   let bodyStart = start;
   // Brackets that belong to the sentence, not the formula: "(SF4)," "[NF3]" "SF6)".
   while (bodyStart < bodyEnd && isOpen(text.charCodeAt(bodyStart))) {
@@ -273,10 +328,16 @@ function formulaToken(scan: ProseScan, start: number, end: number): number {
   }
   const next = Math.max(tokenEnd, start + 1);
   if (bodyEnd <= bodyStart) return next;
-  const body = text.slice(bodyStart, bodyEnd);
   const token = text.slice(bodyStart, tokenEnd);
+  const body = html ? withUnicodeScripts(text.slice(bodyStart, bodyEnd)) : text.slice(bodyStart, bodyEnd);
+  if (body === undefined) return next;
   const shape = shapeOf(body, text.slice(bodyEnd, tokenEnd));
-  if (!shape || !isConfidentToken(token, body, shape)) return next;
+  if (!shape) return next;
+  if (!isConfidentToken(token, body, shape)) {
+    // "C + O2 -> CO2": a lone element symbol counts as a reactant or product in an equation.
+    const loneSymbol = shape.symbols.length === 1 && !shape.hasCount && !shape.hasCharge && body === shape.symbols[0];
+    if (!loneSymbol || !isLoneReactant(text, bodyStart, tokenEnd)) return next;
+  }
   if (isPartOfCode(text, bodyStart, tokenEnd)) return next;
   if (needsCalmContext(body, shape) && isWordContext(text, bodyStart, tokenEnd)) return next;
   const result = scan.read(token);
@@ -289,6 +350,16 @@ function formulaToken(scan: ProseScan, start: number, end: number): number {
   }
   return next;
 }
+
+/** The length of a state symbol "(aq)", "(s)", "(l)", "(g)" ending at `end` after a formula, or 0. */
+function stateSymbolBefore(text: string, start: number, end: number): number {
+  for (const state of STATE_SYMBOLS) {
+    if (end - state.length > start && text.endsWith(state, end)) return state.length;
+  }
+  return 0;
+}
+
+const STATE_SYMBOLS = ["(aq)", "(s)", "(l)", "(g)"];
 
 /** The end of a charge such as "+", "2-", "^2-", "^{2-}" right after a formula body. */
 function chargeEnd(text: string, bodyEnd: number, end: number): number {

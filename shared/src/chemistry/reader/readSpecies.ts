@@ -18,6 +18,8 @@ import { isAsciiLetter, isLowerLetter, isSpace } from "./characters";
 import { chargeText } from "./chargeText";
 import { matchName, nameForFormula, normalizeName, type NameMatch } from "./names/nameLookup";
 import { suggestName } from "./names/nameSuggestion";
+import { hasHtmlScript, withUnicodeScripts } from "./htmlScripts";
+import { hasLatexMarkup, latexToPlain } from "./latexFormula";
 import { LAB_ABBREVIATIONS } from "./names/synonyms";
 import { problemAt } from "./problem";
 import { readFormulaSpan } from "./readFormula";
@@ -67,10 +69,15 @@ function readSpeciesUncached(text: string): ReadResult {
   if (start === end) {
     return { ok: false, problem: problemAt("empty-input", "There is nothing to read.", start, start) };
   }
+  if (hasHtmlScript(text)) return readHtmlScripts(text, start, end);
   if (text.startsWith(MHCHEM_OPEN, start)) return withName(readMhchem(text, start, end));
   // "DCM", "EtOH": exact case only, and before the formula reader sees "AcOH" as actinium
   const abbreviated = end - start <= 6 ? LAB_ABBREVIATIONS.get(text.slice(start, end)) : undefined;
   if (abbreviated !== undefined) return readName(text, start, end, abbreviated);
+  if (hasLatexMarkup(text)) {
+    const plain = latexToPlain(text.slice(start, end));
+    if (plain !== undefined && plain.length > 0 && plain !== text.slice(start, end)) return readConverted(plain, text, start, end);
+  }
   if (looksLikeName(text, start, end)) return readName(text, start, end);
   const formula = withName(readFormulaSpan(text, start, end, "formula"));
   // Inventories write names in capitals ("ACETONE", "COPPER SULFATE"): a name, when no formula
@@ -87,6 +94,24 @@ function isCapitalWords(text: string, start: number, end: number): boolean {
     if (isLowerLetter(code) || (!isAsciiLetter(code) && !isSpace(code) && code !== 0x28 && code !== 0x29 && code !== 0x2d)) return false;
   }
   return true;
+}
+
+/** `CO<sub>2</sub>`: read as the same formula in Unicode scripts, placed over the whole written text. */
+function readHtmlScripts(text: string, start: number, end: number): ReadResult {
+  const plain = withUnicodeScripts(text.slice(start, end));
+  if (plain === undefined) {
+    const message = "Only counts may sit in <sub> and charges in <sup>, like CO<sub>2</sub> or SO<sub>4</sub><sup>2-</sup>.";
+    return { ok: false, problem: problemAt("malformed-formula", message, start, end) };
+  }
+  return readConverted(plain, text, start, end);
+}
+
+/** Reads `plain`, the markup-free spelling of `text[start, end)`, and places it over the written text. */
+function readConverted(plain: string, text: string, start: number, end: number): ReadResult {
+  const result = readSpecies(plain);
+  // A suggestion would be spelt without the writer's markup: none is offered.
+  if (!result.ok) return { ok: false, problem: problemAt(result.problem.code, result.problem.message, start, end) };
+  return { ok: true, value: { ...result.value, text: text.slice(start, end), range: { start, end } } };
 }
 
 /** `\ce{...}`: the formula inside, with the range covering the whole command. */

@@ -1,0 +1,95 @@
+/**
+ * Species typed as LaTeX math outside mhchem: `$H_2O$`, `$\mathrm{Fe(CN)_{6}^{3-}}$`,
+ * `\(SO_4^{2-}\)`, `$2H_2 + O_2 \rightarrow 2H_2O$`. Math is mostly not chemistry ($x_i$, $E = mc^2$,
+ * $K_a$), so a piece counts only when its plain spelling passes the same rules as a prose token.
+ */
+import { latexToPlain } from "../chemistry/reader/latexFormula";
+import { isConfidentToken, shapeOf } from "./proseTokenRules";
+import { occurrenceAt, type ScanSink, type SpeciesReader } from "./speciesReader";
+
+/** Longest math span looked at; longer ones are derivations, not species. */
+const MAX_MATH = 300;
+
+/** The math span opened at `open`: where its content lies and where scanning goes on, or undefined. */
+export interface MathSpan {
+  readonly contentStart: number;
+  readonly contentEnd: number;
+  readonly end: number;
+}
+
+const DELIMITERS: readonly (readonly [string, string])[] = [
+  ["$$", "$$"],
+  ["$", "$"],
+  ["\\(", "\\)"],
+  ["\\[", "\\]"],
+];
+
+/** The math span opened at `open` (a "$", "$$", "\(" or "\["), closed before `limit`. */
+export function latexMathSpan(text: string, open: number, limit: number): MathSpan | undefined {
+  for (const [opening, closing] of DELIMITERS) {
+    if (!text.startsWith(opening, open)) continue;
+    const contentStart = open + opening.length;
+    const first = text.charCodeAt(contentStart);
+    // "$ x $" is not math, by the usual rule for inline dollars; nor is "$5 and $10" (space before the close).
+    if (opening === "$" && (isSpace(first) || Number.isNaN(first))) return undefined;
+    const stop = Math.min(limit, contentStart + MAX_MATH);
+    let close = text.indexOf(closing, contentStart);
+    while (opening === "$" && close >= 0 && close < stop && (isSpace(text.charCodeAt(close - 1)) || text.charCodeAt(close - 1) === 0x5c)) {
+      close = text.indexOf(closing, close + 1);
+    }
+    if (close < 0 || close + closing.length > stop || close === contentStart) return undefined;
+    if (text.slice(contentStart, close).includes("\n\n")) return undefined;
+    return { contentStart, contentEnd: close, end: close + closing.length };
+  }
+  return undefined;
+}
+
+function isSpace(code: number): boolean {
+  return code === 0x20 || code === 0x0a || code === 0x09 || code === 0x0d;
+}
+
+/** Words of math that join species rather than name them. */
+const OPERATORS = /^(?:[+=,;:.]|\\(?:rightarrow|longrightarrow|to|leftarrow|leftrightarrow|rightleftharpoons|longleftrightarrow|rightleftarrows|quad|qquad|,|;)|<?-+>|<=+>|<-+)$/;
+
+/** Reads each species of the math content `text[start, end)` into `sink`. */
+export function scanLatexMath(text: string, start: number, end: number, read: SpeciesReader, sink: ScanSink): void {
+  for (const word of mathWords(text, start, end)) {
+    let wordStart = word.start;
+    let wordEnd = word.end;
+    while (wordEnd > wordStart && /[,;.]/.test(text[wordEnd - 1])) wordEnd--;
+    // A coefficient glued to the species: "2H_2O", "2\,H_2".
+    while (wordStart < wordEnd && /[0-9]/.test(text[wordStart])) wordStart++;
+    if (wordStart > word.start && text.startsWith("\\,", wordStart)) wordStart += 2;
+    if (wordStart > word.start && !/[A-Z\\(\[]/.test(text[wordStart] ?? "")) continue;
+    const written = text.slice(wordStart, wordEnd);
+    if (written.length === 0 || OPERATORS.test(written)) continue;
+    const plain = latexToPlain(written);
+    if (plain === undefined || plain.length === 0) continue;
+    const caret = plain.indexOf("^");
+    const body = caret < 0 ? plain : plain.slice(0, caret);
+    const shape = shapeOf(body, caret < 0 ? "" : plain.slice(caret));
+    if (!shape || !isConfidentToken(plain, body, shape)) continue;
+    const result = read(written);
+    if (result.ok) sink.occurrences.push(occurrenceAt(result.value, written, wordStart, "formula"));
+  }
+}
+
+/** Whitespace-separated words of `text[start, end)`, a braced group kept whole. */
+function mathWords(text: string, start: number, end: number): { start: number; end: number }[] {
+  const words: { start: number; end: number }[] = [];
+  let index = start;
+  while (index < end) {
+    while (index < end && isSpace(text.charCodeAt(index))) index++;
+    if (index >= end) break;
+    const wordStart = index;
+    let depth = 0;
+    while (index < end && (depth > 0 || !isSpace(text.charCodeAt(index)))) {
+      const code = text.charCodeAt(index);
+      if (code === 0x7b) depth++;
+      else if (code === 0x7d) depth--;
+      index++;
+    }
+    words.push({ start: wordStart, end: index });
+  }
+  return words;
+}

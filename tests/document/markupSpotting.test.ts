@@ -1,0 +1,104 @@
+/**
+ * Species written the way other writers write them: HTML sub- and superscripts in converted course
+ * pages, LaTeX math, mhchem with labelled arrows and text escapes, plain-text equations. Each
+ * document marks every species the scanner must report with ⟦ ⟧, and nothing else.
+ */
+import { describe, expect, it } from "vitest";
+import { analyzeDocument, checkDocument, type DocumentKind } from "../../shared/src/index";
+import { lineAndColumn, stripLabels } from "./labelledText";
+
+/** The scanner's occurrences against the labels, as "line:column text" lists. */
+function check(marked: string, kind: DocumentKind): void {
+  const { text, labels } = stripLabels(marked);
+  const found = analyzeDocument(text, kind).occurrences.map((occurrence) => `${lineAndColumn(text, occurrence.range.start)} ${occurrence.text}`);
+  expect(found).toEqual(labels.map((label) => `${lineAndColumn(text, label.start)} ${label.text}`));
+}
+
+/** The formula each occurrence of `text` reads as. */
+function formulas(text: string, kind: DocumentKind): string[] {
+  return analyzeDocument(text, kind).occurrences.map((occurrence) => occurrence.reading.formula);
+}
+
+describe("HTML sub- and superscripts", () => {
+  // common practice: how web pages and converted course notes set formulas
+  it.each([
+    ["Cylinder 7 held ⟦carbon dioxide⟧ (⟦CO<sub>2</sub>⟧) at 50 bar.", "markdown"],
+    ["The salt ⟦Al<sub>2</sub>(CO<sub>3</sub>)<sub>3</sub>⟧ is not stable when wet.", "markdown"],
+    ["The scrubber liquor holds ⟦SO<sub>4</sub><sup>2−</sup>⟧ and ⟦NH<sub>4</sub><sup>+</sup>⟧ ions.", "markdown"],
+    ["Dissolve ⟦FeCl<sub>3</sub>⟧ in ⟦H<sub>2</sub>O⟧; the ⟦Fe<sup>3+</sup>⟧ ion is yellow.", "markdown"],
+    ["Isotopes such as <sup>13</sup>C and indices x<sub>i</sub> are not species.", "markdown"],
+  ])("%s", (marked, kind) => {
+    check(marked, kind as DocumentKind);
+  });
+
+  it("reads each HTML formula as the formula it spells", () => {
+    // from memory: sulfate SO4 2-, aluminium carbonate Al2(CO3)3
+    expect(formulas("CO<sub>2</sub>, SO<sub>4</sub><sup>2-</sup>, Al<sub>2</sub>(CO<sub>3</sub>)<sub>3</sub>", "markdown")).toEqual([
+      "CO2",
+      "SO4^2-",
+      "Al2(CO3)3",
+    ]);
+  });
+
+  it("reads an HTML formula in a table's formula cell, over the whole cell", () => {
+    const text = "| Formula | Shape |\n|---|---|\n| CO<sub>2</sub> | linear |\n";
+    const [record] = analyzeDocument(text, "markdown").records;
+    expect(text.slice(record.species.range.start, record.species.range.end)).toBe("CO<sub>2</sub>");
+    // from memory: CO2 is linear, so the row is right
+    expect(checkDocument(analyzeDocument(text, "markdown"))).toEqual([]);
+  });
+});
+
+describe("LaTeX math outside mhchem", () => {
+  // common practice: how LaTeX-minded writers type formulas in markdown
+  it.each([
+    ["Ferricyanide, $⟦\\mathrm{Fe(CN)_{6}^{3-}}⟧$, stains blue.", "markdown"],
+    ["Dry the gas over silica to remove $⟦H_2O⟧$ before the cell.", "markdown"],
+    ["Combustion: $2⟦H_2⟧ + ⟦O_2⟧ \\rightarrow 2⟦H_2O⟧$.", "markdown"],
+    ["The cation \\(⟦NH_4^+⟧\\) and the anion \\(⟦SO_4^{2-}⟧\\).", "markdown"],
+    ["Nested: $\\ce{⟦SO4^2-⟧ + ⟦Ba^2+⟧ -> ⟦BaSO4⟧ v}$ in the notes.", "markdown"],
+    ["Math is not chemistry: $x_i$, $E = mc^2$, $K_a$, $\\Delta H$, $pK_a$.", "markdown"],
+    ["Prices: $5 and $10 per cylinder, or $5-$10 for small ones.", "markdown"],
+  ])("%s", (marked, kind) => {
+    check(marked, kind as DocumentKind);
+  });
+
+  it("reads math as the formula it spells", () => {
+    // from memory: ferricyanide is [Fe(CN)6]3-
+    expect(formulas("$\\mathrm{Fe(CN)_{6}^{3-}}$ and $SO_4^{2-}$", "markdown")).toEqual(["Fe(CN)6^3-", "SO4^2-"]);
+  });
+});
+
+describe("mhchem details", () => {
+  // common practice: mhchem arrow labels, text escapes and schematic letters
+  it.each([
+    ["\\ce{⟦SF4⟧ + ⟦H2O⟧ ->[⟦HF⟧] ⟦SOF2⟧ + 2 ⟦HF⟧}", "markdown"],
+    ["\\ce{⟦CaCO3⟧ ->[{heat}] ⟦CaO⟧ + ⟦CO2⟧ ^}", "markdown"],
+    ["\\ce{⟦N2⟧ + 3⟦H2⟧ <=>[⟦Fe⟧][{400 °C}] 2⟦NH3⟧}", "markdown"],
+    ["\\ce{A ->[⟦H2O⟧] B} is the general scheme.", "markdown"],
+    ["\\ce{{Ox} + e- -> {Red}}", "markdown"],
+    ["\\ce{⟦NaCl⟧(aq) + ⟦AgNO3⟧(aq) -> ⟦AgCl⟧(s) + ⟦NaNO3⟧(aq)}", "markdown"],
+  ])("%s", (marked, kind) => {
+    check(marked, kind as DocumentKind);
+  });
+
+  it("reports no error for schematic letters or text in labels", () => {
+    const text = "\\ce{A ->[H2SO4, heat] B} and \\ce{X + Y -> Z}";
+    expect(checkDocument(analyzeDocument(text, "markdown")).filter((finding) => finding.severity === "error")).toEqual([]);
+  });
+});
+
+describe("plain-text equations", () => {
+  // common practice: equations typed in plain text and student reports
+  it.each([
+    ["⟦H2⟧ burns: 2⟦H2⟧ + ⟦O2⟧ → 2⟦H2O⟧", "plaintext"],
+    ["⟦NaCl⟧(aq) + ⟦AgNO3⟧(aq) -> ⟦AgCl⟧(s) + ⟦NaNO3⟧(aq)", "plaintext"],
+    ["⟦C⟧ + ⟦O2⟧ -> ⟦CO2⟧", "plaintext"],
+    ["Thermite: 2 ⟦Al⟧ + ⟦Fe2O3⟧ → ⟦Al2O3⟧ + 2 ⟦Fe⟧", "plaintext"],
+    ["2 ⟦Al⟧ + ⟦Fe2O3⟧ gives a lot of heat.", "plaintext"],
+    ["Vitamin C + zinc. I + you. A 3D print, a 4K screen, 2CO in words.", "plaintext"],
+    ["Grade B → grade A after the retest.", "plaintext"],
+  ])("%s", (marked, kind) => {
+    check(marked, kind as DocumentKind);
+  });
+});
