@@ -3,6 +3,7 @@
  * There a coefficient may be glued to a formula and a lone element symbol is a reactant; in prose
  * neither holds ("3D", "vitamin C", "grade B").
  */
+import { withUnicodeScripts } from "../chemistry/reader/htmlScripts";
 import { isConfidentToken, shapeOf, type TokenShape } from "./proseTokenRules";
 
 /** How far along the line an arrow is looked for. */
@@ -44,7 +45,9 @@ function wordAfter(text: string, end: number): { word: string; end: number } {
 
 /** The shape of a word that may be a formula, without coefficient, state symbol or punctuation. */
 function formulaShapeOf(word: string): { bare: string; body: string; shape: TokenShape } | undefined {
-  const bare = word.replace(/^\d{1,2}(?=[A-Z])/, "").replace(/[,.;:]$/, "").replace(/\((?:aq|s|l|g)\)$/, "");
+  const plain = word.includes("<su") ? withUnicodeScripts(word) : word;
+  if (plain === undefined) return undefined;
+  const bare = plain.replace(/^\d{1,2}(?=[A-Z])/, "").replace(/[,.;:]$/, "").replace(/\((?:aq|s|l|g)\)$/, "");
   const match = /^([A-Z][A-Za-z0-9()\u2080-\u2089]*?)((?:\^?\d?[+\-\u2212]{1,2})?)$/.exec(bare);
   if (!match) return undefined;
   const shape = shapeOf(match[1], match[2]);

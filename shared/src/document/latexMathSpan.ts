@@ -61,6 +61,12 @@ export function scanLatexMath(text: string, start: number, end: number, read: Sp
     while (wordStart < wordEnd && /[0-9]/.test(text[wordStart])) wordStart++;
     if (wordStart > word.start && text.startsWith("\\,", wordStart)) wordStart += 2;
     if (wordStart > word.start && !/[A-Z\\(\[]/.test(text[wordStart] ?? "")) continue;
+    // "\mathrm{Fe(CN)_{6}^{3-}}": the species is what the face command wraps.
+    const face = /^\\(?:mathrm|text|textrm|rm|mathit|mathsf)\{/.exec(text.slice(wordStart, wordEnd));
+    if (face && text.charCodeAt(wordEnd - 1) === 0x7d && balanced(text, wordStart + face[0].length, wordEnd - 1)) {
+      wordStart += face[0].length;
+      wordEnd--;
+    }
     const written = text.slice(wordStart, wordEnd);
     if (written.length === 0 || OPERATORS.test(written)) continue;
     const plain = latexToPlain(written);
@@ -92,4 +98,15 @@ function mathWords(text: string, start: number, end: number): { start: number; e
     words.push({ start: wordStart, end: index });
   }
   return words;
+}
+
+/** True when the braces of `text[start, end)` pair up. */
+function balanced(text: string, start: number, end: number): boolean {
+  let depth = 0;
+  for (let index = start; index < end; index++) {
+    const code = text.charCodeAt(index);
+    if (code === 0x7b) depth++;
+    else if (code === 0x7d && --depth < 0) return false;
+  }
+  return depth === 0;
 }

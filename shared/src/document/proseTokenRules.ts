@@ -56,11 +56,16 @@ export function isConfidentToken(token: string, body: string, shape: TokenShape)
     // "Ca2+" carries its charge size; a bare "B+" or "C-" is far more often a grade.
     return !LABEL_LETTERS.has(shape.symbols[0]) || /\d/.test(token);
   }
-  if (shape.hasCount) return distinct > 1 || HOMONUCLEAR.has(body);
+  if (shape.hasCount) return distinct > 1 || HOMONUCLEAR.has(body) || HOMONUCLEAR.has(withAsciiDigits(body));
   if (shape.symbols.length === 1) return LONE_ATOMS.has(body);
   const allCapitals = shape.symbols.every((symbol) => symbol.length === 1);
   if (allCapitals) return CAPITAL_SPECIES.has(body);
   return distinct > 1;
+}
+
+/** "O₂" -> "O2": subscript digits as ASCII. */
+function withAsciiDigits(body: string): string {
+  return body.replace(/[\u2080-\u2089]/g, (digit) => String.fromCharCode(digit.charCodeAt(0) - 0x2080 + 0x30));
 }
 
 /** True for digit-free all-capital tokens (CO, HF), which need a calmer context than the rest. */

@@ -7,6 +7,7 @@
 import { htmlScriptEnd, withUnicodeScripts } from "../chemistry/reader/htmlScripts";
 import { isGluedCoefficient, isLoneReactant } from "./equationContext";
 import { isSafeSpellingFix } from "./fixPolicy";
+import { isAlloyDesignation, isGroupFragment, isSeriesId } from "./nonSpeciesContext";
 import { latexMathSpan, scanLatexMath, type MathSpan } from "./latexMathSpan";
 import { mhchemSpanEnd, scanMhchemBody } from "./mhchemSpan";
 import { isPartOfCode, isWordContext } from "./proseContext";
@@ -299,7 +300,7 @@ function formulaToken(scan: ProseScan, start: number, end: number): number {
     bodyEnd = subscriptEnd;
     html = true;
   }
-  // "NaCl(aq)": the state symbol follows the species, it is not part of it.
+  // "NaCl(aq)": the state symbol follows the formula; the shape rules look at the formula alone.
   const state = stateSymbolBefore(text, start, bodyEnd);
   if (state > 0) bodyEnd -= state;
   let tokenEnd = bodyEnd;
@@ -339,7 +340,17 @@ function formulaToken(scan: ProseScan, start: number, end: number): number {
     if (!loneSymbol || !isLoneReactant(text, bodyStart, tokenEnd)) return next;
   }
   if (isPartOfCode(text, bodyStart, tokenEnd)) return next;
+  if (isGroupFragment(text, bodyStart, tokenEnd, body) || isAlloyDesignation(shape.symbols)) return next;
+  if (shape.hasCount && !shape.hasCharge && isSeriesId(text, bodyStart, tokenEnd, shape.symbols)) return next;
   if (needsCalmContext(body, shape) && isWordContext(text, bodyStart, tokenEnd)) return next;
+  // A state symbol belongs to the mention ("Ag+(aq)"): it is reported whole or not at all.
+  const stateLength = stateSymbolAt(text, tokenEnd, end);
+  if (stateLength > 0) {
+    const withState = text.slice(bodyStart, tokenEnd + stateLength);
+    const stateResult = scan.read(withState);
+    if (stateResult.ok) scan.sink.occurrences.push(occurrenceAt(stateResult.value, withState, bodyStart, "formula"));
+    return tokenEnd + stateLength;
+  }
   const result = scan.read(token);
   if (result.ok) {
     scan.sink.occurrences.push(occurrenceAt(result.value, token, bodyStart, "formula"));
@@ -361,6 +372,14 @@ function stateSymbolBefore(text: string, start: number, end: number): number {
 
 const STATE_SYMBOLS = ["(aq)", "(s)", "(l)", "(g)"];
 
+/** The length of a state symbol starting at `at`, or 0. */
+function stateSymbolAt(text: string, at: number, end: number): number {
+  for (const state of STATE_SYMBOLS) {
+    if (at + state.length <= end && text.startsWith(state, at)) return state.length;
+  }
+  return 0;
+}
+
 /** The end of a charge such as "+", "2-", "^2-", "^{2-}" right after a formula body. */
 function chargeEnd(text: string, bodyEnd: number, end: number): number {
   let index = bodyEnd;
@@ -376,9 +395,14 @@ function chargeEnd(text: string, bodyEnd: number, end: number): number {
   while (index < end && index - signStart < 3 && isSign(text.charCodeAt(index))) index++;
   if (index === signStart) return bodyEnd;
   // A sign followed by a letter or digit is a hyphen or an operator: "NF3-rich", "NF3+SF6".
-  if (index < end && isWordCharacter(text.charCodeAt(index))) return bodyEnd;
+  if (index < end && (isWordCharacter(text.charCodeAt(index)) || isOtherLetter(text.charCodeAt(index)))) return bodyEnd;
   if (text.charCodeAt(signStart) === 0x2d && isSuspendedHyphen(text, index)) return bodyEnd;
   return index;
+}
+
+/** A letter outside ASCII ("κ" in NF-κB): a sign before it is a hyphen. */
+function isOtherLetter(code: number): boolean {
+  return code > 0x7f && /\p{L}/u.test(String.fromCharCode(code));
 }
 
 /** "CF4- and SF6-based": the hyphen waits for a word later in the sentence. */

@@ -1,0 +1,81 @@
+/**
+ * Formula-shaped tokens that are something else in their sentence: functional-group fragments
+ * (R–OH, Ar–NH₂, –COOCH₃, "the NO₂ group", "2H, OCH₂" in an NMR list), sample and run ids in a
+ * series (N1, N2), and alloy designations (Ti6Al4V).
+ */
+import { NONMETALS } from "../chemistry/reader/nonmetals";
+
+/** Dashes that write a bond to a substituent: hyphen, en dash, em dash, figure dash, minus. */
+function isBondDash(code: number): boolean {
+  return code === 0x2d || code === 0x2013 || code === 0x2014 || code === 0x2012 || code === 0x2212;
+}
+
+function isUpper(code: number): boolean {
+  return code >= 0x41 && code <= 0x5a;
+}
+
+function isSpace(code: number): boolean {
+  return code === 0x20 || code === 0x09 || code === 0x0a || code === 0x0d || code === 0xa0 || Number.isNaN(code);
+}
+
+/** Words after a formula that make it a group of a larger molecule. */
+const GROUP_WORDS = /^[\s)]*(?:groups?|substituents?|moiety|moieties|fragments?|residues?|side[- ]chains?)\b/i;
+
+/** Words before a formula, in "a nitro group (NO₂)" or "group NO₂". */
+const GROUP_BEFORE = /\b(?:groups?|substituents?|moiety|fragments?)\s*\(\s*$|\b(?:group|substituent)\s+$/i;
+
+/** The "nH, " of an NMR assignment list: "(q, 2H, OCH₂)". */
+const NMR_PROTONS = /\b\d{1,2}H,\s*$/;
+
+/** Placeholders written before a bond dash: R, R', R₁, Ar. */
+const PLACEHOLDER_BEFORE = /(?:^|[^A-Za-z])(?:R[\u2032'\u2081\u2082\d]?|Ar)$/;
+
+/**
+ * True when the formula at `[start, end)` is written as part of a larger molecule: after a bond
+ * dash that opens a word or follows R or Ar ("–COOCH₃", "R–OH", "Ar–NH₂"), as Ar before a bond
+ * dash to another group ("Ar–OH"), named a group, or listed in an NMR assignment.
+ */
+export function isGroupFragment(text: string, start: number, end: number, body: string): boolean {
+  const before = text.charCodeAt(start - 1);
+  if (isBondDash(before)) {
+    const beforeDash = text.slice(Math.max(0, start - 6), start - 1);
+    if (isSpace(text.charCodeAt(start - 2)) || text.charCodeAt(start - 2) === 0x28 || PLACEHOLDER_BEFORE.test(beforeDash)) return true;
+  }
+  if (body === "Ar" && isBondDash(text.charCodeAt(end)) && isUpper(text.charCodeAt(end + 1))) return true;
+  if (GROUP_WORDS.test(text.slice(end, end + 16))) return true;
+  const lookBack = text.slice(Math.max(0, start - 30), start);
+  return GROUP_BEFORE.test(lookBack) || NMR_PROTONS.test(lookBack);
+}
+
+/** How far around a token a series of ids is looked for. */
+const SERIES_REACH = 2000;
+
+/**
+ * True when a one-element token with a count ("N2", "O2") sits where the same letter numbered 1
+ * also stands alone ("Runs N1, N2"): a series of sample or run ids, as no formula is written X1.
+ */
+export function isSeriesId(text: string, start: number, end: number, symbols: readonly string[]): boolean {
+  if (symbols.length !== 1) return false;
+  const symbol = symbols[0];
+  const from = Math.max(0, start - SERIES_REACH);
+  const window = text.slice(from, Math.min(text.length, end + SERIES_REACH));
+  const first = `${symbol}1`;
+  for (let at = window.indexOf(first); at >= 0; at = window.indexOf(first, at + 1)) {
+    const previous = window.charCodeAt(at - 1);
+    const next = window.charCodeAt(at + first.length);
+    if (!isWordCode(previous) && !isWordCode(next) && next !== 0x2b && next !== 0x2d) return true;
+  }
+  return false;
+}
+
+function isWordCode(code: number): boolean {
+  return (code >= 0x30 && code <= 0x39) || (code >= 0x41 && code <= 0x5a) || (code >= 0x61 && code <= 0x7a);
+}
+
+/** True for an alloy designation: three or more different metals and no nonmetal (Ti6Al4V). */
+export function isAlloyDesignation(symbols: readonly string[]): boolean {
+  const distinct = new Set(symbols);
+  if (distinct.size < 3) return false;
+  for (const symbol of distinct) if (NONMETALS.has(symbol)) return false;
+  return true;
+}
