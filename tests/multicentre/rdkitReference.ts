@@ -5,6 +5,8 @@ import { ChemElements } from "@chemistry/elements";
 
 interface RDKitMol {
   get_json(): string;
+  get_smiles(details?: string): string;
+  add_hs(): string;
   get_substruct_matches(query: RDKitMol): string;
   delete(): void;
 }
@@ -103,4 +105,28 @@ export function rdkitComposition(atoms: readonly RdkitAtom[]): Map<string, numbe
     if (atom.hydrogens > 0) add("H", atom.hydrogens);
   }
   return counts;
+}
+
+/**
+ * RDKit's canonical SMILES, without stereo marks and with every hydrogen written as an atom, of a
+ * SMILES string or an MDL molfile; throws if RDKit rejects the input. A molfile with every H and
+ * the same molecule's SMILES give the same text.
+ */
+export function rdkitCanonicalSmiles(input: string): string {
+  if (!loaded) throw new Error("call loadRdkit() in beforeAll first");
+  const read = loaded.rdkit.get_mol(input);
+  if (read === null) throw new Error(`RDKit refused ${input}`);
+  let withHydrogens: string;
+  try {
+    withHydrogens = read.add_hs();
+  } finally {
+    read.delete();
+  }
+  const mol = loaded.rdkit.get_mol(withHydrogens, JSON.stringify({ removeHs: false }));
+  if (mol === null) throw new Error(`RDKit refused its own molfile for ${input}`);
+  try {
+    return mol.get_smiles(JSON.stringify({ doIsomericSmiles: false }));
+  } finally {
+    mol.delete();
+  }
 }

@@ -5,12 +5,14 @@
  */
 import { elementBySymbol } from "./elements";
 import { readSpecies } from "./reader/readSpecies";
-import type { AnalysisResult, Problem, SpeciesAnalysis, SpeciesReading } from "./types";
+import type { AnalysisResult, PolarityVerdict, Problem, SpeciesAnalysis, SpeciesReading } from "./types";
+import { looksCondensed } from "./analysis/condensedFormula";
+import { pointGroupAllowsDipole } from "./analysis/shape3d";
 import { buildAnalysis } from "./analysis/buildAnalysis";
 import { chooseSkeletonStructure } from "./analysis/chooseSkeletonStructure";
 import { smilesStructure } from "./analysis/fromSmiles";
 import { boundedMemo } from "./boundedMemo";
-import { candidateStructuresFor, singleStructureFor, structureForName } from "./analysis/structuresByFormula";
+import { candidateStructuresFor, refusalFor, singleStructureFor, structureForName } from "./analysis/structuresByFormula";
 
 const MEMO_LIMIT = 20_000;
 const memo = boundedMemo<AnalysisResult>(MEMO_LIMIT);
@@ -64,6 +66,14 @@ export function analyzeReading(reading: SpeciesReading): AnalysisResult {
   if (reading.smiles !== undefined) return analyzeNamedStructure(reading, reading.smiles);
   const scope = outOfScope(reading);
   if (scope) return { ok: false, reading, problem: scope };
+  // A formula that does not spell out its connectivity but has one ordinary structure (P4O10,
+  // S2O8^2-, H3PO3) is that structure, even where a star-shaped skeleton would also fit.
+  const refusal = refusalFor(reading.composition, reading.charge);
+  if (refusal) return { ok: false, reading, problem: { code: "ambiguous-connectivity", message: refusal } };
+  if (!looksCondensed(reading.writtenSequence) && singleStructureFor(reading.composition, reading.charge)) {
+    const known = readIntoFormula(reading, undefined);
+    if (known.ok) return known;
+  }
   const chosen = chooseSkeletonStructure(reading);
   if (!chosen.ok) {
     if (chosen.problem.code === "ambiguous-connectivity") return readIntoFormula(reading, chosen.problem);
@@ -89,7 +99,7 @@ function analyzeNamedStructure(reading: SpeciesReading, smiles: string): Analysi
  * A molecular formula whose connectivity is not written: analyse the one ordinary structure it
  * stands for (C2H4 is ethene), or name the familiar candidates when there are several.
  */
-function readIntoFormula(reading: SpeciesReading, problem: Problem): AnalysisResult {
+function readIntoFormula(reading: SpeciesReading, problem: Problem | undefined): AnalysisResult {
   // A name (or a written phenyl group) says which structure is meant; a bare formula only when
   // it has one ordinary structure.
   const byName = reading.notation === "name" || reading.formula.includes("C6H5") ? structureForName(reading.name) : undefined;
@@ -102,18 +112,20 @@ function readIntoFormula(reading: SpeciesReading, problem: Problem): AnalysisRes
         ok: true,
         value: {
           ...value,
-          polarity: value.polarity,
+          polarity: single.pointGroup ? polarityFromKnownSymmetry(single.pointGroup, reading.charge, value.polarity) : value.polarity,
           reading: { ...reading, name: reading.name ?? single.name },
           warnings: [
             ...value.warnings,
             reading.notation === "name"
               ? `Read as the structure of ${single.name} (${single.smiles ? `SMILES ${single.written}` : single.written}).`
               : `Read as ${single.name} (${single.smiles ? `SMILES ${single.written}` : single.written}), the one ordinary structure with this formula; write a structural formula or SMILES for anything else.`,
+            ...(single.note ? [single.note] : []),
           ],
         },
       };
     }
   }
+  if (!problem) return { ok: false, reading, problem: { code: "no-valid-structure", message: `${reading.formula}: no Lewis structure fits.` } };
   const candidates = candidateStructuresFor(reading.composition, reading.charge);
   if (candidates.length === 0) return { ok: false, reading, problem };
   const named = candidates.map((c) => `${c.name} (${c.smiles ? `SMILES ${c.written}` : c.written})`);
@@ -125,6 +137,22 @@ function readIntoFormula(reading: SpeciesReading, problem: Problem): AnalysisRes
       code: "ambiguous-connectivity",
       message: `${reading.formula} can be ${list}: write the structural formula or SMILES you mean.`,
     },
+  };
+}
+
+/**
+ * Polarity of a cage or ring from the symmetry of the real molecule, which its model coordinates
+ * may not reach (S8 is a D4d crown; P4O10 is tetrahedral).
+ */
+function polarityFromKnownSymmetry(pointGroup: string, charge: number, model: PolarityVerdict): PolarityVerdict {
+  if (charge !== 0) return model;
+  const polar = pointGroupAllowsDipole(pointGroup);
+  return {
+    polar,
+    reason: polar
+      ? `the molecule has ${pointGroup} symmetry, which allows a permanent dipole`
+      : `the molecule has ${pointGroup} symmetry, so its bond dipoles cancel`,
+    dipoleEstimate: polar ? model.dipoleEstimate : 0,
   };
 }
 

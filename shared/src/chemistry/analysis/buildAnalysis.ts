@@ -55,6 +55,25 @@ export function buildAnalysis(
     }
   }
 
+  // A neutral molecule drawn with a doubly charged atom is almost always the wrong skeleton
+  // (groups hung on the wrong atom); the writer must hear of it.
+  if (reading.charge === 0 && atomCount > 1) {
+    for (let index = 0; index < atomCount; index++) {
+      const charge = atoms[index].formalCharge;
+      if (Math.abs(charge) < 2) continue;
+      warnings.push(
+        `${atoms[index].symbol} (atom ${index}) carries a formal charge of ${charge > 0 ? "+" : ""}${charge}: unusual in a neutral molecule, so this may not be the structure meant. Check the formula, or write a structural formula or SMILES.`,
+      );
+    }
+  }
+  if (reading.notation !== "smiles" && structure.graph.bonds.length > 0) {
+    const isomeric = cisTransBond(structure.graph);
+    if (isomeric) {
+      warnings.push(
+        `${isomeric}: cis and trans isomers both exist (the groups on its two ends on the same side or on opposite sides). The model draws one of them; each atom's shape is the same in both, but the polarity can differ. Write SMILES with / and \\ to choose one.`,
+      );
+    }
+  }
   if (radical) {
     const holder = atoms.findIndex((atom) => atom.unpairedElectrons > 0);
     warnings.push(
@@ -174,4 +193,45 @@ function ownCentres(descriptions: readonly CentreAnalysis[], indices: readonly n
 function ownDetail(described: SharedCentreDetail, index: number): CentreDetail {
   const { alike, ligands, sites } = described;
   return { centre: alike.index === index ? alike : { ...alike, index }, ligands, sites };
+}
+
+/**
+ * The first open-chain double bond whose two ends each carry two different things (a group and a
+ * lone pair, or two groups of different elements), written as "N=N"; undefined when none.
+ */
+function cisTransBond(graph: SpeciesAnalysis["graph"]): string | undefined {
+  const neighbours: number[][] = graph.atoms.map(() => []);
+  for (const bond of graph.bonds) {
+    neighbours[bond.from].push(bond.to);
+    neighbours[bond.to].push(bond.from);
+  }
+  const endIsStereogenic = (end: number, partner: number): boolean => {
+    const others = neighbours[end].filter((atom) => atom !== partner);
+    if (others.length === 1) return graph.atoms[end].lonePairs > 0;
+    return others.length === 2 && graph.atoms[others[0]].symbol !== graph.atoms[others[1]].symbol;
+  };
+  for (const bond of graph.bonds) {
+    if (bond.order !== 2) continue;
+    if (!endIsStereogenic(bond.from, bond.to) || !endIsStereogenic(bond.to, bond.from)) continue;
+    if (joinedOtherwise(neighbours, bond.from, bond.to)) continue;
+    return `${graph.atoms[bond.from].symbol}=${graph.atoms[bond.to].symbol}`;
+  }
+  return undefined;
+}
+
+/** True when `a` and `b` are connected by a path that avoids their own bond (a ring bond). */
+function joinedOtherwise(neighbours: readonly (readonly number[])[], a: number, b: number): boolean {
+  const seen = new Set<number>([a]);
+  const queue = neighbours[a].filter((atom) => atom !== b);
+  for (const atom of queue) seen.add(atom);
+  while (queue.length > 0) {
+    const atom = queue.pop()!;
+    if (atom === b) return true;
+    for (const next of neighbours[atom]) {
+      if (seen.has(next)) continue;
+      seen.add(next);
+      queue.push(next);
+    }
+  }
+  return false;
 }

@@ -4,6 +4,7 @@
  */
 import { elementBySymbol } from "../elements";
 import {
+  type CandidateSkeleton,
   candidateSkeletons,
   countChainFormingAtoms,
   expandComposition,
@@ -72,6 +73,7 @@ export function chooseSkeletonStructure(reading: SpeciesReading): ChosenStructur
       centre: skeleton.centre,
       centreIsUnique: reading.composition.find((part) => part.symbol === centreSymbol)?.count === 1,
       electronegativity: elementBySymbol(centreSymbol)!.electronegativity ?? 4.5,
+      isPair: skeleton.pair === true,
     };
     if (!best || compareSkeletons(ranked, best) < 0) best = ranked;
   }
@@ -99,13 +101,18 @@ export function chooseSkeletonStructure(reading: SpeciesReading): ChosenStructur
 function chooseCondensedStructure(reading: SpeciesReading): ChosenStructure | undefined {
   const skeletons = condensedSkeletons(reading.formula);
   if (!skeletons || skeletons.length === 0) return undefined;
-  let best: { structure: LewisStructure; centre: number } | undefined;
+  let best: { structure: LewisStructure; centre: number; peroxideBonds: number } | undefined;
   for (const skeleton of skeletons) {
     const outcome = chooseLewisStructure(skeleton, reading.charge);
     if (!outcome.ok) continue;
-    // Skeletons arrive with the most recent parent first, so ties keep the chain as written.
-    if (!best || compareScores(outcome.structure.score, best.structure.score) < 0) {
-      best = { structure: outcome.structure, centre: skeleton.centre };
+    // Skeletons arrive with the most recent parent first, so ties keep the chain as written;
+    // but an O-O bond is written on purpose (HOOH), so a tie never invents one: HOOCCOOH is
+    // oxalic acid, not a diperoxide.
+    const order = best ? compareScores(outcome.structure.score, best.structure.score) : -1;
+    if (order > 0) continue;
+    const peroxideBonds = countOxygenOxygenBonds(skeleton);
+    if (!best || order < 0 || peroxideBonds < best.peroxideBonds) {
+      best = { structure: outcome.structure, centre: skeleton.centre, peroxideBonds };
     }
   }
   if (!best) return undefined;
@@ -118,15 +125,23 @@ function chooseCondensedStructure(reading: SpeciesReading): ChosenStructure | un
   return { ok: true, structure: best.structure, centre: best.centre };
 }
 
+function countOxygenOxygenBonds(skeleton: CandidateSkeleton): number {
+  let count = 0;
+  for (const [a, b] of skeleton.bonds) if (skeleton.symbols[a] === "O" && skeleton.symbols[b] === "O") count++;
+  return count;
+}
+
 interface RankedSkeleton {
   readonly structure: LewisStructure;
   readonly centre: number;
   readonly centreIsUnique: boolean;
   readonly electronegativity: number;
+  /** The X-A-A-X chain rather than a star. */
+  readonly isPair: boolean;
 }
 
 /**
- * Formal charges first; when they tie, the skeleton whose centre is the one atom of its element
+ * Formal charges first, then (against an X-A-A-X chain) no needless expanded octet; when they tie, the skeleton whose centre is the one atom of its element
  * (Cl2O is Cl-O-Cl, ClO2 is O-Cl-O), then the less electronegative centre (NSF is N≡S-F), then
  * the remaining tie-breaks of the Lewis search.
  */
@@ -137,6 +152,9 @@ function compareSkeletons(a: RankedSkeleton, b: RankedSkeleton): number {
     sa.shellDeficit - sb.shellDeficit ||
     sa.sumAbsFormalCharge - sb.sumAbsFormalCharge ||
     sa.sumSquareFormalCharge - sb.sumSquareFormalCharge ||
+    // Against the X-A-A-X chain, no needless expanded octet: Cl-S-S-Cl, not S=SCl2. (Among
+    // stars the expanded octet may win: N≡S-F, O-Cl-O.)
+    (a.isPair !== b.isPair ? sa.expandedAtoms - sb.expandedAtoms : 0) ||
     Number(b.centreIsUnique) - Number(a.centreIsUnique) ||
     a.electronegativity - b.electronegativity ||
     compareScores(sa, sb)

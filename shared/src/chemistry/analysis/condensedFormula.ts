@@ -11,8 +11,22 @@ import type { CandidateSkeleton } from "../lewis/candidateSkeletons";
 interface Unit {
   readonly symbol: string;
   readonly hydrogens: number;
-  /** Groups written in parentheses right after this atom: C(CH3)4, CH(OH). */
-  readonly branches: Unit[][];
+  /** Groups written right after this atom: C(CH3)4, CH(OH), the oxygens of SO2. */
+  readonly branches: Branch[];
+  /** The first carbon of a phenyl ring (C6H5): five CH atoms close the ring back onto it. */
+  readonly phenyl?: boolean;
+}
+
+/** A group hanging on a unit; `repeat` > 0 for the second and later copies of a group. */
+interface Branch {
+  readonly units: Unit[];
+  /**
+   * True for a parenthesised group, which may bond to an earlier atom than the one it follows
+   * (CO(NH2)2 is urea, the NH2 groups on carbon) and, repeated, may form a chain (CH3(CH2)4CH3).
+   */
+  readonly written: boolean;
+  /** Copy number within a repeated group: 0 for the first. */
+  readonly copy: number;
 }
 
 interface ParsedSequence {
@@ -23,6 +37,8 @@ interface ParsedSequence {
 
 const MAX_HEAVY_ATOMS = 14;
 const MAX_SKELETONS = 4_000;
+/** Elements whose written On (n >= 2) are oxygens bonded to them: CH3SO2Cl, CH3NO2, (CH3)2SO2. */
+const OXO_HOSTS: ReadonlySet<string> = new Set(["N", "S", "P", "Se"]);
 
 /** Most neighbours an atom may have in a condensed formula, hydrogens included. */
 function maxNeighbours(symbol: string): number {
@@ -43,8 +59,9 @@ function maxNeighbours(symbol: string): number {
 }
 
 /**
- * True when the written groups show structure: an element in two places, a bond mark, or a nitro
- * group written after a carbon group (CH3NO2, CH3CH2NO2).
+ * True when the written groups show structure: an element in two places, a bond mark, an oxo
+ * group written after a carbon group (CH3NO2, CH3SO2Cl, CH3SO3-), or an alkyl or phenyl group
+ * followed by more atoms (C6H5Cl, C2H5Br).
  */
 export function looksCondensed(sequence: readonly { symbol: string; count?: number }[]): boolean {
   const seen = new Set<string>();
@@ -52,23 +69,44 @@ export function looksCondensed(sequence: readonly { symbol: string; count?: numb
     const part = sequence[k];
     if (part.symbol === "=" || part.symbol === "≡") return true;
     if (seen.has(part.symbol)) return true;
-    if (seen.has("C") && isNitroAt(sequence, k)) return true;
+    if (seen.has("C") && isOxoGroupAt(sequence, k)) return true;
+    if (k + 2 < sequence.length && isCarbonGroupAt(sequence, k)) return true;
     seen.add(part.symbol);
   }
   return false;
 }
 
-/** N then O2, not followed by hydrogen: the nitro group, N bonded to both oxygens. */
-function isNitroAt(sequence: readonly { symbol: string; count?: number }[], index: number): boolean {
-  const nitrogen = sequence[index];
+/** N, S, P or Se then O2 or more: the oxygens are bonded to that atom (nitro, sulfonyl, ...). */
+function isOxoGroupAt(sequence: readonly { symbol: string; count?: number }[], index: number): boolean {
+  const host = sequence[index];
   const oxygen = sequence[index + 1];
   return (
-    nitrogen.symbol === "N" &&
-    (nitrogen.count ?? 1) === 1 &&
+    OXO_HOSTS.has(host.symbol) &&
+    (host.count ?? 1) === 1 &&
     oxygen?.symbol === "O" &&
-    oxygen.count === 2 &&
-    sequence[index + 2]?.symbol !== "H"
+    (oxygen.count ?? 1) >= 2
   );
+}
+
+/** CnH2n+1 (n >= 2) or C6H5: an alkyl or phenyl group written as one block. */
+function isCarbonGroupAt(sequence: readonly { symbol: string; count?: number }[], index: number): boolean {
+  const carbon = sequence[index];
+  const hydrogen = sequence[index + 1];
+  if (carbon.symbol !== "C" || hydrogen?.symbol !== "H") return false;
+  return carbonGroupKind(carbon.count ?? 1, hydrogen.count ?? 1) !== undefined;
+}
+
+function carbonGroupKind(carbons: number, hydrogens: number): "alkyl" | "phenyl" | undefined {
+  if (carbons === 6 && hydrogens === 5) return "phenyl";
+  if (carbons >= 2 && carbons <= 6 && hydrogens === 2 * carbons + 1) return "alkyl";
+  return undefined;
+}
+
+/** A straight-chain alkyl group as one CH2 unit carrying the rest of the chain: C2H5 is CH2-CH3. */
+function alkylUnit(carbons: number): Unit {
+  const rest: Unit[] = [];
+  for (let k = 1; k < carbons; k++) rest.push({ symbol: "C", hydrogens: k === carbons - 1 ? 3 : 2, branches: [] });
+  return { symbol: "C", hydrogens: 2, branches: [{ units: rest, written: false, copy: 0 }] };
 }
 
 /** Parse the body of a condensed formula (no charge); undefined when it is not one we read. */
@@ -95,20 +133,26 @@ function parseCondensed(text: string): ParsedSequence | undefined {
     position++;
     return first;
   };
+  const single = (symbol: string): Branch => ({ units: [{ symbol, hydrogens: 0, branches: [] }], written: false, copy: 0 });
 
   const readSequence = (closing: string | undefined): ParsedSequence | undefined => {
     const units: Unit[] = [];
     const leadingBranches: Unit[][] = [];
     let leadingHydrogens = 0;
+    let leadingHydrogensGiven = false;
+    // Oxygens just written after a host atom (the O3 of SO3H): hydrogens written next go on them.
+    let oxoBranches: Branch[] = [];
     while (position < text.length) {
       const character = text[position];
       if (character === closing) return finish();
       if (character === "=" || character === "≡" || character === "#" || character === "-") {
         position++;
+        oxoBranches = [];
         continue;
       }
       if (character === "(" || character === "[") {
         position++;
+        oxoBranches = [];
         const inner = readSequence(character === "(" ? ")" : "]");
         if (!inner || text[position] !== (character === "(" ? ")" : "]")) return undefined;
         position++;
@@ -117,7 +161,7 @@ function parseCondensed(text: string): ParsedSequence | undefined {
         for (let k = 0; k < copies; k++) {
           const copy = cloneUnits(inner.units);
           if (units.length === 0) leadingBranches.push(copy);
-          else units[units.length - 1].branches.push(copy);
+          else units[units.length - 1].branches.push({ units: copy, written: true, copy: k });
         }
         continue;
       }
@@ -125,40 +169,69 @@ function parseCondensed(text: string): ParsedSequence | undefined {
       if (!symbol) return undefined;
       const count = readCount();
       if (symbol === "H") {
-        if (units.length === 0) leadingHydrogens += count;
+        if (oxoBranches.length > 0) {
+          // SO3H, PO3H2: one hydrogen on each of the last oxygens written.
+          if (count > oxoBranches.length) return undefined;
+          for (let k = oxoBranches.length - count; k < oxoBranches.length; k++) {
+            (oxoBranches[k].units[0] as { hydrogens: number }).hydrogens += 1;
+          }
+          oxoBranches = [];
+        } else if (units.length === 0) leadingHydrogens += count;
         else (units[units.length - 1] as { hydrogens: number }).hydrogens += count;
         continue;
       }
+      oxoBranches = [];
       // Halogens after an atom are its substituents, like hydrogens: CF3COOH, CCl3CH2OH.
       if (atomTraits(symbol).isHalogen && units.length > 0 && count > 1) {
-        for (let k = 0; k < count; k++) units[units.length - 1].branches.push([{ symbol, hydrogens: 0, branches: [] }]);
+        for (let k = 0; k < count; k++) units[units.length - 1].branches.push(single(symbol));
         continue;
       }
-      // NO2 after another atom is a nitro group: both oxygens on the nitrogen (CH3NO2 is
-      // CH3-NO2, not carbamic acid). A leading N (HNO2, HNO3) is left to the formula path, and
-      // NO2H to the open search.
+      // On after N, S, P or Se: the oxygens are on that atom (CH3NO2 is CH3-NO2, not carbamic
+      // acid; CH3SO2Cl is a sulfonyl chloride). A leading atom with leading hydrogens (HNO3,
+      // H2SO4) is left to the formula path, which puts the hydrogens on oxygen.
       const previous = units[units.length - 1];
       if (
         symbol === "O" &&
-        count === 2 &&
-        previous?.symbol === "N" &&
-        previous.hydrogens === 0 &&
+        count >= 2 &&
+        previous !== undefined &&
+        OXO_HOSTS.has(previous.symbol) &&
         previous.branches.length === 0 &&
-        (units.length >= 2 || closing !== undefined) &&
-        text[position] !== "H"
+        !(units.length === 1 && leadingHydrogensGiven)
       ) {
-        previous.branches.push([{ symbol, hydrogens: 0, branches: [] }], [{ symbol, hydrogens: 0, branches: [] }]);
+        for (let k = 0; k < count; k++) {
+          const oxygen = single(symbol);
+          previous.branches.push(oxygen);
+          oxoBranches.push(oxygen);
+        }
         continue;
       }
-      // "C2H5" hides its own connectivity; leave such formulas to the molecular-formula path.
+      // C2H5, C6H5: an alkyl or phenyl group written as one block.
+      if (symbol === "C" && count > 1 && text[position] === "H") {
+        const save = position;
+        position++;
+        const hydrogens = readCount();
+        const kind = carbonGroupKind(count, hydrogens);
+        if (kind === undefined || text[position] === "H") {
+          position = save;
+          return undefined;
+        }
+        pushUnit(kind === "phenyl" ? { symbol: "C", hydrogens: 0, branches: [], phenyl: true } : alkylUnit(count));
+        continue;
+      }
+      // Any other count hides its own connectivity; leave such formulas to the molecular-formula path.
       if (count !== 1) return undefined;
-      units.push({ symbol, hydrogens: 0, branches: [] });
+      pushUnit({ symbol, hydrogens: 0, branches: [] });
+    }
+    return closing === undefined ? finish() : undefined;
+
+    function pushUnit(unit: Unit): void {
+      units.push(unit);
       if (leadingHydrogens > 0) {
         (units[0] as { hydrogens: number }).hydrogens += leadingHydrogens;
         leadingHydrogens = 0;
+        leadingHydrogensGiven = true;
       }
     }
-    return closing === undefined ? finish() : undefined;
 
     function finish(): ParsedSequence | undefined {
       if (leadingHydrogens > 0) return undefined;
@@ -175,42 +248,82 @@ function cloneUnits(units: readonly Unit[]): Unit[] {
   return units.map((unit) => ({
     symbol: unit.symbol,
     hydrogens: unit.hydrogens,
-    branches: unit.branches.map(cloneUnits),
+    branches: unit.branches.map((branch) => ({ ...branch, units: cloneUnits(branch.units) })),
+    ...(unit.phenyl ? { phenyl: true } : {}),
   }));
 }
 
 interface FlatAtom {
   readonly symbol: string;
-  /** Fixed parent (branch roots, atoms of a group), or -1 when the search chooses it. */
-  readonly fixedParent: number;
-  /** Earlier atoms this one may bond to when its parent is open. */
+  /** Earlier atoms this one may bond to, the likeliest first; empty for the first atom. */
   readonly parentChoices: readonly number[];
   readonly hydrogens: number;
+  /**
+   * For the root of a later copy of a repeated group: the roots of the first, second and
+   * previous copies. Copies either all hang on one atom (C(CH3)4) or form a chain (CH3(CH2)4CH3).
+   */
+  readonly copyOf?: { readonly first: number; readonly second: number; readonly previous: number };
+}
+
+interface FlatFormula {
+  readonly atoms: FlatAtom[];
+  /** Bonds fixed apart from the tree of parents: the bond that closes a phenyl ring. */
+  readonly ringBonds: [number, number][];
 }
 
 /**
  * Lay the units out as atoms: heavy atoms in written order, hydrogens appended after them.
  * Returns undefined when the formula is too large to search.
  */
-function flatten(parsed: ParsedSequence): FlatAtom[] | undefined {
+function flatten(parsed: ParsedSequence): FlatFormula | undefined {
   const atoms: FlatAtom[] = [];
-  const placeSequence = (units: readonly Unit[], anchor: number): number[] => {
+  const ringBonds: [number, number][] = [];
+  // Returns the atoms later units of the same sequence may bond to.
+  const placeSequence = (units: readonly Unit[], anchorChoices: readonly number[]): number[] => {
     const placed: number[] = [];
     units.forEach((unit, k) => {
       const index = atoms.length;
-      const fixedParent = k === 0 ? anchor : -1;
-      atoms.push({ symbol: unit.symbol, fixedParent, parentChoices: [...placed], hydrogens: unit.hydrogens });
+      // Later atoms prefer the most recent one written: ties keep the chain as written.
+      const parentChoices = k === 0 ? anchorChoices : [...placed].reverse();
+      atoms.push({ symbol: unit.symbol, parentChoices, hydrogens: unit.hydrogens });
       placed.push(index);
-      for (const branch of unit.branches) placeSequence(branch, index);
+      if (unit.phenyl) {
+        let previous = index;
+        for (let ring = 0; ring < 5; ring++) {
+          atoms.push({ symbol: "C", parentChoices: [previous], hydrogens: 1 });
+          previous = atoms.length - 1;
+        }
+        ringBonds.push([previous, index]);
+      }
+      const copyRoots: number[] = [];
+      for (const branch of unit.branches) {
+        if (branch.copy === 0) copyRoots.length = 0;
+        // A written group may instead bond to an earlier atom (after a terminal =O: CO(NH2)2)
+        // or, repeated, to the copy before it (CH3(CH2)4CH3).
+        const choices = branch.written
+          ? [index, ...[...copyRoots].reverse(), ...placed.slice(0, -1).reverse()]
+          : [index];
+        const root = atoms.length;
+        placeSequence(branch.units, choices);
+        if (branch.written && branch.copy > 0) {
+          const copyOf = { first: copyRoots[0], second: copyRoots[1] ?? root, previous: copyRoots[copyRoots.length - 1] };
+          atoms[root] = { ...atoms[root], copyOf };
+        }
+        if (branch.written) {
+          copyRoots.push(root);
+          if (branch.copy > 0) placed.push(root);
+        }
+      }
     });
     return placed;
   };
   // Leading groups hang on the first atom of the main chain, whose index is not known yet:
-  // place the main chain first, then the leading groups anchored to its first atom.
-  const main = placeSequence(parsed.units, -1);
-  for (const branch of parsed.leadingBranches) placeSequence(branch, main[0]);
+  // place the main chain first, then the leading groups, each bonded by its last atom, the one
+  // written next to the chain: (CH3O)3PO is P bonded to three O.
+  const main = placeSequence(parsed.units, []);
+  for (const branch of parsed.leadingBranches) placeSequence([...branch].reverse(), [main[0]]);
   if (atoms.length > MAX_HEAVY_ATOMS) return undefined;
-  return atoms;
+  return { atoms, ringBonds };
 }
 
 /** Skeletons a condensed formula allows, or undefined when the text is not one. */
@@ -218,15 +331,21 @@ export function condensedSkeletons(formulaText: string): CandidateSkeleton[] | u
   const caret = formulaText.indexOf("^");
   const body = caret >= 0 ? formulaText.slice(0, caret) : formulaText;
   // CO2H and CO2- are the carboxyl group written short: C(=O)OH and C(=O)O-.
-  const parsed = parseCondensed(body.replace(/CO2(?=H|$|[-−+]|C)/g, "COO"));
+  // HOOC- and HO2C- are the same group written from the other side: HO-C(=O)-.
+  const parsed = parseCondensed(body.replace(/CO2(?=H|$|[-−+]|C)/g, "COO").replace(/HO(?:OC|2C)/g, "HOC(O)"));
   if (!parsed) return undefined;
-  const atoms = flatten(parsed);
-  if (!atoms || atoms.length < 2) return undefined;
+  const flat = flatten(parsed);
+  if (!flat || flat.atoms.length < 2) return undefined;
+  const { atoms, ringBonds } = flat;
 
   const heavyCount = atoms.length;
   const room = atoms.map((atom) => maxNeighbours(atom.symbol) - atom.hydrogens);
-  if (room.some((value) => value < 0)) return undefined;
   const used = new Array<number>(heavyCount).fill(0);
+  for (const [a, b] of ringBonds) {
+    used[a]++;
+    used[b]++;
+  }
+  if (room.some((value, atom) => value < used[atom])) return undefined;
   const parents = new Array<number>(heavyCount).fill(-1);
   const skeletons: CandidateSkeleton[] = [];
 
@@ -242,6 +361,7 @@ export function condensedSkeletons(formulaText: string): CandidateSkeleton[] | u
   const emit = () => {
     const bonds: [number, number][] = [];
     for (let atom = 1; atom < heavyCount; atom++) if (parents[atom] >= 0) bonds.push([parents[atom], atom]);
+    for (const bond of ringBonds) bonds.push(bond);
     hydrogenOwners.forEach((owner, k) => bonds.push([owner, heavyCount + k]));
     // The centre reported first is the atom with the most neighbours.
     const degree = new Array<number>(symbols.length).fill(0);
@@ -259,16 +379,14 @@ export function condensedSkeletons(formulaText: string): CandidateSkeleton[] | u
       emit();
       return;
     }
-    const flat = atoms[atom];
-    const fixed = flat.fixedParent;
-    const choices = atom === 0 && fixed < 0 ? [] : fixed >= 0 ? [fixed] : [...flat.parentChoices].reverse();
-    if (atom > 0 && choices.length === 0) return;
-    if (atom === 0 && fixed < 0) {
+    const { parentChoices: choices, copyOf } = atoms[atom];
+    if (atom === 0) {
       visit(1);
       return;
     }
     for (const parent of choices) {
       if (used[parent] >= room[parent] || used[atom] >= room[atom]) continue;
+      if (copyOf && !copyMayBondTo(copyOf, atom, parent)) continue;
       used[parent]++;
       used[atom]++;
       parents[atom] = parent;
@@ -277,6 +395,13 @@ export function condensedSkeletons(formulaText: string): CandidateSkeleton[] | u
       used[parent]--;
       used[atom]--;
     }
+  };
+  // A second copy picks the pattern (beside the first, or chained to it); later copies follow it.
+  const copyMayBondTo = (copyOf: NonNullable<FlatAtom["copyOf"]>, atom: number, parent: number): boolean => {
+    const besideFirst = parent === parents[copyOf.first];
+    const chained = parent === copyOf.previous;
+    if (copyOf.second === atom) return besideFirst || chained;
+    return parents[copyOf.second] === parents[copyOf.first] ? besideFirst : chained;
   };
   visit(0);
   return skeletons;

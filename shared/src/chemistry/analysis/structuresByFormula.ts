@@ -12,6 +12,13 @@ export interface KnownStructure {
   /** A condensed formula the reader understands, or a SMILES string when `smiles` is set. */
   readonly written: string;
   readonly smiles?: boolean;
+  /** What a chemist adds about this structure (the other tautomer, a bridged dimer). */
+  readonly note?: string;
+  /**
+   * Point group of the real molecule, for cages and rings whose model coordinates come out less
+   * symmetric than the molecule (S8 is a D4d crown): polarity then follows from it.
+   */
+  readonly pointGroup?: string;
 }
 
 // common practice: the ordinary stable compounds of these formulas
@@ -31,6 +38,44 @@ const SINGLE: Readonly<Record<string, KnownStructure>> = {
   F4N2: { name: "tetrafluorohydrazine", written: "FN(F)N(F)F", smiles: true },
   H6Si2: { name: "disilane", written: "[SiH3][SiH3]", smiles: true },
   Cl2O7: { name: "dichlorine heptoxide", written: "O=[Cl](=O)(=O)O[Cl](=O)(=O)=O", smiles: true },
+  // from memory: descriptive inorganic chemistry texts: the tautomers that dominate, the cages
+  // and rings of the elements and their oxides, and the bridged halide dimers
+  C2H2O4: { name: "oxalic acid", written: "OC(=O)C(=O)O", smiles: true },
+  H3O3P: {
+    name: "phosphorous acid",
+    written: "O[PH](=O)O",
+    smiles: true,
+    note: "Phosphorous acid is HP(O)(OH)2: one H sits on P and is not acidic, so the acid is diprotic. The P(OH)3 tautomer is a minor form.",
+  },
+  H3O2P: {
+    name: "hypophosphorous acid",
+    written: "O[PH2]=O",
+    smiles: true,
+    note: "Hypophosphorous acid is H2P(O)OH: two H sit on P and are not acidic, so the acid is monoprotic.",
+  },
+  P4: { name: "white phosphorus", written: "P12P3P1P23", smiles: true, pointGroup: "Td", note: "P4 is a tetrahedron of four P atoms, each bonded to the other three." },
+  O6P4: { name: "tetraphosphorus hexoxide", written: "O1P2OP3OP1OP(O2)O3", smiles: true, pointGroup: "Td", note: "P4O6 is a cage: an O bridges each edge of the P4 tetrahedron." },
+  O10P4: {
+    name: "tetraphosphorus decoxide",
+    written: "O=P12OP3(=O)OP(=O)(O1)OP(=O)(O2)O3",
+    smiles: true,
+    pointGroup: "Td",
+    note: "P4O10 is the P4O6 cage with one more O on each P.",
+  },
+  S8: { name: "cyclooctasulfur", written: "S1SSSSSSS1", smiles: true, pointGroup: "D4d", note: "S8 is a puckered ring of eight S atoms (a crown)." },
+  Cl6I2: {
+    name: "iodine trichloride dimer",
+    written: "Cl[I-]1(Cl)[Cl+][I-](Cl)(Cl)[Cl+]1",
+    smiles: true,
+    pointGroup: "D2h",
+    note: "I2Cl6 is a planar bridged dimer: two Cl atoms each bond to both I atoms, and each I is square planar.",
+  },
+  // from memory: the chain and dimeric oxoanions of descriptive inorganic chemistry texts
+  "C2O4^-2": { name: "oxalate", written: "[O-]C(=O)C(=O)[O-]", smiles: true },
+  "O5S2^-2": { name: "disulfite", written: "[O-]S(=O)S(=O)(=O)[O-]", smiles: true, note: "Disulfite (metabisulfite) has an S-S bond: O2S-SO3." },
+  "O6S2^-2": { name: "dithionate", written: "[O-]S(=O)(=O)S(=O)(=O)[O-]", smiles: true, note: "Dithionate has an S-S bond: O3S-SO3." },
+  "O8S2^-2": { name: "peroxodisulfate", written: "[O-]S(=O)(=O)OOS(=O)(=O)[O-]", smiles: true, note: "Peroxodisulfate has an O-O bond between its two SO3 groups: O3S-O-O-SO3." },
+  "O7P2^-4": { name: "diphosphate", written: "[O-]P(=O)([O-])OP(=O)([O-])[O-]", smiles: true, note: "Diphosphate (pyrophosphate) is two PO4 tetrahedra sharing one O: O3P-O-PO3." },
 };
 
 const SEVERAL: Readonly<Record<string, readonly KnownStructure[]>> = {
@@ -73,6 +118,20 @@ const SEVERAL: Readonly<Record<string, readonly KnownStructure[]>> = {
   ],
 };
 
+// from memory: descriptive inorganic chemistry texts on aluminium chloride (layer lattice with
+// six-coordinate Al in the solid; Cl-bridged Al2Cl6 in the melt and vapour; AlCl3 when hot)
+const REFUSED: Readonly<Record<string, string>> = {
+  Al2Cl6:
+    "Al2Cl6 is aluminium chloride's bridged dimer: two Cl atoms each bond to both Al atoms, which makes each Al roughly tetrahedral, " +
+    "but solid aluminium chloride is a layer lattice and the hot vapour is AlCl3, so the formula does not settle which form is meant. " +
+    "Write AlCl3 for the monomer or the SMILES of the dimer, Cl[Al-]1(Cl)[Cl+][Al-](Cl)(Cl)[Cl+]1.",
+};
+
+/** Why a formula with a well-known but phase-dependent structure is not analysed, if it is one. */
+export function refusalFor(composition: readonly FormulaPart[], charge: number): string | undefined {
+  return REFUSED[compositionKey(composition, charge)];
+}
+
 /** The structure a name means where the name vocabulary keeps one ("toluene" for C6H5CH3). */
 export function structureForName(name: string | undefined): KnownStructure | undefined {
   if (name === undefined) return undefined;
@@ -82,7 +141,7 @@ export function structureForName(name: string | undefined): KnownStructure | und
 }
 
 export function singleStructureFor(composition: readonly FormulaPart[], charge: number): KnownStructure | undefined {
-  return charge === 0 ? SINGLE[compositionKey(composition, 0)] : undefined;
+  return SINGLE[compositionKey(composition, charge)];
 }
 
 export function candidateStructuresFor(composition: readonly FormulaPart[], charge: number): readonly KnownStructure[] {

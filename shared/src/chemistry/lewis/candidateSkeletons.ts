@@ -10,6 +10,8 @@ import type { Skeleton } from "./chooseLewisStructure";
 
 export interface CandidateSkeleton extends Skeleton {
   readonly centre: number;
+  /** Set on the X-A-A-X chain, the one skeleton that is not a star. */
+  readonly pair?: boolean;
 }
 
 /** How many hydrogens an outer atom of each element may carry in these skeletons. */
@@ -62,7 +64,27 @@ export function candidateSkeletons(symbols: readonly string[]): CandidateSkeleto
       candidates.push({ symbols, bonds, centre });
     }
   }
+  const pair = pairSkeleton(symbols, heavy);
+  if (pair) candidates.push(pair);
   return candidates;
+}
+
+/**
+ * X-A-A-X (S2Cl2, N2F2, O2F2): two atoms of one element bonded to each other, the other atoms,
+ * all of them one-bond atoms (H, halogens), shared out evenly between the two.
+ */
+function pairSkeleton(symbols: readonly string[], heavy: readonly number[]): CandidateSkeleton | undefined {
+  const pair: number[] = [];
+  const ends: number[] = [];
+  for (let index = 0; index < symbols.length; index++) {
+    const traits = atomTraits(symbols[index]);
+    if (traits.isHydrogen || traits.isHalogen) ends.push(index);
+    else pair.push(index);
+  }
+  if (pair.length !== 2 || symbols[pair[0]] !== symbols[pair[1]] || ends.length === 0 || ends.length % 2 !== 0) return undefined;
+  const bonds: [number, number][] = [[pair[0], pair[1]]];
+  ends.forEach((end, k) => bonds.push([pair[k < ends.length / 2 ? 0 : 1], end]));
+  return { symbols, bonds, centre: pair[0], pair: true };
 }
 
 /**
