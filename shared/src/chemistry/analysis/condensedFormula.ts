@@ -84,7 +84,7 @@ function isOxoGroupAt(sequence: readonly { symbol: string; count?: number }[], i
     OXO_HOSTS.has(host.symbol) &&
     (host.count ?? 1) === 1 &&
     oxygen?.symbol === "O" &&
-    (oxygen.count ?? 1) >= 2
+    (host.symbol === "N" ? oxygen.count === 2 : (oxygen.count ?? 1) >= 2)
   );
 }
 
@@ -195,6 +195,8 @@ function parseCondensed(text: string): ParsedSequence | undefined {
         count >= 2 &&
         previous !== undefined &&
         OXO_HOSTS.has(previous.symbol) &&
+        // NO3 is a nitrate ion or ester (Pb(NO3)2, CH3ONO2), never three O on a carbon-bound N.
+        (previous.symbol !== "N" || count === 2) &&
         previous.branches.length === 0 &&
         !(units.length === 1 && leadingHydrogensGiven)
       ) {
