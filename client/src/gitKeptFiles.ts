@@ -5,6 +5,7 @@
  */
 import { execFile } from "node:child_process";
 import { relative, sep } from "node:path";
+import { gitCommandForUntrustedFolder } from "../../shared/src/index";
 
 /** Listing more than this is not a lab notebook; the check then goes by the editor's excludes alone. */
 const MAX_LISTING_BYTES = 64 * 1024 * 1024;
@@ -17,15 +18,16 @@ export interface GitKeptFiles {
 
 /**
  * What git keeps under `folder`, or undefined when `folder` is not in a git work tree, git is
- * missing or fails. Only call this for a trusted folder: git reads the repository's own
- * configuration, which can name programs to run.
+ * missing or fails. Safe for a folder nobody vouches for: git runs with every program the
+ * repository's configuration could name switched off.
  */
 export function gitKeptFiles(folder: string): Promise<GitKeptFiles | undefined> {
   return new Promise((done) => {
+    const git = gitCommandForUntrustedFolder(["ls-files", "-z", "--cached", "--others", "--exclude-standard"], process.env);
     execFile(
       "git",
-      ["ls-files", "-z", "--cached", "--others", "--exclude-standard"],
-      { cwd: folder, encoding: "utf8", maxBuffer: MAX_LISTING_BYTES, windowsHide: true },
+      [...git.args],
+      { cwd: folder, env: git.env, encoding: "utf8", maxBuffer: MAX_LISTING_BYTES, windowsHide: true },
       (error, listed) => {
         if (error) return done(undefined);
         // git prints paths relative to the folder it runs in, with forward slashes.

@@ -68,3 +68,7 @@ export {
 export type * from "./editorRequests";
 export { analysedTextOf, MAX_ANALYSED_LENGTH } from "./document/analysedText";
 export type { AnalysedText } from "./document/analysedText";
+
+// Workspaces: running git in a folder that may not be trusted.
+export { gitCommandForUntrustedFolder } from "./workspace/gitCommand";
+export type { GitCommand } from "./workspace/gitCommand";

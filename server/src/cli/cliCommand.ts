@@ -7,6 +7,11 @@
 export interface CliIo {
   readonly writeOut: (text: string) => void;
   readonly writeError: (text: string) => void;
+  /**
+   * Resolves once stdout has taken what was written (at once when nothing is backed up, or when
+   * the reader has gone), so a huge report does not pile up in memory.
+   */
+  readonly outputDrained?: () => Promise<void>;
   /** Decided once by the entry point (stdout is a terminal and NO_COLOR is unset). */
   readonly colour: boolean;
 }

@@ -16,6 +16,8 @@ import { countFinding, type CheckSummary } from "./checkSummary";
 import { applyFixes, chooseFixes, fixedOffsets } from "./chooseFixes";
 import { fixedFileWriter } from "./fixedFileWriter";
 import { locateFinding } from "./locatedFinding";
+import { temporaryFiles, type TemporaryFiles } from "./temporaryFiles";
+import { terminalSafe } from "../terminalText";
 import { diffHeader, diffHunks } from "./unifiedDiff";
 
 /** How to check. */
@@ -27,7 +29,12 @@ export interface CheckOptions {
   readonly ordinaryReading?: boolean;
   /** Bytes of table rows held at a time when reading as bytes (tests make it small). */
   readonly rowBufferBytes?: number;
+  /** Where fixing lists its temporary files, so that a signal can remove them. */
+  readonly temporaries?: TemporaryFiles;
 }
+
+/** Findings handed to the reporter at a time: a document with millions never makes one huge string. */
+const REPORT_CHUNK = 4096;
 
 /** Where a file's results go. */
 export interface CheckOutputs {
@@ -60,7 +67,7 @@ export async function checkFile(file: DocumentFile, options: CheckOptions, outpu
     if (quick.resume !== "start") resume = quick.resume;
   }
   const reading = readDocument(file.path, file.kind, options.batchCharacters, resume, file.encoding);
-  const writer = options.fix && !options.dryRun ? fixedFileWriter(file.path) : undefined;
+  const writer = options.fix && !options.dryRun ? await fixedFileWriter(file.path, options.temporaries ?? temporaryFiles()) : undefined;
   let fixing = options.fix;
   let fixedHere = 0;
   let lineShift = 0;
@@ -85,11 +92,11 @@ export async function checkFile(file: DocumentFile, options: CheckOptions, outpu
         const fixes = fixed.map((finding) => finding.fix);
         const fixedText = applyFixes(batch.text, fixes);
         if (options.dryRun && fixes.length > 0) {
-          if (!headerWritten) outputs.writeDiff(diffHeader(file.displayPath));
+          if (!headerWritten) outputs.writeDiff(diffHeader(terminalSafe(file.displayPath)));
           headerWritten = true;
           outputs.writeDiff(diffHunks(batch.text, batch.lines, fixes, lineShift).text);
         }
-        await writer?.add(batch.byteOffset, fixedText, fixes.length > 0);
+        await writer?.add(batch.byteOffset, batch.text, fixedText, fixes.length > 0);
         fixedHere += fixes.length;
         if (fixes.length > 0) {
           const moved = movedLines(batch, fixedText, lineShift);
@@ -102,8 +109,12 @@ export async function checkFile(file: DocumentFile, options: CheckOptions, outpu
         }
       }
       foundHere += reported.length;
-      for (const finding of reported) countFinding(outputs.summary, finding.severity);
-      outputs.reporter.findings(reported.map((finding) => locateFinding(file.displayPath, lines, finding)));
+      for (let start = 0; start < reported.length; start += REPORT_CHUNK) {
+        const chunk = reported.length <= REPORT_CHUNK ? reported : reported.slice(start, start + REPORT_CHUNK);
+        for (const finding of chunk) countFinding(outputs.summary, finding.severity);
+        outputs.reporter.findings(chunk.map((finding) => locateFinding(file.displayPath, lines, finding)));
+        if (start + REPORT_CHUNK < reported.length) await outputs.drain?.();
+      }
       outputs.progress(batch.byteOffset + (utf8 ? Buffer.byteLength(batch.text) : 2 * batch.text.length));
       await outputs.drain?.();
     }

@@ -12,11 +12,13 @@ export interface CheckSummary {
   notes: number;
   fixedFindings: number;
   fixedFiles: number;
+  /** Files and folders that could not be read (or fixed): the run then fails with status 2. */
+  unreadable: number;
 }
 
 /** A summary with every count at zero. */
 export function emptySummary(): CheckSummary {
-  return { filesChecked: 0, filesWithFindings: 0, errors: 0, warnings: 0, notes: 0, fixedFindings: 0, fixedFiles: 0 };
+  return { filesChecked: 0, filesWithFindings: 0, errors: 0, warnings: 0, notes: 0, fixedFindings: 0, fixedFiles: 0, unreadable: 0 };
 }
 
 /** Adds one finding of `severity` to `summary`. */
@@ -26,8 +28,18 @@ export function countFinding(summary: CheckSummary, severity: FindingSeverity): 
   else summary.notes++;
 }
 
-/** "1 error, 5 warnings and 2 notes in 4 of 5 files" or "No findings in 5 files". */
+/**
+ * "1 error, 5 warnings and 2 notes in 4 of 5 files checked." or "No findings in 5 files
+ * checked.", followed by how many could not be read when any could not.
+ */
 export function summaryLine(summary: CheckSummary): string {
+  const checked = checkedLine(summary);
+  if (summary.unreadable === 0) return checked;
+  const failed = summary.unreadable === 1 ? "1 file or folder" : `${summary.unreadable} files or folders`;
+  return `${checked} ${failed} could not be read or fixed: see the messages above.`;
+}
+
+function checkedLine(summary: CheckSummary): string {
   const files = `${summary.filesChecked} ${summary.filesChecked === 1 ? "file" : "files"}`;
   const parts = [
     plural(summary.errors, "error"),

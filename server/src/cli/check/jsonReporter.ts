@@ -4,17 +4,26 @@
  * columns 1-based (columns in UTF-16 code units, end exclusive); a fix has the same position
  * fields plus newText and title.
  */
+import { jsonTerminalSafe } from "../terminalText";
 import type { CheckReporter } from "./checkReporter";
 
-/** A reporter writing a JSON array to `write`. */
+/** Items joined into one write: big enough to write quickly, far from the longest string. */
+const ITEMS_PER_WRITE = 4096;
+
+/**
+ * A reporter writing a JSON array to `write`, a slice of items at a time. C1 controls are escaped
+ * as well as JSON's own, so the report is safe to print on a terminal.
+ */
 export function jsonReporter(write: (text: string) => void): CheckReporter {
   let written = 0;
   return {
     findings(found) {
-      if (found.length === 0) return;
-      const items = found.map((finding) => `  ${JSON.stringify(finding)}`);
-      write(`${written === 0 ? "[\n" : ",\n"}${items.join(",\n")}`);
-      written += found.length;
+      for (let start = 0; start < found.length; start += ITEMS_PER_WRITE) {
+        const slice = found.length <= ITEMS_PER_WRITE ? found : found.slice(start, start + ITEMS_PER_WRITE);
+        const items = slice.map((finding) => `  ${JSON.stringify(finding)}`);
+        write(jsonTerminalSafe(`${written === 0 ? "[\n" : ",\n"}${items.join(",\n")}`));
+        written += slice.length;
+      }
     },
     end() {
       write(written === 0 ? "[]\n" : "\n]\n");

@@ -5,6 +5,7 @@
 import type { FindingSeverity } from "../../../../shared/src/index";
 import { MODEL_CAUTION } from "../../../../shared/src/index";
 import { cardStyle } from "../terminalStyle";
+import { terminalSafe } from "../terminalText";
 import type { CheckReporter } from "./checkReporter";
 import { fixedLine, summaryLine } from "./checkSummary";
 
@@ -13,18 +14,36 @@ export function severityWord(severity: FindingSeverity): "error" | "warning" | "
   return severity === "error" ? "error" : severity === "warning" ? "warning" : "note";
 }
 
-/** A reporter writing text to `write`, coloured when `colour` is set. */
+/** Lines joined into one write: big enough to write quickly, far from the longest string. */
+const LINES_PER_WRITE = 4096;
+
+/**
+ * A reporter writing text to `write`, coloured when `colour` is set. File names, messages (which
+ * quote cells) and codes are made terminal safe, so every finding stays on one line and no text
+ * from a document reaches the terminal as a control sequence.
+ */
 export function textReporter(write: (text: string) => void, colour: boolean): CheckReporter {
   const style = cardStyle(colour);
   const paint = { error: style.error, warning: style.warning, note: style.muted };
+  let lastFile = "";
+  let lastFileShown = "";
   return {
     findings(found) {
-      if (found.length === 0) return;
-      const lines = found.map((finding) => {
+      let lines = "";
+      for (let index = 0; index < found.length; index++) {
+        const finding = found[index];
+        if (finding.file !== lastFile) {
+          lastFile = finding.file;
+          lastFileShown = terminalSafe(finding.file);
+        }
         const word = severityWord(finding.severity);
-        return `${finding.file}:${finding.line}:${finding.column}: ${paint[word](word)}: ${finding.message} [${finding.code}]\n`;
-      });
-      write(lines.join(""));
+        lines += `${lastFileShown}:${finding.line}:${finding.column}: ${paint[word](word)}: ${terminalSafe(finding.message)} [${terminalSafe(finding.code)}]\n`;
+        if ((index + 1) % LINES_PER_WRITE === 0) {
+          write(lines);
+          lines = "";
+        }
+      }
+      if (lines.length > 0) write(lines);
     },
     end(summary, fixing) {
       const lines = [];

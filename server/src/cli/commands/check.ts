@@ -2,7 +2,6 @@
  * `lonepair check [options] <files or folders...>`: every finding the editor would show, for CI.
  * Exit 0 clean, 1 errors found (or warnings with --strict), 2 usage or I/O error.
  */
-import { once } from "node:events";
 import { parseArgs } from "node:util";
 import { version } from "../../../../package.json";
 import { checkFile } from "../check/checkFile";
@@ -11,10 +10,12 @@ import { emptySummary, fixedLine, summaryLine } from "../check/checkSummary";
 import { jsonReporter } from "../check/jsonReporter";
 import { progressIndicator, wantsProgress } from "../check/progressIndicator";
 import { sarifReporter } from "../check/sarifReporter";
+import { removeOnSignals, temporaryFiles } from "../check/temporaryFiles";
 import { textReporter } from "../check/textReporter";
 import type { CliCommand, CliIo } from "../cliCommand";
 import { EXIT_FAILURE, EXIT_OK, EXIT_USAGE } from "../cliCommand";
 import { findDocuments, ioMessage } from "../documents/findDocuments";
+import { terminalSafe, terminalSafeLines } from "../terminalText";
 
 const HELP = `Usage: lonepair check [options] <files or folders...>
 
@@ -73,43 +74,50 @@ async function runCheck(args: readonly string[], io: CliIo): Promise<number> {
   if (positionals.length === 0) return usageError(io, "give at least one file or folder");
 
   const found = findDocuments(positionals);
-  for (const missing of found.missing) io.writeError(`lonepair check: ${missing.path}: ${missing.message}\n`);
+  for (const unreadable of found.unreadable) io.writeError(`lonepair check: ${unreadable.path}: ${unreadable.message}\n`);
   for (const skipped of found.skipped) io.writeError(`lonepair check: ${skipped}: not a markdown, text, CSV/TSV, JSON or YAML file; skipped\n`);
 
   const fixing = values.fix === true;
   const dryRun = values["dry-run"] === true;
   const reporter = reporterFor(format, io, dryRun);
   const summary = emptySummary();
+  summary.unreadable = found.unreadable.length;
+  const temporaries = temporaryFiles();
+  const stopCleaning = fixing && !dryRun ? removeOnSignals(temporaries) : () => undefined;
   const totalBytes = found.files.reduce((total, file) => total + file.size, 0);
   const progress = progressIndicator(
     wantsProgress(process.stderr.isTTY === true, process.env, totalBytes, found.files.length),
     io.writeError,
     "lonepair check",
   );
-  let ioFailed = found.missing.length > 0;
   let bytesBefore = 0;
-  for (const file of found.files) {
-    try {
-      await checkFile(file, { fix: fixing, dryRun }, {
-        reporter,
-        summary,
-        writeDiff: io.writeOut,
-        progress: (done) => progress.update(bytesBefore + done, totalBytes, file.displayPath),
-        note: (message) => io.writeError(`lonepair check: ${message}\n`),
-        drain: stdoutDrained,
-      });
-    } catch (error) {
-      progress.finish();
-      io.writeError(`lonepair check: ${file.displayPath}: ${ioMessage(error)}\n`);
-      ioFailed = true;
+  try {
+    for (const file of found.files) {
+      try {
+        await checkFile(file, { fix: fixing, dryRun, temporaries }, {
+          reporter,
+          summary,
+          // A diff piped on is data for patch and must keep the file's bytes; a terminal sees them escaped.
+          writeDiff: process.stdout.isTTY === true ? (text) => io.writeOut(terminalSafeLines(text)) : io.writeOut,
+          progress: (done) => progress.update(bytesBefore + done, totalBytes, terminalSafe(file.displayPath)),
+          note: (message) => io.writeError(`lonepair check: ${terminalSafe(message)}\n`),
+          drain: io.outputDrained,
+        });
+      } catch (error) {
+        progress.finish();
+        io.writeError(`lonepair check: ${terminalSafe(file.displayPath)}: ${ioMessage(error)}\n`);
+        summary.unreadable++;
+      }
+      bytesBefore += file.size;
     }
-    bytesBefore += file.size;
+  } finally {
+    stopCleaning();
   }
   progress.finish();
   reporter.end(summary, fixing);
   if (fixing && !dryRun && format !== "text") io.writeError(`${fixedLine(summary, dryRun)}\n`);
 
-  if (ioFailed) return EXIT_USAGE;
+  if (summary.unreadable > 0) return EXIT_USAGE;
   const failed = summary.errors > 0 || (values.strict === true && summary.warnings > 0);
   return failed ? EXIT_FAILURE : EXIT_OK;
 }
@@ -128,11 +136,6 @@ function reporterFor(format: Format, io: CliIo, dryRun: boolean): CheckReporter 
   if (format === "json") return jsonReporter(io.writeOut);
   if (format === "sarif") return sarifReporter(io.writeOut, version);
   return textReporter(io.writeOut, io.colour);
-}
-
-/** Resolves once stdout has taken what was written (at once when nothing is backed up). */
-async function stdoutDrained(): Promise<void> {
-  if (process.stdout.writableNeedDrain) await once(process.stdout, "drain");
 }
 
 function usageError(io: CliIo, message: string): number {

@@ -7,6 +7,7 @@ import type { CliCommand, CliIo } from "../cliCommand";
 import { EXIT_OK, EXIT_USAGE } from "../cliCommand";
 import { speciesInFile } from "../documents/documentSpecies";
 import { findDocuments, ioMessage } from "../documents/findDocuments";
+import { jsonTerminalSafe, terminalSafe } from "../terminalText";
 
 const HELP = `Usage: lonepair list [--json] <files or folders...>
 
@@ -45,9 +46,9 @@ async function runList(args: readonly string[], io: CliIo): Promise<number> {
     return EXIT_USAGE;
   }
   const found = findDocuments(parsed.positionals);
-  for (const missing of found.missing) io.writeError(`lonepair list: ${missing.path}: ${missing.message}\n`);
+  for (const unreadable of found.unreadable) io.writeError(`lonepair list: ${unreadable.path}: ${unreadable.message}\n`);
   for (const skipped of found.skipped) io.writeError(`lonepair list: ${skipped}: not a markdown, text, CSV/TSV, JSON or YAML file; skipped\n`);
-  let failed = found.missing.length > 0;
+  let failed = found.unreadable.length > 0;
   const json = parsed.values.json === true;
   let written = 0;
   for (const file of found.files) {
@@ -66,14 +67,18 @@ async function runList(args: readonly string[], io: CliIo): Promise<number> {
               charge: species.occurrence.reading.charge,
             })}`,
           );
-          io.writeOut(`${written === 0 ? "[\n" : ",\n"}${items.join(",\n")}`);
+          io.writeOut(jsonTerminalSafe(`${written === 0 ? "[\n" : ",\n"}${items.join(",\n")}`));
         } else {
-          io.writeOut(batch.map((species) => `${species.file}:${species.line}:${species.column}: ${species.text} (${describe(species.occurrence.reading)})\n`).join(""));
+          io.writeOut(
+            batch
+              .map((species) => terminalSafe(`${species.file}:${species.line}:${species.column}: ${species.text} (${describe(species.occurrence.reading)})`) + "\n")
+              .join(""),
+          );
         }
         written += batch.length;
       }
     } catch (error) {
-      io.writeError(`lonepair list: ${file.displayPath}: ${ioMessage(error)}\n`);
+      io.writeError(`lonepair list: ${terminalSafe(file.displayPath)}: ${ioMessage(error)}\n`);
       failed = true;
     }
   }

@@ -11,6 +11,7 @@ import type { CliCommand, CliIo } from "../cliCommand";
 import { EXIT_FAILURE, EXIT_OK, EXIT_USAGE } from "../cliCommand";
 import { speciesInFile } from "../documents/documentSpecies";
 import { findDocuments, ioMessage } from "../documents/findDocuments";
+import { terminalSafe, terminalSafeLines } from "../terminalText";
 
 const HELP = `Usage: lonepair table [--format md|csv] <files, folders or species...>
 
@@ -60,13 +61,13 @@ async function runTable(args: readonly string[], io: CliIo): Promise<number> {
       continue;
     }
     const found = findDocuments([argument]);
-    for (const missing of found.missing) io.writeError(`lonepair table: ${missing.path}: ${missing.message}\n`);
-    failed ||= found.missing.length > 0;
+    for (const unreadable of found.unreadable) io.writeError(`lonepair table: ${unreadable.path}: ${unreadable.message}\n`);
+    failed ||= found.unreadable.length > 0;
     for (const file of found.files) {
       try {
         for await (const batch of speciesInFile(file)) for (const species of batch) collected.addOccurrence(species.occurrence);
       } catch (error) {
-        io.writeError(`lonepair table: ${file.displayPath}: ${ioMessage(error)}\n`);
+        io.writeError(`lonepair table: ${terminalSafe(file.displayPath)}: ${ioMessage(error)}\n`);
         failed = true;
       }
     }
@@ -75,10 +76,10 @@ async function runTable(args: readonly string[], io: CliIo): Promise<number> {
   const format = requested === "csv" ? "csv" : "markdown";
   const analyses = collected.analyses;
   if (analyses.length > 0) {
-    io.writeOut(summaryTable({ analyses, unanalysed: collected.unanalysed, format, angleDecimals: ANGLE_DECIMALS }));
+    io.writeOut(terminalSafeLines(summaryTable({ analyses, unanalysed: collected.unanalysed, format, angleDecimals: ANGLE_DECIMALS })));
   }
   if (format === "csv" || analyses.length === 0) {
-    for (const item of collected.unanalysed) io.writeError(`lonepair table: not analysed: ${item.text}: ${item.message}\n`);
+    for (const item of collected.unanalysed) io.writeError(`lonepair table: not analysed: ${terminalSafe(item.text)}: ${terminalSafe(item.message)}\n`);
     if (analyses.length > 0) io.writeError(`${MODEL_CAUTION}\n`);
   }
   if (failed) return EXIT_USAGE;

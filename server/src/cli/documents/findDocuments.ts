@@ -2,13 +2,17 @@
  * Turns the paths on a command line into the documents to read: files as given, folders
  * searched for markdown, text, CSV/TSV, JSON and YAML files. Inside a git work tree a folder is
  * listed by git, so .gitignore is respected; elsewhere (or without git) a plain walk skips
- * node_modules and dot-folders. Binary files are never documents.
+ * node_modules and dot-folders. Binary files are never documents. Whatever could not be read is
+ * reported, never passed over in silence: a named path always, a file in a folder when its
+ * extension makes it a document, and every folder that could not be listed.
  */
+import { isUtf8 } from "node:buffer";
 import { execFileSync } from "node:child_process";
 import { closeSync, openSync, readdirSync, readSync, statSync } from "node:fs";
 import { join, relative, resolve, sep } from "node:path";
-import { documentKindFor } from "../../../../shared/src/index";
+import { documentKindFor, gitCommandForUntrustedFolder } from "../../../../shared/src/index";
 import type { DocumentKind } from "../../../../shared/src/index";
+import { displayBytes, terminalSafe } from "../terminalText";
 
 /** A file to read, with the path to show for it. */
 export interface DocumentFile {
@@ -33,29 +37,53 @@ export function encodingOf(start: Uint8Array): TextEncoding {
 /** What was found, and what could not be read or was skipped. */
 export interface FoundDocuments {
   readonly files: readonly DocumentFile[];
-  /** Paths that do not exist or cannot be read: an I/O error for the caller. */
-  readonly missing: readonly { path: string; message: string }[];
+  /**
+   * Paths that do not exist, or documents and folders that cannot be read (permissions, a path
+   * too long for the system, a name that is not valid UTF-8): an I/O error for the caller.
+   * `path` is ready for a terminal (control characters and bytes that are not UTF-8 escaped).
+   */
+  readonly unreadable: readonly UnreadablePath[];
   /** Files named on the command line that are not documents lonepair reads. */
   readonly skipped: readonly string[];
+}
+
+/** A path that could not be read, and why, in plain words. */
+export interface UnreadablePath {
+  readonly path: string;
+  readonly message: string;
 }
 
 /** Enough of the start of a file to tell binary from text and a table saved as .txt from prose. */
 const PROBE_BYTES = 8192;
 const SNIFF_CHARACTERS = 4096;
 
-/** Finds the documents under `paths`, in the order given, folders sorted, each file once. */
+/** A folder entry: its path as text, or as bytes when the name is not valid UTF-8. */
+type ListedPath = string | Buffer;
+
+/**
+ * Finds the documents under `paths`, in the order given, folders sorted, each file once. Never
+ * runs a program from the folders searched (see `gitListing`).
+ */
 export function findDocuments(paths: readonly string[], workingDirectory = process.cwd()): FoundDocuments {
   const files: DocumentFile[] = [];
-  const missing: { path: string; message: string }[] = [];
+  const unreadable: UnreadablePath[] = [];
   const skipped: string[] = [];
   const seen = new Set<string>();
-  const add = (path: string, named: boolean): void => {
+  const add = (path: ListedPath, named: boolean): void => {
+    if (typeof path !== "string") {
+      // Node reads such a name only as bytes; every step after this one works on text.
+      const shown = displayBytes(Buffer.from(relativeBytes(path, workingDirectory)));
+      if (named || documentKindFor(path.toString("utf8"))) unreadable.push({ path: shown, message: "the file name is not valid UTF-8; not checked" });
+      return;
+    }
     const absolute = resolve(workingDirectory, path);
     if (seen.has(absolute)) return;
     seen.add(absolute);
     const file = documentFile(absolute, workingDirectory);
-    if (file) files.push(file);
-    else if (named) skipped.push(displayPathOf(absolute, workingDirectory));
+    if (file.kind === "document") files.push(file.document);
+    else if (file.kind === "unreadable") {
+      if (named || documentKindFor(absolute)) unreadable.push({ path: terminalSafe(displayPathOf(absolute, workingDirectory)), message: ioMessage(file.error) });
+    } else if (named) skipped.push(terminalSafe(displayPathOf(absolute, workingDirectory)));
   };
   for (const path of paths) {
     const absolute = resolve(workingDirectory, path);
@@ -63,16 +91,21 @@ export function findDocuments(paths: readonly string[], workingDirectory = proce
     try {
       stats = statSync(absolute);
     } catch (error) {
-      missing.push({ path, message: ioMessage(error) });
+      unreadable.push({ path: terminalSafe(path), message: ioMessage(error) });
       continue;
     }
     if (stats.isDirectory()) {
-      for (const found of filesUnder(absolute).sort(comparePaths)) add(found, false);
+      const listed = filesUnder(absolute);
+      for (const folder of listed.unreadableFolders) {
+        const shown = typeof folder.path === "string" ? terminalSafe(displayPathOf(folder.path, workingDirectory)) : displayBytes(relativeBytes(folder.path, workingDirectory));
+        unreadable.push({ path: shown, message: `folder not searched: ${folder.message}` });
+      }
+      for (const found of listed.files.sort(comparePaths)) add(found, false);
     } else {
       add(absolute, true);
     }
   }
-  return { files, missing, skipped };
+  return { files, unreadable, skipped };
 }
 
 /** A plain message for a failed file operation: "no such file or directory" rather than a stack. */
@@ -81,7 +114,9 @@ export function ioMessage(error: unknown): string {
   if (code === "ENOENT") return "no such file or directory";
   if (code === "EACCES" || code === "EPERM") return "permission denied";
   if (code === "EISDIR") return "is a folder";
-  return error instanceof Error ? error.message : String(error);
+  if (code === "ENAMETOOLONG") return "the path is longer than the system allows";
+  if (code === "ELOOP") return "too many symbolic links (a link loop?)";
+  return terminalSafe(error instanceof Error ? error.message : String(error));
 }
 
 /** The path relative to the working directory, with forward slashes. */
@@ -90,29 +125,45 @@ export function displayPathOf(absolute: string, workingDirectory = process.cwd()
   return sep === "/" ? shown : shown.split(sep).join("/");
 }
 
-function comparePaths(a: string, b: string): number {
+/** A path given as bytes, relative to the working directory when it lies under it. */
+function relativeBytes(path: Buffer, workingDirectory: string): Buffer {
+  const prefix = Buffer.from(workingDirectory.endsWith(sep) ? workingDirectory : workingDirectory + sep);
+  return path.subarray(0, prefix.length).equals(prefix) ? path.subarray(prefix.length) : path;
+}
+
+function comparePaths(a: ListedPath, b: ListedPath): number {
+  if (typeof a !== "string" || typeof b !== "string") return Buffer.compare(Buffer.from(a), Buffer.from(b));
   return a < b ? -1 : a > b ? 1 : 0;
 }
 
-function documentFile(absolute: string, workingDirectory: string): DocumentFile | undefined {
+type FileVerdict =
+  | { readonly kind: "document"; readonly document: DocumentFile }
+  | { readonly kind: "unreadable"; readonly error: unknown }
+  | { readonly kind: "other" };
+
+const OTHER: FileVerdict = { kind: "other" };
+
+function documentFile(absolute: string, workingDirectory: string): FileVerdict {
   let size: number;
   let start: Buffer;
   try {
     const stats = statSync(absolute);
-    if (!stats.isFile()) return undefined;
+    if (!stats.isFile()) return OTHER;
     size = stats.size;
     start = readStart(absolute);
-  } catch {
-    return undefined;
+  } catch (error) {
+    // Gone since it was listed (git still indexes a deleted file) or a link to nothing: nothing to read.
+    if ((error as NodeJS.ErrnoException)?.code === "ENOENT") return OTHER;
+    return { kind: "unreadable", error };
   }
   const encoding = encodingOf(start);
   // NUL bytes mark a binary file, except in UTF-16, where every ASCII character has one.
-  if (encoding === "utf-8" && start.includes(0)) return undefined;
+  if (encoding === "utf-8" && start.includes(0)) return OTHER;
   const text = encoding === "utf-8" ? start.toString("utf8") : new TextDecoder(encoding).decode(start);
   const kind = documentKindFor(absolute, undefined, text.slice(0, SNIFF_CHARACTERS));
-  if (!kind) return undefined;
+  if (!kind) return OTHER;
   const file: DocumentFile = { path: absolute, displayPath: displayPathOf(absolute, workingDirectory), kind, size };
-  return encoding === "utf-8" ? file : { ...file, encoding };
+  return { kind: "document", document: encoding === "utf-8" ? file : { ...file, encoding } };
 }
 
 function readStart(path: string): Buffer {
@@ -126,49 +177,74 @@ function readStart(path: string): Buffer {
   }
 }
 
-/** Every file under `folder`: from git when the folder is in a work tree, else by walking. */
-function filesUnder(folder: string): string[] {
-  return filesFromGit(folder) ?? filesByWalking(folder);
+/** What a folder holds: its files, and the folders under it that could not be listed. */
+interface FolderListing {
+  readonly files: ListedPath[];
+  readonly unreadableFolders: { readonly path: ListedPath; readonly message: string }[];
 }
 
-function filesFromGit(folder: string): string[] | undefined {
+/** Every file under `folder`: from git when the folder is in a work tree, else by walking. */
+function filesUnder(folder: string): FolderListing {
+  const listed = gitListing(folder);
+  return listed ? { files: listed, unreadableFolders: [] } : filesByWalking(folder);
+}
+
+/**
+ * The files git keeps under `folder` (tracked, or untracked and not ignored), or undefined
+ * outside a work tree or without git. The folder may be anyone's repository, so git runs with
+ * every program its configuration could name switched off (`gitCommandForUntrustedFolder`).
+ */
+function gitListing(folder: string): ListedPath[] | undefined {
+  const git = (args: readonly string[], maxBuffer: number): Buffer => {
+    const command = gitCommandForUntrustedFolder(args, process.env);
+    return execFileSync("git", command.args, { cwd: folder, env: command.env, stdio: ["ignore", "pipe", "ignore"], maxBuffer });
+  };
   try {
-    const inside = execFileSync("git", ["rev-parse", "--is-inside-work-tree"], { cwd: folder, encoding: "utf8", stdio: ["ignore", "pipe", "ignore"] });
-    if (inside.trim() !== "true") return undefined;
-    const listed = execFileSync("git", ["ls-files", "-z", "--cached", "--others", "--exclude-standard"], {
-      cwd: folder,
-      encoding: "utf8",
-      stdio: ["ignore", "pipe", "ignore"],
-      maxBuffer: 1 << 30,
-    });
-    // Paths come relative to the folder; deleted but still indexed files fail the stat later.
-    return listed.split("\0").filter((path) => path.length > 0).map((path) => join(folder, path));
+    if (git(["rev-parse", "--is-inside-work-tree"], 1 << 16).toString("utf8").trim() !== "true") return undefined;
+    const listed = git(["ls-files", "-z", "--cached", "--others", "--exclude-standard"], 1 << 30);
+    // Paths come relative to the folder as bytes; deleted but still indexed files fail the stat later.
+    const files: ListedPath[] = [];
+    let start = 0;
+    for (let end = listed.indexOf(0); end >= 0; start = end + 1, end = listed.indexOf(0, start)) {
+      if (end > start) files.push(listedPath(folder, listed.subarray(start, end)));
+    }
+    return files;
   } catch {
     // No git, or not a work tree.
     return undefined;
   }
 }
 
-function filesByWalking(folder: string): string[] {
-  const files: string[] = [];
+/** `folder` joined with `name` (bytes): as text when the name is UTF-8, else as bytes. */
+function listedPath(folder: string, name: Buffer): ListedPath {
+  return isUtf8(name) ? join(folder, name.toString("utf8")) : Buffer.concat([Buffer.from(folder + sep), name]);
+}
+
+function filesByWalking(folder: string): FolderListing {
+  const files: ListedPath[] = [];
+  const unreadableFolders: { path: ListedPath; message: string }[] = [];
   const pending = [folder];
   while (pending.length > 0) {
     const current = pending.pop()!;
     let entries;
     try {
-      entries = readdirSync(current, { withFileTypes: true });
-    } catch {
+      entries = readdirSync(current, { withFileTypes: true, encoding: "buffer" });
+    } catch (error) {
+      unreadableFolders.push({ path: current, message: ioMessage(error) });
       continue;
     }
     for (const entry of entries) {
-      const path = join(current, entry.name);
+      const path = listedPath(current, entry.name);
+      const name = entry.name.toString("utf8");
       // Symbolic links to folders are not followed, so a link loop cannot trap the walk.
       if (entry.isDirectory()) {
-        if (entry.name !== "node_modules" && !entry.name.startsWith(".")) pending.push(path);
+        if (name === "node_modules" || name.startsWith(".")) continue;
+        if (typeof path === "string") pending.push(path);
+        else unreadableFolders.push({ path, message: "the folder name is not valid UTF-8" });
       } else if (entry.isFile() || entry.isSymbolicLink()) {
         files.push(path);
       }
     }
   }
-  return files;
+  return { files, unreadableFolders };
 }
