@@ -5,7 +5,7 @@
  */
 import { execFile } from "node:child_process";
 import { relative, sep } from "node:path";
-import { gitCommandForUntrustedFolder } from "../../shared/src/index";
+import { gitCommandForUntrustedFolder } from "./untrustedGit";
 
 /** Listing more than this is not a lab notebook; the check then goes by the editor's excludes alone. */
 const MAX_LISTING_BYTES = 64 * 1024 * 1024;

@@ -7,6 +7,8 @@ import { tmpdir } from "node:os";
 import { join } from "node:path";
 import { beforeAll, describe, expect, it } from "vitest";
 import { gitKeptFiles } from "../../client/src/gitKeptFiles";
+import { gitCommandForUntrustedFolder as clientGitCommand } from "../../client/src/untrustedGit";
+import { gitCommandForUntrustedFolder } from "../../shared/src/index";
 import { ensureBuilt, runCli } from "./cliRunner";
 
 beforeAll(ensureBuilt);
@@ -82,5 +84,22 @@ describe("check on a folder with a planted git configuration", () => {
     expect(kept?.keeps(join(folder, "cylinders.csv"))).toBe(true);
     expect(kept?.keeps(join(folder, "scratch.md"))).toBe(false);
     rmSync(folder, { recursive: true, force: true });
+  });
+});
+
+describe("the git command for a folder that is not trusted", () => {
+  const environment = { PATH: "/usr/bin", HOME: "/home/kestrel", GIT_DIR: "/elsewhere/.git", GIT_EXTERNAL_DIFF: "/tmp/x" };
+
+  it("is the same in the editor client (a copy, as the client bundles no core) and the core", () => {
+    expect(clientGitCommand(["ls-files"], environment)).toEqual(gitCommandForUntrustedFolder(["ls-files"], environment));
+  });
+
+  it("points git at no other repository or program from the environment", () => {
+    const command = gitCommandForUntrustedFolder(["ls-files"], environment);
+    expect(command.env.GIT_DIR).toBeUndefined();
+    expect(command.env.GIT_EXTERNAL_DIFF).toBeUndefined();
+    expect(command.env.PATH).toBe("/usr/bin");
+    expect(command.env.GIT_CONFIG_NOSYSTEM).toBe("1");
+    expect(command.args.at(-1)).toBe("ls-files");
   });
 });
