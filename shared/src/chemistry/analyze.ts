@@ -14,6 +14,7 @@ import { smilesStructure } from "./analysis/fromSmiles";
 import { boundedMemo } from "./boundedMemo";
 import { candidateStructuresFor, refusalFor, singleStructureFor, structureForName } from "./analysis/structuresByFormula";
 
+// Bound: 20,000 analyses, the oldest generation forgotten first (see boundedMemo).
 const MEMO_LIMIT = 20_000;
 const memo = boundedMemo<AnalysisResult>(MEMO_LIMIT);
 

@@ -73,6 +73,18 @@ export function countValenceElectrons(symbols: readonly string[], charge: number
   return total;
 }
 
+/** A Lewis search with scratch arrays of its own, reused from call to call. */
+export interface LewisSearch {
+  /** The best Lewis structure of `skeleton` with net `charge`, or why there is none. */
+  choose(skeleton: Skeleton, charge: number): LewisOutcome;
+}
+
+/**
+ * Creates a search and its scratch state. The state is this search's alone: two searches never
+ * share arrays, and a search asked again while it runs (which the analysis never does) answers
+ * with a fresh search rather than overwrite its own arrays.
+ */
+export function createLewisSearch(): LewisSearch {
 // The search works in one set of arrays reused from call to call (it never runs inside itself):
 // a species is analysed with a handful of small searches, and fresh arrays, closures and copies
 // of every better leaf cost more than the search itself. Per-atom traits are copied into plain
@@ -142,7 +154,7 @@ let bestSpread = 0;
 let bestUnpaired = -1;
 let resonanceForms = 0;
 
-export function chooseLewisStructure(skeleton: Skeleton, charge: number): LewisOutcome {
+function runSearch(skeleton: Skeleton, charge: number): LewisOutcome {
   const symbols = skeleton.symbols;
   const bonds = skeleton.bonds;
   atomCount = symbols.length;
@@ -421,4 +433,30 @@ function evaluate(remaining: number, unpairedAtom: number): void {
   bestUnpaired = unpairedAtom;
   for (let bond = 0; bond < bondCount; bond++) bestOrders[bond] = bondOrders[bond];
   for (let atom = 0; atom < atomCount; atom++) bestLonePairs[atom] = lonePairs[atom];
+}
+
+let running = false;
+const lewisSearch: LewisSearch = {
+  choose(skeleton, charge) {
+    if (running) return createLewisSearch().choose(skeleton, charge);
+    running = true;
+    try {
+      return runSearch(skeleton, charge);
+    } finally {
+      running = false;
+    }
+  },
+};
+return lewisSearch;
+}
+
+/**
+ * The search the analysis uses: one per process, its scratch growing to the largest species seen
+ * (a few typed arrays of that many atoms and bonds).
+ */
+const processSearch = createLewisSearch();
+
+/** The best Lewis structure of `skeleton` with net `charge`, or why there is none. */
+export function chooseLewisStructure(skeleton: Skeleton, charge: number): LewisOutcome {
+  return processSearch.choose(skeleton, charge);
 }

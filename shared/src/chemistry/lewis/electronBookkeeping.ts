@@ -18,6 +18,7 @@ export interface AtomTraits {
   readonly isHalogen: boolean;
 }
 
+// Bound: one entry per element symbol.
 const cache = new Map<string, AtomTraits>();
 
 /** Traits for an element symbol the reader has already validated. */

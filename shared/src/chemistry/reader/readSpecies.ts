@@ -43,6 +43,7 @@ export function readSpecies(text: string): ReadResult {
   return result;
 }
 
+// Bound: at most 20,000 readings of texts up to 120 characters; the memo is emptied when full.
 const MEMO_LIMIT = 20_000;
 const MEMO_MAX_TEXT = 120;
 const readMemo = new Map<string, ReadResult>();

@@ -177,7 +177,8 @@ interface CentreKey {
   readonly ligands: number;
 }
 
-// Remembered descriptions: by facts, then by the ligand list.
+// Remembered descriptions: by facts, then by the ligand list. Bound: CENTRE_MEMO_LIMIT entries,
+// then it starts again empty; the ligand codes are at most MAX_LIGAND_CODES.
 const centreMemo = new Map<number, Map<number, KnownCentre>>();
 let centreMemoSize = 0;
 // Element-and-bond-order pairs of ligands, numbered 1..MAX_LIGAND_CODES as they are first seen.

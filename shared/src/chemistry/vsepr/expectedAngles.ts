@@ -67,7 +67,8 @@ function workOutExpectedAngles(context: AngleContext): AngleExpectation[] {
   });
 }
 
-// Remembered lists: by electron geometry, then by the packed facts below.
+// Remembered lists: by electron geometry, then by the packed facts below. Bound: the packed facts
+// are a few small counts, so there are at most a few thousand lists for each of the geometries.
 const expectationMemo = new Map<string, Map<number, readonly AngleExpectation[]>>();
 
 /**
@@ -96,7 +97,8 @@ interface AngleGroup {
 }
 
 // The set of bonded sites depends only on the electron geometry and the number of lone-pair
-// domains, so the kinds of angle a centre has are worked out once per pair of those.
+// domains, so the kinds of angle a centre has are worked out once per pair of those (bound: the
+// geometries times at most seven lone-pair counts).
 const angleGroupCache = new Map<string, readonly AngleGroup[]>();
 
 function angleGroups(context: AngleContext): readonly AngleGroup[] {
@@ -135,6 +137,7 @@ export function idealAnglesFor(context: AngleContext): readonly number[] {
   return angles;
 }
 
+// Bound: one list per electron geometry and number of lone-pair domains.
 const idealAnglesMemo = new Map<string, (readonly number[] | undefined)[]>();
 
 function rangeFor(
@@ -180,6 +183,7 @@ function rangeFor(
   return { min: round1(min), max: round1(Math.min(180, max)), note };
 }
 
+// Bound: one note per combination of four small counts (the key packs them).
 const joinedNotes: string[] = [];
 
 function joinedNote(lonePair: number, bulky: number, neighbour: number, radical: number): string {
