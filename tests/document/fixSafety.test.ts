@@ -9,6 +9,7 @@ import { join, relative } from "node:path";
 import fc from "fast-check";
 import { describe, expect, it } from "vitest";
 import { analyzeDocument, checkDocument, documentKindFor, type DocumentKind, type Finding } from "../../shared/src/index";
+import { stripLabels } from "./labelledText";
 
 const ROOT = join(__dirname, "..", "..");
 
@@ -75,7 +76,9 @@ function repositoryDocuments(): { name: string; text: string; kind: DocumentKind
         continue;
       }
       const kind = documentKindFor(path);
-      if (kind && !entry.startsWith("sarif-schema")) documents.push({ name: relative(ROOT, path), text: readFileSync(path, "utf8"), kind });
+      // The real-style corpus carries its labels inline; the documents are the text without them.
+      const text = stripLabels(readFileSync(path, "utf8")).text;
+      if (kind && !entry.startsWith("sarif-schema")) documents.push({ name: relative(ROOT, path), text, kind });
     }
   };
   visit(join(ROOT, "tests", "fixtures"));
