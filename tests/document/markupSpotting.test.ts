@@ -119,3 +119,30 @@ describe("formula-shaped text that is not a species", () => {
     check(marked, kind as DocumentKind);
   });
 });
+
+describe("data columns", () => {
+  // common practice: compound libraries and cabinet lists keep a SMILES column and leave cells
+  // empty with a dash or "n/a"
+  it.each([
+    ["Compound ID,SMILES\nLimonene,⟦CC1=CCC(CC1)C(=C)C⟧\nKR-C-0012,⟦CCO⟧\n", "csv"],
+    ["name,canonical smiles\n⟦ethanol⟧,⟦CCO⟧\n⟦water⟧,⟦O⟧\n", "csv"],
+    ["Chemical name,Formula,Notes\n⟦Sodium chloride⟧,⟦NaCl⟧,\nUniversal indicator,—,mixture\npH 7 buffer,n/a,\nPhenol red solution,-,\n", "csv"],
+    ["| Compound | Formula |\n|---|---|\n| ⟦water⟧ | ⟦H2O⟧ |\n| tap rinse | — |\n", "markdown"],
+  ])("%j", (marked, kind) => {
+    check(marked, kind as DocumentKind);
+  });
+
+  it("reads a SMILES column as SMILES, with the composition the SMILES spells", () => {
+    // source: RDKit, CalcMolFormula("CC1=CCC(CC1)C(=C)C") = C10H16 (limonene)
+    const [occurrence] = analyzeDocument("Compound ID,SMILES\nLimonene,CC1=CCC(CC1)C(=C)C\n", "csv").occurrences;
+    expect(occurrence.reading.notation).toBe("smiles");
+    expect(occurrence.reading.formula).toBe("C10H16");
+  });
+
+  it("gives no finding for placeholders and unknown ids, and reports a SMILES that does not parse", () => {
+    const text = "Compound ID,SMILES,Formula\nKR-C-0012,C1CC(,—\nKR-C-0013,CCO,n/a\n";
+    const findings = checkDocument(analyzeDocument(text, "csv")).map((finding) => [finding.severity, text.slice(finding.range.start, finding.range.end)]);
+    // common practice: an unclosed branch "(" makes a SMILES unreadable
+    expect(findings).toEqual([["error", "C1CC("]]);
+  });
+});

@@ -3,7 +3,7 @@
  * sniffing the first bytes for a delimited table.
  */
 import { sniffDelimiter } from "./tables/csv";
-import { meaningOfHeader } from "./tables/headers";
+import { meaningOfHeader, namesSpecies } from "./tables/headers";
 import type { DocumentKind } from "./types";
 
 const BY_EXTENSION: Readonly<Record<string, DocumentKind>> = {
@@ -70,6 +70,6 @@ function sniffTable(firstBytes: string): "csv" | "tsv" | undefined {
   if (counts[0] < 2 || !counts.every((count) => count === counts[0])) return undefined;
   // Prose can have the same number of commas on two lines; a table names its species column.
   const header = whole[0].split(delimiter).map((cell) => cell.trim().replace(/^"|"$/g, ""));
-  if (!header.some((cell) => meaningOfHeader(cell) === "species" || meaningOfHeader(cell) === "name")) return undefined;
+  if (!header.some((cell) => namesSpecies(meaningOfHeader(cell)))) return undefined;
   return delimiter === "\t" ? "tsv" : "csv";
 }

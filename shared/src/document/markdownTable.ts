@@ -5,7 +5,7 @@
 import type { TextRange } from "../chemistry/types";
 import { scanProse } from "./scanProse";
 import type { SpeciesReader } from "./speciesReader";
-import { isFormulaHeader, meaningOfHeader } from "./tables/headers";
+import { isFormulaHeader, meaningOfHeader, namesSpecies } from "./tables/headers";
 import { addRecord, type RecordField, type RecordSink } from "./tables/records";
 
 const DELIMITER_ROW = /^ {0,3}\|?\s*:?-+:?\s*(?:\|\s*:?-+:?\s*)*\|?\s*$/;
@@ -56,15 +56,15 @@ export function scanMarkdownTable(text: string, lines: readonly TextRange[], rea
     const meaning = meaningOfHeader(title);
     return meaning ? { meaning, formulaHeader: isFormulaHeader(title) } : undefined;
   });
-  const namesSpecies = columns.some((column) => column?.meaning === "species" || column?.meaning === "name");
+  const hasSpeciesColumn = columns.some((column) => namesSpecies(column?.meaning));
   for (const cell of header) if (!columns[header.indexOf(cell)]) scanProse(text, cell.start, cell.end, sink, read);
   for (const line of lines.slice(2)) {
     const cells = tableCells(text, line.start, line.end);
     const fields: RecordField[] = [];
     cells.forEach((cell, index) => {
-      const column = namesSpecies ? columns[index] : undefined;
+      const column = hasSpeciesColumn ? columns[index] : undefined;
       const cellText = text.slice(cell.start, cell.end);
-      const naming = column && (column.meaning === "species" || column.meaning === "name");
+      const naming = column && namesSpecies(column.meaning);
       // A species cell with words around the formula ("SF4 (reference)") is prose, not a value.
       if (!column || (naming && /\s/.test(cellText) && !read(cellText).ok)) {
         scanProse(text, cell.start, cell.end, sink, read);

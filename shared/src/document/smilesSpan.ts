@@ -27,6 +27,14 @@ export function smilesOccurrence(
   let smilesEnd = end;
   while (smilesStart < smilesEnd && text.charCodeAt(smilesStart) === 0x20) smilesStart++;
   while (smilesEnd > smilesStart && text.charCodeAt(smilesEnd - 1) === 0x20) smilesEnd--;
+  return smilesAt(text, smilesStart, smilesEnd);
+}
+
+/**
+ * The SMILES `text[start, end)` (already trimmed, without any marker) as an occurrence, or as an
+ * unreadable mention when it does not parse; undefined when empty or too long for one species.
+ */
+export function smilesAt(text: string, smilesStart: number, smilesEnd: number): SpeciesOccurrence | UnreadableSpecies | undefined {
   if (smilesEnd === smilesStart || smilesEnd - smilesStart > MAX_SMILES) return undefined;
   const smiles = text.slice(smilesStart, smilesEnd);
   const range = { start: smilesStart, end: smilesEnd };

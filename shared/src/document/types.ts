@@ -17,6 +17,7 @@ export interface SpeciesOccurrence {
 export type ColumnMeaning =
   | "species"
   | "name"
+  | "smiles"
   | "valenceElectrons"
   | "lonePairs"
   | "axe"

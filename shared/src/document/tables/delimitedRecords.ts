@@ -3,7 +3,7 @@
  */
 import type { SpeciesReader } from "../speciesReader";
 import { sniffDelimiter, visitDelimitedRows } from "./csv";
-import { isFormulaHeader, meaningOfHeader } from "./headers";
+import { isFormulaHeader, meaningOfHeader, namesSpecies } from "./headers";
 import { addRecord, type RecordField, type RecordSink } from "./records";
 import type { ColumnMeaning, Finding } from "../types";
 
@@ -49,7 +49,7 @@ export function readDelimitedRecords(
     if (columns === undefined) {
       if (cells.every((cell) => cell.text.trim() === "")) return;
       columns = cells.map((cell) => columnUnder(cell.text));
-      noSpecies = !columns.some((column) => column?.meaning === "species" || column?.meaning === "name");
+      noSpecies = !columns.some((column) => namesSpecies(column?.meaning));
       return;
     }
     // addRecord keeps the fields, not the list: one list serves every row.

@@ -12,7 +12,9 @@ const HEADERS: ReadonlyMap<string, ColumnMeaning> = new Map<string, ColumnMeanin
     "species formula", "formula of species", "chemical", "substance", "gas", "molecule formula",
     "compound formula", "ion formula", "molecule or ion", "species or ion", "molecule ion", "formula ion",
   ]),
-  ...words("name", ["name", "species name", "compound name", "chemical name", "common name", "iupac name", "molecule name", "ion name", "systematic name"]),
+  ...words("smiles", ["smiles", "canonical smiles", "isomeric smiles", "smiles string", "smiles code", "structure smiles", "smiles structure"]),
+  // A compound id mostly holds names (or catalogue ids, which then name nothing).
+  ...words("name", ["compound id", "compound identifier", "name", "species name", "compound name", "chemical name", "common name", "iupac name", "molecule name", "ion name", "systematic name"]),
   ...words("valenceElectrons", [
     "valence electrons", "valence electron", "valence e", "valence electron count", "ve", "v e", "total valence electrons",
     "number of valence electrons", "no of valence electrons", "valence electrons total", "total ve", "valence",
@@ -87,6 +89,11 @@ export function meaningOfHeader(header: string): ColumnMeaning | undefined {
   if (/^molecular (?:geometry|shape)\b/.test(normalized)) return "molecularGeometry";
   if (/^bond angles?\b/.test(normalized)) return "bondAngle";
   return undefined;
+}
+
+/** True for a column whose cells name the species of their row: a formula, a name or a SMILES. */
+export function namesSpecies(meaning: ColumnMeaning | undefined): boolean {
+  return meaning === "species" || meaning === "name" || meaning === "smiles";
 }
 
 /** Headers that name a formula column, preferred over a "species" column that may hold names. */

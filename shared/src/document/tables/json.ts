@@ -8,7 +8,7 @@
 import { parseTree, printParseErrorCode, type Node, type ParseError } from "jsonc-parser/lib/esm/main.js";
 import type { SpeciesReader } from "../speciesReader";
 import type { Finding } from "../types";
-import { isFormulaHeader, meaningOfHeader } from "./headers";
+import { isFormulaHeader, meaningOfHeader, namesSpecies } from "./headers";
 import { addRecord, type RecordField, type RecordSink } from "./records";
 
 const MESSAGES: Readonly<Record<string, string>> = {
@@ -77,7 +77,7 @@ function objectRecord(node: Node, text: string, read: SpeciesReader, sink: Recor
     if (meaning && field) fields.push({ meaning, formulaHeader: isFormulaHeader(key.value), ...field });
   }
   if (fields.length === 0) return;
-  if (!fields.some((field) => field.meaning === "species" || field.meaning === "name")) {
+  if (!fields.some((field) => namesSpecies(field.meaning))) {
     // {"SF4": {"lone pairs": 1}}: the key the object sits under names the species.
     const key = node.parent?.type === "property" ? node.parent.children?.[0] : undefined;
     if (!key || typeof key.value !== "string" || !read(key.value).ok) return;

@@ -3,7 +3,9 @@
  * species (a formula, or failing that a name) and which cells the checks can compare.
  */
 import type { TextRange } from "../../chemistry/types";
+import { isOccurrence, smilesAt } from "../smilesSpan";
 import { occurrenceAt, unreadableAt, type ScanSink, type SpeciesReader } from "../speciesReader";
+import { namesSpecies } from "./headers";
 import type { ColumnMeaning, SpeciesOccurrence, TableCell, TableRecord, UnreadableSpecies } from "../types";
 
 /** A value in a row or object, with the header or key it sits under. */
@@ -64,8 +66,8 @@ export function addRecord(fields: readonly RecordField[], read: SpeciesReader, s
   const cells: TableCell[] = [];
   for (const written of fields) {
     const field = trimmedField(written);
-    if (field.text.length === 0) continue;
-    if (field.meaning === "species" || field.meaning === "name") naming.push(unwrapped(field));
+    if (field.text.length === 0 || isPlaceholder(field.text)) continue;
+    if (namesSpecies(field.meaning)) naming.push(unwrapped(field));
     else cells.push({ meaning: field.meaning, range: field.range, text: field.text });
   }
   if (naming.length === 0) return;
@@ -73,6 +75,12 @@ export function addRecord(fields: readonly RecordField[], read: SpeciesReader, s
   const found: SpeciesOccurrence[] = [];
   let failed: UnreadableSpecies[] | undefined;
   for (const field of naming) {
+    if (field.meaning === "smiles") {
+      const smiles = smilesAt(field.text, 0, field.text.length);
+      if (smiles && isOccurrence(smiles)) found.push(moved(smiles, field.range.start));
+      else if (smiles) (failed ??= []).push(movedUnreadable(smiles, field.range.start));
+      continue;
+    }
     const result = read(field.text);
     if (result.ok) found.push(occurrenceAt(result.value, field.text, field.range.start));
     else if (field.meaning === "species") (failed ??= []).push(unreadableAt(field.text, field.range.start, result));
@@ -107,5 +115,24 @@ function inRankOrder(naming: RecordField[]): void {
 
 function rank(field: RecordField): number {
   if (field.meaning === "species") return field.formulaHeader ? 0 : 1;
-  return 2;
+  return field.meaning === "smiles" ? 2 : 3;
+}
+
+/** What a cell holds when it holds nothing: "—", "-", "n/a", "none", "?". */
+const PLACEHOLDER = /^(?:[-\u2010-\u2015\u2212]+|n\/?a\.?|none|nil|\?+|tbd|\.{2,3}|\u2026|\u2205)$/i;
+
+function isPlaceholder(text: string): boolean {
+  return text.length <= 5 && PLACEHOLDER.test(text);
+}
+
+/** A SMILES occurrence read from a cell's own text, moved to the cell's place in the document. */
+function moved(occurrence: SpeciesOccurrence, start: number): SpeciesOccurrence {
+  const range = { start: occurrence.range.start + start, end: occurrence.range.end + start };
+  return { ...occurrence, range, reading: { ...occurrence.reading, range } };
+}
+
+function movedUnreadable(unreadable: UnreadableSpecies, start: number): UnreadableSpecies {
+  const shift = (range: TextRange): TextRange => ({ start: range.start + start, end: range.end + start });
+  const problem = unreadable.problem.range ? { ...unreadable.problem, range: shift(unreadable.problem.range) } : unreadable.problem;
+  return { ...unreadable, range: shift(unreadable.range), problem };
 }

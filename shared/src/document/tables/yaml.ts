@@ -7,7 +7,7 @@
 import { isMap, isPair, isScalar, isSeq, parseAllDocuments, Scalar, type Node, type Pair, type YAMLMap } from "yaml";
 import type { SpeciesReader } from "../speciesReader";
 import type { Finding } from "../types";
-import { isFormulaHeader, meaningOfHeader } from "./headers";
+import { isFormulaHeader, meaningOfHeader, namesSpecies } from "./headers";
 import { addRecord, type RecordField, type RecordSink } from "./records";
 
 /** Reads a YAML stream (one or more documents) into `sink`; returns its syntax problems. */
@@ -77,7 +77,7 @@ function mappingRecord(node: YAMLMap, key: Scalar | undefined, text: string, rea
     if (meaning && field) fields.push({ meaning, formulaHeader: isFormulaHeader(header), ...field });
   }
   if (fields.length === 0) return;
-  if (!fields.some((field) => field.meaning === "species" || field.meaning === "name")) {
+  if (!fields.some((field) => namesSpecies(field.meaning))) {
     // SF4: {lone pairs: 1}: the key the mapping sits under names the species.
     const keyField = key && scalarField(key, text);
     if (!keyField || !read(keyField.text).ok) return;
