@@ -65,10 +65,18 @@ export function countEquivalentStructures(atoms: readonly GraphAtom[], bonds: re
     (neighbours[b] ??= []).push(a);
   }
 
+  // A depth-first search with its own stack (one frame per matched pair): a long conjugated
+  // chain or ring needs thousands of levels, more than the call stack holds.
   const matched = new Uint8Array(atomCount);
+  const frameAtom: number[] = [];
+  const framePosition: number[] = [];
+  const frameOptional: number[] = [];
+  const frameNext: number[] = [];
+  const frameChosen: number[] = [];
   let count = 0;
   let steps = 0;
-  const visit = (position: number, optionalUsed: number) => {
+  /** Starts the search from `position`: counts a finished structure or opens a frame. */
+  const enter = (position: number, optionalUsed: number): void => {
     if (count >= MAX_COUNT || ++steps > MAX_STEPS) return;
     while (position < required.length && matched[required[position]]) position++;
     if (position === required.length) {
@@ -76,20 +84,43 @@ export function countEquivalentStructures(atoms: readonly GraphAtom[], bonds: re
       return;
     }
     const atom = required[position];
+    if (neighbours[atom] === undefined) return;
     matched[atom] = 1;
-    const around = neighbours[atom];
-    if (around === undefined) {
-      matched[atom] = 0;
-      return;
-    }
-    for (const other of around) {
-      if (matched[other]) continue;
-      matched[other] = 1;
-      visit(position + 1, optionalUsed + (role[other] === OPTIONAL ? 1 : 0));
-      matched[other] = 0;
-    }
-    matched[atom] = 0;
+    frameAtom.push(atom);
+    framePosition.push(position);
+    frameOptional.push(optionalUsed);
+    frameNext.push(0);
+    frameChosen.push(-1);
   };
-  visit(0, 0);
+  enter(0, 0);
+  while (frameAtom.length > 0) {
+    const top = frameAtom.length - 1;
+    const atom = frameAtom[top];
+    if (frameChosen[top] >= 0) {
+      matched[frameChosen[top]] = 0;
+      frameChosen[top] = -1;
+    }
+    const around = neighbours[atom];
+    let other = -1;
+    while (frameNext[top] < around.length) {
+      const candidate = around[frameNext[top]++];
+      if (!matched[candidate]) {
+        other = candidate;
+        break;
+      }
+    }
+    if (other < 0) {
+      matched[atom] = 0;
+      frameAtom.pop();
+      framePosition.pop();
+      frameOptional.pop();
+      frameNext.pop();
+      frameChosen.pop();
+      continue;
+    }
+    matched[other] = 1;
+    frameChosen[top] = other;
+    enter(framePosition[top] + 1, frameOptional[top] + (role[other] === OPTIONAL ? 1 : 0));
+  }
   return Math.max(1, count);
 }

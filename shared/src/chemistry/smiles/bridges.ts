@@ -14,7 +14,8 @@ export interface BondEnds {
 let scratch = new Int32Array(0);
 
 function scratchFor(atomCount: number, bondCount: number): Int32Array {
-  const needed = 6 * atomCount + 1 + 4 * bondCount;
+  // Seven arrays per atom (one of them one longer) and four per bond, as taken below.
+  const needed = 7 * atomCount + 1 + 4 * bondCount;
   if (scratch.length < needed) scratch = new Int32Array(Math.max(needed, 2 * scratch.length));
   return scratch;
 }
