@@ -14,7 +14,8 @@ export { idealDirections, siteKind, lonePairSiteOrder } from "./chemistry/geomet
 export type { Vec3 } from "./chemistry/geometry/vectors";
 export { shapeOf, pointGroupAllowsDipole } from "./chemistry/analysis/shape3d";
 export type { SpeciesShape } from "./chemistry/analysis/shape3d";
-export { buildCoordinates } from "./chemistry/geometry/buildCoordinates";
+export { buildCoordinates, MAX_MODEL_ATOMS } from "./chemistry/geometry/buildCoordinates";
+export { MAX_RING_SYSTEM_ATOMS } from "./chemistry/geometry/ringPerception";
 export type { MolecularCoordinates, PlacedAtom, PlacedLonePair } from "./chemistry/geometry/buildCoordinates";
 export { toXyz } from "./chemistry/formats/xyz";
 export { toMolfile, MOLFILE_V2000_LIMIT } from "./chemistry/formats/molfile";

@@ -196,6 +196,11 @@ export interface PolarityVerdict {
   readonly reason: string;
   /** Magnitude of the summed bond-dipole vector in electronegativity units (a model number). */
   readonly dipoleEstimate: number;
+  /**
+   * True when the model could not judge (the species is too large for a 3D model): `polar` is
+   * then false but claims nothing, and `reason` says why. Readers show "not judged".
+   */
+  readonly undetermined?: true;
 }
 
 /** Everything lonepair works out for one species. */

@@ -81,7 +81,8 @@ function successLines(input: string, analysis: SpeciesAnalysis, style: CardStyle
   if (analysis.centres.length === 0) lines.push(row(style, "Centres", "none (no atom has two or more neighbours)"));
   const pointGroup = shapeOf(analysis).pointGroup;
   if (pointGroup) lines.push(row(style, "Point group", pointGroup));
-  lines.push(row(style, "Polarity", `${analysis.polarity.polar ? "polar" : "nonpolar"} - ${analysis.polarity.reason}`));
+  const verdict = analysis.polarity.undetermined ? "not judged" : analysis.polarity.polar ? "polar" : "nonpolar";
+  lines.push(row(style, "Polarity", `${verdict} - ${analysis.polarity.reason}`));
   if (analysis.warnings.length === 0) {
     lines.push(row(style, "Warnings", "none"));
   } else {

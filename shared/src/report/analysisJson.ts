@@ -59,7 +59,8 @@ export interface AnalysisJsonSuccess {
   readonly valenceElectrons: number;
   readonly radical: boolean;
   readonly centers: readonly CentreJson[];
-  readonly polar: boolean;
+  /** Null when the species is too large for the model to judge. */
+  readonly polar: boolean | null;
   readonly warnings: readonly string[];
   // extras after the fixed fields
   readonly polarityReason: string;
@@ -109,7 +110,8 @@ function successJson(input: string, analysis: SpeciesAnalysis): AnalysisJsonSucc
     valenceElectrons: analysis.valenceElectrons,
     radical: analysis.radical,
     centers: analysis.centres.map(centreJson),
-    polar: analysis.polarity.polar,
+    // null: too large for the model to judge (polarityReason says so).
+    polar: analysis.polarity.undetermined ? null : analysis.polarity.polar,
     warnings: [...analysis.warnings],
     polarityReason: analysis.polarity.reason,
     pointGroup: shapeOf(analysis).pointGroup ?? null,

@@ -239,7 +239,7 @@ function measuredLines(measured: readonly MeasuredAngle[], decimals: number, mar
 }
 
 function polarityLine(analysis: SpeciesAnalysis, markup: Markup): string {
-  const verdict = analysis.polarity.polar ? "polar" : "nonpolar";
+  const verdict = analysis.polarity.undetermined ? "not judged" : analysis.polarity.polar ? "polar" : "nonpolar";
   return `Polarity: ${markup.strong(verdict)} (${markup.text(analysis.polarity.reason)})`;
 }
 

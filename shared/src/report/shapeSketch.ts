@@ -77,6 +77,8 @@ interface Painted {
  * show) and for species of more than MAX_SKETCH_ATOMS atoms.
  */
 export function shapeSketchSvg(analysis: SpeciesAnalysis, options: ShapeSketchOptions = {}): string | undefined {
+  // Counted before the model is built: a species too big to sketch must not pay for its model here.
+  if (analysis.graph.atoms.length > MAX_SKETCH_ATOMS) return undefined;
   const { atoms, lonePairs } = shapeOf(analysis).coordinates;
   if (atoms.length < 2 || atoms.length > MAX_SKETCH_ATOMS) return undefined;
   const width = pixelSize(options.width, 160);

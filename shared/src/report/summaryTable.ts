@@ -114,7 +114,7 @@ function cellText(analysis: SpeciesAnalysis, column: SummaryColumn, decimals: nu
     case "hybridization":
       return perCentre(analysis.centres, (centre) => centre.hybridization);
     case "polarity":
-      return analysis.polarity.polar ? "polar" : "nonpolar";
+      return analysis.polarity.undetermined ? "not judged" : analysis.polarity.polar ? "polar" : "nonpolar";
   }
 }
 

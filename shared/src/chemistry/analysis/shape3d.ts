@@ -33,7 +33,9 @@ export function shapeOf(analysis: SpeciesAnalysis): SpeciesShape {
 }
 
 export function computeShape(graph: MolecularGraph, radical: boolean): SpeciesShape {
-  const coordinates = applyDoubleBondStereo(graph, buildCoordinates(graph, radical));
+  const built = buildCoordinates(graph, radical);
+  if (built.tooLarge !== undefined) return { coordinates: built, pointGroup: undefined };
+  const coordinates = applyDoubleBondStereo(graph, built);
   const found = findPointGroup(coordinates.atoms.map((atom) => ({ element: atom.symbol, position: atom.position })));
   return { coordinates, pointGroup: found.ok ? found.value.symbol : undefined };
 }
@@ -48,6 +50,8 @@ const NEGLIGIBLE_DIPOLE = 0.02;
  * allowed; the vector sum of bond dipoles and lone pairs gives the size of the model estimate.
  */
 export function polarityFromShape(graph: MolecularGraph, shape: SpeciesShape, charge: number): PolarityVerdict {
+  const tooLarge = shape.coordinates.tooLarge;
+  if (tooLarge !== undefined) return { polar: false, undetermined: true, reason: lowerFirst(tooLarge), dipoleEstimate: 0 };
   const positions = shape.coordinates.atoms.map((atom) => atom.position);
   let sum: Vec3 = [0, 0, 0];
   const electronegativity = effectiveElectronegativities(graph);
@@ -78,6 +82,10 @@ export function polarityFromShape(graph: MolecularGraph, shape: SpeciesShape, ch
     ...verdict,
     reason: `an ion (net charge ${charge > 0 ? "+" : ""}${charge}); its charge distribution is ${polar ? "asymmetric" : "symmetric"}: ${reason}`,
   };
+}
+
+function lowerFirst(text: string): string {
+  return text.charAt(0).toLowerCase() + text.slice(1);
 }
 
 /** Each pi bond makes a carbon more electronegative (sp 3.29 > sp2 2.75 > sp3 2.48 on hybrid scales). */

@@ -36,12 +36,33 @@ export interface AtomSites {
 
 const UP: Vec3 = [0, 0, 1];
 
-/** The local sites of atom `index`; never throws, whatever the graph. */
-export function atomSites(graph: MolecularGraph, index: number, radical: boolean): AtomSites {
+/** A bonded neighbour as `atomSites` needs it. */
+export interface BondedNeighbour {
+  readonly atom: number;
+  readonly bondOrder: number;
+}
+
+/** Every atom's neighbours in bond order, made once for all the atoms of a graph. */
+export function bondedNeighbours(graph: MolecularGraph): BondedNeighbour[][] {
+  const lists = graph.atoms.map(() => [] as BondedNeighbour[]);
+  for (const bond of graph.bonds) {
+    lists[bond.from]?.push({ atom: bond.to, bondOrder: bond.order });
+    lists[bond.to]?.push({ atom: bond.from, bondOrder: bond.order });
+  }
+  return lists;
+}
+
+/**
+ * The local sites of atom `index`; never throws, whatever the graph. Pass the graph's
+ * `bondedNeighbours` when asking for many atoms: finding them afresh scans every bond.
+ */
+export function atomSites(
+  graph: MolecularGraph,
+  index: number,
+  radical: boolean,
+  neighbours: readonly BondedNeighbour[] = bondedNeighbours(graph)[index] ?? [],
+): AtomSites {
   const atom = graph.atoms[index];
-  const neighbours = graph.bonds.flatMap((bond) =>
-    bond.from === index ? [{ atom: bond.to, bondOrder: bond.order }] : bond.to === index ? [{ atom: bond.from, bondOrder: bond.order }] : [],
-  );
   const loneCount = atom.lonePairs + (atom.unpairedElectrons > 0 ? 1 : 0);
   const electronsOf = (k: number): 1 | 2 => (atom.unpairedElectrons > 0 && k === loneCount - 1 ? 1 : 2);
 

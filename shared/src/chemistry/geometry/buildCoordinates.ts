@@ -11,12 +11,12 @@
  * geometry, not a measured or optimised one.
  */
 import type { MolecularGraph } from "../types";
-import { atomSites, type AtomSites } from "./atomSites";
+import { atomSites, bondedNeighbours, type AtomSites } from "./atomSites";
 import { covalentRadiusAngstrom, modelBondLength } from "./bondLength";
 import { placeByWalk } from "./placeByWalk";
 import { relaxRingSystems } from "./relaxRingSystems";
 import { resonanceBondOrders } from "./resonanceBondOrders";
-import { adjacencyOf, bondKey, perceiveRings, ringNeighboursAcross } from "./ringPerception";
+import { MAX_RING_SYSTEM_ATOMS, adjacencyOf, bondKey, perceiveRings, ringNeighboursAcross } from "./ringPerception";
 import { smallRingSites } from "./smallRingSites";
 import { composeRotations, rotate, rotationAligning, rotationFromTwoDirections, type Rotation } from "./rotation";
 import { angleDegrees, normalize, sub, type Vec3 } from "./vectors";
@@ -40,7 +40,18 @@ export interface PlacedLonePair {
 export interface MolecularCoordinates {
   readonly atoms: readonly PlacedAtom[];
   readonly lonePairs: readonly PlacedLonePair[];
+  /**
+   * Set when the species is too large for a 3D model (see {@link MAX_MODEL_ATOMS} and
+   * `MAX_RING_SYSTEM_ATOMS`): a sentence saying so; `atoms` and `lonePairs` are then empty.
+   */
+  readonly tooLarge?: string;
 }
+
+/**
+ * Most atoms (hydrogens included) in a 3D model. The per-atom shapes of a larger species are still
+ * analysed; only the model, and what needs it, is declined, quickly and with a reason.
+ */
+export const MAX_MODEL_ATOMS = 10_000;
 
 /** Non-bonded atoms are pushed apart below this multiple of their summed covalent radii. */
 const CONTACT_FACTOR = 1.5;
@@ -53,11 +64,18 @@ const CONTACT_FACTOR = 1.5;
 export function buildCoordinates(graph: MolecularGraph, radical = false): MolecularCoordinates {
   const clean = withValidBonds(graph);
   if (clean.atoms.length === 0) return { atoms: [], lonePairs: [] };
+  if (clean.atoms.length > MAX_MODEL_ATOMS) {
+    return tooLarge(`${grouped(clean.atoms.length)} atoms (the limit is ${grouped(MAX_MODEL_ATOMS)})`);
+  }
+  const neighbours = bondedNeighbours(clean);
   const sites = smallRingSites(
-    clean.atoms.map((_, index) => atomSites(clean, index, radical)),
+    clean.atoms.map((_, index) => atomSites(clean, index, radical, neighbours[index])),
     adjacencyOf(clean),
   );
   const rings = perceiveRings(clean, sites);
+  if (rings.largestRingSystem > MAX_RING_SYSTEM_ATOMS) {
+    return tooLarge(`a ring system of ${grouped(rings.largestRingSystem)} atoms (the limit is ${MAX_RING_SYSTEM_ATOMS})`);
+  }
   const orders = resonanceBondOrders(clean, rings.aromaticBonds);
   const lengths = new Map(
     clean.bonds.map((bond) => {
@@ -101,6 +119,14 @@ export function buildCoordinates(graph: MolecularGraph, radical = false): Molecu
       })),
     ),
   };
+}
+
+function tooLarge(what: string): MolecularCoordinates {
+  return { atoms: [], lonePairs: [], tooLarge: `Too large for a 3D model: ${what}. The shape of each atom is still analysed.` };
+}
+
+function grouped(value: number): string {
+  return value.toLocaleString("en-US");
 }
 
 function withValidBonds(graph: MolecularGraph): MolecularGraph {

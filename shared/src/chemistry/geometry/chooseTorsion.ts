@@ -37,7 +37,16 @@ export interface PlacementState {
   readonly bonded: (first: number, second: number) => boolean;
   /** The parent's and the child's ring neighbours when the bond is on a ring. */
   readonly ringNeighbours: (parent: number, child: number) => { beforeParent: number; afterChild: number } | undefined;
+  /** Placed atoms of the fragment being walked within `radius` of `point`, in index order. */
+  readonly placedNear: (point: Vec3, radius: number) => readonly number[];
 }
+
+/**
+ * Placed atoms farther than this from the child (ångströms) are left out of the repulsion: at
+ * 1 / distance⁴ they weigh under a ten-thousandth of a neighbour's push, and leaving them out keeps
+ * each torsion choice's cost independent of the molecule's size.
+ */
+export const REPULSION_REACH = 12;
 
 /** How far a lone pair's stand-in point sits from its atom, in ångströms. */
 const LONE_PAIR_REACH = 0.5;
@@ -143,10 +152,7 @@ interface LocalLigandRef {
 
 function surroundingsOf(state: PlacementState, parent: number, child: number): Surroundings {
   const fresh = state.sites[child].ligands.filter((ligand) => ligand.atom !== parent && !state.positions[ligand.atom]);
-  const placed: number[] = [];
-  state.positions.forEach((position, atom) => {
-    if (position && atom !== child) placed.push(atom);
-  });
+  const placed = state.placedNear(state.positions[child]!, REPULSION_REACH).filter((atom) => atom !== child);
   const atoms = new Float64Array(3 * placed.length);
   const bondedToFresh = new Uint8Array(placed.length * fresh.length);
   const lonePairStart = new Int32Array(placed.length + 1);

@@ -8,7 +8,8 @@
  * atom's frame is fixed, so each torsion choice sees everything placed so far.
  */
 import type { AtomSites } from "./atomSites";
-import { chooseChildRotation, type PlacementState } from "./chooseTorsion";
+import { REPULSION_REACH, chooseChildRotation, type PlacementState } from "./chooseTorsion";
+import { createSpatialGrid } from "./spatialGrid";
 import { IDENTITY_ROTATION, rotate, rotationAligning, type Rotation } from "./rotation";
 import { add, scale, type Vec3 } from "./vectors";
 
@@ -18,6 +19,8 @@ export interface WalkInput {
   readonly bonded: (first: number, second: number) => boolean;
   readonly ringNeighbours: PlacementState["ringNeighbours"];
 }
+
+/** Places every atom; never throws for a well-formed graph. Linear in atoms: each torsion sees only placed atoms nearby. */
 
 export interface WalkResult {
   readonly positions: readonly Vec3[];
@@ -33,27 +36,37 @@ export interface WalkResult {
 const FRAGMENT_GAP = 3;
 const Z_AXIS: Vec3 = [0, 0, 1];
 
-/** Places every atom; never throws for a well-formed graph. */
 export function placeByWalk(input: WalkInput, firstRoot?: number): WalkResult {
   const count = input.sites.length;
   const positions: (Vec3 | undefined)[] = new Array(count).fill(undefined);
   const rotations: (Rotation | undefined)[] = new Array(count).fill(undefined);
   const placedBy: number[] = new Array(count).fill(-1);
   const order: number[] = [];
-  const state: PlacementState = { ...input, positions, rotations };
+  // Only the fragment being walked is filed: earlier fragments are moved aside when done.
+  const grid = createSpatialGrid(REPULSION_REACH);
+  const state: PlacementState = { ...input, positions, rotations, placedNear: grid.near };
   const placeNeighbours = (atom: number) => {
     for (const ligand of input.sites[atom].ligands) {
       if (positions[ligand.atom]) continue;
       const direction = rotate(rotations[atom]!, ligand.direction);
       positions[ligand.atom] = add(positions[atom]!, scale(direction, input.bondLength(atom, ligand.atom)));
+      grid.add(ligand.atom, positions[ligand.atom]!);
       placedBy[ligand.atom] = atom;
     }
   };
 
-  const start = firstRoot !== undefined && firstRoot >= 0 && firstRoot < count ? firstRoot : pickRoot(input.sites, positions);
-  for (let root = start; root >= 0; root = pickRoot(input.sites, positions)) {
-    const earlierExtent = maxX(positions);
+  const roots = rootsByNeighbourCount(input.sites);
+  let nextRoot = 0;
+  const pickRoot = (): number => {
+    while (nextRoot < roots.length && positions[roots[nextRoot]]) nextRoot++;
+    return nextRoot < roots.length ? roots[nextRoot] : -1;
+  };
+  let earlierExtent: number | undefined;
+  const start = firstRoot !== undefined && firstRoot >= 0 && firstRoot < count ? firstRoot : pickRoot();
+  for (let root = start; root >= 0; root = pickRoot()) {
+    grid.clear();
     positions[root] = [0, 0, 0];
+    grid.add(root, positions[root]!);
     // A terminal root points its one bond along +z, so a diatomic lies on the z axis.
     const ligands = input.sites[root].ligands;
     rotations[root] = ligands.length === 1 ? rotationAligning(ligands[0].direction, Z_AXIS) : IDENTITY_ROTATION;
@@ -70,28 +83,22 @@ export function placeByWalk(input: WalkInput, firstRoot?: number): WalkResult {
         queue.push(child);
       }
     }
-    order.push(...queue);
+    for (const atom of queue) order.push(atom);
     // Later fragments of a disconnected graph go beside the earlier ones, not on top of them.
-    if (earlierExtent !== undefined) {
-      const shift = earlierExtent + FRAGMENT_GAP - Math.min(...queue.map((atom) => positions[atom]![0]));
-      for (const atom of queue) positions[atom] = add(positions[atom]!, [shift, 0, 0]);
-    }
+    let lowest = Infinity;
+    for (const atom of queue) lowest = Math.min(lowest, positions[atom]![0]);
+    const shift = earlierExtent === undefined ? 0 : earlierExtent + FRAGMENT_GAP - lowest;
+    if (shift !== 0) for (const atom of queue) positions[atom] = add(positions[atom]!, [shift, 0, 0]);
+    for (const atom of queue) earlierExtent = Math.max(earlierExtent ?? -Infinity, positions[atom]![0]);
   }
   return { positions: positions as Vec3[], rotations: rotations as Rotation[], parents: placedBy, order };
 }
 
-/** The unplaced atom with the most neighbours (lowest index on ties), or -1 when all are placed. */
-function pickRoot(sites: readonly AtomSites[], positions: readonly (Vec3 | undefined)[]): number {
-  let best = -1;
-  sites.forEach((site, atom) => {
-    if (positions[atom]) return;
-    if (best < 0 || site.ligands.length > sites[best].ligands.length) best = atom;
-  });
-  return best;
-}
-
-/** Largest x of the atoms placed so far, or undefined before the first fragment. */
-function maxX(positions: readonly (Vec3 | undefined)[]): number | undefined {
-  const placed = positions.filter((p): p is Vec3 => p !== undefined);
-  return placed.length === 0 ? undefined : Math.max(...placed.map((p) => p[0]));
+/**
+ * Atoms in the order they become roots: most neighbours first, lowest index on ties (each
+ * fragment's root is its first unplaced atom in this order).
+ */
+function rootsByNeighbourCount(sites: readonly AtomSites[]): number[] {
+  const atoms = sites.map((_, atom) => atom);
+  return atoms.sort((a, b) => sites[b].ligands.length - sites[a].ligands.length || a - b);
 }

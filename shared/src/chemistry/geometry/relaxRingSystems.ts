@@ -42,6 +42,12 @@ const SAME_STRAIN = 1e-9;
 const ACCEPTED_OVERLAP = 1e-4;
 /** The repair of bumping atoms: enough to push them apart, not to converge tightly. */
 const REPAIR_BUDGET = { maxIterations: 200, gradientTolerance: 1e-3 };
+/**
+ * Most atoms the repair of bumping atoms takes on: its model holds a contact for every pair of
+ * atoms, so its cost grows with the square of their number. A larger molecule keeps the walk's
+ * placement of its chains (every angle and torsion ideal), with a bump here and there.
+ */
+export const MAX_REPAIRED_ATOMS = 1000;
 
 /** The walk's placement with every ring system closed. */
 export function relaxRingSystems(input: RingSystemsInput, walk: WalkResult): RingSystemsResult {
@@ -50,7 +56,7 @@ export function relaxRingSystems(input: RingSystemsInput, walk: WalkResult): Rin
   const systems = ringSystems(input.sites.length, input.ringBonds, walk.order);
   let whole = false;
   for (const system of systems) whole = relaxOneSystem(input, walk.parents, system, positions, rotations) || whole;
-  if (whole) return { positions, rotations };
+  if (whole || input.sites.length > MAX_REPAIRED_ATOMS) return { positions, rotations };
   // Branches placed round relaxed rings, and chains the walk could not keep apart, may still
   // bump: a short relaxation of the whole molecule pushes such atoms apart.
   const model = springModel({ sites: input.sites, bondLength: input.bondLength, contactDistance: input.contactDistance });

@@ -155,6 +155,8 @@ function checkHybridization(cell: TableCell, species: string, centre: CentreAnal
 
 function checkPolarity(cell: TableCell, species: string, analysis: SpeciesAnalysis): Finding | undefined {
   const written = parsePolarity(cell.text);
+  // A verdict the model could not reach never contradicts the table.
+  if (analysis.polarity.undetermined) return undefined;
   const polar = analysis.polarity.polar;
   if (written === undefined || written === polar) return undefined;
   return mismatch(
