@@ -23,7 +23,7 @@ const FLOORS: Readonly<Record<string, { readonly precision: number; readonly rec
   encyclopedia: { precision: 0.98, recall: 0.68 },
   "handbook-tsv": { precision: 0.98, recall: 0.67 },
   "html-markdown": { precision: 0.96, recall: 0.81 },
-  "inventory-csv": { precision: 0.92, recall: 0.72 },
+  "inventory-csv": { precision: 0.98, recall: 0.72 },
   "latex-notes": { precision: 0.83, recall: 0.58 },
   "plain-text": { precision: 0.87, recall: 0.65 },
   restructuredtext: { precision: 0.84, recall: 0.5 },
