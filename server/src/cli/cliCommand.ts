@@ -2,6 +2,7 @@
  * What every command-line subcommand looks like. Each lives in its own file under
  * `commands/` and is listed once in `commands/index.ts`.
  */
+import { parseArgs, type ParseArgsConfig } from "node:util";
 
 /** Where a command writes, and how; passed in so commands stay testable without a terminal. */
 export interface CliIo {
@@ -33,3 +34,53 @@ export interface CliCommand {
   /** Runs with the arguments after the command name; resolves to an exit code. */
   readonly run: (args: readonly string[], io: CliIo) => number | Promise<number>;
 }
+
+/** What a command needs to report a usage error: its name and its help. */
+export interface CommandIdentity {
+  readonly name: string;
+  readonly help: string;
+}
+
+/** Prints "lonepair <name>: <message>" and the command's help to stderr; answers the usage exit code. */
+export function usageError(command: CommandIdentity, io: CliIo, message: string): number {
+  io.writeError(`lonepair ${command.name}: ${message}\n\n${command.help}`);
+  return EXIT_USAGE;
+}
+
+/**
+ * The one way every subcommand reads its arguments: strict options plus `--help`, positionals
+ * allowed. Answers the parsed values, or the exit code when the command is already done (help
+ * printed, or a usage error reported).
+ */
+export function parseCommandLine<const Options extends OptionTypes>(
+  command: CommandIdentity,
+  args: readonly string[],
+  io: CliIo,
+  options: Options,
+): ParsedCommandLine<Options> {
+  let parsed;
+  try {
+    const withHelp: NonNullable<ParseArgsConfig["options"]> = { ...options, help: { type: "boolean" } };
+    parsed = parseArgs({ args: [...args], options: withHelp, allowPositionals: true, strict: true });
+  } catch (error) {
+    return { exit: usageError(command, io, (error as Error).message) };
+  }
+  if (parsed.values.help) {
+    io.writeOut(command.help);
+    return { exit: EXIT_OK };
+  }
+  return { exit: undefined, values: parsed.values as OptionValues<Options>, positionals: parsed.positionals };
+}
+
+/** Options as `parseArgs` takes them: strings or switches, never repeated. */
+type OptionTypes = Readonly<Record<string, { readonly type: "string" | "boolean" }>>;
+
+/** The values of parsed options: text for string options, true for switches given. */
+export type OptionValues<Options extends OptionTypes> = {
+  readonly [Name in keyof Options]?: Options[Name]["type"] extends "string" ? string : boolean;
+};
+
+/** Parsed arguments, or the exit code of a command already done. */
+export type ParsedCommandLine<Options extends OptionTypes> =
+  | { readonly exit: number }
+  | { readonly exit: undefined; readonly values: OptionValues<Options>; readonly positionals: readonly string[] };

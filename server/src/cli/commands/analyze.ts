@@ -4,12 +4,11 @@
  * two or more neighbours described). Exit 0 when every species was analysed, 1 when any was
  * not, 2 on a usage error.
  */
-import { parseArgs } from "node:util";
 import { analyzeSmiles, analyzeTyped } from "../../../../shared/src/index";
 import { formatAnalysisCard } from "../../../../shared/src/index";
 import { toAnalysisJson } from "../../../../shared/src/index";
 import type { CliCommand, CliIo } from "../cliCommand";
-import { EXIT_FAILURE, EXIT_OK, EXIT_USAGE } from "../cliCommand";
+import { EXIT_FAILURE, EXIT_OK, parseCommandLine, usageError } from "../cliCommand";
 import { cardStyle } from "../terminalStyle";
 
 const HELP = `Usage: lonepair analyze [--json] [--smiles] <species...>
@@ -37,27 +36,10 @@ export const analyzeCommand: CliCommand = {
 };
 
 function runAnalyze(args: readonly string[], io: CliIo): number {
-  let parsed;
-  try {
-    parsed = parseArgs({
-      args: [...args],
-      options: { json: { type: "boolean" }, smiles: { type: "boolean" }, help: { type: "boolean" } },
-      allowPositionals: true,
-      strict: true,
-    });
-  } catch (error) {
-    io.writeError(`lonepair analyze: ${(error as Error).message}\n\n${HELP}`);
-    return EXIT_USAGE;
-  }
-  if (parsed.values.help) {
-    io.writeOut(HELP);
-    return EXIT_OK;
-  }
+  const parsed = parseCommandLine(analyzeCommand, args, io, { json: { type: "boolean" }, smiles: { type: "boolean" } });
+  if (parsed.exit !== undefined) return parsed.exit;
   const speciesTexts = parsed.positionals;
-  if (speciesTexts.length === 0) {
-    io.writeError(`lonepair analyze: give at least one species.\n\n${HELP}`);
-    return EXIT_USAGE;
-  }
+  if (speciesTexts.length === 0) return usageError(analyzeCommand, io, "give at least one species.");
 
   // A SMILES string such as "CO" or "NO" is also a formula, so the reader is told, never left to guess.
   const analyze = parsed.values.smiles ? analyzeSmiles : analyzeTyped;

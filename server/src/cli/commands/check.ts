@@ -2,7 +2,6 @@
  * `lonepair check [options] <files or folders...>`: every finding the editor would show, for CI.
  * Exit 0 clean, 1 errors found (or warnings with --strict), 2 usage or I/O error.
  */
-import { parseArgs } from "node:util";
 import { version } from "../../../../package.json";
 import { checkFile } from "../check/checkFile";
 import type { CheckReporter } from "../check/checkReporter";
@@ -13,7 +12,7 @@ import { sarifReporter } from "../check/sarifReporter";
 import { removeOnSignals, temporaryFiles } from "../check/temporaryFiles";
 import { textReporter } from "../check/textReporter";
 import type { CliCommand, CliIo } from "../cliCommand";
-import { EXIT_FAILURE, EXIT_OK, EXIT_USAGE } from "../cliCommand";
+import { EXIT_FAILURE, EXIT_OK, EXIT_USAGE, parseCommandLine, usageError } from "../cliCommand";
 import { findDocuments, ioMessage } from "../documents/findDocuments";
 import { terminalSafe, terminalSafeLines } from "../terminalText";
 
@@ -46,32 +45,18 @@ export const checkCommand: CliCommand = {
 };
 
 async function runCheck(args: readonly string[], io: CliIo): Promise<number> {
-  let parsed;
-  try {
-    parsed = parseArgs({
-      args: [...args],
-      options: {
-        format: { type: "string" },
-        strict: { type: "boolean" },
-        fix: { type: "boolean" },
-        "dry-run": { type: "boolean" },
-        help: { type: "boolean" },
-      },
-      allowPositionals: true,
-      strict: true,
-    });
-  } catch (error) {
-    return usageError(io, (error as Error).message);
-  }
+  const parsed = parseCommandLine(checkCommand, args, io, {
+    format: { type: "string" },
+    strict: { type: "boolean" },
+    fix: { type: "boolean" },
+    "dry-run": { type: "boolean" },
+  });
+  if (parsed.exit !== undefined) return parsed.exit;
   const { values, positionals } = parsed;
-  if (values.help) {
-    io.writeOut(HELP);
-    return EXIT_OK;
-  }
   const format = (values.format ?? "text") as Format;
-  if (!FORMATS.includes(format)) return usageError(io, `unknown format '${values.format}' (use text, json or sarif)`);
-  if (values["dry-run"] && !values.fix) return usageError(io, "--dry-run goes with --fix");
-  if (positionals.length === 0) return usageError(io, "give at least one file or folder");
+  if (!FORMATS.includes(format)) return usageError(checkCommand, io, `unknown format '${values.format}' (use text, json or sarif)`);
+  if (values["dry-run"] && !values.fix) return usageError(checkCommand, io, "--dry-run goes with --fix");
+  if (positionals.length === 0) return usageError(checkCommand, io, "give at least one file or folder");
 
   const found = findDocuments(positionals);
   for (const unreadable of found.unreadable) io.writeError(`lonepair check: ${unreadable.path}: ${unreadable.message}\n`);
@@ -138,7 +123,3 @@ function reporterFor(format: Format, io: CliIo, dryRun: boolean): CheckReporter 
   return textReporter(io.writeOut, io.colour);
 }
 
-function usageError(io: CliIo, message: string): number {
-  io.writeError(`lonepair check: ${message}\n\n${HELP}`);
-  return EXIT_USAGE;
-}

@@ -4,10 +4,9 @@
  * Exit 0 written, 1 species not analysed, 2 usage or I/O error.
  */
 import { writeFileSync } from "node:fs";
-import { parseArgs } from "node:util";
 import { analyzeTyped, coordinateFileOf, shapeOf } from "../../../../shared/src/index";
 import type { CliCommand, CliIo } from "../cliCommand";
-import { EXIT_FAILURE, EXIT_OK, EXIT_USAGE } from "../cliCommand";
+import { EXIT_FAILURE, EXIT_OK, EXIT_USAGE, parseCommandLine, usageError } from "../cliCommand";
 
 const FORMATS = ["xyz", "mol"] as const;
 type CoordinateFormat = (typeof FORMATS)[number];
@@ -41,30 +40,17 @@ export const coordsCommand: CliCommand = {
 };
 
 function runCoords(args: readonly string[], io: CliIo): number {
-  let parsed;
-  try {
-    parsed = parseArgs({
-      args: [...args],
-      options: { format: { type: "string" }, output: { type: "string" }, help: { type: "boolean" } },
-      allowPositionals: true,
-      strict: true,
-    });
-  } catch (error) {
-    return usage(io, (error as Error).message);
-  }
-  if (parsed.values.help) {
-    io.writeOut(HELP);
-    return EXIT_OK;
-  }
+  const parsed = parseCommandLine(coordsCommand, args, io, { format: { type: "string" }, output: { type: "string" } });
+  if (parsed.exit !== undefined) return parsed.exit;
   const format = (parsed.values.format ?? "xyz").toLowerCase();
   if (!FORMATS.includes(format as CoordinateFormat)) {
-    return usage(io, `unknown format '${parsed.values.format}': use xyz or mol.`);
+    return usageError(coordsCommand, io, `unknown format '${parsed.values.format}': use xyz or mol.`);
   }
   if (parsed.positionals.length !== 1) {
-    return usage(io, `give exactly one species (got ${parsed.positionals.length}); quote names with spaces.`);
+    return usageError(coordsCommand, io, `give exactly one species (got ${parsed.positionals.length}); quote names with spaces.`);
   }
   const output = parsed.values.output;
-  if (output !== undefined && output.trim() === "") return usage(io, "--output needs a file name.");
+  if (output !== undefined && output.trim() === "") return usageError(coordsCommand, io, "--output needs a file name.");
 
   const [speciesText] = parsed.positionals;
   const result = analyzeTyped(speciesText);
@@ -96,7 +82,3 @@ function runCoords(args: readonly string[], io: CliIo): number {
   return EXIT_OK;
 }
 
-function usage(io: CliIo, message: string): number {
-  io.writeError(`lonepair coords: ${message}\n\n${HELP}`);
-  return EXIT_USAGE;
-}

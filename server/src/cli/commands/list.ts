@@ -2,9 +2,8 @@
  * `lonepair list [--json] <files or folders...>`: every species mention, in document order.
  * Exit 0 when every file was read, 2 on a usage or I/O error.
  */
-import { parseArgs } from "node:util";
 import type { CliCommand, CliIo } from "../cliCommand";
-import { EXIT_OK, EXIT_USAGE } from "../cliCommand";
+import { EXIT_OK, EXIT_USAGE, parseCommandLine, usageError } from "../cliCommand";
 import { speciesInFile } from "../documents/documentSpecies";
 import { findDocuments, ioMessage } from "../documents/findDocuments";
 import { jsonTerminalSafe, terminalSafe } from "../terminalText";
@@ -30,21 +29,9 @@ export const listCommand: CliCommand = {
 };
 
 async function runList(args: readonly string[], io: CliIo): Promise<number> {
-  let parsed;
-  try {
-    parsed = parseArgs({ args: [...args], options: { json: { type: "boolean" }, help: { type: "boolean" } }, allowPositionals: true, strict: true });
-  } catch (error) {
-    io.writeError(`lonepair list: ${(error as Error).message}\n\n${HELP}`);
-    return EXIT_USAGE;
-  }
-  if (parsed.values.help) {
-    io.writeOut(HELP);
-    return EXIT_OK;
-  }
-  if (parsed.positionals.length === 0) {
-    io.writeError(`lonepair list: give at least one file or folder.\n\n${HELP}`);
-    return EXIT_USAGE;
-  }
+  const parsed = parseCommandLine(listCommand, args, io, { json: { type: "boolean" } });
+  if (parsed.exit !== undefined) return parsed.exit;
+  if (parsed.positionals.length === 0) return usageError(listCommand, io, "give at least one file or folder.");
   const found = findDocuments(parsed.positionals);
   for (const unreadable of found.unreadable) io.writeError(`lonepair list: ${unreadable.path}: ${unreadable.message}\n`);
   for (const skipped of found.skipped) io.writeError(`lonepair list: ${skipped}: not a markdown, text, CSV/TSV, JSON or YAML file; skipped\n`);

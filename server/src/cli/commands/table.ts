@@ -5,10 +5,9 @@
  * analysed, 2 on a usage or I/O error.
  */
 import { statSync } from "node:fs";
-import { parseArgs } from "node:util";
 import { MODEL_CAUTION, analyzeTyped, createSummaryCollector, summaryTable } from "../../../../shared/src/index";
 import type { CliCommand, CliIo } from "../cliCommand";
-import { EXIT_FAILURE, EXIT_OK, EXIT_USAGE } from "../cliCommand";
+import { EXIT_FAILURE, EXIT_OK, EXIT_USAGE, parseCommandLine, usageError } from "../cliCommand";
 import { speciesInFile } from "../documents/documentSpecies";
 import { findDocuments, ioMessage } from "../documents/findDocuments";
 import { terminalSafe, terminalSafeLines } from "../terminalText";
@@ -39,19 +38,11 @@ export const tableCommand: CliCommand = {
 };
 
 async function runTable(args: readonly string[], io: CliIo): Promise<number> {
-  let parsed;
-  try {
-    parsed = parseArgs({ args: [...args], options: { format: { type: "string" }, help: { type: "boolean" } }, allowPositionals: true, strict: true });
-  } catch (error) {
-    return usageError(io, (error as Error).message);
-  }
-  if (parsed.values.help) {
-    io.writeOut(HELP);
-    return EXIT_OK;
-  }
+  const parsed = parseCommandLine(tableCommand, args, io, { format: { type: "string" } });
+  if (parsed.exit !== undefined) return parsed.exit;
   const requested = parsed.values.format ?? "md";
-  if (!["md", "markdown", "csv"].includes(requested)) return usageError(io, `unknown format '${requested}' (use md or csv)`);
-  if (parsed.positionals.length === 0) return usageError(io, "give at least one file, folder or species");
+  if (!["md", "markdown", "csv"].includes(requested)) return usageError(tableCommand, io, `unknown format '${requested}' (use md or csv)`);
+  if (parsed.positionals.length === 0) return usageError(tableCommand, io, "give at least one file, folder or species");
 
   const collected = createSummaryCollector();
   let failed = false;
@@ -95,7 +86,3 @@ function isOnDisk(argument: string): boolean {
   }
 }
 
-function usageError(io: CliIo, message: string): number {
-  io.writeError(`lonepair table: ${message}\n\n${HELP}`);
-  return EXIT_USAGE;
-}
