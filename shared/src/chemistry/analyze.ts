@@ -13,6 +13,8 @@ import { chooseSkeletonStructure } from "./analysis/chooseSkeletonStructure";
 import { smilesStructure } from "./analysis/fromSmiles";
 import { boundedMemo } from "./boundedMemo";
 import { candidateStructuresFor, refusalFor, singleStructureFor, structureForName } from "./analysis/structuresByFormula";
+import { dottedAnalysis, metalIonComplexAnalysis, saltAnalysis } from "./analysis/compositeSpecies";
+import { networkMonomerNote, networkSolidProblem } from "./analysis/networkSolids";
 
 // Bound: 20,000 analyses, the oldest generation forgotten first (see boundedMemo).
 const MEMO_LIMIT = 20_000;
@@ -65,6 +67,15 @@ export function analyzeSmiles(text: string): AnalysisResult {
 export function analyzeReading(reading: SpeciesReading): AnalysisResult {
   if (reading.notation === "smiles") return analyzeSmiles(reading.text);
   if (reading.smiles !== undefined) return analyzeNamedStructure(reading, reading.smiles);
+  // Species made of parts (salts, hydrates, hydroxo ions) are split before anything is refused
+  // for containing a metal: NH4Cl is NH4+ and Cl-, not a molecule with a five-bonded nitrogen.
+  const composite =
+    dottedAnalysis(reading, analyzeSpecies) ??
+    saltAnalysis(reading, analyzeSpecies) ??
+    metalIonComplexAnalysis(reading, analyzeSpecies);
+  if (composite) return composite;
+  const network = networkSolidProblem(reading);
+  if (network) return { ok: false, reading, problem: network };
   const scope = outOfScope(reading);
   if (scope) return { ok: false, reading, problem: scope };
   // A formula that does not spell out its connectivity but has one ordinary structure (P4O10,
@@ -80,7 +91,15 @@ export function analyzeReading(reading: SpeciesReading): AnalysisResult {
     if (chosen.problem.code === "ambiguous-connectivity") return readIntoFormula(reading, chosen.problem);
     return { ok: false, reading, problem: chosen.problem };
   }
-  return { ok: true, value: buildAnalysis(reading, chosen.structure, chosen.centre) };
+  const analysis = buildAnalysis(reading, chosen.structure, chosen.centre);
+  const monomerNote = networkMonomerNote(reading);
+  return { ok: true, value: monomerNote ? withWarning(analysis, monomerNote) : analysis };
+}
+
+/** The analysis with one more warning; centres and polarity are still worked out on first read. */
+function withWarning(analysis: SpeciesAnalysis, warning: string): SpeciesAnalysis {
+  (analysis as { warnings: readonly string[] }).warnings = [warning, ...analysis.warnings];
+  return analysis;
 }
 
 /** A name that fixes its structure: the SMILES analysis of that structure, under the name. */

@@ -64,6 +64,18 @@ export interface SpeciesReading {
    * structure the name stands for, as SMILES. Analysis follows it instead of guessing a skeleton.
    */
   readonly smiles?: string;
+  /**
+   * The parts of a hydrate or adduct as written, each with its count: CuSO4·5H2O is CuSO4 once and
+   * H2O five times. Absent for a species written as one formula.
+   */
+  readonly parts?: readonly WrittenPart[];
+}
+
+/** One dot-separated part of a hydrate or adduct, as written. */
+export interface WrittenPart {
+  readonly count: number;
+  /** The part's formula as the reader writes it ("CuSO4", "H2O"). */
+  readonly formula: string;
 }
 
 /** Stable codes for everything that stops a species from being read or analysed. */
@@ -81,6 +93,10 @@ export type ProblemCode =
   | "hydrogen-overbonded"
   | "transition-metal-centre"
   | "ionic-solid"
+  | "hydrate"
+  | "adduct"
+  | "network-solid"
+  | "metal-ion-complex"
   | "three-centre-bonding"
   | "ambiguous-connectivity"
   | "no-central-atom"
@@ -220,6 +236,40 @@ export interface SpeciesAnalysis {
   readonly warnings: readonly string[];
 }
 
+/** What a part plays in the species it belongs to. */
+export type PartRole =
+  /** an ion of a salt */
+  | "cation"
+  | "anion"
+  /** the metal ion of a hydroxo or aqua ion, and what it holds */
+  | "metal-ion"
+  | "ligand"
+  /** the salt or molecule of a hydrate or adduct, and its water of crystallisation */
+  | "compound"
+  | "water";
+
+/**
+ * One part of a species that is not one molecule: an ion of a salt (the NH4+ of NH4Cl), the water
+ * of a hydrate, the hydroxide of CaOH+. Each part is analysed on its own.
+ */
+export interface SpeciesPart {
+  readonly role: PartRole;
+  /** How many of this part one formula unit holds: 2 for the NH4+ of (NH4)2SO4, 5 for the H2O of CuSO4·5H2O. */
+  readonly count: number;
+  /** The part's formula with its charge, as the reader writes it: "NH4^+", "SO4^2-", "H2O". */
+  readonly formula: string;
+  /** A single atom or monatomic ion (Na+, Cl-), which has no shape of its own. */
+  readonly monatomic: boolean;
+  /** The part's own analysis; absent for a monatomic part. A salt inside a hydrate carries its ions here. */
+  readonly analysis?: AnalysisResult;
+}
+
 export type AnalysisResult =
   | { readonly ok: true; readonly value: SpeciesAnalysis }
-  | { readonly ok: false; readonly reading?: SpeciesReading; readonly problem: Problem };
+  | {
+      readonly ok: false;
+      readonly reading?: SpeciesReading;
+      readonly problem: Problem;
+      /** A salt's ions, a hydrate's parts: each analysed, though the whole has no one shape. */
+      readonly parts?: readonly SpeciesPart[];
+    };

@@ -9,6 +9,10 @@ import type { FindingSeverity } from "./types";
 const OUTSIDE_THE_MODEL: ReadonlySet<ProblemCode> = new Set([
   "transition-metal-centre",
   "ionic-solid",
+  "hydrate",
+  "adduct",
+  "network-solid",
+  "metal-ion-complex",
   "three-centre-bonding",
   "ambiguous-connectivity",
   "no-central-atom",

@@ -44,7 +44,8 @@ function runAnalyze(args: readonly string[], io: CliIo): number {
   // A SMILES string such as "CO" or "NO" is also a formula, so the reader is told, never left to guess.
   const analyze = parsed.values.smiles ? analyzeSmiles : analyzeTyped;
   const results = speciesTexts.map((text) => ({ text, result: analyze(text) }));
-  const failures = results.filter(({ result }) => !result.ok).length;
+  // A salt or hydrate counts as analysed: each of its parts was.
+  const failures = results.filter(({ result }) => !result.ok && result.parts === undefined).length;
 
   if (parsed.values.json) {
     const json = results.map(({ text, result }) => toAnalysisJson(text, result));

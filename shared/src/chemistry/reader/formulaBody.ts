@@ -4,7 +4,7 @@
  * regular expressions, work bounded by the input length and the expansion limits below.
  */
 import { elementBySymbol } from "../elements";
-import type { FormulaPart, Problem } from "../types";
+import type { FormulaPart, Problem, WrittenPart } from "../types";
 import {
   bondMark,
   closingFor,
@@ -28,6 +28,8 @@ export interface FormulaBody {
   readonly writtenSequence: readonly FormulaPart[];
   /** The body as written, with ASCII digits, "≡" for "#", "·" for any hydrate dot, no single-bond dashes. */
   readonly normalizedText: string;
+  /** The dot-separated parts of a hydrate or adduct with their counts; absent without a dot. */
+  readonly parts?: readonly WrittenPart[];
 }
 
 export type FormulaBodyResult =
@@ -50,6 +52,8 @@ interface Frame {
   text: string;
   /** Elements or bracket groups so far; bond marks need one on each side. */
   items: number;
+  /** On the root frame of a hydrate: the parts closed so far. */
+  writtenParts?: WrittenPart[];
 }
 
 function newFrame(kind: Frame["kind"], openAt: number, openCode: number, multiplier: number): Frame {
@@ -160,7 +164,8 @@ function scan(text: string, start: number, end: number): FormulaBody {
   const composition: FormulaPart[] = new Array(root.counts.size);
   let next = 0;
   for (const [symbol, count] of root.counts) composition[next++] = { symbol, count };
-  return { composition, writtenSequence: root.parts.slice(), normalizedText };
+  const body: FormulaBody = { composition, writtenSequence: root.parts.slice(), normalizedText };
+  return root.writtenParts ? { ...body, parts: root.writtenParts } : body;
 }
 
 function readElement(text: string, i: number, end: number, frame: Frame): number {
@@ -229,6 +234,7 @@ function readHydrateSeparator(text: string, i: number, end: number, stack: Frame
   if (frame.kind === "bracket") fail("malformed-formula", "A hydrate dot cannot sit inside brackets.", dotAt, dotAt + 1);
   if (frame.items === 0) fail("malformed-formula", "A hydrate dot needs a formula on each side.", dotAt, dotAt + 1);
   if (frame.kind === "hydrate") closeHydrate(stack, dotAt);
+  else frame.writtenParts = [{ count: 1, formula: frame.text }];
   i++;
   while (i < end && isSpace(text.charCodeAt(i))) i++;
   let coefficient = 0;
@@ -239,6 +245,8 @@ function readHydrateSeparator(text: string, i: number, end: number, stack: Frame
     i++;
   }
   const multiplier = i > coefficientStart ? coefficient : 1;
+  // "12 H2O": a space may follow the count, as mhchem writes it.
+  if (i > coefficientStart) while (i < end && isSpace(text.charCodeAt(i))) i++;
   if (multiplier === 0) fail("malformed-formula", "A count of zero means the group is not there.", coefficientStart, i);
   if (i >= end) fail("malformed-formula", "A hydrate dot needs a formula on each side.", dotAt, i);
   const root = stack[0];
@@ -258,4 +266,5 @@ function closeHydrate(stack: Frame[], at: number): void {
   for (const [symbol, count] of hydrate.counts) addCount(root.counts, symbol, count * hydrate.multiplier, hydrate.openAt, at);
   root.text += hydrate.text;
   root.items++;
+  root.writtenParts?.push({ count: hydrate.multiplier, formula: hydrate.text });
 }

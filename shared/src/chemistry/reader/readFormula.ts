@@ -36,7 +36,7 @@ export function readFormulaSpan(
     const suggestion = problem.code === "unknown-element" ? checkedRecase(text, start, end) : undefined;
     return { ok: false, problem: suggestion === undefined ? problem : { ...problem, suggestion } };
   }
-  const { composition, writtenSequence, normalizedText } = body.value;
+  const { composition, writtenSequence, normalizedText, parts } = body.value;
   return {
     ok: true,
     value: {
@@ -47,6 +47,7 @@ export function readFormulaSpan(
       writtenSequence,
       charge,
       formula: normalizedText + chargeText(charge),
+      ...(parts ? { parts } : {}),
     },
   };
 }

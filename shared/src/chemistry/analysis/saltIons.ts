@@ -1,0 +1,276 @@
+/**
+ * Which ions a neutral formula is made of, decided by chemistry: a metal, ammonium or phosphonium
+ * cation, then a known polyatomic anion (or a halide, oxide, sulfide... after a metal of groups 1
+ * and 2, ammonium or phosphonium), with charges that balance in exactly one way. NH4Cl is NH4+
+ * and Cl-; (NH4)2SO4 is two NH4+ and SO4 2-; K2Cr2O7 is two K+ and Cr2O7 2-. A formula that fits
+ * no such reading, or fits it in two ways, is not split: it is left to the molecular path.
+ */
+import { chargeText } from "../reader/chargeText";
+import { readFormulaBody } from "../reader/formulaBody";
+import { ANION_ROOTS } from "../reader/names/anionRoots";
+import { ION_NAMES } from "../reader/names/ionNames";
+import type { FormulaPart, SpeciesReading } from "../types";
+import { compositionKey } from "../vsepr/measuredAngles";
+import { formsIonicBinarySalts, metalIonCharges } from "./metalIonCharges";
+
+/** One ion of a salt with its count in one formula unit. */
+export interface SaltIon {
+  readonly role: "cation" | "anion";
+  readonly count: number;
+  /** Formula with charge, in the writer's element order: "NH4^+", "OCl^-", "Cl^-". */
+  readonly formula: string;
+  readonly charge: number;
+  readonly monatomic: boolean;
+}
+
+/** One top-level group of a written formula: an element with its count, or a bracket with its count. */
+interface WrittenUnit {
+  /** The written text without the count ("Na", "NH4" for "(NH4)2"). */
+  readonly body: string;
+  readonly count: number;
+  readonly bracketed: boolean;
+  readonly composition: readonly FormulaPart[];
+}
+
+/** A cation as it may start (or end) a salt's formula: its body and the charges it can take. */
+interface CationChoice {
+  readonly body: string;
+  readonly count: number;
+  readonly charges: readonly number[];
+  readonly monatomic: boolean;
+  /** Metals of groups 1-2 and the onium ions form ionic salts with monatomic anions too. */
+  readonly takesMonatomicAnions: boolean;
+  /** Units used. */
+  readonly width: number;
+}
+
+interface AnionChoice {
+  readonly body: string;
+  /** Composition key of one ion. */
+  readonly key: string;
+  readonly count: number;
+  readonly charges: readonly number[];
+  readonly monatomic: boolean;
+}
+
+/** Polyatomic cations whose salts are plainly ionic; nitrosyl and nitronium compounds (NOCl) are not split. */
+const ONIUM_CATIONS = new Set(["ammonium", "phosphonium", "hydronium"]);
+/** Onium ions that people write without brackets: NH4Cl, PH4I. */
+const UNBRACKETED_ONIUM = new Set(["NH4", "PH4"]);
+
+/**
+ * Anions that bind metals other than those of groups 1-2 by covalent bonds or as ligands
+ * (Hg(CN)2 is a molecule, Fe(SCN)3 a complex): their formulas are not split after such metals.
+ */
+const COVALENT_WITH_D_METALS = new Set(["CN", "CNS", "CNO", "N3"]);
+
+/** Polyatomic ions by composition key, each with the charges they are listed with. */
+let ionTable: { readonly cations: Map<string, number[]>; readonly anions: Map<string, number[]> } | undefined;
+
+function ions(): NonNullable<typeof ionTable> {
+  if (ionTable) return ionTable;
+  const cations = new Map<string, number[]>();
+  const anions = new Map<string, number[]>();
+  for (const ion of ION_NAMES) {
+    if (ion.charge > 0 && !ONIUM_CATIONS.has(ion.name)) continue;
+    const body = readFormulaBody(ion.body, 0, ion.body.length);
+    if (!body.ok) continue;
+    const key = compositionKey(body.value.composition, 0);
+    const table = ion.charge > 0 ? cations : anions;
+    const charges = table.get(key) ?? [];
+    if (!charges.includes(ion.charge)) charges.push(ion.charge);
+    table.set(key, charges);
+  }
+  ionTable = { cations, anions };
+  return ionTable;
+}
+
+const MONATOMIC_ANION_CHARGE = new Map<string, number>();
+for (const root of ANION_ROOTS) MONATOMIC_ANION_CHARGE.set(root.symbol, root.charge);
+
+/** The ions of a neutral salt, cations first; undefined when the formula is not plainly a salt. */
+export function saltIons(reading: SpeciesReading): readonly SaltIon[] | undefined {
+  if (reading.charge !== 0 || reading.parts !== undefined) return undefined;
+  const units = writtenUnits(reading.formula);
+  if (units === undefined || units.length < 2) return undefined;
+  const found: SaltIon[][] = [];
+  // Cation first (NaCl, (NH4)2SO4), or, for carboxylates, last (CH3COONa, HCOONH4).
+  for (const cation of leadingCations(units)) collectSplits(cation, units.slice(cation.width), found);
+  for (const cation of trailingCations(units)) {
+    const rest = units.slice(0, units.length - cation.width);
+    const anion = wholeAnion(rest);
+    if (anion && !anion.monatomic) collect([cation], anion, found);
+  }
+  const distinct = new Map(found.map((split) => [split.map((ion) => `${ion.count}${ion.formula}`).join(" "), split]));
+  return distinct.size === 1 ? [...distinct.values()][0] : undefined;
+}
+
+function collectSplits(first: CationChoice, rest: readonly WrittenUnit[], found: SaltIon[][]): void {
+  for (const anion of anionsOf(rest)) collect([first], anion, found);
+  // Double salts: a second metal before the anion, as in the alum KCr(SO4)2.
+  if (rest.length >= 2 && !rest[0].bracketed && metalIonCharges(rest[0].body).length > 0) {
+    const second: CationChoice = metalCation(rest[0], 1);
+    for (const anion of anionsOf(rest.slice(1))) if (!anion.monatomic) collect([first, second], anion, found);
+  }
+}
+
+/** Adds every way the charges balance to zero. */
+function collect(cations: readonly CationChoice[], anion: AnionChoice, found: SaltIon[][]): void {
+  const needsIonicCation = anion.monatomic || COVALENT_WITH_D_METALS.has(anion.key);
+  if (needsIonicCation && !cations.every((cation) => cation.takesMonatomicAnions)) return;
+  for (const anionCharge of anion.charges) {
+    const negative = anion.count * anionCharge;
+    for (const charges of chargeCombinations(cations)) {
+      const positive = charges.reduce((sum, charge, k) => sum + charge * cations[k].count, 0);
+      if (positive + negative !== 0) continue;
+      found.push([
+        ...cations.map((cation, k) => ion("cation", cation.count, cation.body, charges[k], cation.monatomic)),
+        ion("anion", anion.count, anion.body, anionCharge, anion.monatomic),
+      ]);
+    }
+  }
+}
+
+function ion(role: SaltIon["role"], count: number, body: string, charge: number, monatomic: boolean): SaltIon {
+  return { role, count, formula: body + chargeText(charge), charge, monatomic };
+}
+
+function chargeCombinations(cations: readonly CationChoice[]): number[][] {
+  let combinations: number[][] = [[]];
+  for (const cation of cations) {
+    combinations = combinations.flatMap((partial) => cation.charges.map((charge) => [...partial, charge]));
+  }
+  return combinations;
+}
+
+function leadingCations(units: readonly WrittenUnit[]): CationChoice[] {
+  const choices: CationChoice[] = [];
+  const first = units[0];
+  if (!first.bracketed && metalIonCharges(first.body).length > 0) choices.push(metalCation(first, 1));
+  const onium = oniumAt(units, 0);
+  if (onium) choices.push(onium);
+  return choices;
+}
+
+function trailingCations(units: readonly WrittenUnit[]): CationChoice[] {
+  const choices: CationChoice[] = [];
+  const last = units[units.length - 1];
+  if (!last.bracketed && metalIonCharges(last.body).length > 0) choices.push(metalCation(last, 1));
+  if (units.length >= 3) {
+    const onium = oniumAt(units, units.length - 2);
+    if (onium && onium.width === 2) choices.push(onium);
+  }
+  const bracketed = oniumAt(units, units.length - 1);
+  if (bracketed && bracketed.width === 1) choices.push(bracketed);
+  return choices;
+}
+
+function metalCation(unit: WrittenUnit, width: number): CationChoice {
+  return {
+    body: unit.body,
+    count: unit.count,
+    charges: metalIonCharges(unit.body),
+    monatomic: true,
+    takesMonatomicAnions: formsIonicBinarySalts(unit.body),
+    width,
+  };
+}
+
+/** Ammonium, phosphonium or hydronium at `index`: "(NH4)2" as one unit, or "NH4" written as N then H4. */
+function oniumAt(units: readonly WrittenUnit[], index: number): CationChoice | undefined {
+  const unit = units[index];
+  if (unit === undefined) return undefined;
+  if (unit.bracketed) {
+    const charges = ions().cations.get(compositionKey(unit.composition, 0));
+    return charges ? { body: unit.body, count: unit.count, charges, monatomic: false, takesMonatomicAnions: true, width: 1 } : undefined;
+  }
+  const next = units[index + 1];
+  if (next === undefined || next.bracketed || unit.count !== 1 || next.body !== "H" || next.count !== 4) return undefined;
+  const body = `${unit.body}H4`;
+  if (!UNBRACKETED_ONIUM.has(body)) return undefined;
+  return { body, count: 1, charges: [1], monatomic: false, takesMonatomicAnions: true, width: 2 };
+}
+
+/**
+ * The anions the remaining units may spell: one bracketed group with its count, a single element
+ * as a monatomic anion (Cl, O, N), or the rest as one polyatomic ion (SO4, and O2 as peroxide).
+ */
+function anionsOf(rest: readonly WrittenUnit[]): AnionChoice[] {
+  const choices: AnionChoice[] = [];
+  if (rest.length === 1 && rest[0].bracketed) {
+    const key = compositionKey(rest[0].composition, 0);
+    const charges = ions().anions.get(key);
+    if (charges) choices.push({ body: rest[0].body, key, count: rest[0].count, charges, monatomic: false });
+  }
+  if (rest.length === 1 && !rest[0].bracketed) {
+    const charge = MONATOMIC_ANION_CHARGE.get(rest[0].body);
+    if (charge !== undefined) choices.push({ body: rest[0].body, key: rest[0].body, count: rest[0].count, charges: [charge], monatomic: true });
+  }
+  const whole = wholeAnion(rest);
+  if (whole) choices.push(whole);
+  return choices;
+}
+
+/** The units together, unbracketed, as one polyatomic anion: SO4, HCO3, Cr2O7, OCl, CH3COO. */
+function wholeAnion(rest: readonly WrittenUnit[]): AnionChoice | undefined {
+  if (rest.length === 0 || rest.some((unit) => unit.bracketed)) return undefined;
+  if (rest.length === 1 && rest[0].composition.length === 1 && rest[0].count === 1) return undefined;
+  const composition = rest.flatMap((unit) => unit.composition.map((part) => ({ symbol: part.symbol, count: part.count * unit.count })));
+  const key = compositionKey(composition, 0);
+  const charges = ions().anions.get(key);
+  if (!charges) return undefined;
+  const body = rest.map((unit) => (unit.count === 1 ? unit.body : `${unit.body}${unit.count}`)).join("");
+  return { body, key, count: 1, charges, monatomic: false };
+}
+
+/**
+ * The top-level groups of a canonical formula ("(NH4)2SO4" -> (NH4)2, S, O4). Undefined when the
+ * formula has bond marks, dots or anything else a plain salt formula does not.
+ */
+function writtenUnits(formula: string): WrittenUnit[] | undefined {
+  const units: WrittenUnit[] = [];
+  let i = 0;
+  while (i < formula.length) {
+    const code = formula.charCodeAt(i);
+    let body: string;
+    let bracketed = false;
+    if (code >= 0x41 && code <= 0x5a) {
+      const symbolEnd = i + 1 < formula.length && isLower(formula.charCodeAt(i + 1)) ? i + 2 : i + 1;
+      body = formula.slice(i, symbolEnd);
+      i = symbolEnd;
+    } else if (code === 0x28 || code === 0x5b) {
+      const close = matchingClose(formula, i);
+      if (close < 0) return undefined;
+      body = formula.slice(i + 1, close);
+      bracketed = true;
+      i = close + 1;
+    } else {
+      return undefined;
+    }
+    let count = 0;
+    const countStart = i;
+    while (i < formula.length && isDigit(formula.charCodeAt(i))) count = count * 10 + formula.charCodeAt(i++) - 0x30;
+    const read = readFormulaBody(body, 0, body.length);
+    if (!read.ok) return undefined;
+    units.push({ body, count: i > countStart ? count : 1, bracketed, composition: read.value.composition });
+  }
+  return units;
+}
+
+function matchingClose(text: string, open: number): number {
+  let depth = 0;
+  for (let i = open; i < text.length; i++) {
+    const code = text.charCodeAt(i);
+    if (code === 0x28 || code === 0x5b) depth++;
+    else if ((code === 0x29 || code === 0x5d) && --depth === 0) return i;
+  }
+  return -1;
+}
+
+function isLower(code: number): boolean {
+  return code >= 0x61 && code <= 0x7a;
+}
+
+function isDigit(code: number): boolean {
+  return code >= 0x30 && code <= 0x39;
+}
