@@ -46,7 +46,7 @@ export type * from "./document/types";
 export { MODEL_CAUTION, PLAIN_CARD_STYLE, formatAnalysisCard } from "./report/analysisCard";
 export type { CardStyle } from "./report/analysisCard";
 export { toAnalysisJson } from "./report/analysisJson";
-export { HOVER_CAUTION, hoverMarkdown, problemMarkdown } from "./report/hoverMarkdown";
+export { HOVER_CAUTION, hoverMarkdown, problemMarkdown, resultMarkdown } from "./report/hoverMarkdown";
 export type { HoverFormat } from "./report/hoverMarkdown";
 export { shapeViewModel } from "./report/shapeViewModel";
 export type { ShapeViewModel } from "./report/shapeViewModel";
@@ -54,8 +54,15 @@ export { coordinateFileOf, shapeViewModelOf } from "./report/speciesModel";
 export { geometryHints, geometryLabel, isProseKind } from "./report/geometryHints";
 export type { GeometryHint } from "./report/geometryHints";
 export type { CoordinateFile, CoordinateFileResult, CoordinateFormat } from "./report/speciesModel";
-export { SUMMARY_COLUMNS, createSummaryCollector, isSummaryColumn, summaryTable } from "./report/summaryTable";
-export type { SummaryCollector, SummaryColumn, SummaryFormat, UnanalysedSpecies } from "./report/summaryTable";
+export { SUMMARY_COLUMNS, createSummaryCollector, isSummaryColumn, summaryEntryOf, summaryTable } from "./report/summaryTable";
+export type {
+  SpeciesWithParts,
+  SummaryCollector,
+  SummaryColumn,
+  SummaryEntry,
+  SummaryFormat,
+  UnanalysedSpecies,
+} from "./report/summaryTable";
 
 // Editors: the custom requests of the language server, as plain data.
 export {

@@ -11,6 +11,7 @@ import type {
   SpeciesAnalysis,
 } from "../chemistry/types";
 import { lewisJson } from "./analysisJson";
+import { compositeKind, distinctAnalysedParts, innerParts, partLabel } from "./compositeParts";
 
 /** Wrappers for the parts of a card a caller may want to highlight. Identity by default. */
 export interface CardStyle {
@@ -58,6 +59,7 @@ function failureLines(
 ): string[] {
   const { problem, reading } = result;
   const heading = reading && reading.formula !== input.trim() ? `${input} (${reading.formula})` : input;
+  if (result.parts) return compositeLines(heading, result, style);
   const lines = [
     style.title(heading) + " " + style.error("- not analysed"),
     row(style, "Problem", style.error(`${problem.message} [${problem.code}]`)),
@@ -66,7 +68,31 @@ function failureLines(
   return lines;
 }
 
-function successLines(input: string, analysis: SpeciesAnalysis, style: CardStyle): string[] {
+/**
+ * A species made of parts (a salt, a hydrate, a hydroxo ion): what it is, its parts with their
+ * shapes, the note, then the card of each polyatomic part.
+ */
+function compositeLines(heading: string, result: Extract<AnalysisResult, { ok: false }>, style: CardStyle): string[] {
+  const parts = result.parts ?? [];
+  const name = result.reading?.name ? ` - ${result.reading.name}` : "";
+  const kind = compositeKind(result.problem.code);
+  const lines = [style.title(heading + name) + " " + style.muted(`- ${kind.noun}`)];
+  parts.forEach((part, position) => {
+    lines.push(row(style, position === 0 ? kind.partsLabel : "", partLabel(part)));
+    for (const inner of innerParts(part)) lines.push(row(style, "", `- ${partLabel(inner)}`));
+  });
+  lines.push(row(style, "Note", `${result.problem.message} [${result.problem.code}]`));
+  for (const analysis of distinctAnalysedParts(parts)) {
+    lines.push("");
+    for (const line of successLines(analysis.reading.formula, analysis, style, false)) lines.push(INDENT + line);
+  }
+  for (const line of wrapWords(`Caution: ${MODEL_CAUTION}`, LINE_WIDTH - INDENT.length)) {
+    lines.push(INDENT + style.muted(line));
+  }
+  return lines;
+}
+
+function successLines(input: string, analysis: SpeciesAnalysis, style: CardStyle, withCaution = true): string[] {
   const { reading } = analysis;
   const title = reading.name ? `${reading.formula} - ${reading.name}` : reading.formula;
   const echoed = input.trim() === reading.formula || input.trim() === reading.name ? "" : `  (from "${input}")`;
@@ -90,6 +116,7 @@ function successLines(input: string, analysis: SpeciesAnalysis, style: CardStyle
       lines.push(row(style, position === 0 ? "Warnings" : "", style.warning(warning))),
     );
   }
+  if (!withCaution) return lines;
   for (const line of wrapWords(`Caution: ${MODEL_CAUTION}`, LINE_WIDTH - INDENT.length)) {
     lines.push(INDENT + style.muted(line));
   }

@@ -11,7 +11,9 @@ import type {
   MeasuredAngle,
   ProblemCode,
   SpeciesAnalysis,
+  SpeciesPart,
 } from "../chemistry/types";
+import { partShapeText } from "../chemistry/analysis/partShapes";
 
 /** One centre in the JSON output. */
 export interface CentreJson {
@@ -79,6 +81,24 @@ export interface AnalysisJsonFailure {
     readonly message: string;
     readonly suggestion?: string;
   };
+  // extras after the fixed fields
+  /** The canonical formula, when the text was read. */
+  readonly formula?: string;
+  readonly name?: string;
+  /** A salt's ions, a hydrate's parts, a hydroxo ion's metal and ligands, each analysed on its own. */
+  readonly parts?: readonly PartJson[];
+}
+
+/** One part of a salt, hydrate or complex ion. */
+export interface PartJson {
+  readonly role: SpeciesPart["role"];
+  readonly count: number;
+  readonly formula: string;
+  readonly monatomic: boolean;
+  /** The part's shape in a few words: "tetrahedral", "monatomic ion, no shape of its own". */
+  readonly shape: string;
+  /** The part's own analysis in this same form; absent for a monatomic part. */
+  readonly analysis?: AnalysisJson;
 }
 
 export type AnalysisJson = AnalysisJsonSuccess | AnalysisJsonFailure;
@@ -90,10 +110,18 @@ export type AnalysisJson = AnalysisJsonSuccess | AnalysisJsonFailure;
 export function toAnalysisJson(input: string, result: AnalysisResult): AnalysisJson {
   if (!result.ok) {
     const { code, message, suggestion } = result.problem;
-    return {
+    const failure: AnalysisJsonFailure = {
       input,
       ok: false,
       error: suggestion === undefined ? { code, message } : { code, message, suggestion },
+    };
+    if (!result.parts) return failure;
+    const { reading } = result;
+    return {
+      ...failure,
+      ...(reading ? { formula: reading.formula } : {}),
+      ...(reading?.name ? { name: reading.name } : {}),
+      parts: result.parts.map(partJson),
     };
   }
   return successJson(input, result.value);
@@ -118,6 +146,11 @@ function successJson(input: string, analysis: SpeciesAnalysis): AnalysisJsonSucc
     lewis: lewisJson(analysis),
     measuredAngles: analysis.measuredAngles.map((angle) => ({ ...angle })),
   };
+}
+
+function partJson(part: SpeciesPart): PartJson {
+  const json: PartJson = { role: part.role, count: part.count, formula: part.formula, monatomic: part.monatomic, shape: partShapeText(part) };
+  return part.analysis ? { ...json, analysis: toAnalysisJson(part.formula, part.analysis) } : json;
 }
 
 function centreJson(centre: CentreAnalysis): CentreJson {

@@ -4,13 +4,17 @@
  * Pure: takes the core's plain data, returns a string; no editor or protocol types.
  */
 import type {
+  AnalysisResult,
   AngleExpectation,
   CentreAnalysis,
   MeasuredAngle,
   MolecularGraph,
   SpeciesAnalysis,
+  SpeciesPart,
 } from "../chemistry/types";
 import { shapeSketchSvg, svgDataUri } from "./shapeSketch";
+import { compositeKind, distinctAnalysedParts, innerParts, roleWords } from "./compositeParts";
+import { partShapeText } from "../chemistry/analysis/partShapes";
 
 /** The caution every editor-facing result carries (hover cards and summary tables). */
 export const HOVER_CAUTION =
@@ -109,6 +113,50 @@ export interface ProblemCardOptions {
    * the card then says where to look instead of repeating it.
    */
   readonly alsoAProblem?: boolean;
+}
+
+/**
+ * The hover card for any result: the full card of an analysed species, the parts of a salt,
+ * hydrate or hydroxo ion with their shapes, or the reason nothing could be analysed.
+ */
+export function resultMarkdown(
+  text: string,
+  result: AnalysisResult,
+  options: HoverMarkdownOptions,
+  problemOptions: ProblemCardOptions = {},
+): string {
+  if (result.ok) return hoverMarkdown(result.value, options);
+  if (result.parts) return compositeMarkdown(text, result, options);
+  return problemMarkdown(text, result.problem.message, options.format, problemOptions);
+}
+
+/** A salt lists its ions, a hydrate its parts, each with its shape; then the note and each polyatomic part's centres. */
+function compositeMarkdown(text: string, result: Extract<AnalysisResult, { ok: false }>, options: HoverMarkdownOptions): string {
+  const markup = markupFor(options.format);
+  const parts = result.parts ?? [];
+  const formula = markup.code(result.reading?.formula ?? text);
+  const name = result.reading?.name;
+  const kind = compositeKind(result.problem.code);
+  const title = name ? `${markup.strong(markup.text(name))} · ${formula}` : markup.strong(formula);
+  const lines = [`${title} · ${kind.noun}`, "", markup.strong(kind.partsLabel)];
+  for (const part of parts.slice(0, MAX_LISTED)) {
+    lines.push(partBullet(part, "- ", markup));
+    for (const inner of innerParts(part).slice(0, MAX_LISTED)) lines.push(partBullet(inner, "  - ", markup));
+  }
+  lines.push("", markup.text(result.problem.message), "");
+  for (const analysis of distinctAnalysedParts(parts).slice(0, MAX_LISTED)) {
+    const centres = centreBlocks(analysis.centres, { ...options, maxCentreGroups: 2 }, markup);
+    if (centres.length === 0) continue;
+    lines.push(`${markup.strong(markup.code(analysis.reading.formula))} · ${electronLine(analysis)}`, "");
+    for (const block of centres) lines.push(...block, "");
+  }
+  const body = lines.join("\n");
+  const kept = body.length > MAX_CARD_LENGTH ? `${body.slice(0, MAX_CARD_LENGTH)}…\n\n` : body;
+  return `${kept}${markup.emphasis(HOVER_CAUTION)}`;
+}
+
+function partBullet(part: SpeciesPart, bullet: string, markup: Markup): string {
+  return `${bullet}${markup.code(part.formula)} ×${part.count} (${roleWords(part)}): ${markup.strong(markup.text(partShapeText(part)))}`;
 }
 
 /** Builds a short card for text that names no species lonepair can analyse. */

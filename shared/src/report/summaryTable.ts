@@ -2,9 +2,11 @@
  * Builds a geometry table (markdown or CSV) for a list of analysed species.
  * Pure: the caller decides which species and in which order; duplicates are dropped here.
  */
-import type { AnalysisResult, CentreAnalysis, SpeciesAnalysis } from "../chemistry/types";
+import type { AnalysisResult, CentreAnalysis, SpeciesAnalysis, SpeciesPart, SpeciesReading } from "../chemistry/types";
+import { partShapeText } from "../chemistry/analysis/partShapes";
 import { analyzeOccurrenceSafely } from "../document/speciesAt";
 import type { SpeciesOccurrence } from "../document/types";
+import { compositeKind, leafParts } from "./compositeParts";
 import { HOVER_CAUTION, formatAngle } from "./hoverMarkdown";
 
 /** A column the table can show. */
@@ -52,9 +54,26 @@ export interface UnanalysedSpecies {
   readonly message: string;
 }
 
+/** A species made of parts (a salt, a hydrate): one row whose cells list its parts. */
+export interface SpeciesWithParts {
+  readonly reading: SpeciesReading;
+  readonly kind: string;
+  readonly parts: readonly SpeciesPart[];
+}
+
+/** One row of the table: an analysed species, or a species made of parts. */
+export type SummaryEntry = SpeciesAnalysis | SpeciesWithParts;
+
+/** The table row a result gives, if any; the rest go under "Not analysed". */
+export function summaryEntryOf(result: AnalysisResult): SummaryEntry | undefined {
+  if (result.ok) return result.value;
+  if (result.parts && result.reading) return { reading: result.reading, kind: compositeKind(result.problem.code).noun, parts: result.parts };
+  return undefined;
+}
+
 export interface SummaryTableInput {
-  /** Analyses in order of first appearance; later duplicates (same formula) are skipped. */
-  readonly analyses: readonly SpeciesAnalysis[];
+  /** Rows in order of first appearance; later duplicates (same formula) are skipped. */
+  readonly analyses: readonly SummaryEntry[];
   readonly unanalysed?: readonly UnanalysedSpecies[];
   readonly columns?: readonly SummaryColumn[];
   readonly format: SummaryFormat;
@@ -79,7 +98,7 @@ export function summaryTable(input: SummaryTableInput): string {
   return markdownTable(headers, rows, uniqueUnanalysed(input.unanalysed ?? []));
 }
 
-function uniqueByFormula(analyses: readonly SpeciesAnalysis[]): SpeciesAnalysis[] {
+function uniqueByFormula(analyses: readonly SummaryEntry[]): SummaryEntry[] {
   const seen = new Set<string>();
   return analyses.filter((analysis) => {
     if (seen.has(analysis.reading.formula)) return false;
@@ -93,7 +112,9 @@ function uniqueUnanalysed(items: readonly UnanalysedSpecies[]): UnanalysedSpecie
   return items.filter((item) => !seen.has(item.text) && seen.add(item.text) !== undefined);
 }
 
-function cellText(analysis: SpeciesAnalysis, column: SummaryColumn, decimals: number): string {
+function cellText(entry: SummaryEntry, column: SummaryColumn, decimals: number): string {
+  if ("parts" in entry) return partsCellText(entry, column, decimals);
+  const analysis = entry;
   switch (column) {
     case "formula":
       return analysis.reading.formula;
@@ -119,18 +140,62 @@ function cellText(analysis: SpeciesAnalysis, column: SummaryColumn, decimals: nu
 }
 
 /**
+ * A salt's or hydrate's row: each part's value after its formula ("NH4^+: tetrahedral; Cl^-:
+ * monatomic ion"), the parts of a hydrate's salt listed in its place.
+ */
+function partsCellText(entry: SpeciesWithParts, column: SummaryColumn, decimals: number): string {
+  if (column === "formula") return entry.reading.formula;
+  if (column === "name") return entry.reading.name ?? "";
+  if (column === "polarity") return entry.kind;
+  if (column === "valenceElectrons") return "";
+  const entries: string[] = [];
+  for (const part of leafParts(entry.parts)) {
+    const analysis = part.analysis?.ok ? part.analysis.value : undefined;
+    let value: string;
+    if (column === "molecularGeometry" || analysis === undefined) {
+      value = column === "molecularGeometry" ? partShapeText(part) : "";
+    } else {
+      value = perCentre(analysis.centres, (centre) => centreValue(centre, column, decimals), ", ", " ");
+    }
+    const item = value === "" ? "" : `${part.formula}: ${value}`;
+    if (item !== "" && !entries.includes(item)) entries.push(item);
+  }
+  return entries.join("; ");
+}
+
+function centreValue(centre: CentreAnalysis, column: SummaryColumn, decimals: number): string {
+  switch (column) {
+    case "axe":
+      return centre.axe;
+    case "electronGeometry":
+      return centre.electronGeometry;
+    case "idealAngles":
+      return centre.idealAngles.map((angle) => formatAngle(angle, decimals)).join(", ");
+    case "hybridization":
+      return centre.hybridization;
+    default:
+      return centre.molecularGeometry;
+  }
+}
+
+/**
  * One centre shows its value alone; several show "C: tetrahedral; O: bent", with identical
  * neighbours merged so that hexane's six carbons read as one entry.
  */
-function perCentre(centres: readonly CentreAnalysis[], valueOf: (centre: CentreAnalysis) => string): string {
+function perCentre(
+  centres: readonly CentreAnalysis[],
+  valueOf: (centre: CentreAnalysis) => string,
+  separator = "; ",
+  atomMark = ": ",
+): string {
   if (centres.length === 0) return "";
   if (centres.length === 1) return valueOf(centres[0]);
   const entries: string[] = [];
   for (const centre of centres) {
-    const entry = `${centre.atom}: ${valueOf(centre)}`;
+    const entry = `${centre.atom}${atomMark}${valueOf(centre)}`;
     if (!entries.includes(entry)) entries.push(entry);
   }
-  return entries.join("; ");
+  return entries.join(separator);
 }
 
 function markdownTable(headers: readonly string[], rows: readonly string[][], unanalysed: readonly UnanalysedSpecies[]): string {
@@ -187,21 +252,23 @@ export interface SummaryCollector {
   addOccurrence(occurrence: SpeciesOccurrence): void;
   /** Adds a species given as text with its analysis (a command-line argument). */
   addResult(text: string, result: AnalysisResult): void;
-  readonly analyses: readonly SpeciesAnalysis[];
+  readonly analyses: readonly SummaryEntry[];
   readonly unanalysed: readonly UnanalysedSpecies[];
 }
 
 export function createSummaryCollector(): SummaryCollector {
-  const analyses: SpeciesAnalysis[] = [];
+  const analyses: SummaryEntry[] = [];
   const unanalysed: UnanalysedSpecies[] = [];
   const formulas = new Set<string>();
   const failedTexts = new Set<string>();
   const addResult = (text: string, result: AnalysisResult): void => {
-    if (result.ok) {
-      if (formulas.has(result.value.reading.formula)) return;
-      formulas.add(result.value.reading.formula);
-      analyses.push(result.value);
-    } else if (!failedTexts.has(text)) {
+    // A salt or hydrate gets a row listing its parts, like an analysed species.
+    const entry = summaryEntryOf(result);
+    if (entry) {
+      if (formulas.has(entry.reading.formula)) return;
+      formulas.add(entry.reading.formula);
+      analyses.push(entry);
+    } else if (!result.ok && !failedTexts.has(text)) {
       failedTexts.add(text);
       unanalysed.push({ text, message: result.problem.message });
     }

@@ -2,7 +2,7 @@
  * Hover: the species under the cursor, found among the model's occurrences, shown as a card.
  */
 import { MarkupKind, type Hover, type HoverParams } from "vscode-languageserver";
-import { hoverMarkdown, problemMarkdown, speciesAtOffset } from "../../../../shared/src/index";
+import { resultMarkdown, speciesAtOffset } from "../../../../shared/src/index";
 import type { Finding, TextRange } from "../core";
 import { guarded } from "../guardedHandler";
 import { lspRange } from "../ranges";
@@ -20,9 +20,8 @@ export function registerHover(context: ServerContext): void {
       const result = species.analysis;
       // The card is written in the format the client asked for, not merely labelled with it.
       const format = context.clientFeatures().hoverFormat;
-      const value = result.ok
-        ? hoverMarkdown(result.value, { angleDecimals: settings.angleDecimals, format })
-        : problemMarkdown(species.text, result.problem.message, format, { alsoAProblem: isReported(analysed.findings(), species.range, result.problem.message) });
+      const alsoAProblem = !result.ok && isReported(analysed.findings(), species.range, result.problem.message);
+      const value = resultMarkdown(species.text, result, { angleDecimals: settings.angleDecimals, format }, { alsoAProblem });
       return {
         contents: { kind: format === "markdown" ? MarkupKind.Markdown : MarkupKind.PlainText, value },
         range: lspRange(document, species.range),
