@@ -18,13 +18,11 @@ const CORPUS = join(repositoryRoot, "tests", "fixtures", "real-style");
  */
 const KNOWN_FALSE_ERRORS: Readonly<Record<string, string>> = {
   "handbook-tsv/aqueous-ions-298K.tsv": "sign-first charges (Ca+2, CO3-2, Fe(CN)6-3)",
-  "html-markdown/chem-101-unit-4-acids-bases-salts.md": "ammonium salts read as molecules (NH4Cl octet-exceeded)",
-  "inventory-csv/science-cabinet-c108.csv": "ammonium salts read as molecules (NH4Cl octet-exceeded)",
   "latex-notes/run-23-iron-complexes-and-isotopes.md": "a state symbol after a charge in mhchem (CO3^2-_{(aq)})",
 };
 
 /** The most false errors the whole corpus may get: today's count, lowered as the engine improves. */
-const MAX_FALSE_ERRORS = 29;
+const MAX_FALSE_ERRORS = 26;
 
 interface JsonFinding {
   readonly file: string;
