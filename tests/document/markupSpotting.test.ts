@@ -146,3 +146,33 @@ describe("data columns", () => {
     expect(findings).toEqual([["error", "C1CC("]]);
   });
 });
+
+describe("code spans and reStructuredText", () => {
+  // common practice: how package READMEs and notes write SMILES, links, math roles and code
+  it.each([
+    ["Acetic acid is `⟦CC(=O)O⟧` and phenol `⟦c1ccc(cc1)O⟧`; `smiles:⟦CCO⟧` is marked.", "markdown"],
+    ["Code such as `config`, `H3PO4`, `foo()`, `n/a`, `x = 1`, `CO` and `C1CC` is not offered.", "markdown"],
+    ["Polyprotic acids (:math:`\\mathrm{⟦H_3PO_4⟧}`) lose protons in steps.", "plaintext"],
+    ["See `the note on dissolved ⟦CO2⟧ <https://docs.kestrel-ridge.example/carbonate.html>`_ first.", "plaintext"],
+    [
+      "Run it like this:\n\n.. code-block:: python\n\n    t = Titration(analyte=\"CH3COOH\", titrant=\"NaOH\")\n\nThen ⟦NaOH⟧ is added.\n",
+      "plaintext",
+    ],
+    ["The output::\n\n    NH3 HCl H3PO4\n\nends the run with ⟦HCl⟧.\n", "plaintext"],
+    [".. math::\n\n   K_a = \\frac{[\\mathrm{⟦H_3O^+⟧}][\\mathrm{A^-}]}{[\\mathrm{HA}]}\n\n.. note::\n\n   Keep ⟦NaOH⟧ closed.\n", "plaintext"],
+  ])("%j", (marked, kind) => {
+    check(marked, kind as DocumentKind);
+  });
+
+  it("offers an unmarked SMILES for hovers and tables but never reports on it", () => {
+    // source: RDKit, CalcMolFormula("CC(=O)O") = C2H4O2 (acetic acid)
+    // common practice: [CH2] with one hydrogen short makes c1ccc(cc1)[CH2] the benzyl radical, which
+    // a marked SMILES would report
+    const model = analyzeDocument("Stock: `CC(=O)O` and `c1ccc(cc1)[CH2]`.", "markdown");
+    expect(model.occurrences.map((occurrence) => [occurrence.reading.notation, occurrence.reading.formula])).toEqual([
+      ["smiles", "C2H4O2"],
+      ["smiles", "C7H7"],
+    ]);
+    expect(checkDocument(model)).toEqual([]);
+  });
+});

@@ -3,7 +3,7 @@
  * of the text itself. Linear in the length of the text and never throws.
  */
 import { scanMarkdown } from "./scanMarkdown";
-import { scanProse } from "./scanProse";
+import { scanPlainText } from "./scanPlainText";
 import { memoisedReader, type SpeciesReader } from "./speciesReader";
 import { readDelimitedRecords } from "./tables/delimitedRecords";
 import { readJsonRecords } from "./tables/json";
@@ -69,7 +69,7 @@ function readByKind(text: string, kind: DocumentKind, read: SpeciesReader, sink:
       scanMarkdown(text, read, sink);
       return [];
     default:
-      scanProse(text, 0, text.length, sink, read);
+      scanPlainText(text, read, sink);
       return [];
   }
 }

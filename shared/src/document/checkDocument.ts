@@ -37,7 +37,7 @@ export function checkDocument(model: DocumentModel, analyze: (text: string) => A
   const findings: Finding[] = [];
   for (const unreadable of model.unreadable ?? []) findings.push(unreadableFinding(unreadable, analyze));
   for (const occurrence of model.occurrences) {
-    if (echoes.has(occurrence)) continue;
+    if (echoes.has(occurrence) || occurrence.inferred) continue;
     const result = analysisOf(occurrence);
     if (!result) continue;
     if (!result.ok) findings.push(problemFinding(occurrence, result.problem, analyze));

@@ -67,16 +67,40 @@ export function scanLatexMath(text: string, start: number, end: number, read: Sp
       wordStart += face[0].length;
       wordEnd--;
     }
-    const written = text.slice(wordStart, wordEnd);
-    if (written.length === 0 || OPERATORS.test(written)) continue;
-    const plain = latexToPlain(written);
-    if (plain === undefined || plain.length === 0) continue;
-    const caret = plain.indexOf("^");
-    const body = caret < 0 ? plain : plain.slice(0, caret);
-    const shape = shapeOf(body, caret < 0 ? "" : plain.slice(caret));
-    if (!shape || !isConfidentToken(plain, body, shape)) continue;
-    const result = read(written);
-    if (result.ok) sink.occurrences.push(occurrenceAt(result.value, written, wordStart, "formula"));
+    if (!readMathPiece(text, wordStart, wordEnd, read, sink)) readFaceGroups(text, wordStart, wordEnd, read, sink);
+  }
+}
+
+/** Reads `text[start, end)` as one species when it is one; true when it was read. */
+function readMathPiece(text: string, start: number, end: number, read: SpeciesReader, sink: ScanSink): boolean {
+  const written = text.slice(start, end);
+  if (written.length === 0 || OPERATORS.test(written)) return false;
+  const plain = latexToPlain(written);
+  if (plain === undefined || plain.length === 0) return false;
+  const caret = plain.indexOf("^");
+  const body = caret < 0 ? plain : plain.slice(0, caret);
+  const shape = shapeOf(body, caret < 0 ? "" : plain.slice(caret));
+  if (!shape || !isConfidentToken(plain, body, shape)) return false;
+  const result = read(written);
+  if (result.ok) sink.occurrences.push(occurrenceAt(result.value, written, start, "formula"));
+  return result.ok;
+}
+
+/** "\frac{[\mathrm{H_3O^+}][\mathrm{A^-}]}{...}": each upright group inside a larger expression. */
+function readFaceGroups(text: string, start: number, end: number, read: SpeciesReader, sink: ScanSink): void {
+  const face = /\\(?:mathrm|text|textrm)\{/g;
+  const word = text.slice(start, end);
+  for (let match = face.exec(word); match; match = face.exec(word)) {
+    const open = start + match.index + match[0].length;
+    let depth = 1;
+    let close = open;
+    while (close < end && depth > 0) {
+      const code = text.charCodeAt(close);
+      if (code === 0x7b) depth++;
+      else if (code === 0x7d) depth--;
+      if (depth > 0) close++;
+    }
+    if (depth === 0) readMathPiece(text, open, close, read, sink);
   }
 }
 

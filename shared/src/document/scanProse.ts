@@ -12,7 +12,7 @@ import { latexMathSpan, scanLatexMath, type MathSpan } from "./latexMathSpan";
 import { mhchemSpanEnd, scanMhchemBody } from "./mhchemSpan";
 import { isPartOfCode, isWordContext } from "./proseContext";
 import { isConfidentToken, needsCalmContext, shapeOf } from "./proseTokenRules";
-import { isOccurrence, smilesOccurrence } from "./smilesSpan";
+import { isOccurrence, smilesAt, smilesOccurrence } from "./smilesSpan";
 import { mayBeOneWordName, mayEndName } from "./speciesNames";
 import { emptySink, memoisedReader, occurrenceAt, unreadableAt, type ScanSink, type SpeciesReader } from "./speciesReader";
 import type { SpeciesOccurrence } from "./types";
@@ -126,10 +126,38 @@ function codeSpan(scan: ProseScan, open: number): number {
     return ticksEnd;
   }
   close += ticksEnd;
-  const found = smilesOccurrence(text, ticksEnd, close);
+  // reStructuredText: ":math:`H_3O^+`" is math; "`dissolved CO2 <https://...>`_" is a link whose text is prose.
+  if (length === 1 && text.endsWith(":math:", open)) {
+    scanLatexMath(text, ticksEnd, close, scan.read, scan.sink);
+    return close + length;
+  }
+  if (length === 1 && text.charCodeAt(close + 1) === 0x5f && text.charCodeAt(open - 1) !== 0x3a) {
+    const target = text.lastIndexOf(" <", close);
+    scanProse(text, ticksEnd, target > ticksEnd && text.charCodeAt(close - 1) === 0x3e ? target : close, scan.sink, scan.read);
+    return close + length;
+  }
+  const found = smilesOccurrence(text, ticksEnd, close) ?? unmarkedSmiles(scan, ticksEnd, close);
   if (found && isOccurrence(found)) scan.sink.occurrences.push(found);
   else if (found) scan.sink.unreadable.push(found);
   return close + length;
+}
+
+/**
+ * A code span holding a SMILES without the `smiles:` marker ("`CC(=O)O`"): offered as a species
+ * when it spells three or more heavy atoms and is neither a word nor a formula, and never checked,
+ * as the writer did not say it is chemistry.
+ */
+function unmarkedSmiles(scan: ProseScan, start: number, end: number): SpeciesOccurrence | undefined {
+  const { text } = scan;
+  if (end - start < 3 || end - start > 200) return undefined;
+  const content = text.slice(start, end);
+  if (/^[A-Za-z]+$/.test(content) || !/^[A-Za-z0-9@+\-\[\]()=#$/\\%.:*]+$/.test(content)) return undefined;
+  if (scan.read(content).ok) return undefined;
+  const found = smilesAt(text, start, end);
+  if (!found || !isOccurrence(found)) return undefined;
+  let heavyAtoms = 0;
+  for (const part of found.reading.composition) if (part.symbol !== "H") heavyAtoms += part.count;
+  return heavyAtoms >= 3 ? { ...found, inferred: true } : undefined;
 }
 
 /** A `\ce{...}` span: every piece is chemistry, so every readable piece counts. */

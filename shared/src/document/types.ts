@@ -11,6 +11,11 @@ export interface SpeciesOccurrence {
   readonly range: TextRange;
   readonly text: string;
   readonly reading: SpeciesReading;
+  /**
+   * Set for a mention the writer did not mark as chemistry (a code span that parses as SMILES):
+   * shown in hovers and tables, never the subject of a finding.
+   */
+  readonly inferred?: true;
 }
 
 /** What a table column (or a record key) holds, recognised from its header. */
