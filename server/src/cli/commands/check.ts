@@ -27,10 +27,13 @@ Options:
   --format <text|json|sarif>  output format (default text: path:line:column: severity: message [code])
   --strict                    warnings fail the check too (exit status 1)
   --fix                       apply the fixes the editor offers, writing each changed file atomically
+                              (through symbolic links to their targets; mode, owner, group and
+                              hard links kept; a file changed meanwhile is left alone)
   --dry-run                   with --fix: print the fixes as a unified diff, change no file
   --help                      show this help
 
-Exit status: 0 no errors, 1 errors found (or warnings with --strict), 2 usage or I/O error.
+Exit status: 0 no errors, 1 errors found (or warnings with --strict), 2 usage error, or a file
+that could not be read or fixed (each is named on stderr).
 Lines and columns are 1-based; columns count UTF-16 code units.
 `;
 
