@@ -5,7 +5,7 @@
  * never trusted to tell texts apart. Findings are worked out lazily, once per revision.
  */
 import type { TextDocument } from "vscode-languageserver-textdocument";
-import { analysedTextOf } from "../../../shared/src/index";
+import { analysedTextOf, checkDelimitedText, delimitedRowMemo, type DelimitedRowMemo } from "../../../shared/src/index";
 import { analyzeDocument, checkDocument, documentKindFor, type DocumentKind, type DocumentModel, type Finding } from "./core";
 
 /** One analysed version of a document. */
@@ -48,6 +48,9 @@ export const SNIFF_LENGTH = 4096;
 export function createDocumentCache(capacity = 32): DocumentCache {
   const entries = new Map<string, AnalysedDocument>();
   const revisions = new Map<string, number>();
+  // One memo of table rows per open table, kept from edit to edit: an edit re-checks only the
+  // rows whose cells it changed, as the command line does for rows that repeat.
+  const rowMemos = new Map<string, DelimitedRowMemo>();
   let lastRevision = 0;
   const revisionOf = (uri: string): number => {
     let revision = revisions.get(uri);
@@ -68,7 +71,12 @@ export function createDocumentCache(capacity = 32): DocumentCache {
         entries.set(document.uri, cached);
         return cached;
       }
-      const entry = analyseDocument(document, kind, revision);
+      let rowMemo: DelimitedRowMemo | undefined;
+      if (kind === "csv" || kind === "tsv") {
+        rowMemo = rowMemos.get(document.uri) ?? delimitedRowMemo();
+        rowMemos.set(document.uri, rowMemo);
+      }
+      const entry = analyseDocument(document, kind, revision, rowMemo);
       entries.delete(document.uri);
       entries.set(document.uri, entry);
       while (entries.size > capacity) {
@@ -89,6 +97,7 @@ export function createDocumentCache(capacity = 32): DocumentCache {
     delete(uri) {
       entries.delete(uri);
       revisions.delete(uri);
+      rowMemos.delete(uri);
     },
   };
 }
@@ -97,36 +106,47 @@ function firstBytesRange(document: TextDocument) {
   return { start: { line: 0, character: 0 }, end: document.positionAt(SNIFF_LENGTH) };
 }
 
-/** Analyses one version of a document as `kind` (also for text that is not open). */
-export function analyseDocument(document: TextDocument, kind: DocumentKind, revision: number): AnalysedDocument {
+/**
+ * Analyses one version of a document as `kind` (also for text that is not open). The model is
+ * read the first time a feature asks for it; a table's findings come from its rows alone, through
+ * `rowMemo` when one is given, so diagnostics after an edit need not rebuild the whole model.
+ */
+export function analyseDocument(document: TextDocument, kind: DocumentKind, revision: number, rowMemo?: DelimitedRowMemo): AnalysedDocument {
   const analysed = analysedTextOf(document.getText());
-  const model = analysed.binary ? EMPTY_MODEL(kind) : analyzeDocument(analysed.text, kind);
+  let model: DocumentModel | undefined;
+  const modelOf = (): DocumentModel => (model ??= analysed.binary ? EMPTY_MODEL(kind) : analyzeDocument(analysed.text, kind));
   let findings: readonly Finding[] | undefined;
+  const tableFindings = (): readonly Finding[] =>
+    analysed.binary || (kind !== "csv" && kind !== "tsv") || !rowMemo ? [] : checkDelimitedText(analysed.text, kind, { memo: rowMemo });
   return {
     uri: document.uri,
     version: document.version,
     revision,
     kind,
-    model,
+    get model() {
+      return modelOf();
+    },
     truncatedAt: analysed.truncatedAt,
     binary: analysed.binary,
     findings() {
-      findings ??= [...truncationNote(analysed.truncatedAt), ...model.problems, ...checkDocument(model)];
+      if (findings) return findings;
+      const found = rowMemo && (kind === "csv" || kind === "tsv") ? tableFindings() : [...modelOf().problems, ...checkDocument(modelOf())];
+      findings = [...truncationNote(analysed.truncatedAt), ...found];
       return findings;
     },
   };
 }
 
-/** One information finding at the top of a document that was only partly analysed. */
+/** One warning on the first line of a document that was only partly analysed, saying how much was. */
 function truncationNote(truncatedAt: number | undefined): Finding[] {
   if (truncatedAt === undefined) return [];
-  const megabytes = (truncatedAt / (1024 * 1024)).toFixed(1);
+  const millions = (truncatedAt / (1024 * 1024)).toFixed(1);
   return [
     {
       range: { start: 0, end: 0 },
-      severity: "information",
+      severity: "warning",
       code: "document-partly-analysed",
-      message: `This document is large: lonepair analysed only its first ${megabytes} million characters.`,
+      message: `This document is very large: lonepair checked only its first ${millions} Mi characters; nothing after that is checked. The command line (lonepair check) reads files of any size.`,
     },
   ];
 }

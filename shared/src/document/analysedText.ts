@@ -4,10 +4,11 @@
  */
 
 /**
- * Documents longer than this (UTF-16 code units) are analysed only up to here. A megabyte of
- * prose takes the core a few seconds, and every edit re-analyses, so more would make typing lag.
+ * Documents longer than this (UTF-16 code units, 50 Mi characters) are analysed only up to here:
+ * the editor checks every row of any table a lab keeps, and stops with a clear warning only where
+ * a file is more data dump than document.
  */
-export const MAX_ANALYSED_LENGTH = 1024 * 1024;
+export const MAX_ANALYSED_LENGTH = 50 * 1024 * 1024;
 
 /** How far back from the cap we look for a line break to cut at. */
 const CUT_SEARCH_WINDOW = 64 * 1024;

@@ -19,13 +19,11 @@ import { enabledDocument, type ServerContext } from "../serverContext";
 /** Every diagnostic carries this source, so users can filter and quick fixes can match. */
 export const DIAGNOSTIC_SOURCE = "lonepair";
 
-/** How long typing must pause before pushed diagnostics are recomputed. */
-const PUSH_DELAY_MS = 150;
-
-/** Large documents cost more to re-analyse, so they wait longer: one more millisecond per kilobyte, up to a second. */
-function pushDelay(length: number): number {
-  return PUSH_DELAY_MS + Math.min(1000, Math.floor(length / 1024));
-}
+/**
+ * How long typing must pause before pushed diagnostics are recomputed, whatever the document's
+ * size: an edit to a large table re-checks only the rows it changed.
+ */
+const PUSH_DELAY_MS = 50;
 
 const SEVERITIES: Readonly<Record<FindingSeverity, DiagnosticSeverity>> = {
   error: DiagnosticSeverity.Error,
@@ -145,8 +143,7 @@ function registerPush(context: ServerContext): DiagnosticsFeature {
 
   const schedule = (uri: string): void => {
     clearTimeout(timers.get(uri));
-    const length = context.documents.get(uri)?.getText().length ?? 0;
-    timers.set(uri, setTimeout(() => void publish(uri), pushDelay(length)));
+    timers.set(uri, setTimeout(() => void publish(uri), PUSH_DELAY_MS));
   };
 
   return {
