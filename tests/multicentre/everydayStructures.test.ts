@@ -223,3 +223,48 @@ describe("doubly charged atoms in neutral molecules are never silent", () => {
     expect(analysis.warnings.some((warning) => warning.includes("formal charge of"))).toBe(true);
   });
 });
+
+describe("a formula shared by isomers is not named as one of them", () => {
+  // from memory: introductory organic chemistry texts (HCOOCH3 is methyl formate, an isomer of
+  // acetic acid; CH3NC is methyl isocyanide, an isomer of acetonitrile; CH3CH(CH3)2 is isobutane)
+  it.each<StructureCase & { notNamed: string }>([
+    { text: "HCOOCH3", smiles: "COC=O", notNamed: "acetic acid" },
+    { text: "CH3NC", smiles: "C[N+]#[C-]", notNamed: "acetonitrile" },
+    { text: "CH3CH(CH3)2", smiles: "CC(C)C", notNamed: "butane" },
+  ])("$text is $smiles and not called $notNamed", (entry) => {
+    const analysis = expectStructure(entry);
+    expect(analysis.reading.name).not.toBe(entry.notNamed);
+  });
+
+  // common practice: the same molecule written another way keeps its name
+  it.each([
+    ["CO(NH2)2", "urea"],
+    ["(CH3)2CO", "acetone"],
+    ["CO(CH3)2", "acetone"],
+    ["CH3CO2H", "acetic acid"],
+    ["OCN-", "cyanate"],
+  ])("%s is still called %s", (text, name) => {
+    expect(analysed(text).reading.name).toBe(name);
+  });
+
+  // from memory: descriptive inorganic chemistry texts (cyanate OCN- and fulminate CNO- share
+  // the formula)
+  it("CNO- says that cyanate and fulminate share the formula, and names neither", () => {
+    const analysis = analysed("CNO-");
+    const note = analysis.warnings.find((warning) => warning.includes("fulminate"));
+    expect(note, analysis.warnings.join(" | ")).toBeDefined();
+    expect(note).toContain("cyanate");
+    expect(analysis.reading.name).toBeUndefined();
+  });
+
+  // common practice: C2H4O2 is acetic acid or methyl formate; the refusal names both and the
+  // reading is not given one of their names
+  it("C2H4O2 is refused with both isomers named and no name of its own", () => {
+    const result = analyzeSpecies("C2H4O2");
+    expect(result.ok).toBe(false);
+    if (result.ok) return;
+    expect(result.problem.message).toContain("methyl formate");
+    expect(result.problem.message).toContain("acetic acid");
+    expect(result.reading?.name).toBeUndefined();
+  });
+});

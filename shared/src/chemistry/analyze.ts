@@ -12,9 +12,17 @@ import { buildAnalysis } from "./analysis/buildAnalysis";
 import { chooseSkeletonStructure } from "./analysis/chooseSkeletonStructure";
 import { smilesStructure } from "./analysis/fromSmiles";
 import { boundedMemo } from "./boundedMemo";
-import { candidateStructuresFor, refusalFor, singleStructureFor, structureForName } from "./analysis/structuresByFormula";
+import {
+  candidateStructuresFor,
+  refusalFor,
+  singleStructureFor,
+  structureForName,
+  type KnownStructure,
+} from "./analysis/structuresByFormula";
 import { dottedAnalysis, metalIonComplexAnalysis, saltAnalysis } from "./analysis/compositeSpecies";
 import { networkMonomerNote, networkSolidProblem } from "./analysis/networkSolids";
+import { connectivitySignature } from "./analysis/connectivitySignature";
+import { matchName, normalizeName } from "./reader/names/nameLookup";
 
 // Bound: 20,000 analyses, the oldest generation forgotten first (see boundedMemo).
 const MEMO_LIMIT = 20_000;
@@ -91,7 +99,9 @@ export function analyzeReading(reading: SpeciesReading): AnalysisResult {
     if (chosen.problem.code === "ambiguous-connectivity") return readIntoFormula(reading, chosen.problem);
     return { ok: false, reading, problem: chosen.problem };
   }
-  const analysis = buildAnalysis(reading, chosen.structure, chosen.centre);
+  const isomers = isomerNote(reading);
+  const named = isomers !== undefined || !nameFitsStructure(reading, chosen.structure.graph) ? withoutName(reading) : reading;
+  const analysis = buildAnalysis(named, chosen.structure, chosen.centre, isomers === undefined ? [] : [isomers]);
   const monomerNote = networkMonomerNote(reading);
   return { ok: true, value: monomerNote ? withWarning(analysis, monomerNote) : analysis };
 }
@@ -100,6 +110,47 @@ export function analyzeReading(reading: SpeciesReading): AnalysisResult {
 function withWarning(analysis: SpeciesAnalysis, warning: string): SpeciesAnalysis {
   (analysis as { warnings: readonly string[] }).warnings = [warning, ...analysis.warnings];
   return analysis;
+}
+
+/**
+ * A molecular formula shared by familiar isomers (CNO-: cyanate and fulminate) that the writer
+ * did not write as one of them: what to tell the reader, or undefined.
+ */
+function isomerNote(reading: SpeciesReading): string | undefined {
+  if (looksCondensed(reading.writtenSequence)) return undefined;
+  const candidates = candidateStructuresFor(reading.composition, reading.charge);
+  const writtenAsOne = candidates.some(
+    (c) => (!c.smiles && c.written === reading.formula) || c.writtenAs?.includes(reading.formula) === true,
+  );
+  if (candidates.length < 2 || writtenAsOne) return undefined;
+  return (
+    `${reading.formula} is the formula of ${listCandidates(candidates)}. Shown is the structure with the smallest formal charges; ` +
+    "write a structural formula or SMILES for the one you mean."
+  );
+}
+
+/**
+ * A name given by composition alone (the reader names HCOOCH3 after the one listed species with
+ * its atoms, acetic acid) is kept only when the written structure is that species.
+ */
+function nameFitsStructure(reading: SpeciesReading, graph: SpeciesAnalysis["graph"]): boolean {
+  if (reading.name === undefined || reading.notation === "name" || !looksCondensed(reading.writtenSequence)) return true;
+  const match = matchName(normalizeName(reading.name));
+  if (match === undefined || match.formula === reading.formula) return true;
+  const listed = match.smiles !== undefined ? analyzeSmiles(match.smiles) : analyzeSpecies(match.formula ?? "");
+  if (!listed.ok) return true;
+  return connectivitySignature(listed.value.graph) === connectivitySignature(graph);
+}
+
+function withoutName(reading: SpeciesReading): SpeciesReading {
+  if (reading.name === undefined) return reading;
+  const { name: _dropped, ...rest } = reading;
+  return rest;
+}
+
+function listCandidates(candidates: readonly KnownStructure[]): string {
+  const named = candidates.map((c) => `${c.name} (${c.smiles ? `SMILES ${c.written}` : c.written})`);
+  return named.length === 2 ? named.join(" or ") : `${named.slice(0, -1).join(", ")} or ${named[named.length - 1]}`;
 }
 
 /** A name that fixes its structure: the SMILES analysis of that structure, under the name. */
@@ -148,14 +199,13 @@ function readIntoFormula(reading: SpeciesReading, problem: Problem | undefined):
   if (!problem) return { ok: false, reading, problem: { code: "no-valid-structure", message: `${reading.formula}: no Lewis structure fits.` } };
   const candidates = candidateStructuresFor(reading.composition, reading.charge);
   if (candidates.length === 0) return { ok: false, reading, problem };
-  const named = candidates.map((c) => `${c.name} (${c.smiles ? `SMILES ${c.written}` : c.written})`);
-  const list = named.length === 2 ? named.join(" or ") : `${named.slice(0, -1).join(", ")} or ${named[named.length - 1]}`;
   return {
     ok: false,
-    reading,
+    // The name the reader found for the composition is one isomer's name: not said.
+    reading: withoutName(reading),
     problem: {
       code: "ambiguous-connectivity",
-      message: `${reading.formula} can be ${list}: write the structural formula or SMILES you mean.`,
+      message: `${reading.formula} can be ${listCandidates(candidates)}: write the structural formula or SMILES you mean.`,
     },
   };
 }

@@ -15,6 +15,8 @@ export function buildAnalysis(
   reading: SpeciesReading,
   structure: LewisStructure,
   mainCentre: number | undefined,
+  /** Notes the caller knows about the species (isomers sharing its formula). */
+  notes: readonly string[] = [],
 ): SpeciesAnalysis {
   const { graph } = structure;
   const atoms = graph.atoms;
@@ -100,6 +102,7 @@ export function buildAnalysis(
     warnings.push("A diatomic species is linear by definition; there is no central atom.");
   }
   if (atomCount === 1) warnings.push("A single atom or monatomic ion has no molecular shape.");
+  for (const note of notes) warnings.push(note);
 
   let resonanceForms = structure.resonanceForms;
   if (!Number.isFinite(resonanceForms) || resonanceForms < 1) resonanceForms = 1;

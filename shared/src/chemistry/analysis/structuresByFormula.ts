@@ -12,6 +12,8 @@ export interface KnownStructure {
   /** A condensed formula the reader understands, or a SMILES string when `smiles` is set. */
   readonly written: string;
   readonly smiles?: boolean;
+  /** Formulas that name this isomer and no other (OCN^- is cyanate), besides `written`. */
+  readonly writtenAs?: readonly string[];
   /** What a chemist adds about this structure (the other tautomer, a bridged dimer). */
   readonly note?: string;
   /**
@@ -116,6 +118,15 @@ const SEVERAL: Readonly<Record<string, readonly KnownStructure[]>> = {
     { name: "isocyanic acid", written: "HNCO" },
     { name: "cyanic acid", written: "HOCN" },
   ],
+  C2H3N: [
+    { name: "acetonitrile", written: "CH3CN" },
+    { name: "methyl isocyanide", written: "CH3NC" },
+  ],
+  // from memory: descriptive inorganic chemistry texts (cyanate OCN-, fulminate CNO-)
+  "CNO^-1": [
+    { name: "cyanate", written: "[O-]C#N", smiles: true, writtenAs: ["OCN^-", "NCO^-"] },
+    { name: "fulminate", written: "[C-]#[N+][O-]", smiles: true },
+  ],
 };
 
 // from memory: descriptive inorganic chemistry texts on aluminium chloride (layer lattice with
@@ -145,5 +156,5 @@ export function singleStructureFor(composition: readonly FormulaPart[], charge: 
 }
 
 export function candidateStructuresFor(composition: readonly FormulaPart[], charge: number): readonly KnownStructure[] {
-  return charge === 0 ? (SEVERAL[compositionKey(composition, 0)] ?? []) : [];
+  return SEVERAL[compositionKey(composition, charge)] ?? [];
 }
