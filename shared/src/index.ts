@@ -47,10 +47,10 @@ export { MODEL_CAUTION, PLAIN_CARD_STYLE, formatAnalysisCard } from "./report/an
 export type { CardStyle } from "./report/analysisCard";
 export { toAnalysisJson } from "./report/analysisJson";
 export { HOVER_CAUTION, hoverMarkdown, problemMarkdown, resultMarkdown } from "./report/hoverMarkdown";
-export type { HoverFormat } from "./report/hoverMarkdown";
+export type { HoverFormat, HoverMarkdownOptions } from "./report/hoverMarkdown";
 export { shapeViewModel } from "./report/shapeViewModel";
 export type { ShapeViewModel } from "./report/shapeViewModel";
-export { coordinateFileOf, shapeViewModelOf } from "./report/speciesModel";
+export { coordinateFileOf, missingModelReason, shapeViewModelOf } from "./report/speciesModel";
 export { geometryHints, geometryLabel, isProseKind } from "./report/geometryHints";
 export type { GeometryHint } from "./report/geometryHints";
 export type { CoordinateFile, CoordinateFileResult, CoordinateFormat } from "./report/speciesModel";

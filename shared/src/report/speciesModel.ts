@@ -21,7 +21,17 @@ export interface CoordinateFile {
 
 export type CoordinateFileResult = { readonly ok: true; readonly value: CoordinateFile } | { readonly ok: false; readonly message: string };
 
-/** The view model of an analysed species; undefined if no atoms could be placed. */
+/**
+ * Why a species has no 3D model, in one sentence for every edge: the size limit with its numbers
+ * when it is too large, a plain "could not be built" otherwise; undefined when it has one.
+ */
+export function missingModelReason(analysis: SpeciesAnalysis): string | undefined {
+  const { coordinates } = shapeOf(analysis);
+  if (coordinates.atoms.length > 0) return undefined;
+  return coordinates.tooLarge ?? "No 3D model could be built for this species.";
+}
+
+/** The view model of an analysed species; undefined if no atoms could be placed (see `missingModelReason`). */
 export function shapeViewModelOf(analysis: SpeciesAnalysis): ShapeViewModel | undefined {
   const { coordinates } = shapeOf(analysis);
   return coordinates.atoms.length > 0 ? shapeViewModel(analysis, coordinates) : undefined;
@@ -30,7 +40,7 @@ export function shapeViewModelOf(analysis: SpeciesAnalysis): ShapeViewModel | un
 /** The file for `analysis`, or why there is none (no atoms placed, too many for a V2000 molfile). */
 export function coordinateFileOf(analysis: SpeciesAnalysis, format: CoordinateFormat): CoordinateFileResult {
   const { coordinates } = shapeOf(analysis);
-  if (coordinates.atoms.length === 0) return { ok: false, message: "no 3D model could be built for this species." };
+  if (coordinates.atoms.length === 0) return { ok: false, message: missingModelReason(analysis)! };
   const title = `${analysis.reading.formula} (lonepair model geometry, not measured data)`;
   const baseName = analysis.reading.formula.replace(/[^A-Za-z0-9+-]+/g, "_").replace(/^_+|_+$/g, "") || "species";
   if (format === "xyz") return { ok: true, value: { text: toXyz(coordinates, title), baseName, extension: "xyz" } };

@@ -13,6 +13,8 @@ import {
   SPECIES_AT_METHOD,
   coordinateFileOf,
   documentKindFor,
+  missingModelReason,
+  shapeOf,
   shapeViewModelOf,
   speciesAtOffset,
   type CheckTextParams,
@@ -50,7 +52,9 @@ export function registerSpeciesRequests(context: ServerContext): void {
       const described = describe(found.document, found.species);
       if (!found.species.analysis.ok) return described;
       const model = shapeViewModelOf(found.species.analysis.value);
-      return model ? { ...described, model } : { ...described, problem: { code: "no-model", message: "No 3D model could be built for this species." } };
+      if (model) return { ...described, model };
+      const tooLarge = shapeOf(found.species.analysis.value).coordinates.tooLarge;
+      return { ...described, problem: { code: tooLarge ? "too-large-for-model" : "no-model", message: missingModelReason(found.species.analysis.value)! } };
     }),
   );
   connection.onRequest(
