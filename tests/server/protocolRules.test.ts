@@ -266,3 +266,57 @@ describe("hover in the client's format", () => {
     }
   });
 });
+
+describe("one large species", () => {
+  let raw: RawSession | undefined;
+  afterEach(() => raw?.kill());
+
+  // A 990-character `smiles:` span: a chain of 990 carbons (2,972 atoms with its hydrogens), whose
+  // hover needs a 3D model of all of them for the polarity.
+  const LARGE = "C".repeat(990);
+  const TEXT = `Run 33: the wax sample is \`smiles:${LARGE}\` and the reference gas is SF4.\n`;
+  const ON_LARGE = { line: 0, character: 40 };
+  const ON_GAS = { line: 0, character: TEXT.indexOf("SF4") + 1 };
+
+  it("does not hold up other requests while its hover card is written", async () => {
+    raw = startRawSession();
+    raw.send({ id: 1, method: "initialize", params: INITIALIZE_PARAMS });
+    await raw.responseTo(1);
+    raw.send(
+      { method: "initialized", params: {} },
+      { method: "textDocument/didOpen", params: { textDocument: { uri: NOTE_URI, languageId: "markdown", version: 1, text: TEXT } } },
+      // Answered once the document is read, so the hovers below find it analysed.
+      { id: 2, method: "textDocument/hover", params: { textDocument: { uri: NOTE_URI }, position: ON_GAS } },
+    );
+    await raw.responseTo(2);
+    raw.send(
+      { id: 3, method: "textDocument/hover", params: { textDocument: { uri: NOTE_URI }, position: ON_LARGE } },
+      { id: 4, method: "textDocument/hover", params: { textDocument: { uri: NOTE_URI }, position: ON_GAS } },
+    );
+    const [large, gas] = await Promise.all([raw.responseTo(3, 120_000), raw.responseTo(4)]);
+    const order = raw.received.filter((message) => "id" in message && !("method" in message)).map((message) => (message as unknown as { id: number }).id);
+    expect(order.indexOf(4), "the small species was answered only after the large one").toBeLessThan(order.indexOf(3));
+    // common practice: SF4 is a seesaw; every carbon of an alkane is tetrahedral
+    expect(JSON.stringify(gas.result)).toContain("seesaw");
+    expect(JSON.stringify(large.result)).toContain("tetrahedral");
+    expect(JSON.stringify(large.result)).toMatch(/Polarity/);
+  });
+
+  it("answers the 3D model request for a species past the limit with the reason", async () => {
+    const session = await startSession();
+    try {
+      const uri = fixtureUri("notebook/run-34.md");
+      const ring = `C1${"C".repeat(98)}C1`;
+      session.open(uri, "markdown", `Run 34: the macrocycle \`smiles:${ring}\` was set aside.\n`);
+      const position = { line: 0, character: 40 };
+      const shape = await session.connection.sendRequest<{ problem?: { code: string; message: string }; model?: unknown }>("lonepair/shapeModel", { uri, position });
+      expect(shape.model).toBeUndefined();
+      expect(shape.problem?.code).toBe("too-large-for-model");
+      expect(shape.problem?.message).toMatch(/^Too large for a 3D model: a ring system of 100 atoms \(the limit is 64\)/);
+      const file = await session.connection.sendRequest<{ problem?: { message: string } }>("lonepair/coordinates", { uri, position, format: "xyz" });
+      expect(file.problem?.message).toMatch(/^Too large for a 3D model/);
+    } finally {
+      await session.stop();
+    }
+  });
+});

@@ -5,11 +5,13 @@ import { MarkupKind, type Hover, type HoverParams } from "vscode-languageserver"
 import { resultMarkdown, speciesAtOffset } from "../../../../shared/src/index";
 import type { Finding, TextRange } from "../core";
 import { guarded } from "../guardedHandler";
+import { OFF_THREAD_ATOMS, createOffThreadCards } from "../offThreadCards";
 import { lspRange } from "../ranges";
 import { enabledDocument, type ServerContext } from "../serverContext";
 
 /** Registers the hover handler. */
 export function registerHover(context: ServerContext): void {
+  const offThread = createOffThreadCards(context.log);
   context.connection.onHover(
     guarded<HoverParams, Hover | null>(context.log, "hover", null, async (params) => {
       const enabled = await enabledDocument(context, params.textDocument.uri);
@@ -20,8 +22,13 @@ export function registerHover(context: ServerContext): void {
       const result = species.analysis;
       // The card is written in the format the client asked for, not merely labelled with it.
       const format = context.clientFeatures().hoverFormat;
+      const options = { angleDecimals: settings.angleDecimals, format };
+      // A large SMILES species' card (its polarity needs the 3D model) is written on a worker
+      // thread, so that other requests are answered meanwhile.
+      const large = result.ok && result.value.reading.notation === "smiles" && result.value.graph.atoms.length > OFF_THREAD_ATOMS;
+      const written = large && result.ok ? await offThread.card(result.value.reading.text, options) : undefined;
       const alsoAProblem = !result.ok && isReported(analysed.findings(), species.range, result.problem.message);
-      const value = resultMarkdown(species.text, result, { angleDecimals: settings.angleDecimals, format }, { alsoAProblem });
+      const value = written ?? resultMarkdown(species.text, result, options, { alsoAProblem });
       return {
         contents: { kind: format === "markdown" ? MarkupKind.Markdown : MarkupKind.PlainText, value },
         range: lspRange(document, species.range),
