@@ -12,6 +12,7 @@ import { generateSpecies } from "./speciesGenerator.mjs";
 import { randomStrings } from "./randomStrings.mjs";
 import { runSmilesAnalysisBench } from "./smilesAnalysis.mjs";
 import { runCoordinatesBench } from "./coordinates.mjs";
+import { runLargeSmilesBench } from "./largeSmiles.mjs";
 import { runRealStyleBench } from "./realStyle.mjs";
 
 const corePath = fileURLToPath(new URL("../../dist/core.js", import.meta.url));
@@ -127,6 +128,7 @@ benchCached(species);
 benchReader();
 missed.push(...(await runSmilesAnalysisBench()));
 missed.push(...runCoordinatesBench());
+missed.push(...runLargeSmilesBench());
 missed.push(...(await runRealStyleBench()));
 if (missed.length > 0) {
   console.log(`\nmissed: ${missed.join(", ")}`);
