@@ -107,6 +107,9 @@ function pieceOf(text: string, start: number, end: number, inLabel: boolean): Mh
   return piece.length > 0 ? { start: pieceStart, end: pieceStart + piece.length, inLabel } : undefined;
 }
 
+/** What lies between a salt and its water in "CuSO4 * 5 H2O" or "CuSO4 · 5H2O". */
+const HYDRATE_GAP = /^[ \t]*[*\u00b7\u2022\u2219\u22c5][ \t]*(?:\d+[ \t]*)?$/;
+
 /**
  * Reads every piece of the mhchem body `text[start, end)` into `sink`. Everything inside is
  * chemistry by the writer's own say-so, so a formula-shaped piece that does not read is reported.
@@ -116,7 +119,17 @@ export function scanMhchemBody(text: string, start: number, end: number, read: S
   // "\ce{A ->[H2O] B}": a lone capital that is no element makes the equation a scheme, whose
   // lone capitals (B too) stand for any species.
   const schematic = pieces.some((piece) => piece.end - piece.start === 1 && !read(text[piece.start]).ok);
-  for (const piece of pieces) {
+  for (let index = 0; index < pieces.length; index++) {
+    let piece = pieces[index];
+    // "\ce{KCr(SO4)2 * 12 H2O}": a hydrate written with spaced dots is one species.
+    const water = pieces[index + 1];
+    if (water && HYDRATE_GAP.test(text.slice(piece.end, water.start))) {
+      const whole = read(text.slice(piece.start, water.end));
+      if (whole.ok && whole.value.parts) {
+        piece = { ...piece, end: water.end };
+        index++;
+      }
+    }
     const pieceText = text.slice(piece.start, piece.end);
     if (pieceText.length === 1 && (schematic || !read(pieceText).ok)) continue;
     const result = read(pieceText);

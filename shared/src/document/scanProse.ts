@@ -52,11 +52,13 @@ interface ProseScan {
   previousWord: Word | undefined;
   /** Backtick runs known to have no closing run further on, by length (keeps the scan linear). */
   readonly unclosedTicks: Set<number>;
+  /** Where scanning goes on after a mention that ran past its chunk ("CuSO4 · 5H2O"). */
+  resumeAt: number;
 }
 
 /** Scans `text[start, end)` and adds what it finds to `sink`, with offsets into `text`. */
 export function scanProse(text: string, start: number, end: number, sink: ScanSink, read: SpeciesReader): void {
-  const scan: ProseScan = { text, end, sink, read, previousWord: undefined, unclosedTicks: new Set() };
+  const scan: ProseScan = { text, end, sink, read, previousWord: undefined, unclosedTicks: new Set(), resumeAt: start };
   let index = start;
   while (index < end) {
     const code = text.charCodeAt(index);
@@ -96,6 +98,10 @@ export function scanProse(text: string, start: number, end: number, sink: ScanSi
     }
     scanChunk(scan, index, chunkEnd);
     index = chunkEnd;
+    if (scan.resumeAt > index) {
+      index = scan.resumeAt;
+      scan.previousWord = undefined;
+    }
   }
 }
 
@@ -340,6 +346,15 @@ function formulaToken(scan: ProseScan, start: number, end: number): number {
     while (tokenEnd < end && isSuperscript(text.charCodeAt(tokenEnd))) tokenEnd++;
     if (tokenEnd === bodyEnd) tokenEnd = chargeEnd(text, bodyEnd, end);
   }
+  // "CuSO4.5H2O", "CuSO4•5H2O", "CuSO4 · 5H2O": water of crystallisation after a hydrate dot.
+  // A period with no count and formula right after it ends the sentence.
+  let hydrate: HydrateTail | undefined;
+  if (!html && state === 0 && tokenEnd === bodyEnd) {
+    hydrate = hydrateTail(text, bodyEnd, scan.end);
+    // Only when the whole reads as one species: "Chloroform · Carbon tetrachloride" is a list.
+    if (hydrate && !readsAsOne(scan, start, hydrate.end)) hydrate = undefined;
+    if (hydrate) bodyEnd = tokenEnd = hydrate.end;
+  }
   let bodyStart = start;
   // Brackets that belong to the sentence, not the formula: "(SF4)," "[NF3]" "SF6)".
   while (bodyStart < bodyEnd && isOpen(text.charCodeAt(bodyStart))) {
@@ -357,8 +372,13 @@ function formulaToken(scan: ProseScan, start: number, end: number): number {
   }
   const next = Math.max(tokenEnd, start + 1);
   if (bodyEnd <= bodyStart) return next;
+  if (next > end) scan.resumeAt = next;
   const token = text.slice(bodyStart, tokenEnd);
-  const body = html ? withUnicodeScripts(text.slice(bodyStart, bodyEnd)) : text.slice(bodyStart, bodyEnd);
+  // The shape rules know the hydrate dot "·" only: the other ways of writing it are read as one.
+  const written = hydrate
+    ? `${text.slice(bodyStart, hydrate.dotStart)}·${text.slice(hydrate.partStart, bodyEnd).replace(/[ \t]/g, "")}`
+    : text.slice(bodyStart, bodyEnd);
+  const body = html ? withUnicodeScripts(written) : written;
   if (body === undefined) return next;
   const shape = shapeOf(body, text.slice(bodyEnd, tokenEnd));
   if (!shape) return next;
@@ -388,6 +408,52 @@ function formulaToken(scan: ProseScan, start: number, end: number): number {
     if (suggestion && isSafeSpellingFix(token, suggestion)) scan.sink.unreadable.push(unreadableAt(token, bodyStart, result));
   }
   return next;
+}
+
+/** Whether `text[start, end)` reads as one species, with or without the sentence's brackets around it. */
+function readsAsOne(scan: ProseScan, start: number, end: number): boolean {
+  const { text } = scan;
+  let inner = start;
+  while (inner < end && isOpen(text.charCodeAt(inner))) inner++;
+  let innerEnd = end;
+  while (innerEnd > inner && isClose(text.charCodeAt(innerEnd - 1))) innerEnd--;
+  for (const from of new Set([start, inner])) {
+    for (const to of new Set([end, innerEnd])) if (from < to && scan.read(text.slice(from, to)).ok) return true;
+  }
+  return false;
+}
+
+/** Where a hydrate's separator starts, where its water part (count included) starts, and where it ends. */
+interface HydrateTail {
+  readonly dotStart: number;
+  readonly partStart: number;
+  readonly end: number;
+}
+
+/**
+ * A hydrate dot and the part after it, from `at` (the end of a formula body): "·5H2O", ".5H2O",
+ * "•5H2O", "*5H2O", " · 5H2O", " • 5 H2O". A period or star needs a count right after it, so a
+ * full stop ("dried the CuSO4. Then") and a footnote star are never read as a hydrate.
+ */
+function hydrateTail(text: string, at: number, limit: number): HydrateTail | undefined {
+  let index = at;
+  while (index < limit && (text.charCodeAt(index) === 0x20 || text.charCodeAt(index) === 0x09)) index++;
+  const spaced = index > at;
+  const dot = text.charCodeAt(index);
+  const centred = dot === 0xb7 || dot === 0x2022 || dot === 0x2219 || dot === 0x22c5;
+  if (!(centred || (!spaced && (dot === 0x2e || dot === 0x2a)))) return undefined;
+  if (!spaced && dot === 0xb7) return undefined;
+  const dotStart = at;
+  index++;
+  if (spaced) while (index < limit && (text.charCodeAt(index) === 0x20 || text.charCodeAt(index) === 0x09)) index++;
+  const partStart = index;
+  while (index < limit && text.charCodeAt(index) >= 0x30 && text.charCodeAt(index) <= 0x39) index++;
+  const counted = index > partStart;
+  if (!centred && !counted) return undefined;
+  if (counted && spaced && text.charCodeAt(index) === 0x20) index++;
+  if (!isUpper(text.charCodeAt(index))) return undefined;
+  while (index < limit && isBodyCharacter(text.charCodeAt(index))) index++;
+  return { dotStart, partStart, end: index };
 }
 
 /** The length of a state symbol "(aq)", "(s)", "(l)", "(g)" ending at `end` after a formula, or 0. */
