@@ -203,6 +203,7 @@ function ownDetail(described: SharedCentreDetail, index: number): CentreDetail {
  * lone pair, or two groups of different elements), written as "N=N"; undefined when none.
  */
 function cisTransBond(graph: SpeciesAnalysis["graph"]): string | undefined {
+  if (!graph.bonds.some((bond) => bond.order === 2)) return undefined;
   const neighbours: number[][] = graph.atoms.map(() => []);
   for (const bond of graph.bonds) {
     neighbours[bond.from].push(bond.to);

@@ -139,8 +139,19 @@ const REFUSED: Readonly<Record<string, string>> = {
 };
 
 /** Why a formula with a well-known but phase-dependent structure is not analysed, if it is one. */
+// One analysis asks up to three tables about the same reading: its key is worked out once.
+const keys = new WeakMap<readonly FormulaPart[], { readonly charge: number; readonly key: string }>();
+
+function keyOf(composition: readonly FormulaPart[], charge: number): string {
+  const known = keys.get(composition);
+  if (known !== undefined && known.charge === charge) return known.key;
+  const key = compositionKey(composition, charge);
+  keys.set(composition, { charge, key });
+  return key;
+}
+
 export function refusalFor(composition: readonly FormulaPart[], charge: number): string | undefined {
-  return REFUSED[compositionKey(composition, charge)];
+  return REFUSED[keyOf(composition, charge)];
 }
 
 /** The structure a name means where the name vocabulary keeps one ("toluene" for C6H5CH3). */
@@ -152,9 +163,9 @@ export function structureForName(name: string | undefined): KnownStructure | und
 }
 
 export function singleStructureFor(composition: readonly FormulaPart[], charge: number): KnownStructure | undefined {
-  return SINGLE[compositionKey(composition, charge)];
+  return SINGLE[keyOf(composition, charge)];
 }
 
 export function candidateStructuresFor(composition: readonly FormulaPart[], charge: number): readonly KnownStructure[] {
-  return SEVERAL[compositionKey(composition, charge)] ?? [];
+  return SEVERAL[keyOf(composition, charge)] ?? [];
 }
