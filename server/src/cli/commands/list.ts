@@ -63,6 +63,7 @@ async function runList(args: readonly string[], io: CliIo): Promise<number> {
           );
         }
         written += batch.length;
+        await io.outputDrained?.();
       }
     } catch (error) {
       io.writeError(`lonepair list: ${terminalSafe(file.displayPath)}: ${ioMessage(error)}\n`);
