@@ -14,10 +14,14 @@ const ARROW = /(?:^|[\s\w)\]])(?:-+>|=+>|<-+>|<=+>)(?=[\s\w(\[]|$)|[\u2192\u27f6
 
 /** True when the line around `[start, end)` holds a reaction arrow. */
 export function isOnEquationLine(text: string, start: number, end: number): boolean {
-  const lineStart = Math.max(text.lastIndexOf("\n", start - 1) + 1, start - LINE_REACH);
-  let lineEnd = text.indexOf("\n", end);
-  if (lineEnd < 0 || lineEnd > end + LINE_REACH) lineEnd = Math.min(text.length, end + LINE_REACH);
-  return ARROW.test(text.slice(lineStart, lineEnd));
+  // Searched within a bounded window: a document without line breaks must not cost a pass per token.
+  const windowStart = Math.max(0, start - LINE_REACH);
+  const before = text.slice(windowStart, start);
+  const after = text.slice(end, Math.min(text.length, end + LINE_REACH));
+  const lineBreakBefore = before.lastIndexOf("\n");
+  const lineBreakAfter = after.indexOf("\n");
+  const line = before.slice(lineBreakBefore + 1) + text.slice(start, end) + (lineBreakAfter < 0 ? after : after.slice(0, lineBreakAfter));
+  return ARROW.test(line);
 }
 
 /** An operator word of an equation: "+", "=", an arrow. */

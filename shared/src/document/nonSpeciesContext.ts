@@ -47,25 +47,42 @@ export function isGroupFragment(text: string, start: number, end: number, body: 
   return GROUP_BEFORE.test(lookBack) || NMR_PROTONS.test(lookBack);
 }
 
-/** How far around a token a series of ids is looked for. */
-const SERIES_REACH = 2000;
+/** A series of ids is looked for in blocks of this many characters around a token. */
+const SERIES_BLOCK = 1024;
+
+/** What was found out about id series, per symbol and block, for one scan of one text. */
+export type SeriesMemo = Map<string, boolean>;
 
 /**
  * True when a one-element token with a count ("N2", "O2") sits where the same letter numbered 1
  * also stands alone ("Runs N1, N2"): a series of sample or run ids, as no formula is written X1.
+ * Looked for in the token's block and the blocks either side, each block searched once per scan.
  */
-export function isSeriesId(text: string, start: number, end: number, symbols: readonly string[]): boolean {
+export function isSeriesId(text: string, start: number, symbols: readonly string[], memo: SeriesMemo): boolean {
   if (symbols.length !== 1) return false;
   const symbol = symbols[0];
-  const from = Math.max(0, start - SERIES_REACH);
-  const window = text.slice(from, Math.min(text.length, end + SERIES_REACH));
-  const first = `${symbol}1`;
-  for (let at = window.indexOf(first); at >= 0; at = window.indexOf(first, at + 1)) {
-    const previous = window.charCodeAt(at - 1);
-    const next = window.charCodeAt(at + first.length);
-    if (!isWordCode(previous) && !isWordCode(next) && next !== 0x2b && next !== 0x2d) return true;
+  const block = Math.floor(start / SERIES_BLOCK);
+  for (let near = block - 1; near <= block + 1; near++) {
+    if (near >= 0 && blockHasFirstId(text, symbol, near, memo)) return true;
   }
   return false;
+}
+
+function blockHasFirstId(text: string, symbol: string, block: number, memo: SeriesMemo): boolean {
+  const key = `${symbol} ${block}`;
+  const known = memo.get(key);
+  if (known !== undefined) return known;
+  const from = block * SERIES_BLOCK;
+  const window = text.slice(Math.max(0, from - 1), Math.min(text.length, from + SERIES_BLOCK + 2));
+  const first = `${symbol}1`;
+  let found = false;
+  for (let at = window.indexOf(first); at >= 0 && !found; at = window.indexOf(first, at + 1)) {
+    const previous = window.charCodeAt(at - 1);
+    const next = window.charCodeAt(at + first.length);
+    found = !isWordCode(previous) && !isWordCode(next) && next !== 0x2b && next !== 0x2d;
+  }
+  memo.set(key, found);
+  return found;
 }
 
 function isWordCode(code: number): boolean {

@@ -7,7 +7,7 @@
 import { htmlScriptEnd, withUnicodeScripts } from "../chemistry/reader/htmlScripts";
 import { isGluedCoefficient, isLoneReactant } from "./equationContext";
 import { isSafeSpellingFix } from "./fixPolicy";
-import { isAlloyDesignation, isGroupFragment, isSeriesId } from "./nonSpeciesContext";
+import { isAlloyDesignation, isGroupFragment, isSeriesId, type SeriesMemo } from "./nonSpeciesContext";
 import { latexMathSpan, scanLatexMath, type MathSpan } from "./latexMathSpan";
 import { mhchemSpanEnd, scanMhchemBody } from "./mhchemSpan";
 import { isPartOfCode, isWordContext } from "./proseContext";
@@ -54,11 +54,17 @@ interface ProseScan {
   readonly unclosedTicks: Set<number>;
   /** Where scanning goes on after a mention that ran past its chunk ("CuSO4 · 5H2O"). */
   resumeAt: number;
+  /** Which blocks of the text hold the first id of a series (N1), per symbol. */
+  readonly seriesMemo: SeriesMemo;
+  /** Unmarked code spans already tried as SMILES: the occurrence at offset 0, or null. */
+  readonly smilesMemo: Map<string, SpeciesOccurrence | null>;
 }
 
 /** Scans `text[start, end)` and adds what it finds to `sink`, with offsets into `text`. */
 export function scanProse(text: string, start: number, end: number, sink: ScanSink, read: SpeciesReader): void {
-  const scan: ProseScan = { text, end, sink, read, previousWord: undefined, unclosedTicks: new Set(), resumeAt: start };
+  const scan: ProseScan = {
+    text, end, sink, read, previousWord: undefined, unclosedTicks: new Set(), resumeAt: start, seriesMemo: new Map(), smilesMemo: new Map(),
+  };
   let index = start;
   while (index < end) {
     const code = text.charCodeAt(index);
@@ -158,12 +164,21 @@ function unmarkedSmiles(scan: ProseScan, start: number, end: number): SpeciesOcc
   if (end - start < 3 || end - start > 200) return undefined;
   const content = text.slice(start, end);
   if (/^[A-Za-z]+$/.test(content) || !/^[A-Za-z0-9@+\-\[\]()=#$/\\%.:*]+$/.test(content)) return undefined;
-  if (scan.read(content).ok) return undefined;
-  const found = smilesAt(text, start, end);
-  if (!found || !isOccurrence(found)) return undefined;
-  let heavyAtoms = 0;
-  for (const part of found.reading.composition) if (part.symbol !== "H") heavyAtoms += part.count;
-  return heavyAtoms >= 3 ? { ...found, inferred: true } : undefined;
+  // Notes repeat their code spans; each distinct one is parsed once per scan, at offset 0.
+  let template = scan.smilesMemo.get(content);
+  if (template === undefined) {
+    template = null;
+    const found = scan.read(content).ok ? undefined : smilesAt(content, 0, content.length);
+    if (found && isOccurrence(found)) {
+      let heavyAtoms = 0;
+      for (const part of found.reading.composition) if (part.symbol !== "H") heavyAtoms += part.count;
+      if (heavyAtoms >= 3) template = found;
+    }
+    scan.smilesMemo.set(content, template);
+  }
+  if (template === null) return undefined;
+  const range = { start, end };
+  return { ...template, range, reading: { ...template.reading, range }, inferred: true };
 }
 
 /** A `\ce{...}` span: every piece is chemistry, so every readable piece counts. */
@@ -389,7 +404,7 @@ function formulaToken(scan: ProseScan, start: number, end: number): number {
   }
   if (isPartOfCode(text, bodyStart, tokenEnd)) return next;
   if (isGroupFragment(text, bodyStart, tokenEnd, body) || isAlloyDesignation(shape.symbols)) return next;
-  if (shape.hasCount && !shape.hasCharge && isSeriesId(text, bodyStart, tokenEnd, shape.symbols)) return next;
+  if (shape.hasCount && !shape.hasCharge && isSeriesId(text, bodyStart, shape.symbols, scan.seriesMemo)) return next;
   if (needsCalmContext(body, shape) && isWordContext(text, bodyStart, tokenEnd)) return next;
   // A state symbol belongs to the mention ("Ag+(aq)"): it is reported whole or not at all.
   const stateLength = stateSymbolAt(text, tokenEnd, end);
