@@ -39,6 +39,10 @@ const TRADE_NAMES: readonly Row[] = [
   ["laughing gas", "N2O"],
 ];
 
+// from memory: Greenwood & Earnshaw, Chemistry of the Elements (quartz is SiO2; diamond and
+// graphite are carbon)
+const NETWORK_SOLIDS: readonly Row[] = [["quartz", "SiO2"], ["diamond", "C"], ["graphite", "C"]];
+
 // from memory: CRC Handbook of Chemistry and Physics, physical constants of organic compounds
 const ORGANIC: readonly Row[] = [
   ["methane", "CH4"], ["ethane", "C2H6"], ["propane", "C3H8"], ["butane", "C4H10"], ["ethene", "C2H4"],
@@ -91,7 +95,7 @@ const IONS: readonly Row[] = [
   ["chromate", "CrO4", -2], ["dichromate", "Cr2O7", -2],
 ];
 
-const VOCABULARY: readonly Row[] = [...INORGANIC, ...TRADE_NAMES, ...ORGANIC, ...IONS];
+const VOCABULARY: readonly Row[] = [...INORGANIC, ...TRADE_NAMES, ...NETWORK_SOLIDS, ...ORGANIC, ...IONS];
 
 /** "C2H4O2" -> {C: 2, H: 4, O: 2}, in any element order. */
 function parseFormula(formula: string): Map<string, number> {

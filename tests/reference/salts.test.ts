@@ -227,10 +227,32 @@ describe("network solids", () => {
     expect(note).toMatch(/gas-phase monomer/);
   });
 
-  it.each(["BN", "SiC"])("%s is a network solid", (input) => {
+  it.each(["BN", "SiC", "diamond", "graphite", "boron nitride"])("%s is a network solid", (input) => {
     const result = refused(input);
     expect(result.problem.code).toBe("network-solid");
     expect(result.problem.message).toMatch(/network solid/);
+  });
+});
+
+describe("names of network solids", () => {
+  // from memory: Greenwood & Earnshaw (diamond sp3 tetrahedral, graphite sp2 trigonal planar; quartz is SiO2)
+  it.each([
+    ["diamond", /tetrahedr/],
+    ["graphite", /trigonal planar/],
+  ])("%s says how each carbon is bonded", (input, surroundings) => {
+    expect(refused(input).problem.message).toMatch(surroundings);
+  });
+
+  it("quartz is read as SiO2 with the network note", () => {
+    const result = analyzeSpecies("quartz");
+    expect(result.ok && result.value.reading.formula).toBe("SiO2");
+    expect(result.ok && result.value.warnings.join(" ")).toMatch(/network solid/);
+  });
+
+  it("a carbon atom written C is not named diamond", () => {
+    const read = readSpecies("C");
+    expect(read.ok && read.value.name).not.toBe("diamond");
+    expect(analyzeSpecies("C").ok).toBe(true);
   });
 });
 

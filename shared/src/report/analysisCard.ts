@@ -74,9 +74,11 @@ function failureLines(
  */
 function compositeLines(heading: string, result: Extract<AnalysisResult, { ok: false }>, style: CardStyle): string[] {
   const parts = result.parts ?? [];
-  const name = result.reading?.name ? ` - ${result.reading.name}` : "";
+  const name = result.reading?.name;
   const kind = compositeKind(result.problem.code);
-  const lines = [style.title(heading + name) + " " + style.muted(`- ${kind.noun}`)];
+  // The heading already shows the name when the name is what was written.
+  const title = name && !heading.includes(name) ? `${heading} - ${name}` : heading;
+  const lines = [style.title(title) + " " + style.muted(`- ${kind.noun}`)];
   parts.forEach((part, position) => {
     lines.push(row(style, position === 0 ? kind.partsLabel : "", partLabel(part)));
     for (const inner of innerParts(part)) lines.push(row(style, "", `- ${partLabel(inner)}`));

@@ -13,6 +13,7 @@ import { binaryCovalentName, formulaForCompoundName, usualCationCharge } from ".
 import { ION_NAMES, ionByName } from "./ionNames";
 import { NAMED_STRUCTURES, type NamedStructure } from "./namedStructures";
 import { smilesForOrganicName } from "./organicNames";
+import { NETWORK_SOLID_NAMES } from "./networkSolidNames";
 import { NAME_SYNONYMS } from "./synonyms";
 import { GREEK_PREFIXES } from "./greekPrefixes";
 import { compareCodeUnits, sortSmall } from "../../sortSmall";
@@ -69,6 +70,8 @@ function listedOrRuleName(name: string): NameMatch | undefined {
   if (synonym !== undefined) return listedOrRuleName(synonym) ?? hydrateName(synonym);
   const common = COMMON_BY_NAME.get(name);
   if (common !== undefined) return { formula: common, name, listed: true };
+  const network = NETWORK_SOLID_NAMES.get(name);
+  if (network !== undefined) return { formula: network, name, listed: true };
   const structure = STRUCTURE_BY_NAME.get(name);
   if (structure !== undefined) {
     return structure.formula === undefined
@@ -122,7 +125,13 @@ function monatomicCation(name: string): NameMatch | undefined {
 
 /** Every listed name and synonym, for spelling suggestions and for spotting names in prose. */
 export function listedNames(): readonly string[] {
-  return [...COMMON_BY_NAME.keys(), ...STRUCTURE_BY_NAME.keys(), ...ION_NAMES.map((ion) => ion.name), ...NAME_SYNONYMS.keys()];
+  return [
+    ...COMMON_BY_NAME.keys(),
+    ...STRUCTURE_BY_NAME.keys(),
+    ...ION_NAMES.map((ion) => ion.name),
+    ...NAME_SYNONYMS.keys(),
+    ...NETWORK_SOLID_NAMES.keys(),
+  ];
 }
 
 interface NameIndex {

@@ -17,6 +17,7 @@ export const NAME_SYNONYMS: ReadonlyMap<string, string> = new Map([
   ["epsom salt", "magnesium sulfate heptahydrate"],
   ["epsom salts", "magnesium sulfate heptahydrate"],
   ["silica", "silicon dioxide"],
+  ["quartz", "silicon dioxide"],
   ["alumina", "aluminium oxide"],
   ["laughing gas", "nitrous oxide"],
   ["methylene chloride", "dichloromethane"],
