@@ -15,8 +15,18 @@ const ACCEPTED_NAME_SPELLINGS: Readonly<Record<string, readonly string[]>> = {
   sulfur: ["sulfur", "sulphur"],
 };
 
-// The reference package lays the lanthanides out in a separate row 9 (posX) with columns 3-17 (posY).
+// The reference package lays the lanthanides out in a separate row 9 (posX) and the actinides in
+// row 10, with columns 3-17 (posY).
 const REFERENCE_LANTHANIDE_ROW = 9;
+const REFERENCE_ACTINIDE_ROW = 10;
+
+/**
+ * The reference package gives a flat 1.6 angstrom covalent radius from francium to copernicium, a
+ * placeholder rather than a measured or computed value; those radii are checked against recalled
+ * values of the Pyykkö-Atsumi set below instead.
+ */
+const REFERENCE_PLACEHOLDER_RADIUS_FROM = 87;
+const REFERENCE_PLACEHOLDER_RADIUS_TO = 112;
 
 /**
  * Covalent radii differ between published sets. Ours is the single-bond set of Pyykkö and Atsumi
@@ -35,16 +45,16 @@ function referenceFor(element: ElementData): ChemElementInfo {
 }
 
 function isDOrFBlock(element: ElementData): boolean {
-  return (element.group >= 3 && element.group <= 12) || element.category === "lanthanide";
+  return (element.group >= 3 && element.group <= 12) || element.category === "lanthanide" || element.category === "actinide";
 }
 
 describe("element table against @chemistry/elements", () => {
-  it("holds Z = 1 to 86 in order", () => {
-    // source: @chemistry/elements npm package (same count of elements up to radon)
-    const referenceCount = ChemElements.getAll().filter((el) => el.id >= 1 && el.id <= 86).length;
+  it("holds Z = 1 to 118 in order", () => {
+    // source: @chemistry/elements npm package (same count of elements up to oganesson)
+    const referenceCount = ChemElements.getAll().filter((el) => el.id >= 1 && el.id <= 118).length;
     expect(ELEMENTS.length).toBe(referenceCount);
     expect(ELEMENTS.map((el) => el.atomicNumber)).toEqual(
-      Array.from({ length: 86 }, (_, index) => index + 1),
+      Array.from({ length: 118 }, (_, index) => index + 1),
     );
   });
 
@@ -65,12 +75,18 @@ describe("element table against @chemistry/elements", () => {
         expect(element.category).toBe("lanthanide");
         expect(element.period).toBe(6);
         expect(element.group).toBe(3);
+      } else if (reference.posX === REFERENCE_ACTINIDE_ROW) {
+        // source: @chemistry/elements npm package (second f-block row means a period-7 actinide)
+        expect(element.category).toBe("actinide");
+        expect(element.period).toBe(7);
+        expect(element.group).toBe(3);
       } else {
         // source: @chemistry/elements npm package (posX is the period, posY the group)
         expect(element.period).toBe(reference.posX);
         expect(element.group).toBe(reference.posY);
       }
 
+      if (element.atomicNumber >= REFERENCE_PLACEHOLDER_RADIUS_FROM && element.atomicNumber <= REFERENCE_PLACEHOLDER_RADIUS_TO) return;
       // source: @chemistry/elements npm package (RCow in angstrom)
       const referenceRadiusPm = Math.round(reference.RCow * 100);
       const tolerance = isDOrFBlock(element)
@@ -81,13 +97,45 @@ describe("element table against @chemistry/elements", () => {
   );
   // The reference package has no electronegativity field, so electronegativities are checked
   // below against recalled handbook values and periodic trends instead.
+
+  it.each([
+    ["Fr", 223],
+    ["Ra", 201],
+    ["Ac", 186],
+    ["Th", 175],
+    ["U", 170],
+    ["Pu", 172],
+    ["Lr", 161],
+    ["Rf", 157],
+    ["Cn", 122],
+  ] as const)("%s has the single-bond covalent radius %i pm", (symbol, radius) => {
+    // from memory: Pyykkö and Atsumi, Chem. Eur. J. 15 (2009) 186, single-bond covalent radii
+    expect(elementBySymbol(symbol)?.covalentRadius).toBe(radius);
+  });
 });
 
 describe("electronegativity", () => {
-  it("is missing exactly for helium, neon and argon", () => {
+  it("is missing exactly for helium, neon and argon up to lawrencium", () => {
     // from memory: Pauling scale tables list no value for He, Ne, Ar (Kr and Xe form fluorides)
-    const missing = ELEMENTS.filter((el) => el.electronegativity === null).map((el) => el.symbol);
+    const missing = ELEMENTS.filter((el) => el.atomicNumber <= 103 && el.electronegativity === null).map((el) => el.symbol);
     expect(missing).toEqual(["He", "Ne", "Ar"]);
+  });
+
+  it("is missing from rutherfordium on", () => {
+    // from memory: Pauling scale tables stop at the actinides (nobelium and lawrencium about 1.3)
+    const listed = ELEMENTS.filter((el) => el.atomicNumber >= 104 && el.electronegativity !== null);
+    expect(listed.map((el) => el.symbol)).toEqual([]);
+  });
+
+  it.each([
+    ["Fr", 0.7],
+    ["Ra", 0.9],
+    ["Th", 1.3],
+    ["U", 1.38],
+    ["Pu", 1.28],
+  ] as const)("%s is %f on the Pauling scale", (symbol, expected) => {
+    // from memory: CRC Handbook of Chemistry and Physics, Pauling electronegativities
+    expect(elementBySymbol(symbol)?.electronegativity).toBeCloseTo(expected, 2);
   });
 
   it.each([
@@ -159,7 +207,9 @@ describe("valence electrons", () => {
     [17, 7],
   ])("group %i elements have %i", (group, expected) => {
     // common practice: s + p electrons of the outer shell; group 12 keeps a full d10 shell
-    const members = ELEMENTS.filter((el) => el.group === group && el.category !== "lanthanide");
+    const members = ELEMENTS.filter(
+      (el) => el.group === group && el.category !== "lanthanide" && el.category !== "actinide",
+    );
     expect(members.length).toBeGreaterThan(0);
     for (const element of members) expect(element.valenceElectrons).toBe(expected);
   });
@@ -174,6 +224,7 @@ describe("valence electrons", () => {
       ["Kr", 8],
       ["Xe", 8],
       ["Rn", 8],
+      ["Og", 8],
     ]);
   });
 });
@@ -192,15 +243,26 @@ describe("categories", () => {
     ["Hf", "transition-metal"],
     ["He", "noble-gas"],
     ["Rn", "noble-gas"],
+    ["Fr", "main-group"],
+    ["Ra", "main-group"],
+    ["Ac", "actinide"],
+    ["Th", "actinide"],
+    ["U", "actinide"],
+    ["Lr", "actinide"],
+    ["Rf", "transition-metal"],
+    ["Rg", "transition-metal"],
+    ["Fl", "main-group"],
+    ["Og", "noble-gas"],
   ])("%s is %s", (symbol, category) => {
-    // common practice: d block groups 3-11, lanthanides La-Lu, group 18 noble gases
+    // common practice: d block groups 3-11, lanthanides La-Lu, actinides Ac-Lr, group 18 noble gases
     expect(elementBySymbol(symbol)?.category).toBe(category);
   });
 
-  it("counts 15 lanthanides and 26 transition metals from Sc to Au", () => {
-    // common practice: La-Lu are 15 lanthanides; groups 3-11 give Sc-Cu 9, Y-Ag 9, Hf-Au 8
+  it("counts 15 lanthanides, 15 actinides and 34 transition metals", () => {
+    // common practice: La-Lu and Ac-Lr are 15 each; groups 3-11 give Sc-Cu 9, Y-Ag 9, Hf-Au 8, Rf-Rg 8
     expect(ELEMENTS.filter((el) => el.category === "lanthanide")).toHaveLength(15);
-    expect(ELEMENTS.filter(isTransitionMetal)).toHaveLength(26);
+    expect(ELEMENTS.filter((el) => el.category === "actinide")).toHaveLength(15);
+    expect(ELEMENTS.filter(isTransitionMetal)).toHaveLength(34);
   });
 });
 

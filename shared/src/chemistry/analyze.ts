@@ -19,6 +19,7 @@ import {
   structureForName,
   type KnownStructure,
 } from "./analysis/structuresByFormula";
+import { metalCentreProblem } from "./analysis/metalCentre";
 import { dottedAnalysis, metalIonComplexAnalysis, saltAnalysis } from "./analysis/compositeSpecies";
 import { networkMonomerNote, networkSolidProblem } from "./analysis/networkSolids";
 import { connectivitySignature } from "./analysis/connectivitySignature";
@@ -230,18 +231,9 @@ const IONIC_GROUPS = new Set([1, 2]);
 
 /** Species VSEPR has nothing to say about: transition-metal centres, ionic solids, boranes. */
 function outOfScope(reading: SpeciesReading): Problem | undefined {
+  const metal = metalCentreProblem(reading.formula, reading.composition.map((part) => part.symbol));
+  if (metal) return metal;
   const elements = reading.composition.map((part) => elementBySymbol(part.symbol)!);
-  const metal = elements.find(
-    (e) => e.category === "transition-metal" || e.category === "lanthanide" || e.category === "actinide",
-  );
-  if (metal) {
-    return {
-      code: "transition-metal-centre",
-      message:
-        `${reading.formula} contains ${metal.name}, a transition metal: VSEPR does not apply to ` +
-        "d-block centres (their shapes follow ligand-field and coordination rules). No shape is predicted.",
-    };
-  }
   const distinctElements = new Set(reading.composition.map((part) => part.symbol));
   const ionicMetal = elements.find((e) => IONIC_GROUPS.has(e.group) && e.symbol !== "H" && e.symbol !== "Be");
   if (ionicMetal && distinctElements.size > 1) {

@@ -1,7 +1,8 @@
 /**
- * Element data for hydrogen to radon (Z = 1-86): the elements lonepair reads in formulas.
+ * Element data for hydrogen to oganesson (Z = 1-118): every element lonepair reads in formulas.
  *
- * Electronegativities are Pauling values (Allred's 1961 revision as commonly tabulated).
+ * Electronegativities are Pauling values (Allred's 1961 revision as commonly tabulated); none is
+ * tabulated from rutherfordium on, whose chemistry is known from a few atoms at a time.
  * Covalent radii are single-bond radii in picometres from the self-consistent set of
  * Pyykkö and Atsumi (2009), chosen because it is one set for every element, noble gases and
  * lanthanides included, and it is explicitly a single-bond set.
@@ -100,17 +101,58 @@ const ROWS: readonly ElementRow[] = [
   ["Po", "polonium", 84, 16, 6, 2.0, 145],
   ["At", "astatine", 85, 17, 6, 2.2, 147],
   ["Rn", "radon", 86, 18, 6, 2.2, 142],
+  ["Fr", "francium", 87, 1, 7, 0.7, 223],
+  ["Ra", "radium", 88, 2, 7, 0.9, 201],
+  ["Ac", "actinium", 89, 3, 7, 1.1, 186],
+  ["Th", "thorium", 90, 3, 7, 1.3, 175],
+  ["Pa", "protactinium", 91, 3, 7, 1.5, 169],
+  ["U", "uranium", 92, 3, 7, 1.38, 170],
+  ["Np", "neptunium", 93, 3, 7, 1.36, 171],
+  ["Pu", "plutonium", 94, 3, 7, 1.28, 172],
+  ["Am", "americium", 95, 3, 7, 1.13, 166],
+  ["Cm", "curium", 96, 3, 7, 1.28, 166],
+  ["Bk", "berkelium", 97, 3, 7, 1.3, 168],
+  ["Cf", "californium", 98, 3, 7, 1.3, 168],
+  ["Es", "einsteinium", 99, 3, 7, 1.3, 165],
+  ["Fm", "fermium", 100, 3, 7, 1.3, 167],
+  ["Md", "mendelevium", 101, 3, 7, 1.3, 173],
+  ["No", "nobelium", 102, 3, 7, 1.3, 176],
+  ["Lr", "lawrencium", 103, 3, 7, 1.3, 161],
+  ["Rf", "rutherfordium", 104, 4, 7, null, 157],
+  ["Db", "dubnium", 105, 5, 7, null, 149],
+  ["Sg", "seaborgium", 106, 6, 7, null, 143],
+  ["Bh", "bohrium", 107, 7, 7, null, 141],
+  ["Hs", "hassium", 108, 8, 7, null, 134],
+  ["Mt", "meitnerium", 109, 9, 7, null, 129],
+  ["Ds", "darmstadtium", 110, 10, 7, null, 128],
+  ["Rg", "roentgenium", 111, 11, 7, null, 121],
+  ["Cn", "copernicium", 112, 12, 7, null, 122],
+  ["Nh", "nihonium", 113, 13, 7, null, 136],
+  ["Fl", "flerovium", 114, 14, 7, null, 143],
+  ["Mc", "moscovium", 115, 15, 7, null, 162],
+  ["Lv", "livermorium", 116, 16, 7, null, 175],
+  ["Ts", "tennessine", 117, 17, 7, null, 165],
+  ["Og", "oganesson", 118, 18, 7, null, 157],
 ];
 
 const FIRST_LANTHANIDE = 57;
 const LAST_LANTHANIDE = 71;
+const FIRST_ACTINIDE = 89;
+const LAST_ACTINIDE = 103;
+/** Rutherfordium on: made a few atoms at a time, with no bulk chemistry to check a model against. */
+export const FIRST_SUPERHEAVY = 104;
 
 function isLanthanideNumber(atomicNumber: number): boolean {
   return atomicNumber >= FIRST_LANTHANIDE && atomicNumber <= LAST_LANTHANIDE;
 }
 
+function isActinideNumber(atomicNumber: number): boolean {
+  return atomicNumber >= FIRST_ACTINIDE && atomicNumber <= LAST_ACTINIDE;
+}
+
 function categoryOf(atomicNumber: number, group: number): ElementCategory {
   if (isLanthanideNumber(atomicNumber)) return "lanthanide";
+  if (isActinideNumber(atomicNumber)) return "actinide";
   if (group === 18) return "noble-gas";
   if (group >= 3 && group <= 11) return "transition-metal";
   // Group 12 counts as main-group: Zn, Cd and Hg keep a full d10 shell, so VSEPR treats
@@ -120,19 +162,19 @@ function categoryOf(atomicNumber: number, group: number): ElementCategory {
 
 /**
  * Main groups follow the s + p count used for Lewis structures (helium has its 2 s electrons).
- * Groups 3-11 carry the group number, i.e. ns + (n-1)d electrons; lanthanides carry 3, the
- * electrons given up in their usual +3 state. Neither d- nor f-block counts is ever used to
+ * Groups 3-11 carry the group number, i.e. ns + (n-1)d electrons; lanthanides and actinides carry
+ * 3, the electrons given up in the +3 state (the actinides' own range runs from +2 to +7). Neither d- nor f-block counts is ever used to
  * build a Lewis structure.
  */
 function valenceElectronsOf(atomicNumber: number, group: number): number {
   if (atomicNumber === 2) return 2;
-  if (isLanthanideNumber(atomicNumber)) return 3;
+  if (isLanthanideNumber(atomicNumber) || isActinideNumber(atomicNumber)) return 3;
   if (group === 12) return 2;
   if (group >= 13) return group - 10;
   return group;
 }
 
-/** Every element from hydrogen (Z = 1) to radon (Z = 86), in order of atomic number. */
+/** Every element from hydrogen (Z = 1) to oganesson (Z = 118), in order of atomic number. */
 export const ELEMENTS: readonly ElementData[] = Object.freeze(
   ROWS.map(([symbol, name, atomicNumber, group, period, electronegativity, covalentRadius]) =>
     Object.freeze({
@@ -182,7 +224,7 @@ export function elementByName(name: string): ElementData | undefined {
   return BY_NAME.get(name.toLowerCase());
 }
 
-/** True for the d-block metals of groups 3-11 (group 12 and the lanthanides excluded). */
+/** True for the d-block metals of groups 3-11 (group 12, the lanthanides and actinides excluded). */
 export function isTransitionMetal(element: ElementData): boolean {
   return element.category === "transition-metal";
 }

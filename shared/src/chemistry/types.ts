@@ -25,7 +25,7 @@ export interface ElementData {
   readonly period: number;
   /** Valence electrons used in Lewis structures (s + p for main-group elements, group - 10 for groups 13-18). */
   readonly valenceElectrons: number;
-  /** Pauling electronegativity, or null where none is tabulated (He, Ne, Ar). */
+  /** Pauling electronegativity, or null where none is tabulated (He, Ne, Ar, and Z >= 104). */
   readonly electronegativity: number | null;
   /** Single-bond covalent radius in picometres. */
   readonly covalentRadius: number;
@@ -69,6 +69,13 @@ export interface SpeciesReading {
    * H2O five times. Absent for a species written as one formula.
    */
   readonly parts?: readonly WrittenPart[];
+  /** The physical state written after the formula ("NaCl(s)", "SO4^2-(aq)"); absent when none was. */
+  readonly state?: PhysicalState;
+  /**
+   * Isotope labels as written, in written order ("D" in CDCl3, the 13 of 13CO2). The composition
+   * and formula count a labelled atom as its element, since labels change no Lewis structure.
+   */
+  readonly isotopes?: readonly IsotopeLabel[];
 }
 
 /** One dot-separated part of a hydrate or adduct, as written. */
@@ -76,6 +83,18 @@ export interface WrittenPart {
   readonly count: number;
   /** The part's formula as the reader writes it ("CuSO4", "H2O"). */
   readonly formula: string;
+}
+
+/** State symbols: solid, liquid, gas, aqueous solution. */
+export type PhysicalState = "s" | "l" | "g" | "aq";
+
+/** One isotope label: "D" is hydrogen-2, "13C" carbon-13. */
+export interface IsotopeLabel {
+  /** The element the labelled atom is ("H" for D and T). */
+  readonly symbol: string;
+  readonly massNumber: number;
+  /** The label as the writer wrote it: "D", "T", "13C", "^{227}_{90}Th". */
+  readonly written: string;
 }
 
 /** Stable codes for everything that stops a species from being read or analysed. */
@@ -92,6 +111,8 @@ export type ProblemCode =
   | "octet-exceeded"
   | "hydrogen-overbonded"
   | "transition-metal-centre"
+  | "f-block-centre"
+  | "superheavy-element"
   | "ionic-solid"
   | "hydrate"
   | "adduct"

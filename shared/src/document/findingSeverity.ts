@@ -8,6 +8,8 @@ import type { FindingSeverity } from "./types";
 /** Species VSEPR is not meant for: worth a note, not an error. */
 const OUTSIDE_THE_MODEL: ReadonlySet<ProblemCode> = new Set([
   "transition-metal-centre",
+  "f-block-centre",
+  "superheavy-element",
   "ionic-solid",
   "hydrate",
   "adduct",

@@ -12,6 +12,7 @@ import type {
 } from "../chemistry/types";
 import { lewisJson } from "./analysisJson";
 import { compositeKind, distinctAnalysedParts, innerParts, partLabel } from "./compositeParts";
+import { isotopeNote, stateNote } from "./notationNotes";
 
 /** Wrappers for the parts of a card a caller may want to highlight. Identity by default. */
 export interface CardStyle {
@@ -100,6 +101,10 @@ function successLines(input: string, analysis: SpeciesAnalysis, style: CardStyle
   const echoed = input.trim() === reading.formula || input.trim() === reading.name ? "" : `  (from "${input}")`;
   const lines = [style.title(title) + (echoed ? style.muted(echoed) : "")];
   lines.push(row(style, "Charge", signed(reading.charge)));
+  const state = stateNote(reading);
+  if (state) lines.push(row(style, "State", state));
+  const isotopes = isotopeNote(reading);
+  if (isotopes) lines.push(row(style, "Isotope labels", `${isotopes} (same Lewis structure and shape)`));
   lines.push(row(style, "Valence electrons", String(analysis.valenceElectrons)));
   lines.push(...lewisLines(analysis, style));
   // Measured angles belong to the species; list them once, under the first centre.

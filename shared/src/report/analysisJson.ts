@@ -70,6 +70,10 @@ export interface AnalysisJsonSuccess {
   readonly pointGroup: string | null;
   readonly lewis: LewisJson;
   readonly measuredAngles: readonly MeasuredAngle[];
+  /** The state symbol written after the species, when one was: "s", "l", "g", "aq". */
+  readonly state?: string;
+  /** Isotope labels as written, when there were any. */
+  readonly isotopes?: readonly { readonly written: string; readonly symbol: string; readonly massNumber: number }[];
 }
 
 /** A species that could not be read or analysed. */
@@ -145,6 +149,8 @@ function successJson(input: string, analysis: SpeciesAnalysis): AnalysisJsonSucc
     pointGroup: shapeOf(analysis).pointGroup ?? null,
     lewis: lewisJson(analysis),
     measuredAngles: analysis.measuredAngles.map((angle) => ({ ...angle })),
+    ...(reading.state ? { state: reading.state } : {}),
+    ...(reading.isotopes ? { isotopes: reading.isotopes.map((label) => ({ ...label })) } : {}),
   };
 }
 

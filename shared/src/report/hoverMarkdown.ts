@@ -12,6 +12,7 @@ import type {
   SpeciesAnalysis,
   SpeciesPart,
 } from "../chemistry/types";
+import { isotopeNote, stateNote } from "./notationNotes";
 import { shapeSketchSvg, svgDataUri } from "./shapeSketch";
 import { compositeKind, distinctAnalysedParts, innerParts, roleWords } from "./compositeParts";
 import { partShapeText } from "../chemistry/analysis/partShapes";
@@ -84,6 +85,8 @@ export function hoverMarkdown(analysis: SpeciesAnalysis, options: HoverMarkdownO
   const lines: string[] = [];
   lines.push(titleLine(analysis, markup));
   lines.push("");
+  const notation = notationLine(analysis, markup);
+  if (notation) lines.push(notation, "");
   const sketch = markup.images ? sketchLine(analysis) : undefined;
   if (sketch) lines.push(sketch, "");
   lines.push(electronLine(analysis));
@@ -164,6 +167,16 @@ export function problemMarkdown(text: string, message: string, format?: HoverFor
   const markup = markupFor(format);
   const reason = options.alsoAProblem ? "the reason is the problem reported on this text" : message;
   return [`${markup.strong(markup.text(text))}: not analysed`, "", markup.text(reason), "", markup.emphasis(HOVER_CAUTION)].join("\n");
+}
+
+/** "State: aqueous solution (aq) · Isotope labels: D = hydrogen-2", or undefined. */
+function notationLine(analysis: SpeciesAnalysis, markup: Markup): string | undefined {
+  const parts: string[] = [];
+  const state = stateNote(analysis.reading);
+  if (state) parts.push(`State: ${state}`);
+  const isotopes = isotopeNote(analysis.reading);
+  if (isotopes) parts.push(`Isotope labels: ${markup.text(isotopes)} (same Lewis structure and shape)`);
+  return parts.length === 0 ? undefined : parts.join(" · ");
 }
 
 function titleLine(analysis: SpeciesAnalysis, markup: Markup): string {

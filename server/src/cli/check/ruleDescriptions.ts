@@ -19,6 +19,8 @@ const DESCRIPTIONS: Readonly<Record<string, string>> = {
   adduct: "An adduct written with a dot: each part is analysed as a free species.",
   "network-solid": "A network solid: one covalent lattice with no molecules, so no molecular shape.",
   "metal-ion-complex": "A hydroxo or aqua ion: a metal ion holding hydroxide or water; its ligands are analysed.",
+  "f-block-centre": "A lanthanide or actinide centre: VSEPR does not predict its shape.",
+  "superheavy-element": "A superheavy element (Z 104 and up): too little known chemistry for a VSEPR shape.",
   "three-centre-bonding": "Bonds shared by three atoms (a borane's B-H-B bridges): no Lewis structure or VSEPR shape.",
   "ambiguous-connectivity": "The formula allows several skeletons; SMILES would settle it.",
   "no-central-atom": "No central atom can be chosen for this species.",

@@ -3,7 +3,7 @@
  * follows directly: each atom's remaining valence electrons are its lone pairs (and an odd one is
  * a radical). Aromatic rings are read as one Kekulé structure.
  */
-import { elementBySymbol } from "../elements";
+import { metalCentreProblem } from "./metalCentre";
 import { countEquivalentStructures } from "./equivalentStructures";
 import { atomTraits } from "../lewis/electronBookkeeping";
 import type { LewisStructure } from "../lewis/chooseLewisStructure";
@@ -81,21 +81,8 @@ export function smilesStructure(text: string): SmilesOutcome {
     formula: smilesFormula(molecule),
   };
 
-  let metal: string | undefined;
-  for (let index = 0; index < heavyCount && metal === undefined; index++) {
-    const category = elementBySymbol(symbols[index])?.category;
-    if (category === "transition-metal" || category === "lanthanide" || category === "actinide") metal = symbols[index];
-  }
-  if (metal) {
-    return {
-      ok: false,
-      reading,
-      problem: {
-        code: "transition-metal-centre",
-        message: `${trimmed} contains ${elementBySymbol(metal)!.name}, a transition metal: VSEPR does not apply to d-block centres. No shape is predicted.`,
-      },
-    };
-  }
+  const metal = metalCentreProblem(trimmed, symbols.slice(0, heavyCount));
+  if (metal) return { ok: false, reading, problem: metal };
 
   const orderSums = new Array<number>(atomCount).fill(0);
   for (let k = 0; k < bonds.length; k++) {

@@ -94,3 +94,24 @@ export function closingFor(open: number): number {
 export function isCloseBracket(code: number): boolean {
   return code === 0x29 || code === 0x5d || code === 0x7d;
 }
+
+/**
+ * Characters that take no room and mean nothing in a formula: zero-width space, non-joiner and
+ * joiner, word joiner, byte-order mark and soft hyphen. Pasted text carries them unseen.
+ */
+export function isInvisibleFormatting(code: number): boolean {
+  return (
+    code === 0x200b || code === 0x200c || code === 0x200d || code === 0x2060 || code === 0xfeff || code === 0x00ad
+  );
+}
+
+/** No-break spaces (plain, narrow and figure): word processors put them where no break is wanted. */
+export function isNoBreakSpace(code: number): boolean {
+  return code === 0xa0 || code === 0x202f || code === 0x2007;
+}
+
+/** Value 0-9 of an ASCII or a Unicode superscript digit, otherwise -1. */
+export function chargeDigitValue(code: number): number {
+  const ascii = asciiDigitValue(code);
+  return ascii >= 0 ? ascii : superscriptDigitValue(code);
+}

@@ -1,11 +1,13 @@
 /**
  * Finds the charge written at the end of a formula, in every spelling people use: NH4+, NH4^+,
- * SO4^2-, SO4 2-, SO4(2-), SO4^{2-}, [PO4]3-, SO4--, SO₄²⁻, Fe2+.
+ * SO4^2-, SO4 2-, SO4(2-), SO4^{2-}, [PO4]3-, SO4--, SO₄²⁻, Fe2+, and sign first as handbook
+ * tables and databases print it: SO4-2, Ca+2, Fe(CN)6-3.
  */
 import { elementBySymbol } from "../elements";
 import type { Problem } from "../types";
 import {
   asciiDigitValue,
+  chargeDigitValue,
   isSpace,
   isUpperLetter,
   isLowerLetter,
@@ -40,7 +42,7 @@ export function readChargeSuffix(text: string, start: number, end: number): Char
   if (last === 0x29) return bracketedCharge(text, start, end, 0x28);
   if (last === 0x7d) return bracketedCharge(text, start, end, 0x7b);
   if (signValue(last) !== 0) return signEndedCharge(text, start, end);
-  if (asciiDigitValue(last) >= 0) return signFirstCharge(text, start, end);
+  if (chargeDigitValue(last) >= 0) return signFirstCharge(text, start, end);
   return noCharge(end);
 }
 
@@ -125,14 +127,26 @@ function bracketedCharge(text: string, start: number, end: number, open: number)
   return charged(bodyEnd, value);
 }
 
-/** "^-2" or "^+3" at the end: sign first, then the number. */
+/** "^-2", "^+3", or without the caret "SO4-2", "Ca+2", "Fe(CN)6-3": sign first, then the number. */
 function signFirstCharge(text: string, start: number, end: number): ChargeSuffixResult {
   let i = end - 1;
-  while (i >= start && asciiDigitValue(text.charCodeAt(i)) >= 0) i--;
-  if (i - 1 < start || signValue(text.charCodeAt(i)) === 0 || text.charCodeAt(i - 1) !== CARET) return noCharge(end);
-  const value = chargeCoreValue(text, i, end);
-  if (value === undefined) return malformed("This charge is not a number and a sign, like ^2-.", i - 1, end);
-  return charged(i - 1, value);
+  while (i >= start && chargeDigitValue(text.charCodeAt(i)) >= 0) i--;
+  if (i < start || signValue(text.charCodeAt(i)) === 0) return noCharge(end);
+  if (i - 1 >= start && text.charCodeAt(i - 1) === CARET) {
+    const value = chargeCoreValue(text, i, end);
+    if (value === undefined) return malformed("This charge is not a number and a sign, like ^2-.", i - 1, end);
+    return charged(i - 1, value);
+  }
+  let bodyEnd = i;
+  while (bodyEnd > start && isSpace(text.charCodeAt(bodyEnd - 1))) bodyEnd--;
+  if (bodyEnd === start) return malformed("A charge needs a species before it.", start, end);
+  // Tables print one digit after the sign; more would be a count or a mass number, not a charge.
+  if (end - i !== 2) {
+    return malformed("A charge written sign first has one digit, like SO4-2 or Ca+2.", i, end);
+  }
+  const magnitude = chargeDigitValue(text.charCodeAt(end - 1));
+  if (magnitude === 0) return malformed("A charge of zero is no charge; leave it out.", i, end);
+  return charged(bodyEnd, signValue(text.charCodeAt(i)) * magnitude);
 }
 
 /** Everything that ends in + or -. */

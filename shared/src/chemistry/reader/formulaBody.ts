@@ -1,10 +1,11 @@
 /**
  * Hand-written scanner for the body of a formula (everything before the charge): element symbols,
- * counts, nested brackets, bond marks of condensed formulas and the hydrate dot. One pass, no
- * regular expressions, work bounded by the input length and the expansion limits below.
+ * counts (also as TeX subscripts, H_2O), nested brackets, bond marks of condensed formulas, the
+ * hydrate dot and isotope labels (D, T, 13CO2, ^{13}C). One pass, no regular expressions, work
+ * bounded by the input length and the expansion limits below.
  */
 import { elementBySymbol } from "../elements";
-import type { FormulaPart, Problem, WrittenPart } from "../types";
+import type { ElementData, FormulaPart, IsotopeLabel, Problem, WrittenPart } from "../types";
 import {
   bondMark,
   closingFor,
@@ -12,12 +13,14 @@ import {
   isCloseBracket,
   isHydrateDot,
   isLowerLetter,
+  isNoBreakSpace,
   isOpenBracket,
   isSpace,
   isUpperLetter,
   signValue,
   superscriptDigitValue,
 } from "./characters";
+import { hydrogenLabelMass, isLeadingMassNumberOf, isMassNumberOf } from "./isotopes";
 import { problemAt } from "./problem";
 
 /** What the body of a formula is made of. */
@@ -30,6 +33,8 @@ export interface FormulaBody {
   readonly normalizedText: string;
   /** The dot-separated parts of a hydrate or adduct with their counts; absent without a dot. */
   readonly parts?: readonly WrittenPart[];
+  /** Isotope labels in written order, each written spelling once; absent when there are none. */
+  readonly isotopes?: readonly IsotopeLabel[];
 }
 
 export type FormulaBodyResult =
@@ -41,6 +46,9 @@ const MAX_COUNT = 100_000;
 /** Limits that keep nested multipliers like ((((H9)9)9)9) from blowing up memory. */
 const MAX_SEQUENCE_PARTS = 10_000;
 const MAX_TOTAL_ATOMS = 1_000_000;
+
+const CARET = 0x5e;
+const UNDERSCORE = 0x5f;
 
 interface Frame {
   readonly kind: "root" | "bracket" | "hydrate";
@@ -54,6 +62,8 @@ interface Frame {
   items: number;
   /** On the root frame of a hydrate: the parts closed so far. */
   writtenParts?: WrittenPart[];
+  /** Isotope labels, kept on the root frame only. */
+  isotopes?: IsotopeLabel[];
 }
 
 function newFrame(kind: Frame["kind"], openAt: number, openCode: number, multiplier: number): Frame {
@@ -79,25 +89,27 @@ export function readFormulaBody(text: string, start: number, end: number): Formu
 }
 
 function scan(text: string, start: number, end: number): FormulaBody {
-  if (countDigitValue(text.charCodeAt(start)) >= 0) {
-    let digitsEnd = start;
-    while (digitsEnd < end && countDigitValue(text.charCodeAt(digitsEnd)) >= 0) digitsEnd++;
-    fail(
-      "malformed-formula",
-      "A number in front counts molecules in an equation; write the species alone.",
-      start,
-      digitsEnd,
-    );
-  }
   const root = newFrame("root", start, 0, 1);
   const stack: Frame[] = [root];
   let wholeBodyBracket = false;
-  let i = start;
+  let i = countDigitValue(text.charCodeAt(start)) >= 0 ? leadingMassNumber(text, start, end, root) : start;
   while (i < end) {
     const code = text.charCodeAt(i);
     const frame = stack[stack.length - 1];
     if (isUpperLetter(code) || isLowerLetter(code)) {
-      i = readElement(text, i, end, frame);
+      i = readElement(text, i, end, frame, root);
+      continue;
+    }
+    if (code === CARET || superscriptDigitValue(code) >= 0) {
+      const labelled = isotopePrefix(text, i, end, root);
+      if (labelled > i) {
+        i = labelled;
+        continue;
+      }
+    }
+    if (isNoBreakSpace(code) && !spacesBeforeHydrateDot(text, i, end)) {
+      // a no-break space inside a formula is a word processor's doing, not a separator
+      i++;
       continue;
     }
     if (isOpenBracket(code)) {
@@ -147,6 +159,9 @@ function scan(text: string, start: number, end: number): FormulaBody {
     if (countDigitValue(code) >= 0) {
       fail("malformed-formula", "This number follows no element or bracket.", i, i + 1);
     }
+    if (code === UNDERSCORE) {
+      fail("malformed-formula", 'A "_" subscript follows an element or a bracket, like H_2O.', i, i + 1);
+    }
     if (code === 0x5e || signValue(code) !== 0 || superscriptDigitValue(code) >= 0) {
       fail("malformed-formula", "A charge can only come at the end, like SO4^2-.", i, i + 1);
     }
@@ -164,16 +179,22 @@ function scan(text: string, start: number, end: number): FormulaBody {
   const composition: FormulaPart[] = new Array(root.counts.size);
   let next = 0;
   for (const [symbol, count] of root.counts) composition[next++] = { symbol, count };
-  const body: FormulaBody = { composition, writtenSequence: root.parts.slice(), normalizedText };
+  const writtenSequence = root.parts.slice();
+  const body: FormulaBody = root.isotopes ? { composition, writtenSequence, normalizedText, isotopes: root.isotopes } : { composition, writtenSequence, normalizedText };
   return root.writtenParts ? { ...body, parts: root.writtenParts } : body;
 }
 
-function readElement(text: string, i: number, end: number, frame: Frame): number {
+function readElement(text: string, i: number, end: number, frame: Frame, root: Frame): number {
   const code = text.charCodeAt(i);
   const twoLetters = i + 1 < end && isLowerLetter(text.charCodeAt(i + 1));
   const symbolEnd = twoLetters ? i + 2 : i + 1;
   const written = text.slice(i, symbolEnd);
-  const element = isUpperLetter(code) ? elementBySymbol(written) : undefined;
+  let element = isUpperLetter(code) ? elementBySymbol(written) : undefined;
+  if (element === undefined && !twoLetters && hydrogenLabelMass(code) > 0) {
+    // D and T are hydrogen-2 and hydrogen-3 ("CDCl3" is C, D, Cl3: Cd needs a lower-case d)
+    element = elementBySymbol("H") as ElementData;
+    addIsotope(root, { symbol: "H", massNumber: hydrogenLabelMass(code), written });
+  }
   if (element === undefined) fail("unknown-element", `"${written}" is not an element symbol.`, i, symbolEnd);
   // The table's own string: one shared copy per element rather than one per reading.
   const symbol = element.symbol;
@@ -185,8 +206,9 @@ function readElement(text: string, i: number, end: number, frame: Frame): number
   return next;
 }
 
-/** Reads ASCII or subscript digits; 1 when there are none. */
+/** Reads ASCII or subscript digits, or a TeX subscript (_2, _{2}); 1 when there are none. */
 function readCount(text: string, from: number, end: number): { value: number; next: number } {
+  if (from < end && text.charCodeAt(from) === UNDERSCORE) return readSubscriptCount(text, from, end);
   let value = 0;
   let i = from;
   while (i < end) {
@@ -267,4 +289,126 @@ function closeHydrate(stack: Frame[], at: number): void {
   root.text += hydrate.text;
   root.items++;
   root.writtenParts?.push({ count: hydrate.multiplier, formula: hydrate.text });
+}
+
+/** "_2" or "_{2}": a count written as a TeX subscript outside mhchem. */
+function readSubscriptCount(text: string, from: number, end: number): { value: number; next: number } {
+  const braced = text.charCodeAt(from + 1) === 0x7b;
+  const digitsStart = from + (braced ? 2 : 1);
+  let i = digitsStart;
+  let value = 0;
+  while (i < end && asciiDigit(text.charCodeAt(i)) >= 0) {
+    value = value * 10 + asciiDigit(text.charCodeAt(i));
+    if (value > MAX_COUNT) fail("malformed-formula", "This count is too large for one species.", from, i + 1);
+    i++;
+  }
+  if (i === digitsStart || (braced && text.charCodeAt(i) !== 0x7d)) {
+    fail("malformed-formula", 'A "_" subscript needs a number, like H_2O or H_{2}O.', from, Math.min(end, Math.max(i, from + 1)));
+  }
+  if (value === 0) fail("malformed-formula", "A count of zero means the group is not there.", from, i);
+  return { value, next: braced ? i + 1 : i };
+}
+
+function asciiDigit(code: number): number {
+  return code >= 0x30 && code <= 0x39 ? code - 0x30 : -1;
+}
+
+/** True when the spaces from `i` lead to a hydrate dot, which the hydrate reading owns. */
+function spacesBeforeHydrateDot(text: string, i: number, end: number): boolean {
+  while (i < end && isSpace(text.charCodeAt(i))) i++;
+  return i < end && isHydrateDot(text.charCodeAt(i));
+}
+
+function addIsotope(root: Frame, label: IsotopeLabel): void {
+  const labels = (root.isotopes ??= []);
+  if (!labels.some((known) => known.written === label.written)) labels.push(label);
+}
+
+/** The element whose symbol starts at `i` (two letters when a lower-case letter follows). */
+function symbolAt(text: string, i: number, end: number): { element: ElementData | undefined; symbolEnd: number } {
+  const twoLetters = i + 1 < end && isLowerLetter(text.charCodeAt(i + 1));
+  const symbolEnd = twoLetters ? i + 2 : i + 1;
+  if (!isUpperLetter(text.charCodeAt(i))) return { element: undefined, symbolEnd };
+  const written = text.slice(i, symbolEnd);
+  const element = elementBySymbol(written) ?? (!twoLetters && hydrogenLabelMass(text.charCodeAt(i)) > 0 ? elementBySymbol("H") : undefined);
+  return { element, symbolEnd };
+}
+
+/**
+ * A number at the very start: a mass number ("13CO2") when it fits the element that follows,
+ * otherwise a count of molecules from an equation, which is refused. Returns where reading goes on.
+ */
+function leadingMassNumber(text: string, start: number, end: number, root: Frame): number {
+  let digitsEnd = start;
+  let value = 0;
+  while (digitsEnd < end && countDigitValue(text.charCodeAt(digitsEnd)) >= 0 && digitsEnd - start < 4) {
+    value = value * 10 + countDigitValue(text.charCodeAt(digitsEnd));
+    digitsEnd++;
+  }
+  const { element, symbolEnd } = digitsEnd < end ? symbolAt(text, digitsEnd, end) : { element: undefined, symbolEnd: digitsEnd };
+  const ascii = asciiDigit(text.charCodeAt(start)) >= 0;
+  if (element && ascii && countDigitValue(text.charCodeAt(digitsEnd)) < 0 && isLeadingMassNumberOf(value, digitsEnd - start, element)) {
+    addIsotope(root, { symbol: element.symbol, massNumber: value, written: text.slice(start, symbolEnd) });
+    return digitsEnd;
+  }
+  while (digitsEnd < end && countDigitValue(text.charCodeAt(digitsEnd)) >= 0) digitsEnd++;
+  return fail(
+    "malformed-formula",
+    "A number in front counts molecules in an equation; write the species alone (an isotope is written ^13C or D).",
+    start,
+    digitsEnd,
+  );
+}
+
+/**
+ * "^{13}C", "^13C", "¹³C" or mhchem's "^{227}_{90}Th": a mass number (and atomic number) before a
+ * symbol. Returns the index of the symbol, or `i` when this is no isotope label.
+ */
+function isotopePrefix(text: string, i: number, end: number, root: Frame): number {
+  let at = i;
+  let mass = 0;
+  let digits = 0;
+  if (text.charCodeAt(at) === CARET) {
+    at++;
+    const braced = text.charCodeAt(at) === 0x7b;
+    if (braced) at++;
+    while (at < end && asciiDigit(text.charCodeAt(at)) >= 0 && digits < 4) {
+      mass = mass * 10 + asciiDigit(text.charCodeAt(at++));
+      digits++;
+    }
+    if (braced) {
+      if (text.charCodeAt(at) !== 0x7d) return i;
+      at++;
+    }
+  } else {
+    while (at < end && superscriptDigitValue(text.charCodeAt(at)) >= 0 && digits < 4) {
+      mass = mass * 10 + superscriptDigitValue(text.charCodeAt(at++));
+      digits++;
+    }
+  }
+  if (digits === 0) return i;
+  let atomicNumber = 0;
+  if (text.charCodeAt(at) === UNDERSCORE) {
+    const subscript = readSubscriptCount(text, at, end);
+    atomicNumber = subscript.value;
+    at = subscript.next;
+  }
+  const { element, symbolEnd } = at < end ? symbolAt(text, at, end) : { element: undefined, symbolEnd: at };
+  if (element === undefined) return i;
+  const written = text.slice(i, symbolEnd);
+  if (atomicNumber !== 0 && atomicNumber !== element.atomicNumber) {
+    fail(
+      "malformed-formula",
+      `The atomic number ${atomicNumber} written in ${written} does not match ${element.name} (${element.atomicNumber}).`,
+      i,
+      symbolEnd,
+    );
+  }
+  if (!isMassNumberOf(mass, element)) {
+    fail("malformed-formula", `${mass} is not a mass number of ${element.name} (atomic number ${element.atomicNumber}).`, i, symbolEnd);
+  }
+  // "^2D" would label twice; the element read next is the plain symbol
+  if (element.symbol === "H" && text.charCodeAt(at) !== 0x48) return i;
+  addIsotope(root, { symbol: element.symbol, massNumber: mass, written });
+  return at;
 }

@@ -1,13 +1,17 @@
 /**
- * Reads one formula with its charge from a span of the input: SF4, Ca(OH)2, CH3COOH, SO4^2-,
- * [PO4]3-, NH₄⁺, CuSO4·5H2O.
+ * Reads one formula with its charge and state from a span of the input: SF4, Ca(OH)2, CH3COOH,
+ * SO4^2-, [PO4]3-, NH₄⁺, CuSO4·5H2O, HCl(aq), SO4^2-(aq), C-14.
  */
-import type { ReadResult, SpeciesNotation } from "../types";
+import { elementBySymbol } from "../elements";
+import type { ReadResult, SpeciesNotation, SpeciesReading } from "../types";
+import { isLowerLetter, isUpperLetter, signValue } from "./characters";
 import { readChargeSuffix } from "./chargeSuffix";
 import { chargeText } from "./chargeText";
 import { readFormulaBody } from "./formulaBody";
+import { isHyphenatedMassNumber } from "./isotopes";
 import { problemAt } from "./problem";
 import { recaseSuggestion } from "./recaseSuggestion";
+import { readStateSuffix } from "./stateSymbol";
 
 /**
  * Reads `text[start, end)` (already trimmed) as a formula. `range` is where the reading sits in the
@@ -21,6 +25,10 @@ export function readFormulaSpan(
   rangeStart = start,
   rangeEnd = end,
 ): ReadResult {
+  const stated = text.charCodeAt(end - 1) === 0x29 || text.charCodeAt(end - 1) === 0x7d ? readStateSuffix(text, start, end) : undefined;
+  if (stated !== undefined) end = stated.bodyEnd;
+  const nuclide = hyphenatedNuclide(text, start, end, notation, rangeStart, rangeEnd);
+  if (nuclide !== undefined) return nuclide;
   const suffix = readChargeSuffix(text, start, end);
   if (!suffix.ok) return suffix;
   const { bodyEnd, charge } = suffix.value;
@@ -36,18 +44,56 @@ export function readFormulaSpan(
     const suggestion = problem.code === "unknown-element" ? checkedRecase(text, start, end) : undefined;
     return { ok: false, problem: suggestion === undefined ? problem : { ...problem, suggestion } };
   }
-  const { composition, writtenSequence, normalizedText, parts } = body.value;
+  const { composition, writtenSequence, normalizedText, isotopes, parts } = body.value;
+  const value: SpeciesReading = {
+    text: text.slice(rangeStart, rangeEnd),
+    range: { start: rangeStart, end: rangeEnd },
+    notation,
+    composition,
+    writtenSequence,
+    charge,
+    formula: normalizedText + chargeText(charge),
+  };
+  if (stated === undefined && isotopes === undefined && parts === undefined) return { ok: true, value };
+  return {
+    ok: true,
+    value: { ...value, ...(parts ? { parts } : {}), ...(stated ? { state: stated.state } : {}), ...(isotopes ? { isotopes } : {}) },
+  };
+}
+
+/** "C-14", "U-235": one symbol, a hyphen and a mass number name a nuclide, not a charge. */
+function hyphenatedNuclide(
+  text: string,
+  start: number,
+  end: number,
+  notation: SpeciesNotation,
+  rangeStart: number,
+  rangeEnd: number,
+): ReadResult | undefined {
+  if (!isUpperLetter(text.charCodeAt(start))) return undefined;
+  const symbolEnd = start + 1 < end && isLowerLetter(text.charCodeAt(start + 1)) ? start + 2 : start + 1;
+  if (symbolEnd + 1 >= end || signValue(text.charCodeAt(symbolEnd)) !== -1 || text.charCodeAt(symbolEnd) === 0x207b) return undefined;
+  let massNumber = 0;
+  for (let i = symbolEnd + 1; i < end; i++) {
+    const code = text.charCodeAt(i);
+    if (code < 0x30 || code > 0x39 || i - symbolEnd > 3) return undefined;
+    massNumber = massNumber * 10 + (code - 0x30);
+  }
+  const symbol = text.slice(start, symbolEnd);
+  const element = elementBySymbol(symbol);
+  if (element === undefined || !isHyphenatedMassNumber(massNumber, element)) return undefined;
+  const part = { symbol: element.symbol, count: 1 };
   return {
     ok: true,
     value: {
       text: text.slice(rangeStart, rangeEnd),
       range: { start: rangeStart, end: rangeEnd },
       notation,
-      composition,
-      writtenSequence,
-      charge,
-      formula: normalizedText + chargeText(charge),
-      ...(parts ? { parts } : {}),
+      composition: [part],
+      writtenSequence: [part],
+      charge: 0,
+      formula: element.symbol,
+      isotopes: [{ symbol: element.symbol, massNumber, written: text.slice(start, end) }],
     },
   };
 }

@@ -13,8 +13,8 @@
  * "(CH3)2CO", "Ca(OH)2").
  */
 import { parseSmiles, smilesNetCharge } from "../smiles";
-import type { FormulaPart, ReadResult, SpeciesReading } from "../types";
-import { isAsciiLetter, isLowerLetter, isSpace } from "./characters";
+import type { FormulaPart, ReadResult, SpeciesReading, TextRange } from "../types";
+import { isAsciiLetter, isInvisibleFormatting, isLowerLetter, isSpace } from "./characters";
 import { chargeText } from "./chargeText";
 import { matchName, nameForFormula, normalizeName, type NameMatch } from "./names/nameLookup";
 import { suggestName } from "./names/nameSuggestion";
@@ -24,6 +24,7 @@ import { LAB_ABBREVIATIONS } from "./names/synonyms";
 import { problemAt } from "./problem";
 import { readFormulaSpan } from "./readFormula";
 import { recaseSuggestion } from "./recaseSuggestion";
+import { readStateSuffix } from "./stateSymbol";
 
 /** Longer input is not one species; the limit also bounds the work one call can do. */
 export const MAX_SPECIES_INPUT = 1000;
@@ -63,6 +64,13 @@ function readSpeciesUncached(text: string): ReadResult {
       ),
     };
   }
+  for (let i = 0; i < text.length; i++) {
+    if (isInvisibleFormatting(text.charCodeAt(i))) return readWithoutInvisible(text);
+  }
+  return readVisible(text);
+}
+
+function readVisible(text: string): ReadResult {
   let start = 0;
   let end = text.length;
   while (start < end && isSpace(text.charCodeAt(start))) start++;
@@ -79,7 +87,13 @@ function readSpeciesUncached(text: string): ReadResult {
     const plain = latexToPlain(text.slice(start, end));
     if (plain !== undefined && plain.length > 0 && plain !== text.slice(start, end)) return readConverted(plain, text, start, end);
   }
-  if (looksLikeName(text, start, end)) return readName(text, start, end);
+  const stated = text.charCodeAt(end - 1) === 0x29 ? readStateSuffix(text, start, end) : undefined;
+  const nameEnd = stated ? stated.bodyEnd : end;
+  if (looksLikeName(text, start, nameEnd)) {
+    const named = readName(text, start, nameEnd);
+    if (!named.ok || stated === undefined) return named;
+    return { ok: true, value: { ...named.value, text: text.slice(start, end), range: { start, end }, state: stated.state } };
+  }
   const formula = withName(readFormulaSpan(text, start, end, "formula"));
   // Inventories write names in capitals ("ACETONE", "COPPER SULFATE"): a name, when no formula
   if (!formula.ok && end - start >= 4 && isCapitalWords(text, start, end)) {
@@ -113,6 +127,32 @@ function readConverted(plain: string, text: string, start: number, end: number):
   // A suggestion would be spelt without the writer's markup: none is offered.
   if (!result.ok) return { ok: false, problem: problemAt(result.problem.code, result.problem.message, start, end) };
   return { ok: true, value: { ...result.value, text: text.slice(start, end), range: { start, end } } };
+}
+
+/**
+ * Zero-width characters pasted into a formula are ignored: the text is read without them and the
+ * ranges are put back on the original, so no message ever quotes a character nobody can see.
+ */
+function readWithoutInvisible(text: string): ReadResult {
+  let visible = "";
+  const positions: number[] = [];
+  for (let i = 0; i < text.length; i++) {
+    if (isInvisibleFormatting(text.charCodeAt(i))) continue;
+    visible += text[i];
+    positions.push(i);
+  }
+  const mapRange = (range: TextRange): TextRange => {
+    const start = range.start < positions.length ? positions[range.start] : text.length;
+    const end = range.end === range.start ? start : positions[range.end - 1] + 1;
+    return { start, end };
+  };
+  const result = readVisible(visible);
+  if (!result.ok) {
+    const { problem } = result;
+    return { ok: false, problem: problem.range ? { ...problem, range: mapRange(problem.range) } : problem };
+  }
+  const range = mapRange(result.value.range);
+  return { ok: true, value: { ...result.value, range, text: text.slice(range.start, range.end) } };
 }
 
 /** `\ce{...}`: the formula inside, with the range covering the whole command. */
@@ -268,6 +308,8 @@ function formulaSpelling(text: string, start: number, end: number): string | und
 function withName(result: ReadResult): ReadResult {
   if (!result.ok) return result;
   const reading: SpeciesReading = result.value;
+  // the unlabelled species' name would misname a labelled one (D2O is not sold as "water")
+  if (reading.isotopes !== undefined) return result;
   const name = nameForFormula(reading.formula, reading.composition, reading.writtenSequence, reading.charge);
   return name === undefined ? result : { ok: true, value: { ...reading, name } };
 }
