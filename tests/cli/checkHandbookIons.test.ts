@@ -13,16 +13,11 @@ import { ensureBuilt, repositoryRoot, runCli } from "./cliRunner";
 const TABLE = join(repositoryRoot, "tests", "fixtures", "real-style", "handbook-tsv", "aqueous-ions-298K.tsv");
 
 /**
- * Rows the engine still gives a false error today, by ion as written. What is missing: the reader
- * takes a sign-first charge (`Ca+2`, `SO4-2`, `Fe(CN)6-3`) for a charge in the middle or for a
- * dash between groups. Each is an expected failure (`it.fails`): when the reader learns the
- * notation the test starts passing, vitest reports it, and the ion comes off this list.
+ * Rows the engine still gives a false error today, by ion as written (none since sign-first
+ * charges read). Each is an expected failure (`it.fails`): when the reader learns the notation the
+ * test starts passing, vitest reports it, and the ion comes off this list.
  */
-const KNOWN_FALSE_ERRORS: ReadonlySet<string> = new Set([
-  "Mg+2", "Ca+2", "Sr+2", "Ba+2", "Mn+2", "Fe+2", "Fe+3", "Cu+2", "Zn+2", "Pb+2", "Hg+2", "Hg2+2", "Al+3",
-  "S-2", "CO3-2", "SO3-2", "SO4-2", "S2O3-2", "PO4-3", "HPO4-2", "CrO4-2", "Cr2O7-2", "C2O4-2",
-  "Fe(CN)6-3", "Fe(CN)6-4",
-]);
+const KNOWN_FALSE_ERRORS: ReadonlySet<string> = new Set<string>([]);
 
 /** A row that is wrong on purpose, so the harness is seen to catch an error at all. */
 const BROKEN_ROW = "Qz+2\tQuartzium ion\t+2\t—\t—\t—";

@@ -20,6 +20,7 @@ import {
   type KnownStructure,
 } from "./analysis/structuresByFormula";
 import { metalCentreProblem } from "./analysis/metalCentre";
+import { chooseRespelling } from "./analysis/respelling";
 import { dottedAnalysis, metalIonComplexAnalysis, saltAnalysis } from "./analysis/compositeSpecies";
 import { networkMonomerNote, networkSolidProblem } from "./analysis/networkSolids";
 import { connectivitySignature } from "./analysis/connectivitySignature";
@@ -36,7 +37,7 @@ export function analyzeSpecies(text: string): AnalysisResult {
   let result: AnalysisResult;
   try {
     const read = readSpecies(text);
-    result = read.ok ? analyzeReading(read.value) : { ok: false, problem: read.problem };
+    result = read.ok ? analyzeReading(read.value) : { ok: false, problem: chooseRespelling(read.problem, analyzeSpecies) };
   } catch (error) {
     result = { ok: false, problem: { code: "no-valid-structure", message: `internal error: ${String(error)}` } };
   }

@@ -128,6 +128,11 @@ export interface Problem {
   readonly message: string;
   /** A corrected spelling to offer, e.g. "SF4" for "Sf4". */
   readonly suggestion?: string;
+  /**
+   * Other spellings that read, best first after `suggestion` ("CO2" after "Co2" for "co2"); the
+   * analysis keeps the one that names a species it can work with.
+   */
+  readonly alternatives?: readonly string[];
   readonly range?: TextRange;
 }
 

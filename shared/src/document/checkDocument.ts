@@ -4,6 +4,7 @@
  * are not repeated here; callers show both.
  */
 import { analyzeSpecies } from "../chemistry/analyze";
+import { chooseRespelling } from "../chemistry/analysis/respelling";
 import type { AnalysisResult, Problem } from "../chemistry/types";
 import { analyzeOccurrence } from "./analyzeOccurrence";
 import { checkRecord } from "./checks/recordChecks";
@@ -77,7 +78,8 @@ function problemFinding(occurrence: SpeciesOccurrence, problem: Problem, analyze
  * it; otherwise the suggestion stays a hint in the message.
  */
 function withSafeFix(finding: Finding, written: string, problem: Problem, analyze: AnalyzeText): Finding {
-  const suggestion = problem.suggestion;
+  // the reader lists every spelling that reads ("nh4+": Nh4+, NH4+); offer the species it means
+  const suggestion = chooseRespelling(problem, analyze).suggestion;
   if (!suggestion) return finding;
   if (!isSafeSpellingFix(written, suggestion, analyze)) {
     // A respelt name is worth a hint; a word re-cased into symbols ("LiMoNeNe") is not.

@@ -195,7 +195,10 @@ function readElement(text: string, i: number, end: number, frame: Frame, root: F
     element = elementBySymbol("H") as ElementData;
     addIsotope(root, { symbol: "H", massNumber: hydrogenLabelMass(code), written });
   }
-  if (element === undefined) fail("unknown-element", `"${written}" is not an element symbol.`, i, symbolEnd);
+  if (element === undefined) {
+    const why = isLowerLetter(code) ? ": element symbols start with a capital letter" : "";
+    fail("unknown-element", `"${written}" is not an element symbol${why}.`, i, symbolEnd);
+  }
   // The table's own string: one shared copy per element rather than one per reading.
   const symbol = element.symbol;
   const { value: count, next } = readCount(text, symbolEnd, end);

@@ -3,14 +3,14 @@
  * SO4^2-, [PO4]3-, NH₄⁺, CuSO4·5H2O, HCl(aq), SO4^2-(aq), C-14.
  */
 import { elementBySymbol } from "../elements";
-import type { ReadResult, SpeciesNotation, SpeciesReading } from "../types";
+import type { Problem, ReadResult, SpeciesNotation, SpeciesReading } from "../types";
 import { isLowerLetter, isUpperLetter, signValue } from "./characters";
 import { readChargeSuffix } from "./chargeSuffix";
 import { chargeText } from "./chargeText";
 import { readFormulaBody } from "./formulaBody";
 import { isHyphenatedMassNumber } from "./isotopes";
 import { problemAt } from "./problem";
-import { recaseSuggestion } from "./recaseSuggestion";
+import { recaseCandidates } from "./recaseSuggestion";
 import { readStateSuffix } from "./stateSymbol";
 
 /**
@@ -26,6 +26,7 @@ export function readFormulaSpan(
   rangeEnd = end,
 ): ReadResult {
   const stated = text.charCodeAt(end - 1) === 0x29 || text.charCodeAt(end - 1) === 0x7d ? readStateSuffix(text, start, end) : undefined;
+  const spanEnd = end;
   if (stated !== undefined) end = stated.bodyEnd;
   const nuclide = hyphenatedNuclide(text, start, end, notation, rangeStart, rangeEnd);
   if (nuclide !== undefined) return nuclide;
@@ -41,8 +42,8 @@ export function readFormulaSpan(
   const body = readFormulaBody(text, start, bodyEnd);
   if (!body.ok) {
     const problem = body.problem;
-    const suggestion = problem.code === "unknown-element" ? checkedRecase(text, start, end) : undefined;
-    return { ok: false, problem: suggestion === undefined ? problem : { ...problem, suggestion } };
+    if (problem.code !== "unknown-element") return body;
+    return { ok: false, problem: withRespellings(problem, readableRecasings(text, start, end, spanEnd)) };
   }
   const { composition, writtenSequence, normalizedText, isotopes, parts } = body.value;
   const value: SpeciesReading = {
@@ -98,10 +99,20 @@ function hyphenatedNuclide(
   };
 }
 
-/** A re-cased spelling, offered only when it reads cleanly. */
-function checkedRecase(text: string, start: number, end: number): string | undefined {
-  const suggestion = recaseSuggestion(text, start, end);
-  if (suggestion === undefined) return undefined;
-  const check = readFormulaSpan(suggestion, 0, suggestion.length, "formula");
-  return check.ok ? suggestion : undefined;
+/**
+ * Re-cased spellings of `text[start, end)` that read cleanly, cheapest first; a state symbol up to
+ * `suffixEnd` is kept as written.
+ */
+export function readableRecasings(text: string, start: number, end: number, suffixEnd = end): string[] {
+  const suffix = text.slice(end, suffixEnd);
+  return recaseCandidates(text, start, end)
+    .map((candidate) => candidate + suffix)
+    .filter((candidate) => readFormulaSpan(candidate, 0, candidate.length, "formula").ok);
+}
+
+/** `problem` with the first spelling as its suggestion and the rest as alternatives. */
+export function withRespellings(problem: Problem, spellings: readonly string[]): Problem {
+  if (spellings.length === 0) return problem;
+  const [suggestion, ...alternatives] = spellings;
+  return alternatives.length === 0 ? { ...problem, suggestion } : { ...problem, suggestion, alternatives };
 }

@@ -22,8 +22,7 @@ import { hasHtmlScript, withUnicodeScripts } from "./htmlScripts";
 import { hasLatexMarkup, latexToPlain } from "./latexFormula";
 import { LAB_ABBREVIATIONS } from "./names/synonyms";
 import { problemAt } from "./problem";
-import { readFormulaSpan } from "./readFormula";
-import { recaseSuggestion } from "./recaseSuggestion";
+import { readableRecasings, readFormulaSpan, withRespellings } from "./readFormula";
 import { readStateSuffix } from "./stateSymbol";
 
 /** Longer input is not one species; the limit also bounds the work one call can do. */
@@ -247,9 +246,10 @@ function readName(text: string, start: number, end: number, spoken?: string): Re
   const normalized = spoken ?? normalizeName(written);
   const match = matchName(normalized);
   if (match === undefined) {
-    const suggestion = suggestName(normalized) ?? formulaSpelling(text, start, end);
     const message = `"${written}" is not a name or formula lonepair knows.`;
-    return { ok: false, problem: problemAt("unknown-name", message, start, end, suggestion) };
+    const problem = problemAt("unknown-name", message, start, end, suggestName(normalized));
+    // "nacl": a lower-case formula typed as a word
+    return { ok: false, problem: problem.suggestion ? problem : withRespellings(problem, readableRecasings(text, start, end)) };
   }
   const value = structureReading(match);
   if (value === undefined) {
@@ -296,13 +296,6 @@ function withStockNumeralCase(name: string): string {
   const close = name.indexOf(")", open);
   if (open < 0 || close < 0) return name;
   return name.slice(0, open) + name.slice(open, close).toUpperCase() + name.slice(close);
-}
-
-/** "nacl" -> "NaCl": a lower-case formula typed as a word. */
-function formulaSpelling(text: string, start: number, end: number): string | undefined {
-  const recased = recaseSuggestion(text, start, end);
-  if (recased === undefined) return undefined;
-  return readFormulaSpan(recased, 0, recased.length, "formula").ok ? recased : undefined;
 }
 
 function withName(result: ReadResult): ReadResult {
