@@ -21,6 +21,7 @@ import {
 } from "./analysis/structuresByFormula";
 import { metalCentreProblem } from "./analysis/metalCentre";
 import { chooseRespelling } from "./analysis/respelling";
+import { oversaturationProblem } from "./analysis/saturation";
 import { dottedAnalysis, metalIonComplexAnalysis, saltAnalysis } from "./analysis/compositeSpecies";
 import { networkMonomerNote, networkSolidProblem } from "./analysis/networkSolids";
 import { connectivitySignature } from "./analysis/connectivitySignature";
@@ -98,7 +99,11 @@ export function analyzeReading(reading: SpeciesReading): AnalysisResult {
   }
   const chosen = chooseSkeletonStructure(reading);
   if (!chosen.ok) {
-    if (chosen.problem.code === "ambiguous-connectivity") return readIntoFormula(reading, chosen.problem);
+    if (chosen.problem.code === "ambiguous-connectivity") {
+      const impossible = oversaturationProblem(reading.formula, reading.composition, reading.charge);
+      if (impossible) return { ok: false, reading, problem: impossible };
+      return readIntoFormula(reading, chosen.problem);
+    }
     return { ok: false, reading, problem: chosen.problem };
   }
   const isomers = isomerNote(reading);
