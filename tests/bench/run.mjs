@@ -13,6 +13,7 @@ import { randomStrings } from "./randomStrings.mjs";
 import { runSmilesAnalysisBench } from "./smilesAnalysis.mjs";
 import { runCoordinatesBench } from "./coordinates.mjs";
 import { runLargeSmilesBench } from "./largeSmiles.mjs";
+import { runProseScanBench } from "./proseScan.mjs";
 import { runRealStyleBench } from "./realStyle.mjs";
 
 const corePath = fileURLToPath(new URL("../../dist/core.js", import.meta.url));
@@ -129,6 +130,7 @@ benchReader();
 missed.push(...(await runSmilesAnalysisBench()));
 missed.push(...runCoordinatesBench());
 missed.push(...runLargeSmilesBench());
+missed.push(...runProseScanBench());
 missed.push(...(await runRealStyleBench()));
 if (missed.length > 0) {
   console.log(`\nmissed: ${missed.join(", ")}`);

@@ -49,6 +49,36 @@ describe("species in prose", () => {
   });
 });
 
+describe("names in prose", () => {
+  // common practice: how lab notes name reagents and solvents; the whole written name is one span
+  it.each([
+    ["⟦Acetone⟧ dried the cell; ⟦ethyl acetate⟧ and ⟦diethyl ether⟧ were kept for the ester run."],
+    ["Eluted with ⟦hexanes⟧/⟦EtOAc⟧ 4:1, then ⟦dichloromethane⟧ and ⟦chloroform⟧."],
+    ["Bay C holds ⟦sulfuric acid⟧, ⟦Nitric acid⟧, ⟦sulphuric acid⟧ (old label) and ⟦hydrochloric acid⟧."],
+    ["The etch bath used ⟦copper(II) sulfate⟧, ⟦iron (III) chloride⟧ and ⟦ferric chloride⟧."],
+    ["⟦Stannous fluoride⟧ and ⟦tin(II) fluoride⟧ are one salt; ⟦copper(II) sulfate pentahydrate⟧ is blue."],
+    ["Store ⟦ammonium chloride⟧ apart from ⟦ammonium nitrate⟧ and ⟦sodium hydroxide⟧."],
+    ["⟦Carbon dioxide⟧ turns lime water milky; rinse with ⟦water⟧."],
+    ["From the shelf: ⟦propan-2-ol⟧, ⟦1,2-dichloroethane⟧, ⟦butan-2-one⟧ and ⟦2-methylpropan-2-ol⟧."],
+    ["Solvents ⟦DCM⟧, ⟦THF⟧, ⟦DMSO⟧, ⟦DMF⟧, ⟦MeOH⟧ and ⟦EtOH⟧; dcm and Thf are not how they are written."],
+    ["⟦Glycerol⟧, ⟦glucose⟧, ⟦citric acid⟧, ⟦aniline⟧, ⟦phenolphthalein⟧ and ⟦silica⟧ gel."],
+    ["Add ⟦bromine⟧ dropwise under ⟦nitrogen⟧; the nitrogen atom keeps its lone pair."],
+    ["Two hydrogen atoms, hydrogen bonds and one fluorine on the ring are atoms, not species."],
+    ["⟦Magnesium⟧ ribbon and ⟦zinc⟧ granules; ⟦sodium⟧ or ⟦potassium⟧ metal under oil."],
+    ["The ⟦nitrate⟧ ion, ⟦chloride⟧ ions and ⟦sulfate⟧; but geranyl acetate and iron cyanide complexes."],
+    ["A fluoride, the oxide layer, an amide and the ether extract are classes, not species."],
+    ["Hexagonal cells, general methods, a chemical signal and alone are words, not names."],
+    ["**⟦Ethanol⟧** and _⟦methanol⟧_, then ⟦anhydrous copper(II) sulfate⟧ as a drying test."],
+  ])("%s", (marked) => {
+    check(marked, "markdown");
+  });
+
+  // common practice: a name that wraps onto the next line is still one name
+  it("reads a name across a line break, but not across a blank line", () => {
+    check("We washed with ⟦ethyl\nacetate⟧ twice; then a methyl\n\n⟦acetate⟧ paragraph.\n", "markdown");
+  });
+});
+
 describe("markdown structure", () => {
   it.each([
     ["front matter keys are skipped, values read", "---\nSF6: ⟦NF3⟧\ngases: [⟦ClF3⟧, ⟦F2⟧]\n---\nBody ⟦SF4⟧.\n"],

@@ -36,7 +36,15 @@ const TRADE_NAMES: readonly Row[] = [
   ["table salt", "NaCl"], ["baking soda", "NaHCO3"], ["washing soda", "Na2CO3"], ["caustic soda", "NaOH"],
   ["caustic potash", "KOH"], ["quicklime", "CaO"], ["slaked lime", "CaO2H2"], ["milk of magnesia", "MgO2H2"],
   ["epsom salt", "MgSO11H14"], ["epsom salts", "MgSO11H14"], ["silica", "SiO2"], ["alumina", "Al2O3"],
-  ["laughing gas", "N2O"],
+  ["laughing gas", "N2O"], ["alum", "KAlS2O20H24"], ["potassium alum", "KAlS2O20H24"],
+  ["chrome alum", "KCrS2O20H24"], ["borax", "Na2B4O17H20"], ["gypsum", "CaSO6H4"],
+  ["sulfurous anhydride", "SO2"],
+];
+
+// from memory: mineral names and their formulas (a mineralogy handbook)
+const MINERALS: readonly Row[] = [
+  ["calcite", "CaCO3"], ["halite", "NaCl"], ["pyrite", "FeS2"], ["sphalerite", "ZnS"],
+  ["galena", "PbS"],
 ];
 
 // from memory: Greenwood & Earnshaw, Chemistry of the Elements (quartz is SiO2; diamond and
@@ -73,6 +81,8 @@ const ORGANIC: readonly Row[] = [
   ["n,n-dimethylformamide", "C3H7NO"], ["acetamide", "C2H5NO"], ["formamide", "CH3NO"], ["isobutane", "C4H10"],
   ["2-methylpropane", "C4H10"], ["isopentane", "C5H12"], ["2-methylbutane", "C5H12"], ["neopentane", "C5H12"],
   ["2,2-dimethylpropane", "C5H12"], ["isooctane", "C8H18"], ["2,2,4-trimethylpentane", "C8H18"], ["hexanes", "C6H14"],
+  ["malonic acid", "C3H4O4"], ["succinic acid", "C4H6O4"], ["malic acid", "C4H6O5"], ["salicylate", "C7H5O3", -1],
+  ["methyl orange", "C14H14N3NaO3S"], ["potassium hydrogen phthalate", "C8H5KO4"],
 ];
 
 // from memory: standard tables of common polyatomic ions (general chemistry nomenclature)
@@ -92,10 +102,16 @@ const IONS: readonly Row[] = [
   ["hexafluorophosphate", "PF6", -1], ["hexafluorosilicate", "SiF6", -2], ["hexafluoroantimonate", "SbF6", -1],
   ["tetrachloroaluminate", "AlCl4", -1], ["tetrachloroiodate", "ICl4", -1], ["arsenate", "AsO4", -3],
   ["selenate", "SeO4", -2], ["silicate", "SiO3", -2], ["permanganate", "MnO4", -1], ["manganate", "MnO4", -2],
-  ["chromate", "CrO4", -2], ["dichromate", "Cr2O7", -2],
+  ["chromate", "CrO4", -2], ["dichromate", "Cr2O7", -2], ["hydrogensulfate", "HSO4", -1],
+  ["hydrogensulfite", "HSO3", -1], ["hydrogenphosphate", "HPO4", -2], ["dihydrogenphosphate", "H2PO4", -1],
+  ["hydrogencarbonate", "HCO3", -1], ["hydrogensulfide", "HS", -1], ["bisulfide", "HS", -1], ["disulfide", "S2", -2],
+  ["metabisulfite", "S2O5", -2], ["disulfite", "S2O5", -2], ["peroxodisulfate", "S2O8", -2], ["persulfate", "S2O8", -2],
+  ["pyrophosphate", "P2O7", -4], ["tetraborate", "B4O7", -2], ["tetrahydroxoaluminate", "AlO4H4", -1],
+  ["molybdate", "MoO4", -2], ["hexacyanoferrate(iii)", "FeC6N6", -3], ["ferricyanide", "FeC6N6", -3],
+  ["hexacyanoferrate(ii)", "FeC6N6", -4], ["ferrocyanide", "FeC6N6", -4],
 ];
 
-const VOCABULARY: readonly Row[] = [...INORGANIC, ...TRADE_NAMES, ...NETWORK_SOLIDS, ...ORGANIC, ...IONS];
+const VOCABULARY: readonly Row[] = [...INORGANIC, ...TRADE_NAMES, ...NETWORK_SOLIDS, ...MINERALS, ...ORGANIC, ...IONS];
 
 /** "C2H4O2" -> {C: 2, H: 4, O: 2}, in any element order. */
 function parseFormula(formula: string): Map<string, number> {
@@ -183,6 +199,13 @@ describe("salt names built from cation and anion vocabularies", () => {
     ["potassium permanganate", "KMnO4", "potassium permanganate"],
     ["sodium hydrogen carbonate", "NaHCO3", "sodium hydrogen carbonate"],
     ["magnesium sulfate heptahydrate", "MgSO11H14", "magnesium sulfate heptahydrate"],
+    ["anhydrous copper(II) sulfate", "CuSO4", "copper(II) sulfate"],
+    ["sodium hydrogencarbonate", "NaHCO3", "sodium hydrogencarbonate"],
+    ["sodium metabisulfite", "Na2S2O5", "sodium metabisulfite"],
+    ["potassium hexacyanoferrate(III)", "K3FeC6N6", "potassium hexacyanoferrate(III)"],
+    ["potassium ferrocyanide", "K4FeC6N6", "potassium ferrocyanide"],
+    ["iron(III)", "Fe", "iron(III) ion"],
+    ["hydrogen ion", "H", "hydrogen ion"],
   ])("%s is %s, shown as %s", (written, formula, shown) => {
     const reading = read(written);
     expect(sorted(compositionOf(reading))).toEqual(sorted(parseFormula(formula)));
@@ -229,7 +252,8 @@ describe("substitutive and functional-class names of simple organic compounds", 
     ["2-chloro-2-methylpropane", "C4H9Cl"], ["chloroethene", "C2H3Cl"], ["vinyl chloride", "C2H3Cl"],
     ["methyl iodide", "CH3I"], ["ethyl methyl ether", "C3H8O"], ["chlorobenzene", "C6H5Cl"],
     ["ethylbenzene", "C8H10"], ["1,4-dimethylbenzene", "C8H10"], ["1,3-dinitrobenzene", "C6H4N2O4"],
-    ["benzyl alcohol", "C7H8O"], ["3-methylpentane", "C6H14"], ["2,3-dimethylbutane", "C6H14"],
+    ["benzyl alcohol", "C7H8O"], ["isoamyl acetate", "C7H14O2"], ["octyl acetate", "C10H20O2"],
+    ["methyl salicylate", "C8H8O3"], ["ethyl benzoate", "C9H10O2"], ["3-methylpentane", "C6H14"], ["2,3-dimethylbutane", "C6H14"],
   ])("%s is %s, and its structure analyses", (name, formula) => {
     const reading = read(name);
     expect(reading.smiles, `a SMILES for "${name}"`).toBeDefined();
@@ -258,6 +282,7 @@ describe("abbreviations of the solvent shelf", () => {
     ["EtOH", "ethanol"], ["MeOH", "methanol"], ["DCM", "dichloromethane"], ["THF", "tetrahydrofuran"],
     ["DMSO", "dimethyl sulfoxide"], ["DMF", "dimethylformamide"], ["EtOAc", "ethyl acetate"], ["MeCN", "acetonitrile"],
     ["AcOH", "acetic acid"], ["Et2O", "diethyl ether"], ["EDTA", "ethylenediaminetetraacetic acid"],
+    ["KHP", "potassium hydrogen phthalate"],
   ])("%s reads as %s, exactly as written", (written, name) => {
     const reading = read(written);
     expect(reading.name).toBe(name);

@@ -13,7 +13,7 @@ import { mhchemSpanEnd, scanMhchemBody } from "./mhchemSpan";
 import { isPartOfCode, isWordContext } from "./proseContext";
 import { isConfidentToken, needsCalmContext, shapeOf } from "./proseTokenRules";
 import { isOccurrence, smilesAt, smilesOccurrence } from "./smilesSpan";
-import { mayBeOneWordName, mayEndName } from "./speciesNames";
+import { newNameScanState, scanNamesInChunk, type NameScanState } from "./proseNames";
 import { emptySink, memoisedReader, occurrenceAt, unreadableAt, type ScanSink, type SpeciesReader } from "./speciesReader";
 import type { SpeciesOccurrence } from "./types";
 
@@ -36,20 +36,12 @@ function shifted(occurrence: SpeciesOccurrence, offset: number): SpeciesOccurren
   return { ...occurrence, range, reading: { ...occurrence.reading, range } };
 }
 
-interface Word {
-  readonly start: number;
-  readonly end: number;
-  readonly lower: string;
-  /** Nothing but whitespace may follow it inside a name ("sulfur, tetrafluoride" is two things). */
-  readonly open: boolean;
-}
-
 interface ProseScan {
   readonly text: string;
   readonly end: number;
   readonly sink: ScanSink;
   readonly read: SpeciesReader;
-  previousWord: Word | undefined;
+  readonly names: NameScanState;
   /** Backtick runs known to have no closing run further on, by length (keeps the scan linear). */
   readonly unclosedTicks: Set<number>;
   /** Where scanning goes on after a mention that ran past its chunk ("CuSO4 · 5H2O"). */
@@ -63,7 +55,7 @@ interface ProseScan {
 /** Scans `text[start, end)` and adds what it finds to `sink`, with offsets into `text`. */
 export function scanProse(text: string, start: number, end: number, sink: ScanSink, read: SpeciesReader): void {
   const scan: ProseScan = {
-    text, end, sink, read, previousWord: undefined, unclosedTicks: new Set(), resumeAt: start, seriesMemo: new Map(), smilesMemo: new Map(),
+    text, end, sink, read, names: newNameScanState(), unclosedTicks: new Set(), resumeAt: start, seriesMemo: new Map(), smilesMemo: new Map(),
   };
   let index = start;
   while (index < end) {
@@ -91,7 +83,6 @@ export function scanProse(text: string, start: number, end: number, sink: ScanSi
       // An unclosed comment hides the rest of the text.
       const close = text.indexOf("-->", index + 4);
       index = close < 0 || close >= end ? end : close + 3;
-      scan.previousWord = undefined;
       continue;
     }
     let chunkEnd = index + 1;
@@ -104,10 +95,7 @@ export function scanProse(text: string, start: number, end: number, sink: ScanSi
     }
     scanChunk(scan, index, chunkEnd);
     index = chunkEnd;
-    if (scan.resumeAt > index) {
-      index = scan.resumeAt;
-      scan.previousWord = undefined;
-    }
+    if (scan.resumeAt > index) index = scan.resumeAt;
   }
 }
 
@@ -121,7 +109,6 @@ function codeSpan(scan: ProseScan, open: number): number {
   let ticksEnd = open;
   while (ticksEnd < end && text.charCodeAt(ticksEnd) === 0x60) ticksEnd++;
   const length = ticksEnd - open;
-  scan.previousWord = undefined;
   if (scan.unclosedTicks.has(length)) return ticksEnd;
   // Search only this stretch of prose: a span never closes in a later paragraph.
   const stretch = text.slice(ticksEnd, end);
@@ -184,7 +171,6 @@ function unmarkedSmiles(scan: ProseScan, start: number, end: number): SpeciesOcc
 /** A `\ce{...}` span: every piece is chemistry, so every readable piece counts. */
 function mhchemSpan(scan: ProseScan, open: number): number {
   const { text, end } = scan;
-  scan.previousWord = undefined;
   const spanEnd = mhchemSpanEnd(text, open, end);
   if (spanEnd < 0) return open + 4;
   scanMhchemBody(text, open + 4, spanEnd - 1, scan.read, scan.sink);
@@ -207,79 +193,20 @@ const URL_OR_MAIL = /:\/\/|^[<(\["']*www\.|[A-Za-z0-9._%+-]@[A-Za-z0-9-]+\.[A-Za
 /** One whitespace-free chunk of prose. */
 function scanChunk(scan: ProseScan, start: number, end: number): void {
   const { text } = scan;
-  if (end - start > MAX_CHUNK) {
-    scan.previousWord = undefined;
-    return;
-  }
+  if (end - start > MAX_CHUNK) return;
   const chunk = text.slice(start, end);
   // A markdown link: the text before "](" is prose, the destination after it is not.
   const link = chunk.indexOf("](");
   if (link >= 0) {
     scanChunk(scan, start, start + link + 1);
-    scan.previousWord = undefined;
     return;
   }
-  if (URL_OR_MAIL.test(chunk)) {
-    scan.previousWord = undefined;
-    return;
-  }
-  scanWord(scan, start, end);
+  if (URL_OR_MAIL.test(chunk)) return;
+  // The later words of a name already found are part of it, formulas included.
+  if (start < scan.names.nameEnd) return;
+  scanNamesInChunk(text, start, end, scan.end, scan.read, scan.sink, scan.names);
+  if (start < scan.names.nameEnd) return;
   scanFormulas(scan, start, end);
-}
-
-/** Punctuation that may sit before a word: ( [ " ' * _ < and curly quotes. */
-function isLeadingPunctuation(code: number): boolean {
-  return code === 0x28 || code === 0x5b || code === 0x22 || code === 0x27 || code === 0x2a || code === 0x5f || code === 0x3c || code === 0x201c || code === 0x2018;
-}
-
-/** Punctuation that may sit after a word: ) ] " ' * _ , . ; : ! ? > and curly quotes. */
-function isTrailingPunctuation(code: number): boolean {
-  return (
-    code === 0x29 || code === 0x5d || code === 0x22 || code === 0x27 || code === 0x2a || code === 0x5f || code === 0x2c ||
-    code === 0x2e || code === 0x3b || code === 0x3a || code === 0x21 || code === 0x3f || code === 0x3e || code === 0x201d || code === 0x2019
-  );
-}
-
-function isLetter(code: number): boolean {
-  return (code >= 0x41 && code <= 0x5a) || (code >= 0x61 && code <= 0x7a);
-}
-
-/** Names: a word ending "-ide/-ate/-ite/-ium" after another word, or a known one-word name. */
-function scanWord(scan: ProseScan, start: number, end: number): void {
-  const { text } = scan;
-  let wordStart = start;
-  while (wordStart < end && isLeadingPunctuation(text.charCodeAt(wordStart))) wordStart++;
-  let wordEnd = end;
-  while (wordEnd > wordStart && isTrailingPunctuation(text.charCodeAt(wordEnd - 1))) wordEnd--;
-  let letters = wordEnd > wordStart;
-  for (let index = wordStart; letters && index < wordEnd; index++) letters = isLetter(text.charCodeAt(index));
-  if (!letters) {
-    scan.previousWord = undefined;
-    return;
-  }
-  let open = true;
-  for (let index = wordEnd; index < end; index++) {
-    const code = text.charCodeAt(index);
-    // Emphasis may close around a name; any other punctuation ends it.
-    if (code !== 0x2a && code !== 0x5f) open = false;
-  }
-  const word: Word = { start: wordStart, end: wordEnd, lower: text.slice(wordStart, wordEnd).toLowerCase(), open };
-  const previous = scan.previousWord;
-  scan.previousWord = word;
-  if (word.lower.length < 5) return;
-  if (mayEndName(word.lower)) {
-    if (previous && previous.open && wordStart === start && !/\n[ \t]*\n/.test(text.slice(previous.end, word.start))) {
-      if (tryName(scan, previous.start, word.end, `${previous.lower} ${word.lower}`)) return;
-    }
-  }
-  if (mayBeOneWordName(word.lower)) tryName(scan, word.start, word.end, word.lower);
-}
-
-function tryName(scan: ProseScan, start: number, end: number, spoken: string): boolean {
-  const result = scan.read(spoken);
-  if (!result.ok || result.value.notation !== "name") return false;
-  scan.sink.occurrences.push(occurrenceAt(result.value, scan.text.slice(start, end), start, "name"));
-  return true;
 }
 
 /** Formula tokens inside one chunk, e.g. "(SF4)," or "NF3/SF6" or "NH4+". */

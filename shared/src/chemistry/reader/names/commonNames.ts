@@ -92,4 +92,7 @@ export const COMMON_NAMES: readonly (readonly [name: string, formula: string])[]
   ["chromic acid", "H2CrO4"],
   ["stibine", "SbH3"],
   ["bismuthine", "BiH3"],
+  ["potassium alum", "KAl(SO4)2·12H2O"],
+  ["alum", "KAl(SO4)2·12H2O"],
+  ["chrome alum", "KCr(SO4)2·12H2O"],
 ];

@@ -39,8 +39,16 @@ export interface CompoundNameReading {
 export function formulaForCompoundName(words: readonly string[]): CompoundNameReading | undefined {
   if (words.length < 2) return undefined;
   const cation = readCationWord(words[0]);
-  const anion = readAnionWords(words.slice(1));
-  if (cation === undefined || anion === undefined) return undefined;
+  if (cation === undefined) return undefined;
+  // "disulfide" is an ion (S2^2-) in "iron(ii) disulfide" and two sulfides in "carbon disulfide"
+  for (const anion of readAnionWords(words.slice(1))) {
+    const reading = compoundOf(cation, anion, words);
+    if (reading !== undefined) return reading;
+  }
+  return undefined;
+}
+
+function compoundOf(cation: NamedPart, anion: NamedPart, words: readonly string[]): CompoundNameReading | undefined {
   const anionCharge = anion.charge as number;
   const systematic = (formula: string | undefined, stockWord = cation.stockWord): CompoundNameReading | undefined => {
     if (formula === undefined) return undefined;
@@ -121,19 +129,22 @@ function cationPart(cation: MetalCation | undefined): NamedPart | undefined {
   return { body: cation.body, singleElement: cation.singleAtom, count: 1, prefixed: false, charge: cation.charge, element: cation.element };
 }
 
-function readAnionWords(words: readonly string[]): NamedPart | undefined {
+/** Every reading of the anion words: a listed ion first, then a prefixed "-ide" root. */
+function readAnionWords(words: readonly string[]): NamedPart[] {
+  const readings: NamedPart[] = [];
   const ion = ionByName(words.join(" "));
-  if (ion !== undefined) {
-    return ion.charge < 0 ? { body: ion.body, singleElement: false, count: 1, prefixed: false, charge: ion.charge } : undefined;
+  if (ion !== undefined && ion.charge < 0) {
+    readings.push({ body: ion.body, singleElement: false, count: 1, prefixed: false, charge: ion.charge });
   }
-  if (words.length !== 1) return undefined;
+  if (words.length !== 1) return readings;
   for (const reading of prefixReadings(words[0])) {
     const root = anionRootByName(reading.rest);
     if (root !== undefined) {
-      return { body: root.symbol, singleElement: true, count: reading.count, prefixed: reading.prefixed, charge: root.charge };
+      readings.push({ body: root.symbol, singleElement: true, count: reading.count, prefixed: reading.prefixed, charge: root.charge });
+      break;
     }
   }
-  return undefined;
+  return readings;
 }
 
 /** The one charge a metal takes in nearly all its salts, where there is one. */

@@ -50,8 +50,12 @@ export function normalizeName(text: string): string {
 export function matchName(written: string): NameMatch | undefined {
   // British and older spellings of sulfur: one vocabulary for both
   const name = written.includes("sulph") ? written.replaceAll("sulph", "sulf") : written;
+  // "anhydrous copper(ii) sulfate" is the salt without its water of crystallisation
+  if (name.startsWith("anhydrous ")) return matchName(name.slice("anhydrous ".length));
   const direct = listedOrRuleName(name);
   if (direct !== undefined) return direct;
+  // "iron(iii)" alone is the ion
+  if (name.endsWith(")") && !name.includes(" ")) return monatomicCation(name);
   const hydrate = hydrateName(name);
   if (hydrate !== undefined) return hydrate;
   for (const suffix of [" ion", " anion", " cation"]) {
@@ -82,6 +86,9 @@ function listedOrRuleName(name: string): NameMatch | undefined {
   if (ion !== undefined) return { formula: ion.body + chargeText(ion.charge), name, listed: true };
   const root = anionRootByName(name);
   if (root !== undefined) return { formula: root.symbol + chargeText(root.charge), name, listed: true };
+  // an element named as a substance ("zinc" granules, "sulfur" in an inventory)
+  const element = elementByName(name);
+  if (element !== undefined && !name.includes(" ")) return { formula: element.symbol, name: element.name.toLowerCase(), listed: true };
   const compound = formulaForCompoundName(name.split(" "));
   if (compound !== undefined) return { formula: compound.formula, name: compound.systematicName ?? name, listed: false };
   const smiles = smilesForOrganicName(name);
@@ -118,7 +125,7 @@ function monatomicCation(name: string): NameMatch | undefined {
     return { formula: element.symbol + chargeText(charge), name: `${name} ion`, listed: false };
   }
   const element = elementByName(name);
-  const charge = element === undefined ? undefined : usualCationCharge(element);
+  const charge = element?.symbol === "H" ? 1 : element === undefined ? undefined : usualCationCharge(element);
   if (element === undefined || charge === undefined) return undefined;
   return { formula: element.symbol + chargeText(charge), name: `${name} ion`, listed: false };
 }

@@ -49,6 +49,13 @@ const ROWS: readonly (readonly [name: string, smiles: string, formula?: string])
   ["acetyl chloride", "CC(Cl)=O", "CH3COCl"],
   ["ethylenediaminetetraacetic acid", "OC(=O)CN(CC(O)=O)CCN(CC(O)=O)CC(O)=O"],
   ["alanine", "CC(N)C(O)=O", "CH3CH(NH2)COOH"],
+  ["malonic acid", "OC(=O)CC(O)=O", "HOOCCH2COOH"],
+  ["succinic acid", "OC(=O)CCC(O)=O", "HOOCCH2CH2COOH"],
+  ["malic acid", "OC(=O)CC(O)C(O)=O"],
+  ["salicylate", "Oc1ccccc1C(=O)[O-]"],
+  // indicators and titration standards, as the salts sold
+  ["methyl orange", "CN(C)c1ccc(cc1)N=Nc1ccc(cc1)S(=O)(=O)[O-].[Na+]"],
+  ["potassium hydrogen phthalate", "OC(=O)c1ccccc1C(=O)[O-].[K+]"],
   // alcohols, ethers, amines and amides of the solvent shelf
   ["glycerol", "OCC(O)CO", "HOCH2CH(OH)CH2OH"],
   ["ethylene glycol", "OCCO", "HOCH2CH2OH"],

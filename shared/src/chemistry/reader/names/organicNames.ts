@@ -35,6 +35,13 @@ const ALKYL_GROUPS: ReadonlyMap<string, string> = new Map([
   ["t-butyl", "C(C)(C)C"],
   ["pentyl", "CCCCC"],
   ["hexyl", "CCCCCC"],
+  ["heptyl", "CCCCCCC"],
+  ["octyl", "CCCCCCCC"],
+  ["nonyl", "CCCCCCCCC"],
+  ["decyl", "CCCCCCCCCC"],
+  ["amyl", "CCCCC"],
+  ["isoamyl", "CCC(C)C"],
+  ["isopentyl", "CCC(C)C"],
   ["vinyl", "C=C"],
   ["allyl", "CC=C"],
   ["phenyl", "c9ccccc9"],
@@ -64,6 +71,12 @@ const HALIDES: ReadonlyMap<string, string> = new Map([
   ["chloride", "Cl"],
   ["bromide", "Br"],
   ["iodide", "I"],
+]);
+
+/** Acyl groups of aromatic acids whose esters keep the old name, written from the carbonyl carbon. */
+const AROMATIC_ACYL_GROUPS: ReadonlyMap<string, string> = new Map([
+  ["benzoate", "c1ccccc1"],
+  ["salicylate", "c1ccccc1O"],
 ]);
 
 /** Older acid names whose esters keep them: "ethyl acetate" is ethyl ethanoate. */
@@ -103,6 +116,8 @@ export function smilesForOrganicName(name: string): string | undefined {
     if (alkyl === undefined) return undefined;
     const trivial = TRIVIAL_ACID_STEMS.get(last);
     if (trivial !== undefined) return chainSmiles(trivial, false, [], [], [{ position: 1, suffix: "oate" }], alkyl);
+    const aromatic = AROMATIC_ACYL_GROUPS.get(last);
+    if (aromatic !== undefined) return `C(=O)(O${alkyl})${aromatic}`;
     return last.endsWith("oate") ? substitutive(last, alkyl) : undefined;
   }
   if (words.length === 3 && last === "ether") {

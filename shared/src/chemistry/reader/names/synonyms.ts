@@ -17,7 +17,6 @@ export const NAME_SYNONYMS: ReadonlyMap<string, string> = new Map([
   ["epsom salt", "magnesium sulfate heptahydrate"],
   ["epsom salts", "magnesium sulfate heptahydrate"],
   ["silica", "silicon dioxide"],
-  ["quartz", "silicon dioxide"],
   ["alumina", "aluminium oxide"],
   ["laughing gas", "nitrous oxide"],
   ["methylene chloride", "dichloromethane"],
@@ -59,6 +58,14 @@ export const NAME_SYNONYMS: ReadonlyMap<string, string> = new Map([
   ["2-methylbutane", "isopentane"],
   ["2,2-dimethylpropane", "neopentane"],
   ["2,2,4-trimethylpentane", "isooctane"],
+  ["sulfurous anhydride", "sulfur dioxide"],
+  ["borax", "sodium tetraborate decahydrate"],
+  ["gypsum", "calcium sulfate dihydrate"],
+  ["calcite", "calcium carbonate"],
+  ["halite", "sodium chloride"],
+  ["pyrite", "iron(ii) disulfide"],
+  ["sphalerite", "zinc sulfide"],
+  ["galena", "lead(ii) sulfide"],
 ]);
 
 /**
@@ -77,4 +84,5 @@ export const LAB_ABBREVIATIONS: ReadonlyMap<string, string> = new Map([
   ["AcOH", "acetic acid"],
   ["Et2O", "diethyl ether"],
   ["EDTA", "ethylenediaminetetraacetic acid"],
+  ["KHP", "potassium hydrogen phthalate"],
 ]);
