@@ -52,8 +52,8 @@ describe("HTML sub- and superscripts", () => {
 describe("LaTeX math outside mhchem", () => {
   // common practice: how LaTeX-minded writers type formulas in markdown
   it.each([
-    ["Ferricyanide, $\\mathrm{⟦Fe(CN)_{6}^{3-}⟧}$, stains blue.", "markdown"],
-    ["Dry the gas over silica to remove $⟦H_2O⟧$ before the cell.", "markdown"],
+    ["⟦Ferricyanide⟧, $\\mathrm{⟦Fe(CN)_{6}^{3-}⟧}$, stains blue.", "markdown"],
+    ["Dry the gas over ⟦silica⟧ to remove $⟦H_2O⟧$ before the cell.", "markdown"],
     ["Combustion: $2⟦H_2⟧ + ⟦O_2⟧ \\rightarrow 2⟦H_2O⟧$.", "markdown"],
     ["The cation \\(⟦NH_4^+⟧\\) and the anion \\(⟦SO_4^{2-}⟧\\).", "markdown"],
     ["Nested: $\\ce{⟦SO4^2-⟧ + ⟦Ba^2+⟧ -> ⟦BaSO4⟧ v}$ in the notes.", "markdown"],
@@ -107,7 +107,7 @@ describe("formula-shaped text that is not a species", () => {
   it.each([
     ["Alcohols R–OH and anilines Ar–NH₂ differ; ketones R–CO–R are neutral.", "plaintext"],
     ["The ring carries the Ar–OH and the –COOCH₃ groups ortho to each other.", "markdown"],
-    ["A nitro group (NO₂) withdraws electrons, as does the NO₂ group of nitrobenzene; ⟦NO₂⟧ gas is brown.", "markdown"],
+    ["A nitro group (NO₂) withdraws electrons, as does the NO₂ group of ⟦nitrobenzene⟧; ⟦NO₂⟧ gas is brown.", "markdown"],
     ["¹H NMR: δ 4.12 (q, J = 7.1 Hz, 2H, OCH₂), 2.05 (s, 3H, COCH₃).", "markdown"],
     ["NF-κB signalling was unaffected by the wash.", "markdown"],
     ["Brackets are machined from Ti6Al4V bar stock.", "plaintext"],

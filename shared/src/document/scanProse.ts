@@ -179,7 +179,6 @@ function mhchemSpan(scan: ProseScan, open: number): number {
 
 /** A LaTeX math span: species typed in math, or prose around a nested `\ce{...}`. */
 function mathSpan(scan: ProseScan, math: MathSpan): number {
-  scan.previousWord = undefined;
   if (scan.text.slice(math.contentStart, math.contentEnd).includes("\\ce{")) {
     scanProse(scan.text, math.contentStart, math.contentEnd, scan.sink, scan.read);
   } else {
@@ -207,6 +206,11 @@ function scanChunk(scan: ProseScan, start: number, end: number): void {
   scanNamesInChunk(text, start, end, scan.end, scan.read, scan.sink, scan.names);
   if (start < scan.names.nameEnd) return;
   scanFormulas(scan, start, end);
+}
+
+/** Punctuation that may sit before a word: ( [ " ' * _ < and curly quotes. */
+function isLeadingPunctuation(code: number): boolean {
+  return code === 0x28 || code === 0x5b || code === 0x22 || code === 0x27 || code === 0x2a || code === 0x5f || code === 0x3c || code === 0x201c || code === 0x2018;
 }
 
 /** Formula tokens inside one chunk, e.g. "(SF4)," or "NF3/SF6" or "NH4+". */
