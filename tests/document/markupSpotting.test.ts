@@ -150,7 +150,7 @@ describe("data columns", () => {
 describe("code spans and reStructuredText", () => {
   // common practice: how package READMEs and notes write SMILES, links, math roles and code
   it.each([
-    ["Acetic acid is `⟦CC(=O)O⟧` and phenol `⟦c1ccc(cc1)O⟧`; `smiles:⟦CCO⟧` is marked.", "markdown"],
+    ["⟦Acetic acid⟧ is `⟦CC(=O)O⟧` and ⟦phenol⟧ `⟦c1ccc(cc1)O⟧`; `smiles:⟦CCO⟧` is marked.", "markdown"],
     ["Code such as `config`, `H3PO4`, `foo()`, `n/a`, `x = 1`, `CO` and `C1CC` is not offered.", "markdown"],
     ["Polyprotic acids (:math:`\\mathrm{⟦H_3PO_4⟧}`) lose protons in steps.", "plaintext"],
     ["See `the note on dissolved ⟦CO2⟧ <https://docs.kestrel-ridge.example/carbonate.html>`_ first.", "plaintext"],
