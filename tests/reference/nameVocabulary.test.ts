@@ -33,7 +33,7 @@ const INORGANIC: readonly Row[] = [
 
 // from memory: everyday and trade names of laboratory salts and oxides (school chemical inventories)
 const TRADE_NAMES: readonly Row[] = [
-  ["table salt", "NaCl"], ["baking soda", "NaHCO3"], ["washing soda", "Na2CO3"], ["caustic soda", "NaOH"],
+  ["table salt", "NaCl"], ["baking soda", "NaHCO3"], ["washing soda", "Na2CO13H20"], ["caustic soda", "NaOH"],
   ["caustic potash", "KOH"], ["quicklime", "CaO"], ["slaked lime", "CaO2H2"], ["milk of magnesia", "MgO2H2"],
   ["epsom salt", "MgSO11H14"], ["epsom salts", "MgSO11H14"], ["silica", "SiO2"], ["alumina", "Al2O3"],
   ["laughing gas", "N2O"], ["alum", "KAlS2O20H24"], ["potassium alum", "KAlS2O20H24"],

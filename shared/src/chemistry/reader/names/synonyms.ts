@@ -8,7 +8,7 @@
 export const NAME_SYNONYMS: ReadonlyMap<string, string> = new Map([
   ["table salt", "sodium chloride"],
   ["baking soda", "sodium hydrogen carbonate"],
-  ["washing soda", "sodium carbonate"],
+  ["washing soda", "sodium carbonate decahydrate"],
   ["caustic soda", "sodium hydroxide"],
   ["caustic potash", "potassium hydroxide"],
   ["quicklime", "calcium oxide"],
