@@ -137,7 +137,8 @@ export type LoneNameKind =
 
 // common practice: words that name a family of compounds as often as one species; of the bare
 // "-ide" anions only the halides and sulfide are usual as dissolved ions ("chloride by titration")
-const CLASS_WORDS: ReadonlySet<string> = new Set(["amide", "peroxide", "ether", "hydride", "superoxide"]);
+// and materials named in lab notes as tools ("a quartz cuvette", "the diamond ATR crystal")
+const CLASS_WORDS: ReadonlySet<string> = new Set(["amide", "peroxide", "ether", "hydride", "superoxide", "quartz", "diamond", "graphite"]);
 const LONE_ANION_ROOTS: ReadonlySet<string> = new Set(["fluoride", "chloride", "bromide", "iodide", "sulfide", "sulphide"]);
 
 /** What a lower-case word means alone, or undefined when it is no name. */

@@ -63,6 +63,7 @@ export const NAME_SYNONYMS: ReadonlyMap<string, string> = new Map([
   ["gypsum", "calcium sulfate dihydrate"],
   ["calcite", "calcium carbonate"],
   ["halite", "sodium chloride"],
+  ["quartz", "silicon dioxide"],
   ["pyrite", "iron(ii) disulfide"],
   ["sphalerite", "zinc sulfide"],
   ["galena", "lead(ii) sulfide"],
