@@ -227,8 +227,8 @@ function polarityFromKnownSymmetry(pointGroup: string, charge: number, model: Po
   return {
     polar,
     reason: polar
-      ? `the molecule has ${pointGroup} symmetry, which allows a permanent dipole`
-      : `the molecule has ${pointGroup} symmetry, so its bond dipoles cancel`,
+      ? `the real molecule has ${pointGroup} symmetry, which allows a permanent dipole`
+      : `the real molecule has ${pointGroup} symmetry, so its bond dipoles cancel (whatever symmetry the model coordinates reach)`,
     dipoleEstimate: polar ? model.dipoleEstimate : 0,
   };
 }
