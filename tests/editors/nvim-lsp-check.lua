@@ -67,14 +67,23 @@ local function hover_text(contents)
   return table.concat(parts, "\n")
 end
 
-local function hover_on(client, bufnr, word)
+-- Puts the cursor on the first whole-word match of `word`; answers the match, or nil.
+local function cursor_on(word)
   vim.api.nvim_win_set_cursor(0, { 1, 0 })
   -- \V: the word is literal; \C: case matters (Co is not CO); \< \>: whole words only.
   local found = vim.fn.searchpos("\\V\\C\\<" .. word .. "\\>", "cW")
   if found[1] == 0 then
-    return { word = word, found = false }
+    return nil
   end
   vim.api.nvim_win_set_cursor(0, { found[1], found[2] - 1 })
+  return found
+end
+
+local function hover_on(client, bufnr, word)
+  local found = cursor_on(word)
+  if not found then
+    return { word = word, found = false }
+  end
   local params = vim.lsp.util.make_position_params(0, client.offset_encoding)
   local response, err = client.request_sync("textDocument/hover", params, timeout_ms, bufnr)
   local entry = {
@@ -99,12 +108,9 @@ end
 -- The custom request an editor sends to export coordinates: position parameters as Neovim
 -- builds them, plus the format (the README's example does the same).
 local function coordinates_of(client, bufnr, word)
-  vim.api.nvim_win_set_cursor(0, { 1, 0 })
-  local found = vim.fn.searchpos("\\V\\C\\<" .. word .. "\\>", "cW")
-  if found[1] == 0 then
+  if not cursor_on(word) then
     return { word = word, found = false }
   end
-  vim.api.nvim_win_set_cursor(0, { found[1], found[2] - 1 })
   local params = vim.lsp.util.make_position_params(0, client.offset_encoding)
   params.format = "xyz"
   local response, err = client.request_sync("lonepair/coordinates", params, timeout_ms, bufnr)
