@@ -12,6 +12,7 @@ import { createReadStream, createWriteStream, existsSync, mkdtempSync, rmSync, s
 import { tmpdir } from "node:os";
 import { join } from "node:path";
 import { fileURLToPath } from "node:url";
+import { CYLINDER_HEADER, cylinderRow } from "./cylinderRows.mjs";
 
 const cliPath = fileURLToPath(new URL("../../dist/cli.js", import.meta.url));
 if (!existsSync(cliPath)) {
@@ -24,24 +25,8 @@ const AIM_PEAK_MEGABYTES = 200;
 const strict = process.argv.includes("--strict");
 const missed = [];
 
-// A cylinder store's export: mostly correct rows, one mistake in every 997.
-const SPECIES = [
-  ["sulfur hexafluoride", "SF6", 48, 0, "octahedral", "nonpolar"],
-  ["nitrogen trifluoride", "NF3", 26, 1, "trigonal pyramidal", "polar"],
-  ["chlorine trifluoride", "ClF3", 28, 2, "T-shaped", "polar"],
-  ["boron trifluoride", "BF3", 24, 0, "trigonal planar", "nonpolar"],
-  ["ammonia", "NH3", 8, 1, "trigonal pyramidal", "polar"],
-  ["carbon dioxide", "CO2", 16, 0, "linear", "nonpolar"],
-  ["sulfur dioxide", "SO2", 18, 1, "bent", "polar"],
-  ["xenon tetrafluoride", "XeF4", 36, 2, "square planar", "nonpolar"],
-];
-const HEADER = "id,species,formula,valence electrons,lone pairs on central atom,molecular geometry,polarity,supplier lot\n";
-
-function row(index) {
-  const [name, formula, electrons, lonePairs, shape, polarity] = SPECIES[index % SPECIES.length];
-  const written = index % 997 === 5 ? electrons - 2 : electrons;
-  return `CYL-${index},${name},${formula},${written},${lonePairs},${shape},${polarity},KR-${String(index % 9000).padStart(4, "0")}\n`;
-}
+const HEADER = `${CYLINDER_HEADER}\n`;
+const row = (index) => `${cylinderRow(index)}\n`;
 
 /** Writes a CSV of `rows` rows, or of about `bytes` bytes; resolves to the number of rows. */
 async function generate(path, { rows, bytes }) {

@@ -16,6 +16,7 @@ import {
   StreamMessageWriter,
   createProtocolConnection,
 } from "vscode-languageserver-protocol/node";
+import { CYLINDER_HEADER, cylinderRow, isSeededMistake } from "./cylinderRows.mjs";
 
 const serverPath = fileURLToPath(new URL("../../dist/server.js", import.meta.url));
 if (!existsSync(serverPath)) {
@@ -26,27 +27,12 @@ const ROWS = 100_000;
 const EDITS = 20;
 const AIMS = { openMs: 1000, editP95Ms: 50, peakMb: 300 };
 
-const SPECIES = [
-  ["sulfur hexafluoride", "SF6", 48, 0, "octahedral", "nonpolar"],
-  ["nitrogen trifluoride", "NF3", 26, 1, "trigonal pyramidal", "polar"],
-  ["chlorine trifluoride", "ClF3", 28, 2, "T-shaped", "polar"],
-  ["boron trifluoride", "BF3", 24, 0, "trigonal planar", "nonpolar"],
-  ["ammonia", "NH3", 8, 1, "trigonal pyramidal", "polar"],
-  ["carbon dioxide", "CO2", 16, 0, "linear", "nonpolar"],
-  ["sulfur dioxide", "SO2", 18, 1, "bent", "polar"],
-  ["xenon tetrafluoride", "XeF4", 36, 2, "square planar", "nonpolar"],
-];
-const HEADER = "id,species,formula,valence electrons,lone pairs on central atom,molecular geometry,polarity,supplier lot\n";
-const rowOf = (index, wrong) => {
-  const [name, formula, electrons, lonePairs, shape, polarity] = SPECIES[index % SPECIES.length];
-  return `CYL-${index},${name},${formula},${wrong ? electrons - 2 : electrons},${lonePairs},${shape},${polarity},KR-${String(index % 9000).padStart(4, "0")}`;
-};
-const lines = [HEADER.trimEnd()];
+const lines = [CYLINDER_HEADER];
 let seeded = 0;
 for (let index = 0; index < ROWS; index++) {
-  const wrong = index % 997 === 5;
+  const wrong = isSeededMistake(index);
   if (wrong) seeded++;
-  lines.push(rowOf(index, wrong));
+  lines.push(cylinderRow(index, wrong));
 }
 const text = `${lines.join("\n")}\n`;
 
@@ -90,8 +76,8 @@ for (let edit = 0; edit < EDITS; edit++) {
   // Make a correct row far into the file wrong: its electron count drops by two.
   const index = Math.floor(((edit + 1) * ROWS) / (EDITS + 1));
   const line = index + 1;
-  const before = rowOf(index, index % 997 === 5);
-  const after = rowOf(index, true);
+  const before = cylinderRow(index);
+  const after = cylinderRow(index, true);
   version += 1;
   const start = performance.now();
   await connection.sendNotification(DidChangeTextDocumentNotification.type, {
