@@ -28,7 +28,9 @@ describe("bounded memo", () => {
     // Long keys (large molecules) use the budget up sooner than short ones.
     const memo = boundedMemo<number>(1_000, (key) => key.length);
     for (let index = 0; index < 100; index++) memo.set(`${"C".repeat(99)}${index % 10}${index}`, index);
-    const kept = Array.from({ length: 100 }, (_, index) => memo.get(`${"C".repeat(99)}${index % 10}${index}`)).filter((v) => v !== undefined);
+    const kept = Array.from({ length: 100 }, (_, index) => memo.get(`${"C".repeat(99)}${index % 10}${index}`)).filter(
+      (v) => v !== undefined,
+    );
     expect(kept.length).toBeLessThanOrEqual(10);
     expect(kept.length).toBeGreaterThanOrEqual(4);
   });

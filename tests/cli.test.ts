@@ -39,7 +39,16 @@ describe("lonepair analyze --json", () => {
     expect(json).toHaveLength(1);
     const [sf4] = json;
     expect(Object.keys(sf4).slice(0, 10)).toEqual([
-      "input", "ok", "formula", "charge", "name", "valenceElectrons", "radical", "centers", "polar", "warnings",
+      "input",
+      "ok",
+      "formula",
+      "charge",
+      "name",
+      "valenceElectrons",
+      "radical",
+      "centers",
+      "polar",
+      "warnings",
     ]);
     expect(sf4).toMatchObject({
       input: "SF4",
@@ -55,8 +64,16 @@ describe("lonepair analyze --json", () => {
     expect(sf4.centers).toHaveLength(1);
     const [sulfur] = sf4.centers;
     expect(Object.keys(sulfur).slice(0, 10)).toEqual([
-      "index", "atom", "axe", "stericNumber", "bondingDomains", "lonePairs",
-      "electronGeometry", "molecularGeometry", "idealAngles", "hybridization",
+      "index",
+      "atom",
+      "axe",
+      "stericNumber",
+      "bondingDomains",
+      "lonePairs",
+      "electronGeometry",
+      "molecularGeometry",
+      "idealAngles",
+      "hybridization",
     ]);
     // from memory: Housecroft & Sharpe, Inorganic Chemistry, VSEPR shapes table (SF4: AX4E, seesaw, sp3d)
     expect(sulfur).toMatchObject({
@@ -119,9 +136,9 @@ describe("lonepair analyze --smiles", () => {
     expect(benzene).toMatchObject({ input: "c1ccccc1", ok: true, charge: 0 });
     expect(benzene.formula).toMatch(/^C6H6$/);
     // common practice: each aromatic carbon has three sigma neighbours and no lone pair (AX3)
-    expect(benzene.centers.map((centre: any) => [centre.index, centre.atom, centre.axe, centre.molecularGeometry, centre.hybridization])).toEqual(
-      [0, 1, 2, 3, 4, 5].map((index) => [index, "C", "AX3", "trigonal planar", "sp2"]),
-    );
+    expect(
+      benzene.centers.map((centre: any) => [centre.index, centre.atom, centre.axe, centre.molecularGeometry, centre.hybridization]),
+    ).toEqual([0, 1, 2, 3, 4, 5].map((index) => [index, "C", "AX3", "trigonal planar", "sp2"]));
   });
 
   it("prints a text card for each SMILES and fails on one it cannot read", () => {

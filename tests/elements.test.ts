@@ -1,11 +1,6 @@
 import { describe, expect, it } from "vitest";
 import { ChemElements, type ChemElementInfo } from "@chemistry/elements";
-import {
-  ELEMENTS,
-  elementByName,
-  elementBySymbol,
-  isTransitionMetal,
-} from "../shared/src/chemistry/elements";
+import { ELEMENTS, elementByName, elementBySymbol, isTransitionMetal } from "../shared/src/chemistry/elements";
 import type { ElementData } from "../shared/src/chemistry/types";
 
 // The reference package spells a few names differently from IUPAC; both are fine.
@@ -53,48 +48,41 @@ describe("element table against @chemistry/elements", () => {
     // source: @chemistry/elements npm package (same count of elements up to oganesson)
     const referenceCount = ChemElements.getAll().filter((el) => el.id >= 1 && el.id <= 118).length;
     expect(ELEMENTS.length).toBe(referenceCount);
-    expect(ELEMENTS.map((el) => el.atomicNumber)).toEqual(
-      Array.from({ length: 118 }, (_, index) => index + 1),
-    );
+    expect(ELEMENTS.map((el) => el.atomicNumber)).toEqual(Array.from({ length: 118 }, (_, index) => index + 1));
   });
 
-  it.each(ELEMENTS.map((el) => [el.symbol, el] as const))(
-    "%s: symbol, name, Z, group, period and covalent radius",
-    (_symbol, element) => {
-      const reference = referenceFor(element);
-      // source: @chemistry/elements npm package
-      expect(element.symbol).toBe(reference.symbol);
-      // source: @chemistry/elements npm package
-      expect(element.atomicNumber).toBe(reference.id);
-      // source: @chemistry/elements npm package (name, allowing spelling variants)
-      const accepted = ACCEPTED_NAME_SPELLINGS[element.name] ?? [element.name];
-      expect(accepted).toContain(reference.name.toLowerCase());
+  it.each(ELEMENTS.map((el) => [el.symbol, el] as const))("%s: symbol, name, Z, group, period and covalent radius", (_symbol, element) => {
+    const reference = referenceFor(element);
+    // source: @chemistry/elements npm package
+    expect(element.symbol).toBe(reference.symbol);
+    // source: @chemistry/elements npm package
+    expect(element.atomicNumber).toBe(reference.id);
+    // source: @chemistry/elements npm package (name, allowing spelling variants)
+    const accepted = ACCEPTED_NAME_SPELLINGS[element.name] ?? [element.name];
+    expect(accepted).toContain(reference.name.toLowerCase());
 
-      if (reference.posX === REFERENCE_LANTHANIDE_ROW) {
-        // source: @chemistry/elements npm package (f-block row means a period-6 lanthanide)
-        expect(element.category).toBe("lanthanide");
-        expect(element.period).toBe(6);
-        expect(element.group).toBe(3);
-      } else if (reference.posX === REFERENCE_ACTINIDE_ROW) {
-        // source: @chemistry/elements npm package (second f-block row means a period-7 actinide)
-        expect(element.category).toBe("actinide");
-        expect(element.period).toBe(7);
-        expect(element.group).toBe(3);
-      } else {
-        // source: @chemistry/elements npm package (posX is the period, posY the group)
-        expect(element.period).toBe(reference.posX);
-        expect(element.group).toBe(reference.posY);
-      }
+    if (reference.posX === REFERENCE_LANTHANIDE_ROW) {
+      // source: @chemistry/elements npm package (f-block row means a period-6 lanthanide)
+      expect(element.category).toBe("lanthanide");
+      expect(element.period).toBe(6);
+      expect(element.group).toBe(3);
+    } else if (reference.posX === REFERENCE_ACTINIDE_ROW) {
+      // source: @chemistry/elements npm package (second f-block row means a period-7 actinide)
+      expect(element.category).toBe("actinide");
+      expect(element.period).toBe(7);
+      expect(element.group).toBe(3);
+    } else {
+      // source: @chemistry/elements npm package (posX is the period, posY the group)
+      expect(element.period).toBe(reference.posX);
+      expect(element.group).toBe(reference.posY);
+    }
 
-      if (element.atomicNumber >= REFERENCE_PLACEHOLDER_RADIUS_FROM && element.atomicNumber <= REFERENCE_PLACEHOLDER_RADIUS_TO) return;
-      // source: @chemistry/elements npm package (RCow in angstrom)
-      const referenceRadiusPm = Math.round(reference.RCow * 100);
-      const tolerance = isDOrFBlock(element)
-        ? RADIUS_TOLERANCE_D_F_BLOCK_PM
-        : RADIUS_TOLERANCE_S_P_BLOCK_PM;
-      expect(Math.abs(element.covalentRadius - referenceRadiusPm)).toBeLessThanOrEqual(tolerance);
-    },
-  );
+    if (element.atomicNumber >= REFERENCE_PLACEHOLDER_RADIUS_FROM && element.atomicNumber <= REFERENCE_PLACEHOLDER_RADIUS_TO) return;
+    // source: @chemistry/elements npm package (RCow in angstrom)
+    const referenceRadiusPm = Math.round(reference.RCow * 100);
+    const tolerance = isDOrFBlock(element) ? RADIUS_TOLERANCE_D_F_BLOCK_PM : RADIUS_TOLERANCE_S_P_BLOCK_PM;
+    expect(Math.abs(element.covalentRadius - referenceRadiusPm)).toBeLessThanOrEqual(tolerance);
+  });
   // The reference package has no electronegativity field, so electronegativities are checked
   // below against recalled handbook values and periodic trends instead.
 
@@ -155,9 +143,7 @@ describe("electronegativity", () => {
 
   it("is highest for fluorine", () => {
     // common practice: fluorine is the most electronegative element
-    const highest = ELEMENTS.reduce((best, el) =>
-      (el.electronegativity ?? -1) > (best.electronegativity ?? -1) ? el : best,
-    );
+    const highest = ELEMENTS.reduce((best, el) => ((el.electronegativity ?? -1) > (best.electronegativity ?? -1) ? el : best));
     expect(highest.symbol).toBe("F");
   });
 
@@ -207,9 +193,7 @@ describe("valence electrons", () => {
     [17, 7],
   ])("group %i elements have %i", (group, expected) => {
     // common practice: s + p electrons of the outer shell; group 12 keeps a full d10 shell
-    const members = ELEMENTS.filter(
-      (el) => el.group === group && el.category !== "lanthanide" && el.category !== "actinide",
-    );
+    const members = ELEMENTS.filter((el) => el.group === group && el.category !== "lanthanide" && el.category !== "actinide");
     expect(members.length).toBeGreaterThan(0);
     for (const element of members) expect(element.valenceElectrons).toBe(expected);
   });

@@ -21,7 +21,10 @@ function newestSource(folder: string): number {
 }
 
 export default function setup(): void {
-  const sources = Math.max(...SOURCES.map((folder) => newestSource(join(ROOT, folder))), statSync(join(ROOT, "esbuild.config.mjs")).mtimeMs);
+  const sources = Math.max(
+    ...SOURCES.map((folder) => newestSource(join(ROOT, folder))),
+    statSync(join(ROOT, "esbuild.config.mjs")).mtimeMs,
+  );
   const stale = BUNDLES.some((bundle) => !existsSync(bundle) || statSync(bundle).mtimeMs < sources);
   if (stale) execFileSync(process.execPath, ["esbuild.config.mjs"], { cwd: ROOT, stdio: "inherit" });
 }

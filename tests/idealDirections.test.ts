@@ -1,10 +1,5 @@
 import { describe, expect, it } from "vitest";
-import {
-  AXIAL_SITES,
-  idealDirections,
-  lonePairSiteOrder,
-  siteKind,
-} from "../shared/src/chemistry/geometry/idealDirections";
+import { AXIAL_SITES, idealDirections, lonePairSiteOrder, siteKind } from "../shared/src/chemistry/geometry/idealDirections";
 import { add, angleDegrees, cross, dot, norm, normalize, scale, sub, type Vec3 } from "../shared/src/chemistry/geometry/vectors";
 import type { ElectronGeometry } from "../shared/src/chemistry/types";
 
@@ -103,7 +98,14 @@ describe("lone pairs fill sites in the order that gives the known shapes", () =>
   };
 
   it("every order is a permutation of the sites", () => {
-    for (const geometry of ["linear", "trigonal planar", "tetrahedral", "trigonal bipyramidal", "octahedral", "pentagonal bipyramidal"] as const) {
+    for (const geometry of [
+      "linear",
+      "trigonal planar",
+      "tetrahedral",
+      "trigonal bipyramidal",
+      "octahedral",
+      "pentagonal bipyramidal",
+    ] as const) {
       expect([...lonePairSiteOrder(geometry)].sort()).toEqual(idealDirections(geometry).map((_, index) => index));
     }
   });

@@ -106,14 +106,11 @@ describe("state symbols", () => {
     expect(result.ok && result.value.reading.state).toBe("aq");
   });
 
-  it.each([["H2O(l)"], ["NH3(g)"], ["\\ce{SO4^2-(aq)}"], ["CO2 (aq)"]])(
-    "%s is never refused as an unknown element",
-    (input) => {
-      // common practice: a state symbol is notation, not part of the formula
-      const result = analyzeSpecies(input);
-      expect(result.ok ? "analysed" : result.problem.code).toBe("analysed");
-    },
-  );
+  it.each([["H2O(l)"], ["NH3(g)"], ["\\ce{SO4^2-(aq)}"], ["CO2 (aq)"]])("%s is never refused as an unknown element", (input) => {
+    // common practice: a state symbol is notation, not part of the formula
+    const result = analyzeSpecies(input);
+    expect(result.ok ? "analysed" : result.problem.code).toBe("analysed");
+  });
 });
 
 describe("every element of the periodic table", () => {
@@ -223,15 +220,12 @@ describe("shift-key slips", () => {
     expect(refusal(input).suggestion).toBe(expected);
   });
 
-  it.each([["co2"], ["nh3"], ["cs2"], ["hf"], ["sncl4"], ["nh4+"]])(
-    "the suggestion for %s is a species that analyses",
-    (input) => {
-      // common practice: a correction is only worth offering when it is itself right
-      const suggestion = refusal(input).suggestion as string;
-      const result = analyzeSpecies(suggestion);
-      expect(result.ok ? "analysed" : result.problem.code).toBe("analysed");
-    },
-  );
+  it.each([["co2"], ["nh3"], ["cs2"], ["hf"], ["sncl4"], ["nh4+"]])("the suggestion for %s is a species that analyses", (input) => {
+    // common practice: a correction is only worth offering when it is itself right
+    const suggestion = refusal(input).suggestion as string;
+    const result = analyzeSpecies(suggestion);
+    expect(result.ok ? "analysed" : result.problem.code).toBe("analysed");
+  });
 
   it("offers nothing when no spelling is a valid species", () => {
     // common practice: "Xx" is no element in any case
@@ -314,21 +308,113 @@ interface PlainSpecies {
 
 // from memory: standard tables of common molecules and polyatomic ions (formulas and charges)
 const SPECIES: readonly PlainSpecies[] = [
-  { groups: [["H", 2], ["O", 1]], charge: 0 },
-  { groups: [["C", 1], ["O", 2]], charge: 0 },
-  { groups: [["N", 1], ["H", 3]], charge: 0 },
-  { groups: [["C", 1], ["H", 4]], charge: 0 },
-  { groups: [["C", 1], ["H", 1], ["Cl", 3]], charge: 0 },
-  { groups: [["S", 1], ["O", 4]], charge: -2 },
-  { groups: [["P", 1], ["O", 4]], charge: -3 },
-  { groups: [["N", 1], ["H", 4]], charge: 1 },
-  { groups: [["C", 1], ["O", 3]], charge: -2 },
-  { groups: [["N", 1], ["O", 3]], charge: -1 },
-  { groups: [["Cl", 1], ["O", 4]], charge: -1 },
-  { groups: [["H", 3], ["O", 1]], charge: 1 },
-  { groups: [["H", 1], ["C", 1], ["O", 3]], charge: -1 },
-  { groups: [["C", 2], ["H", 6]], charge: 0 },
-  { groups: [["S", 1], ["F", 6]], charge: 0 },
+  {
+    groups: [
+      ["H", 2],
+      ["O", 1],
+    ],
+    charge: 0,
+  },
+  {
+    groups: [
+      ["C", 1],
+      ["O", 2],
+    ],
+    charge: 0,
+  },
+  {
+    groups: [
+      ["N", 1],
+      ["H", 3],
+    ],
+    charge: 0,
+  },
+  {
+    groups: [
+      ["C", 1],
+      ["H", 4],
+    ],
+    charge: 0,
+  },
+  {
+    groups: [
+      ["C", 1],
+      ["H", 1],
+      ["Cl", 3],
+    ],
+    charge: 0,
+  },
+  {
+    groups: [
+      ["S", 1],
+      ["O", 4],
+    ],
+    charge: -2,
+  },
+  {
+    groups: [
+      ["P", 1],
+      ["O", 4],
+    ],
+    charge: -3,
+  },
+  {
+    groups: [
+      ["N", 1],
+      ["H", 4],
+    ],
+    charge: 1,
+  },
+  {
+    groups: [
+      ["C", 1],
+      ["O", 3],
+    ],
+    charge: -2,
+  },
+  {
+    groups: [
+      ["N", 1],
+      ["O", 3],
+    ],
+    charge: -1,
+  },
+  {
+    groups: [
+      ["Cl", 1],
+      ["O", 4],
+    ],
+    charge: -1,
+  },
+  {
+    groups: [
+      ["H", 3],
+      ["O", 1],
+    ],
+    charge: 1,
+  },
+  {
+    groups: [
+      ["H", 1],
+      ["C", 1],
+      ["O", 3],
+    ],
+    charge: -1,
+  },
+  {
+    groups: [
+      ["C", 2],
+      ["H", 6],
+    ],
+    charge: 0,
+  },
+  {
+    groups: [
+      ["S", 1],
+      ["F", 6],
+    ],
+    charge: 0,
+  },
   { groups: [["Ca", 1]], charge: 2 },
   { groups: [["Al", 1]], charge: 3 },
 ];
@@ -378,7 +464,17 @@ function chargeTextIn(charge: number, style: ChargeStyle): string {
 const writing = fc.record({
   species: fc.constantFrom(...SPECIES),
   countStyle: fc.constantFrom<CountStyle>("plain", "unicode", "tex", "braced"),
-  chargeStyle: fc.constantFrom<ChargeStyle>("caret", "space", "bracket", "braced", "unicode", "signFirst", "caretSignFirst", "unicodeMinus", "enDash"),
+  chargeStyle: fc.constantFrom<ChargeStyle>(
+    "caret",
+    "space",
+    "bracket",
+    "braced",
+    "unicode",
+    "signFirst",
+    "caretSignFirst",
+    "unicodeMinus",
+    "enDash",
+  ),
   state: fc.constantFrom<State>("", "(aq)", " (aq)", "(s)", "(l)", "(g)"),
   deuterium: fc.boolean(),
   carbonLabel: fc.constantFrom("", "^{13}", "^13", "¹³", "13"),
@@ -389,7 +485,8 @@ describe("every way of writing a species reads as the plain formula", () => {
   it("keeps element counts and charge whatever the notation", () => {
     fc.assert(
       fc.property(writing, ({ species, countStyle, chargeStyle, state, deuterium, carbonLabel, mhchem }) => {
-        const plain = species.groups.map(([symbol, count]) => `${symbol}${count === 1 ? "" : count}`).join("") + chargeTextIn(species.charge, "caret");
+        const plain =
+          species.groups.map(([symbol, count]) => `${symbol}${count === 1 ? "" : count}`).join("") + chargeTextIn(species.charge, "caret");
         let body = "";
         species.groups.forEach(([symbol, count], index) => {
           // a leading bare mass number only where the formula starts with carbon
@@ -408,7 +505,9 @@ describe("every way of writing a species reads as the plain formula", () => {
         expect(new Map(reference.composition.map((part) => [part.symbol, part.count])), plain).toEqual(expected);
         expect(reading.charge, input).toBe(species.charge);
         expect(reading.state, input).toBe(state === "" ? undefined : state.trim().slice(1, -1));
-        const labelled = (deuterium && expected.has("H")) || (carbonLabel !== "" && expected.has("C") && (carbonLabel !== "13" || species.groups[0][0] === "C"));
+        const labelled =
+          (deuterium && expected.has("H")) ||
+          (carbonLabel !== "" && expected.has("C") && (carbonLabel !== "13" || species.groups[0][0] === "C"));
         expect(reading.isotopes !== undefined, input).toBe(labelled);
       }),
       { numRuns: 600, seed: 20261203 },

@@ -62,18 +62,46 @@ const SPECIES: readonly (readonly [string, () => Atom[], string])[] = [
   ["H2O (bent, 104.5°)", () => bent("O", ["H", 0.958], ["H", 0.958], 104.5), "C2v"],
   ["NH3 (trigonal pyramidal)", () => vseprCentre("N", "tetrahedral", 1, [H, H, H]), "C3v"],
   ["CH4", () => vseprCentre("C", "tetrahedral", 0, [H, H, H, H]), "Td"],
-  ["NH4+", () => vseprCentre("N", "tetrahedral", 0, [["H", 1.03], ["H", 1.03], ["H", 1.03], ["H", 1.03]]), "Td"],
+  [
+    "NH4+",
+    () =>
+      vseprCentre("N", "tetrahedral", 0, [
+        ["H", 1.03],
+        ["H", 1.03],
+        ["H", 1.03],
+        ["H", 1.03],
+      ]),
+    "Td",
+  ],
   ["SO4^2-", () => vseprCentre("S", "tetrahedral", 0, [O, O, O, O]), "Td"],
   ["CH3Cl", () => vseprCentre("C", "tetrahedral", 0, [CCl, H, H, H]), "C3v"],
   ["CH2Cl2", () => vseprCentre("C", "tetrahedral", 0, [CCl, CCl, H, H]), "C2v"],
   ["CHCl3", () => vseprCentre("C", "tetrahedral", 0, [H, CCl, CCl, CCl]), "C3v"],
   ["CHFClBr", () => vseprCentre("C", "tetrahedral", 0, [H, CF, CCl, Br]), "C1"],
-  ["NH2Cl", () => vseprCentre("N", "tetrahedral", 1, [["H", 1.01], ["H", 1.01], ["Cl", 1.75]]), "Cs"],
+  [
+    "NH2Cl",
+    () =>
+      vseprCentre("N", "tetrahedral", 1, [
+        ["H", 1.01],
+        ["H", 1.01],
+        ["Cl", 1.75],
+      ]),
+    "Cs",
+  ],
   ["POCl3", () => vseprCentre("P", "tetrahedral", 0, [O, Cl, Cl, Cl]), "C3v"],
   ["SOCl2 (pyramidal)", () => vseprCentre("S", "tetrahedral", 1, [O, Cl, Cl]), "Cs"],
   ["HOCl (bent)", () => bent("O", ["H", 0.97], ["Cl", 1.69], 102.5), "Cs"],
   ["O3 (bent, 116.8°)", () => bent("O", ["O", 1.278], ["O", 1.278], 116.8), "C2v"],
-  ["BF3", () => vseprCentre("B", "trigonal planar", 0, [["F", 1.31], ["F", 1.31], ["F", 1.31]]), "D3h"],
+  [
+    "BF3",
+    () =>
+      vseprCentre("B", "trigonal planar", 0, [
+        ["F", 1.31],
+        ["F", 1.31],
+        ["F", 1.31],
+      ]),
+    "D3h",
+  ],
   ["SO3", () => vseprCentre("S", "trigonal planar", 0, [O, O, O]), "D3h"],
   ["PCl5", () => vseprCentre("P", "trigonal bipyramidal", 0, [Cl, Cl, Cl, Cl, Cl]), "D3h"],
   ["PCl3F2 (axial F)", () => vseprCentre("P", "trigonal bipyramidal", 0, [F, F, Cl, Cl, Cl]), "D3h"],
@@ -87,7 +115,18 @@ const SPECIES: readonly (readonly [string, () => Atom[], string])[] = [
   ["fac-MoCl3F3", () => onSites("Mo", "octahedral", { 0: Cl, 2: Cl, 4: Cl, 1: F, 3: F, 5: F }), "C3v"],
   ["mer-MoCl3F3", () => onSites("Mo", "octahedral", { 0: Cl, 1: Cl, 2: Cl, 3: F, 4: F, 5: F }), "C2v"],
   ["BrF5 (square pyramidal)", () => vseprCentre("Br", "octahedral", 1, [F, F, F, F, F]), "C4v"],
-  ["IF5 (square pyramidal)", () => vseprCentre("I", "octahedral", 1, [["F", 1.87], ["F", 1.84], ["F", 1.84], ["F", 1.84], ["F", 1.84]]), "C4v"],
+  [
+    "IF5 (square pyramidal)",
+    () =>
+      vseprCentre("I", "octahedral", 1, [
+        ["F", 1.87],
+        ["F", 1.84],
+        ["F", 1.84],
+        ["F", 1.84],
+        ["F", 1.84],
+      ]),
+    "C4v",
+  ],
   ["XeOF4 (square pyramidal)", () => vseprCentre("Xe", "octahedral", 1, [["O", 1.71], F, F, F, F]), "C4v"],
   ["XeF4 (square planar)", () => vseprCentre("Xe", "octahedral", 2, [F, F, F, F]), "D4h"],
   ["IF7", () => vseprCentre("I", "pentagonal bipyramidal", 0, [F, F, F, F, F, F, F]), "D5h"],
@@ -174,8 +213,7 @@ describe("noise below the tolerance", () => {
 
 describe("tolerance decides whether a distortion counts", () => {
   // from memory: stretching one C-H of methane leaves a C3v molecule
-  const stretchedMethane = (): Atom[] =>
-    vseprCentre("C", "tetrahedral", 0, [["H", 1.14], H, H, H]);
+  const stretchedMethane = (): Atom[] => vseprCentre("C", "tetrahedral", 0, [["H", 1.14], H, H, H]);
 
   it("a 0.05 Å stretch lowers Td to C3v at the default tolerance", () => {
     expect(symbolOf(stretchedMethane())).toBe("C3v");
@@ -252,10 +290,26 @@ describe("symmetry elements found", () => {
 describe("bad input comes back as a problem, never a throw", () => {
   it.each([
     ["no atoms", [], 0.01, "no-atoms"],
-    ["a NaN coordinate", [{ element: "C", position: [0, Number.NaN, 0] }, { element: "O", position: [1.2, 0, 0] }], 0.01, "invalid-coordinates"],
+    [
+      "a NaN coordinate",
+      [
+        { element: "C", position: [0, Number.NaN, 0] },
+        { element: "O", position: [1.2, 0, 0] },
+      ],
+      0.01,
+      "invalid-coordinates",
+    ],
     ["a missing coordinate", [{ element: "C", position: [0, 0] }], 0.01, "invalid-coordinates"],
     ["an empty element label", [{ element: " ", position: [0, 0, 0] }], 0.01, "invalid-coordinates"],
-    ["two atoms in one place", [{ element: "H", position: [0, 0, 0] }, { element: "H", position: [0, 0, 0.001] }], 0.01, "overlapping-atoms"],
+    [
+      "two atoms in one place",
+      [
+        { element: "H", position: [0, 0, 0] },
+        { element: "H", position: [0, 0, 0.001] },
+      ],
+      0.01,
+      "overlapping-atoms",
+    ],
     ["a zero tolerance", [{ element: "H", position: [0, 0, 0] }], 0, "invalid-tolerance"],
     ["a negative tolerance", [{ element: "H", position: [0, 0, 0] }], -1, "invalid-tolerance"],
   ] as const)("%s", (_name, atoms, tolerance, code) => {

@@ -3,16 +3,71 @@ import { readSpecies } from "../shared/src/chemistry/reader/readSpecies";
 import type { ReadResult } from "../shared/src/chemistry/types";
 import { seededRandom } from "./support/seededRandom";
 
-
 const VALID = [
-  "SF4", "XeOF4", "H2SO4", "Ca(OH)2", "CuSO4·5H2O", "CH3COOH", "(CH3)2CO", "CH2=CH2", "HC≡CH",
-  "NH4+", "SO4^2-", "SO4 2-", "SO4(2-)", "[PO4]3-", "SO4--", "SO₄²⁻", "\\ce{NH4+}", "\\ce{SO4^{2-}}",
-  "water", "sulfur tetrafluoride", "dinitrogen tetroxide", "iron(III) oxide", "ammonium sulfate",
-  "hydrogen carbonate", "acetic acid", "K4[Fe(CN)6]",
+  "SF4",
+  "XeOF4",
+  "H2SO4",
+  "Ca(OH)2",
+  "CuSO4·5H2O",
+  "CH3COOH",
+  "(CH3)2CO",
+  "CH2=CH2",
+  "HC≡CH",
+  "NH4+",
+  "SO4^2-",
+  "SO4 2-",
+  "SO4(2-)",
+  "[PO4]3-",
+  "SO4--",
+  "SO₄²⁻",
+  "\\ce{NH4+}",
+  "\\ce{SO4^{2-}}",
+  "water",
+  "sulfur tetrafluoride",
+  "dinitrogen tetroxide",
+  "iron(III) oxide",
+  "ammonium sulfate",
+  "hydrogen carbonate",
+  "acetic acid",
+  "K4[Fe(CN)6]",
 ];
-const PIECES = ["(", ")", "[", "]", "{", "}", "^", "+", "-", "−", "²", "⁻", "₄", "·", ".", "=", "#", "≡", " ", "\\ce{", "9", "0", "e", "ion", "di", "Xe"];
+const PIECES = [
+  "(",
+  ")",
+  "[",
+  "]",
+  "{",
+  "}",
+  "^",
+  "+",
+  "-",
+  "−",
+  "²",
+  "⁻",
+  "₄",
+  "·",
+  ".",
+  "=",
+  "#",
+  "≡",
+  " ",
+  "\\ce{",
+  "9",
+  "0",
+  "e",
+  "ion",
+  "di",
+  "Xe",
+];
 
-const READING_CODES = new Set(["empty-input", "unknown-element", "unbalanced-brackets", "malformed-formula", "unknown-name", "input-too-long"]);
+const READING_CODES = new Set([
+  "empty-input",
+  "unknown-element",
+  "unbalanced-brackets",
+  "malformed-formula",
+  "unknown-name",
+  "input-too-long",
+]);
 
 function randomUnicode(random: () => number, length: number): string {
   let text = "";
@@ -20,11 +75,15 @@ function randomUnicode(random: () => number, length: number): string {
     const pool = random();
     // mostly ASCII, some Latin-1, symbols and sub/superscripts, some lone and paired surrogates
     const code =
-      pool < 0.6 ? 0x20 + Math.floor(random() * 95)
-      : pool < 0.75 ? 0xa0 + Math.floor(random() * 0x60)
-      : pool < 0.9 ? 0x2000 + Math.floor(random() * 0x300)
-      : pool < 0.95 ? 0xd800 + Math.floor(random() * 0x800)
-      : Math.floor(random() * 0x10000);
+      pool < 0.6
+        ? 0x20 + Math.floor(random() * 95)
+        : pool < 0.75
+          ? 0xa0 + Math.floor(random() * 0x60)
+          : pool < 0.9
+            ? 0x2000 + Math.floor(random() * 0x300)
+            : pool < 0.95
+              ? 0xd800 + Math.floor(random() * 0x800)
+              : Math.floor(random() * 0x10000);
     text += String.fromCharCode(code);
   }
   return text;

@@ -339,7 +339,6 @@ describe("parseSmiles refuses bad input with a problem, never an exception", () 
   });
 });
 
-
 const FUZZ_ALPHABET = "CNOSPFIBclnosbp[]()=#$:/\\.%0123456789+-@HTHALSPxeZz* \u00e9\u{1F600}";
 
 function mutate(base: string, random: () => number): string {

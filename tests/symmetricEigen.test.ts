@@ -7,10 +7,42 @@ const times = (matrix: Matrix3, vector: Vec3): Vec3 => [dot(matrix[0], vector), 
 describe("symmetricEigen", () => {
   // common practice: eigenvalues of small symmetric matrices worked by hand
   it.each([
-    ["diagonal", [[3, 0, 0], [0, 1, 0], [0, 0, 2]], [1, 2, 3]],
-    ["a 2×2 block", [[2, 1, 0], [1, 2, 0], [0, 0, 3]], [1, 3, 3]],
-    ["all ones", [[1, 1, 1], [1, 1, 1], [1, 1, 1]], [0, 0, 3]],
-    ["a tridiagonal", [[2, -1, 0], [-1, 2, -1], [0, -1, 2]], [2 - Math.SQRT2, 2, 2 + Math.SQRT2]],
+    [
+      "diagonal",
+      [
+        [3, 0, 0],
+        [0, 1, 0],
+        [0, 0, 2],
+      ],
+      [1, 2, 3],
+    ],
+    [
+      "a 2×2 block",
+      [
+        [2, 1, 0],
+        [1, 2, 0],
+        [0, 0, 3],
+      ],
+      [1, 3, 3],
+    ],
+    [
+      "all ones",
+      [
+        [1, 1, 1],
+        [1, 1, 1],
+        [1, 1, 1],
+      ],
+      [0, 0, 3],
+    ],
+    [
+      "a tridiagonal",
+      [
+        [2, -1, 0],
+        [-1, 2, -1],
+        [0, -1, 2],
+      ],
+      [2 - Math.SQRT2, 2, 2 + Math.SQRT2],
+    ],
   ] as const)("%s", (_name, matrix, expectedValues) => {
     const { values, vectors } = symmetricEigen(matrix as unknown as Matrix3);
     values.forEach((value, k) => expect(value).toBeCloseTo(expectedValues[k], 10));

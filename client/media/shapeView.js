@@ -71,7 +71,8 @@
   }
 
   function bondFault(bond, atomCount) {
-    if (!isObject(bond) || !isIndex(bond.from, atomCount) || !isIndex(bond.to, atomCount)) return "a bond joins atoms that are not in the model";
+    if (!isObject(bond) || !isIndex(bond.from, atomCount) || !isIndex(bond.to, atomCount))
+      return "a bond joins atoms that are not in the model";
     if (bond.order !== undefined && !isFiniteNumber(bond.order)) return "a bond has a bad order";
     return "";
   }
@@ -84,7 +85,8 @@
   }
 
   function angleFault(angle) {
-    if (!isObject(angle) || !isFiniteNumber(angle.degrees) || !isVector(angle.labelPosition)) return "an angle has no size or label position";
+    if (!isObject(angle) || !isFiniteNumber(angle.degrees) || !isVector(angle.labelPosition))
+      return "an angle has no size or label position";
     if (!Array.isArray(angle.arc) || !angle.arc.every(isVector)) return "an angle has a bad arc";
     return "";
   }
@@ -95,7 +97,8 @@
       if (!isText(centre[key])) return `centre ${centre.symbol} has no ${key}`;
     }
     if (!isFiniteNumber(centre.stericNumber) || !isFiniteNumber(centre.lonePairs)) return `centre ${centre.symbol} has bad counts`;
-    if (!Array.isArray(centre.idealAngles) || !centre.idealAngles.every(isFiniteNumber)) return `centre ${centre.symbol} has bad ideal angles`;
+    if (!Array.isArray(centre.idealAngles) || !centre.idealAngles.every(isFiniteNumber))
+      return `centre ${centre.symbol} has bad ideal angles`;
     return "";
   }
 
@@ -124,7 +127,11 @@
       firstFault(warnings, (warning) => (isText(warning) ? "" : "a warning is not text"));
     if (fault) return refuse(fault);
     const polarity = raw.polarity;
-    if (polarity !== undefined && polarity !== null && !(isObject(polarity) && typeof polarity.polar === "boolean" && isText(polarity.reason))) {
+    if (
+      polarity !== undefined &&
+      polarity !== null &&
+      !(isObject(polarity) && typeof polarity.polar === "boolean" && isText(polarity.reason))
+    ) {
       return refuse("the polarity is malformed");
     }
     if (raw.caution !== undefined && !isText(raw.caution)) return refuse("the caution is not text");
@@ -163,7 +170,17 @@
     const c = Math.cos(angle);
     const s = Math.sin(angle);
     const t = 1 - c;
-    return [t * x * x + c, t * x * y - s * z, t * x * z + s * y, t * x * y + s * z, t * y * y + c, t * y * z - s * x, t * x * z - s * y, t * y * z + s * x, t * z * z + c];
+    return [
+      t * x * x + c,
+      t * x * y - s * z,
+      t * x * z + s * y,
+      t * x * y + s * z,
+      t * y * y + c,
+      t * y * z - s * x,
+      t * x * z - s * y,
+      t * y * z + s * x,
+      t * z * z + c,
+    ];
   }
 
   function multiply(a, b) {
@@ -268,7 +285,10 @@
         const length = number(lonePair.lobeLength, 0.7);
         const origin = vector(owner.atom.position);
         const tip = project(origin.map((value, k) => value + vector(lonePair.direction)[k] * length));
-        items.push({ depth: (owner.screen.depth + tip.depth) / 2, draw: () => drawLobe(owner, direction, length, scale, lonePair.electrons === 1) });
+        items.push({
+          depth: (owner.screen.depth + tip.depth) / 2,
+          draw: () => drawLobe(owner, direction, length, scale, lonePair.electrons === 1),
+        });
       }
     }
     for (const item of atoms) {
@@ -305,7 +325,9 @@
     const { atom, screen } = item;
     const group = element("g", { class: atom.isCentre ? "atom centre" : "atom" });
     const radius = Math.max(4, number(atom.radius, 0.3) * scale);
-    group.appendChild(element("circle", { cx: screen.x, cy: screen.y, r: radius, fill: `url(#${gradientFor(atom.colour)})`, class: "ball" }));
+    group.appendChild(
+      element("circle", { cx: screen.x, cy: screen.y, r: radius, fill: `url(#${gradientFor(atom.colour)})`, class: "ball" }),
+    );
     const title = element("title");
     title.textContent = String(atom.symbol);
     group.appendChild(title);
@@ -313,7 +335,13 @@
   }
 
   function drawAtomLabel(item) {
-    const label = element("text", { x: item.screen.x, y: item.screen.y, class: "atom-label", "text-anchor": "middle", "dominant-baseline": "central" });
+    const label = element("text", {
+      x: item.screen.x,
+      y: item.screen.y,
+      class: "atom-label",
+      "text-anchor": "middle",
+      "dominant-baseline": "central",
+    });
     label.textContent = String(item.atom.symbol);
     return label;
   }
@@ -362,7 +390,14 @@
     const centreY = owner.screen.y - rotatedDirection[1] * (reach / 2);
     const group = element("g", { class: oddElectron ? "odd-electron lobe" : "lone-pair lobe" });
     group.appendChild(
-      element("ellipse", { cx: centreX, cy: centreY, rx: halfLength, ry: width, transform: `rotate(${angle} ${centreX} ${centreY})`, class: "lobe-shape" }),
+      element("ellipse", {
+        cx: centreX,
+        cy: centreY,
+        rx: halfLength,
+        ry: width,
+        transform: `rotate(${angle} ${centreX} ${centreY})`,
+        class: "lobe-shape",
+      }),
     );
     // Two dots side by side across the lobe: the pair of electrons.
     const screenX = along > 1e-6 ? rotatedDirection[0] / along : 1;
@@ -392,7 +427,9 @@
     const group = element("g", { class: "angle" });
     const points = (Array.isArray(angle.arc) ? angle.arc : []).map(project);
     if (points.length > 1) {
-      group.appendChild(element("polyline", { points: points.map((p) => `${p.x.toFixed(1)},${p.y.toFixed(1)}`).join(" "), class: "angle-arc" }));
+      group.appendChild(
+        element("polyline", { points: points.map((p) => `${p.x.toFixed(1)},${p.y.toFixed(1)}`).join(" "), class: "angle-arc" }),
+      );
     }
     const at = project(angle.labelPosition);
     const label = element("text", { x: at.x, y: at.y, class: "angle-label", "text-anchor": "middle", "dominant-baseline": "central" });

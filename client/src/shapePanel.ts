@@ -26,7 +26,11 @@ export interface ShapePanelController extends vscode.Disposable {
   show(editor: vscode.TextEditor | undefined): Promise<void>;
 }
 
-export function createShapePanelController(extensionUri: vscode.Uri, client: LanguageClient, log: vscode.OutputChannel): ShapePanelController {
+export function createShapePanelController(
+  extensionUri: vscode.Uri,
+  client: LanguageClient,
+  log: vscode.OutputChannel,
+): ShapePanelController {
   const mediaRoot = vscode.Uri.joinPath(extensionUri, "client", "media");
   let panel: vscode.WebviewPanel | undefined;
   let lastMessage: PageMessage = { type: "clear" };
@@ -45,13 +49,21 @@ export function createShapePanelController(extensionUri: vscode.Uri, client: Lan
     const cancellation = new vscode.CancellationTokenSource();
     pending = cancellation;
     try {
-      const found = await client.sendRequest(shapeModelRequest, cursorParams(client, editor.document, editor.selection.active), cancellation.token);
+      const found = await client.sendRequest(
+        shapeModelRequest,
+        cursorParams(client, editor.document, editor.selection.active),
+        cancellation.token,
+      );
       if (cancellation.token.isCancellationRequested || !found) return;
       // The same species again (the cursor moved inside it): keep the page and its rotation as they are.
       const key = `${editor.document.uri.toString()}|${found.text}|${found.formula ?? ""}`;
       if (key === lastKey) return;
       lastKey = key;
-      post(found.model ? { type: "show", model: found.model } : { type: "problem", text: found.text, message: found.problem?.message ?? "No 3D model could be built for this species." });
+      post(
+        found.model
+          ? { type: "show", model: found.model }
+          : { type: "problem", text: found.text, message: found.problem?.message ?? "No 3D model could be built for this species." },
+      );
     } catch (error) {
       log.appendLine(`3D view: could not read the species under the cursor: ${String(error)}`);
     }

@@ -34,7 +34,8 @@ export function excludeGlob(): string | null {
   for (const section of ["files", "search"]) {
     const excluded = vscode.workspace.getConfiguration(section).get<Record<string, unknown>>("exclude") ?? {};
     // `{ "when": ... }` entries depend on sibling files; a plain glob cannot say that, so they are left out.
-    for (const [pattern, on] of Object.entries(excluded)) if (on === true) for (const expanded of expandBraces(pattern)) patterns.add(expanded);
+    for (const [pattern, on] of Object.entries(excluded))
+      if (on === true) for (const expanded of expandBraces(pattern)) patterns.add(expanded);
   }
   return patterns.size === 0 ? null : `{${[...patterns].join(",")}}`;
 }

@@ -71,7 +71,10 @@ describe("the language server and the command line agree", () => {
   });
 
   it.each(DOCUMENTS)("on the summary table of %s", async (name) => {
-    const fromServer = await session.connection.sendRequest<SummaryTableResult>("lonepair/summaryTable", { uri: uriOf(name), format: "csv" });
+    const fromServer = await session.connection.sendRequest<SummaryTableResult>("lonepair/summaryTable", {
+      uri: uriOf(name),
+      format: "csv",
+    });
     const run = runCli(["table", "--format", "csv", join(FOLDER, name)]);
     expect(fromServer.text.split(/\r?\n/).length).toBeGreaterThan(2);
     expect(fromServer.text).toBe(run.stdout);

@@ -63,7 +63,8 @@ describe("import graph", () => {
   });
 
   it("the core imports no edge, no editor API, no protocol library and no Node I/O", () => {
-    const forbidden = /^(vscode|vscode-languageserver.*|vscode-languageclient.*|vscode-jsonrpc.*|(node:)?(fs|path|child_process|net|os|worker_threads|process)(\/.*)?)$/;
+    const forbidden =
+      /^(vscode|vscode-languageserver.*|vscode-languageclient.*|vscode-jsonrpc.*|(node:)?(fs|path|child_process|net|os|worker_threads|process)(\/.*)?)$/;
     const outward = coreFiles
       .flatMap(importsOf)
       .filter((edge) => (edge.target ? !edge.target.startsWith("shared/") : forbidden.test(edge.specifier)))
@@ -95,8 +96,12 @@ describe("import graph", () => {
 
   it("the command line and the language server are siblings that do not import each other", () => {
     const crossing = [
-      ...sourceFiles("server/src/cli").flatMap(importsOf).filter((edge) => edge.target?.startsWith("server/src/lsp")),
-      ...sourceFiles("server/src/lsp").flatMap(importsOf).filter((edge) => edge.target?.startsWith("server/src/cli")),
+      ...sourceFiles("server/src/cli")
+        .flatMap(importsOf)
+        .filter((edge) => edge.target?.startsWith("server/src/lsp")),
+      ...sourceFiles("server/src/lsp")
+        .flatMap(importsOf)
+        .filter((edge) => edge.target?.startsWith("server/src/cli")),
     ].map((edge) => `${edge.file} imports ${edge.specifier}`);
     expect(crossing).toEqual([]);
   });

@@ -94,7 +94,9 @@ const verdict = (ok) => (ok ? "meets aim" : "MISSES aim");
 console.log(`editor, 100,000-row CSV over stdio (pull diagnostics), ${text.length.toLocaleString("en")} characters`);
 console.log(`  open to diagnostics        ${openMs.toFixed(0)} ms   aim < ${AIMS.openMs} ms   ${verdict(openMs < AIMS.openMs)}`);
 console.log(`  seeded wrong cells         ${reportedOnOpen} of ${seeded} reported on open   ${verdict(reportedOnOpen >= seeded)}`);
-console.log(`  one-line edit to diagnostics  p50 ${p(0.5).toFixed(0)} ms  p95 ${p(0.95).toFixed(0)} ms   aim p95 < ${AIMS.editP95Ms} ms   ${verdict(p(0.95) < AIMS.editP95Ms)}`);
+console.log(
+  `  one-line edit to diagnostics  p50 ${p(0.5).toFixed(0)} ms  p95 ${p(0.95).toFixed(0)} ms   aim p95 < ${AIMS.editP95Ms} ms   ${verdict(p(0.95) < AIMS.editP95Ms)}`,
+);
 console.log(`  cells made wrong by edits  ${errorsIn(lastReport) - reportedOnOpen} of ${EDITS} reported after the edits`);
 console.log(`  server peak memory         ${peak.toFixed(0)} MB   aim < ${AIMS.peakMb} MB   ${verdict(peak < AIMS.peakMb)}`);
 child.kill();

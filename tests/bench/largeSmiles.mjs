@@ -71,7 +71,10 @@ export function runLargeSmilesBench() {
       missed.push(`large SMILES ${kind}`);
       continue;
     }
-    for (const [label, stage] of [["1,000", small], ["10,000", large]]) {
+    for (const [label, stage] of [
+      ["1,000", small],
+      ["10,000", large],
+    ]) {
       console.log(
         `  ${kind.padEnd(16)} ${label.padStart(6)} (${String(stage.atoms).padStart(6)} atoms)` +
           `  ${ms(stage.analyse)} | ${ms(stage.model)} ${stage.modelNote.padEnd(20)} | ${ms(stage.hover)}`,

@@ -5,12 +5,26 @@
 
 /** Central atoms with their valence electrons and whether they may exceed an octet. */
 const CENTRES = [
-  ["B", 3, false], ["Al", 3, true], ["Ga", 3, true],
-  ["C", 4, false], ["Si", 4, true], ["Ge", 4, true], ["Sn", 4, true],
-  ["N", 5, false], ["P", 5, true], ["As", 5, true], ["Sb", 5, true],
-  ["O", 6, false], ["S", 6, true], ["Se", 6, true], ["Te", 6, true],
-  ["Cl", 7, true], ["Br", 7, true], ["I", 7, true],
-  ["Kr", 8, true], ["Xe", 8, true],
+  ["B", 3, false],
+  ["Al", 3, true],
+  ["Ga", 3, true],
+  ["C", 4, false],
+  ["Si", 4, true],
+  ["Ge", 4, true],
+  ["Sn", 4, true],
+  ["N", 5, false],
+  ["P", 5, true],
+  ["As", 5, true],
+  ["Sb", 5, true],
+  ["O", 6, false],
+  ["S", 6, true],
+  ["Se", 6, true],
+  ["Te", 6, true],
+  ["Cl", 7, true],
+  ["Br", 7, true],
+  ["I", 7, true],
+  ["Kr", 8, true],
+  ["Xe", 8, true],
 ];
 
 /** Single-bonded ligands, in the order they are written after the centre. */

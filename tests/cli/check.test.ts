@@ -41,11 +41,19 @@ describe("check over examples/", () => {
       "examples/inventory/cylinders.csv:4:34: warning: Valence electrons for NF3 are 26, the table says 24. [table-valence-electrons]",
     );
     // common practice: NH3 is AX3E1, trigonal pyramidal
-    expect(lines.some((line) => line.startsWith("examples/inventory/cylinders.csv:13:25: warning: Molecular geometry of NH3 is trigonal pyramidal"))).toBe(true);
+    expect(
+      lines.some((line) =>
+        line.startsWith("examples/inventory/cylinders.csv:13:25: warning: Molecular geometry of NH3 is trigonal pyramidal"),
+      ),
+    ).toBe(true);
     // common practice: carbon holds at most four electron pairs, so CH5 is impossible
-    expect(lines.some((line) => line.startsWith("examples/inventory/cylinders.csv:15:17: error: CH5:") && line.endsWith("[octet-exceeded]"))).toBe(true);
+    expect(
+      lines.some((line) => line.startsWith("examples/inventory/cylinders.csv:15:17: error: CH5:") && line.endsWith("[octet-exceeded]")),
+    ).toBe(true);
     // common practice: nitrite is AX2E1, bent
-    expect(lines.some((line) => line.startsWith("examples/inventory/ions.yaml:44:25: warning: Molecular geometry of NO2- is bent"))).toBe(true);
+    expect(lines.some((line) => line.startsWith("examples/inventory/ions.yaml:44:25: warning: Molecular geometry of NO2- is bent"))).toBe(
+      true,
+    );
     // common practice: BrF5 has 7 + 5 x 7 = 42 and XeF4 8 + 4 x 7 = 36 valence electrons
     expect(lines).toContain(
       "examples/notebook/run-14-fluorinating-agents.md:22:38: warning: Valence electrons for BrF5 are 42, the table says 40. [table-valence-electrons]",

@@ -16,13 +16,17 @@ const folder = mkdtempSync(join(tmpdir(), "lonepair-bytes-"));
 async function checked(path: string, kind: "csv" | "tsv", options: { ordinaryReading?: boolean; rowBufferBytes?: number }) {
   const located: LocatedFinding[] = [];
   const summary = emptySummary();
-  await checkFile({ path, displayPath: "table", kind, size: 0 }, { fix: false, dryRun: false, ...options }, {
-    reporter: { findings: (found) => located.push(...found), end: () => undefined },
-    summary,
-    writeDiff: () => undefined,
-    progress: () => undefined,
-    note: () => undefined,
-  });
+  await checkFile(
+    { path, displayPath: "table", kind, size: 0 },
+    { fix: false, dryRun: false, ...options },
+    {
+      reporter: { findings: (found) => located.push(...found), end: () => undefined },
+      summary,
+      writeDiff: () => undefined,
+      progress: () => undefined,
+      note: () => undefined,
+    },
+  );
   return { located, summary };
 }
 

@@ -35,7 +35,12 @@ async function streamed(text: string, kind: "csv" | "tsv", batchCharacters: numb
     rebuilt += batch.text;
     const model = batchModel(batch, kind, context);
     const move = (range: { start: number; end: number }) => ({ start: range.start + batch.offset, end: range.end + batch.offset });
-    for (const finding of model.findings()) findings.push({ ...finding, range: move(finding.range), ...(finding.fix ? { fix: { ...finding.fix, range: move(finding.fix.range) } } : {}) });
+    for (const finding of model.findings())
+      findings.push({
+        ...finding,
+        range: move(finding.range),
+        ...(finding.fix ? { fix: { ...finding.fix, range: move(finding.fix.range) } } : {}),
+      });
     for (const occurrence of model.occurrences) {
       species.push([occurrence.range.start + batch.offset, occurrence.text]);
       positions.push(batch.lines.position(occurrence.range.start));
@@ -112,6 +117,8 @@ describe("CSV in batches", () => {
     const actual = await streamed(text, "csv", batchCharacters);
     expect(actual.findings).toEqual(whole(text, "csv").findings);
     // common practice: NF3 has 26 valence electrons; the rows at 5, 1002, ... say 24
-    expect(actual.findings.map((finding) => finding.code)).toEqual(Array(Math.floor((24_000 - 6) / 997) + 1).fill("table-valence-electrons"));
+    expect(actual.findings.map((finding) => finding.code)).toEqual(
+      Array(Math.floor((24_000 - 6) / 997) + 1).fill("table-valence-electrons"),
+    );
   });
 });

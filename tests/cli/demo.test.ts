@@ -27,7 +27,9 @@ describe("README's first command in a fresh clone", () => {
     // The example workspace's deliberate mistakes, as the README lists them.
     // common practice: NF3 has 26 valence electrons, NH3 is trigonal pyramidal, CH5 exceeds carbon's octet
     expect(out).toContain("examples/inventory/cylinders.csv:4:34: warning: Valence electrons for NF3 are 26, the table says 24.");
-    expect(out).toMatch(/examples\/inventory\/cylinders\.csv:13:25: warning: Molecular geometry of NH3 is trigonal pyramidal .*the table says trigonal planar/);
+    expect(out).toMatch(
+      /examples\/inventory\/cylinders\.csv:13:25: warning: Molecular geometry of NH3 is trigonal pyramidal .*the table says trigonal planar/,
+    );
     expect(out).toMatch(/examples\/inventory\/cylinders\.csv:15:17: error: CH5: .*\[octet-exceeded\]/);
     // common practice: BrF5 has 42, XeF4 36 valence electrons; nitrite is bent
     expect(out).toContain("Valence electrons for BrF5 are 42, the table says 40.");

@@ -10,7 +10,11 @@ import { ensureBuilt, fixtureCopy, runCli } from "./cliRunner";
 beforeAll(ensureBuilt);
 
 function bytesOf(folder: string): Record<string, Buffer> {
-  return Object.fromEntries(readdirSync(folder).sort().map((name) => [name, readFileSync(join(folder, name))]));
+  return Object.fromEntries(
+    readdirSync(folder)
+      .sort()
+      .map((name) => [name, readFileSync(join(folder, name))]),
+  );
 }
 
 /** `before` with each [old, new] replaced once, at the place `old` first appears after `after`. */

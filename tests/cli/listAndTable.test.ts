@@ -26,7 +26,9 @@ describe("list --json", () => {
     for (const species of listed) expect(Object.keys(species)).toEqual(["file", "line", "column", "length", "text", "formula", "charge"]);
     // The span read back from the file by line, column and length is the text listed.
     for (const species of listed) {
-      const lines = readFileSync(join(repositoryRoot, species.file), "utf8").replace(/^\ufeff/, "").split(/\r\n|\r|\n/);
+      const lines = readFileSync(join(repositoryRoot, species.file), "utf8")
+        .replace(/^\ufeff/, "")
+        .split(/\r\n|\r|\n/);
       expect(lines[species.line - 1].slice(species.column - 1, species.column - 1 + species.length)).toBe(species.text);
     }
     expect(listed.filter((species) => species.file.endsWith(".yaml")).map((species) => [species.text, species.charge])).toEqual([
@@ -38,7 +40,12 @@ describe("list --json", () => {
       ["sulfate", -2],
       ["SO4^2-", -2],
     ]);
-    expect(listed.filter((species) => species.file.endsWith(".csv")).map((species) => species.formula)).toEqual(["SF6", "NF3", "H2O", "CO2"]);
+    expect(listed.filter((species) => species.file.endsWith(".csv")).map((species) => species.formula)).toEqual([
+      "SF6",
+      "NF3",
+      "H2O",
+      "CO2",
+    ]);
     expect(listed.find((species) => species.text === "NF3")).toMatchObject({ line: 3, column: 10, length: 3 });
   });
 
@@ -64,7 +71,9 @@ describe("table", () => {
     const run = runCli(["table", "tests/fixtures/cli/run-22-bay-d-audit.md"]);
     expect(run.status).toBe(0);
     const lines = run.stdout.split("\n");
-    expect(lines[0]).toBe("| Formula | Name | Valence electrons | AXE | Electron geometry | Molecular geometry | Ideal angles | Hybridization | Polarity |");
+    expect(lines[0]).toBe(
+      "| Formula | Name | Valence electrons | AXE | Electron geometry | Molecular geometry | Ideal angles | Hybridization | Polarity |",
+    );
     // common practice: SF4 AX4E1 seesaw, 34 electrons; ClF3 AX3E2 T-shaped, 28 electrons
     expect(lines[2]).toMatch(/^\| SF4 \| sulfur tetrafluoride \| 34 \| AX4E1 \| trigonal bipyramidal \| seesaw \|/);
     expect(lines[3]).toMatch(/^\| ClF3 \| chlorine trifluoride \| 28 \| AX3E2 \| trigonal bipyramidal \| T-shaped \|/);

@@ -74,7 +74,9 @@ describe("check --format sarif", () => {
         artifactChanges: [
           {
             artifactLocation: { uri: "examples/inventory/cylinders.csv" },
-            replacements: [{ deletedRegion: { startLine: 4, startColumn: 34, endLine: 4, endColumn: 36 }, insertedContent: { text: "26" } }],
+            replacements: [
+              { deletedRegion: { startLine: 4, startColumn: 34, endLine: 4, endColumn: 36 }, insertedContent: { text: "26" } },
+            ],
           },
         ],
       },

@@ -47,7 +47,10 @@ describe("check output on a terminal", () => {
     const run = runCli(["check", "--format", format, "."], plantedFolder(fileName));
     expect(run.stdout).not.toMatch(CONTROL);
     const parsed = JSON.parse(run.stdout);
-    const messages: string[] = format === "json" ? parsed.map((finding: { message: string }) => finding.message) : parsed.runs[0].results.map((result: { message: { text: string } }) => result.message.text);
+    const messages: string[] =
+      format === "json"
+        ? parsed.map((finding: { message: string }) => finding.message)
+        : parsed.runs[0].results.map((result: { message: { text: string } }) => result.message.text);
     expect(messages.some((message) => message.includes(PLANTED))).toBe(true);
     const files: string[] = format === "json" ? parsed.map((finding: { file: string }) => finding.file) : [];
     for (const file of files) expect(file).toBe(fileName);

@@ -25,9 +25,16 @@ const NOTE = [
   "",
 ].join("\n");
 
-const STEREO_NOTE = ["# Run 16: difluoroethene isomers", "", "Cis isomer: `smiles:F/C=C\\F`, trans isomer: `smiles:F/C=C/F`.", ""].join("\n");
+const STEREO_NOTE = ["# Run 16: difluoroethene isomers", "", "Cis isomer: `smiles:F/C=C\\F`, trans isomer: `smiles:F/C=C/F`.", ""].join(
+  "\n",
+);
 
-const CYLINDERS = ["id,species,formula,molecular geometry", "KR-0412,sulfur hexafluoride,SF6,octahedral", "KR-0413,ammonia,NH3,trigonal planar", ""].join("\n");
+const CYLINDERS = [
+  "id,species,formula,molecular geometry",
+  "KR-0412,sulfur hexafluoride,SF6,octahedral",
+  "KR-0413,ammonia,NH3,trigonal planar",
+  "",
+].join("\n");
 
 let session: LspSession;
 
@@ -73,9 +80,13 @@ describe("requests the client sends", () => {
   });
 
   it("summary table with no format asked comes in the document's own format", async () => {
-    const csv = await session.connection.sendRequest<SummaryTableResult>("lonepair/summaryTable", { uri: fixtureUri("inventory/cylinders.csv") });
+    const csv = await session.connection.sendRequest<SummaryTableResult>("lonepair/summaryTable", {
+      uri: fixtureUri("inventory/cylinders.csv"),
+    });
     expect(csv.format).toBe("csv");
-    const tsv = await session.connection.sendRequest<SummaryTableResult>("lonepair/summaryTable", { uri: fixtureUri("inventory/ions.tsv") });
+    const tsv = await session.connection.sendRequest<SummaryTableResult>("lonepair/summaryTable", {
+      uri: fixtureUri("inventory/ions.tsv"),
+    });
     expect(tsv.format).toBe("tsv");
     expect(tsv.text.split("\n")[0]).toContain("Formula\tName\t");
     // common practice: sulfate is tetrahedral.
@@ -104,7 +115,10 @@ describe("requests the client sends", () => {
     ["trans", 55, "C2h"],
   ])("the %s isomer keeps its geometry in the 3D view model and in the exported coordinates", async (_isomer, character, group) => {
     const position = { line: 2, character };
-    const model = await session.connection.sendRequest<ShapeModelResult | null>("lonepair/shapeModel", { uri: fixtureUri("notebook/run-16.md"), position });
+    const model = await session.connection.sendRequest<ShapeModelResult | null>("lonepair/shapeModel", {
+      uri: fixtureUri("notebook/run-16.md"),
+      position,
+    });
     expect(model?.model, JSON.stringify(model)).toBeDefined();
     const viewAtoms = model!.model!.atoms.map((atom) => ({ element: atom.symbol, position: atom.position }));
     const fromView = findPointGroup(viewAtoms);
@@ -140,7 +154,9 @@ describe("requests the client sends", () => {
   });
 
   it("document summary counts the species mentions and the problems of the open version", async () => {
-    const summary = await session.connection.sendRequest<DocumentSummaryResult | null>("lonepair/documentSummary", { uri: fixtureUri("inventory/cylinders.csv") });
+    const summary = await session.connection.sendRequest<DocumentSummaryResult | null>("lonepair/documentSummary", {
+      uri: fixtureUri("inventory/cylinders.csv"),
+    });
     // Two rows, each naming its species twice (name and formula).
     expect(summary?.species).toBe(4);
     // The "trigonal planar" NH3 row is wrong: common practice says trigonal pyramidal.

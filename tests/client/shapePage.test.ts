@@ -69,7 +69,12 @@ describe.skipIf(!haveBrowser)("3D shape page in headless Chromium", () => {
       void dialog.dismiss();
     });
     const nonce = randomBytes(18).toString("base64");
-    const html = shapePageHtml({ cspSource: ORIGIN, nonce, scriptUri: `${ORIGIN}/media/shapeView.js`, styleUri: `${ORIGIN}/media/shapeView.css` });
+    const html = shapePageHtml({
+      cspSource: ORIGIN,
+      nonce,
+      scriptUri: `${ORIGIN}/media/shapeView.js`,
+      styleUri: `${ORIGIN}/media/shapeView.css`,
+    });
     await page.route(`${ORIGIN}/**`, async (route) => {
       const path = new URL(route.request().url()).pathname;
       if (path === "/index.html") return route.fulfill({ contentType: "text/html", body: html });
@@ -142,7 +147,9 @@ describe.skipIf(!haveBrowser)("3D shape page in headless Chromium", () => {
     await page.mouse.up();
     const after = await page.locator("g.atom circle").evaluateAll((circles) => circles.map((circle) => circle.getAttribute("cx")));
     expect(after).not.toEqual(before);
-    const saved = await page.evaluate(() => (globalThis as unknown as PageGlobals).savedState as { mode: string; rotation: number[]; model: { formula: string } });
+    const saved = await page.evaluate(
+      () => (globalThis as unknown as PageGlobals).savedState as { mode: string; rotation: number[]; model: { formula: string } },
+    );
     expect(saved.mode).toBe("electron");
     expect(saved.model.formula).toBe("XeF4");
     expect(saved.rotation).toHaveLength(9);
@@ -168,7 +175,11 @@ describe.skipIf(!haveBrowser)("3D shape page in headless Chromium", () => {
     // One script element only: the page's own.
     expect(await page.locator("script").count()).toBe(1);
     expect(await page.locator("img").count()).toBe(0);
-    await page.evaluate((message) => (globalThis as unknown as PageGlobals).postMessage(message, "*"), { type: "problem", text: INJECTED, message: INJECTED });
+    await page.evaluate((message) => (globalThis as unknown as PageGlobals).postMessage(message, "*"), {
+      type: "problem",
+      text: INJECTED,
+      message: INJECTED,
+    });
     expect(await page.locator("#title").textContent()).toBe(INJECTED);
     expect(await page.locator("script").count()).toBe(1);
     await page.waitForTimeout(200);
@@ -233,7 +244,11 @@ describe.skipIf(!haveBrowser)("3D shape page in headless Chromium", () => {
     await show(page, viewOf("SF4"));
     await page.waitForSelector("g.atom");
     await show(page, model);
-    await page.waitForFunction(() => (globalThis as unknown as { document: { getElementById(id: string): { textContent: string } } }).document.getElementById("title").textContent === "No model");
+    await page.waitForFunction(
+      () =>
+        (globalThis as unknown as { document: { getElementById(id: string): { textContent: string } } }).document.getElementById("title")
+          .textContent === "No model",
+    );
     expect(await page.locator("g.atom").count()).toBe(0);
     expect(await page.locator("#subtitle").textContent()).toMatch(/^The shape could not be drawn: .+\.$/);
     expect(errors).toEqual([]);
@@ -260,7 +275,10 @@ describe.skipIf(!haveBrowser)("3D shape page in headless Chromium", () => {
   });
 
   it.each([
-    ["a model with a null symbol", { model: withAtoms((atoms) => [{ ...atoms[0], symbol: null }, ...atoms.slice(1)]), mode: "electron", rotation: [1] }],
+    [
+      "a model with a null symbol",
+      { model: withAtoms((atoms) => [{ ...atoms[0], symbol: null }, ...atoms.slice(1)]), mode: "electron", rotation: [1] },
+    ],
     ["text", "garbage"],
     ["a rotation of text", { model: null, problem: null, mode: 3, rotation: "abc" }],
   ])("opens with a saved state that is %s without an error", async (_label, saved) => {

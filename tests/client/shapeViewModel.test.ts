@@ -34,10 +34,46 @@ interface ShapeCase {
 // common practice: VSEPR classes, geometry names, hybridization and ideal angles as every
 // general-chemistry table gives them for these four species.
 const CASES: readonly ShapeCase[] = [
-  { species: "SF4", atoms: 5, centreLonePairs: 1, axe: "AX4E1", electronGeometry: "trigonal bipyramidal", molecularGeometry: "seesaw", hybridization: "sp3d", labelledAngles: [90, 120, 180] },
-  { species: "XeF4", atoms: 5, centreLonePairs: 2, axe: "AX4E2", electronGeometry: "octahedral", molecularGeometry: "square planar", hybridization: "sp3d2", labelledAngles: [90, 180] },
-  { species: "H2O", atoms: 3, centreLonePairs: 2, axe: "AX2E2", electronGeometry: "tetrahedral", molecularGeometry: "bent", hybridization: "sp3", labelledAngles: [109.5] },
-  { species: "CH4", atoms: 5, centreLonePairs: 0, axe: "AX4", electronGeometry: "tetrahedral", molecularGeometry: "tetrahedral", hybridization: "sp3", labelledAngles: [109.5] },
+  {
+    species: "SF4",
+    atoms: 5,
+    centreLonePairs: 1,
+    axe: "AX4E1",
+    electronGeometry: "trigonal bipyramidal",
+    molecularGeometry: "seesaw",
+    hybridization: "sp3d",
+    labelledAngles: [90, 120, 180],
+  },
+  {
+    species: "XeF4",
+    atoms: 5,
+    centreLonePairs: 2,
+    axe: "AX4E2",
+    electronGeometry: "octahedral",
+    molecularGeometry: "square planar",
+    hybridization: "sp3d2",
+    labelledAngles: [90, 180],
+  },
+  {
+    species: "H2O",
+    atoms: 3,
+    centreLonePairs: 2,
+    axe: "AX2E2",
+    electronGeometry: "tetrahedral",
+    molecularGeometry: "bent",
+    hybridization: "sp3",
+    labelledAngles: [109.5],
+  },
+  {
+    species: "CH4",
+    atoms: 5,
+    centreLonePairs: 0,
+    axe: "AX4",
+    electronGeometry: "tetrahedral",
+    molecularGeometry: "tetrahedral",
+    hybridization: "sp3",
+    labelledAngles: [109.5],
+  },
 ];
 
 describe("shape view model", () => {
@@ -67,7 +103,9 @@ describe("shape view model", () => {
     const view = viewOf("SF4");
     const sulfur = view.atoms.find((atom) => atom.symbol === "S")!;
     const fluorines = view.atoms.filter((atom) => atom.symbol === "F");
-    const axial = fluorines.filter((a) => fluorines.some((b) => b !== a && angleDegrees(sub(a.position, sulfur.position), sub(b.position, sulfur.position)) > 175));
+    const axial = fluorines.filter((a) =>
+      fluorines.some((b) => b !== a && angleDegrees(sub(a.position, sulfur.position), sub(b.position, sulfur.position)) > 175),
+    );
     expect(axial).toHaveLength(2);
     expect(angleDegrees(view.lonePairs[0].direction, sub(axial[0].position, sulfur.position))).toBeCloseTo(90, 0);
   });
@@ -116,7 +154,14 @@ describe("shape view model", () => {
     // The model draws CH3 flat (no domain for the odd electron), so a direction is added here.
     const analysis = analysed("CH3");
     const coordinates = buildCoordinates(analysis.graph, analysis.radical);
-    const withOddElectron = { ...coordinates, lonePairs: [...coordinates.lonePairs, { atom: 0, direction: [0, 0, 1] as Vec3, electrons: 1 as const }, { atom: 0, direction: [0, 0, -1] as Vec3, electrons: 1 as const }] };
+    const withOddElectron = {
+      ...coordinates,
+      lonePairs: [
+        ...coordinates.lonePairs,
+        { atom: 0, direction: [0, 0, 1] as Vec3, electrons: 1 as const },
+        { atom: 0, direction: [0, 0, -1] as Vec3, electrons: 1 as const },
+      ],
+    };
     const view = shapeViewModel(analysis, withOddElectron);
     expect(view.lonePairs.map((lonePair) => lonePair.electrons)).toEqual([1]);
     expect(view.centres[0].lonePairs).toBe(0);
@@ -125,7 +170,10 @@ describe("shape view model", () => {
   it("copes with coordinates that do not match the structure", () => {
     const analysis = analysed("SF4");
     const coordinates = buildCoordinates(analysis.graph);
-    const short = { atoms: coordinates.atoms.slice(0, 2), lonePairs: [...coordinates.lonePairs, { atom: 99, direction: [0, 0, 1] as Vec3 }] };
+    const short = {
+      atoms: coordinates.atoms.slice(0, 2),
+      lonePairs: [...coordinates.lonePairs, { atom: 99, direction: [0, 0, 1] as Vec3 }],
+    };
     const view = shapeViewModel(analysis, short);
     expect(view.atoms).toHaveLength(2);
     expect(view.bonds.every((bond) => bond.from < 2 && bond.to < 2)).toBe(true);

@@ -17,8 +17,10 @@ function randomCsv(delimiter: string): fc.Arbitrary<string> {
   const row = fc.array(field, { minLength: 1, maxLength: 5 }).filter((fields) => fields.join("").length > 0);
   return fc
     .tuple(fc.array(row, { minLength: 1, maxLength: 6 }), fc.constantFrom("\n", "\r\n"), fc.boolean(), fc.boolean())
-    .map(([rows, lineEnd, bom, finalLineEnd]) =>
-      (bom ? "\ufeff" : "") + rows.map((fields) => fields.join(delimiter)).join(lineEnd) + (finalLineEnd ? lineEnd : ""));
+    .map(
+      ([rows, lineEnd, bom, finalLineEnd]) =>
+        (bom ? "\ufeff" : "") + rows.map((fields) => fields.join(delimiter)).join(lineEnd) + (finalLineEnd ? lineEnd : ""),
+    );
 }
 
 function ourValues(text: string, delimiter: string): string[][] {

@@ -40,8 +40,8 @@ describe("CSV findings worked out once per distinct row", () => {
         const memo = delimitedRowMemo();
         const prefix = text.slice(0, headerEnd);
         const firstPiece = checkDelimitedText(text.slice(0, cut), kind, { delimiter, memo });
-        const secondPiece = checkDelimitedText(prefix + text.slice(cut), kind, { delimiter, memo, from: prefix.length }).map(
-          (finding) => shifted(finding, cut - prefix.length),
+        const secondPiece = checkDelimitedText(prefix + text.slice(cut), kind, { delimiter, memo, from: prefix.length }).map((finding) =>
+          shifted(finding, cut - prefix.length),
         );
         const cutInsideFinding = expected.some((finding) => finding.range.start < cut && finding.range.end > cut);
         if (!cutInsideFinding) expect([...firstPiece, ...secondPiece]).toEqual(expected);

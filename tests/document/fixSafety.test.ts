@@ -30,26 +30,44 @@ describe("which fixes are offered", () => {
     ["deuterated solvent in a formula column", "formula,name\nCDCl3,chloroform-d\n", "csv", []],
     // common practice: tBu is tert-butyl, Et ethyl, Me methyl; Et2O (diethyl ether) and MeCN
     // (acetonitrile) are abbreviations the name vocabulary knows, so they are species, not notes
-    ["group abbreviations in a species column", "species\ntBuOH\nEt2O\nMeCN\nPhCH3\n", "csv", [
-      ["information", "tBuOH", "-"],
-      ["information", "PhCH3", "-"],
-    ]],
+    [
+      "group abbreviations in a species column",
+      "species\ntBuOH\nEt2O\nMeCN\nPhCH3\n",
+      "csv",
+      [
+        ["information", "tBuOH", "-"],
+        ["information", "PhCH3", "-"],
+      ],
+    ],
     // common practice: limonene and bacon are words, not symbol strings to re-case (krypton is an
     // element's name, which the name vocabulary reads as Kr)
-    ["words in a species column are notes, never re-cased", "species\nLimonene\nBacon\nnacl\n", "csv", [
-      ["information", "Limonene", "-"],
-      ["information", "Bacon", "-"],
-      ["information", "nacl", "-"],
-    ]],
-    ["words in a markdown species column", "| Species | Notes |\n|---|---|\n| Limonene | citrus |\n| KRYPTON | bay C |\n", "markdown", [
-      ["information", "Limonene", "-"],
-    ]],
+    [
+      "words in a species column are notes, never re-cased",
+      "species\nLimonene\nBacon\nnacl\n",
+      "csv",
+      [
+        ["information", "Limonene", "-"],
+        ["information", "Bacon", "-"],
+        ["information", "nacl", "-"],
+      ],
+    ],
+    [
+      "words in a markdown species column",
+      "| Species | Notes |\n|---|---|\n| Limonene | citrus |\n| KRYPTON | bay C |\n",
+      "markdown",
+      [["information", "Limonene", "-"]],
+    ],
     // common practice: element symbols are a capital and an optional lower-case letter
     ["a mis-cased formula in prose", "The CLF3 line was weak.", "markdown", [["error", "CLF3", "ClF3"]]],
-    ["a mis-cased formula in a formula column", "formula\nSf6\nnh4+\n", "csv", [
-      ["error", "Sf6", "SF6"],
-      ["error", "nh4+", "NH4+"],
-    ]],
+    [
+      "a mis-cased formula in a formula column",
+      "formula\nSf6\nnh4+\n",
+      "csv",
+      [
+        ["error", "Sf6", "SF6"],
+        ["error", "nh4+", "NH4+"],
+      ],
+    ],
     ["a mis-cased formula in mhchem", "\\ce{XEF4 + H2O}", "markdown", [["error", "XEF4", "XeF4"]]],
     // from memory: sulfate is SO4 with charge 2-; "SO42-" runs the count and the charge together
     ["a charge run into the count", "formula\nSO42-\n", "csv", [["error", "SO42-", "SO4^2-"]]],
@@ -109,13 +127,17 @@ function fixViolations(text: string, kind: DocumentKind): string[] {
     }
     const fixed = text.slice(0, fix.range.start) + fix.newText + text.slice(fix.range.end);
     const shift = fix.newText.length - (fix.range.end - fix.range.start);
-    const before = new Set(findings.filter((other) => other.severity === "error" && other !== finding).map((other) => errorKey(text, other, other.range.start)));
+    const before = new Set(
+      findings.filter((other) => other.severity === "error" && other !== finding).map((other) => errorKey(text, other, other.range.start)),
+    );
     for (const after of checkDocument(analyzeDocument(fixed, kind))) {
       if (after.severity !== "error") continue;
       const inFix = after.range.start < fix.range.start + fix.newText.length && after.range.end > fix.range.start;
       const original = after.range.start >= fix.range.start + fix.newText.length ? after.range.start - shift : after.range.start;
       if (inFix || !before.has(errorKey(fixed, after, original))) {
-        violations.push(`"${text.slice(fix.range.start, fix.range.end)}" -> "${fix.newText}" leaves ${after.code} on "${fixed.slice(after.range.start, after.range.end)}"`);
+        violations.push(
+          `"${text.slice(fix.range.start, fix.range.end)}" -> "${fix.newText}" leaves ${after.code} on "${fixed.slice(after.range.start, after.range.end)}"`,
+        );
       }
     }
   }
@@ -136,10 +158,46 @@ describe("applying a fix never creates an error", () => {
   // common practice: how formulas, names, abbreviations and words appear in lab documents; each
   // is right as written, so no fix may touch it
   const CORRECT = [
-    "SF4", "ClF3", "SO4^2-", "CDCl3", "PhCH3", "tBuOH", "EtOH", "THF", "Limonene", "Bacon", "BACON",
-    "NaCl", "Co2", "CO2", "NO", "US", "The", "water", "H2O", "Fe3+", "CO<sub>2</sub>", "\\ce{SF4 + H2O}",
-    "`smiles:CCO`", "2H2", "C", "+", "->", "→", "(aq)", "R–OH", "H315", "Ti6Al4V", "KR-0412", "NO2", "Ca+2",
-    "CO3-2", "Et2O", "MeCN", "D2O", "iPrOH",
+    "SF4",
+    "ClF3",
+    "SO4^2-",
+    "CDCl3",
+    "PhCH3",
+    "tBuOH",
+    "EtOH",
+    "THF",
+    "Limonene",
+    "Bacon",
+    "BACON",
+    "NaCl",
+    "Co2",
+    "CO2",
+    "NO",
+    "US",
+    "The",
+    "water",
+    "H2O",
+    "Fe3+",
+    "CO<sub>2</sub>",
+    "\\ce{SF4 + H2O}",
+    "`smiles:CCO`",
+    "2H2",
+    "C",
+    "+",
+    "->",
+    "→",
+    "(aq)",
+    "R–OH",
+    "H315",
+    "Ti6Al4V",
+    "KR-0412",
+    "NO2",
+    "Ca+2",
+    "CO3-2",
+    "Et2O",
+    "MeCN",
+    "D2O",
+    "iPrOH",
   ];
   // common practice: mistakes people make typing formulas and names
   const WRONG = ["Sf4", "CLF3", "XEF4", "nh4+", "SO42-", "nacl", "amonia", "sulfer tetrafluoride", "\\ce{Sf4}", "CH5", "Ch5"];
@@ -177,7 +235,9 @@ describe("applying a fix never creates an error", () => {
   /** Fixes that would rewrite part of a piece that is right as written. */
   function fixesOnCorrectText({ text, correct }: Generated, kind: DocumentKind): string[] {
     return checkDocument(analyzeDocument(text, kind))
-      .filter((finding) => finding.fix && correct.some((range) => finding.fix!.range.start < range.end && finding.fix!.range.end > range.start))
+      .filter(
+        (finding) => finding.fix && correct.some((range) => finding.fix!.range.start < range.end && finding.fix!.range.end > range.start),
+      )
       .map((finding) => `"${text.slice(finding.fix!.range.start, finding.fix!.range.end)}" -> "${finding.fix!.newText}"`);
   }
 

@@ -9,7 +9,11 @@ import { stripLabels } from "./labelledText";
 /** Compares the mentions found with the ⟦labels⟧, as [start, text, formula] triples. */
 function check(marked: string, formulas: readonly string[]): void {
   const { text, labels } = stripLabels(marked);
-  const found = analyzeDocument(text, "markdown").occurrences.map((occurrence) => [occurrence.range.start, occurrence.text, occurrence.reading.formula]);
+  const found = analyzeDocument(text, "markdown").occurrences.map((occurrence) => [
+    occurrence.range.start,
+    occurrence.text,
+    occurrence.reading.formula,
+  ]);
   expect(found).toEqual(labels.map((label, index) => [label.start, label.text, formulas[index]]));
 }
 

@@ -10,7 +10,9 @@ import { lineAndColumn, stripLabels } from "./labelledText";
 /** The scanner's occurrences against the labels, as "line:column text" lists. */
 function check(marked: string, kind: DocumentKind): void {
   const { text, labels } = stripLabels(marked);
-  const found = analyzeDocument(text, kind).occurrences.map((occurrence) => `${lineAndColumn(text, occurrence.range.start)} ${occurrence.text}`);
+  const found = analyzeDocument(text, kind).occurrences.map(
+    (occurrence) => `${lineAndColumn(text, occurrence.range.start)} ${occurrence.text}`,
+  );
   expect(found).toEqual(labels.map((label) => `${lineAndColumn(text, label.start)} ${label.text}`));
 }
 
@@ -126,7 +128,10 @@ describe("data columns", () => {
   it.each([
     ["Compound ID,SMILES\nLimonene,⟦CC1=CCC(CC1)C(=C)C⟧\nKR-C-0012,⟦CCO⟧\n", "csv"],
     ["name,canonical smiles\n⟦ethanol⟧,⟦CCO⟧\n⟦water⟧,⟦O⟧\n", "csv"],
-    ["Chemical name,Formula,Notes\n⟦Sodium chloride⟧,⟦NaCl⟧,\nUniversal indicator,—,mixture\npH 7 buffer,n/a,\nPhenol red solution,-,\n", "csv"],
+    [
+      "Chemical name,Formula,Notes\n⟦Sodium chloride⟧,⟦NaCl⟧,\nUniversal indicator,—,mixture\npH 7 buffer,n/a,\nPhenol red solution,-,\n",
+      "csv",
+    ],
     ["| Compound | Formula |\n|---|---|\n| ⟦water⟧ | ⟦H2O⟧ |\n| tap rinse | — |\n", "markdown"],
   ])("%j", (marked, kind) => {
     check(marked, kind as DocumentKind);
@@ -141,7 +146,10 @@ describe("data columns", () => {
 
   it("gives no finding for placeholders and unknown ids, and reports a SMILES that does not parse", () => {
     const text = "Compound ID,SMILES,Formula\nKR-C-0012,C1CC(,—\nKR-C-0013,CCO,n/a\n";
-    const findings = checkDocument(analyzeDocument(text, "csv")).map((finding) => [finding.severity, text.slice(finding.range.start, finding.range.end)]);
+    const findings = checkDocument(analyzeDocument(text, "csv")).map((finding) => [
+      finding.severity,
+      text.slice(finding.range.start, finding.range.end),
+    ]);
     // common practice: an unclosed branch "(" makes a SMILES unreadable
     expect(findings).toEqual([["error", "C1CC("]]);
   });
@@ -155,11 +163,14 @@ describe("code spans and reStructuredText", () => {
     ["Polyprotic acids (:math:`\\mathrm{⟦H_3PO_4⟧}`) lose protons in steps.", "plaintext"],
     ["See `the note on dissolved ⟦CO2⟧ <https://docs.kestrel-ridge.example/carbonate.html>`_ first.", "plaintext"],
     [
-      "Run it like this:\n\n.. code-block:: python\n\n    t = Titration(analyte=\"CH3COOH\", titrant=\"NaOH\")\n\nThen ⟦NaOH⟧ is added.\n",
+      'Run it like this:\n\n.. code-block:: python\n\n    t = Titration(analyte="CH3COOH", titrant="NaOH")\n\nThen ⟦NaOH⟧ is added.\n',
       "plaintext",
     ],
     ["The output::\n\n    NH3 HCl H3PO4\n\nends the run with ⟦HCl⟧.\n", "plaintext"],
-    [".. math::\n\n   K_a = \\frac{[\\mathrm{⟦H_3O^+⟧}][\\mathrm{A^-}]}{[\\mathrm{HA}]}\n\n.. note::\n\n   Keep ⟦NaOH⟧ closed.\n", "plaintext"],
+    [
+      ".. math::\n\n   K_a = \\frac{[\\mathrm{⟦H_3O^+⟧}][\\mathrm{A^-}]}{[\\mathrm{HA}]}\n\n.. note::\n\n   Keep ⟦NaOH⟧ closed.\n",
+      "plaintext",
+    ],
   ])("%j", (marked, kind) => {
     check(marked, kind as DocumentKind);
   });

@@ -4,14 +4,7 @@
  */
 import { describe, expect, it } from "vitest";
 import { analyzeDocument, documentKindFor, readSpecies } from "../../shared/src/index";
-import {
-  formatScoreTable,
-  PRECISION_AIM,
-  RECALL_AIM,
-  scoreRealStyleCorpus,
-  type Mention,
-  type SpottingScore,
-} from "./realStyleScore";
+import { formatScoreTable, PRECISION_AIM, RECALL_AIM, scoreRealStyleCorpus, type Mention, type SpottingScore } from "./realStyleScore";
 
 /**
  * A ratchet, not the aim. The aims are precision >= 0.97 and recall >= 0.92 (PRECISION_AIM,
@@ -46,7 +39,12 @@ function byCause(mentions: readonly Mention[]): string {
     .map(
       ([group, members]) =>
         `  ${group} (${members.length}):\n` +
-        members.map((mention) => `    ${mention.file}:${mention.where} ${JSON.stringify(mention.text)}${mention.detail ? `  (${mention.detail})` : ""}`).join("\n"),
+        members
+          .map(
+            (mention) =>
+              `    ${mention.file}:${mention.where} ${JSON.stringify(mention.text)}${mention.detail ? `  (${mention.detail})` : ""}`,
+          )
+          .join("\n"),
     )
     .join("\n");
 }

@@ -116,7 +116,8 @@ export function writtenForm(text: string): string {
 function falseReport(file: string, where: string, span: Span, labels: readonly Span[], refused: boolean): Mention {
   const overlapping = labels.filter((label) => label.start < span.end && span.start < label.end);
   const what = refused ? "refused mention" : "species";
-  if (overlapping.length === 0) return { file, where, text: span.text, cause: `${what} where nothing is labelled`, form: writtenForm(span.text) };
+  if (overlapping.length === 0)
+    return { file, where, text: span.text, cause: `${what} where nothing is labelled`, form: writtenForm(span.text) };
   return {
     file,
     where,
@@ -207,7 +208,9 @@ export function scoreRealStyleCorpus(engine: SpottingEngine, root: string = REAL
     .sort()
     .map((style): StyleScore => {
       const directory = join(root, style);
-      const files = readdirSync(directory).filter((file) => !file.startsWith(".")).sort();
+      const files = readdirSync(directory)
+        .filter((file) => !file.startsWith("."))
+        .sort();
       return { style, ...combined(files.map((file) => scoreDocument(engine, directory, file))) };
     });
   return { styles, overall: combined(styles) };

@@ -29,8 +29,47 @@ function expectRangesInside(model: DocumentModel, length: number): void {
 
 // Characters that drive the scanners' decisions, so random text reaches their corners.
 const SIGNIFICANT = fc.constantFrom(
-  "S", "F", "4", "N", "H", "+", "-", "^", "2", "(", ")", "[", "]", "`", "\\ce{", "}", "|", "---", "\n", "\r\n", " ",
-  '"', ",", "\t", ":", "{", "<!--", "-->", "```", "smiles:", "·", "²", "⁻", "₄", "\ufeff", "#", "- ", "Cl", "Xe", "e", "\u0000",
+  "S",
+  "F",
+  "4",
+  "N",
+  "H",
+  "+",
+  "-",
+  "^",
+  "2",
+  "(",
+  ")",
+  "[",
+  "]",
+  "`",
+  "\\ce{",
+  "}",
+  "|",
+  "---",
+  "\n",
+  "\r\n",
+  " ",
+  '"',
+  ",",
+  "\t",
+  ":",
+  "{",
+  "<!--",
+  "-->",
+  "```",
+  "smiles:",
+  "·",
+  "²",
+  "⁻",
+  "₄",
+  "\ufeff",
+  "#",
+  "- ",
+  "Cl",
+  "Xe",
+  "e",
+  "\u0000",
 );
 
 describe("robustness", () => {
@@ -46,10 +85,13 @@ describe("robustness", () => {
 
   it.each(KINDS)("never throws on random scanner-significant text read as %s", (kind) => {
     fc.assert(
-      fc.property(fc.array(SIGNIFICANT, { maxLength: 120 }).map((parts) => parts.join("")), (text) => {
-        const model = analyzeDocument(text, kind);
-        expectRangesInside(model, text.length);
-      }),
+      fc.property(
+        fc.array(SIGNIFICANT, { maxLength: 120 }).map((parts) => parts.join("")),
+        (text) => {
+          const model = analyzeDocument(text, kind);
+          expectRangesInside(model, text.length);
+        },
+      ),
       { numRuns: 500, seed: 11 },
     );
   });
@@ -62,7 +104,7 @@ describe("robustness", () => {
   });
 
   it.each(KINDS)("reads a 2 MB document as %s", (kind) => {
-    const line = "| SF4 | 34 | seesaw |, NF3,\"x\"\t- formula: NH4+ `smiles:C` \\ce{SO4^2-} KR-0412 ";
+    const line = '| SF4 | 34 | seesaw |, NF3,"x"\t- formula: NH4+ `smiles:C` \\ce{SO4^2-} KR-0412 ';
     const text = line.repeat(Math.ceil(2_000_000 / line.length));
     const model = analyzeDocument(text, kind);
     expect(model.kind).toBe(kind);

@@ -40,7 +40,12 @@ describe("species in prose", () => {
 
   it("gives offsets shifted by the offset it is told", () => {
     const found = findSpeciesInProse("then SF4", 100).map((occurrence) => [occurrence.range, occurrence.reading.range]);
-    expect(found).toEqual([[{ start: 105, end: 108 }, { start: 105, end: 108 }]]);
+    expect(found).toEqual([
+      [
+        { start: 105, end: 108 },
+        { start: 105, end: 108 },
+      ],
+    ]);
   });
 
   it("gives each reading the notation it was written in", () => {
@@ -103,8 +108,20 @@ describe("markdown structure", () => {
       record.cells.map((cell) => [cell.meaning, text.slice(cell.range.start, cell.range.end)]),
     ]);
     expect(records).toEqual([
-      ["SF4", [["lonePairs", "1"], ["molecularGeometry", "seesaw"]]],
-      ["NH3", [["lonePairs", "1"], ["molecularGeometry", "trigonal planar"]]],
+      [
+        "SF4",
+        [
+          ["lonePairs", "1"],
+          ["molecularGeometry", "seesaw"],
+        ],
+      ],
+      [
+        "NH3",
+        [
+          ["lonePairs", "1"],
+          ["molecularGeometry", "trigonal planar"],
+        ],
+      ],
     ]);
   });
 });

@@ -41,7 +41,14 @@ XeF4:
 describe("JSON records", () => {
   it("gives exact ranges for arrays of objects and objects keyed by species", () => {
     expect(recordsReadBack(JSON_TEXT, "json")).toEqual([
-      ["SF4", [["valenceElectrons", "34"], ["molecularGeometry", "seesaw"], ["polarity", "true"]]],
+      [
+        "SF4",
+        [
+          ["valenceElectrons", "34"],
+          ["molecularGeometry", "seesaw"],
+          ["polarity", "true"],
+        ],
+      ],
       ["NH4+", [["bondAngle", "109.5"]]],
       ["XeF2", [["lonePairs", "3"]]],
     ]);
@@ -75,9 +82,21 @@ describe("JSON records", () => {
 describe("YAML records", () => {
   it("gives exact ranges inside quotes and before comments, across documents", () => {
     expect(recordsReadBack(YAML_TEXT, "yaml")).toEqual([
-      ["NH4+", [["valenceElectrons", "8"], ["molecularGeometry", "tetrahedral"]]],
+      [
+        "NH4+",
+        [
+          ["valenceElectrons", "8"],
+          ["molecularGeometry", "tetrahedral"],
+        ],
+      ],
       ["SO4^2-", [["polarity", "no"]]],
-      ["XeF4", [["molecularGeometry", "square planar"], ["lonePairs", "2"]]],
+      [
+        "XeF4",
+        [
+          ["molecularGeometry", "square planar"],
+          ["lonePairs", "2"],
+        ],
+      ],
     ]);
   });
 

@@ -17,7 +17,11 @@ const ROWS = [
   "nitrogen trifluoride,NF3,24,trigonal pyramidal",
   "methane,CH5,10,tetrahedral",
 ];
-const HEADERS = ["id,species,formula,valence electrons,molecular geometry", "id,name,formula,electrons,shape", "id,species,formula,notes,molecular geometry"];
+const HEADERS = [
+  "id,species,formula,valence electrons,molecular geometry",
+  "id,name,formula,electrons,shape",
+  "id,species,formula,notes,molecular geometry",
+];
 
 describe("a table's row memo kept across edits", () => {
   it.each([1, 2, 3, 4, 5])("gives the findings of a fresh check after 300 random edits (seed %i)", (seed) => {

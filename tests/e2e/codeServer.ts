@@ -36,10 +36,14 @@ export async function packagedExtension(outDirectory: string): Promise<string> {
   }
   const vsix = join(outDirectory, "lonepair.vsix");
   const vsce = join(REPOSITORY_ROOT, "node_modules", "@vscode", "vsce", "vsce");
-  await run(process.execPath, [vsce, "package", "--no-dependencies", "--allow-missing-repository", "--no-rewrite-relative-links", "--out", vsix], {
-    cwd: REPOSITORY_ROOT,
-    timeout: 180_000,
-  });
+  await run(
+    process.execPath,
+    [vsce, "package", "--no-dependencies", "--allow-missing-repository", "--no-rewrite-relative-links", "--out", vsix],
+    {
+      cwd: REPOSITORY_ROOT,
+      timeout: 180_000,
+    },
+  );
   return vsix;
 }
 
@@ -85,7 +89,10 @@ function commonArguments(folders: EditorFolders): string[] {
 }
 
 export async function installExtension(launcher: string, folders: EditorFolders, vsix: string): Promise<void> {
-  const { stdout } = await run(launcher, [...commonArguments(folders), "--install-extension", vsix], { env: cleanEnvironment(), timeout: 180_000 });
+  const { stdout } = await run(launcher, [...commonArguments(folders), "--install-extension", vsix], {
+    env: cleanEnvironment(),
+    timeout: 180_000,
+  });
   if (!/successfully installed/i.test(stdout)) throw new Error(`code-server did not install the extension: ${stdout}`);
 }
 

@@ -21,7 +21,18 @@ import {
   startCodeServer,
   type RunningCodeServer,
 } from "./codeServer";
-import { goTo, hoverCard, openFile, openWorkbench, problemsOfFile, runCommand, squiggleBoxes, textBox, webviewFrame, type Workbench } from "./workbench";
+import {
+  goTo,
+  hoverCard,
+  openFile,
+  openWorkbench,
+  problemsOfFile,
+  runCommand,
+  squiggleBoxes,
+  textBox,
+  webviewFrame,
+  type Workbench,
+} from "./workbench";
 
 const ARTIFACTS = join(REPOSITORY_ROOT, ".test-artifacts", "e2e");
 const SCENARIO_TIMEOUT_MS = 150_000;
@@ -153,7 +164,9 @@ describe("lonepair in a real VS Code (code-server in headless Chromium)", () => 
       expect(ch5).not.toBeNull();
       const errors = await squiggleBoxes(page, "error");
       const middle = (ch5!.top + ch5!.bottom) / 2;
-      const underCh5 = errors.filter((box) => box.left < ch5!.right && box.right > ch5!.left && box.top <= middle && box.bottom >= middle - 2);
+      const underCh5 = errors.filter(
+        (box) => box.left < ch5!.right && box.right > ch5!.left && box.top <= middle && box.bottom >= middle - 2,
+      );
       expect(underCh5.length).toBeGreaterThan(0);
 
       await page.keyboard.press("Control+Shift+M");
@@ -161,9 +174,11 @@ describe("lonepair in a real VS Code (code-server in headless Chromium)", () => 
       const expected = await cliFindings(file);
       await page.waitForFunction(
         ([count]) =>
-          Array.from((globalThis as unknown as { document: { querySelectorAll(s: string): ArrayLike<{ getAttribute(n: string): string | null }> } }).document.querySelectorAll(".markers-panel .monaco-list-row")).some((row) =>
-            (row.getAttribute("aria-label") ?? "").startsWith(`${count} problems in file cylinders.csv `),
-          ),
+          Array.from(
+            (
+              globalThis as unknown as { document: { querySelectorAll(s: string): ArrayLike<{ getAttribute(n: string): string | null }> } }
+            ).document.querySelectorAll(".markers-panel .monaco-list-row"),
+          ).some((row) => (row.getAttribute("aria-label") ?? "").startsWith(`${count} problems in file cylinders.csv `)),
         [expected.length],
       );
       const problems = await problemsOfFile(page, "cylinders.csv");
@@ -201,7 +216,13 @@ describe("lonepair in a real VS Code (code-server in headless Chromium)", () => 
       await page.keyboard.press("Control+S");
       const after = await diskText(file, (text) => text !== before);
 
-      const offset = before.split("\n").slice(0, cell.line - 1).join("\n").length + 1 + (column - 1);
+      const offset =
+        before
+          .split("\n")
+          .slice(0, cell.line - 1)
+          .join("\n").length +
+        1 +
+        (column - 1);
       expect(after).toBe(`${before.slice(0, offset)}26${before.slice(offset + 2)}`);
       const rowsBefore: Record<string, string>[] = parse(before, { columns: true });
       const rowsAfter: Record<string, string>[] = parse(after, { columns: true });
@@ -223,7 +244,11 @@ describe("lonepair in a real VS Code (code-server in headless Chromium)", () => 
       const heading = positionOf(original, "## Conclusion");
       const line = heading.line + 1;
       expect(original.split("\n")[line - 1]).toBe("");
-      const offset = original.split("\n").slice(0, line - 1).join("\n").length + 1;
+      const offset =
+        original
+          .split("\n")
+          .slice(0, line - 1)
+          .join("\n").length + 1;
       await goTo(page, line, 1);
       await runCommand(page, "lonepair: Insert geometry summary table");
       await page.locator(".editor-group-container.active .view-line", { hasText: "| Formula | Name |" }).first().waitFor();

@@ -5,7 +5,6 @@
 import type { BrowserContext, Frame, Page } from "playwright-core";
 import { launchHeadlessChromium } from "../support/headlessChromium";
 
-
 /** The browser with its own fresh profile, showing the workbench on one folder. */
 export interface Workbench {
   readonly context: BrowserContext;
@@ -58,7 +57,10 @@ export async function goTo(page: Page, line: number, column: number): Promise<vo
   await page.keyboard.press("Enter");
   await page.waitForSelector(".quick-input-widget", { state: "hidden" });
   await page.waitForFunction(
-    ([wanted]) => Array.from((globalThis as unknown as BrowserGlobals).document.querySelectorAll(".statusbar-item")).some((item) => item.textContent?.trim() === wanted),
+    ([wanted]) =>
+      Array.from((globalThis as unknown as BrowserGlobals).document.querySelectorAll(".statusbar-item")).some(
+        (item) => item.textContent?.trim() === wanted,
+      ),
     [`Ln ${line}, Col ${column}`],
   );
 }
@@ -111,7 +113,9 @@ interface BrowserGlobals {
 function findTextInVisibleLines({ context, target }: { context: string; target: string }): TextBox | null {
   const browser = globalThis as unknown as BrowserGlobals;
   const showText = 4; // NodeFilter.SHOW_TEXT
-  for (const line of Array.from(browser.document.querySelectorAll(".editor-group-container.active .monaco-editor .view-lines .view-line"))) {
+  for (const line of Array.from(
+    browser.document.querySelectorAll(".editor-group-container.active .monaco-editor .view-lines .view-line"),
+  )) {
     const pieces: { node: BrowserNode; start: number }[] = [];
     let text = "";
     const walker = browser.document.createTreeWalker(line, showText);
@@ -124,7 +128,10 @@ function findTextInVisibleLines({ context, target }: { context: string; target: 
     const start = at + context.indexOf(target);
     const end = start + target.length;
     const holding = (offset: number, isEnd: boolean) =>
-      pieces.find((piece) => offset >= piece.start && (isEnd ? offset <= piece.start + piece.node.data.length : offset < piece.start + piece.node.data.length));
+      pieces.find(
+        (piece) =>
+          offset >= piece.start && (isEnd ? offset <= piece.start + piece.node.data.length : offset < piece.start + piece.node.data.length),
+      );
     const first = holding(start, false);
     const last = holding(end, true);
     if (!first || !last) continue;

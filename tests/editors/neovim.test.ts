@@ -60,9 +60,10 @@ const nvimVersion = spawnSync("nvim", ["--version"], { encoding: "utf8" });
 const haveNeovim = nvimVersion.error === undefined && nvimVersion.status === 0;
 const inCi = process.env.CI !== undefined;
 const SKIP_REASON = "nvim is not on PATH; install it with `apt-get install -y neovim` (CI does, in .ci/run)";
-const title = haveNeovim || inCi
-  ? "Neovim (headless) as a client of the language server"
-  : `Neovim (headless) as a client of the language server (skipped: ${SKIP_REASON})`;
+const title =
+  haveNeovim || inCi
+    ? "Neovim (headless) as a client of the language server"
+    : `Neovim (headless) as a client of the language server (skipped: ${SKIP_REASON})`;
 if (!haveNeovim && !inCi) console.warn(`tests/editors/neovim.test.ts skipped: ${SKIP_REASON}`);
 
 /** Runs the Lua script in headless Neovim with its own state folders, killed after a timeout. */
@@ -183,6 +184,11 @@ describe.skipIf(!haveNeovim && !inCi)(title, () => {
     const lines = report.coordinates?.text?.trim().split("\n") ?? [];
     // common practice: SF4 is one S and four F atoms; XYZ starts with the atom count.
     expect(lines[0]).toBe("5");
-    expect(lines.slice(2).map((line) => line.trim().split(/\s+/)[0]).sort()).toEqual(["F", "F", "F", "F", "S"]);
+    expect(
+      lines
+        .slice(2)
+        .map((line) => line.trim().split(/\s+/)[0])
+        .sort(),
+    ).toEqual(["F", "F", "F", "F", "S"]);
   });
 });

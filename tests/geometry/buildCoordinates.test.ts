@@ -48,10 +48,48 @@ function expectIdealAngles(graph: MolecularGraph, coordinates: MolecularCoordina
 // common practice: VSEPR ideal angles are the angles between the sites of the electron geometry,
 // so a model built from those sites must measure them back exactly.
 const SINGLE_AND_MULTI_CENTRE_SPECIES = [
-  "SF4", "XeF4", "IF7", "XeF6", "PCl5", "SF6", "BrF5", "ClF3", "H2SO4", "HNO3", "CH3OH", "N2H4",
-  "H2O2", "NH4+", "I3-", "O3", "H2O", "NH3", "CH4", "BF3", "CO2", "HCN", "XeF2", "SO4^2-", "NO3-",
-  "CO3^2-", "ClO4-", "XeO3", "XeOF4", "POCl3", "SOF4", "CH2Cl2", "SO2", "NO2", "ClO2", "IF5",
-  "ICl4-", "SF5Cl", "PF6-", "BrF3", "SO3", "COCl2",
+  "SF4",
+  "XeF4",
+  "IF7",
+  "XeF6",
+  "PCl5",
+  "SF6",
+  "BrF5",
+  "ClF3",
+  "H2SO4",
+  "HNO3",
+  "CH3OH",
+  "N2H4",
+  "H2O2",
+  "NH4+",
+  "I3-",
+  "O3",
+  "H2O",
+  "NH3",
+  "CH4",
+  "BF3",
+  "CO2",
+  "HCN",
+  "XeF2",
+  "SO4^2-",
+  "NO3-",
+  "CO3^2-",
+  "ClO4-",
+  "XeO3",
+  "XeOF4",
+  "POCl3",
+  "SOF4",
+  "CH2Cl2",
+  "SO2",
+  "NO2",
+  "ClO2",
+  "IF5",
+  "ICl4-",
+  "SF5Cl",
+  "PF6-",
+  "BrF3",
+  "SO3",
+  "COCl2",
 ];
 
 describe("angles measured from the coordinates of analysed species", () => {
@@ -139,9 +177,7 @@ describe("bond lengths", () => {
   ])("%s %s-%s near %f Å", (text, a, b, expected) => {
     const analysis = analysed(text);
     const { atoms } = buildCoordinates(analysis.graph);
-    const bond = analysis.graph.bonds.find(
-      (x) => [atoms[x.from].symbol, atoms[x.to].symbol].sort().join() === [a, b].sort().join(),
-    )!;
+    const bond = analysis.graph.bonds.find((x) => [atoms[x.from].symbol, atoms[x.to].symbol].sort().join() === [a, b].sort().join())!;
     expect(Math.abs(distance(atoms[bond.from].position, atoms[bond.to].position) - expected)).toBeLessThan(0.12);
   });
 

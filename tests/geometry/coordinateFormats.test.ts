@@ -45,7 +45,26 @@ function fromSmiles(smiles: string): Case {
 }
 
 const CASES: readonly Case[] = [
-  ...["SF4", "XeF4", "IF7", "PCl5", "ClF3", "BrF5", "H2SO4", "HNO3", "CH3OH", "N2H4", "NH4+", "I3-", "O3", "SO4^2-", "NO2", "HCN", "CO2", "H2O"].map(fromSpecies),
+  ...[
+    "SF4",
+    "XeF4",
+    "IF7",
+    "PCl5",
+    "ClF3",
+    "BrF5",
+    "H2SO4",
+    "HNO3",
+    "CH3OH",
+    "N2H4",
+    "NH4+",
+    "I3-",
+    "O3",
+    "SO4^2-",
+    "NO2",
+    "HCN",
+    "CO2",
+    "H2O",
+  ].map(fromSpecies),
   ...["c1ccccc1", "CC(=O)[O-]", "C[N+](C)(C)C", "C1CCCCC1"].map(fromSmiles),
 ];
 
@@ -95,7 +114,11 @@ describe("XYZ", () => {
     const rows = lines.slice(2).map((line) => line.trim().split(/\s+/));
     expect(rows.map((row) => row[0])).toEqual(c.coordinates.atoms.map((a) => a.symbol));
     for (const row of rows) for (const value of row.slice(1)) expect(value).toMatch(/^-?\d+\.\d{6}$/);
-    expectSamePositions(rows.map((row) => row.slice(1).map(Number)), c.coordinates, 1e-6);
+    expectSamePositions(
+      rows.map((row) => row.slice(1).map(Number)),
+      c.coordinates,
+      1e-6,
+    );
   });
 
   it("keeps the comment on one line", () => {
@@ -187,8 +210,14 @@ describe("molfile layout", () => {
 
   it("refuses mismatched coordinates and oversized structures without throwing", () => {
     const water = fromSpecies("H2O");
-    expect(toMolfile(water.graph, { atoms: water.coordinates.atoms.slice(1) }, "x")).toMatchObject({ ok: false, problem: { code: "coordinates-mismatch" } });
-    const big = { atoms: Array.from({ length: 1000 }, () => ({ symbol: "He", lonePairs: 1, unpairedElectrons: 0, formalCharge: 0 })), bonds: [] };
+    expect(toMolfile(water.graph, { atoms: water.coordinates.atoms.slice(1) }, "x")).toMatchObject({
+      ok: false,
+      problem: { code: "coordinates-mismatch" },
+    });
+    const big = {
+      atoms: Array.from({ length: 1000 }, () => ({ symbol: "He", lonePairs: 1, unpairedElectrons: 0, formalCharge: 0 })),
+      bonds: [],
+    };
     const bigCoordinates = { atoms: big.atoms.map((_, i) => ({ symbol: "He", position: [i, 0, 0] as const })) };
     expect(toMolfile(big, bigCoordinates, "x")).toMatchObject({ ok: false, problem: { code: "too-many-atoms" } });
   });

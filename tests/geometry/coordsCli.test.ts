@@ -35,7 +35,12 @@ describe("lonepair coords", () => {
     const lines = run.stdout.trimEnd().split("\n");
     expect(lines[0]).toBe("5"); // common practice: SF4 has five atoms
     expect(lines[1]).toMatch(/^SF4 .*not measured data/);
-    expect(lines.slice(2).map((line) => line.trim().split(/\s+/)[0]).sort()).toEqual(["F", "F", "F", "F", "S"]);
+    expect(
+      lines
+        .slice(2)
+        .map((line) => line.trim().split(/\s+/)[0])
+        .sort(),
+    ).toEqual(["F", "F", "F", "F", "S"]);
   });
 
   it("prints an MDL molfile that OpenChemLib reads with its charges", () => {

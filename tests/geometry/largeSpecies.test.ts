@@ -77,7 +77,8 @@ describe("3D models of large species", () => {
     const at = (index: number) => model.atoms[index].position;
     for (let carbon = 0; carbon + 1 < 2000; carbon++) {
       expect(distance(at(carbon), at(carbon + 1))).toBeCloseTo(1.54, 1);
-      if (carbon + 2 < 2000) expect(angleDegrees(sub(at(carbon), at(carbon + 1)), sub(at(carbon + 2), at(carbon + 1)))).toBeCloseTo(109.47, 0);
+      if (carbon + 2 < 2000)
+        expect(angleDegrees(sub(at(carbon), at(carbon + 1)), sub(at(carbon + 2), at(carbon + 1)))).toBeCloseTo(109.47, 0);
     }
   });
 

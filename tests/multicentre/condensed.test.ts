@@ -74,7 +74,12 @@ const CASES: readonly { name: string; condensed: string; smiles: string; centres
   // planar (AX3) like an amide N
   { name: "nitroethane", condensed: "CH3CH2NO2", smiles: "CC[N+](=O)[O-]", centres: [C_SP3, C_SP3, N_AMIDE] },
   { name: "2-methyl-2-nitropropane", condensed: "(CH3)3CNO2", smiles: "CC(C)(C)[N+](=O)[O-]", centres: [...times(4, C_SP3), N_AMIDE] },
-  { name: "tetranitromethane", condensed: "C(NO2)4", smiles: "C([N+](=O)[O-])([N+](=O)[O-])([N+](=O)[O-])[N+](=O)[O-]", centres: [C_SP3, ...times(4, N_AMIDE)] },
+  {
+    name: "tetranitromethane",
+    condensed: "C(NO2)4",
+    smiles: "C([N+](=O)[O-])([N+](=O)[O-])([N+](=O)[O-])[N+](=O)[O-]",
+    centres: [C_SP3, ...times(4, N_AMIDE)],
+  },
 ];
 
 function analysed(result: AnalysisResult, text: string): SpeciesAnalysis {
@@ -84,9 +89,7 @@ function analysed(result: AnalysisResult, text: string): SpeciesAnalysis {
 
 /** The centres as an order-free multiset: sorted "atom AXE geometry hybridization" strings. */
 function centreMultiset(analysis: SpeciesAnalysis): string[] {
-  return analysis.centres
-    .map((centre) => `${centre.atom} ${centre.axe} ${centre.molecularGeometry} ${centre.hybridization}`)
-    .sort();
+  return analysis.centres.map((centre) => `${centre.atom} ${centre.axe} ${centre.molecularGeometry} ${centre.hybridization}`).sort();
 }
 
 function compositionOf(analysis: SpeciesAnalysis): Map<string, number> {

@@ -15,7 +15,9 @@ describe("molecular formulas that hide their connectivity", () => {
     const result = analyzeSpecies(text);
     expect(result.ok, text).toBe(true);
     if (!result.ok) return;
-    const carbons = result.value.centres.filter((c) => c.atom === "C").map((c) => `${c.atom} ${c.axe} ${c.molecularGeometry} ${c.hybridization}`);
+    const carbons = result.value.centres
+      .filter((c) => c.atom === "C")
+      .map((c) => `${c.atom} ${c.axe} ${c.molecularGeometry} ${c.hybridization}`);
     expect(carbons).toEqual(Array.from({ length: count }, () => centre));
     expect(result.value.warnings.some((w) => w.startsWith("Read as"))).toBe(true);
   });

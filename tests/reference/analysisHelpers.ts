@@ -12,9 +12,7 @@ import type { CentreAnalysis, SpeciesAnalysis } from "../../shared/src/index";
 export function analysisOf(text: string, asSmiles = false): SpeciesAnalysis {
   const result = asSmiles ? analyzeSmiles(text) : analyzeSpecies(text);
   if (!result.ok) {
-    throw new Error(
-      `expected "${text}" to be analysed, but got ${result.problem.code}: ${result.problem.message}`,
-    );
+    throw new Error(`expected "${text}" to be analysed, but got ${result.problem.code}: ${result.problem.message}`);
   }
   return result.value;
 }
@@ -39,9 +37,7 @@ export function centresOf(analysis: SpeciesAnalysis, symbol: string): readonly C
 
 /** Indices of the atoms bonded to atom `index` in the Lewis structure. */
 export function neighboursOf(analysis: SpeciesAnalysis, index: number): readonly number[] {
-  return analysis.graph.bonds.flatMap((bond) =>
-    bond.from === index ? [bond.to] : bond.to === index ? [bond.from] : [],
-  );
+  return analysis.graph.bonds.flatMap((bond) => (bond.from === index ? [bond.to] : bond.to === index ? [bond.from] : []));
 }
 
 /** Angles in degrees agree when they differ by less than this (109.47 vs 109.5). */

@@ -19,9 +19,12 @@ function describeResult(result: AnalysisResult): string {
 function expectRefusal(row: RefusalCase): Extract<AnalysisResult, { ok: false }> {
   let result: AnalysisResult | undefined;
   // common practice (house rule): bad input never throws
-  expect(() => {
-    result = analyzeSpecies(row.input);
-  }, `${shortInput(row.input)} threw`).not.toThrow();
+  expect(
+    () => {
+      result = analyzeSpecies(row.input);
+    },
+    `${shortInput(row.input)} threw`,
+  ).not.toThrow();
   const got = result as AnalysisResult;
   expect(got.ok, `${shortInput(row.input)} (${row.why}) should be refused; got ${describeResult(got)}`).toBe(false);
   const refused = got as Extract<AnalysisResult, { ok: false }>;

@@ -31,9 +31,7 @@ function hubIndex(analysis: SpeciesAnalysis, symbol: string): number {
 }
 
 function describeGraph(analysis: SpeciesAnalysis): string {
-  const atoms = analysis.graph.atoms
-    .map((atom, i) => `${i}:${atom.symbol}(fc ${atom.formalCharge}, lp ${atom.lonePairs})`)
-    .join(" ");
+  const atoms = analysis.graph.atoms.map((atom, i) => `${i}:${atom.symbol}(fc ${atom.formalCharge}, lp ${atom.lonePairs})`).join(" ");
   const bonds = analysis.graph.bonds.map((bond) => `${bond.from}-${bond.to}x${bond.order}`).join(" ");
   return `atoms ${atoms}; bonds ${bonds}`;
 }
@@ -54,13 +52,17 @@ describe("valence electron counts", () => {
     expect(analysisOf(species).valenceElectrons, species).toBe(valenceElectrons);
   });
 
-  it.each(VALENCE_ELECTRON_COUNTS)("$species: bonds, lone pairs and odd electrons account for every electron", ({ species, valenceElectrons }) => {
-    // common practice: a Lewis structure places each valence electron exactly once
-    const analysis = analysisOf(species);
-    const placed = analysis.graph.bonds.reduce((sum, bond) => sum + 2 * bond.order, 0) +
-      analysis.graph.atoms.reduce((sum, atom) => sum + 2 * atom.lonePairs + atom.unpairedElectrons, 0);
-    expect(placed, `${species}: ${describeGraph(analysis)}`).toBe(valenceElectrons);
-  });
+  it.each(VALENCE_ELECTRON_COUNTS)(
+    "$species: bonds, lone pairs and odd electrons account for every electron",
+    ({ species, valenceElectrons }) => {
+      // common practice: a Lewis structure places each valence electron exactly once
+      const analysis = analysisOf(species);
+      const placed =
+        analysis.graph.bonds.reduce((sum, bond) => sum + 2 * bond.order, 0) +
+        analysis.graph.atoms.reduce((sum, atom) => sum + 2 * atom.lonePairs + atom.unpairedElectrons, 0);
+      expect(placed, `${species}: ${describeGraph(analysis)}`).toBe(valenceElectrons);
+    },
+  );
 
   it.each(VALENCE_ELECTRON_COUNTS)("$species: formal charges add up to the charge", ({ species }) => {
     // common practice: the formal charges of a Lewis structure sum to the species' charge
@@ -99,7 +101,10 @@ describe("formal charges", () => {
     // from memory: general chemistry text conventions
     const analysis = analysisOf("O3");
     const centre = hubIndex(analysis, "O");
-    const ends = analysis.graph.atoms.filter((_, i) => i !== centre).map((atom) => atom.formalCharge).sort();
+    const ends = analysis.graph.atoms
+      .filter((_, i) => i !== centre)
+      .map((atom) => atom.formalCharge)
+      .sort();
     expect(ends, describeGraph(analysis)).toEqual([-1, 0]);
   });
 });
@@ -108,7 +113,9 @@ describe("skeleton chosen by formal charges", () => {
   it.each(SKELETONS)("$species: $hub in the middle, bonded to $neighbours", ({ species, hub, neighbours }) => {
     const analysis = analysisOf(species);
     const index = hubIndex(analysis, hub);
-    const bonded = neighboursOf(analysis, index).map((i) => analysis.graph.atoms[i].symbol).sort();
+    const bonded = neighboursOf(analysis, index)
+      .map((i) => analysis.graph.atoms[i].symbol)
+      .sort();
     expect(bonded, `${species}: ${describeGraph(analysis)}`).toEqual([...neighbours].sort());
   });
 });
@@ -117,9 +124,10 @@ describe("electron-deficient centres", () => {
   it.each(ELECTRON_DEFICIENT)("%s is electron-deficient with single bonds only", (species) => {
     const analysis = analysisOf(species);
     expect(analysis.electronDeficient, species).toBe(true);
-    expect(analysis.graph.bonds.map((bond) => bond.order), describeGraph(analysis)).toEqual(
-      analysis.graph.bonds.map(() => 1),
-    );
+    expect(
+      analysis.graph.bonds.map((bond) => bond.order),
+      describeGraph(analysis),
+    ).toEqual(analysis.graph.bonds.map(() => 1));
     expect(analysis.warnings.length, `${species}: the reader should be told`).toBeGreaterThan(0);
   });
 
@@ -140,7 +148,10 @@ describe("radicals", () => {
   it.each(NOT_RADICALS)("%s is not a radical", (species) => {
     const analysis = analysisOf(species);
     expect(analysis.radical, species).toBe(false);
-    expect(analysis.graph.atoms.every((atom) => atom.unpairedElectrons === 0), describeGraph(analysis)).toBe(true);
+    expect(
+      analysis.graph.atoms.every((atom) => atom.unpairedElectrons === 0),
+      describeGraph(analysis),
+    ).toBe(true);
   });
 });
 
@@ -158,17 +169,21 @@ describe("expanded octets", () => {
     const analysis = analysisOf(species);
     analysis.graph.atoms.forEach((atom, index) => {
       const around = electronsAround(analysis, index);
-      if (PERIOD_TWO.has(atom.symbol)) expect(around, `${species} ${atom.symbol}${index}: ${describeGraph(analysis)}`).toBeLessThanOrEqual(8);
+      if (PERIOD_TWO.has(atom.symbol))
+        expect(around, `${species} ${atom.symbol}${index}: ${describeGraph(analysis)}`).toBeLessThanOrEqual(8);
       if (atom.symbol === "H") expect(around, `${species} H${index}`).toBeLessThanOrEqual(2);
     });
   });
 });
 
 describe("ions and other centres", () => {
-  it.each([...ION_SHAPES, ...MOLECULE_SHAPES])("$species: $centre is $axe, $molecularGeometry", ({ species, centre, axe, molecularGeometry }) => {
-    const found = centreOf(analysisOf(species), centre);
-    expect({ axe: found.axe, molecularGeometry: found.molecularGeometry }, species).toEqual({ axe, molecularGeometry });
-  });
+  it.each([...ION_SHAPES, ...MOLECULE_SHAPES])(
+    "$species: $centre is $axe, $molecularGeometry",
+    ({ species, centre, axe, molecularGeometry }) => {
+      const found = centreOf(analysisOf(species), centre);
+      expect({ axe: found.axe, molecularGeometry: found.molecularGeometry }, species).toEqual({ axe, molecularGeometry });
+    },
+  );
 });
 
 // common practice: the steric number fixes the electron geometry and the textbook hybridization label

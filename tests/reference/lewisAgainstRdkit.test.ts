@@ -54,9 +54,7 @@ function rdkitSummary(smiles: string): LewisSummary {
     const json = JSON.parse(mol.get_json());
     const defaults = json.defaults;
     const molecule = json.molecules[0];
-    const symbols: string[] = molecule.atoms.map(
-      (atom: RdkitAtomJson) => ChemElements.getById(atom.z ?? defaults.atom.z)!.symbol,
-    );
+    const symbols: string[] = molecule.atoms.map((atom: RdkitAtomJson) => ChemElements.getById(atom.z ?? defaults.atom.z)!.symbol);
     const atoms = molecule.atoms.map((atom: RdkitAtomJson, i: number) =>
       atomKey(symbols[i], atom.chg ?? defaults.atom.chg, atom.impHs ?? defaults.atom.impHs),
     );

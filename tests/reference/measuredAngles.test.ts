@@ -38,9 +38,7 @@ describe("bond angles against measured gas-phase structures", () => {
       `${context}\nno expectation with ideal ${row.ideal}°${row.positions ? ` labelled ${row.positions}` : ""}`,
     ).toBeGreaterThan(0);
 
-    const containing = candidates.filter(
-      (expectation) => expectation.min <= row.degrees && row.degrees <= expectation.max,
-    );
+    const containing = candidates.filter((expectation) => expectation.min <= row.degrees && row.degrees <= expectation.max);
     expect(containing.length, `${context}\nmeasured ${row.degrees}° is outside every matching range`).toBeGreaterThan(0);
   });
 

@@ -21,34 +21,182 @@ const TRANSITION_METAL = "transition metal";
 // from memory: Housecroft & Sharpe, Inorganic Chemistry (VSEPR shapes of common oxoanions and
 // onium ions; ionic formulas of common salts)
 const SALTS: readonly (readonly [salt: string, ions: readonly IonRow[]])[] = [
-  ["NH4Cl", [["NH4^+", 1, "[NH4+]", "tetrahedral"], ["Cl^-", 1, "[Cl-]", MONATOMIC]]],
-  ["(NH4)2SO4", [["NH4^+", 2, "[NH4+]", "tetrahedral"], ["SO4^2-", 1, "[O-]S(=O)(=O)[O-]", "tetrahedral"]]],
-  ["NH4NO3", [["NH4^+", 1, "[NH4+]", "tetrahedral"], ["NO3^-", 1, "[O-][N+](=O)[O-]", "trigonal planar"]]],
-  ["NH4HCO3", [["NH4^+", 1, "[NH4+]", "tetrahedral"], ["HCO3^-", 1, "OC(=O)[O-]", "C trigonal planar"]]],
-  ["PH4I", [["PH4^+", 1, "[PH4+]", "tetrahedral"], ["I^-", 1, "[I-]", MONATOMIC]]],
-  ["KNO3", [["K^+", 1, "[K+]", MONATOMIC], ["NO3^-", 1, "[O-][N+](=O)[O-]", "trigonal planar"]]],
-  ["NaClO", [["Na^+", 1, "[Na+]", MONATOMIC], ["ClO^-", 1, "[O-]Cl", "linear"]]],
-  ["Na2SO4", [["Na^+", 2, "[Na+]", MONATOMIC], ["SO4^2-", 1, "[O-]S(=O)(=O)[O-]", "tetrahedral"]]],
-  ["CaCO3", [["Ca^2+", 1, "[Ca+2]", MONATOMIC], ["CO3^2-", 1, "[O-]C(=O)[O-]", "trigonal planar"]]],
-  ["Ca(NO3)2", [["Ca^2+", 1, "[Ca+2]", MONATOMIC], ["NO3^-", 2, "[O-][N+](=O)[O-]", "trigonal planar"]]],
-  ["K2Cr2O7", [["K^+", 2, "[K+]", MONATOMIC], ["Cr2O7^2-", 1, "[O-][Cr](=O)(=O)O[Cr](=O)(=O)[O-]", TRANSITION_METAL]]],
-  ["KMnO4", [["K^+", 1, "[K+]", MONATOMIC], ["MnO4^-", 1, "[O-][Mn](=O)(=O)=O", TRANSITION_METAL]]],
-  ["NaHCO3", [["Na^+", 1, "[Na+]", MONATOMIC], ["HCO3^-", 1, "OC(=O)[O-]", "C trigonal planar"]]],
-  ["NaOH", [["Na^+", 1, "[Na+]", MONATOMIC], ["OH^-", 1, "[OH-]", "linear"]]],
-  ["Ca(OH)2", [["Ca^2+", 1, "[Ca+2]", MONATOMIC], ["OH^-", 2, "[OH-]", "linear"]]],
-  ["CH3COONa", [["Na^+", 1, "[Na+]", MONATOMIC], ["CH3COO^-", 1, "CC(=O)[O-]", "C trigonal planar"]]],
-  ["NaBH4", [["Na^+", 1, "[Na+]", MONATOMIC], ["BH4^-", 1, "[BH4-]", "tetrahedral"]]],
-  ["Na2O2", [["Na^+", 2, "[Na+]", MONATOMIC], ["O2^2-", 1, "[O-][O-]", "linear"]]],
-  ["KO2", [["K^+", 1, "[K+]", MONATOMIC], ["O2^-", 1, "[O-][O]", "linear"]]],
-  ["CuSO4", [["Cu^2+", 1, "[Cu+2]", MONATOMIC], ["SO4^2-", 1, "[O-]S(=O)(=O)[O-]", "tetrahedral"]]],
-  ["Fe2(SO4)3", [["Fe^3+", 2, "[Fe+3]", MONATOMIC], ["SO4^2-", 3, "[O-]S(=O)(=O)[O-]", "tetrahedral"]]],
+  [
+    "NH4Cl",
+    [
+      ["NH4^+", 1, "[NH4+]", "tetrahedral"],
+      ["Cl^-", 1, "[Cl-]", MONATOMIC],
+    ],
+  ],
+  [
+    "(NH4)2SO4",
+    [
+      ["NH4^+", 2, "[NH4+]", "tetrahedral"],
+      ["SO4^2-", 1, "[O-]S(=O)(=O)[O-]", "tetrahedral"],
+    ],
+  ],
+  [
+    "NH4NO3",
+    [
+      ["NH4^+", 1, "[NH4+]", "tetrahedral"],
+      ["NO3^-", 1, "[O-][N+](=O)[O-]", "trigonal planar"],
+    ],
+  ],
+  [
+    "NH4HCO3",
+    [
+      ["NH4^+", 1, "[NH4+]", "tetrahedral"],
+      ["HCO3^-", 1, "OC(=O)[O-]", "C trigonal planar"],
+    ],
+  ],
+  [
+    "PH4I",
+    [
+      ["PH4^+", 1, "[PH4+]", "tetrahedral"],
+      ["I^-", 1, "[I-]", MONATOMIC],
+    ],
+  ],
+  [
+    "KNO3",
+    [
+      ["K^+", 1, "[K+]", MONATOMIC],
+      ["NO3^-", 1, "[O-][N+](=O)[O-]", "trigonal planar"],
+    ],
+  ],
+  [
+    "NaClO",
+    [
+      ["Na^+", 1, "[Na+]", MONATOMIC],
+      ["ClO^-", 1, "[O-]Cl", "linear"],
+    ],
+  ],
+  [
+    "Na2SO4",
+    [
+      ["Na^+", 2, "[Na+]", MONATOMIC],
+      ["SO4^2-", 1, "[O-]S(=O)(=O)[O-]", "tetrahedral"],
+    ],
+  ],
+  [
+    "CaCO3",
+    [
+      ["Ca^2+", 1, "[Ca+2]", MONATOMIC],
+      ["CO3^2-", 1, "[O-]C(=O)[O-]", "trigonal planar"],
+    ],
+  ],
+  [
+    "Ca(NO3)2",
+    [
+      ["Ca^2+", 1, "[Ca+2]", MONATOMIC],
+      ["NO3^-", 2, "[O-][N+](=O)[O-]", "trigonal planar"],
+    ],
+  ],
+  [
+    "K2Cr2O7",
+    [
+      ["K^+", 2, "[K+]", MONATOMIC],
+      ["Cr2O7^2-", 1, "[O-][Cr](=O)(=O)O[Cr](=O)(=O)[O-]", TRANSITION_METAL],
+    ],
+  ],
+  [
+    "KMnO4",
+    [
+      ["K^+", 1, "[K+]", MONATOMIC],
+      ["MnO4^-", 1, "[O-][Mn](=O)(=O)=O", TRANSITION_METAL],
+    ],
+  ],
+  [
+    "NaHCO3",
+    [
+      ["Na^+", 1, "[Na+]", MONATOMIC],
+      ["HCO3^-", 1, "OC(=O)[O-]", "C trigonal planar"],
+    ],
+  ],
+  [
+    "NaOH",
+    [
+      ["Na^+", 1, "[Na+]", MONATOMIC],
+      ["OH^-", 1, "[OH-]", "linear"],
+    ],
+  ],
+  [
+    "Ca(OH)2",
+    [
+      ["Ca^2+", 1, "[Ca+2]", MONATOMIC],
+      ["OH^-", 2, "[OH-]", "linear"],
+    ],
+  ],
+  [
+    "CH3COONa",
+    [
+      ["Na^+", 1, "[Na+]", MONATOMIC],
+      ["CH3COO^-", 1, "CC(=O)[O-]", "C trigonal planar"],
+    ],
+  ],
+  [
+    "NaBH4",
+    [
+      ["Na^+", 1, "[Na+]", MONATOMIC],
+      ["BH4^-", 1, "[BH4-]", "tetrahedral"],
+    ],
+  ],
+  [
+    "Na2O2",
+    [
+      ["Na^+", 2, "[Na+]", MONATOMIC],
+      ["O2^2-", 1, "[O-][O-]", "linear"],
+    ],
+  ],
+  [
+    "KO2",
+    [
+      ["K^+", 1, "[K+]", MONATOMIC],
+      ["O2^-", 1, "[O-][O]", "linear"],
+    ],
+  ],
+  [
+    "CuSO4",
+    [
+      ["Cu^2+", 1, "[Cu+2]", MONATOMIC],
+      ["SO4^2-", 1, "[O-]S(=O)(=O)[O-]", "tetrahedral"],
+    ],
+  ],
+  [
+    "Fe2(SO4)3",
+    [
+      ["Fe^3+", 2, "[Fe+3]", MONATOMIC],
+      ["SO4^2-", 3, "[O-]S(=O)(=O)[O-]", "tetrahedral"],
+    ],
+  ],
   [
     "KCr(SO4)2",
-    [["K^+", 1, "[K+]", MONATOMIC], ["Cr^3+", 1, "[Cr+3]", MONATOMIC], ["SO4^2-", 2, "[O-]S(=O)(=O)[O-]", "tetrahedral"]],
+    [
+      ["K^+", 1, "[K+]", MONATOMIC],
+      ["Cr^3+", 1, "[Cr+3]", MONATOMIC],
+      ["SO4^2-", 2, "[O-]S(=O)(=O)[O-]", "tetrahedral"],
+    ],
   ],
-  ["NaCl", [["Na^+", 1, "[Na+]", MONATOMIC], ["Cl^-", 1, "[Cl-]", MONATOMIC]]],
-  ["CaF2", [["Ca^2+", 1, "[Ca+2]", MONATOMIC], ["F^-", 2, "[F-]", MONATOMIC]]],
-  ["Li3N", [["Li^+", 3, "[Li+]", MONATOMIC], ["N^3-", 1, "[N-3]", MONATOMIC]]],
+  [
+    "NaCl",
+    [
+      ["Na^+", 1, "[Na+]", MONATOMIC],
+      ["Cl^-", 1, "[Cl-]", MONATOMIC],
+    ],
+  ],
+  [
+    "CaF2",
+    [
+      ["Ca^2+", 1, "[Ca+2]", MONATOMIC],
+      ["F^-", 2, "[F-]", MONATOMIC],
+    ],
+  ],
+  [
+    "Li3N",
+    [
+      ["Li^+", 3, "[Li+]", MONATOMIC],
+      ["N^3-", 1, "[N-3]", MONATOMIC],
+    ],
+  ],
 ];
 
 function refused(input: string): Failure {
@@ -85,7 +233,9 @@ describe("a salt is its ions", () => {
     const result = refused(salt);
     // common practice: an ionic compound is a lattice of ions, with no VSEPR shape of its own
     expect(result.problem.code).toBe("ionic-solid");
-    expect(result.parts?.map(partSummary), `${salt}: ${result.problem.message}`).toEqual(ions.map(([formula, count]) => `${count} ${formula}`));
+    expect(result.parts?.map(partSummary), `${salt}: ${result.problem.message}`).toEqual(
+      ions.map(([formula, count]) => `${count} ${formula}`),
+    );
     for (const [index, [formula, , , shape]] of ions.entries()) {
       const part = result.parts![index];
       // A row naming an atom ("C trigonal planar") is about that centre of a several-centre ion.

@@ -47,7 +47,10 @@ describe("carbon hybridization against openchemlib", () => {
     // source: openchemlib (pi-bond count per atom)
     const reference = openchemlibCarbonHybridization(smiles);
     const analysis = smilesAnalysis(smiles);
-    const engine = analysis.centres.filter((centre) => centre.atom === "C").map((centre) => centre.hybridization).sort();
+    const engine = analysis.centres
+      .filter((centre) => centre.atom === "C")
+      .map((centre) => centre.hybridization)
+      .sort();
     expect(engine, `${smiles}: openchemlib says [${reference.join(", ")}]`).toEqual(reference);
   });
 });

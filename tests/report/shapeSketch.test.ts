@@ -58,13 +58,16 @@ function wellFormedProblems(svg: string): string[] {
 }
 
 describe("shape sketch", () => {
-  it.each(["SF4", "XeF4", "H2O", "CH4", "SF6", "CO2", "C2H4", "HCN", "NH4+", "C6H6"])("%s is a well-formed, self-contained SVG", (formula) => {
-    const svg = sketch(formula);
-    expect(svg.startsWith("<svg ")).toBe(true);
-    expect(svg).toContain('xmlns="http://www.w3.org/2000/svg"');
-    expect(wellFormedProblems(svg)).toEqual([]);
-    expect(svg).not.toMatch(/<script|<foreignObject|<image|<use|href=|url\(|@import|on\w+=/i);
-  });
+  it.each(["SF4", "XeF4", "H2O", "CH4", "SF6", "CO2", "C2H4", "HCN", "NH4+", "C6H6"])(
+    "%s is a well-formed, self-contained SVG",
+    (formula) => {
+      const svg = sketch(formula);
+      expect(svg.startsWith("<svg ")).toBe(true);
+      expect(svg).toContain('xmlns="http://www.w3.org/2000/svg"');
+      expect(wellFormedProblems(svg)).toEqual([]);
+      expect(svg).not.toMatch(/<script|<foreignObject|<image|<use|href=|url\(|@import|on\w+=/i);
+    },
+  );
 
   it.each([
     // common practice: SF4 is AX4E1, one S and four F, one lone pair on S

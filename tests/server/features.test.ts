@@ -222,7 +222,9 @@ describe("source actions", () => {
       range: { start: { line: 0, character: 0 }, end: { line: 0, character: 0 } },
       context: { diagnostics: [], only: ["source.fixAll"] },
     })) as CodeAction[];
-    expect(result.map((action) => [action.title, action.kind])).toEqual([["Fix all lonepair table values in this file", "source.fixAll.lonepair"]]);
+    expect(result.map((action) => [action.title, action.kind])).toEqual([
+      ["Fix all lonepair table values in this file", "source.fixAll.lonepair"],
+    ]);
     const edits = (result[0].edit?.documentChanges?.[0] as { edits: TextEdit[] }).edits;
     const after = applyEdits(document, edits);
     // common practice: NH3 trigonal pyramidal; from memory: XeF4 has 36 valence electrons
@@ -299,14 +301,20 @@ describe("editing", () => {
     // Type the fix in two keystroke-sized edits.
     session.change(uri, [{ range: { start, end }, text: "pyra" }]);
     const edited = session.change(uri, [
-      { range: { start: { line: start.line, character: start.character + 4 }, end: { line: start.line, character: start.character + 4 } }, text: "midal" },
+      {
+        range: { start: { line: start.line, character: start.character + 4 }, end: { line: start.line, character: start.character + 4 } },
+        text: "midal",
+      },
     ]);
     expect(edited.getText()).toContain("CYL-102,ammonia,NH3,8,1,trigonal pyramidal,polar");
     const after = await session.waitForDiagnostics(uri, (params) => params.version === edited.version);
     const rowLine = positionOf(edited, "CYL-102").line;
     expect(after.diagnostics.filter((diagnostic) => diagnostic.range.start.line === rowLine)).toEqual([]);
     // A hover on the new text sees the new version.
-    const hover = await session.connection.sendRequest(HoverRequest.type, { textDocument: { uri }, position: positionOf(edited, "NH3", 1) });
+    const hover = await session.connection.sendRequest(HoverRequest.type, {
+      textDocument: { uri },
+      position: positionOf(edited, "NH3", 1),
+    });
     // common practice: NH3 is AX3E1, trigonal pyramidal
     expect(hoverText(hover)).toContain("AX3E1");
   });

@@ -29,7 +29,10 @@ describe("frame decoder", () => {
     const stream = Buffer.concat([frame(hover), frame(exit)]);
     for (let cut = 0; cut <= stream.length; cut += 1) {
       const frames = decodeAll([stream.subarray(0, cut), stream.subarray(cut)]);
-      expect(frames).toEqual([{ kind: "message", message: hover }, { kind: "message", message: exit }]);
+      expect(frames).toEqual([
+        { kind: "message", message: hover },
+        { kind: "message", message: exit },
+      ]);
     }
   });
 

@@ -36,7 +36,11 @@ await connection.sendRequest(InitializeRequest.type, {
       hover: { contentFormat: ["markdown"] },
       publishDiagnostics: { versionSupport: true },
       // As VS Code does: the fix-all edit is resolved only when chosen.
-      codeAction: { codeActionLiteralSupport: { codeActionKind: { valueSet: ["quickfix"] } }, dataSupport: true, resolveSupport: { properties: ["edit"] } },
+      codeAction: {
+        codeActionLiteralSupport: { codeActionKind: { valueSet: ["quickfix"] } },
+        dataSupport: true,
+        resolveSupport: { properties: ["edit"] },
+      },
     },
   },
 });
@@ -52,7 +56,9 @@ async function open(uri, languageId, text) {
 
 const notes = readFileSync(`${root}tests/fixtures/server/run-21-cylinder-audit.md`, "utf8");
 const first = await open("file:///bench/run-21.md", "markdown", notes);
-console.log(`fixture notebook (${notes.length} chars): first diagnostics after ${first.ms.toFixed(0)} ms (includes the 150 ms pause), ${first.count} diagnostics`);
+console.log(
+  `fixture notebook (${notes.length} chars): first diagnostics after ${first.ms.toFixed(0)} ms (includes the 150 ms pause), ${first.count} diagnostics`,
+);
 
 const hoverTimes = [];
 const line = notes.split("\n").findIndex((text) => text.startsWith("SF4 is the one"));
@@ -86,7 +92,9 @@ for (let index = 0; index < 20; index += 1) {
   actionTimes.push(performance.now() - started);
   if (index === 0) console.log(`code actions at a row: ${actions.map((action) => action.title).join("; ")}`);
 }
-console.log(`code actions on that CSV, 20 requests: p50 ${percentile(actionTimes, 50).toFixed(1)} ms, max ${Math.max(...actionTimes).toFixed(1)} ms`);
+console.log(
+  `code actions on that CSV, 20 requests: p50 ${percentile(actionTimes, 50).toFixed(1)} ms, max ${Math.max(...actionTimes).toFixed(1)} ms`,
+);
 const resolveStarted = performance.now();
 const [, fixAll] = await connection.sendRequest(CodeActionRequest.type, {
   textDocument: { uri: "file:///bench/cylinders.csv" },
@@ -94,7 +102,9 @@ const [, fixAll] = await connection.sendRequest(CodeActionRequest.type, {
   context: { diagnostics: [] },
 });
 const resolved = await connection.sendRequest(CodeActionResolveRequest.type, fixAll);
-console.log(`fix all resolved: ${resolved.edit?.changes?.["file:///bench/cylinders.csv"]?.length} edits in ${(performance.now() - resolveStarted).toFixed(0)} ms`);
+console.log(
+  `fix all resolved: ${resolved.edit?.changes?.["file:///bench/cylinders.csv"]?.length} edits in ${(performance.now() - resolveStarted).toFixed(0)} ms`,
+);
 
 await connection.sendRequest(ShutdownRequest.type);
 await connection.sendNotification(ExitNotification.type);

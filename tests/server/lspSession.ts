@@ -65,7 +65,11 @@ export interface LspSession {
   change(uri: string, changes: TextDocumentContentChangeEvent[]): TextDocument;
   close(uri: string): void;
   /** Resolves with the first diagnostics for `uri` (after any already seen) that satisfy `accept`. */
-  waitForDiagnostics(uri: string, accept?: (params: PublishDiagnosticsParams) => boolean, timeoutMs?: number): Promise<PublishDiagnosticsParams>;
+  waitForDiagnostics(
+    uri: string,
+    accept?: (params: PublishDiagnosticsParams) => boolean,
+    timeoutMs?: number,
+  ): Promise<PublishDiagnosticsParams>;
   stop(): Promise<number | null>;
 }
 
@@ -148,7 +152,7 @@ export async function startSession(options: SessionOptions = {}): Promise<LspSes
             if (params.uri !== uri) continue;
             if (accept(params)) {
               seen.set(uri, index + 1);
-              return resolve(params), true;
+              return (resolve(params), true);
             }
           }
           return false;

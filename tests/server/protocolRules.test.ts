@@ -49,7 +49,10 @@ describe("life cycle", () => {
     expect((await raw.responseTo(3)).error?.code).toBe(ErrorCodes.InvalidRequest);
 
     // The didOpen sent before initialize was dropped, as the specification says: no document, no hover.
-    raw.send({ method: "initialized", params: {} }, { id: 4, method: "textDocument/hover", params: { textDocument: { uri: NOTE_URI }, position: ON_SF4 } });
+    raw.send(
+      { method: "initialized", params: {} },
+      { id: 4, method: "textDocument/hover", params: { textDocument: { uri: NOTE_URI }, position: ON_SF4 } },
+    );
     expect((await raw.responseTo(4)).result).toBeNull();
     raw.send(
       { method: "textDocument/didOpen", params: { textDocument: { uri: NOTE_URI, languageId: "markdown", version: 1, text: NOTE } } },
@@ -103,18 +106,25 @@ const SAME_VERSION_REPLACEMENTS: readonly [string, Replacement][] = [
     "closed and reopened at the same version",
     async (session, uri, text) => {
       await session.connection.sendNotification(DidCloseTextDocumentNotification.type, { textDocument: { uri } });
-      await session.connection.sendNotification(DidOpenTextDocumentNotification.type, { textDocument: { uri, languageId: "markdown", version: 1, text } });
+      await session.connection.sendNotification(DidOpenTextDocumentNotification.type, {
+        textDocument: { uri, languageId: "markdown", version: 1, text },
+      });
     },
   ],
   [
     "opened a second time without a close",
     (session, uri, text) =>
-      session.connection.sendNotification(DidOpenTextDocumentNotification.type, { textDocument: { uri, languageId: "markdown", version: 1, text } }),
+      session.connection.sendNotification(DidOpenTextDocumentNotification.type, {
+        textDocument: { uri, languageId: "markdown", version: 1, text },
+      }),
   ],
   [
     "changed keeping its version number",
     (session, uri, text) =>
-      session.connection.sendNotification(DidChangeTextDocumentNotification.type, { textDocument: { uri, version: 1 }, contentChanges: [{ text }] }),
+      session.connection.sendNotification(DidChangeTextDocumentNotification.type, {
+        textDocument: { uri, version: 1 },
+        contentChanges: [{ text }],
+      }),
   ],
 ];
 
@@ -132,8 +142,12 @@ describe("a new text at the same version number", () => {
 
   it.each(SAME_VERSION_REPLACEMENTS)("pull diagnostics: %s gets a full report of the new text", async (label, replace) => {
     const uri = fixtureUri(`notebook/pull-${label.replaceAll(" ", "-")}.md`);
-    await pulling.connection.sendNotification(DidOpenTextDocumentNotification.type, { textDocument: { uri, languageId: "markdown", version: 1, text: WRONG } });
-    const first = (await pulling.connection.sendRequest(DocumentDiagnosticRequest.type, { textDocument: { uri } })) as FullDocumentDiagnosticReport;
+    await pulling.connection.sendNotification(DidOpenTextDocumentNotification.type, {
+      textDocument: { uri, languageId: "markdown", version: 1, text: WRONG },
+    });
+    const first = (await pulling.connection.sendRequest(DocumentDiagnosticRequest.type, {
+      textDocument: { uri },
+    })) as FullDocumentDiagnosticReport;
     expect(errorsIn(first.items)).toHaveLength(1);
     await replace(pulling, uri, RIGHT);
     const second: DocumentDiagnosticReport = await pulling.connection.sendRequest(DocumentDiagnosticRequest.type, {
@@ -147,7 +161,9 @@ describe("a new text at the same version number", () => {
 
   it.each(SAME_VERSION_REPLACEMENTS)("pushed diagnostics: %s are those of the new text", async (label, replace) => {
     const uri = fixtureUri(`notebook/push-${label.replaceAll(" ", "-")}.md`);
-    await pushing.connection.sendNotification(DidOpenTextDocumentNotification.type, { textDocument: { uri, languageId: "markdown", version: 1, text: WRONG } });
+    await pushing.connection.sendNotification(DidOpenTextDocumentNotification.type, {
+      textDocument: { uri, languageId: "markdown", version: 1, text: WRONG },
+    });
     await pushing.waitForDiagnostics(uri, (params) => errorsIn(params.diagnostics).length === 1);
     await replace(pushing, uri, RIGHT);
     const after = await pushing.waitForDiagnostics(uri, undefined, 10_000);
@@ -160,8 +176,10 @@ describe("a new text at the same version number", () => {
       textDocument: { uri, languageId: "markdown", version: 1, text: NOTE },
     });
     const hover = async (): Promise<string> =>
-      ((await pushing.connection.sendRequest(HoverRequest.type, { textDocument: { uri }, position: ON_SF4 }))?.contents as MarkupContent | undefined)
-        ?.value ?? "";
+      (
+        (await pushing.connection.sendRequest(HoverRequest.type, { textDocument: { uri }, position: ON_SF4 }))?.contents as
+          MarkupContent | undefined
+      )?.value ?? "";
     // common practice: SF4 is a seesaw, XeF4 square planar
     expect(await hover()).toContain("seesaw");
     await replace(pushing, uri, NOTE.replace("SF4", "XeF4"));
@@ -199,9 +217,9 @@ describe("diagnostics per document are capped", () => {
     expect(summary).toHaveLength(1);
     expect(summary[0].message).toContain("1,500 more");
     // The shown ones are the first in the document, and the summary sits at the first one left out.
-    expect(published.diagnostics.filter((diagnostic) => diagnostic.code !== LIMIT_CODE).map((diagnostic) => diagnostic.range.start.line)).toEqual(
-      Array.from({ length: 1000 }, (_, line) => line),
-    );
+    expect(
+      published.diagnostics.filter((diagnostic) => diagnostic.code !== LIMIT_CODE).map((diagnostic) => diagnostic.range.start.line),
+    ).toEqual(Array.from({ length: 1000 }, (_, line) => line));
     expect(summary[0].range.start.line).toBe(1000);
   });
 
@@ -213,7 +231,9 @@ describe("diagnostics per document are capped", () => {
     limit = configured;
     const uri = fixtureUri(`notebook/mistakes-${configured}-${mistakes}.md`);
     pulling.open(uri, "markdown", noteWithImpossibleSpecies(mistakes));
-    const report = (await pulling.connection.sendRequest(DocumentDiagnosticRequest.type, { textDocument: { uri } })) as FullDocumentDiagnosticReport;
+    const report = (await pulling.connection.sendRequest(DocumentDiagnosticRequest.type, {
+      textDocument: { uri },
+    })) as FullDocumentDiagnosticReport;
     expect(report.items).toHaveLength(expected);
     const summaries = report.items.filter((item) => item.code === LIMIT_CODE);
     expect(summaries).toHaveLength(mistakes > configured ? 1 : 0);
@@ -231,7 +251,10 @@ describe("hover in the client's format", () => {
   async function hoversFor(formats: string[] | undefined): Promise<MarkupContent[]> {
     const capabilities: ClientCapabilities = {
       ...FULL_CAPABILITIES,
-      textDocument: { ...FULL_CAPABILITIES.textDocument, hover: formats ? { contentFormat: formats as MarkupContent["kind"][] } : undefined },
+      textDocument: {
+        ...FULL_CAPABILITIES.textDocument,
+        hover: formats ? { contentFormat: formats as MarkupContent["kind"][] } : undefined,
+      },
     };
     const session = await startSession({ capabilities });
     sessions.push(session);
@@ -294,7 +317,9 @@ describe("one large species", () => {
       { id: 4, method: "textDocument/hover", params: { textDocument: { uri: NOTE_URI }, position: ON_GAS } },
     );
     const [large, gas] = await Promise.all([raw.responseTo(3, 120_000), raw.responseTo(4)]);
-    const order = raw.received.filter((message) => "id" in message && !("method" in message)).map((message) => (message as unknown as { id: number }).id);
+    const order = raw.received
+      .filter((message) => "id" in message && !("method" in message))
+      .map((message) => (message as unknown as { id: number }).id);
     expect(order.indexOf(4), "the small species was answered only after the large one").toBeLessThan(order.indexOf(3));
     // common practice: SF4 is a seesaw; every carbon of an alkane is tetrahedral
     expect(JSON.stringify(gas.result)).toContain("seesaw");
@@ -309,11 +334,18 @@ describe("one large species", () => {
       const ring = `C1${"C".repeat(98)}C1`;
       session.open(uri, "markdown", `Run 34: the macrocycle \`smiles:${ring}\` was set aside.\n`);
       const position = { line: 0, character: 40 };
-      const shape = await session.connection.sendRequest<{ problem?: { code: string; message: string }; model?: unknown }>("lonepair/shapeModel", { uri, position });
+      const shape = await session.connection.sendRequest<{ problem?: { code: string; message: string }; model?: unknown }>(
+        "lonepair/shapeModel",
+        { uri, position },
+      );
       expect(shape.model).toBeUndefined();
       expect(shape.problem?.code).toBe("too-large-for-model");
       expect(shape.problem?.message).toMatch(/^Too large for a 3D model: a ring system of 100 atoms \(the limit is 64\)/);
-      const file = await session.connection.sendRequest<{ problem?: { message: string } }>("lonepair/coordinates", { uri, position, format: "xyz" });
+      const file = await session.connection.sendRequest<{ problem?: { message: string } }>("lonepair/coordinates", {
+        uri,
+        position,
+        format: "xyz",
+      });
       expect(file.problem?.message).toMatch(/^Too large for a 3D model/);
     } finally {
       await session.stop();

@@ -68,7 +68,15 @@ describe("summary table", () => {
     const text = summaryTable({ analyses: species, format: "csv", angleDecimals: 1 });
     const rows = parse(text) as string[][];
     expect(rows[0]).toEqual([
-      "Formula", "Name", "Valence electrons", "AXE", "Electron geometry", "Molecular geometry", "Ideal angles", "Hybridization", "Polarity",
+      "Formula",
+      "Name",
+      "Valence electrons",
+      "AXE",
+      "Electron geometry",
+      "Molecular geometry",
+      "Ideal angles",
+      "Hybridization",
+      "Polarity",
     ]);
     expect(rows.slice(1).map((row) => row[0])).toEqual(["SF4", "XeF4", "NH3"]);
     // common practice: SF4 ideal angles 90, 120 and 180 degrees (a field with commas, so quoted)
@@ -81,7 +89,12 @@ describe("summary table", () => {
   it("keeps only the asked columns, in the asked order", () => {
     const text = summaryTable({ analyses: species, format: "csv", angleDecimals: 1, columns: ["molecularGeometry", "formula"] });
     // common practice: XeF4 square planar
-    expect(parse(text)).toEqual([["Molecular geometry", "Formula"], ["seesaw", "SF4"], ["square planar", "XeF4"], ["trigonal pyramidal", "NH3"]]);
+    expect(parse(text)).toEqual([
+      ["Molecular geometry", "Formula"],
+      ["seesaw", "SF4"],
+      ["square planar", "XeF4"],
+      ["trigonal pyramidal", "NH3"],
+    ]);
   });
 
   it("writes a markdown table with the caution and the species it could not analyse", () => {
@@ -106,12 +119,18 @@ describe("summary table", () => {
     expect(collected.unanalysed.map((item) => item.text)).toEqual(expect.arrayContaining(["CH5", "NH5"]));
     const table = summaryTable({ analyses: collected.analyses, unanalysed: collected.unanalysed, format: "markdown", angleDecimals: 1 });
     const after = analyzeDocument(`${note}\n${table}`, "markdown");
-    const problems = (model: DocumentModel) => [...model.problems, ...checkDocument(model)].filter((finding) => finding.severity === "error").length;
+    const problems = (model: DocumentModel) =>
+      [...model.problems, ...checkDocument(model)].filter((finding) => finding.severity === "error").length;
     expect(problems(after)).toBe(problems(before));
   });
 
   it("writes a comment that the species list cannot close early", () => {
-    const text = summaryTable({ analyses: species, unanalysed: [{ text: "X-->Y", message: "a --> b" }], format: "markdown", angleDecimals: 1 });
+    const text = summaryTable({
+      analyses: species,
+      unanalysed: [{ text: "X-->Y", message: "a --> b" }],
+      format: "markdown",
+      angleDecimals: 1,
+    });
     const comment = text.split("\n").find((line) => line.startsWith("<!--"))!;
     expect(comment.indexOf("-->")).toBe(comment.length - 3);
   });

@@ -28,11 +28,13 @@ afterAll(async () => {
   await session?.stop();
 });
 
-
 /** Hovers on the first "SF4" of an open document and returns the card text. */
 async function hoverOnSf4(uri: string): Promise<string> {
   const document = session.documents.get(uri)!;
-  const hover = await session.connection.sendRequest(HoverRequest.type, { textDocument: { uri }, position: positionOf(document, "SF4", 1) });
+  const hover = await session.connection.sendRequest(HoverRequest.type, {
+    textDocument: { uri },
+    position: positionOf(document, "SF4", 1),
+  });
   return (hover?.contents as MarkupContent | undefined)?.value ?? "";
 }
 
@@ -48,10 +50,12 @@ describe("protocol abuse", () => {
   it("skips garbage bytes and broken frames and keeps answering", async () => {
     const random = seededRandom(14);
     // Random bytes without CR or LF, closed by a blank line: a header block the reader must reject.
-    const garbage = Buffer.from(Array.from({ length: 4096 }, () => {
-      const byte = Math.floor(random() * 256);
-      return byte === 10 || byte === 13 ? 32 : byte;
-    }));
+    const garbage = Buffer.from(
+      Array.from({ length: 4096 }, () => {
+        const byte = Math.floor(random() * 256);
+        return byte === 10 || byte === 13 ? 32 : byte;
+      }),
+    );
     const brokenJson = "{ this is not json";
     const notRpc = JSON.stringify({ hello: "Kestrel Ridge" });
     // All in one write, so the server sees it as one chunk, then garbage with no blank line at all.
@@ -82,7 +86,11 @@ describe("protocol abuse", () => {
 
   it.each([
     ["hover without a document", HoverRequest.method, {}],
-    ["hover at a nonsense position", HoverRequest.method, { textDocument: { uri: fixtureUri("notebook/alive.md") }, position: { line: -3, character: "x" } }],
+    [
+      "hover at a nonsense position",
+      HoverRequest.method,
+      { textDocument: { uri: fixtureUri("notebook/alive.md") }, position: { line: -3, character: "x" } },
+    ],
     ["inlay hints for a document that is not open", InlayHintRequest.method, { textDocument: { uri: "file:///nowhere.md" }, range: null }],
     ["code actions without a context", CodeActionRequest.method, { textDocument: { uri: fixtureUri("notebook/alive.md") }, range: null }],
     ["the table command with junk arguments", ExecuteCommandRequest.method, { command: "lonepair.summaryTable", arguments: [42, "x"] }],
@@ -182,7 +190,24 @@ describe("awkward documents", () => {
   it("keeps up with a long run of random edits", async () => {
     const uri = fixtureUri("notebook/random-edits.md");
     const random = seededRandom(2207);
-    const pieces = ["SF4", " ", "\n", "XeF4", "| NH3 | trigonal planar |", "\\ce{BF4-}", "CH5", "é", "🧪", "(", "]", "Cl", "2", "^", "-", ","];
+    const pieces = [
+      "SF4",
+      " ",
+      "\n",
+      "XeF4",
+      "| NH3 | trigonal planar |",
+      "\\ce{BF4-}",
+      "CH5",
+      "é",
+      "🧪",
+      "(",
+      "]",
+      "Cl",
+      "2",
+      "^",
+      "-",
+      ",",
+    ];
     let document = session.open(uri, "markdown", "# Run 23\n\nSF4 and NF3 in bay C.\n");
     for (let step = 0; step < 300; step += 1) {
       const length = document.getText().length;
@@ -204,7 +229,12 @@ describe("awkward documents", () => {
         });
       }
     }
-    document = session.change(uri, [{ range: { start: document.positionAt(document.getText().length), end: document.positionAt(document.getText().length) }, text: "\n\nFinal check: SF4.\n" }]);
+    document = session.change(uri, [
+      {
+        range: { start: document.positionAt(document.getText().length), end: document.positionAt(document.getText().length) },
+        text: "\n\nFinal check: SF4.\n",
+      },
+    ]);
     const final = await session.waitForDiagnostics(uri, (params) => params.version === document.version);
     // Debounced and guarded: results arrive for ever newer versions, never for an older one after a newer.
     const versions = session.published.filter((params) => params.uri === uri).map((params) => params.version ?? 0);

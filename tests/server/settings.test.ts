@@ -55,7 +55,9 @@ afterAll(async () => {
 describe("with workspace settings and pull diagnostics", () => {
   it("announces pull diagnostics and reports unchanged versions as unchanged", async () => {
     expect(session.initializeResult.capabilities.diagnosticProvider).toBeDefined();
-    const first = (await session.connection.sendRequest(DocumentDiagnosticRequest.type, { textDocument: { uri: CSV } })) as FullDocumentDiagnosticReport;
+    const first = (await session.connection.sendRequest(DocumentDiagnosticRequest.type, {
+      textDocument: { uri: CSV },
+    })) as FullDocumentDiagnosticReport;
     expect(first.kind).toBe(DocumentDiagnosticReportKind.Full);
     // common practice: CH5 cannot exist as a neutral molecule with five C-H bonds
     expect(first.items.some((item) => item.severity === 1 && item.source === "lonepair")).toBe(true);
@@ -78,7 +80,10 @@ describe("with workspace settings and pull diagnostics", () => {
 
   it("writes angles with the configured decimals // common practice: SF4 ideal angles 90, 120, 180", async () => {
     const document = session.documents.get(CSV)!;
-    const hover = await session.connection.sendRequest(HoverRequest.type, { textDocument: { uri: CSV }, position: positionOf(document, "SF4", 1) });
+    const hover = await session.connection.sendRequest(HoverRequest.type, {
+      textDocument: { uri: CSV },
+      position: positionOf(document, "SF4", 1),
+    });
     const text = (hover?.contents as MarkupContent).value;
     expect(text).toContain("90.00°");
     expect(text).toContain("120.00°");
@@ -97,9 +102,14 @@ describe("with workspace settings and pull diagnostics", () => {
 
   it("ignores documents of kinds that are not enabled", async () => {
     const document = session.documents.get(YAML)!;
-    const hover = await session.connection.sendRequest(HoverRequest.type, { textDocument: { uri: YAML }, position: positionOf(document, "NH4+", 1) });
+    const hover = await session.connection.sendRequest(HoverRequest.type, {
+      textDocument: { uri: YAML },
+      position: positionOf(document, "NH4+", 1),
+    });
     expect(hover).toBeNull();
-    const report = (await session.connection.sendRequest(DocumentDiagnosticRequest.type, { textDocument: { uri: YAML } })) as FullDocumentDiagnosticReport;
+    const report = (await session.connection.sendRequest(DocumentDiagnosticRequest.type, {
+      textDocument: { uri: YAML },
+    })) as FullDocumentDiagnosticReport;
     expect(report.items).toEqual([]);
   });
 
@@ -147,7 +157,10 @@ describe("with a bare client", () => {
       expect(capabilities.inlayHintProvider).toBeUndefined();
       expect(capabilities.codeActionProvider).toBe(false);
       const document = bare.open(CSV, "plaintext", fixture("cylinders-bay-c.csv"));
-      const hover = await bare.connection.sendRequest(HoverRequest.type, { textDocument: { uri: CSV }, position: positionOf(document, "SF4", 1) });
+      const hover = await bare.connection.sendRequest(HoverRequest.type, {
+        textDocument: { uri: CSV },
+        position: positionOf(document, "SF4", 1),
+      });
       const contents = hover?.contents as MarkupContent;
       expect(contents.kind).toBe("plaintext");
       // common practice: SF4 is a seesaw

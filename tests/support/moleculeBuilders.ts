@@ -21,12 +21,7 @@ export type Ligand = readonly [string, number];
  * A VSEPR centre: lone pairs take the first `lonePairs` sites of the preferred order, and the
  * ligands fill the remaining sites in ascending site index.
  */
-export function vseprCentre(
-  centre: string,
-  geometry: ElectronGeometry,
-  lonePairs: number,
-  ligands: readonly Ligand[],
-): Atom[] {
+export function vseprCentre(centre: string, geometry: ElectronGeometry, lonePairs: number, ligands: readonly Ligand[]): Atom[] {
   const taken = new Set(lonePairSiteOrder(geometry).slice(0, lonePairs));
   const freeSites = idealDirections(geometry)
     .map((direction, index) => ({ direction, index }))
@@ -116,14 +111,22 @@ export function ethaneLike(
     const azimuth = degrees(120 * k);
     atoms.push({
       element,
-      position: [length * Math.sin(polar) * Math.cos(azimuth), length * Math.sin(polar) * Math.sin(azimuth), bridgeLength / 2 + length * Math.cos(polar)],
+      position: [
+        length * Math.sin(polar) * Math.cos(azimuth),
+        length * Math.sin(polar) * Math.sin(azimuth),
+        bridgeLength / 2 + length * Math.cos(polar),
+      ],
     });
   });
   backSubstituents.forEach(([element, length], k) => {
     const azimuth = degrees(120 * k + twistDegrees);
     atoms.push({
       element,
-      position: [length * Math.sin(polar) * Math.cos(azimuth), length * Math.sin(polar) * Math.sin(azimuth), -bridgeLength / 2 - length * Math.cos(polar)],
+      position: [
+        length * Math.sin(polar) * Math.cos(azimuth),
+        length * Math.sin(polar) * Math.sin(azimuth),
+        -bridgeLength / 2 - length * Math.cos(polar),
+      ],
     });
   });
   return atoms;
@@ -184,7 +187,11 @@ export function cyclohexaneChair(): Atom[] {
     atoms.push({ element: "H", position: add(carbon, [0, 0, side * bond]) });
     atoms.push({
       element: "H",
-      position: add(carbon, [bond * Math.cos(tilt) * Math.cos(angle), bond * Math.cos(tilt) * Math.sin(angle), -side * bond * Math.sin(tilt)]),
+      position: add(carbon, [
+        bond * Math.cos(tilt) * Math.cos(angle),
+        bond * Math.cos(tilt) * Math.sin(angle),
+        -side * bond * Math.sin(tilt),
+      ]),
     });
   }
   return atoms;
@@ -238,11 +245,13 @@ export function diborane(): Atom[] {
 /** Cubane: C8 at the corners of a cube, each H pointing out along the body diagonal. */
 export function cubane(): Atom[] {
   const atoms: Atom[] = [];
-  for (const x of [-1, 1]) for (const y of [-1, 1]) for (const z of [-1, 1]) {
-    const corner: Vec3 = [x, y, z];
-    atoms.push({ element: "C", position: scale(corner, 0.787) });
-    atoms.push({ element: "H", position: scale(corner, 0.787 + 1.09 / Math.sqrt(3)) });
-  }
+  for (const x of [-1, 1])
+    for (const y of [-1, 1])
+      for (const z of [-1, 1]) {
+        const corner: Vec3 = [x, y, z];
+        atoms.push({ element: "C", position: scale(corner, 0.787) });
+        atoms.push({ element: "H", position: scale(corner, 0.787 + 1.09 / Math.sqrt(3)) });
+      }
   return atoms;
 }
 
@@ -250,9 +259,10 @@ export function cubane(): Atom[] {
 export function dodecahydroDodecaborate(): Atom[] {
   const golden = (1 + Math.sqrt(5)) / 2;
   const vertices: Vec3[] = [];
-  for (const a of [-1, 1]) for (const b of [-1, 1]) {
-    vertices.push([0, a, b * golden], [a, b * golden, 0], [b * golden, 0, a]);
-  }
+  for (const a of [-1, 1])
+    for (const b of [-1, 1]) {
+      vertices.push([0, a, b * golden], [a, b * golden, 0], [b * golden, 0, a]);
+    }
   return vertices.flatMap((vertex) => {
     const unit = normalize(vertex);
     return [
@@ -272,9 +282,18 @@ export function hexanitroComplex(): Atom[] {
   const half = degrees(118 / 2);
   const atoms: Atom[] = [{ element: "Co", position: [0, 0, 0] }];
   const frames: readonly [Vec3, Vec3][] = [
-    [[1, 0, 0], [0, 1, 0]],
-    [[0, 1, 0], [0, 0, 1]],
-    [[0, 0, 1], [1, 0, 0]],
+    [
+      [1, 0, 0],
+      [0, 1, 0],
+    ],
+    [
+      [0, 1, 0],
+      [0, 0, 1],
+    ],
+    [
+      [0, 0, 1],
+      [1, 0, 0],
+    ],
   ];
   for (const [axis, inPlane] of frames) {
     for (const sign of [1, -1]) {

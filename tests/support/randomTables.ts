@@ -49,4 +49,3 @@ export const tableArbitrary = fc
     const headerEnd = lead.length + headers.join(delimiter).length + lineEnd.length;
     return { text, delimiter, lineEnd, headerEnd, kind: delimiter === "\t" ? ("tsv" as const) : ("csv" as const) };
   });
-

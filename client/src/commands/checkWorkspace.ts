@@ -24,7 +24,11 @@ export interface WorkspaceCheckSummary {
   readonly cancelled: boolean;
 }
 
-export async function checkWorkspace(client: LanguageClient, collection: vscode.DiagnosticCollection, log: vscode.OutputChannel): Promise<WorkspaceCheckSummary | undefined> {
+export async function checkWorkspace(
+  client: LanguageClient,
+  collection: vscode.DiagnosticCollection,
+  log: vscode.OutputChannel,
+): Promise<WorkspaceCheckSummary | undefined> {
   if (!vscode.workspace.workspaceFolders?.length) {
     void vscode.window.showInformationMessage("lonepair: open a folder first; there is no workspace to check.");
     return undefined;
@@ -33,7 +37,8 @@ export async function checkWorkspace(client: LanguageClient, collection: vscode.
     { location: vscode.ProgressLocation.Notification, title: "lonepair: checking workspace files", cancellable: true },
     (progress, token) => runCheck(client, collection, log, progress, token),
   );
-  const outcome = `${summary.checked} of ${summary.files} files checked: ${summary.problems} problems in ${summary.filesWithProblems} files` +
+  const outcome =
+    `${summary.checked} of ${summary.files} files checked: ${summary.problems} problems in ${summary.filesWithProblems} files` +
     (summary.skipped > 0 ? ` (${summary.skipped} skipped: open in an editor, too large or unreadable)` : "");
   log.appendLine(`Workspace check${summary.cancelled ? " (cancelled)" : ""}: ${outcome}.`);
   if (summary.cancelled) void vscode.window.showInformationMessage(`lonepair: check cancelled. ${outcome}.`);
@@ -86,7 +91,10 @@ async function runCheck(
       problems += diagnostics.length;
       collection.set(uri, diagnostics);
     }
-    progress.report({ message: `${Math.min(start + BATCH_SIZE, files.length)} of ${files.length} files`, increment: (100 * batch.length) / files.length });
+    progress.report({
+      message: `${Math.min(start + BATCH_SIZE, files.length)} of ${files.length} files`,
+      increment: (100 * batch.length) / files.length,
+    });
     // Let the editor's own work run between batches.
     await new Promise((resolve) => setImmediate(resolve));
   }

@@ -21,7 +21,10 @@ export async function exportCoordinates(client: LanguageClient, log: vscode.Outp
   }
   const document = editor.document;
   const position = editor.selection.active;
-  const picked = await vscode.window.showQuickPick(FORMATS, { title: "Export coordinates of the species under the cursor", placeHolder: "File format" });
+  const picked = await vscode.window.showQuickPick(FORMATS, {
+    title: "Export coordinates of the species under the cursor",
+    placeHolder: "File format",
+  });
   if (!picked) return;
   let found;
   try {
@@ -36,7 +39,9 @@ export async function exportCoordinates(client: LanguageClient, log: vscode.Outp
     return;
   }
   if (!found.file) {
-    void vscode.window.showWarningMessage(`lonepair: no coordinates for ${found.text}: ${found.problem?.message ?? "no 3D model could be built."}`);
+    void vscode.window.showWarningMessage(
+      `lonepair: no coordinates for ${found.text}: ${found.problem?.message ?? "no 3D model could be built."}`,
+    );
     return;
   }
   const file = found.file;

@@ -82,5 +82,4 @@ export type OptionValues<Options extends OptionTypes> = {
 
 /** Parsed arguments, or the exit code of a command already done. */
 export type ParsedCommandLine<Options extends OptionTypes> =
-  | { readonly exit: number }
-  | { readonly exit: undefined; readonly values: OptionValues<Options>; readonly positionals: readonly string[] };
+  { readonly exit: number } | { readonly exit: undefined; readonly values: OptionValues<Options>; readonly positionals: readonly string[] };

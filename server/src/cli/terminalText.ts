@@ -59,7 +59,10 @@ function sequenceLength(lead: number): number {
  */
 export function jsonTerminalSafe(json: string): string {
   return /[\u007f-\u009f\u2028\u2029\u202a-\u202e\u2066-\u2069]/.test(json)
-    ? json.replace(/[\u007f-\u009f\u2028\u2029\u202a-\u202e\u2066-\u2069]/g, (character) => `\\u${character.charCodeAt(0).toString(16).padStart(4, "0")}`)
+    ? json.replace(
+        /[\u007f-\u009f\u2028\u2029\u202a-\u202e\u2066-\u2069]/g,
+        (character) => `\\u${character.charCodeAt(0).toString(16).padStart(4, "0")}`,
+      )
     : json;
 }
 

@@ -111,7 +111,12 @@ function firstBytesRange(document: TextDocument) {
  * read the first time a feature asks for it; a table's findings come from its rows alone, through
  * `rowMemo` when one is given, so diagnostics after an edit need not rebuild the whole model.
  */
-export function analyseDocument(document: TextDocument, kind: DocumentKind, revision: number, rowMemo?: DelimitedRowMemo): AnalysedDocument {
+export function analyseDocument(
+  document: TextDocument,
+  kind: DocumentKind,
+  revision: number,
+  rowMemo?: DelimitedRowMemo,
+): AnalysedDocument {
   const analysed = analysedTextOf(document.getText());
   let model: DocumentModel | undefined;
   const modelOf = (): DocumentModel => (model ??= analysed.binary ? EMPTY_MODEL(kind) : analyzeDocument(analysed.text, kind));

@@ -6,8 +6,7 @@
 
 /** What one step of decoding produced. */
 export type DecodedFrame =
-  | { readonly kind: "message"; readonly message: Record<string, unknown> }
-  | { readonly kind: "error"; readonly error: Error };
+  { readonly kind: "message"; readonly message: Record<string, unknown> } | { readonly kind: "error"; readonly error: Error };
 
 export interface FrameDecoder {
   push(chunk: Uint8Array): void;

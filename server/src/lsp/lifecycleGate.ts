@@ -3,16 +3,21 @@
  * (and `exit`) before the server is initialized, one `initialize` only, and nothing but
  * `exit` after `shutdown`. Refused requests are answered here and never reach a handler.
  */
-import { Disposable, ErrorCodes, type DataCallback, type Message, type MessageReader, type MessageWriter } from "vscode-languageserver/node";
+import {
+  Disposable,
+  ErrorCodes,
+  type DataCallback,
+  type Message,
+  type MessageReader,
+  type MessageWriter,
+} from "vscode-languageserver/node";
 
 /** Where the server stands in the life cycle. */
 export type LifecycleState = "waiting-for-initialize" | "running" | "shut-down";
 
 /** What the gate does with one incoming message. */
 export type GateDecision =
-  | { readonly kind: "forward" }
-  | { readonly kind: "drop" }
-  | { readonly kind: "refuse"; readonly code: number; readonly message: string };
+  { readonly kind: "forward" } | { readonly kind: "drop" } | { readonly kind: "refuse"; readonly code: number; readonly message: string };
 
 /** The life cycle as a small state machine, kept apart from I/O so the rules read in one place. */
 export interface Lifecycle {
@@ -37,7 +42,11 @@ export function createLifecycle(): Lifecycle {
       if (method === "exit") return { kind: "forward" };
       if (!isRequest) return state === "running" ? { kind: "forward" } : { kind: "drop" };
       if (state === "shut-down") {
-        return { kind: "refuse", code: ErrorCodes.InvalidRequest, message: `The server has been shut down; "${method}" is refused. Send "exit".` };
+        return {
+          kind: "refuse",
+          code: ErrorCodes.InvalidRequest,
+          message: `The server has been shut down; "${method}" is refused. Send "exit".`,
+        };
       }
       if (method === "initialize") {
         if (state === "running") return { kind: "refuse", code: ErrorCodes.InvalidRequest, message: "The server is already initialized." };
@@ -45,7 +54,11 @@ export function createLifecycle(): Lifecycle {
         return { kind: "forward" };
       }
       if (state === "waiting-for-initialize") {
-        return { kind: "refuse", code: ErrorCodes.ServerNotInitialized, message: `The server is not initialized yet; "${method}" is refused.` };
+        return {
+          kind: "refuse",
+          code: ErrorCodes.ServerNotInitialized,
+          message: `The server is not initialized yet; "${method}" is refused.`,
+        };
       }
       if (method === "shutdown") state = "shut-down";
       return { kind: "forward" };

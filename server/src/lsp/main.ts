@@ -29,9 +29,11 @@ function transportFromArguments(argv: readonly string[]): { readonly transport: 
   for (let index = 0; index < argv.length; index += 1) {
     const [name, inlineValue] = argv[index].split("=", 2);
     const value = inlineValue ?? argv[index + 1];
-    if (name === "--stdio") return { transport: [createTolerantReader(process.stdin), new StreamMessageWriter(process.stdout)], stdio: true };
+    if (name === "--stdio")
+      return { transport: [createTolerantReader(process.stdin), new StreamMessageWriter(process.stdout)], stdio: true };
     if (name === "--node-ipc") return { transport: [new IPCMessageReader(process), new IPCMessageWriter(process)], stdio: false };
-    if (name === "--socket" && value !== undefined) return { transport: createServerSocketTransport(Number.parseInt(value, 10)), stdio: false };
+    if (name === "--socket" && value !== undefined)
+      return { transport: createServerSocketTransport(Number.parseInt(value, 10)), stdio: false };
     if (name === "--pipe" && value !== undefined) return { transport: createServerPipeTransport(value), stdio: false };
   }
   return undefined;

@@ -22,11 +22,7 @@ export interface SettingsStore {
 /** A client that never answers must not hold a feature up for long. */
 const CONFIGURATION_TIMEOUT_MS = 3000;
 
-export function createSettingsStore(
-  connection: Connection,
-  canAskClient: () => boolean,
-  log: ServerLog,
-): SettingsStore {
+export function createSettingsStore(connection: Connection, canAskClient: () => boolean, log: ServerLog): SettingsStore {
   let global: ServerSettings = DEFAULT_SETTINGS;
   let generation = 0;
   const perUri = new Map<string, Promise<ServerSettings>>();

@@ -3,7 +3,14 @@
  * library's own reader stops at a bad header until more bytes arrive, which can leave a good
  * request unanswered; this one keeps decoding everything it has.
  */
-import { Disposable, Emitter, type DataCallback, type Message, type MessageReader, type PartialMessageInfo } from "vscode-languageserver/node";
+import {
+  Disposable,
+  Emitter,
+  type DataCallback,
+  type Message,
+  type MessageReader,
+  type PartialMessageInfo,
+} from "vscode-languageserver/node";
 import { createFrameDecoder } from "./frameDecoder";
 
 /** Reads LSP frames from `input` (process.stdin in production). */

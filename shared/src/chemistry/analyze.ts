@@ -81,9 +81,7 @@ export function analyzeReading(reading: SpeciesReading): AnalysisResult {
   // Species made of parts (salts, hydrates, hydroxo ions) are split before anything is refused
   // for containing a metal: NH4Cl is NH4+ and Cl-, not a molecule with a five-bonded nitrogen.
   const composite =
-    dottedAnalysis(reading, analyzeSpecies) ??
-    saltAnalysis(reading, analyzeSpecies) ??
-    metalIonComplexAnalysis(reading, analyzeSpecies);
+    dottedAnalysis(reading, analyzeSpecies) ?? saltAnalysis(reading, analyzeSpecies) ?? metalIonComplexAnalysis(reading, analyzeSpecies);
   if (composite) return composite;
   const network = networkSolidProblem(reading);
   if (network) return { ok: false, reading, problem: network };
@@ -203,7 +201,8 @@ function readIntoFormula(reading: SpeciesReading, problem: Problem | undefined):
       };
     }
   }
-  if (!problem) return { ok: false, reading, problem: { code: "no-valid-structure", message: `${reading.formula}: no Lewis structure fits.` } };
+  if (!problem)
+    return { ok: false, reading, problem: { code: "no-valid-structure", message: `${reading.formula}: no Lewis structure fits.` } };
   const candidates = candidateStructuresFor(reading.composition, reading.charge);
   if (candidates.length === 0) return { ok: false, reading, problem };
   return {
@@ -237,7 +236,10 @@ const IONIC_GROUPS = new Set([1, 2]);
 
 /** Species VSEPR has nothing to say about: transition-metal centres, ionic solids, boranes. */
 function outOfScope(reading: SpeciesReading): Problem | undefined {
-  const metal = metalCentreProblem(reading.formula, reading.composition.map((part) => part.symbol));
+  const metal = metalCentreProblem(
+    reading.formula,
+    reading.composition.map((part) => part.symbol),
+  );
   if (metal) return metal;
   const elements = reading.composition.map((part) => elementBySymbol(part.symbol)!);
   const distinctElements = new Set(reading.composition.map((part) => part.symbol));
@@ -276,6 +278,7 @@ export const SMILES_MARKER = "smiles:";
  */
 export function analyzeTyped(text: string): AnalysisResult {
   const trimmed = text.trim();
-  if (trimmed.slice(0, SMILES_MARKER.length).toLowerCase() === SMILES_MARKER) return analyzeSmiles(trimmed.slice(SMILES_MARKER.length).trim());
+  if (trimmed.slice(0, SMILES_MARKER.length).toLowerCase() === SMILES_MARKER)
+    return analyzeSmiles(trimmed.slice(SMILES_MARKER.length).trim());
   return analyzeSpecies(text);
 }

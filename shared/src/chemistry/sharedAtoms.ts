@@ -17,10 +17,9 @@ export function sharedAtom(
   formalCharge: number,
   aromatic: boolean,
 ): GraphAtom {
-  const fits =
-    atomicNumber > 0 && atomicNumber < 128 && lonePairs >= 0 && lonePairs < 16 && formalCharge >= -15 && formalCharge <= 15;
+  const fits = atomicNumber > 0 && atomicNumber < 128 && lonePairs >= 0 && lonePairs < 16 && formalCharge >= -15 && formalCharge <= 15;
   if (!fits) return makeAtom(symbol, lonePairs, unpairedElectrons, formalCharge, aromatic);
-  const key = ((((atomicNumber * 16 + lonePairs) * 2 + unpairedElectrons) * 32 + formalCharge + 15) * 2) + (aromatic ? 1 : 0);
+  const key = (((atomicNumber * 16 + lonePairs) * 2 + unpairedElectrons) * 32 + formalCharge + 15) * 2 + (aromatic ? 1 : 0);
   let atom = atomsAlike.get(key);
   if (atom === undefined) {
     atom = makeAtom(symbol, lonePairs, unpairedElectrons, formalCharge, aromatic);

@@ -6,7 +6,11 @@
 export function sortSmall<T>(items: T[], compare: (a: T, b: T) => number, count?: number): T[];
 /** The same for the first `count` numbers of a typed array (the Lewis search's atom orders). */
 export function sortSmall(items: Int32Array, compare: (a: number, b: number) => number, count?: number): Int32Array;
-export function sortSmall<T>(items: { [index: number]: T; readonly length: number }, compare: (a: T, b: T) => number, count = items.length) {
+export function sortSmall<T>(
+  items: { [index: number]: T; readonly length: number },
+  compare: (a: T, b: T) => number,
+  count = items.length,
+) {
   for (let i = 1; i < count; i++) {
     const item = items[i];
     let j = i - 1;

@@ -9,12 +9,7 @@ export interface TextRange {
   readonly end: number;
 }
 
-export type ElementCategory =
-  | "main-group"
-  | "noble-gas"
-  | "transition-metal"
-  | "lanthanide"
-  | "actinide";
+export type ElementCategory = "main-group" | "noble-gas" | "transition-metal" | "lanthanide" | "actinide";
 
 export interface ElementData {
   readonly symbol: string;
@@ -136,9 +131,7 @@ export interface Problem {
   readonly range?: TextRange;
 }
 
-export type ReadResult =
-  | { readonly ok: true; readonly value: SpeciesReading }
-  | { readonly ok: false; readonly problem: Problem };
+export type ReadResult = { readonly ok: true; readonly value: SpeciesReading } | { readonly ok: false; readonly problem: Problem };
 
 /** One atom of a molecular graph, after the Lewis structure has been chosen. */
 export interface GraphAtom {
@@ -173,12 +166,7 @@ export interface MolecularGraph {
 }
 
 export type ElectronGeometry =
-  | "linear"
-  | "trigonal planar"
-  | "tetrahedral"
-  | "trigonal bipyramidal"
-  | "octahedral"
-  | "pentagonal bipyramidal";
+  "linear" | "trigonal planar" | "tetrahedral" | "trigonal bipyramidal" | "octahedral" | "pentagonal bipyramidal";
 
 export type MolecularGeometry =
   | ElectronGeometry

@@ -67,10 +67,16 @@ function unreadableFinding(unreadable: UnreadableSpecies, analyze: AnalyzeText):
 }
 
 function problemFinding(occurrence: SpeciesOccurrence, problem: Problem, analyze: AnalyzeText): Finding {
-  const message = problem.message.includes(occurrence.reading.formula) || problem.message.includes(occurrence.text)
-    ? problem.message
-    : `${occurrence.text}: ${problem.message}`;
-  return withSafeFix({ range: occurrence.range, severity: severityOf(problem.code), code: problem.code, message }, occurrence.text, problem, analyze);
+  const message =
+    problem.message.includes(occurrence.reading.formula) || problem.message.includes(occurrence.text)
+      ? problem.message
+      : `${occurrence.text}: ${problem.message}`;
+  return withSafeFix(
+    { range: occurrence.range, severity: severityOf(problem.code), code: problem.code, message },
+    occurrence.text,
+    problem,
+    analyze,
+  );
 }
 
 /**
@@ -84,7 +90,9 @@ function withSafeFix(finding: Finding, written: string, problem: Problem, analyz
   if (!isSafeSpellingFix(written, suggestion, analyze)) {
     // A respelt name is worth a hint; a word re-cased into symbols ("LiMoNeNe") is not.
     const recased = suggestion.toLowerCase() === written.toLowerCase();
-    return recased || finding.message.includes(suggestion) ? finding : { ...finding, message: `${finding.message} Did you mean ${suggestion}?` };
+    return recased || finding.message.includes(suggestion)
+      ? finding
+      : { ...finding, message: `${finding.message} Did you mean ${suggestion}?` };
   }
   return { ...finding, fix: { range: finding.range, newText: suggestion, title: `Change to ${suggestion}` } };
 }

@@ -60,7 +60,10 @@ export function documentKindFor(fileName: string, languageId?: string, firstByte
  */
 function sniffTable(firstBytes: string): "csv" | "tsv" | undefined {
   if (firstBytes.includes("\u0000")) return undefined;
-  const lines = firstBytes.replace(/^\ufeff/, "").split(/\r?\n/).filter((line) => line.trim().length > 0);
+  const lines = firstBytes
+    .replace(/^\ufeff/, "")
+    .split(/\r?\n/)
+    .filter((line) => line.trim().length > 0);
   // The last line of a prefix may be cut short; judge on whole lines.
   const whole = lines.length > 2 ? lines.slice(0, -1) : lines;
   if (whole.length < 2) return undefined;

@@ -51,7 +51,10 @@ function wordAfter(text: string, end: number): { word: string; end: number } {
 function formulaShapeOf(word: string): { bare: string; body: string; shape: TokenShape } | undefined {
   const plain = word.includes("<su") ? withUnicodeScripts(word) : word;
   if (plain === undefined) return undefined;
-  const bare = plain.replace(/^\d{1,2}(?=[A-Z])/, "").replace(/[,.;:]$/, "").replace(/\((?:aq|s|l|g)\)$/, "");
+  const bare = plain
+    .replace(/^\d{1,2}(?=[A-Z])/, "")
+    .replace(/[,.;:]$/, "")
+    .replace(/\((?:aq|s|l|g)\)$/, "");
   const match = /^([A-Z][A-Za-z0-9()\u2080-\u2089]*?)((?:\^?\d?[+\-\u2212]{1,2})?)$/.exec(bare);
   if (!match) return undefined;
   const shape = shapeOf(match[1], match[2]);

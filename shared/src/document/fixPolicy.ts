@@ -53,8 +53,17 @@ function isFormulaMark(code: number): boolean {
   return (
     (code >= 0x30 && code <= 0x39) || // digits
     (code >= 0x2080 && code <= 0x2089) || // subscript digits
-    code === 0xb2 || code === 0xb3 || code === 0xb9 || (code >= 0x2070 && code <= 0x207b) || // superscripts
-    code === 0x2b || code === 0x2d || code === 0x2212 || code === 0x5e || // + - − ^
-    code === 0x28 || code === 0x29 || code === 0x5b || code === 0x5d // ( ) [ ]
+    code === 0xb2 ||
+    code === 0xb3 ||
+    code === 0xb9 ||
+    (code >= 0x2070 && code <= 0x207b) || // superscripts
+    code === 0x2b ||
+    code === 0x2d ||
+    code === 0x2212 ||
+    code === 0x5e || // + - − ^
+    code === 0x28 ||
+    code === 0x29 ||
+    code === 0x5b ||
+    code === 0x5d // ( ) [ ]
   );
 }

@@ -49,7 +49,8 @@ function isSpace(code: number): boolean {
 }
 
 /** Words of math that join species rather than name them. */
-const OPERATORS = /^(?:[+=,;:.]|\\(?:rightarrow|longrightarrow|to|leftarrow|leftrightarrow|rightleftharpoons|longleftrightarrow|rightleftarrows|quad|qquad|,|;)|<?-+>|<=+>|<-+)$/;
+const OPERATORS =
+  /^(?:[+=,;:.]|\\(?:rightarrow|longrightarrow|to|leftarrow|leftrightarrow|rightleftharpoons|longleftrightarrow|rightleftarrows|quad|qquad|,|;)|<?-+>|<=+>|<-+)$/;
 
 /** Reads each species of the math content `text[start, end)` into `sink`. */
 export function scanLatexMath(text: string, start: number, end: number, read: SpeciesReader, sink: ScanSink): void {

@@ -49,11 +49,15 @@ function wordAfter(text: string, end: number): string {
 }
 
 function isShouted(word: string): boolean {
-  return word.length >= 2 && /^[A-Z]+$/.test(word) && !isConfidentToken(word, word, {
-    symbols: word.match(/[A-Z][a-z]?/g) ?? [],
-    hasCount: false,
-    hasCharge: false,
-  });
+  return (
+    word.length >= 2 &&
+    /^[A-Z]+$/.test(word) &&
+    !isConfidentToken(word, word, {
+      symbols: word.match(/[A-Z][a-z]?/g) ?? [],
+      hasCount: false,
+      hasCharge: false,
+    })
+  );
 }
 
 /**

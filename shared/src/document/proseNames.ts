@@ -131,9 +131,34 @@ function scanNameAt(
 // common practice: words around an ion name that make it a material or a family, not the ion
 const CLASS_BEFORE: ReadonlySet<string> = new Set(["a", "an", "any", "each", "every", "metal", "binary", "organic", "inorganic"]);
 const CLASS_AFTER: ReadonlySet<string> = new Set([
-  "layer", "layers", "film", "films", "coating", "coatings", "salt", "salts", "compound", "compounds", "glass",
-  "mineral", "minerals", "ore", "ores", "scale", "complex", "complexes", "ester", "esters", "group", "groups",
-  "cupboard", "cabinet", "store", "room", "shelf", "hood",
+  "layer",
+  "layers",
+  "film",
+  "films",
+  "coating",
+  "coatings",
+  "salt",
+  "salts",
+  "compound",
+  "compounds",
+  "glass",
+  "mineral",
+  "minerals",
+  "ore",
+  "ores",
+  "scale",
+  "complex",
+  "complexes",
+  "ester",
+  "esters",
+  "group",
+  "groups",
+  "cupboard",
+  "cabinet",
+  "store",
+  "room",
+  "shelf",
+  "hood",
 ]);
 
 /**
@@ -173,15 +198,53 @@ function isIonWord(word: string): boolean {
 // common practice: words around an element name that make it the substance, not an atom; the
 // words of gases only after gaseous (or volatile) elements: a "nickel gas cell" is a cell
 const AFTER_ANY_ELEMENT: ReadonlySet<string> = new Set([
-  "solution", "solutions", "water", "dropwise", "crystals", "powder", "liquid", "was", "were", "reacts", "reacted",
-  "burns", "burned", "boils", "condenses", "dissolves", "sublimes",
+  "solution",
+  "solutions",
+  "water",
+  "dropwise",
+  "crystals",
+  "powder",
+  "liquid",
+  "was",
+  "were",
+  "reacts",
+  "reacted",
+  "burns",
+  "burned",
+  "boils",
+  "condenses",
+  "dissolves",
+  "sublimes",
 ]);
 const AFTER_GASEOUS_ELEMENT: ReadonlySet<string> = new Set([
-  "gas", "gases", "vapour", "vapor", "cylinder", "cylinders", "atmosphere", "blanket", "purge", "stream", "flow",
-  "supply", "line", "lines",
+  "gas",
+  "gases",
+  "vapour",
+  "vapor",
+  "cylinder",
+  "cylinders",
+  "atmosphere",
+  "blanket",
+  "purge",
+  "stream",
+  "flow",
+  "supply",
+  "line",
+  "lines",
 ]);
 const AFTER_METAL: ReadonlySet<string> = new Set([
-  "metal", "metals", "turnings", "ribbon", "granules", "filings", "foil", "wire", "dust", "pellets", "chips", "shot",
+  "metal",
+  "metals",
+  "turnings",
+  "ribbon",
+  "granules",
+  "filings",
+  "foil",
+  "wire",
+  "dust",
+  "pellets",
+  "chips",
+  "shot",
 ]);
 const GASEOUS_OR_VOLATILE = new Set(["H", "N", "O", "F", "Cl", "Br", "I", "He", "Ne", "Ar", "Kr", "Xe", "Rn", "Hg"]);
 
@@ -194,9 +257,34 @@ function isSubstanceWordAfter(elementName: string, following: string): boolean {
 }
 
 const SUBSTANCE_BEFORE: ReadonlySet<string> = new Set([
-  "liquid", "gaseous", "molecular", "elemental", "solid", "dry", "excess", "pure", "fresh", "add", "added", "adding",
-  "under", "molten", "powdered", "granulated", "metallic", "native", "burning", "burn", "gives", "give", "forms",
-  "produces", "yields", "liberates", "releases", "evolves",
+  "liquid",
+  "gaseous",
+  "molecular",
+  "elemental",
+  "solid",
+  "dry",
+  "excess",
+  "pure",
+  "fresh",
+  "add",
+  "added",
+  "adding",
+  "under",
+  "molten",
+  "powdered",
+  "granulated",
+  "metallic",
+  "native",
+  "burning",
+  "burn",
+  "gives",
+  "give",
+  "forms",
+  "produces",
+  "yields",
+  "liberates",
+  "releases",
+  "evolves",
 ]);
 
 function isSubstanceContext(
@@ -274,14 +362,28 @@ function stockNumeralIn(text: string, start: number, end: number): NameWord | un
 
 /** Punctuation that may sit before a word: ( [ " ' * _ and curly quotes. */
 function isLeadingPunctuation(code: number): boolean {
-  return code === 0x28 || code === 0x5b || code === 0x22 || code === 0x27 || code === 0x2a || code === 0x5f || code === 0x201c || code === 0x2018;
+  return (
+    code === 0x28 || code === 0x5b || code === 0x22 || code === 0x27 || code === 0x2a || code === 0x5f || code === 0x201c || code === 0x2018
+  );
 }
 
 /** Punctuation that may sit after a word: ) ] " ' * _ , . ; : ! ? and curly quotes. */
 function isTrailingPunctuation(code: number): boolean {
   return (
-    code === 0x29 || code === 0x5d || code === 0x22 || code === 0x27 || code === 0x2a || code === 0x5f || code === 0x2c ||
-    code === 0x2e || code === 0x3b || code === 0x3a || code === 0x21 || code === 0x3f || code === 0x201d || code === 0x2019
+    code === 0x29 ||
+    code === 0x5d ||
+    code === 0x22 ||
+    code === 0x27 ||
+    code === 0x2a ||
+    code === 0x5f ||
+    code === 0x2c ||
+    code === 0x2e ||
+    code === 0x3b ||
+    code === 0x3a ||
+    code === 0x21 ||
+    code === 0x3f ||
+    code === 0x201d ||
+    code === 0x2019
   );
 }
 
@@ -291,7 +393,9 @@ function isLetter(code: number): boolean {
 
 /** Letters, locant digits and commas, hyphens, and the brackets of a Stock numeral. */
 function isNameCharacter(code: number): boolean {
-  return isLetter(code) || (code >= 0x30 && code <= 0x39) || code === 0x2d || code === 0x2c || code === 0x28 || code === 0x29 || code === 0x27;
+  return (
+    isLetter(code) || (code >= 0x30 && code <= 0x39) || code === 0x2d || code === 0x2c || code === 0x28 || code === 0x29 || code === 0x27
+  );
 }
 
 /** The word a name could be made of inside the chunk `[start, end)`, without the punctuation around it. */

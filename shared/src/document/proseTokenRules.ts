@@ -5,9 +5,7 @@
  */
 
 /** Single-element molecules that people write with a count: H2, Cl2, O3, S8, C60. */
-const HOMONUCLEAR = new Set([
-  "H2", "D2", "N2", "O2", "O3", "F2", "Cl2", "Br2", "I2", "P4", "S8", "C60", "C70",
-]);
+const HOMONUCLEAR = new Set(["H2", "D2", "N2", "O2", "O3", "F2", "Cl2", "Br2", "I2", "P4", "S8", "C60", "C70"]);
 
 /** Lone atoms whose symbols are not English words or everyday abbreviations. */
 const LONE_ATOMS = new Set(["Xe", "Kr", "Ar", "Ne", "Rn"]);
@@ -20,8 +18,25 @@ const LABEL_LETTERS = new Set(["A", "B", "C", "D", "E", "G", "J", "L", "M", "P",
 
 /** Mixed-case words and abbreviations that spell valid-looking symbol sequences but are not species. */
 const NOT_SPECIES = new Set([
-  "NaN", "HeLa", "HeNe", "BSc", "NiCd", "CoA", "CoV", "GeV", "TeV", "PhD", "InN", "SiN",
-  "BaSh", "NiCo", "CaRe", "PuB", "ScI", "SnO", "ArXiv",
+  "NaN",
+  "HeLa",
+  "HeNe",
+  "BSc",
+  "NiCd",
+  "CoA",
+  "CoV",
+  "GeV",
+  "TeV",
+  "PhD",
+  "InN",
+  "SiN",
+  "BaSh",
+  "NiCo",
+  "CaRe",
+  "PuB",
+  "ScI",
+  "SnO",
+  "ArXiv",
 ]);
 
 /** What the shape of a token says, before the reader has a look. */

@@ -10,7 +10,17 @@ import type { ScanSink, SpeciesReader } from "./speciesReader";
 
 /** Directives whose indented content is code or math, not prose (a ".. note::" holds prose). */
 const CODE_DIRECTIVES: ReadonlySet<string> = new Set([
-  "code-block", "code", "sourcecode", "literalinclude", "highlight", "doctest", "testcode", "testoutput", "prompt", "ipython", "math",
+  "code-block",
+  "code",
+  "sourcecode",
+  "literalinclude",
+  "highlight",
+  "doctest",
+  "testcode",
+  "testoutput",
+  "prompt",
+  "ipython",
+  "math",
 ]);
 
 /** Scans a whole plain-text document into `sink`. */

@@ -55,7 +55,15 @@ interface ProseScan {
 /** Scans `text[start, end)` and adds what it finds to `sink`, with offsets into `text`. */
 export function scanProse(text: string, start: number, end: number, sink: ScanSink, read: SpeciesReader): void {
   const scan: ProseScan = {
-    text, end, sink, read, names: newNameScanState(), unclosedTicks: new Set(), resumeAt: start, seriesMemo: new Map(), smilesMemo: new Map(),
+    text,
+    end,
+    sink,
+    read,
+    names: newNameScanState(),
+    unclosedTicks: new Set(),
+    resumeAt: start,
+    seriesMemo: new Map(),
+    smilesMemo: new Map(),
   };
   let index = start;
   while (index < end) {
@@ -210,7 +218,17 @@ function scanChunk(scan: ProseScan, start: number, end: number): void {
 
 /** Punctuation that may sit before a word: ( [ " ' * _ < and curly quotes. */
 function isLeadingPunctuation(code: number): boolean {
-  return code === 0x28 || code === 0x5b || code === 0x22 || code === 0x27 || code === 0x2a || code === 0x5f || code === 0x3c || code === 0x201c || code === 0x2018;
+  return (
+    code === 0x28 ||
+    code === 0x5b ||
+    code === 0x22 ||
+    code === 0x27 ||
+    code === 0x2a ||
+    code === 0x5f ||
+    code === 0x3c ||
+    code === 0x201c ||
+    code === 0x2018
+  );
 }
 
 /** Formula tokens inside one chunk, e.g. "(SF4)," or "NF3/SF6" or "NH4+". */
@@ -254,7 +272,11 @@ function isWordCharacter(code: number): boolean {
 function isBodyCharacter(code: number): boolean {
   return (
     isWordCharacter(code) ||
-    code === 0x28 || code === 0x29 || code === 0x5b || code === 0x5d || code === 0xb7 ||
+    code === 0x28 ||
+    code === 0x29 ||
+    code === 0x5b ||
+    code === 0x5d ||
+    code === 0xb7 ||
     (code >= 0x2080 && code <= 0x2089)
   );
 }

@@ -17,11 +17,7 @@ const MAX_SMILES = 1000;
  * The occurrence for the code span content `text[start, end)` when it is marked `smiles:`, or an
  * unreadable mention when the SMILES does not parse; undefined for any other code span.
  */
-export function smilesOccurrence(
-  text: string,
-  start: number,
-  end: number,
-): SpeciesOccurrence | UnreadableSpecies | undefined {
+export function smilesOccurrence(text: string, start: number, end: number): SpeciesOccurrence | UnreadableSpecies | undefined {
   if (!text.startsWith(PREFIX, start)) return undefined;
   let smilesStart = start + PREFIX.length;
   let smilesEnd = end;

@@ -3,13 +3,7 @@
  * colour: the caller passes a `CardStyle` (the command line does, when stdout is a terminal).
  */
 import { shapeOf } from "../chemistry/analysis/shape3d";
-import type {
-  AngleExpectation,
-  AnalysisResult,
-  CentreAnalysis,
-  MeasuredAngle,
-  SpeciesAnalysis,
-} from "../chemistry/types";
+import type { AngleExpectation, AnalysisResult, CentreAnalysis, MeasuredAngle, SpeciesAnalysis } from "../chemistry/types";
 import { lewisJson } from "./analysisJson";
 import { compositeKind, distinctAnalysedParts, innerParts, partLabel } from "./compositeParts";
 import { isotopeNote, stateNote } from "./notationNotes";
@@ -35,8 +29,7 @@ export const PLAIN_CARD_STYLE: CardStyle = {
 };
 
 /** The caution every user-facing result carries. */
-export const MODEL_CAUTION =
-  "Model prediction, not measured data. Follow the safety data sheet, local rules and licensed practice.";
+export const MODEL_CAUTION = "Model prediction, not measured data. Follow the safety data sheet, local rules and licensed practice.";
 
 const LABEL_WIDTH = 22;
 const INDENT = "  ";
@@ -44,20 +37,12 @@ const INDENT = "  ";
 const LINE_WIDTH = 100;
 
 /** Formats one analysis (or the reason it failed) as a multi-line card ending in a newline. */
-export function formatAnalysisCard(
-  input: string,
-  result: AnalysisResult,
-  style: CardStyle = PLAIN_CARD_STYLE,
-): string {
+export function formatAnalysisCard(input: string, result: AnalysisResult, style: CardStyle = PLAIN_CARD_STYLE): string {
   const lines = result.ok ? successLines(input, result.value, style) : failureLines(input, result, style);
   return lines.join("\n") + "\n";
 }
 
-function failureLines(
-  input: string,
-  result: Extract<AnalysisResult, { ok: false }>,
-  style: CardStyle,
-): string[] {
+function failureLines(input: string, result: Extract<AnalysisResult, { ok: false }>, style: CardStyle): string[] {
   const { problem, reading } = result;
   const heading = reading && reading.formula !== input.trim() ? `${input} (${reading.formula})` : input;
   if (result.parts) return compositeLines(heading, result, style);
@@ -108,9 +93,7 @@ function successLines(input: string, analysis: SpeciesAnalysis, style: CardStyle
   lines.push(row(style, "Valence electrons", String(analysis.valenceElectrons)));
   lines.push(...lewisLines(analysis, style));
   // Measured angles belong to the species; list them once, under the first centre.
-  analysis.centres.forEach((centre, position) =>
-    lines.push(...centreLines(centre, position === 0 ? analysis.measuredAngles : [], style)),
-  );
+  analysis.centres.forEach((centre, position) => lines.push(...centreLines(centre, position === 0 ? analysis.measuredAngles : [], style)));
   if (analysis.centres.length === 0) lines.push(row(style, "Centres", "none (no atom has two or more neighbours)"));
   const pointGroup = shapeOf(analysis).pointGroup;
   if (pointGroup) lines.push(row(style, "Point group", pointGroup));
@@ -119,9 +102,7 @@ function successLines(input: string, analysis: SpeciesAnalysis, style: CardStyle
   if (analysis.warnings.length === 0) {
     lines.push(row(style, "Warnings", "none"));
   } else {
-    analysis.warnings.forEach((warning, position) =>
-      lines.push(row(style, position === 0 ? "Warnings" : "", style.warning(warning))),
-    );
+    analysis.warnings.forEach((warning, position) => lines.push(row(style, position === 0 ? "Warnings" : "", style.warning(warning))));
   }
   if (!withCaution) return lines;
   for (const line of wrapWords(`Caution: ${MODEL_CAUTION}`, LINE_WIDTH - INDENT.length)) {
@@ -147,11 +128,7 @@ function lewisLines(analysis: SpeciesAnalysis, style: CardStyle): string[] {
   return lines;
 }
 
-function centreLines(
-  centre: CentreAnalysis,
-  measuredAngles: readonly MeasuredAngle[],
-  style: CardStyle,
-): string[] {
+function centreLines(centre: CentreAnalysis, measuredAngles: readonly MeasuredAngle[], style: CardStyle): string[] {
   const sub = INDENT;
   const lines = [
     row(style, `Centre ${centre.atom} (atom ${centre.index})`, `${centre.axe}, steric number ${centre.stericNumber}`),
@@ -164,7 +141,12 @@ function centreLines(
   );
   measuredAngles.forEach((angle, position) =>
     lines.push(
-      row(style, position === 0 ? "Measured" : "", `${degrees(angle.degrees)} ${angle.between} ${style.muted(`(source: ${angle.source})`)}`, sub),
+      row(
+        style,
+        position === 0 ? "Measured" : "",
+        `${degrees(angle.degrees)} ${angle.between} ${style.muted(`(source: ${angle.source})`)}`,
+        sub,
+      ),
     ),
   );
   const note = centre.hybridizationNote ? ` ${style.muted(`(${centre.hybridizationNote})`)}` : "";

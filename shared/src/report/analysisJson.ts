@@ -155,7 +155,13 @@ function successJson(input: string, analysis: SpeciesAnalysis): AnalysisJsonSucc
 }
 
 function partJson(part: SpeciesPart): PartJson {
-  const json: PartJson = { role: part.role, count: part.count, formula: part.formula, monatomic: part.monatomic, shape: partShapeText(part) };
+  const json: PartJson = {
+    role: part.role,
+    count: part.count,
+    formula: part.formula,
+    monatomic: part.monatomic,
+    shape: partShapeText(part),
+  };
   return part.analysis ? { ...json, analysis: toAnalysisJson(part.formula, part.analysis) } : json;
 }
 
@@ -174,9 +180,7 @@ function centreJson(centre: CentreAnalysis): CentreJson {
     unpairedElectrons: centre.unpairedElectrons,
     expectedAngles: centre.expectedAngles.map((angle) => ({ ...angle })),
   };
-  return centre.hybridizationNote === undefined
-    ? json
-    : { ...json, hybridizationNote: centre.hybridizationNote };
+  return centre.hybridizationNote === undefined ? json : { ...json, hybridizationNote: centre.hybridizationNote };
 }
 
 /** Counts the chosen Lewis structure's electron pairs; shared with the text card. */

@@ -26,7 +26,12 @@ export function isProseKind(kind: DocumentKind): boolean {
 const SIDE_BY_SIDE_GAP = /^[\s(,–—-]*$/;
 
 /** The hints whose offset lies in `range`, in document order. `isCancelled` stops early with none. */
-export function geometryHints(text: string, model: DocumentModel, range: TextRange, isCancelled: () => boolean = () => false): GeometryHint[] {
+export function geometryHints(
+  text: string,
+  model: DocumentModel,
+  range: TextRange,
+  isCancelled: () => boolean = () => false,
+): GeometryHint[] {
   const pending: PendingHint[] = [];
   for (const occurrence of hintedOccurrences(model)) {
     if (isCancelled()) return [];
@@ -38,7 +43,8 @@ export function geometryHints(text: string, model: DocumentModel, range: TextRan
     if (!result.ok || !label) continue;
     const formula = result.value.reading.formula;
     const mhchemEnd = occurrence.reading.notation === "mhchem" ? mhchemSpanEnd(text, occurrence.range) : undefined;
-    const aloneInSpan = mhchemEnd !== undefined && text.slice(text.lastIndexOf("\\ce{", occurrence.range.start), mhchemEnd) === `\\ce{${occurrence.text}}`;
+    const aloneInSpan =
+      mhchemEnd !== undefined && text.slice(text.lastIndexOf("\\ce{", occurrence.range.start), mhchemEnd) === `\\ce{${occurrence.text}}`;
     const previous = pending[pending.length - 1];
     const pairsWithPrevious =
       previous !== undefined &&
@@ -78,7 +84,8 @@ function placeHints(text: string, pending: readonly PendingHint[]): GeometryHint
     const group = [item];
     while (index + 1 < pending.length && pending[index + 1].mhchemEnd === item.mhchemEnd) group.push(pending[++index]);
     // A span that is more than one species (a reaction) names the species each label belongs to.
-    const labels = group.length === 1 && item.aloneInSpan ? [item.label] : uniqueLabels(group.map((member) => `${member.formula} ${member.label}`));
+    const labels =
+      group.length === 1 && item.aloneInSpan ? [item.label] : uniqueLabels(group.map((member) => `${member.formula} ${member.label}`));
     hints.push({ offset: item.mhchemEnd, label: labels.join("; ") });
   }
   return hints;

@@ -18,8 +18,7 @@ import { compositeKind, distinctAnalysedParts, innerParts, roleWords } from "./c
 import { partShapeText } from "../chemistry/analysis/partShapes";
 
 /** The caution every editor-facing result carries (hover cards and summary tables). */
-export const HOVER_CAUTION =
-  "Model prediction, not measured data: follow the safety data sheet, local rules and licensed practice.";
+export const HOVER_CAUTION = "Model prediction, not measured data: follow the safety data sheet, local rules and licensed practice.";
 
 /** The text formats a hover card can be written in (the protocol's markup kinds). */
 export type HoverFormat = "markdown" | "plaintext";
@@ -255,13 +254,7 @@ function centreBlocks(centres: readonly CentreAnalysis[], options: HoverMarkdown
   return blocks;
 }
 
-function centreBlock(
-  centre: CentreAnalysis,
-  count: number,
-  multiCentre: boolean,
-  options: HoverMarkdownOptions,
-  markup: Markup,
-): string[] {
+function centreBlock(centre: CentreAnalysis, count: number, multiCentre: boolean, options: HoverMarkdownOptions, markup: Markup): string[] {
   const label = markup.strong(multiCentre ? `Centre ${centre.atom}${count > 1 ? ` (×${count})` : ""}` : `Centre ${centre.atom}`);
   const lines = [
     `${label} · ${centre.axe} · steric number ${centre.stericNumber}`,

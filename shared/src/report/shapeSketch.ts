@@ -121,7 +121,10 @@ export function shapeSketchSvg(analysis: SpeciesAnalysis, options: ShapeSketchOp
     const middle = screen([(from[0] + to[0]) / 2, (from[1] + to[1]) / 2, 0]);
     // Each half is painted just behind its own atom, so a ball always covers the end of its
     // bonds and a bond running towards the viewer is never hidden by the atom it leaves.
-    for (const [end, depth] of [[from, from[2]], [to, to[2]]] as const) {
+    for (const [end, depth] of [
+      [from, from[2]],
+      [to, to[2]],
+    ] as const) {
       painted.push({ depth: depth - 1e-3, markup: bondMarkup(screen(end), middle, bond.order, bondWidth) });
     }
   }
@@ -137,7 +140,10 @@ export function shapeSketchSvg(analysis: SpeciesAnalysis, options: ShapeSketchOp
       points[pair.atom][2] + direction[2] * LOBE_OFFSET,
     ];
     const size = pair.electrons === 2 ? 1 : 0.6;
-    painted.push({ depth: middle[2], markup: lobeMarkup(screen(middle), direction, LOBE_LENGTH * size * pixels, LOBE_WIDTH * size * pixels) });
+    painted.push({
+      depth: middle[2],
+      markup: lobeMarkup(screen(middle), direction, LOBE_LENGTH * size * pixels, LOBE_WIDTH * size * pixels),
+    });
   }
   painted.sort((a, b) => a.depth - b.depth);
   return (
@@ -163,7 +169,11 @@ function view(point: Vec3): Vec3 {
   const [x, y, z] = point;
   const across = x * Math.cos(VIEW_TURN) - y * Math.sin(VIEW_TURN);
   const away = x * Math.sin(VIEW_TURN) + y * Math.cos(VIEW_TURN);
-  return [across, away * Math.sin(VIEW_ELEVATION) + z * Math.cos(VIEW_ELEVATION), -away * Math.cos(VIEW_ELEVATION) + z * Math.sin(VIEW_ELEVATION)];
+  return [
+    across,
+    away * Math.sin(VIEW_ELEVATION) + z * Math.cos(VIEW_ELEVATION),
+    -away * Math.cos(VIEW_ELEVATION) + z * Math.sin(VIEW_ELEVATION),
+  ];
 }
 
 /** Whole pixels within reason, so the markup never carries NaN or a runaway size. */
@@ -172,7 +182,10 @@ function pixelSize(asked: number | undefined, fallback: number): number {
 }
 
 function centroid(points: readonly Vec3[]): Vec3 {
-  const sum = points.reduce<[number, number, number]>((total, point) => [total[0] + point[0], total[1] + point[1], total[2] + point[2]], [0, 0, 0]);
+  const sum = points.reduce<[number, number, number]>(
+    (total, point) => [total[0] + point[0], total[1] + point[1], total[2] + point[2]],
+    [0, 0, 0],
+  );
   return [sum[0] / points.length, sum[1] / points.length, sum[2] / points.length];
 }
 

@@ -144,7 +144,12 @@ export function shapeViewModel(analysis: SpeciesAnalysis, coordinates: ShapeCoor
   const lonePairs = centreLonePairs(analysis, coordinates, atoms, neighbours);
   const angles = analysis.centres.flatMap((centre) =>
     centre.index < atomCount
-      ? labelledAngles(centre.index, atoms, neighbours[centre.index], lonePairs.filter((lonePair) => lonePair.atom === centre.index).map((lonePair) => lonePair.direction))
+      ? labelledAngles(
+          centre.index,
+          atoms,
+          neighbours[centre.index],
+          lonePairs.filter((lonePair) => lonePair.atom === centre.index).map((lonePair) => lonePair.direction),
+        )
       : [],
   );
   const reading = analysis.reading;

@@ -45,5 +45,7 @@ export function coordinateFileOf(analysis: SpeciesAnalysis, format: CoordinateFo
   const baseName = analysis.reading.formula.replace(/[^A-Za-z0-9+-]+/g, "_").replace(/^_+|_+$/g, "") || "species";
   if (format === "xyz") return { ok: true, value: { text: toXyz(coordinates, title), baseName, extension: "xyz" } };
   const molfile = toMolfile(analysis.graph, coordinates, title);
-  return molfile.ok ? { ok: true, value: { text: molfile.value, baseName, extension: "mol" } } : { ok: false, message: molfile.problem.message };
+  return molfile.ok
+    ? { ok: true, value: { text: molfile.value, baseName, extension: "mol" } }
+    : { ok: false, message: molfile.problem.message };
 }

@@ -11,15 +11,7 @@ import { HOVER_CAUTION, formatAngle } from "./hoverMarkdown";
 
 /** A column the table can show. */
 export type SummaryColumn =
-  | "formula"
-  | "name"
-  | "valenceElectrons"
-  | "axe"
-  | "electronGeometry"
-  | "molecularGeometry"
-  | "idealAngles"
-  | "hybridization"
-  | "polarity";
+  "formula" | "name" | "valenceElectrons" | "axe" | "electronGeometry" | "molecularGeometry" | "idealAngles" | "hybridization" | "polarity";
 
 export type SummaryFormat = "markdown" | "csv" | "tsv";
 
@@ -67,7 +59,8 @@ export type SummaryEntry = SpeciesAnalysis | SpeciesWithParts;
 /** The table row a result gives, if any; the rest go under "Not analysed". */
 export function summaryEntryOf(result: AnalysisResult): SummaryEntry | undefined {
   if (result.ok) return result.value;
-  if (result.parts && result.reading) return { reading: result.reading, kind: compositeKind(result.problem.code).noun, parts: result.parts };
+  if (result.parts && result.reading)
+    return { reading: result.reading, kind: compositeKind(result.problem.code).noun, parts: result.parts };
   return undefined;
 }
 
@@ -89,9 +82,7 @@ export function isSummaryColumn(value: unknown): value is SummaryColumn {
 export function summaryTable(input: SummaryTableInput): string {
   const requested = (input.columns ?? []).filter(isSummaryColumn);
   const columns = requested.length > 0 ? requested : SUMMARY_COLUMNS;
-  const rows = uniqueByFormula(input.analyses).map((analysis) =>
-    columns.map((column) => cellText(analysis, column, input.angleDecimals)),
-  );
+  const rows = uniqueByFormula(input.analyses).map((analysis) => columns.map((column) => cellText(analysis, column, input.angleDecimals)));
   const headers = columns.map((column) => COLUMN_HEADERS[column]);
   if (input.format === "csv") return csvTable(headers, rows);
   if (input.format === "tsv") return tsvTable(headers, rows);
@@ -129,9 +120,7 @@ function cellText(entry: SummaryEntry, column: SummaryColumn, decimals: number):
     case "molecularGeometry":
       return perCentre(analysis.centres, (centre) => centre.molecularGeometry);
     case "idealAngles":
-      return perCentre(analysis.centres, (centre) =>
-        centre.idealAngles.map((angle) => formatAngle(angle, decimals)).join(", "),
-      );
+      return perCentre(analysis.centres, (centre) => centre.idealAngles.map((angle) => formatAngle(angle, decimals)).join(", "));
     case "hybridization":
       return perCentre(analysis.centres, (centre) => centre.hybridization);
     case "polarity":
@@ -199,12 +188,7 @@ function perCentre(
 }
 
 function markdownTable(headers: readonly string[], rows: readonly string[][], unanalysed: readonly UnanalysedSpecies[]): string {
-  const lines = [
-    markdownRow(headers),
-    markdownRow(headers.map(() => "---")),
-    ...rows.map((row) => markdownRow(row)),
-    "",
-  ];
+  const lines = [markdownRow(headers), markdownRow(headers.map(() => "---")), ...rows.map((row) => markdownRow(row)), ""];
   if (unanalysed.length > 0) {
     // An HTML comment: the writer sees the list in the source, and the document's own checks skip
     // it, so inserting a table never adds problems for species the document already reports.
@@ -217,7 +201,10 @@ function markdownTable(headers: readonly string[], rows: readonly string[][], un
 
 /** Text that cannot end an HTML comment early or span lines. */
 function commentSafe(text: string): string {
-  return text.replace(/-{2,}/g, (dashes) => dashes.split("").join(" ")).replace(/>/g, "&gt;").replace(/\r?\n/g, " ");
+  return text
+    .replace(/-{2,}/g, (dashes) => dashes.split("").join(" "))
+    .replace(/>/g, "&gt;")
+    .replace(/\r?\n/g, " ");
 }
 
 function markdownRow(cells: readonly string[]): string {

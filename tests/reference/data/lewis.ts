@@ -116,7 +116,22 @@ export const NOT_RADICALS: readonly string[] = ["O3", "SO2", "NO2-", "NO+", "NO2
 
 // from memory: inorganic text conventions (more than eight electrons only from period 3 on)
 export const EXPANDED_OCTET: readonly string[] = ["SF6", "PCl5", "XeF4", "SF4", "ClF3", "XeF2", "I3-", "PCl6-", "BrF5", "ICl4-", "IF7"];
-export const NO_EXPANDED_OCTET: readonly string[] = ["CO2", "NO3-", "N2O", "O3", "CH4", "NH4+", "BF4-", "CO3^2-", "HNO3", "NO2", "H2O", "N3-", "BF3", "HCN"];
+export const NO_EXPANDED_OCTET: readonly string[] = [
+  "CO2",
+  "NO3-",
+  "N2O",
+  "O3",
+  "CH4",
+  "NH4+",
+  "BF4-",
+  "CO3^2-",
+  "HNO3",
+  "NO2",
+  "H2O",
+  "N3-",
+  "BF3",
+  "HCN",
+];
 
 export interface IonShapeCase {
   readonly species: string;

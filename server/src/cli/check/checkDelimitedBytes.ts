@@ -75,7 +75,9 @@ export async function checkDelimitedBytes(file: DocumentFile, outputs: CheckOutp
     const wholeFileRead = startBytes < START_BYTES;
     let startText: string;
     try {
-      startText = new TextDecoder("utf-8", { fatal: true, ignoreBOM: true }).decode(start.subarray(0, startBytes), { stream: !wholeFileRead });
+      startText = new TextDecoder("utf-8", { fatal: true, ignoreBOM: true }).decode(start.subarray(0, startBytes), {
+        stream: !wholeFileRead,
+      });
     } catch {
       return { found: 0, resume: "start" };
     }
@@ -93,7 +95,15 @@ export async function checkDelimitedBytes(file: DocumentFile, outputs: CheckOutp
       memo.rows.clear();
       memo.headerKey = `${delimiter}${header.text}`;
     }
-    const table: TableShape = { kind, delimiter, separator: delimiter.charCodeAt(0), first, last, header: header.text, file: file.displayPath };
+    const table: TableShape = {
+      kind,
+      delimiter,
+      separator: delimiter.charCodeAt(0),
+      first,
+      last,
+      header: header.text,
+      file: file.displayPath,
+    };
     // The rows are read from just past the header's line, in a buffer of their own.
     const buffer = Buffer.allocUnsafe(context.bufferBytes ?? BUFFER_BYTES);
     let bufferStart = Buffer.byteLength(prefix, "utf8");

@@ -41,11 +41,9 @@ export function summaryLine(summary: CheckSummary): string {
 
 function checkedLine(summary: CheckSummary): string {
   const files = `${summary.filesChecked} ${summary.filesChecked === 1 ? "file" : "files"}`;
-  const parts = [
-    plural(summary.errors, "error"),
-    plural(summary.warnings, "warning"),
-    plural(summary.notes, "note"),
-  ].filter((part) => !part.startsWith("0 "));
+  const parts = [plural(summary.errors, "error"), plural(summary.warnings, "warning"), plural(summary.notes, "note")].filter(
+    (part) => !part.startsWith("0 "),
+  );
   if (parts.length === 0) return `No findings in ${files} checked.`;
   const listed = parts.length === 1 ? parts[0] : `${parts.slice(0, -1).join(", ")} and ${parts[parts.length - 1]}`;
   return `${listed} in ${summary.filesWithFindings} of ${files} checked.`;

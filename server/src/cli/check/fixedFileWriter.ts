@@ -17,7 +17,18 @@
  *   copy is complete the temporary file holds the whole new content.
  */
 import { createHash, randomBytes, type Hash } from "node:crypto";
-import { closeSync, fsyncSync, ftruncateSync, openSync, readSync, renameSync, statSync, unlinkSync, writeSync, type BigIntStats } from "node:fs";
+import {
+  closeSync,
+  fsyncSync,
+  ftruncateSync,
+  openSync,
+  readSync,
+  renameSync,
+  statSync,
+  unlinkSync,
+  writeSync,
+  type BigIntStats,
+} from "node:fs";
 import { open, realpath, stat, type FileHandle } from "node:fs/promises";
 import { basename, dirname, join } from "node:path";
 import type { TemporaryFiles } from "./temporaryFiles";

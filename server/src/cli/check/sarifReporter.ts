@@ -19,7 +19,10 @@ export function sarifLevel(severity: FindingSeverity): "error" | "warning" | "no
 
 /** A relative path as a URI reference: forward slashes, each segment percent-encoded. */
 export function relativeUri(displayPath: string): string {
-  return displayPath.split("/").map((segment) => (segment === ".." || segment === "." ? segment : encodeURIComponent(segment))).join("/");
+  return displayPath
+    .split("/")
+    .map((segment) => (segment === ".." || segment === "." ? segment : encodeURIComponent(segment)))
+    .join("/");
 }
 
 /**

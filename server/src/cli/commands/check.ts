@@ -63,7 +63,8 @@ async function runCheck(args: readonly string[], io: CliIo): Promise<number> {
 
   const found = findDocuments(positionals);
   for (const unreadable of found.unreadable) io.writeError(`lonepair check: ${unreadable.path}: ${unreadable.message}\n`);
-  for (const skipped of found.skipped) io.writeError(`lonepair check: ${skipped}: not a markdown, text, CSV/TSV, JSON or YAML file; skipped\n`);
+  for (const skipped of found.skipped)
+    io.writeError(`lonepair check: ${skipped}: not a markdown, text, CSV/TSV, JSON or YAML file; skipped\n`);
 
   const fixing = values.fix === true;
   const dryRun = values["dry-run"] === true;
@@ -82,15 +83,19 @@ async function runCheck(args: readonly string[], io: CliIo): Promise<number> {
   try {
     for (const file of found.files) {
       try {
-        await checkFile(file, { fix: fixing, dryRun, temporaries }, {
-          reporter,
-          summary,
-          // A diff piped on is data for patch and must keep the file's bytes; a terminal sees them escaped.
-          writeDiff: process.stdout.isTTY === true ? (text) => io.writeOut(terminalSafeLines(text)) : io.writeOut,
-          progress: (done) => progress.update(bytesBefore + done, totalBytes, terminalSafe(file.displayPath)),
-          note: (message) => io.writeError(`lonepair check: ${terminalSafe(message)}\n`),
-          drain: io.outputDrained,
-        });
+        await checkFile(
+          file,
+          { fix: fixing, dryRun, temporaries },
+          {
+            reporter,
+            summary,
+            // A diff piped on is data for patch and must keep the file's bytes; a terminal sees them escaped.
+            writeDiff: process.stdout.isTTY === true ? (text) => io.writeOut(terminalSafeLines(text)) : io.writeOut,
+            progress: (done) => progress.update(bytesBefore + done, totalBytes, terminalSafe(file.displayPath)),
+            note: (message) => io.writeError(`lonepair check: ${terminalSafe(message)}\n`),
+            drain: io.outputDrained,
+          },
+        );
       } catch (error) {
         progress.finish();
         io.writeError(`lonepair check: ${terminalSafe(file.displayPath)}: ${ioMessage(error)}\n`);
@@ -125,4 +130,3 @@ function reporterFor(format: Format, io: CliIo, dryRun: boolean): CheckReporter 
   if (format === "sarif") return sarifReporter(io.writeOut, version);
   return textReporter(io.writeOut, io.colour);
 }
-

@@ -78,7 +78,8 @@ function runCoords(args: readonly string[], io: CliIo): number {
     io.writeError(`lonepair coords: cannot write ${output}: ${(error as NodeJS.ErrnoException).code ?? (error as Error).message}\n`);
     return EXIT_USAGE;
   }
-  io.writeOut(`Wrote ${atomCount} atoms of ${analysis.reading.formula} to ${output} (${format === "mol" ? "MDL molfile" : "XYZ"}).\n${CAUTION}\n`);
+  io.writeOut(
+    `Wrote ${atomCount} atoms of ${analysis.reading.formula} to ${output} (${format === "mol" ? "MDL molfile" : "XYZ"}).\n${CAUTION}\n`,
+  );
   return EXIT_OK;
 }
-

@@ -34,7 +34,8 @@ async function runList(args: readonly string[], io: CliIo): Promise<number> {
   if (parsed.positionals.length === 0) return usageError(listCommand, io, "give at least one file or folder.");
   const found = findDocuments(parsed.positionals);
   for (const unreadable of found.unreadable) io.writeError(`lonepair list: ${unreadable.path}: ${unreadable.message}\n`);
-  for (const skipped of found.skipped) io.writeError(`lonepair list: ${skipped}: not a markdown, text, CSV/TSV, JSON or YAML file; skipped\n`);
+  for (const skipped of found.skipped)
+    io.writeError(`lonepair list: ${skipped}: not a markdown, text, CSV/TSV, JSON or YAML file; skipped\n`);
   let failed = found.unreadable.length > 0;
   const json = parsed.values.json === true;
   let written = 0;
@@ -43,22 +44,28 @@ async function runList(args: readonly string[], io: CliIo): Promise<number> {
       for await (const batch of speciesInFile(file)) {
         if (batch.length === 0) continue;
         if (json) {
-          const items = batch.map((species) =>
-            `  ${JSON.stringify({
-              file: species.file,
-              line: species.line,
-              column: species.column,
-              length: species.length,
-              text: species.text,
-              formula: species.occurrence.reading.formula,
-              charge: species.occurrence.reading.charge,
-            })}`,
+          const items = batch.map(
+            (species) =>
+              `  ${JSON.stringify({
+                file: species.file,
+                line: species.line,
+                column: species.column,
+                length: species.length,
+                text: species.text,
+                formula: species.occurrence.reading.formula,
+                charge: species.occurrence.reading.charge,
+              })}`,
           );
           io.writeOut(jsonTerminalSafe(`${written === 0 ? "[\n" : ",\n"}${items.join(",\n")}`));
         } else {
           io.writeOut(
             batch
-              .map((species) => terminalSafe(`${species.file}:${species.line}:${species.column}: ${species.text} (${describe(species.occurrence.reading)})`) + "\n")
+              .map(
+                (species) =>
+                  terminalSafe(
+                    `${species.file}:${species.line}:${species.column}: ${species.text} (${describe(species.occurrence.reading)})`,
+                  ) + "\n",
+              )
               .join(""),
           );
         }

@@ -70,7 +70,8 @@ async function runTable(args: readonly string[], io: CliIo): Promise<number> {
     io.writeOut(terminalSafeLines(summaryTable({ analyses, unanalysed: collected.unanalysed, format, angleDecimals: ANGLE_DECIMALS })));
   }
   if (format === "csv" || analyses.length === 0) {
-    for (const item of collected.unanalysed) io.writeError(`lonepair table: not analysed: ${terminalSafe(item.text)}: ${terminalSafe(item.message)}\n`);
+    for (const item of collected.unanalysed)
+      io.writeError(`lonepair table: not analysed: ${terminalSafe(item.text)}: ${terminalSafe(item.message)}\n`);
     if (analyses.length > 0) io.writeError(`${MODEL_CAUTION}\n`);
   }
   if (failed) return EXIT_USAGE;
@@ -85,4 +86,3 @@ function isOnDisk(argument: string): boolean {
     return false;
   }
 }
-

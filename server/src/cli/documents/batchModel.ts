@@ -37,7 +37,9 @@ export function batchModel(batch: DocumentBatch, kind: DocumentKind, context: Ba
   return {
     // Worked out only when asked: checking a file needs the findings alone.
     get occurrences() {
-      return (occurrences ??= modelOf().occurrences.filter(own).map((occurrence) => local(occurrence)));
+      return (occurrences ??= modelOf()
+        .occurrences.filter(own)
+        .map((occurrence) => local(occurrence)));
     },
     findings() {
       if (kind === "csv" || kind === "tsv") {

@@ -73,7 +73,8 @@ export function findDocuments(paths: readonly string[], workingDirectory = proce
     if (typeof path !== "string") {
       // Node reads such a name only as bytes; every step after this one works on text.
       const shown = displayBytes(Buffer.from(relativeBytes(path, workingDirectory)));
-      if (named || documentKindFor(path.toString("utf8"))) unreadable.push({ path: shown, message: "the file name is not valid UTF-8; not checked" });
+      if (named || documentKindFor(path.toString("utf8")))
+        unreadable.push({ path: shown, message: "the file name is not valid UTF-8; not checked" });
       return;
     }
     const absolute = resolve(workingDirectory, path);
@@ -82,7 +83,8 @@ export function findDocuments(paths: readonly string[], workingDirectory = proce
     const file = documentFile(absolute, workingDirectory);
     if (file.kind === "document") files.push(file.document);
     else if (file.kind === "unreadable") {
-      if (named || documentKindFor(absolute)) unreadable.push({ path: terminalSafe(displayPathOf(absolute, workingDirectory)), message: ioMessage(file.error) });
+      if (named || documentKindFor(absolute))
+        unreadable.push({ path: terminalSafe(displayPathOf(absolute, workingDirectory)), message: ioMessage(file.error) });
     } else if (named) skipped.push(terminalSafe(displayPathOf(absolute, workingDirectory)));
   };
   for (const path of paths) {
@@ -97,7 +99,10 @@ export function findDocuments(paths: readonly string[], workingDirectory = proce
     if (stats.isDirectory()) {
       const listed = filesUnder(absolute);
       for (const folder of listed.unreadableFolders) {
-        const shown = typeof folder.path === "string" ? terminalSafe(displayPathOf(folder.path, workingDirectory)) : displayBytes(relativeBytes(folder.path, workingDirectory));
+        const shown =
+          typeof folder.path === "string"
+            ? terminalSafe(displayPathOf(folder.path, workingDirectory))
+            : displayBytes(relativeBytes(folder.path, workingDirectory));
         unreadable.push({ path: shown, message: `folder not searched: ${folder.message}` });
       }
       for (const found of listed.files.sort(comparePaths)) add(found, false);
@@ -200,7 +205,12 @@ function gitListing(folder: string): ListedPath[] | undefined {
     return execFileSync("git", command.args, { cwd: folder, env: command.env, stdio: ["ignore", "pipe", "ignore"], maxBuffer });
   };
   try {
-    if (git(["rev-parse", "--is-inside-work-tree"], 1 << 16).toString("utf8").trim() !== "true") return undefined;
+    if (
+      git(["rev-parse", "--is-inside-work-tree"], 1 << 16)
+        .toString("utf8")
+        .trim() !== "true"
+    )
+      return undefined;
     const listed = git(["ls-files", "-z", "--cached", "--others", "--exclude-standard"], 1 << 30);
     // Paths come relative to the folder as bytes; deleted but still indexed files fail the stat later.
     const files: ListedPath[] = [];

@@ -57,7 +57,8 @@ export function registerCodeActions(context: ServerContext): void {
       if (kind && tableFixesOf(analysed).length > 0) {
         const action: CodeAction = { title: FIX_ALL_TITLE, kind };
         // A big table's fix-all edit is large: where the client resolves edits, it is built only when chosen.
-        if (context.clientFeatures().codeActionResolveEdit) action.data = { uri: document.uri, version: document.version, revision: analysed.revision } satisfies FixAllData;
+        if (context.clientFeatures().codeActionResolveEdit)
+          action.data = { uri: document.uri, version: document.version, revision: analysed.revision } satisfies FixAllData;
         else action.edit = fixAllEdit(context, document, analysed);
         actions.push(action);
       }
@@ -78,7 +79,11 @@ export function registerCodeActions(context: ServerContext): void {
 }
 
 function fixAllEdit(context: ServerContext, document: TextDocument, analysed: AnalysedDocument): WorkspaceEdit {
-  return workspaceEdit(context, document, tableFixesOf(analysed).map((fix) => textEdit(document, fix)));
+  return workspaceEdit(
+    context,
+    document,
+    tableFixesOf(analysed).map((fix) => textEdit(document, fix)),
+  );
 }
 
 /** Table fixes per analysed version: the lightbulb asks on every cursor move. */

@@ -143,7 +143,10 @@ function registerPush(context: ServerContext): DiagnosticsFeature {
 
   const schedule = (uri: string): void => {
     clearTimeout(timers.get(uri));
-    timers.set(uri, setTimeout(() => void publish(uri), PUSH_DELAY_MS));
+    timers.set(
+      uri,
+      setTimeout(() => void publish(uri), PUSH_DELAY_MS),
+    );
   };
 
   return {

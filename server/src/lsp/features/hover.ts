@@ -39,5 +39,7 @@ export function registerHover(context: ServerContext): void {
 
 /** Whether the editor already shows `message` as a problem on `range` (the hover then need not repeat it). */
 function isReported(findings: readonly Finding[], range: TextRange, message: string): boolean {
-  return findings.some((finding) => finding.range.start === range.start && finding.range.end === range.end && finding.message.includes(message));
+  return findings.some(
+    (finding) => finding.range.start === range.start && finding.range.end === range.end && finding.message.includes(message),
+  );
 }

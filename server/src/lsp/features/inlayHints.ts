@@ -17,7 +17,12 @@ export function registerInlayHints(context: ServerContext): void {
       const enabled = await enabledDocument(context, params.textDocument.uri);
       if (!enabled || !hintsWanted(enabled.analysed.kind, enabled.settings)) return [];
       const { document, analysed } = enabled;
-      const hints = geometryHints(document.getText(), analysed.model, offsetRange(document, params.range), () => token.isCancellationRequested);
+      const hints = geometryHints(
+        document.getText(),
+        analysed.model,
+        offsetRange(document, params.range),
+        () => token.isCancellationRequested,
+      );
       return hints.map((hint) => ({
         position: document.positionAt(hint.offset),
         label: `: ${hint.label}`,

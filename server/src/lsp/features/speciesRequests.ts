@@ -54,7 +54,10 @@ export function registerSpeciesRequests(context: ServerContext): void {
       const model = shapeViewModelOf(found.species.analysis.value);
       if (model) return { ...described, model };
       const tooLarge = shapeOf(found.species.analysis.value).coordinates.tooLarge;
-      return { ...described, problem: { code: tooLarge ? "too-large-for-model" : "no-model", message: missingModelReason(found.species.analysis.value)! } };
+      return {
+        ...described,
+        problem: { code: tooLarge ? "too-large-for-model" : "no-model", message: missingModelReason(found.species.analysis.value)! },
+      };
     }),
   );
   connection.onRequest(
@@ -93,7 +96,10 @@ export function registerSpeciesRequests(context: ServerContext): void {
 }
 
 /** The open document and the species at the asked position, or undefined. */
-async function speciesAt(context: ServerContext, params: unknown): Promise<{ document: TextDocument; species: SpeciesAtOffset } | undefined> {
+async function speciesAt(
+  context: ServerContext,
+  params: unknown,
+): Promise<{ document: TextDocument; species: SpeciesAtOffset } | undefined> {
   const candidate = params as Partial<SpeciesAtParams> | null;
   const uri = documentUri(params);
   if (uri === undefined || !isPosition(candidate?.position)) return undefined;
@@ -136,5 +142,12 @@ function documentUri(params: unknown): string | undefined {
 
 function isPosition(value: unknown): value is EditorPosition {
   const position = value as EditorPosition | null | undefined;
-  return typeof position === "object" && position !== null && Number.isInteger(position.line) && Number.isInteger(position.character) && position.line >= 0 && position.character >= 0;
+  return (
+    typeof position === "object" &&
+    position !== null &&
+    Number.isInteger(position.line) &&
+    Number.isInteger(position.character) &&
+    position.line >= 0 &&
+    position.character >= 0
+  );
 }

@@ -3,12 +3,7 @@
  * best formal charges; when none works, say why in the chemist's terms.
  */
 import { elementBySymbol } from "../elements";
-import {
-  type CandidateSkeleton,
-  candidateSkeletons,
-  countChainFormingAtoms,
-  expandComposition,
-} from "../lewis/candidateSkeletons";
+import { type CandidateSkeleton, candidateSkeletons, countChainFormingAtoms, expandComposition } from "../lewis/candidateSkeletons";
 import {
   chooseLewisStructure,
   compareScores,
@@ -31,10 +26,16 @@ export function chooseSkeletonStructure(reading: SpeciesReading): ChosenStructur
   const { formula, charge } = reading;
   const electrons = countValenceElectrons(symbols, charge);
   if (electrons < 0) {
-    return fail("too-few-electrons", `${formula}: a charge of ${charge} removes more electrons than its atoms have (${electrons + charge} valence electrons).`);
+    return fail(
+      "too-few-electrons",
+      `${formula}: a charge of ${charge} removes more electrons than its atoms have (${electrons + charge} valence electrons).`,
+    );
   }
   if (symbols.length > MAX_ATOMS) {
-    return fail("ambiguous-connectivity", `${formula} has ${symbols.length} atoms: write it as a structural formula or SMILES so its connectivity is clear.`);
+    return fail(
+      "ambiguous-connectivity",
+      `${formula} has ${symbols.length} atoms: write it as a structural formula or SMILES so its connectivity is clear.`,
+    );
   }
   if (symbols.length === 1) {
     return { ok: true, structure: monatomic(symbols, charge, electrons), centre: undefined };
@@ -45,7 +46,10 @@ export function chooseSkeletonStructure(reading: SpeciesReading): ChosenStructur
     return explainFailure(reading, symbols, outcome.failure, outcome.atom);
   }
   if (symbols.every((symbol) => symbol === "H")) {
-    return fail("hydrogen-overbonded", `${formula}: a hydrogen atom can form only one bond, so ${symbols.length} hydrogens cannot share a centre.`);
+    return fail(
+      "hydrogen-overbonded",
+      `${formula}: a hydrogen atom can form only one bond, so ${symbols.length} hydrogens cannot share a centre.`,
+    );
   }
 
   if (looksCondensed(reading.writtenSequence)) {
@@ -80,9 +84,7 @@ export function chooseSkeletonStructure(reading: SpeciesReading): ChosenStructur
 
   const chainAtoms = countChainFormingAtoms(symbols);
   if (best) {
-    const outerTroubled = best.structure.graph.atoms.some(
-      (atom, index) => index !== best!.centre && Math.abs(atom.formalCharge) >= 2,
-    );
+    const outerTroubled = best.structure.graph.atoms.some((atom, index) => index !== best!.centre && Math.abs(atom.formalCharge) >= 2);
     // A star that leaves atoms short of an octet, or outer atoms heavily charged, means the
     // real molecule is a chain: C2H2 is HCCH, not H2C=C.
     if (chainAtoms >= 2 && (best.structure.score.shellDeficit > 0 || outerTroubled)) {
@@ -223,7 +225,13 @@ function monatomic(symbols: readonly string[], charge: number, electrons: number
       atoms: [{ symbol: symbols[0], lonePairs: pairs, unpairedElectrons: electrons % 2, formalCharge: charge }],
       bonds: [],
     },
-    score: { shellDeficit: 0, sumAbsFormalCharge: Math.abs(charge), sumSquareFormalCharge: charge * charge, expandedAtoms: 0, chargeTimesElectronegativity: 0 },
+    score: {
+      shellDeficit: 0,
+      sumAbsFormalCharge: Math.abs(charge),
+      sumSquareFormalCharge: charge * charge,
+      expandedAtoms: 0,
+      chargeTimesElectronegativity: 0,
+    },
     resonanceForms: 1,
     valenceElectrons: electrons,
   };

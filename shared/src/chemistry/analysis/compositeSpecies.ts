@@ -129,7 +129,10 @@ export function metalIonComplexAnalysis(reading: SpeciesReading, analyze: Analyz
   const metalNote = dBlock
     ? `${metal.name} is a transition metal: the arrangement of ligands around it follows coordination and ligand-field rules, not VSEPR`
     : `the bond to the metal ion is largely ionic, so VSEPR gives no shape for the ion as a whole`;
-  const ligandShapes = parts.slice(1).map((p) => `${p.formula}: ${partShapeText(p)}`).join("; ");
+  const ligandShapes = parts
+    .slice(1)
+    .map((p) => `${p.formula}: ${partShapeText(p)}`)
+    .join("; ");
   const message =
     `${reading.formula} is a ${kind} ion of ${metal.name}: the metal ion ${parts[0].formula} holding ${partsListText(parts.slice(1))}, ` +
     `a species in solution rather than a lattice; ${metalNote}. ${ligandShapes}.`;

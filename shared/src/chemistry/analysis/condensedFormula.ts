@@ -302,9 +302,7 @@ function flatten(parsed: ParsedSequence): FlatFormula | undefined {
         if (branch.copy === 0) copyRoots.length = 0;
         // A written group may instead bond to an earlier atom (after a terminal =O: CO(NH2)2)
         // or, repeated, to the copy before it (CH3(CH2)4CH3).
-        const choices = branch.written
-          ? [index, ...[...copyRoots].reverse(), ...placed.slice(0, -1).reverse()]
-          : [index];
+        const choices = branch.written ? [index, ...[...copyRoots].reverse(), ...placed.slice(0, -1).reverse()] : [index];
         const root = atoms.length;
         placeSequence(branch.units, choices);
         if (branch.written && branch.copy > 0) {

@@ -10,15 +10,7 @@ import type { LewisStructure } from "../lewis/chooseLewisStructure";
 import { kekulize, parseSmiles, smilesFormula, smilesNetCharge } from "../smiles";
 import { sharedAtom } from "../sharedAtoms";
 import type { SmilesMolecule } from "../smiles";
-import type {
-  DoubleBondStereo,
-  FormulaPart,
-  GraphAtom,
-  GraphBond,
-  MolecularGraph,
-  Problem,
-  SpeciesReading,
-} from "../types";
+import type { DoubleBondStereo, FormulaPart, GraphAtom, GraphBond, MolecularGraph, Problem, SpeciesReading } from "../types";
 
 export interface SmilesStructure {
   readonly reading: SpeciesReading;

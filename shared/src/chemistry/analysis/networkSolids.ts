@@ -39,8 +39,7 @@ const NETWORK_SOLIDS: Readonly<Record<string, NetworkSolid>> = {
 // from memory: Greenwood & Earnshaw, Chemistry of the Elements (allotropes of carbon)
 const NETWORK_ELEMENTS: Readonly<Record<string, string>> = {
   diamond:
-    "Diamond is a network solid of carbon: every C is bonded to four others in a tetrahedron (sp3, 109.5 degrees), " +
-    "with no molecules.",
+    "Diamond is a network solid of carbon: every C is bonded to four others in a tetrahedron (sp3, 109.5 degrees), " + "with no molecules.",
   graphite:
     "Graphite is a network solid of carbon: every C is bonded to three others in flat hexagonal layers (trigonal " +
     "planar, sp2, 120 degrees), with no molecules.",
@@ -54,7 +53,8 @@ function solidFor(composition: readonly FormulaPart[], charge: number): NetworkS
 export function networkSolidProblem(reading: SpeciesReading): Problem | undefined {
   if (reading.parts !== undefined) return undefined;
   const byName = reading.name === undefined ? undefined : NETWORK_ELEMENTS[reading.name.toLowerCase()];
-  if (byName !== undefined && reading.notation === "name") return { code: "network-solid", message: `${byName} VSEPR describes each atom's surroundings, not a molecular shape.` };
+  if (byName !== undefined && reading.notation === "name")
+    return { code: "network-solid", message: `${byName} VSEPR describes each atom's surroundings, not a molecular shape.` };
   const solid = solidFor(reading.composition, reading.charge);
   if (solid === undefined || solid.monomerShown) return undefined;
   return { code: "network-solid", message: `${solid.note} VSEPR describes each atom's surroundings, not a molecular shape.` };

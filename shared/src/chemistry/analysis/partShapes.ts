@@ -43,7 +43,11 @@ export function resultShapeText(result: AnalysisResult): string {
 export function partsListText(parts: readonly SpeciesPart[], withShapes = false): string {
   const named = parts.map((part) => {
     const counted = part.count > 1 ? `${part.formula} ×${part.count}` : part.formula;
-    return withShapes && !part.monatomic ? `${counted} (${partShapeText(part)})` : part.count > 1 ? `${part.formula} (×${part.count})` : part.formula;
+    return withShapes && !part.monatomic
+      ? `${counted} (${partShapeText(part)})`
+      : part.count > 1
+        ? `${part.formula} (×${part.count})`
+        : part.formula;
   });
   return named.length <= 1 ? named.join("") : `${named.slice(0, -1).join(", ")} and ${named[named.length - 1]}`;
 }

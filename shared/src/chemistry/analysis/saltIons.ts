@@ -204,7 +204,8 @@ function anionsOf(rest: readonly WrittenUnit[]): AnionChoice[] {
   }
   if (rest.length === 1 && !rest[0].bracketed) {
     const charge = MONATOMIC_ANION_CHARGE.get(rest[0].body);
-    if (charge !== undefined) choices.push({ body: rest[0].body, key: rest[0].body, count: rest[0].count, charges: [charge], monatomic: true });
+    if (charge !== undefined)
+      choices.push({ body: rest[0].body, key: rest[0].body, count: rest[0].count, charges: [charge], monatomic: true });
   }
   const whole = wholeAnion(rest);
   if (whole) choices.push(whole);

@@ -55,8 +55,20 @@ const SINGLE: Readonly<Record<string, KnownStructure>> = {
     smiles: true,
     note: "Hypophosphorous acid is H2P(O)OH: two H sit on P and are not acidic, so the acid is monoprotic.",
   },
-  P4: { name: "white phosphorus", written: "P12P3P1P23", smiles: true, pointGroup: "Td", note: "P4 is a tetrahedron of four P atoms, each bonded to the other three." },
-  O6P4: { name: "tetraphosphorus hexoxide", written: "O1P2OP3OP1OP(O2)O3", smiles: true, pointGroup: "Td", note: "P4O6 is a cage: an O bridges each edge of the P4 tetrahedron." },
+  P4: {
+    name: "white phosphorus",
+    written: "P12P3P1P23",
+    smiles: true,
+    pointGroup: "Td",
+    note: "P4 is a tetrahedron of four P atoms, each bonded to the other three.",
+  },
+  O6P4: {
+    name: "tetraphosphorus hexoxide",
+    written: "O1P2OP3OP1OP(O2)O3",
+    smiles: true,
+    pointGroup: "Td",
+    note: "P4O6 is a cage: an O bridges each edge of the P4 tetrahedron.",
+  },
   O10P4: {
     name: "tetraphosphorus decoxide",
     written: "O=P12OP3(=O)OP(=O)(O1)OP(=O)(O2)O3",
@@ -64,7 +76,13 @@ const SINGLE: Readonly<Record<string, KnownStructure>> = {
     pointGroup: "Td",
     note: "P4O10 is the P4O6 cage with one more O on each P.",
   },
-  S8: { name: "cyclooctasulfur", written: "S1SSSSSSS1", smiles: true, pointGroup: "D4d", note: "S8 is a puckered ring of eight S atoms (a crown)." },
+  S8: {
+    name: "cyclooctasulfur",
+    written: "S1SSSSSSS1",
+    smiles: true,
+    pointGroup: "D4d",
+    note: "S8 is a puckered ring of eight S atoms (a crown).",
+  },
   Cl6I2: {
     name: "iodine trichloride dimer",
     written: "Cl[I-]1(Cl)[Cl+][I-](Cl)(Cl)[Cl+]1",
@@ -74,10 +92,25 @@ const SINGLE: Readonly<Record<string, KnownStructure>> = {
   },
   // from memory: the chain and dimeric oxoanions of descriptive inorganic chemistry texts
   "C2O4^-2": { name: "oxalate", written: "[O-]C(=O)C(=O)[O-]", smiles: true },
-  "O5S2^-2": { name: "disulfite", written: "[O-]S(=O)S(=O)(=O)[O-]", smiles: true, note: "Disulfite (metabisulfite) has an S-S bond: O2S-SO3." },
+  "O5S2^-2": {
+    name: "disulfite",
+    written: "[O-]S(=O)S(=O)(=O)[O-]",
+    smiles: true,
+    note: "Disulfite (metabisulfite) has an S-S bond: O2S-SO3.",
+  },
   "O6S2^-2": { name: "dithionate", written: "[O-]S(=O)(=O)S(=O)(=O)[O-]", smiles: true, note: "Dithionate has an S-S bond: O3S-SO3." },
-  "O8S2^-2": { name: "peroxodisulfate", written: "[O-]S(=O)(=O)OOS(=O)(=O)[O-]", smiles: true, note: "Peroxodisulfate has an O-O bond between its two SO3 groups: O3S-O-O-SO3." },
-  "O7P2^-4": { name: "diphosphate", written: "[O-]P(=O)([O-])OP(=O)([O-])[O-]", smiles: true, note: "Diphosphate (pyrophosphate) is two PO4 tetrahedra sharing one O: O3P-O-PO3." },
+  "O8S2^-2": {
+    name: "peroxodisulfate",
+    written: "[O-]S(=O)(=O)OOS(=O)(=O)[O-]",
+    smiles: true,
+    note: "Peroxodisulfate has an O-O bond between its two SO3 groups: O3S-O-O-SO3.",
+  },
+  "O7P2^-4": {
+    name: "diphosphate",
+    written: "[O-]P(=O)([O-])OP(=O)([O-])[O-]",
+    smiles: true,
+    note: "Diphosphate (pyrophosphate) is two PO4 tetrahedra sharing one O: O3P-O-PO3.",
+  },
 };
 
 const SEVERAL: Readonly<Record<string, readonly KnownStructure[]>> = {

@@ -26,11 +26,7 @@ const PER_LINE = 8;
 const pad = (value: number | string, width: number) => String(value).padStart(width);
 
 /** Molfile text for the graph placed at the given coordinates; never throws. */
-export function toMolfile(
-  graph: MolecularGraph,
-  coordinates: Pick<MolecularCoordinates, "atoms">,
-  title: string,
-): MolfileResult {
+export function toMolfile(graph: MolecularGraph, coordinates: Pick<MolecularCoordinates, "atoms">, title: string): MolfileResult {
   const atoms = graph.atoms;
   if (coordinates.atoms.length !== atoms.length) {
     return {

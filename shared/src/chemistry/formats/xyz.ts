@@ -15,7 +15,9 @@ export function toXyz(coordinates: Pick<MolecularCoordinates, "atoms">, title: s
 
 /** One line of text: line breaks and tabs become single spaces. */
 export function singleLine(text: string): string {
-  return String(text ?? "").replace(/[\r\n\t]+/g, " ").trim();
+  return String(text ?? "")
+    .replace(/[\r\n\t]+/g, " ")
+    .trim();
 }
 
 /** Six decimals without a negative zero. */

@@ -121,9 +121,7 @@ export function torsionChoices(parentSites: AtomSites, childSites: AtomSites): n
 function keepsPlane(first: AtomSites, second: AtomSites): boolean {
   const donor = (sites: AtomSites) => sites.tetrahedral && sites.loneDomains.length > 0;
   return (
-    (first.trigonalPlanar && second.trigonalPlanar) ||
-    (first.trigonalPlanar && donor(second)) ||
-    (second.trigonalPlanar && donor(first))
+    (first.trigonalPlanar && second.trigonalPlanar) || (first.trigonalPlanar && donor(second)) || (second.trigonalPlanar && donor(first))
   );
 }
 

@@ -18,11 +18,7 @@ function freezeAll(directions: readonly Vec3[]): readonly Vec3[] {
 function spherical(polar: number, azimuth: number): Vec3 {
   // Rounding keeps exact zeros exact, so 90° sites do not carry 1e-17 noise.
   const clean = (value: number) => (Math.abs(value) < 1e-15 ? 0 : value);
-  return [
-    clean(Math.sin(polar) * Math.cos(azimuth)),
-    clean(Math.sin(polar) * Math.sin(azimuth)),
-    clean(Math.cos(polar)),
-  ];
+  return [clean(Math.sin(polar) * Math.cos(azimuth)), clean(Math.sin(polar) * Math.sin(azimuth)), clean(Math.cos(polar))];
 }
 
 /** `count` sites evenly spaced round the xy plane, the first along +x. */
@@ -36,10 +32,7 @@ const DIRECTIONS: Readonly<Record<ElectronGeometry, readonly Vec3[]>> = Object.f
     [0, 0, -1],
   ]),
   "trigonal planar": freezeAll(equatorialRing(3)),
-  tetrahedral: freezeAll([
-    [0, 0, 1],
-    ...[0, 1, 2].map((k) => spherical(TETRAHEDRAL_POLAR_ANGLE, (2 * Math.PI * k) / 3)),
-  ]),
+  tetrahedral: freezeAll([[0, 0, 1], ...[0, 1, 2].map((k) => spherical(TETRAHEDRAL_POLAR_ANGLE, (2 * Math.PI * k) / 3))]),
   "trigonal bipyramidal": freezeAll([[0, 0, 1], [0, 0, -1], ...equatorialRing(3)]),
   octahedral: freezeAll([
     [0, 0, 1],

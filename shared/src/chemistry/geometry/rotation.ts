@@ -70,12 +70,7 @@ export function rotationAligning(from: Vec3, to: Vec3): Rotation {
  * to `worldSecond` as the first constraint allows. Undefined when either pair is (anti)parallel,
  * since the turn about the first direction is then not fixed.
  */
-export function rotationFromTwoDirections(
-  localFirst: Vec3,
-  localSecond: Vec3,
-  worldFirst: Vec3,
-  worldSecond: Vec3,
-): Rotation | undefined {
+export function rotationFromTwoDirections(localFirst: Vec3, localSecond: Vec3, worldFirst: Vec3, worldSecond: Vec3): Rotation | undefined {
   const align = rotationAligning(localFirst, worldFirst);
   const axis = normalize(worldFirst);
   const moved = rotate(align, localSecond);

@@ -23,7 +23,8 @@ export function createSpatialGrid(cell: number): SpatialGrid {
   const positions = new Map<number, Vec3>();
   const index = (value: number): number => Math.max(-HALF_RANGE, Math.min(HALF_RANGE - 1, Math.floor(value / cell)));
   // Three indices of 17 bits each fit exactly in a double.
-  const key = (x: number, y: number, z: number): number => ((x + HALF_RANGE) * 2 * HALF_RANGE + (y + HALF_RANGE)) * 2 * HALF_RANGE + (z + HALF_RANGE);
+  const key = (x: number, y: number, z: number): number =>
+    ((x + HALF_RANGE) * 2 * HALF_RANGE + (y + HALF_RANGE)) * 2 * HALF_RANGE + (z + HALF_RANGE);
   return {
     add(atom, position) {
       positions.set(atom, position);

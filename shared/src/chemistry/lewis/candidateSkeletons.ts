@@ -91,11 +91,7 @@ function pairSkeleton(symbols: readonly string[], heavy: readonly number[]): Can
  * Ways to put up to `hydrogenCount` hydrogens on the host atoms; hosts of the same element are
  * interchangeable, so counts never increase along a run of the same element.
  */
-function hydrogenPlacements(
-  hosts: readonly number[],
-  symbols: readonly string[],
-  hydrogenCount: number,
-): number[][] {
+function hydrogenPlacements(hosts: readonly number[], symbols: readonly string[], hydrogenCount: number): number[][] {
   const placements: number[][] = [];
   const counts = new Array<number>(hosts.length).fill(0);
   const visit = (position: number, used: number) => {

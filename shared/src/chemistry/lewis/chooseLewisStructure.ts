@@ -35,12 +35,7 @@ export interface LewisStructure {
 }
 
 export type LewisFailure =
-  | "charge-exceeds-electrons"
-  | "too-few-electrons-to-bond"
-  | "hydrogen-overbonded"
-  | "shell-overflow"
-  | "too-many-domains"
-  | "no-structure";
+  "charge-exceeds-electrons" | "too-few-electrons-to-bond" | "hydrogen-overbonded" | "shell-overflow" | "too-many-domains" | "no-structure";
 
 export type LewisOutcome =
   | { readonly ok: true; readonly structure: LewisStructure }
@@ -85,369 +80,368 @@ export interface LewisSearch {
  * with a fresh search rather than overwrite its own arrays.
  */
 export function createLewisSearch(): LewisSearch {
-// The search works in one set of arrays reused from call to call (it never runs inside itself):
-// a species is analysed with a handful of small searches, and fresh arrays, closures and copies
-// of every better leaf cost more than the search itself. Per-atom traits are copied into plain
-// number arrays once per call.
-let atomCapacity = 0;
-let bondCapacity = 0;
-let degree = new Int32Array(0);
-let bondOrderSum = new Int32Array(0);
-let lonePairs = new Int32Array(0);
-let bestLonePairs = new Int32Array(0);
-let fillOrder = new Int32Array(0);
-let expansionOrder = new Int32Array(0);
-let valenceOf = new Int32Array(0);
-let shellCapacityOf = new Int32Array(0);
-let fullShellOf = new Int32Array(0);
-let maxDomainsOf = new Int32Array(0);
-let mustCompleteOf = new Uint8Array(0);
-let electronegativityOf = new Float64Array(0);
-let bondOrders = new Int32Array(0);
-let bestOrders = new Int32Array(0);
-let bondFrom = new Int32Array(0);
-let bondTo = new Int32Array(0);
-let flexibleBonds = new Int32Array(0);
+  // The search works in one set of arrays reused from call to call (it never runs inside itself):
+  // a species is analysed with a handful of small searches, and fresh arrays, closures and copies
+  // of every better leaf cost more than the search itself. Per-atom traits are copied into plain
+  // number arrays once per call.
+  let atomCapacity = 0;
+  let bondCapacity = 0;
+  let degree = new Int32Array(0);
+  let bondOrderSum = new Int32Array(0);
+  let lonePairs = new Int32Array(0);
+  let bestLonePairs = new Int32Array(0);
+  let fillOrder = new Int32Array(0);
+  let expansionOrder = new Int32Array(0);
+  let valenceOf = new Int32Array(0);
+  let shellCapacityOf = new Int32Array(0);
+  let fullShellOf = new Int32Array(0);
+  let maxDomainsOf = new Int32Array(0);
+  let mustCompleteOf = new Uint8Array(0);
+  let electronegativityOf = new Float64Array(0);
+  let bondOrders = new Int32Array(0);
+  let bestOrders = new Int32Array(0);
+  let bondFrom = new Int32Array(0);
+  let bondTo = new Int32Array(0);
+  let flexibleBonds = new Int32Array(0);
 
-function reserve(atoms: number, bonds: number): void {
-  if (atoms > atomCapacity) {
-    atomCapacity = Math.max(atoms, 2 * atomCapacity, 16);
-    degree = new Int32Array(atomCapacity);
-    bondOrderSum = new Int32Array(atomCapacity);
-    lonePairs = new Int32Array(atomCapacity);
-    bestLonePairs = new Int32Array(atomCapacity);
-    fillOrder = new Int32Array(atomCapacity);
-    expansionOrder = new Int32Array(atomCapacity);
-    valenceOf = new Int32Array(atomCapacity);
-    shellCapacityOf = new Int32Array(atomCapacity);
-    fullShellOf = new Int32Array(atomCapacity);
-    maxDomainsOf = new Int32Array(atomCapacity);
-    mustCompleteOf = new Uint8Array(atomCapacity);
-    electronegativityOf = new Float64Array(atomCapacity);
-  }
-  if (bonds > bondCapacity) {
-    bondCapacity = Math.max(bonds, 2 * bondCapacity, 16);
-    bondOrders = new Int32Array(bondCapacity);
-    bestOrders = new Int32Array(bondCapacity);
-    bondFrom = new Int32Array(bondCapacity);
-    bondTo = new Int32Array(bondCapacity);
-    flexibleBonds = new Int32Array(bondCapacity);
-  }
-}
-
-// The current search: its size, and the best leaf so far (field by field, as compareScores).
-let atomCount = 0;
-let bondCount = 0;
-let flexibleCount = 0;
-let spare = 0;
-let expansionCount = 0;
-let skipHydrogenUnpaired = false;
-let isRadical = false;
-let electronsLeftOver = false;
-let hasBest = false;
-let bestShellDeficit = 0;
-let bestSumAbs = 0;
-let bestSumSquare = 0;
-let bestExpanded = 0;
-let bestWeighted = 0;
-let bestSpread = 0;
-let bestUnpaired = -1;
-let resonanceForms = 0;
-
-function runSearch(skeleton: Skeleton, charge: number): LewisOutcome {
-  const symbols = skeleton.symbols;
-  const bonds = skeleton.bonds;
-  atomCount = symbols.length;
-  bondCount = bonds.length;
-  reserve(atomCount, bondCount);
-  const traits: AtomTraits[] = new Array(atomCount);
-  let electrons = -charge;
-  for (let atom = 0; atom < atomCount; atom++) {
-    const t = atomTraits(symbols[atom]);
-    traits[atom] = t;
-    electrons += t.valenceElectrons;
-    valenceOf[atom] = t.valenceElectrons;
-    shellCapacityOf[atom] = t.shellCapacity;
-    fullShellOf[atom] = t.fullShell;
-    maxDomainsOf[atom] = maxDomains(t.element.period);
-    mustCompleteOf[atom] = t.mustCompleteShell ? 1 : 0;
-    electronegativityOf[atom] = t.electronegativity;
-    degree[atom] = 0;
-  }
-  if (electrons < 0) return { ok: false, failure: "charge-exceeds-electrons" };
-
-  for (let bond = 0; bond < bondCount; bond++) {
-    const [from, to] = bonds[bond];
-    bondFrom[bond] = from;
-    bondTo[bond] = to;
-    degree[from]++;
-    degree[to]++;
-  }
-  for (let atom = 0; atom < atomCount; atom++) {
-    const t = traits[atom];
-    if (t.isHydrogen && degree[atom] > 1) return { ok: false, failure: "hydrogen-overbonded", atom };
-    if (2 * degree[atom] > t.shellCapacity) return { ok: false, failure: "shell-overflow", atom };
-    if (degree[atom] > maxDomainsOf[atom]) return { ok: false, failure: "too-many-domains", atom };
-  }
-  spare = electrons - 2 * bondCount;
-  if (spare < 0) return { ok: false, failure: "too-few-electrons-to-bond" };
-
-  // Multiple bonds never involve H or F, nor a halogen on the outside of the molecule.
-  flexibleCount = 0;
-  for (let bond = 0; bond < bondCount; bond++) {
-    if (!blocksMultipleBond(traits, bondFrom[bond]) && !blocksMultipleBond(traits, bondTo[bond])) {
-      flexibleBonds[flexibleCount++] = bond;
+  function reserve(atoms: number, bonds: number): void {
+    if (atoms > atomCapacity) {
+      atomCapacity = Math.max(atoms, 2 * atomCapacity, 16);
+      degree = new Int32Array(atomCapacity);
+      bondOrderSum = new Int32Array(atomCapacity);
+      lonePairs = new Int32Array(atomCapacity);
+      bestLonePairs = new Int32Array(atomCapacity);
+      fillOrder = new Int32Array(atomCapacity);
+      expansionOrder = new Int32Array(atomCapacity);
+      valenceOf = new Int32Array(atomCapacity);
+      shellCapacityOf = new Int32Array(atomCapacity);
+      fullShellOf = new Int32Array(atomCapacity);
+      maxDomainsOf = new Int32Array(atomCapacity);
+      mustCompleteOf = new Uint8Array(atomCapacity);
+      electronegativityOf = new Float64Array(atomCapacity);
+    }
+    if (bonds > bondCapacity) {
+      bondCapacity = Math.max(bonds, 2 * bondCapacity, 16);
+      bondOrders = new Int32Array(bondCapacity);
+      bestOrders = new Int32Array(bondCapacity);
+      bondFrom = new Int32Array(bondCapacity);
+      bondTo = new Int32Array(bondCapacity);
+      flexibleBonds = new Int32Array(bondCapacity);
     }
   }
-  if (flexibleCount > MAX_FLEXIBLE_BONDS) return { ok: false, failure: "no-structure" };
 
-  // Lone pairs fill outer atoms first (most electronegative first), then inner atoms.
-  for (let atom = 0; atom < atomCount; atom++) fillOrder[atom] = atom;
-  sortSmall(fillOrder, compareFillOrder, atomCount);
-  // Electrons left over after every shell is full go to inner atoms that can expand, least
-  // electronegative first (the central atom of SF4 or I3-).
-  expansionCount = 0;
-  for (let atom = 0; atom < atomCount; atom++) {
-    if (shellCapacityOf[atom] > 8) expansionOrder[expansionCount++] = atom;
-  }
-  sortSmall(expansionOrder, compareExpansionOrder, expansionCount);
+  // The current search: its size, and the best leaf so far (field by field, as compareScores).
+  let atomCount = 0;
+  let bondCount = 0;
+  let flexibleCount = 0;
+  let spare = 0;
+  let expansionCount = 0;
+  let skipHydrogenUnpaired = false;
+  let isRadical = false;
+  let electronsLeftOver = false;
+  let hasBest = false;
+  let bestShellDeficit = 0;
+  let bestSumAbs = 0;
+  let bestSumSquare = 0;
+  let bestExpanded = 0;
+  let bestWeighted = 0;
+  let bestSpread = 0;
+  let bestUnpaired = -1;
+  let resonanceForms = 0;
 
-  for (let bond = 0; bond < bondCount; bond++) bondOrders[bond] = 1;
-  for (let atom = 0; atom < atomCount; atom++) {
-    bondOrderSum[atom] = degree[atom];
-    lonePairs[atom] = 0;
-  }
-  hasBest = false;
-  resonanceForms = 0;
-  electronsLeftOver = false;
-  isRadical = electrons % 2 === 1;
-  skipHydrogenUnpaired = atomCount > 1;
+  function runSearch(skeleton: Skeleton, charge: number): LewisOutcome {
+    const symbols = skeleton.symbols;
+    const bonds = skeleton.bonds;
+    atomCount = symbols.length;
+    bondCount = bonds.length;
+    reserve(atomCount, bondCount);
+    const traits: AtomTraits[] = new Array(atomCount);
+    let electrons = -charge;
+    for (let atom = 0; atom < atomCount; atom++) {
+      const t = atomTraits(symbols[atom]);
+      traits[atom] = t;
+      electrons += t.valenceElectrons;
+      valenceOf[atom] = t.valenceElectrons;
+      shellCapacityOf[atom] = t.shellCapacity;
+      fullShellOf[atom] = t.fullShell;
+      maxDomainsOf[atom] = maxDomains(t.element.period);
+      mustCompleteOf[atom] = t.mustCompleteShell ? 1 : 0;
+      electronegativityOf[atom] = t.electronegativity;
+      degree[atom] = 0;
+    }
+    if (electrons < 0) return { ok: false, failure: "charge-exceeds-electrons" };
 
-  search(0, 0, traits);
-  if (!hasBest) {
-    if (!electronsLeftOver) return { ok: false, failure: "no-structure" };
-    // Electrons had nowhere to go: the most connected atom would need more than its shell holds.
-    let crowded = 0;
-    for (let atom = 1; atom < atomCount; atom++) if (degree[atom] > degree[crowded]) crowded = atom;
-    return { ok: false, failure: "shell-overflow", atom: crowded };
+    for (let bond = 0; bond < bondCount; bond++) {
+      const [from, to] = bonds[bond];
+      bondFrom[bond] = from;
+      bondTo[bond] = to;
+      degree[from]++;
+      degree[to]++;
+    }
+    for (let atom = 0; atom < atomCount; atom++) {
+      const t = traits[atom];
+      if (t.isHydrogen && degree[atom] > 1) return { ok: false, failure: "hydrogen-overbonded", atom };
+      if (2 * degree[atom] > t.shellCapacity) return { ok: false, failure: "shell-overflow", atom };
+      if (degree[atom] > maxDomainsOf[atom]) return { ok: false, failure: "too-many-domains", atom };
+    }
+    spare = electrons - 2 * bondCount;
+    if (spare < 0) return { ok: false, failure: "too-few-electrons-to-bond" };
+
+    // Multiple bonds never involve H or F, nor a halogen on the outside of the molecule.
+    flexibleCount = 0;
+    for (let bond = 0; bond < bondCount; bond++) {
+      if (!blocksMultipleBond(traits, bondFrom[bond]) && !blocksMultipleBond(traits, bondTo[bond])) {
+        flexibleBonds[flexibleCount++] = bond;
+      }
+    }
+    if (flexibleCount > MAX_FLEXIBLE_BONDS) return { ok: false, failure: "no-structure" };
+
+    // Lone pairs fill outer atoms first (most electronegative first), then inner atoms.
+    for (let atom = 0; atom < atomCount; atom++) fillOrder[atom] = atom;
+    sortSmall(fillOrder, compareFillOrder, atomCount);
+    // Electrons left over after every shell is full go to inner atoms that can expand, least
+    // electronegative first (the central atom of SF4 or I3-).
+    expansionCount = 0;
+    for (let atom = 0; atom < atomCount; atom++) {
+      if (shellCapacityOf[atom] > 8) expansionOrder[expansionCount++] = atom;
+    }
+    sortSmall(expansionOrder, compareExpansionOrder, expansionCount);
+
+    for (let bond = 0; bond < bondCount; bond++) bondOrders[bond] = 1;
+    for (let atom = 0; atom < atomCount; atom++) {
+      bondOrderSum[atom] = degree[atom];
+      lonePairs[atom] = 0;
+    }
+    hasBest = false;
+    resonanceForms = 0;
+    electronsLeftOver = false;
+    isRadical = electrons % 2 === 1;
+    skipHydrogenUnpaired = atomCount > 1;
+
+    search(0, 0, traits);
+    if (!hasBest) {
+      if (!electronsLeftOver) return { ok: false, failure: "no-structure" };
+      // Electrons had nowhere to go: the most connected atom would need more than its shell holds.
+      let crowded = 0;
+      for (let atom = 1; atom < atomCount; atom++) if (degree[atom] > degree[crowded]) crowded = atom;
+      return { ok: false, failure: "shell-overflow", atom: crowded };
+    }
+
+    const orderSums = new Array<number>(atomCount);
+    for (let atom = 0; atom < atomCount; atom++) orderSums[atom] = degree[atom];
+    const graphBonds: GraphBond[] = new Array(bondCount);
+    for (let bond = 0; bond < bondCount; bond++) {
+      const from = bondFrom[bond];
+      const to = bondTo[bond];
+      const order = bestOrders[bond];
+      orderSums[from] += order - 1;
+      orderSums[to] += order - 1;
+      graphBonds[bond] = { from, to, order };
+    }
+    const atoms: GraphAtom[] = new Array(atomCount);
+    for (let atom = 0; atom < atomCount; atom++) {
+      const unpaired = atom === bestUnpaired ? 1 : 0;
+      atoms[atom] = sharedAtom(
+        traits[atom].element.atomicNumber,
+        symbols[atom],
+        bestLonePairs[atom],
+        unpaired,
+        valenceOf[atom] - 2 * bestLonePairs[atom] - unpaired - orderSums[atom],
+        false,
+      );
+    }
+    const score: LewisScore = {
+      shellDeficit: bestShellDeficit,
+      sumAbsFormalCharge: bestSumAbs,
+      sumSquareFormalCharge: bestSumSquare,
+      expandedAtoms: bestExpanded,
+      chargeTimesElectronegativity: bestWeighted,
+    };
+    return {
+      ok: true,
+      structure: {
+        graph: { atoms, bonds: graphBonds },
+        score,
+        resonanceForms,
+        valenceElectrons: electrons,
+      },
+    };
   }
 
-  const orderSums = new Array<number>(atomCount);
-  for (let atom = 0; atom < atomCount; atom++) orderSums[atom] = degree[atom];
-  const graphBonds: GraphBond[] = new Array(bondCount);
-  for (let bond = 0; bond < bondCount; bond++) {
-    const from = bondFrom[bond];
-    const to = bondTo[bond];
-    const order = bestOrders[bond];
-    orderSums[from] += order - 1;
-    orderSums[to] += order - 1;
-    graphBonds[bond] = { from, to, order };
-  }
-  const atoms: GraphAtom[] = new Array(atomCount);
-  for (let atom = 0; atom < atomCount; atom++) {
-    const unpaired = atom === bestUnpaired ? 1 : 0;
-    atoms[atom] = sharedAtom(
-      traits[atom].element.atomicNumber,
-      symbols[atom],
-      bestLonePairs[atom],
-      unpaired,
-      valenceOf[atom] - 2 * bestLonePairs[atom] - unpaired - orderSums[atom],
-      false,
+  function blocksMultipleBond(traits: readonly AtomTraits[], atom: number): boolean {
+    const t = traits[atom];
+    return (
+      t.isHydrogen ||
+      // A period-2 atom with four neighbours has no room left for a multiple bond.
+      (t.shellCapacity === 8 && degree[atom] >= 4) ||
+      t.element.symbol === "F" ||
+      (t.isHalogen && degree[atom] === 1)
     );
   }
-  const score: LewisScore = {
-    shellDeficit: bestShellDeficit,
-    sumAbsFormalCharge: bestSumAbs,
-    sumSquareFormalCharge: bestSumSquare,
-    expandedAtoms: bestExpanded,
-    chargeTimesElectronegativity: bestWeighted,
-  };
-  return {
-    ok: true,
-    structure: {
-      graph: { atoms, bonds: graphBonds },
-      score,
-      resonanceForms,
-      valenceElectrons: electrons,
+
+  /** Fill order: outer atoms before inner ones, then the more electronegative first, then by index. */
+  const compareFillOrder = (a: number, b: number): number => (fillsAfter(a, b) ? 1 : 0);
+  const compareExpansionOrder = (a: number, b: number): number => (expandsAfter(a, b) ? 1 : 0);
+
+  function fillsAfter(a: number, b: number): boolean {
+    const byRole = Number(degree[a] > 1) - Number(degree[b] > 1);
+    if (byRole !== 0) return byRole > 0;
+    const byElectronegativity = electronegativityOf[b] - electronegativityOf[a];
+    if (byElectronegativity !== 0) return byElectronegativity > 0;
+    return a > b;
+  }
+
+  /** Expansion order: inner atoms before outer ones, then the less electronegative first, then by index. */
+  function expandsAfter(a: number, b: number): boolean {
+    const byRole = Number(degree[a] <= 1) - Number(degree[b] <= 1);
+    if (byRole !== 0) return byRole > 0;
+    const byElectronegativity = electronegativityOf[a] - electronegativityOf[b];
+    if (byElectronegativity !== 0) return byElectronegativity > 0;
+    return a > b;
+  }
+
+  function search(position: number, extraOrders: number, traits: readonly AtomTraits[]): void {
+    if (position === flexibleCount) {
+      evaluateLeaf(extraOrders, traits);
+      return;
+    }
+    const bond = flexibleBonds[position];
+    const from = bondFrom[bond];
+    const to = bondTo[bond];
+    for (let extra = 0; extra <= 2; extra++) {
+      if (2 * (extraOrders + extra) > spare) break;
+      if (extra > 0) {
+        const fitsFrom = 2 * (bondOrderSum[from] + extra) <= shellCapacityOf[from];
+        const fitsTo = 2 * (bondOrderSum[to] + extra) <= shellCapacityOf[to];
+        // Outer atoms keep to an octet: a triple bond is the most they can carry.
+        const outerFits = (degree[from] > 1 || bondOrderSum[from] + extra <= 3) && (degree[to] > 1 || bondOrderSum[to] + extra <= 3);
+        if (!fitsFrom || !fitsTo || !outerFits) break;
+      }
+      bondOrders[bond] = 1 + extra;
+      bondOrderSum[from] += extra;
+      bondOrderSum[to] += extra;
+      search(position + 1, extraOrders + extra, traits);
+      bondOrderSum[from] -= extra;
+      bondOrderSum[to] -= extra;
+      bondOrders[bond] = 1;
+    }
+  }
+
+  function evaluateLeaf(extraOrders: number, traits: readonly AtomTraits[]): void {
+    const remaining = spare - 2 * extraOrders;
+    if (remaining % 2 === 0) {
+      evaluate(remaining, -1);
+      return;
+    }
+    for (let atom = 0; atom < atomCount; atom++) {
+      if (traits[atom].isHydrogen && skipHydrogenUnpaired) continue;
+      evaluate(remaining - 1, atom);
+    }
+  }
+
+  function shellOf(atom: number, unpairedAtom: number): number {
+    return 2 * bondOrderSum[atom] + 2 * lonePairs[atom] + (atom === unpairedAtom ? 1 : 0);
+  }
+
+  function evaluate(remaining: number, unpairedAtom: number): void {
+    for (let atom = 0; atom < atomCount; atom++) lonePairs[atom] = 0;
+    let left = remaining;
+    for (let k = 0; k < atomCount; k++) {
+      if (left < 2) break;
+      const atom = fillOrder[k];
+      const need = fullShellOf[atom] - shellOf(atom, unpairedAtom);
+      if (need <= 1) continue;
+      const pairs = Math.min(need >> 1, left >> 1);
+      lonePairs[atom] += pairs;
+      left -= 2 * pairs;
+    }
+    for (let k = 0; k < expansionCount; k++) {
+      if (left < 2) break;
+      const atom = expansionOrder[k];
+      const roomInShell = (shellCapacityOf[atom] - shellOf(atom, unpairedAtom)) >> 1;
+      const roomForDomains = maxDomainsOf[atom] - degree[atom] - lonePairs[atom] - (atom === unpairedAtom ? 1 : 0);
+      const pairs = Math.min(roomInShell, roomForDomains, left >> 1);
+      if (pairs <= 0) continue;
+      lonePairs[atom] += pairs;
+      left -= 2 * pairs;
+    }
+    if (left !== 0) {
+      electronsLeftOver = true;
+      return;
+    }
+
+    let shellDeficit = 0;
+    let sumAbs = 0;
+    let sumSquare = 0;
+    let expanded = 0;
+    let weighted = 0;
+    for (let atom = 0; atom < atomCount; atom++) {
+      const shell = shellOf(atom, unpairedAtom);
+      if (shell > shellCapacityOf[atom]) return;
+      if (shell > 8) {
+        if (degree[atom] <= 1) return; // outer atoms never expand
+        expanded++;
+      }
+      if (degree[atom] > 1) {
+        const domains = degree[atom] + lonePairs[atom] + (atom === unpairedAtom ? 1 : 0);
+        if (domains > maxDomainsOf[atom]) return;
+      }
+      // B, Be and Al may stay short of an octet as centres (BF3), never as outer atoms.
+      const fullShell = fullShellOf[atom];
+      if ((mustCompleteOf[atom] === 1 || degree[atom] <= 1) && shell < fullShell) shellDeficit += fullShell - shell;
+      const formal = valenceOf[atom] - 2 * lonePairs[atom] - (atom === unpairedAtom ? 1 : 0) - bondOrderSum[atom];
+      sumAbs += Math.abs(formal);
+      sumSquare += formal * formal;
+      weighted += formal * electronegativityOf[atom];
+    }
+    if (isRadical && shellDeficit > 0) shellDeficit -= 1; // an odd count leaves one atom short by one
+    const chargeTimesElectronegativity = Math.round(weighted * 1000) / 1000;
+    // Compared field by field (as compareScores does): most leaves of the search lose.
+    let comparison = -1;
+    if (hasBest) {
+      comparison =
+        shellDeficit - bestShellDeficit ||
+        sumAbs - bestSumAbs ||
+        sumSquare - bestSumSquare ||
+        expanded - bestExpanded ||
+        chargeTimesElectronegativity - bestWeighted;
+    }
+    if (comparison > 0) return;
+    let spread = 0;
+    for (let bond = 0; bond < bondCount; bond++) spread += bondOrders[bond] * bondOrders[bond];
+    if (comparison === 0) {
+      resonanceForms++;
+      // Equally good forms are all counted; the one drawn spreads its bonds most evenly (H-N=N=N
+      // rather than H-N-N#N), as chemists draw the major form.
+      if (!(spread < bestSpread)) return;
+    } else {
+      resonanceForms = 1;
+    }
+    hasBest = true;
+    bestShellDeficit = shellDeficit;
+    bestSumAbs = sumAbs;
+    bestSumSquare = sumSquare;
+    bestExpanded = expanded;
+    bestWeighted = chargeTimesElectronegativity;
+    bestSpread = spread;
+    bestUnpaired = unpairedAtom;
+    for (let bond = 0; bond < bondCount; bond++) bestOrders[bond] = bondOrders[bond];
+    for (let atom = 0; atom < atomCount; atom++) bestLonePairs[atom] = lonePairs[atom];
+  }
+
+  let running = false;
+  const lewisSearch: LewisSearch = {
+    choose(skeleton, charge) {
+      if (running) return createLewisSearch().choose(skeleton, charge);
+      running = true;
+      try {
+        return runSearch(skeleton, charge);
+      } finally {
+        running = false;
+      }
     },
   };
-}
-
-function blocksMultipleBond(traits: readonly AtomTraits[], atom: number): boolean {
-  const t = traits[atom];
-  return (
-    t.isHydrogen ||
-    // A period-2 atom with four neighbours has no room left for a multiple bond.
-    (t.shellCapacity === 8 && degree[atom] >= 4) ||
-    t.element.symbol === "F" ||
-    (t.isHalogen && degree[atom] === 1)
-  );
-}
-
-/** Fill order: outer atoms before inner ones, then the more electronegative first, then by index. */
-const compareFillOrder = (a: number, b: number): number => (fillsAfter(a, b) ? 1 : 0);
-const compareExpansionOrder = (a: number, b: number): number => (expandsAfter(a, b) ? 1 : 0);
-
-function fillsAfter(a: number, b: number): boolean {
-  const byRole = Number(degree[a] > 1) - Number(degree[b] > 1);
-  if (byRole !== 0) return byRole > 0;
-  const byElectronegativity = electronegativityOf[b] - electronegativityOf[a];
-  if (byElectronegativity !== 0) return byElectronegativity > 0;
-  return a > b;
-}
-
-/** Expansion order: inner atoms before outer ones, then the less electronegative first, then by index. */
-function expandsAfter(a: number, b: number): boolean {
-  const byRole = Number(degree[a] <= 1) - Number(degree[b] <= 1);
-  if (byRole !== 0) return byRole > 0;
-  const byElectronegativity = electronegativityOf[a] - electronegativityOf[b];
-  if (byElectronegativity !== 0) return byElectronegativity > 0;
-  return a > b;
-}
-
-function search(position: number, extraOrders: number, traits: readonly AtomTraits[]): void {
-  if (position === flexibleCount) {
-    evaluateLeaf(extraOrders, traits);
-    return;
-  }
-  const bond = flexibleBonds[position];
-  const from = bondFrom[bond];
-  const to = bondTo[bond];
-  for (let extra = 0; extra <= 2; extra++) {
-    if (2 * (extraOrders + extra) > spare) break;
-    if (extra > 0) {
-      const fitsFrom = 2 * (bondOrderSum[from] + extra) <= shellCapacityOf[from];
-      const fitsTo = 2 * (bondOrderSum[to] + extra) <= shellCapacityOf[to];
-      // Outer atoms keep to an octet: a triple bond is the most they can carry.
-      const outerFits =
-        (degree[from] > 1 || bondOrderSum[from] + extra <= 3) && (degree[to] > 1 || bondOrderSum[to] + extra <= 3);
-      if (!fitsFrom || !fitsTo || !outerFits) break;
-    }
-    bondOrders[bond] = 1 + extra;
-    bondOrderSum[from] += extra;
-    bondOrderSum[to] += extra;
-    search(position + 1, extraOrders + extra, traits);
-    bondOrderSum[from] -= extra;
-    bondOrderSum[to] -= extra;
-    bondOrders[bond] = 1;
-  }
-}
-
-function evaluateLeaf(extraOrders: number, traits: readonly AtomTraits[]): void {
-  const remaining = spare - 2 * extraOrders;
-  if (remaining % 2 === 0) {
-    evaluate(remaining, -1);
-    return;
-  }
-  for (let atom = 0; atom < atomCount; atom++) {
-    if (traits[atom].isHydrogen && skipHydrogenUnpaired) continue;
-    evaluate(remaining - 1, atom);
-  }
-}
-
-function shellOf(atom: number, unpairedAtom: number): number {
-  return 2 * bondOrderSum[atom] + 2 * lonePairs[atom] + (atom === unpairedAtom ? 1 : 0);
-}
-
-function evaluate(remaining: number, unpairedAtom: number): void {
-  for (let atom = 0; atom < atomCount; atom++) lonePairs[atom] = 0;
-  let left = remaining;
-  for (let k = 0; k < atomCount; k++) {
-    if (left < 2) break;
-    const atom = fillOrder[k];
-    const need = fullShellOf[atom] - shellOf(atom, unpairedAtom);
-    if (need <= 1) continue;
-    const pairs = Math.min(need >> 1, left >> 1);
-    lonePairs[atom] += pairs;
-    left -= 2 * pairs;
-  }
-  for (let k = 0; k < expansionCount; k++) {
-    if (left < 2) break;
-    const atom = expansionOrder[k];
-    const roomInShell = (shellCapacityOf[atom] - shellOf(atom, unpairedAtom)) >> 1;
-    const roomForDomains = maxDomainsOf[atom] - degree[atom] - lonePairs[atom] - (atom === unpairedAtom ? 1 : 0);
-    const pairs = Math.min(roomInShell, roomForDomains, left >> 1);
-    if (pairs <= 0) continue;
-    lonePairs[atom] += pairs;
-    left -= 2 * pairs;
-  }
-  if (left !== 0) {
-    electronsLeftOver = true;
-    return;
-  }
-
-  let shellDeficit = 0;
-  let sumAbs = 0;
-  let sumSquare = 0;
-  let expanded = 0;
-  let weighted = 0;
-  for (let atom = 0; atom < atomCount; atom++) {
-    const shell = shellOf(atom, unpairedAtom);
-    if (shell > shellCapacityOf[atom]) return;
-    if (shell > 8) {
-      if (degree[atom] <= 1) return; // outer atoms never expand
-      expanded++;
-    }
-    if (degree[atom] > 1) {
-      const domains = degree[atom] + lonePairs[atom] + (atom === unpairedAtom ? 1 : 0);
-      if (domains > maxDomainsOf[atom]) return;
-    }
-    // B, Be and Al may stay short of an octet as centres (BF3), never as outer atoms.
-    const fullShell = fullShellOf[atom];
-    if ((mustCompleteOf[atom] === 1 || degree[atom] <= 1) && shell < fullShell) shellDeficit += fullShell - shell;
-    const formal = valenceOf[atom] - 2 * lonePairs[atom] - (atom === unpairedAtom ? 1 : 0) - bondOrderSum[atom];
-    sumAbs += Math.abs(formal);
-    sumSquare += formal * formal;
-    weighted += formal * electronegativityOf[atom];
-  }
-  if (isRadical && shellDeficit > 0) shellDeficit -= 1; // an odd count leaves one atom short by one
-  const chargeTimesElectronegativity = Math.round(weighted * 1000) / 1000;
-  // Compared field by field (as compareScores does): most leaves of the search lose.
-  let comparison = -1;
-  if (hasBest) {
-    comparison =
-      shellDeficit - bestShellDeficit ||
-      sumAbs - bestSumAbs ||
-      sumSquare - bestSumSquare ||
-      expanded - bestExpanded ||
-      chargeTimesElectronegativity - bestWeighted;
-  }
-  if (comparison > 0) return;
-  let spread = 0;
-  for (let bond = 0; bond < bondCount; bond++) spread += bondOrders[bond] * bondOrders[bond];
-  if (comparison === 0) {
-    resonanceForms++;
-    // Equally good forms are all counted; the one drawn spreads its bonds most evenly (H-N=N=N
-    // rather than H-N-N#N), as chemists draw the major form.
-    if (!(spread < bestSpread)) return;
-  } else {
-    resonanceForms = 1;
-  }
-  hasBest = true;
-  bestShellDeficit = shellDeficit;
-  bestSumAbs = sumAbs;
-  bestSumSquare = sumSquare;
-  bestExpanded = expanded;
-  bestWeighted = chargeTimesElectronegativity;
-  bestSpread = spread;
-  bestUnpaired = unpairedAtom;
-  for (let bond = 0; bond < bondCount; bond++) bestOrders[bond] = bondOrders[bond];
-  for (let atom = 0; atom < atomCount; atom++) bestLonePairs[atom] = lonePairs[atom];
-}
-
-let running = false;
-const lewisSearch: LewisSearch = {
-  choose(skeleton, charge) {
-    if (running) return createLewisSearch().choose(skeleton, charge);
-    running = true;
-    try {
-      return runSearch(skeleton, charge);
-    } finally {
-      running = false;
-    }
-  },
-};
-return lewisSearch;
+  return lewisSearch;
 }
 
 /**

@@ -68,9 +68,7 @@ export function isSpace(code: number): boolean {
 
 /** The dots people put between a salt and its water of crystallisation: · • ∙ ⋅ . * */
 export function isHydrateDot(code: number): boolean {
-  return (
-    code === 0xb7 || code === 0x2022 || code === 0x2219 || code === 0x22c5 || code === 0x2e || code === 0x2a
-  );
+  return code === 0xb7 || code === 0x2022 || code === 0x2219 || code === 0x22c5 || code === 0x2e || code === 0x2a;
 }
 
 /** "=" for a double bond; "≡" or "#" for a triple bond (the SMILES spelling); otherwise undefined. */
@@ -100,9 +98,7 @@ export function isCloseBracket(code: number): boolean {
  * joiner, word joiner, byte-order mark and soft hyphen. Pasted text carries them unseen.
  */
 export function isInvisibleFormatting(code: number): boolean {
-  return (
-    code === 0x200b || code === 0x200c || code === 0x200d || code === 0x2060 || code === 0xfeff || code === 0x00ad
-  );
+  return code === 0x200b || code === 0x200c || code === 0x200d || code === 0x2060 || code === 0xfeff || code === 0x00ad;
 }
 
 /** No-break spaces (plain, narrow and figure): word processors put them where no break is wanted. */

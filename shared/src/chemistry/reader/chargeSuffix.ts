@@ -5,15 +5,7 @@
  */
 import { elementBySymbol } from "../elements";
 import type { Problem } from "../types";
-import {
-  asciiDigitValue,
-  chargeDigitValue,
-  isSpace,
-  isUpperLetter,
-  isLowerLetter,
-  signValue,
-  superscriptDigitValue,
-} from "./characters";
+import { asciiDigitValue, chargeDigitValue, isSpace, isUpperLetter, isLowerLetter, signValue, superscriptDigitValue } from "./characters";
 import { chargeText } from "./chargeText";
 import { NONMETALS } from "./nonmetals";
 import { problemAt } from "./problem";
@@ -24,9 +16,7 @@ export interface ChargeSuffix {
   readonly charge: number;
 }
 
-export type ChargeSuffixResult =
-  | { readonly ok: true; readonly value: ChargeSuffix }
-  | { readonly ok: false; readonly problem: Problem };
+export type ChargeSuffixResult = { readonly ok: true; readonly value: ChargeSuffix } | { readonly ok: false; readonly problem: Problem };
 
 /** Charges beyond this are typing accidents, not ions. */
 const MAX_CHARGE = 20;

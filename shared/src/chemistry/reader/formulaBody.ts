@@ -37,9 +37,7 @@ export interface FormulaBody {
   readonly isotopes?: readonly IsotopeLabel[];
 }
 
-export type FormulaBodyResult =
-  | { readonly ok: true; readonly value: FormulaBody }
-  | { readonly ok: false; readonly problem: Problem };
+export type FormulaBodyResult = { readonly ok: true; readonly value: FormulaBody } | { readonly ok: false; readonly problem: Problem };
 
 /** A written count above this is a typing accident. */
 const MAX_COUNT = 100_000;
@@ -180,7 +178,9 @@ function scan(text: string, start: number, end: number): FormulaBody {
   let next = 0;
   for (const [symbol, count] of root.counts) composition[next++] = { symbol, count };
   const writtenSequence = root.parts.slice();
-  const body: FormulaBody = root.isotopes ? { composition, writtenSequence, normalizedText, isotopes: root.isotopes } : { composition, writtenSequence, normalizedText };
+  const body: FormulaBody = root.isotopes
+    ? { composition, writtenSequence, normalizedText, isotopes: root.isotopes }
+    : { composition, writtenSequence, normalizedText };
   return root.writtenParts ? { ...body, parts: root.writtenParts } : body;
 }
 

@@ -283,7 +283,16 @@ function structureReading(match: NameMatch): SpeciesReading | undefined {
   const composition: FormulaPart[] = symbols.map((symbol) => ({ symbol, count: counts.get(symbol) as number }));
   const charge = smilesNetCharge(parsed.value);
   const formula = composition.map((part) => (part.count === 1 ? part.symbol : `${part.symbol}${part.count}`)).join("") + chargeText(charge);
-  return { text: match.name, range: { start: 0, end: match.name.length }, notation: "name", composition, writtenSequence: composition, charge, formula, smiles: match.smiles };
+  return {
+    text: match.name,
+    range: { start: 0, end: match.name.length },
+    notation: "name",
+    composition,
+    writtenSequence: composition,
+    charge,
+    formula,
+    smiles: match.smiles,
+  };
 }
 
 function hillRank(symbol: string): number {

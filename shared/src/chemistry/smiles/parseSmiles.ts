@@ -57,14 +57,21 @@ function failure(problem: Problem): SmilesResult {
 
 function bondKindOf(code: number): number {
   switch (code) {
-    case 45: return BOND_SINGLE; // -
-    case 61: return BOND_DOUBLE; // =
-    case 35: return BOND_TRIPLE; // #
-    case 36: return BOND_QUADRUPLE; // $
-    case 58: return BOND_AROMATIC; // :
+    case 45:
+      return BOND_SINGLE; // -
+    case 61:
+      return BOND_DOUBLE; // =
+    case 35:
+      return BOND_TRIPLE; // #
+    case 36:
+      return BOND_QUADRUPLE; // $
+    case 58:
+      return BOND_AROMATIC; // :
     case 47: // /
-    case 92: return BOND_DIRECTIONAL; // \
-    default: return -1;
+    case 92:
+      return BOND_DIRECTIONAL; // \
+    default:
+      return -1;
   }
 }
 
@@ -150,24 +157,73 @@ export function parseSmiles(text: string): SmilesResult {
     const next = i + 1 < length ? text.charCodeAt(i + 1) : 0;
     switch (code) {
       case 66: // B, Br
-        if (next === 114) { addOrganicAtom("Br", false, i, i + 2); i += 2; } else { addOrganicAtom("B", false, i, i + 1); i++; }
+        if (next === 114) {
+          addOrganicAtom("Br", false, i, i + 2);
+          i += 2;
+        } else {
+          addOrganicAtom("B", false, i, i + 1);
+          i++;
+        }
         continue;
       case 67: // C, Cl
-        if (next === 108) { addOrganicAtom("Cl", false, i, i + 2); i += 2; } else { addOrganicAtom("C", false, i, i + 1); i++; }
+        if (next === 108) {
+          addOrganicAtom("Cl", false, i, i + 2);
+          i += 2;
+        } else {
+          addOrganicAtom("C", false, i, i + 1);
+          i++;
+        }
         continue;
-      case 78: addOrganicAtom("N", false, i, i + 1); i++; continue;
-      case 79: addOrganicAtom("O", false, i, i + 1); i++; continue;
-      case 80: addOrganicAtom("P", false, i, i + 1); i++; continue;
-      case 83: addOrganicAtom("S", false, i, i + 1); i++; continue;
-      case 70: addOrganicAtom("F", false, i, i + 1); i++; continue;
-      case 73: addOrganicAtom("I", false, i, i + 1); i++; continue;
-      case 98: addOrganicAtom("B", true, i, i + 1); i++; continue;
-      case 99: addOrganicAtom("C", true, i, i + 1); i++; continue;
-      case 110: addOrganicAtom("N", true, i, i + 1); i++; continue;
-      case 111: addOrganicAtom("O", true, i, i + 1); i++; continue;
-      case 112: addOrganicAtom("P", true, i, i + 1); i++; continue;
-      case 115: addOrganicAtom("S", true, i, i + 1); i++; continue;
-      case 91: { // [
+      case 78:
+        addOrganicAtom("N", false, i, i + 1);
+        i++;
+        continue;
+      case 79:
+        addOrganicAtom("O", false, i, i + 1);
+        i++;
+        continue;
+      case 80:
+        addOrganicAtom("P", false, i, i + 1);
+        i++;
+        continue;
+      case 83:
+        addOrganicAtom("S", false, i, i + 1);
+        i++;
+        continue;
+      case 70:
+        addOrganicAtom("F", false, i, i + 1);
+        i++;
+        continue;
+      case 73:
+        addOrganicAtom("I", false, i, i + 1);
+        i++;
+        continue;
+      case 98:
+        addOrganicAtom("B", true, i, i + 1);
+        i++;
+        continue;
+      case 99:
+        addOrganicAtom("C", true, i, i + 1);
+        i++;
+        continue;
+      case 110:
+        addOrganicAtom("N", true, i, i + 1);
+        i++;
+        continue;
+      case 111:
+        addOrganicAtom("O", true, i, i + 1);
+        i++;
+        continue;
+      case 112:
+        addOrganicAtom("P", true, i, i + 1);
+        i++;
+        continue;
+      case 115:
+        addOrganicAtom("S", true, i, i + 1);
+        i++;
+        continue;
+      case 91: {
+        // [
         const bracket = readBracketAtom(text, i);
         if ("code" in bracket) return failure(bracket);
         addAtom({
@@ -206,13 +262,29 @@ export function parseSmiles(text: string): SmilesResult {
         i++;
         continue;
       case 37: // %nn
-      case 48: case 49: case 50: case 51: case 52: case 53: case 54: case 55: case 56: case 57: {
+      case 48:
+      case 49:
+      case 50:
+      case 51:
+      case 52:
+      case 53:
+      case 54:
+      case 55:
+      case 56:
+      case 57: {
         const digitStart = i;
         let ringNumber: number;
         if (code === 37) {
           const third = i + 2 < length ? text.charCodeAt(i + 2) : 0;
           if (next < 48 || next > 57 || third < 48 || third > 57) {
-            return failure(smilesProblem("malformed-formula", `"%" at ${position(i)} must be followed by two digits, as in %10.`, i, Math.min(i + 3, length)));
+            return failure(
+              smilesProblem(
+                "malformed-formula",
+                `"%" at ${position(i)} must be followed by two digits, as in %10.`,
+                i,
+                Math.min(i + 3, length),
+              ),
+            );
           }
           ringNumber = (next - 48) * 10 + (third - 48);
           i += 3;
@@ -232,15 +304,36 @@ export function parseSmiles(text: string): SmilesResult {
         } else {
           const label = text.slice(digitStart, i);
           if (partner === previous) {
-            return failure(smilesProblem("malformed-formula", `Ring bond ${label} at ${position(digitStart)} would bond an atom to itself.`, digitStart, i));
+            return failure(
+              smilesProblem(
+                "malformed-formula",
+                `Ring bond ${label} at ${position(digitStart)} would bond an atom to itself.`,
+                digitStart,
+                i,
+              ),
+            );
           }
           if (!ringKindsAgree(ringKind[ringNumber], bondKind)) {
-            return failure(smilesProblem("malformed-formula", `Ring bond ${label} is written with two different bond symbols (${position(ringOpening[ringNumber])} and ${position(bondStart)}).`, bondStart, i));
+            return failure(
+              smilesProblem(
+                "malformed-formula",
+                `Ring bond ${label} is written with two different bond symbols (${position(ringOpening[ringNumber])} and ${position(bondStart)}).`,
+                bondStart,
+                i,
+              ),
+            );
           }
           for (let b = firstBondOfAtom[previous]; b < bonds.length; b++) {
             const bond = bonds[b];
             if (bond.from === partner || bond.to === partner) {
-              return failure(smilesProblem("malformed-formula", `Ring bond ${label} at ${position(digitStart)} repeats a bond that is already there.`, digitStart, i));
+              return failure(
+                smilesProblem(
+                  "malformed-formula",
+                  `Ring bond ${label} at ${position(digitStart)} repeats a bond that is already there.`,
+                  digitStart,
+                  i,
+                ),
+              );
             }
           }
           addBond(partner, previous, bondKind === BOND_UNWRITTEN ? ringKind[ringNumber] : bondKind, false);
@@ -276,7 +369,14 @@ export function parseSmiles(text: string): SmilesResult {
     return failure(smilesProblem("unbalanced-brackets", `The "(" at ${position(opening)} is never closed with ")".`, opening, opening + 1));
   }
   if (state === AFTER_BOND) {
-    return failure(smilesProblem("malformed-formula", `The bond "${text[bondStart]}" at ${position(bondStart)} has no atom after it.`, bondStart, bondStart + 1));
+    return failure(
+      smilesProblem(
+        "malformed-formula",
+        `The bond "${text[bondStart]}" at ${position(bondStart)} has no atom after it.`,
+        bondStart,
+        bondStart + 1,
+      ),
+    );
   }
   if (state === AFTER_DOT) {
     return failure(smilesProblem("malformed-formula", `The "." at ${position(length - 1)} has no atom after it.`, length - 1, length));
@@ -288,7 +388,9 @@ export function parseSmiles(text: string): SmilesResult {
     }
     const start = ringOpening[first];
     const end = text.charCodeAt(start) === 37 ? start + 3 : start + 1;
-    return failure(smilesProblem("malformed-formula", `Ring bond ${text.slice(start, end)} opened at ${position(start)} is never closed.`, start, end));
+    return failure(
+      smilesProblem("malformed-formula", `Ring bond ${text.slice(start, end)} opened at ${position(start)} is never closed.`, start, end),
+    );
   }
 
   if (chainAromaticBonds !== undefined) {
@@ -322,7 +424,12 @@ function unexpectedCharacter(text: string, offset: number): Problem {
     }
   }
   if ((code >= 65 && code <= 90) || (code >= 97 && code <= 122)) {
-    return smilesProblem("unknown-element", `"${text[offset]}" at ${position(offset)} is not an element symbol that SMILES allows here.`, offset, offset + 1);
+    return smilesProblem(
+      "unknown-element",
+      `"${text[offset]}" at ${position(offset)} is not an element symbol that SMILES allows here.`,
+      offset,
+      offset + 1,
+    );
   }
   if (code === 93) {
     return smilesProblem("unbalanced-brackets", `The "]" at ${position(offset)} closes no "[".`, offset, offset + 1);

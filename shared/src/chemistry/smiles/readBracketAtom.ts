@@ -89,7 +89,12 @@ export function readBracketAtom(text: string, start: number): BracketAtom | Prob
     if (!isUpper(first) && !isLower(first)) {
       return smilesProblem("malformed-formula", `Expected an element symbol at ${position(i)}, found "${text[i]}".`, i, i + 1);
     }
-    return smilesProblem("unknown-element", `"${text.slice(i, end)}" at ${position(i)} is not an element symbol${isLower(first) ? " that can be written aromatic" : ""}.`, symbolStart, end);
+    return smilesProblem(
+      "unknown-element",
+      `"${text.slice(i, end)}" at ${position(i)} is not an element symbol${isLower(first) ? " that can be written aromatic" : ""}.`,
+      symbolStart,
+      end,
+    );
   }
 
   if (i < length && text.charCodeAt(i) === 64 /* @ */) {
@@ -148,7 +153,12 @@ export function readBracketAtom(text: string, start: number): BracketAtom | Prob
 
   if (i >= length) return unclosed(start, length);
   if (text.charCodeAt(i) !== 93 /* ] */) {
-    return smilesProblem("malformed-formula", `Unexpected "${text[i]}" at ${position(i)} inside the bracket atom that starts at ${position(start)}.`, i, i + 1);
+    return smilesProblem(
+      "malformed-formula",
+      `Unexpected "${text[i]}" at ${position(i)} inside the bracket atom that starts at ${position(start)}.`,
+      i,
+      i + 1,
+    );
   }
   return { symbol, aromatic, isotope, hydrogens, charge, end: i + 1 };
 }

@@ -37,6 +37,4 @@ export interface SmilesMolecule {
 }
 
 /** The result of reading SMILES: the molecule, or the first problem found. */
-export type SmilesResult =
-  | { readonly ok: true; readonly value: SmilesMolecule }
-  | { readonly ok: false; readonly problem: Problem };
+export type SmilesResult = { readonly ok: true; readonly value: SmilesMolecule } | { readonly ok: false; readonly problem: Problem };

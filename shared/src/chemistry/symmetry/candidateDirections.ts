@@ -93,11 +93,7 @@ export function candidateMirrorNormals(molecule: CentredMolecule, tolerance: num
  * Principal axes rank last: where two moments are equal the axes in that plane are arbitrary,
  * and an arbitrary one must not displace a well-defined candidate pointing almost the same way.
  */
-function addPrincipalAxes(
-  molecule: CentredMolecule,
-  collector: ReturnType<typeof directionCollector>,
-  tolerance: number,
-): void {
+function addPrincipalAxes(molecule: CentredMolecule, collector: ReturnType<typeof directionCollector>, tolerance: number): void {
   for (const axis of molecule.principalAxes) collector.add(axis, tolerance * (1 + 1e-9));
 }
 

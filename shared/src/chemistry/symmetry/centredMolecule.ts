@@ -93,11 +93,7 @@ function inertiaTensor(atoms: readonly CentredAtom[], weights: readonly number[]
 }
 
 /** Distance from the centre, then sorted distances to each element in turn: equal for equivalent atoms. */
-function fingerprint(
-  atoms: readonly CentredAtom[],
-  indicesByElement: readonly (readonly number[])[],
-  index: number,
-): number[] {
+function fingerprint(atoms: readonly CentredAtom[], indicesByElement: readonly (readonly number[])[], index: number): number[] {
   const [x, y, z] = atoms[index].position;
   const values = [Math.hypot(x, y, z)];
   for (const indices of indicesByElement) {
@@ -113,19 +109,13 @@ function fingerprint(
   return values;
 }
 
-function groupLookAlikes(
-  atoms: readonly CentredAtom[],
-  indicesByElement: readonly (readonly number[])[],
-  tolerance: number,
-): number[][] {
+function groupLookAlikes(atoms: readonly CentredAtom[], indicesByElement: readonly (readonly number[])[], tolerance: number): number[][] {
   const groups: number[][] = [];
   for (const indices of indicesByElement) {
     const representatives: { fingerprint: number[]; members: number[] }[] = [];
     for (const index of indices) {
       const print = fingerprint(atoms, indicesByElement, index);
-      const match = representatives.find((group) =>
-        group.fingerprint.every((value, k) => Math.abs(value - print[k]) <= tolerance),
-      );
+      const match = representatives.find((group) => group.fingerprint.every((value, k) => Math.abs(value - print[k]) <= tolerance));
       if (match) match.members.push(index);
       else representatives.push({ fingerprint: print, members: [index] });
     }

@@ -162,9 +162,7 @@ function ringSizeCommonDivisor(molecule: MatchableMolecule, axis: Vec3, ringTole
     const previous = offAxis[end - 1];
     const next = offAxis[end];
     const sameLayer =
-      end < offAxis.length &&
-      atoms[next].elementId === atoms[previous].elementId &&
-      heights[next] - heights[previous] <= ringTolerance;
+      end < offAxis.length && atoms[next].elementId === atoms[previous].elementId && heights[next] - heights[previous] <= ringTolerance;
     if (sameLayer) continue;
     const layer = offAxis.slice(start, end).sort((a, b) => radii[a] - radii[b]);
     let ringStart = 0;

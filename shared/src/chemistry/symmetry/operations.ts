@@ -59,11 +59,7 @@ function multiply(a: Matrix3, b: Matrix3): Matrix3 {
  * that atom i lands on within `tolerance`, or null when some atom lands on none. Atoms are
  * assumed to be further apart than twice the tolerance, so the nearest match is the only one.
  */
-export function symmetryPermutation(
-  molecule: MatchableMolecule,
-  operation: Matrix3,
-  tolerance: number,
-): readonly number[] | null {
+export function symmetryPermutation(molecule: MatchableMolecule, operation: Matrix3, tolerance: number): readonly number[] | null {
   const toleranceSquared = tolerance * tolerance;
   const [r0, r1, r2] = operation;
   const permutation = new Array<number>(molecule.atoms.length);

@@ -68,10 +68,7 @@ export type PointGroupResult =
  * far an atom may land from its symmetry partner. Atoms are matched by element label, case
  * aside, so "D" differs from "H" and isotopic substitution lowers the symmetry.
  */
-export function findPointGroup(
-  atoms: readonly PositionedAtom[],
-  tolerance: number = DEFAULT_SYMMETRY_TOLERANCE,
-): PointGroupResult {
+export function findPointGroup(atoms: readonly PositionedAtom[], tolerance: number = DEFAULT_SYMMETRY_TOLERANCE): PointGroupResult {
   const problem = inputProblem(atoms, tolerance);
   if (problem) return { ok: false, problem };
 
@@ -91,10 +88,7 @@ export function findPointGroup(
   };
 }
 
-function inputProblem(
-  atoms: readonly PositionedAtom[],
-  tolerance: number,
-): { code: PointGroupProblemCode; message: string } | undefined {
+function inputProblem(atoms: readonly PositionedAtom[], tolerance: number): { code: PointGroupProblemCode; message: string } | undefined {
   if (!(tolerance > 0) || !Number.isFinite(tolerance)) {
     return { code: "invalid-tolerance", message: `The symmetry tolerance must be a positive number of ångströms, not ${tolerance}.` };
   }

@@ -7,12 +7,7 @@ import type { AngleExpectation, CentreAnalysis, MolecularGraph } from "../types"
 import { lonePairJoinsPiSystem } from "./piSystems";
 import { assignSites, type Ligand, type SiteAssignment } from "./assignSites";
 import { expectedAngles, idealAnglesFor, type AngleContext } from "./expectedAngles";
-import {
-  axeNotation,
-  ELECTRON_GEOMETRY_BY_STERIC_NUMBER,
-  HYBRIDIZATION_BY_STERIC_NUMBER,
-  molecularGeometryFor,
-} from "./shapeTables";
+import { axeNotation, ELECTRON_GEOMETRY_BY_STERIC_NUMBER, HYBRIDIZATION_BY_STERIC_NUMBER, molecularGeometryFor } from "./shapeTables";
 
 export interface CentreDetail {
   readonly centre: CentreAnalysis;
@@ -149,11 +144,7 @@ export function describeCentre(graph: MolecularGraph, index: number, radical: bo
     idealAngles: idealAnglesFor(angleContext),
     expectedAngles: withRingAngle(expectedAngles(angleContext), ringSize),
     hybridization,
-    ...(stericNumber >= 5
-      ? { hybridizationNote: EXPANDED_NOTE }
-      : delocalised
-        ? { hybridizationNote: CONJUGATED_NOTE }
-        : {}),
+    ...(stericNumber >= 5 ? { hybridizationNote: EXPANDED_NOTE } : delocalised ? { hybridizationNote: CONJUGATED_NOTE } : {}),
   };
   if (memoKey !== undefined) rememberCentre(memoKey, { centre, sites });
   return { alike: centre, ligands, sites };

@@ -24,11 +24,7 @@ export interface SiteAssignment {
   readonly lonePairDirections: readonly Vec3[];
 }
 
-export function assignSites(
-  electronGeometry: ElectronGeometry,
-  loneDomains: number,
-  ligands: readonly Ligand[],
-): SiteAssignment {
+export function assignSites(electronGeometry: ElectronGeometry, loneDomains: number, ligands: readonly Ligand[]): SiteAssignment {
   const directions = idealDirections(electronGeometry);
   const siteOrder = lonePairSiteOrder(electronGeometry);
   const loneSites = siteOrder.slice(0, loneDomains);
@@ -44,10 +40,7 @@ export function assignSites(
     );
     sortSmall(
       order,
-      (a, b) =>
-        ligands[b].bondOrder - ligands[a].bondOrder ||
-        ligands[a].electronegativity - ligands[b].electronegativity ||
-        a - b,
+      (a, b) => ligands[b].bondOrder - ligands[a].bondOrder || ligands[a].electronegativity - ligands[b].electronegativity || a - b,
     );
   } else {
     // Rarest neighbours first, so a single odd one out lands trans to a lone pair (XeOF4) and
@@ -57,10 +50,7 @@ export function assignSites(
     for (const key of keys) counts.set(key, (counts.get(key) ?? 0) + 1);
     sortSmall(
       order,
-      (a, b) =>
-        counts.get(keys[a])! - counts.get(keys[b])! ||
-        (keys[a] < keys[b] ? -1 : keys[a] > keys[b] ? 1 : 0) ||
-        a - b,
+      (a, b) => counts.get(keys[a])! - counts.get(keys[b])! || (keys[a] < keys[b] ? -1 : keys[a] > keys[b] ? 1 : 0) || a - b,
     );
   }
 

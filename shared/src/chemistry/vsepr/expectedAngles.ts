@@ -140,13 +140,8 @@ export function idealAnglesFor(context: AngleContext): readonly number[] {
 // Bound: one list per electron geometry and number of lone-pair domains.
 const idealAnglesMemo = new Map<string, (readonly number[] | undefined)[]>();
 
-function rangeFor(
-  context: AngleContext,
-  ideal: number,
-  between: string | undefined,
-): { min: number; max: number; note: string } {
-  const symmetric =
-    context.identicalNeighbours && (context.loneDomains === 0 || context.lonePairsBalanced) && !context.radical;
+function rangeFor(context: AngleContext, ideal: number, between: string | undefined): { min: number; max: number; note: string } {
+  const symmetric = context.identicalNeighbours && (context.loneDomains === 0 || context.lonePairsBalanced) && !context.radical;
   if (symmetric) return { min: ideal, max: ideal, note: "fixed by symmetry" };
 
   let min = ideal;
@@ -202,11 +197,7 @@ function joinedNote(lonePair: number, bulky: number, neighbour: number, radical:
   return note;
 }
 
-function lonePairSqueeze(
-  context: AngleContext,
-  ideal: number,
-  between: string | undefined,
-): { down: number; up: number } {
+function lonePairSqueeze(context: AngleContext, ideal: number, between: string | undefined): { down: number; up: number } {
   if (ideal >= 170) return { down: between === "axial-axial" ? 20 : 30, up: 0 };
   switch (context.stericNumber) {
     case 3:

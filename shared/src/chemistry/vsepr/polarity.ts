@@ -26,11 +26,7 @@ export function judgePolarity(
   };
 }
 
-function judgeNeutralShape(
-  graph: MolecularGraph,
-  details: readonly CentreDetail[],
-  mainCentre: number | undefined,
-): PolarityVerdict {
+function judgeNeutralShape(graph: MolecularGraph, details: readonly CentreDetail[], mainCentre: number | undefined): PolarityVerdict {
   if (graph.atoms.length === 1) return { polar: false, reason: "a single atom has no dipole", dipoleEstimate: 0 };
   if (graph.atoms.length === 2) {
     const [a, b] = graph.atoms;
@@ -56,9 +52,7 @@ function judgeNeutralShape(
 
   // Outer groups that are themselves bent (O-H in H2SO4, N-H2 in hydrazine) point their dipoles
   // off the main axes, so nothing cancels them in the model.
-  const bentOuterCentre = details.find(
-    (d) => d !== main && d.centre.lonePairs + d.centre.unpairedElectrons > 0,
-  );
+  const bentOuterCentre = details.find((d) => d !== main && d.centre.lonePairs + d.centre.unpairedElectrons > 0);
   const shape = main.centre.molecularGeometry;
   if (bentOuterCentre) {
     return {

@@ -33,10 +33,7 @@ export const HYBRIDIZATION_BY_STERIC_NUMBER: Readonly<Record<number, Hybridizati
 };
 
 /** The molecular geometry, or undefined for combinations no centre with two neighbours has. */
-export function molecularGeometryFor(
-  stericNumber: number,
-  loneDomains: number,
-): MolecularGeometry | undefined {
+export function molecularGeometryFor(stericNumber: number, loneDomains: number): MolecularGeometry | undefined {
   return MOLECULAR_GEOMETRY[stericNumber]?.[loneDomains];
 }
 

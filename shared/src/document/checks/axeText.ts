@@ -11,7 +11,10 @@ const SUBSCRIPTS = /[\u2080-\u2089]/g;
 
 /** The numbers behind an AXE class, or undefined when the cell is not one. */
 export function parseAxe(cell: string): AxeClass | undefined {
-  const plain = cell.replace(SUBSCRIPTS, (digit) => String(digit.charCodeAt(0) - 0x2080)).replace(/\s+/g, "").toUpperCase();
+  const plain = cell
+    .replace(SUBSCRIPTS, (digit) => String(digit.charCodeAt(0) - 0x2080))
+    .replace(/\s+/g, "")
+    .toUpperCase();
   const match = /^AX(\d*)(?:E(\d*))?$/.exec(plain);
   if (!match) return undefined;
   return {

@@ -5,30 +5,30 @@
 
 const SYNONYMS: Readonly<Record<string, string>> = {
   "see saw": "seesaw",
-  "sawhorse": "seesaw",
-  "disphenoidal": "seesaw",
+  sawhorse: "seesaw",
+  disphenoidal: "seesaw",
   "t shaped": "t-shaped",
   "t shape": "t-shaped",
-  "t": "t-shaped",
-  "tetrahedron": "tetrahedral",
-  "octahedron": "octahedral",
+  t: "t-shaped",
+  tetrahedron: "tetrahedral",
+  octahedron: "octahedral",
   "trigonal bipyramid": "trigonal bipyramidal",
   "triangular bipyramidal": "trigonal bipyramidal",
   "trigonal pyramid": "trigonal pyramidal",
-  "pyramidal": "trigonal pyramidal",
+  pyramidal: "trigonal pyramidal",
   "square pyramid": "square pyramidal",
   "pentagonal bipyramid": "pentagonal bipyramidal",
   "pentagonal pyramid": "pentagonal pyramidal",
-  "angular": "bent",
+  angular: "bent",
   "v shaped": "bent",
   "v shape": "bent",
   "bent angular": "bent",
   "non linear": "bent",
-  "nonlinear": "bent",
+  nonlinear: "bent",
   "triangular planar": "trigonal planar",
   "planar triangular": "trigonal planar",
   "trigonal plane": "trigonal planar",
-  "trigonal": "trigonal planar",
+  trigonal: "trigonal planar",
 };
 
 /** Cells that say "no value" rather than a wrong one. */
@@ -41,7 +41,10 @@ export function normalizeGeometry(cell: string): string | undefined {
     .replace(/\([^)]*\)/g, " ")
     .trim();
   if (NO_VALUE.test(plain)) return undefined;
-  const words = plain.replace(/[-_\u2010\u2011]+/g, " ").replace(/\s+/g, " ").trim();
+  const words = plain
+    .replace(/[-_\u2010\u2011]+/g, " ")
+    .replace(/\s+/g, " ")
+    .trim();
   return SYNONYMS[words] ?? (words === "t shaped" ? "t-shaped" : words);
 }
 

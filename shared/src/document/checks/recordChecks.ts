@@ -84,10 +84,22 @@ function placedAt(finding: Finding, range: TextRange): Finding {
 function checkCell(cell: TableCell, species: string, analysis: SpeciesAnalysis, centre: CentreAnalysis | undefined): Finding | undefined {
   switch (cell.meaning) {
     case "valenceElectrons":
-      return checkCount(cell, analysis.valenceElectrons, "table-valence-electrons", (value) => `Valence electrons for ${species} are ${value}, the table says ${cell.text}.`);
+      return checkCount(
+        cell,
+        analysis.valenceElectrons,
+        "table-valence-electrons",
+        (value) => `Valence electrons for ${species} are ${value}, the table says ${cell.text}.`,
+      );
     case "lonePairs":
-      return centre && checkCount(cell, centre.lonePairs, "table-lone-pairs", (value) =>
-        `Lone pairs on the central ${centre.atom} of ${species}: ${value} ${MODEL}, the table says ${cell.text}.`);
+      return (
+        centre &&
+        checkCount(
+          cell,
+          centre.lonePairs,
+          "table-lone-pairs",
+          (value) => `Lone pairs on the central ${centre.atom} of ${species}: ${value} ${MODEL}, the table says ${cell.text}.`,
+        )
+      );
     case "axe":
       return centre && checkAxe(cell, species, centre);
     case "electronGeometry":

@@ -126,12 +126,7 @@ export function delimitedRowExtent(text: string, start: number, delimiter: strin
 }
 
 /** A field that opens with a quote; returns it and the index just past its closing quote. */
-function quotedField(
-  text: string,
-  open: number,
-  separator: number,
-  problems: Finding[],
-): { cell: DelimitedCell; next: number } {
+function quotedField(text: string, open: number, separator: number, problems: Finding[]): { cell: DelimitedCell; next: number } {
   const length = text.length;
   const start = open + 1;
   let index = start;

@@ -61,7 +61,7 @@ const NO_FINDINGS: readonly Finding[] = [];
  * by `checkDocument` of its model, sorted by range (ranges are offsets into `text`).
  */
 export function checkDelimitedText(text: string, kind: "csv" | "tsv", options: DelimitedFindingOptions = {}): Finding[] {
-  const delimiter = kind === "tsv" ? "\t" : options.delimiter ?? sniffDelimiter(text, ",");
+  const delimiter = kind === "tsv" ? "\t" : (options.delimiter ?? sniffDelimiter(text, ","));
   const from = options.from ?? 0;
   const memo = options.memo ?? delimitedRowMemo();
   const read = options.read ?? memoisedReader();
@@ -208,14 +208,28 @@ export function findHeader(text: string, delimiter: string): { text: string; nex
  * The findings of one row read under `header` as a document of its own, moved so that offset 0
  * of `row` is `shift` (row-relative findings for the memo when `shift` is minus a padding).
  */
-export function rowFindings(header: string, row: string, shift: number, kind: "csv" | "tsv", delimiter: string, read: SpeciesReader): Finding[] {
+export function rowFindings(
+  header: string,
+  row: string,
+  shift: number,
+  kind: "csv" | "tsv",
+  delimiter: string,
+  read: SpeciesReader,
+): Finding[] {
   const offset = header.length + 1;
   const findings = documentFindings(`${header}\n${row}`, kind, delimiter, read);
   return findings.filter((finding) => finding.range.start >= offset).map((finding) => moved(finding, shift - offset));
 }
 
 /** The ordinary reading of the text from `start` (a row start) on, findings before `from` dropped. */
-function ordinaryFindings(text: string, kind: "csv" | "tsv", delimiter: string, read: SpeciesReader, from: number, start: number): Finding[] {
+function ordinaryFindings(
+  text: string,
+  kind: "csv" | "tsv",
+  delimiter: string,
+  read: SpeciesReader,
+  from: number,
+  start: number,
+): Finding[] {
   if (start === 0) return documentFindings(text, kind, delimiter, read).filter((finding) => finding.range.start >= from);
   // The rows from `start` on, under the header, as a document of their own.
   const header = findHeader(text, delimiter);

@@ -38,7 +38,7 @@ export function readDelimitedRecords(
   sink: RecordSink,
   knownDelimiter?: string,
 ): readonly Finding[] {
-  const delimiter = kind === "tsv" ? "\t" : knownDelimiter ?? sniffDelimiter(text, ",");
+  const delimiter = kind === "tsv" ? "\t" : (knownDelimiter ?? sniffDelimiter(text, ","));
   let columns: (Column | undefined)[] | undefined;
   // A header without a species or name column: the rest is tokenized (for its problems) but not read.
   let noSpecies = false;

@@ -89,7 +89,10 @@ function objectRecord(node: Node, text: string, read: SpeciesReader, sink: Recor
 function valueField(value: Node, text: string): { text: string; range: { start: number; end: number } } | undefined {
   if (value.type === "string") return stringField(value);
   if (value.type === "number" || value.type === "boolean") {
-    return { text: text.slice(value.offset, value.offset + value.length), range: { start: value.offset, end: value.offset + value.length } };
+    return {
+      text: text.slice(value.offset, value.offset + value.length),
+      range: { start: value.offset, end: value.offset + value.length },
+    };
   }
   return undefined;
 }

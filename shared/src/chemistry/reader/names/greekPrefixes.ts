@@ -1,16 +1,5 @@
 /** Greek multiplying prefixes of binary covalent names, 1-10. */
-export const GREEK_PREFIXES: readonly string[] = [
-  "mono",
-  "di",
-  "tri",
-  "tetra",
-  "penta",
-  "hexa",
-  "hepta",
-  "octa",
-  "nona",
-  "deca",
-];
+export const GREEK_PREFIXES: readonly string[] = ["mono", "di", "tri", "tetra", "penta", "hexa", "hepta", "octa", "nona", "deca"];
 
 /** The prefix for a count 1-10, or undefined. */
 export function prefixFor(count: number): string | undefined {

@@ -158,7 +158,9 @@ function nameIndex(): NameIndex {
     ...COMMON_NAMES.map(([name, formula]): [string, string, boolean] => [name, formula, true]),
     ...ION_NAMES.map((ion): [string, string, boolean] => [ion.name, ion.body + chargeText(ion.charge), true]),
     // a structure with isomers names only its own written formula, never every formula of its composition
-    ...NAMED_STRUCTURES.flatMap((entry): [string, string, boolean][] => (entry.formula === undefined ? [] : [[entry.name, entry.formula, false]])),
+    ...NAMED_STRUCTURES.flatMap((entry): [string, string, boolean][] =>
+      entry.formula === undefined ? [] : [[entry.name, entry.formula, false]],
+    ),
   ];
   for (const [name, formulaText, byParts] of entries) {
     const reading = readFormulaSpan(formulaText, 0, formulaText.length, "formula");

@@ -306,11 +306,20 @@ function suffixGroups(suffix: Suffix, esterAlkyl: string | undefined): Group[] {
     case "one":
       return [{ order: 2, smiles: "O" }];
     case "oic":
-      return [{ order: 2, smiles: "O" }, { order: 1, smiles: "O" }];
+      return [
+        { order: 2, smiles: "O" },
+        { order: 1, smiles: "O" },
+      ];
     case "oate":
-      return [{ order: 2, smiles: "O" }, { order: 1, smiles: `O${esterAlkyl ?? ""}` }];
+      return [
+        { order: 2, smiles: "O" },
+        { order: 1, smiles: `O${esterAlkyl ?? ""}` },
+      ];
     case "amide":
-      return [{ order: 2, smiles: "O" }, { order: 1, smiles: "N" }];
+      return [
+        { order: 2, smiles: "O" },
+        { order: 1, smiles: "N" },
+      ];
     case "nitrile":
       return [{ order: 3, smiles: "N" }];
   }
