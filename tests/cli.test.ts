@@ -23,7 +23,26 @@ function runCli(...args: string[]): CliRun {
   return { status, stdout, stderr };
 }
 
-function analyzeJson(...species: string[]): { run: CliRun; json: any[] } {
+/** One centre of an `analyze --json` entry, as far as these tests read it. */
+interface CentreJson {
+  index: number;
+  atom: string;
+  axe: string;
+  molecularGeometry: string;
+  hybridization: string;
+}
+
+/** One entry of `analyze --json`; the tests check the rest of its shape with matchers. */
+interface AnalyzeJsonEntry {
+  input: string;
+  ok: boolean;
+  formula?: string;
+  centers: CentreJson[];
+  warnings: unknown;
+  error: { code: string; message: string };
+}
+
+function analyzeJson(...species: string[]): { run: CliRun; json: AnalyzeJsonEntry[] } {
   const run = runCli("analyze", "--json", ...species);
   return { run, json: JSON.parse(run.stdout) };
 }
@@ -131,13 +150,13 @@ describe("lonepair analyze --smiles", () => {
   it("reads benzene as SMILES: six sp2 trigonal planar carbons, hydrogens are not centres", () => {
     const run = runCli("analyze", "--smiles", "--json", "c1ccccc1");
     expect(run.status).toBe(0);
-    const [benzene] = JSON.parse(run.stdout);
+    const [benzene] = JSON.parse(run.stdout) as AnalyzeJsonEntry[];
     // source: RDKit (WebAssembly build): c1ccccc1 is C6H6 with all six carbons SP2
     expect(benzene).toMatchObject({ input: "c1ccccc1", ok: true, charge: 0 });
     expect(benzene.formula).toMatch(/^C6H6$/);
     // common practice: each aromatic carbon has three sigma neighbours and no lone pair (AX3)
     expect(
-      benzene.centers.map((centre: any) => [centre.index, centre.atom, centre.axe, centre.molecularGeometry, centre.hybridization]),
+      benzene.centers.map((centre: CentreJson) => [centre.index, centre.atom, centre.axe, centre.molecularGeometry, centre.hybridization]),
     ).toEqual([0, 1, 2, 3, 4, 5].map((index) => [index, "C", "AX3", "trigonal planar", "sp2"]));
   });
 
@@ -154,11 +173,11 @@ describe("lonepair analyze --smiles", () => {
 
   it("without --smiles the same text is read as a formula, not as SMILES", () => {
     // common practice: "CO" as a formula is carbon monoxide; as SMILES it is methanol, CH3OH
-    const asFormula = JSON.parse(runCli("analyze", "--json", "CO").stdout)[0];
-    const asSmiles = JSON.parse(runCli("analyze", "--json", "--smiles", "CO").stdout)[0];
+    const asFormula = (JSON.parse(runCli("analyze", "--json", "CO").stdout) as AnalyzeJsonEntry[])[0];
+    const asSmiles = (JSON.parse(runCli("analyze", "--json", "--smiles", "CO").stdout) as AnalyzeJsonEntry[])[0];
     expect(asFormula.formula).toBe("CO");
     expect(asSmiles.formula).toBe("CH4O");
-    expect(asSmiles.centers.map((centre: any) => [centre.atom, centre.molecularGeometry])).toEqual([
+    expect(asSmiles.centers.map((centre: CentreJson) => [centre.atom, centre.molecularGeometry])).toEqual([
       ["C", "tetrahedral"],
       ["O", "bent"],
     ]);

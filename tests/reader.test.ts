@@ -1,3 +1,4 @@
+import { createRequire } from "node:module";
 import { beforeAll, describe, expect, it } from "vitest";
 import { ELEMENTS } from "../shared/src/chemistry/elements";
 import { readSpecies } from "../shared/src/chemistry/reader/readSpecies";
@@ -282,7 +283,7 @@ describe("names against RDKit compositions", () => {
   let compositionOfSmiles: (smiles: string) => { parts: Map<string, number>; charge: number };
 
   beforeAll(async () => {
-    const initRDKit = require("@rdkit/rdkit");
+    const initRDKit = createRequire(import.meta.url)("@rdkit/rdkit");
     const RDKit = await initRDKit();
     const symbolOf = new Map(ELEMENTS.map((element) => [element.atomicNumber, element.symbol]));
     compositionOfSmiles = (smiles) => {

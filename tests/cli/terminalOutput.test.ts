@@ -24,6 +24,7 @@ function plantedFolder(fileName: string): string {
 }
 
 /** Characters a terminal acts on, other than the line feeds that end lines. */
+// eslint-disable-next-line no-control-regex -- matching control characters is the point
 const CONTROL = /[\u0000-\u0009\u000b-\u001f\u007f-\u009f]/;
 
 describe("check output on a terminal", () => {

@@ -25,7 +25,7 @@ export async function installedCodeServer(logFile: string): Promise<string> {
   } catch (error) {
     const failure = error as { stderr?: string; message: string };
     writeFileSync(logFile, failure.stderr ?? "");
-    throw new Error(`code-server could not be installed (log: ${logFile}): ${failure.message}`);
+    throw new Error(`code-server could not be installed (log: ${logFile}): ${failure.message}`, { cause: error });
   }
 }
 

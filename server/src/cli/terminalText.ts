@@ -8,6 +8,7 @@ import { isUtf8 } from "node:buffer";
 
 // C0 controls, DEL, C1 controls, line and paragraph separators, and the bidirectional
 // embeddings, overrides and isolates that can make a line read differently from its bytes.
+// eslint-disable-next-line no-control-regex -- matching control characters is the point
 const UNSAFE = /[\u0000-\u001f\u007f-\u009f\u2028\u2029\u202a-\u202e\u2066-\u2069]/g;
 const NAMED: Readonly<Record<string, string>> = { "\n": "\\n", "\r": "\\r", "\t": "\\t" };
 

@@ -32,7 +32,7 @@ export function analyzeDocument(
   options: AnalyzeOptions = {},
 ): DocumentModel {
   const sink: RecordSink = { occurrences: [], unreadable: [], records: [] };
-  let problems: readonly Finding[] = [];
+  let problems: readonly Finding[];
   try {
     const source = typeof text === "string" ? text : "";
     problems = readByKind(source, kind, read, sink, options);

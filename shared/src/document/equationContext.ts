@@ -10,7 +10,7 @@ import { isConfidentToken, shapeOf, type TokenShape } from "./proseTokenRules";
 const LINE_REACH = 160;
 
 /** Arrows as typed or as Unicode: ->, -->, =>, <->, <=>, →, ⟶, ⇌, ⇄, ↔, ⇒. */
-const ARROW = /(?:^|[\s\w)\]])(?:-+>|=+>|<-+>|<=+>)(?=[\s\w(\[]|$)|[\u2192\u27f6\u21cc\u21c4\u2194\u21d2\u27f7]/;
+const ARROW = /(?:^|[\s\w)\]])(?:-+>|=+>|<-+>|<=+>)(?=[\s\w([]|$)|[\u2192\u27f6\u21cc\u21c4\u2194\u21d2\u27f7]/;
 
 /** True when the line around `[start, end)` holds a reaction arrow. */
 export function isOnEquationLine(text: string, start: number, end: number): boolean {

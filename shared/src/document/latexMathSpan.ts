@@ -61,7 +61,7 @@ export function scanLatexMath(text: string, start: number, end: number, read: Sp
     // A coefficient glued to the species: "2H_2O", "2\,H_2".
     while (wordStart < wordEnd && /[0-9]/.test(text[wordStart])) wordStart++;
     if (wordStart > word.start && text.startsWith("\\,", wordStart)) wordStart += 2;
-    if (wordStart > word.start && !/[A-Z\\(\[]/.test(text[wordStart] ?? "")) continue;
+    if (wordStart > word.start && !/[A-Z\\([]/.test(text[wordStart] ?? "")) continue;
     // "\mathrm{Fe(CN)_{6}^{3-}}": the species is what the face command wraps.
     const face = /^\\(?:mathrm|text|textrm|rm|mathit|mathsf)\{/.exec(text.slice(wordStart, wordEnd));
     if (face && text.charCodeAt(wordEnd - 1) === 0x7d && balanced(text, wordStart + face[0].length, wordEnd - 1)) {

@@ -98,7 +98,7 @@ function pieceOf(text: string, start: number, end: number, inLabel: boolean): Mh
   if (inLabel) piece = piece.replace(/[,;]+$/, "");
   if (OPERATOR.test(piece) || /^\d+(?:\/\d+)?$/.test(piece)) return undefined;
   const coefficient = COEFFICIENT.exec(piece);
-  if (coefficient && /^[A-Z(\[]/.test(piece.slice(coefficient[0].length))) {
+  if (coefficient && /^[A-Z([]/.test(piece.slice(coefficient[0].length))) {
     pieceStart += coefficient[0].length;
     piece = piece.slice(coefficient[0].length);
   }
@@ -135,7 +135,7 @@ export function scanMhchemBody(text: string, start: number, end: number, read: S
     const result = read(pieceText);
     if (result.ok) sink.occurrences.push(occurrenceAt(result.value, pieceText, piece.start, "mhchem"));
     // A label may be any note ("Pt gauze"); only what is written as a species outside one is a mistake.
-    else if (!piece.inLabel && /^[A-Z(\[]/.test(pieceText) && result.problem.code !== "unknown-name") {
+    else if (!piece.inLabel && /^[A-Z([]/.test(pieceText) && result.problem.code !== "unknown-name") {
       sink.unreadable.push(unreadableAt(pieceText, piece.start, result));
     }
   }

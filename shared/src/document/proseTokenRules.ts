@@ -48,14 +48,14 @@ export interface TokenShape {
 }
 
 const SYMBOL_PATTERN = /[A-Z][a-z]?/g;
-const BODY_PART = /[A-Z][a-z]?|[0-9\u2080-\u2089]+|[()\[\]\u00b7]/g;
+const BODY_PART = /[A-Z][a-z]?|[0-9\u2080-\u2089]+|[()[\]\u00b7]/g;
 // A count written as 1 or with a leading zero, or one past 99: codes, not formulas.
 const IMPLAUSIBLE_COUNT = /(?:^|[^0-9\u2080-\u2089])(?:[1\u2081](?![0-9\u2080-\u2089])|[0\u2080]|[0-9\u2080-\u2089]{3,})/;
 
 /** The token's shape, or undefined when it is not built from symbol-like parts at all. */
 export function shapeOf(body: string, charge: string): TokenShape | undefined {
   // Every character must belong to a symbol, a count, a bracket or a hydrate dot: "The" is Th + e.
-  if (!/^[(\[]*[A-Z]/.test(body) || body.replace(BODY_PART, "") !== "") return undefined;
+  if (!/^[([]*[A-Z]/.test(body) || body.replace(BODY_PART, "") !== "") return undefined;
   const symbols = body.match(SYMBOL_PATTERN) ?? [];
   const hasCount = /[0-9\u2080-\u2089]/.test(body);
   return { symbols, hasCount, hasCharge: charge.length > 0 };
@@ -64,7 +64,7 @@ export function shapeOf(body: string, charge: string): TokenShape | undefined {
 /** Whether a prose token of this shape is confidently a species (the reader still has to agree). */
 export function isConfidentToken(token: string, body: string, shape: TokenShape): boolean {
   if (NOT_SPECIES.has(body)) return false;
-  if (shape.hasCount && IMPLAUSIBLE_COUNT.test(body.replace(/^[(\[]+/, ""))) return false;
+  if (shape.hasCount && IMPLAUSIBLE_COUNT.test(body.replace(/^[([]+/, ""))) return false;
   const distinct = new Set(shape.symbols).size;
   if (shape.hasCharge) {
     if (distinct > 1 || shape.hasCount) return true;

@@ -158,7 +158,7 @@ function unmarkedSmiles(scan: ProseScan, start: number, end: number): SpeciesOcc
   const { text } = scan;
   if (end - start < 3 || end - start > 200) return undefined;
   const content = text.slice(start, end);
-  if (/^[A-Za-z]+$/.test(content) || !/^[A-Za-z0-9@+\-\[\]()=#$/\\%.:*]+$/.test(content)) return undefined;
+  if (/^[A-Za-z]+$/.test(content) || !/^[A-Za-z0-9@+\-[\]()=#$/\\%.:*]+$/.test(content)) return undefined;
   // Notes repeat their code spans; each distinct one is parsed once per scan, at offset 0.
   let template = scan.smilesMemo.get(content);
   if (template === undefined) {
@@ -195,7 +195,7 @@ function mathSpan(scan: ProseScan, math: MathSpan): number {
   return math.end;
 }
 
-const URL_OR_MAIL = /:\/\/|^[<(\["']*www\.|[A-Za-z0-9._%+-]@[A-Za-z0-9-]+\.[A-Za-z]/;
+const URL_OR_MAIL = /:\/\/|^[<(["']*www\.|[A-Za-z0-9._%+-]@[A-Za-z0-9-]+\.[A-Za-z]/;
 
 /** One whitespace-free chunk of prose. */
 function scanChunk(scan: ProseScan, start: number, end: number): void {

@@ -168,6 +168,7 @@ function row(style: CardStyle, label: string, value: string, extraIndent = ""): 
 }
 
 // Escape codes take no room on screen, so they must not count towards the width.
+// eslint-disable-next-line no-control-regex -- matching terminal escape codes is the point
 const ESCAPE_CODES = /\u001b\[[0-9;]*m/g;
 
 function wrapWords(text: string, width: number): string[] {

@@ -226,7 +226,7 @@ function sniffWindowEnd(text: string): number {
   let start = text.charCodeAt(0) === 0xfeff ? 1 : 0;
   let counted = 0;
   while (start < limit) {
-    let end = text.indexOf("\n", start);
+    const end = text.indexOf("\n", start);
     if (end < 0 || end >= limit) return limit;
     if (text.slice(start, end).replace(/\r$/, "").trim().length > 0) counted++;
     start = end + 1;

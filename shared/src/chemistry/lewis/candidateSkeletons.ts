@@ -64,7 +64,7 @@ export function candidateSkeletons(symbols: readonly string[]): CandidateSkeleto
       candidates.push({ symbols, bonds, centre });
     }
   }
-  const pair = pairSkeleton(symbols, heavy);
+  const pair = pairSkeleton(symbols);
   if (pair) candidates.push(pair);
   return candidates;
 }
@@ -73,7 +73,7 @@ export function candidateSkeletons(symbols: readonly string[]): CandidateSkeleto
  * X-A-A-X (S2Cl2, N2F2, O2F2): two atoms of one element bonded to each other, the other atoms,
  * all of them one-bond atoms (H, halogens), shared out evenly between the two.
  */
-function pairSkeleton(symbols: readonly string[], heavy: readonly number[]): CandidateSkeleton | undefined {
+function pairSkeleton(symbols: readonly string[]): CandidateSkeleton | undefined {
   const pair: number[] = [];
   const ends: number[] = [];
   for (let index = 0; index < symbols.length; index++) {

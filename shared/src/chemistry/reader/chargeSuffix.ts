@@ -143,7 +143,7 @@ function signFirstCharge(text: string, start: number, end: number): ChargeSuffix
 function signEndedCharge(text: string, start: number, end: number): ChargeSuffixResult {
   let signStart = end - 1;
   while (signStart - 1 >= start && signValue(text.charCodeAt(signStart - 1)) !== 0) signStart--;
-  let before = signStart - 1;
+  const before = signStart - 1;
   if (before < start) return malformed("A charge needs a species before it.", start, end);
   const code = text.charCodeAt(before);
 

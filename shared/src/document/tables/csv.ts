@@ -143,7 +143,7 @@ function quotedField(text: string, open: number, separator: number, problems: Fi
       continue;
     }
     const value = pieces ? pieces.join("") + text.slice(pieceStart, close) : text.slice(start, close);
-    let next = close + 1;
+    const next = close + 1;
     const after = text.charCodeAt(next);
     if (next < length && after !== separator && after !== LF && after !== CR) {
       // Text after the closing quote: keep it in the value so nothing is lost, and say so.
