@@ -133,6 +133,14 @@ describe("data columns", () => {
       "csv",
     ],
     ["| Compound | Formula |\n|---|---|\n| ⟦water⟧ | ⟦H2O⟧ |\n| tap rinse | — |\n", "markdown"],
+    // common practice: inventories write the grade, form or a synonym after the name
+    [
+      "Chemical name,Formula\n⟦Hydrochloric acid⟧ 2 M,⟦HCl⟧\n⟦Zinc⟧ granules,⟦Zn⟧\n⟦Calcium carbonate⟧ (marble chips),⟦CaCO3⟧\n⟦Propanone⟧ (⟦acetone⟧),⟦CH3COCH3⟧\n",
+      "csv",
+    ],
+    ["Chemical name\tCAS\n⟦Sodium hydroxide⟧ pellets\t1310-73-2\n⟦Ammonia⟧ solution 0.880\t1336-21-6\n", "tsv"],
+    // common practice: "basic" after a salt's name is the basic salt; "cresol red" is a dye, not cresol
+    ["Chemical name,Formula\nCopper(II) carbonate basic,⟦CuCO3.Cu(OH)2⟧\n⟦Methyl orange⟧ solution,—\nCresol red,—\n", "csv"],
   ])("%j", (marked, kind) => {
     check(marked, kind as DocumentKind);
   });

@@ -110,6 +110,10 @@ function scanNameAt(
     // "the nitrate ion": the ion is the word before "ion"
     if (isIonWord(last.lower)) continue;
     if (isKnownName(phrase)) {
+      if (makesAnotherSubstance(wordAfter(text, last.end, limit))) {
+        state.nameEnd = last.end;
+        return;
+      }
       report(text, first.start, last.end, text.slice(first.start, last.end), read, sink, state, false);
       return;
     }
@@ -117,6 +121,10 @@ function scanNameAt(
   const kind = loneNameKind(first.lower);
   if (kind === undefined) return;
   const following = words.length > 1 && first.open ? words[1].lower : wordAfter(text, end, limit);
+  if (makesAnotherSubstance(following)) {
+    state.nameEnd = first.end;
+    return;
+  }
   const before = wordBefore(text, first.start);
   if (kind === "element") {
     if (!isSubstanceContext(text, first, before, following, state)) return;
@@ -126,6 +134,15 @@ function scanNameAt(
     if (!ion && isIonName(first.lower) && isPartOfLongerName(first.lower, before, following)) return;
   }
   report(text, first.start, first.end, exact, read, sink, state, kind === "element");
+}
+
+// common practice: catalogues name basic salts by adding "basic" after the salt ("copper(II)
+// carbonate basic"), and dyes and indicators are a compound's name and a colour ("phenol red",
+// "cresol purple"): other substances than the name alone
+const ANOTHER_SUBSTANCE_AFTER: ReadonlySet<string> = new Set(["basic", "red", "blue", "green", "orange", "violet", "purple", "yellow"]);
+
+function makesAnotherSubstance(following: string | undefined): boolean {
+  return following !== undefined && ANOTHER_SUBSTANCE_AFTER.has(following);
 }
 
 // common practice: words around an ion name that make it a material or a family, not the ion

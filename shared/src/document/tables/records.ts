@@ -3,8 +3,9 @@
  * species (a formula, or failing that a name) and which cells the checks can compare.
  */
 import type { TextRange } from "../../chemistry/types";
+import { scanProse } from "../scanProse";
 import { isOccurrence, smilesAt } from "../smilesSpan";
-import { occurrenceAt, unreadableAt, type ScanSink, type SpeciesReader } from "../speciesReader";
+import { emptySink, occurrenceAt, unreadableAt, type ScanSink, type SpeciesReader } from "../speciesReader";
 import { namesSpecies } from "./headers";
 import type { ColumnMeaning, SpeciesOccurrence, TableCell, TableRecord, UnreadableSpecies } from "../types";
 
@@ -82,7 +83,12 @@ export function addRecord(fields: readonly RecordField[], read: SpeciesReader, s
       continue;
     }
     const result = read(field.text);
-    if (result.ok) found.push(occurrenceAt(result.value, field.text, field.range.start));
+    if (result.ok) {
+      found.push(occurrenceAt(result.value, field.text, field.range.start));
+      continue;
+    }
+    const named = field.meaning === "name" ? namesOpeningCell(field, read) : undefined;
+    if (named) for (const occurrence of named) found.push(occurrence);
     else if (field.meaning === "species") (failed ??= []).push(unreadableAt(field.text, field.range.start, result));
   }
   for (const occurrence of found) sink.occurrences.push(occurrence);
@@ -95,6 +101,21 @@ export function addRecord(fields: readonly RecordField[], read: SpeciesReader, s
   }
   if (found.length === 0) return;
   sink.records.push(found.length === 1 ? { species: found[0], cells } : { species: found[0], cells, otherNames: found.slice(1) });
+}
+
+/**
+ * The species a name cell opens with when the whole cell is more than a name, then any synonym
+ * after it: inventories write the grade or form after the name ("Hydrochloric acid 2 M", "Zinc
+ * granules") and other names in brackets ("Propanone (acetone)"). Read as prose, so the words after
+ * the name are judged as prose judges them. Undefined unless the cell starts with a species.
+ */
+function namesOpeningCell(field: RecordField, read: SpeciesReader): readonly SpeciesOccurrence[] | undefined {
+  // Escapes make the written range longer than the value: offsets in the value would not map.
+  if (field.range.end - field.range.start !== field.text.length) return undefined;
+  const found = emptySink();
+  scanProse(field.text, 0, field.text.length, found, read);
+  if (found.occurrences[0]?.range.start !== 0) return undefined;
+  return found.occurrences.map((occurrence) => moved(occurrence, field.range.start));
 }
 
 /**
@@ -125,7 +146,7 @@ function isPlaceholder(text: string): boolean {
   return text.length <= 5 && PLACEHOLDER.test(text);
 }
 
-/** A SMILES occurrence read from a cell's own text, moved to the cell's place in the document. */
+/** An occurrence read from a cell's own text, moved to the cell's place in the document. */
 function moved(occurrence: SpeciesOccurrence, start: number): SpeciesOccurrence {
   const range = { start: occurrence.range.start + start, end: occurrence.range.end + start };
   return { ...occurrence, range, reading: { ...occurrence.reading, range } };
