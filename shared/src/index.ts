@@ -10,6 +10,8 @@ export { analyzeSpecies, analyzeReading, analyzeSmiles, analyzeTyped, SMILES_MAR
 export { parseSmiles, kekulize, writeSmiles, smilesFormula, smilesNetCharge } from "./chemistry/smiles";
 export type { SmilesAtom, SmilesBond, SmilesMolecule, SmilesResult } from "./chemistry/smiles";
 export { findPointGroup } from "./chemistry/symmetry/pointGroup";
+export { characterTable, reduceRepresentation } from "./chemistry/vibrations/characterTables";
+export type { CharacterTable, IrreducibleRepresentation, SymmetryClass } from "./chemistry/vibrations/characterTables";
 export { idealDirections, siteKind, lonePairSiteOrder } from "./chemistry/geometry/idealDirections";
 export type { Vec3 } from "./chemistry/geometry/vectors";
 export { shapeOf, pointGroupAllowsDipole } from "./chemistry/analysis/shape3d";
