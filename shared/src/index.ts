@@ -12,6 +12,9 @@ export type { SmilesAtom, SmilesBond, SmilesMolecule, SmilesResult } from "./che
 export { findPointGroup } from "./chemistry/symmetry/pointGroup";
 export { characterTable, reduceRepresentation } from "./chemistry/vibrations/characterTables";
 export type { CharacterTable, IrreducibleRepresentation, SymmetryClass } from "./chemistry/vibrations/characterTables";
+export { vibrationalModes } from "./chemistry/vibrations/normalModes";
+export type { ModeSymmetry, VibrationalModes, VibrationalModesOptions, VibrationalModesResult } from "./chemistry/vibrations/normalModes";
+export { vibrationsOf } from "./chemistry/vibrations/speciesVibrations";
 export { idealDirections, siteKind, lonePairSiteOrder } from "./chemistry/geometry/idealDirections";
 export type { Vec3 } from "./chemistry/geometry/vectors";
 export { shapeOf, pointGroupAllowsDipole } from "./chemistry/analysis/shape3d";
