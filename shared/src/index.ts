@@ -54,6 +54,8 @@ export { toAnalysisJson } from "./report/analysisJson";
 export { HOVER_CAUTION, hoverMarkdown, problemMarkdown, resultMarkdown } from "./report/hoverMarkdown";
 export type { HoverFormat, HoverMarkdownOptions } from "./report/hoverMarkdown";
 export { shapeViewModel } from "./report/shapeViewModel";
+export { DIAGRAM_THEMES, MAX_DIAGRAM_ATOMS, chargeLabel, lewisDiagram } from "./report/lewisDiagram";
+export type { DiagramTheme, LewisDiagram, LewisDiagramOptions, LewisDiagramResult } from "./report/lewisDiagram";
 export type { ShapeViewModel } from "./report/shapeViewModel";
 export { coordinateFileOf, missingModelReason, shapeViewModelOf } from "./report/speciesModel";
 export { geometryHints, geometryLabel, isProseKind } from "./report/geometryHints";

@@ -12,7 +12,15 @@ const NONE = 0;
 const REQUIRED = 1;
 const OPTIONAL = 2;
 
-export function countEquivalentStructures(atoms: readonly GraphAtom[], bonds: readonly GraphBond[]): number {
+/**
+ * `found`, when given, hears each structure as it is counted: the order of every bond in it,
+ * parallel to `bonds`.
+ */
+export function countEquivalentStructures(
+  atoms: readonly GraphAtom[],
+  bonds: readonly GraphBond[],
+  found?: (orders: readonly number[]) => void,
+): number {
   const atomCount = atoms.length;
   let written = 0;
   for (let k = 0; k < bonds.length; k++) {
@@ -76,11 +84,31 @@ export function countEquivalentStructures(atoms: readonly GraphAtom[], bonds: re
   let count = 0;
   let steps = 0;
   /** Starts the search from `position`: counts a finished structure or opens a frame. */
+  /** Bond orders of the current matching: double between paired atoms, single elsewhere among traders. */
+  const ordersOfMatching = (): number[] => {
+    const partner = new Int32Array(atomCount).fill(-1);
+    for (let frame = 0; frame < frameAtom.length; frame++) {
+      partner[frameAtom[frame]] = frameChosen[frame];
+      partner[frameChosen[frame]] = frameAtom[frame];
+    }
+    return bonds.map((bond) => {
+      const trades =
+        bond.order <= 2 &&
+        role[bond.from] !== NONE &&
+        role[bond.to] !== NONE &&
+        !(role[bond.from] === OPTIONAL && role[bond.to] === OPTIONAL);
+      if (!trades) return bond.order;
+      return partner[bond.from] === bond.to ? 2 : 1;
+    });
+  };
   const enter = (position: number, optionalUsed: number): void => {
     if (count >= MAX_COUNT || ++steps > MAX_STEPS) return;
     while (position < required.length && matched[required[position]]) position++;
     if (position === required.length) {
-      if (optionalUsed === optionalWritten) count++;
+      if (optionalUsed === optionalWritten) {
+        count++;
+        if (found) found(ordersOfMatching());
+      }
       return;
     }
     const atom = required[position];

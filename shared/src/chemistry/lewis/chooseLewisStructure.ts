@@ -72,6 +72,19 @@ export function countValenceElectrons(symbols: readonly string[], charge: number
 export interface LewisSearch {
   /** The best Lewis structure of `skeleton` with net `charge`, or why there is none. */
   choose(skeleton: Skeleton, charge: number): LewisOutcome;
+  /**
+   * Every structure of `skeleton` that ties with the best on every check (its equivalent
+   * resonance forms), in the order the search meets them, at most `limit`; empty when there is
+   * no structure.
+   */
+  tiedStructures(skeleton: Skeleton, charge: number, limit: number): readonly MolecularGraph[];
+}
+
+/** One tying leaf of the search, copied out of the scratch arrays. */
+interface TiedLeaf {
+  readonly orders: Int32Array;
+  readonly lonePairs: Int32Array;
+  readonly unpairedAtom: number;
 }
 
 /**
@@ -148,6 +161,9 @@ export function createLewisSearch(): LewisSearch {
   let bestSpread = 0;
   let bestUnpaired = -1;
   let resonanceForms = 0;
+  // Set only while tiedStructures runs: the ordinary search copies nothing.
+  let tiedLeaves: TiedLeaf[] | undefined;
+  let tiedLimit = 0;
 
   function runSearch(skeleton: Skeleton, charge: number): LewisOutcome {
     const symbols = skeleton.symbols;
@@ -227,29 +243,7 @@ export function createLewisSearch(): LewisSearch {
       return { ok: false, failure: "shell-overflow", atom: crowded };
     }
 
-    const orderSums = new Array<number>(atomCount);
-    for (let atom = 0; atom < atomCount; atom++) orderSums[atom] = degree[atom];
-    const graphBonds: GraphBond[] = new Array(bondCount);
-    for (let bond = 0; bond < bondCount; bond++) {
-      const from = bondFrom[bond];
-      const to = bondTo[bond];
-      const order = bestOrders[bond];
-      orderSums[from] += order - 1;
-      orderSums[to] += order - 1;
-      graphBonds[bond] = { from, to, order };
-    }
-    const atoms: GraphAtom[] = new Array(atomCount);
-    for (let atom = 0; atom < atomCount; atom++) {
-      const unpaired = atom === bestUnpaired ? 1 : 0;
-      atoms[atom] = sharedAtom(
-        traits[atom].element.atomicNumber,
-        symbols[atom],
-        bestLonePairs[atom],
-        unpaired,
-        valenceOf[atom] - 2 * bestLonePairs[atom] - unpaired - orderSums[atom],
-        false,
-      );
-    }
+    const graph = graphOf(symbols, traits, bestOrders, bestLonePairs, bestUnpaired);
     const score: LewisScore = {
       shellDeficit: bestShellDeficit,
       sumAbsFormalCharge: bestSumAbs,
@@ -260,12 +254,46 @@ export function createLewisSearch(): LewisSearch {
     return {
       ok: true,
       structure: {
-        graph: { atoms, bonds: graphBonds },
+        graph,
         score,
         resonanceForms,
         valenceElectrons: electrons,
       },
     };
+  }
+
+  /** The graph of one leaf: bond orders, lone pairs and the odd electron's atom (-1 for none). */
+  function graphOf(
+    symbols: readonly string[],
+    traits: readonly AtomTraits[],
+    orders: Int32Array,
+    pairs: Int32Array,
+    unpairedAtom: number,
+  ): MolecularGraph {
+    const orderSums = new Array<number>(atomCount);
+    for (let atom = 0; atom < atomCount; atom++) orderSums[atom] = degree[atom];
+    const graphBonds: GraphBond[] = new Array(bondCount);
+    for (let bond = 0; bond < bondCount; bond++) {
+      const from = bondFrom[bond];
+      const to = bondTo[bond];
+      const order = orders[bond];
+      orderSums[from] += order - 1;
+      orderSums[to] += order - 1;
+      graphBonds[bond] = { from, to, order };
+    }
+    const atoms: GraphAtom[] = new Array(atomCount);
+    for (let atom = 0; atom < atomCount; atom++) {
+      const unpaired = atom === unpairedAtom ? 1 : 0;
+      atoms[atom] = sharedAtom(
+        traits[atom].element.atomicNumber,
+        symbols[atom],
+        pairs[atom],
+        unpaired,
+        valenceOf[atom] - 2 * pairs[atom] - unpaired - orderSums[atom],
+        false,
+      );
+    }
+    return { atoms, bonds: graphBonds };
   }
 
   function blocksMultipleBond(traits: readonly AtomTraits[], atom: number): boolean {
@@ -407,6 +435,12 @@ export function createLewisSearch(): LewisSearch {
         chargeTimesElectronegativity - bestWeighted;
     }
     if (comparison > 0) return;
+    if (tiedLeaves !== undefined) {
+      if (comparison < 0) tiedLeaves.length = 0;
+      if (tiedLeaves.length < tiedLimit) {
+        tiedLeaves.push({ orders: bondOrders.slice(0, bondCount), lonePairs: lonePairs.slice(0, atomCount), unpairedAtom });
+      }
+    }
     let spread = 0;
     for (let bond = 0; bond < bondCount; bond++) spread += bondOrders[bond] * bondOrders[bond];
     if (comparison === 0) {
@@ -440,6 +474,22 @@ export function createLewisSearch(): LewisSearch {
         running = false;
       }
     },
+    tiedStructures(skeleton, charge, limit) {
+      if (running) return createLewisSearch().tiedStructures(skeleton, charge, limit);
+      running = true;
+      const leaves: TiedLeaf[] = [];
+      tiedLeaves = leaves;
+      tiedLimit = Math.max(0, limit);
+      try {
+        const outcome = runSearch(skeleton, charge);
+        if (!outcome.ok) return [];
+        const traits = skeleton.symbols.map((symbol) => atomTraits(symbol));
+        return leaves.map((leaf) => graphOf(skeleton.symbols, traits, leaf.orders, leaf.lonePairs, leaf.unpairedAtom));
+      } finally {
+        tiedLeaves = undefined;
+        running = false;
+      }
+    },
   };
   return lewisSearch;
 }
@@ -449,6 +499,11 @@ export function createLewisSearch(): LewisSearch {
  * (a few typed arrays of that many atoms and bonds).
  */
 const processSearch = createLewisSearch();
+
+/** Equivalent resonance forms of `skeleton` with net `charge` (see {@link LewisSearch.tiedStructures}). */
+export function tiedLewisStructures(skeleton: Skeleton, charge: number, limit: number): readonly MolecularGraph[] {
+  return processSearch.tiedStructures(skeleton, charge, limit);
+}
 
 /** The best Lewis structure of `skeleton` with net `charge`, or why there is none. */
 export function chooseLewisStructure(skeleton: Skeleton, charge: number): LewisOutcome {
