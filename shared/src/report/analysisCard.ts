@@ -7,6 +7,8 @@ import type { AngleExpectation, AnalysisResult, CentreAnalysis, MeasuredAngle, S
 import { lewisJson } from "./analysisJson";
 import { compositeKind, distinctAnalysedParts, innerParts, partLabel } from "./compositeParts";
 import { isotopeNote, stateNote } from "./notationNotes";
+import { vibrationsOf } from "../chemistry/vibrations/speciesVibrations";
+import { bandsLine, coincidenceLine, countedInNote, modesLine, notPredictedLine, stretchingLine } from "./vibrationText";
 
 /** Wrappers for the parts of a card a caller may want to highlight. Identity by default. */
 export interface CardStyle {
@@ -99,6 +101,7 @@ function successLines(input: string, analysis: SpeciesAnalysis, style: CardStyle
   if (pointGroup) lines.push(row(style, "Point group", pointGroup));
   const verdict = analysis.polarity.undetermined ? "not judged" : analysis.polarity.polar ? "polar" : "nonpolar";
   lines.push(row(style, "Polarity", `${verdict} - ${analysis.polarity.reason}`));
+  lines.push(...vibrationLines(analysis, style));
   if (analysis.warnings.length === 0) {
     lines.push(row(style, "Warnings", "none"));
   } else {
@@ -109,6 +112,20 @@ function successLines(input: string, analysis: SpeciesAnalysis, style: CardStyle
     lines.push(INDENT + style.muted(line));
   }
   return lines;
+}
+
+/** The normal modes by symmetry, or why they are not predicted. */
+function vibrationLines(analysis: SpeciesAnalysis, style: CardStyle): string[] {
+  const result = vibrationsOf(analysis);
+  if (!result.ok) return [row(style, "Vibrations", style.muted(notPredictedLine(result)))];
+  const value = result.value;
+  const note = countedInNote(value);
+  return [
+    row(style, "Vibrations", modesLine(value) + (note ? ` ${style.muted(`(${note})`)}` : "")),
+    row(style, "", bandsLine(value)),
+    row(style, "", coincidenceLine(value)),
+    row(style, "Stretching modes", stretchingLine(value)),
+  ];
 }
 
 function lewisLines(analysis: SpeciesAnalysis, style: CardStyle): string[] {

@@ -14,6 +14,8 @@ import type {
   SpeciesPart,
 } from "../chemistry/types";
 import { partShapeText } from "../chemistry/analysis/partShapes";
+import { vibrationsOf } from "../chemistry/vibrations/speciesVibrations";
+import type { ModeSymmetry, VibrationalModes } from "../chemistry/vibrations/normalModes";
 
 /** One centre in the JSON output. */
 export interface CentreJson {
@@ -74,6 +76,38 @@ export interface AnalysisJsonSuccess {
   readonly state?: string;
   /** Isotope labels as written, when there were any. */
   readonly isotopes?: readonly { readonly written: string; readonly symbol: string; readonly massNumber: number }[];
+  /** The normal modes by symmetry; null when they are not predicted (`vibrationsNote` says why). */
+  readonly vibrations: VibrationsJson | null;
+  readonly vibrationsNote?: string;
+}
+
+/** How many fundamentals of one symmetry, and where they show. */
+export interface VibrationModeJson {
+  readonly symmetry: string;
+  readonly count: number;
+  readonly ir: boolean;
+  readonly raman: boolean;
+}
+
+/** The vibrational analysis; the leading fields are fixed, extras follow them. */
+export interface VibrationsJson {
+  readonly pointGroup: string;
+  /** 3N − 6 (3N − 5 if linear), degenerate modes counted with their degeneracy. */
+  readonly modes: number;
+  readonly representation: readonly VibrationModeJson[];
+  /** Each occurrence of an IR-active symmetry is one band. */
+  readonly irBands: number;
+  readonly ramanBands: number;
+  /** Occurrences of symmetries active in neither spectrum. */
+  readonly silent: number;
+  /** The stretching modes alone (bond vectors). */
+  readonly stretching: readonly VibrationModeJson[];
+  // extras after the fixed fields
+  readonly centrosymmetric: boolean;
+  /** Bands expected in both spectra; 0 for a centrosymmetric species. */
+  readonly coincidences: number;
+  /** For a linear molecule, the finite group the counting was done in. */
+  readonly countedIn?: string;
 }
 
 /** A species that could not be read or analysed. */
@@ -151,6 +185,32 @@ function successJson(input: string, analysis: SpeciesAnalysis): AnalysisJsonSucc
     measuredAngles: analysis.measuredAngles.map((angle) => ({ ...angle })),
     ...(reading.state ? { state: reading.state } : {}),
     ...(reading.isotopes ? { isotopes: reading.isotopes.map((label) => ({ ...label })) } : {}),
+    ...vibrationsFields(analysis),
+  };
+}
+
+function vibrationsFields(analysis: SpeciesAnalysis): { vibrations: VibrationsJson | null; vibrationsNote?: string } {
+  const result = vibrationsOf(analysis);
+  return result.ok ? { vibrations: vibrationsJson(result.value) } : { vibrations: null, vibrationsNote: result.reason };
+}
+
+function modeJson(mode: ModeSymmetry): VibrationModeJson {
+  return { symmetry: mode.symmetry, count: mode.count, ir: mode.ir, raman: mode.raman };
+}
+
+/** The vibrations object of `analyze --json`, with its fixed field order. */
+export function vibrationsJson(value: VibrationalModes): VibrationsJson {
+  return {
+    pointGroup: value.pointGroup,
+    modes: value.modes,
+    representation: value.representation.map(modeJson),
+    irBands: value.irBands,
+    ramanBands: value.ramanBands,
+    silent: value.silent,
+    stretching: value.stretching.map(modeJson),
+    centrosymmetric: value.centrosymmetric,
+    coincidences: value.coincidences,
+    ...(value.countedIn ? { countedIn: value.countedIn } : {}),
   };
 }
 

@@ -16,6 +16,8 @@ import { isotopeNote, stateNote } from "./notationNotes";
 import { shapeSketchSvg, svgDataUri } from "./shapeSketch";
 import { compositeKind, distinctAnalysedParts, innerParts, roleWords } from "./compositeParts";
 import { partShapeText } from "../chemistry/analysis/partShapes";
+import { vibrationsOf } from "../chemistry/vibrations/speciesVibrations";
+import { bandsLine, coincidenceLine, countedInNote, modesLine, notPredictedLine, stretchingLine } from "./vibrationText";
 
 /** The caution every editor-facing result carries (hover cards and summary tables). */
 export const HOVER_CAUTION = "Model prediction, not measured data: follow the safety data sheet, local rules and licensed practice.";
@@ -100,6 +102,7 @@ export function hoverMarkdown(analysis: SpeciesAnalysis, options: HoverMarkdownO
   }
   if (blocks.length !== 1 && measured.length > 0) lines.push(markup.strong("Measured angles"), ...measured, "");
   lines.push(polarityLine(analysis, markup), "");
+  lines.push(...vibrationBlock(analysis, markup), "");
   for (const warning of analysis.warnings.slice(0, MAX_LISTED)) lines.push(`- ⚠ ${markup.text(warning)}`);
   if (analysis.warnings.length > 0) lines.push("");
   const body = lines.join("\n");
@@ -295,6 +298,21 @@ function measuredLines(measured: readonly MeasuredAngle[], decimals: number, mar
 function polarityLine(analysis: SpeciesAnalysis, markup: Markup): string {
   const verdict = analysis.polarity.undetermined ? "not judged" : analysis.polarity.polar ? "polar" : "nonpolar";
   return `Polarity: ${markup.strong(verdict)} (${markup.text(analysis.polarity.reason)})`;
+}
+
+/** The "Vibrations" section: modes by symmetry, IR and Raman band counts, stretching modes. */
+function vibrationBlock(analysis: SpeciesAnalysis, markup: Markup): string[] {
+  const result = vibrationsOf(analysis);
+  const heading = markup.strong("Vibrations");
+  if (!result.ok) return [`${heading}: ${markup.text(notPredictedLine(result))}`];
+  const value = result.value;
+  const note = countedInNote(value);
+  return [
+    `${heading} · ${markup.text(modesLine(value))}${note ? ` (${markup.text(note)})` : ""}`,
+    `- ${markup.text(bandsLine(value))}`,
+    `- ${markup.text(coincidenceLine(value))}`,
+    `- Stretching: ${markup.text(stretchingLine(value))}`,
+  ];
 }
 
 /** Text from the document or the core goes into markdown; keep it from turning into markup. */
