@@ -304,7 +304,7 @@ describe("Lewis diagram: equivalent structures one by one", () => {
   it("refuses a structure number beyond the last, saying which exist", () => {
     const result = lewisDiagram(analysed("NO3-"), { form: 4 });
     expect(result.ok).toBe(false);
-    if (!result.ok) expect(result.message).toContain("1 to 3");
+    if (!result.ok) expect(result.message).toContain("choose 1 to 3");
   });
 });
 

@@ -6,6 +6,7 @@
  * ones. Pure: no scripts, no fonts or images fetched; every text drawn comes from the core.
  */
 import type { MolecularGraph, SpeciesAnalysis } from "../chemistry/types";
+import { MODEL_CAUTION } from "./analysisCard";
 import { centreLayout } from "./lewis/centreLayout";
 import { clearestDirection, normalised, spreadInGaps } from "./lewis/directions";
 import { equivalentForms } from "./lewis/equivalentForms";
@@ -84,8 +85,8 @@ export function lewisDiagram(analysis: SpeciesAnalysis, options: LewisDiagramOpt
   const forms = equivalentForms(analysis);
   const form = options.form ?? 1;
   if (!Number.isInteger(form) || form < 1 || form > forms.length) {
-    const range = forms.length === 1 ? "only structure 1" : `structures 1 to ${forms.length}`;
-    return { ok: false, message: `${analysis.reading.formula} has no structure ${form}: there is ${range} to draw.` };
+    const choice = forms.length === 1 ? "it has one structure to draw" : `choose 1 to ${forms.length}`;
+    return { ok: false, message: `${analysis.reading.formula} has no structure ${form}; ${choice}.` };
   }
   const graph = forms[form - 1];
   const layout = layoutOf(analysis, graph);
@@ -281,6 +282,7 @@ function draw(
   const svg = [
     `<svg xmlns="http://www.w3.org/2000/svg" width="${width}" height="${height}" viewBox="${round(left)} ${round(top)} ${width} ${height}" role="img" aria-label="${escapeXml(altText)}">`,
     `<title>${escapeXml(altText)}</title>`,
+    `<desc>${escapeXml(MODEL_CAUTION)}</desc>`,
     plate,
     `<g stroke="${ink}" stroke-width="1.6" stroke-linecap="round" fill="none">`,
     ...body.filter((item) => item.startsWith("<line")),

@@ -6,10 +6,11 @@ import type { CliCommand } from "../cliCommand";
 import { analyzeCommand } from "./analyze";
 import { checkCommand } from "./check";
 import { coordsCommand } from "./coords";
+import { drawCommand } from "./draw";
 import { listCommand } from "./list";
 import { tableCommand } from "./table";
 
-export const COMMANDS: readonly CliCommand[] = [analyzeCommand, checkCommand, listCommand, tableCommand, coordsCommand];
+export const COMMANDS: readonly CliCommand[] = [analyzeCommand, checkCommand, listCommand, tableCommand, coordsCommand, drawCommand];
 
 /** The command with this name, if there is one. */
 export function findCommand(name: string): CliCommand | undefined {
