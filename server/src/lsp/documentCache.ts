@@ -5,8 +5,15 @@
  * never trusted to tell texts apart. Findings are worked out lazily, once per revision.
  */
 import type { TextDocument } from "vscode-languageserver-textdocument";
-import { analysedTextOf, checkDelimitedText, delimitedRowMemo, type DelimitedRowMemo } from "../../../shared/src/index";
-import { analyzeDocument, checkDocument, documentKindFor, type DocumentKind, type DocumentModel, type Finding } from "./core";
+import {
+  chunkedTextOf,
+  createDocumentAnalyser,
+  type DocumentAnalyser,
+  type DocumentAnalysis,
+  type SpeciesAtOffset,
+} from "../../../shared/src/index";
+import { isChunkedDocument } from "./chunkedDocument";
+import { documentKindFor, type DocumentKind, type DocumentModel, type Finding } from "./core";
 
 /** One analysed version of a document. */
 export interface AnalysedDocument {
@@ -15,7 +22,12 @@ export interface AnalysedDocument {
   /** The text's revision (see `DocumentCache.revisionOf`). */
   readonly revision: number;
   readonly kind: DocumentKind;
+  /** The whole document's model: for a large table this reads every row, so prefer the two below. */
   readonly model: DocumentModel;
+  /** The model of the stretch from `start` to `end` (at least), for requests about a range. */
+  modelAround(start: number, end: number): DocumentModel;
+  /** The species at `offset`, read from the part of the document around it. */
+  speciesAt(offset: number): SpeciesAtOffset | undefined;
   /** Set when only a prefix was analysed. */
   readonly truncatedAt?: number;
   readonly binary: boolean;
@@ -39,8 +51,6 @@ export interface DocumentCache {
   delete(uri: string): void;
 }
 
-const EMPTY_MODEL = (kind: DocumentKind): DocumentModel => ({ kind, occurrences: [], records: [], problems: [] });
-
 /** Enough of the start of a document to tell a table saved as .txt from prose. */
 export const SNIFF_LENGTH = 4096;
 
@@ -48,9 +58,8 @@ export const SNIFF_LENGTH = 4096;
 export function createDocumentCache(capacity = 32): DocumentCache {
   const entries = new Map<string, AnalysedDocument>();
   const revisions = new Map<string, number>();
-  // One memo of table rows per open table, kept from edit to edit: an edit re-checks only the
-  // rows whose cells it changed, as the command line does for rows that repeat.
-  const rowMemos = new Map<string, DelimitedRowMemo>();
+  // One analyser per open document, kept from edit to edit: it re-reads only what an edit changed.
+  const analysers = new Map<string, { readonly kind: DocumentKind; readonly analyser: DocumentAnalyser }>();
   let lastRevision = 0;
   const revisionOf = (uri: string): number => {
     let revision = revisions.get(uri);
@@ -60,6 +69,13 @@ export function createDocumentCache(capacity = 32): DocumentCache {
       revisions.set(uri, revision);
     }
     return revision;
+  };
+  const analyserFor = (uri: string, kind: DocumentKind): DocumentAnalyser => {
+    const known = analysers.get(uri);
+    if (known && known.kind === kind) return known.analyser;
+    const analyser = createDocumentAnalyser(kind);
+    analysers.set(uri, { kind, analyser });
+    return analyser;
   };
   return {
     get(document, kind) {
@@ -71,17 +87,13 @@ export function createDocumentCache(capacity = 32): DocumentCache {
         entries.set(document.uri, cached);
         return cached;
       }
-      let rowMemo: DelimitedRowMemo | undefined;
-      if (kind === "csv" || kind === "tsv") {
-        rowMemo = rowMemos.get(document.uri) ?? delimitedRowMemo();
-        rowMemos.set(document.uri, rowMemo);
-      }
-      const entry = analyseDocument(document, kind, revision, rowMemo);
+      const entry = analyseDocument(document, kind, revision, analyserFor(document.uri, kind));
       entries.delete(document.uri);
       entries.set(document.uri, entry);
       while (entries.size > capacity) {
         const oldest = entries.keys().next().value as string;
         entries.delete(oldest);
+        analysers.delete(oldest);
       }
       return entry;
     },
@@ -97,7 +109,7 @@ export function createDocumentCache(capacity = 32): DocumentCache {
     delete(uri) {
       entries.delete(uri);
       revisions.delete(uri);
-      rowMemos.delete(uri);
+      analysers.delete(uri);
     },
   };
 }
@@ -107,36 +119,33 @@ function firstBytesRange(document: TextDocument) {
 }
 
 /**
- * Analyses one version of a document as `kind` (also for text that is not open). The model is
- * read the first time a feature asks for it; a table's findings come from its rows alone, through
- * `rowMemo` when one is given, so diagnostics after an edit need not rebuild the whole model.
+ * Analyses one version of a document as `kind` (also for text that is not open). With the
+ * analyser kept for an open document, only the parts an edit changed are read again; everything
+ * is worked out the first time a feature asks for it.
  */
 export function analyseDocument(
   document: TextDocument,
   kind: DocumentKind,
   revision: number,
-  rowMemo?: DelimitedRowMemo,
+  analyser: DocumentAnalyser = createDocumentAnalyser(kind),
 ): AnalysedDocument {
-  const analysed = analysedTextOf(document.getText());
-  let model: DocumentModel | undefined;
-  const modelOf = (): DocumentModel => (model ??= analysed.binary ? EMPTY_MODEL(kind) : analyzeDocument(analysed.text, kind));
+  const text = isChunkedDocument(document) ? document.chunked : chunkedTextOf(document.getText());
+  const analysis: DocumentAnalysis = analyser.analyse(text);
   let findings: readonly Finding[] | undefined;
-  const tableFindings = (): readonly Finding[] =>
-    analysed.binary || (kind !== "csv" && kind !== "tsv") || !rowMemo ? [] : checkDelimitedText(analysed.text, kind, { memo: rowMemo });
   return {
     uri: document.uri,
     version: document.version,
     revision,
     kind,
     get model() {
-      return modelOf();
+      return analysis.model();
     },
-    truncatedAt: analysed.truncatedAt,
-    binary: analysed.binary,
+    modelAround: (start, end) => analysis.modelAround(start, end),
+    speciesAt: (offset) => analysis.speciesAt(offset),
+    truncatedAt: analysis.truncatedAt,
+    binary: analysis.binary,
     findings() {
-      if (findings) return findings;
-      const found = rowMemo && (kind === "csv" || kind === "tsv") ? tableFindings() : [...modelOf().problems, ...checkDocument(modelOf())];
-      findings = [...truncationNote(analysed.truncatedAt), ...found];
+      findings ??= [...truncationNote(analysis.truncatedAt), ...analysis.findings()];
       return findings;
     },
   };

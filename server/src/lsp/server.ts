@@ -11,7 +11,7 @@ import {
   type InitializeParams,
   type InitializeResult,
 } from "vscode-languageserver";
-import { TextDocument } from "vscode-languageserver-textdocument";
+import { CHUNKED_DOCUMENTS } from "./chunkedDocument";
 import { clientFeaturesFrom, type ClientFeatures } from "./clientFeatures";
 import { createDocumentCache } from "./documentCache";
 import { guarded, guardedNotification, type ServerLog } from "./guardedHandler";
@@ -30,7 +30,8 @@ export function startServer(connection: Connection): void {
     error: (message) => connection.console.error(message),
     info: (message) => connection.console.info(message),
   };
-  const documents = new TextDocuments(TextDocument);
+  // Kept in chunks: an edit to a large table copies a few kilobytes, not the whole text.
+  const documents = new TextDocuments(CHUNKED_DOCUMENTS);
   let features: ClientFeatures | undefined;
   let diagnostics: DiagnosticsFeature | undefined;
   const settings = createSettingsStore(connection, () => features?.configuration ?? false, log);

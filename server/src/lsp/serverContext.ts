@@ -3,7 +3,7 @@
  * settings and the client's abilities. One object, so features stay short and testable.
  */
 import type { Connection, TextDocuments } from "vscode-languageserver";
-import type { TextDocument } from "vscode-languageserver-textdocument";
+import type { ChunkedTextDocument } from "./chunkedDocument";
 import type { ClientFeatures } from "./clientFeatures";
 import type { AnalysedDocument, DocumentCache } from "./documentCache";
 import type { ServerLog } from "./guardedHandler";
@@ -12,7 +12,7 @@ import type { SettingsStore } from "./settingsStore";
 
 export interface ServerContext {
   readonly connection: Connection;
-  readonly documents: TextDocuments<TextDocument>;
+  readonly documents: TextDocuments<ChunkedTextDocument>;
   readonly cache: DocumentCache;
   readonly settings: SettingsStore;
   readonly log: ServerLog;
@@ -22,7 +22,7 @@ export interface ServerContext {
 
 /** An open document that lonepair is enabled for, with its model and settings. */
 export interface EnabledDocument {
-  readonly document: TextDocument;
+  readonly document: ChunkedTextDocument;
   readonly analysed: AnalysedDocument;
   readonly settings: ServerSettings;
 }

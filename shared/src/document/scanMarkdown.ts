@@ -12,16 +12,44 @@ import type { RecordSink } from "./tables/records";
 
 const CHEMISTRY_FENCES = new Set(["chem", "mhchem", "ce"]);
 
+/** A top-level piece of a markdown document, scanned on its own (see `scanMarkdownBlock`). */
+export type MarkdownBlock =
+  | { readonly kind: "prose"; readonly start: number; readonly end: number }
+  | { readonly kind: "frontMatter"; readonly start: number; readonly end: number; readonly values: readonly TextRange[] }
+  | {
+      readonly kind: "fence";
+      readonly start: number;
+      readonly end: number;
+      readonly bodyStart: number;
+      readonly bodyEnd: number;
+      readonly chemistry: boolean;
+    }
+  | { readonly kind: "table"; readonly start: number; readonly end: number; readonly lines: readonly TextRange[] };
+
 /** Scans a whole markdown document into `sink`. */
 export function scanMarkdown(text: string, read: SpeciesReader, sink: RecordSink): void {
+  for (const block of markdownBlocks(text)) scanMarkdownBlock(text, block, read, sink);
+}
+
+/**
+ * The blocks of a markdown document in order: front matter, paragraphs and headings (prose),
+ * fenced blocks and pipe tables. Cheap: nothing is read as chemistry here. What a block yields
+ * depends on its own text and the rest of the lines it starts and ends on.
+ */
+export function markdownBlocks(text: string): MarkdownBlock[] {
+  const blocks: MarkdownBlock[] = [];
   const comments = commentRanges(text);
   let commentIndex = 0;
   let position = text.charCodeAt(0) === 0xfeff ? 1 : 0;
-  position = frontMatter(text, position, read, sink);
+  const front = frontMatter(text, position);
+  if (front) {
+    blocks.push(front);
+    position = front.end;
+  }
   let paragraphStart = -1;
   let paragraphEnd = -1;
   const flush = (): void => {
-    if (paragraphStart >= 0) scanProse(text, paragraphStart, paragraphEnd, sink, read);
+    if (paragraphStart >= 0) blocks.push({ kind: "prose", start: paragraphStart, end: paragraphEnd });
     paragraphStart = -1;
   };
 
@@ -44,17 +72,21 @@ export function scanMarkdown(text: string, read: SpeciesReader, sink: RecordSink
     const fence = /^ {0,3}(`{3,}|~{3,})\s*([^\s`]*)/.exec(line);
     if (fence) {
       flush();
-      position = fencedBlock(text, next, fence[1], CHEMISTRY_FENCES.has(fence[2].toLowerCase()), read, sink);
+      const block = fencedBlock(text, position, next, fence[1], CHEMISTRY_FENCES.has(fence[2].toLowerCase()));
+      blocks.push(block);
+      position = block.end;
       continue;
     }
     if (line.includes("|") && next < text.length && isDelimiterRow(text, next, endOfLine(text, next))) {
       flush();
-      position = table(text, position, read, sink);
+      const block = table(text, position);
+      blocks.push(block);
+      position = block.end;
       continue;
     }
     if (/^ {0,3}#{1,6}(?:\s|$)/.test(line)) {
       flush();
-      scanProse(text, position, lineEnd, sink, read);
+      blocks.push({ kind: "prose", start: position, end: lineEnd });
       position = next;
       continue;
     }
@@ -63,6 +95,31 @@ export function scanMarkdown(text: string, read: SpeciesReader, sink: RecordSink
     position = next;
   }
   flush();
+  return blocks;
+}
+
+/** Scans one block of `text` (found by `markdownBlocks`) into `sink`, with offsets into `text`. */
+export function scanMarkdownBlock(text: string, block: MarkdownBlock, read: SpeciesReader, sink: RecordSink): void {
+  switch (block.kind) {
+    case "prose":
+      scanProse(text, block.start, block.end, sink, read);
+      return;
+    case "frontMatter":
+      for (const value of block.values) scanProse(text, value.start, value.end, sink, read);
+      return;
+    case "fence": {
+      if (!block.chemistry) return;
+      let position = block.bodyStart;
+      while (position < block.bodyEnd) {
+        const lineEnd = endOfLine(text, position);
+        scanMhchemBody(text, position, lineEnd, read, sink);
+        position = lineEnd + 1;
+      }
+      return;
+    }
+    case "table":
+      scanMarkdownTable(text, block.lines, read, sink);
+  }
 }
 
 function endOfLine(text: string, position: number): number {
@@ -86,19 +143,16 @@ function commentRanges(text: string): TextRange[] {
   return ranges;
 }
 
-/** YAML front matter at the very top: scan values, skip keys. Returns where the body starts. */
-function frontMatter(text: string, start: number, read: SpeciesReader, sink: RecordSink): number {
+/** YAML front matter at the very top, with the ranges of its values (keys are skipped). */
+function frontMatter(text: string, start: number): MarkdownBlock | undefined {
   const firstEnd = endOfLine(text, start);
-  if (text.slice(start, firstEnd).trimEnd() !== "---") return start;
+  if (text.slice(start, firstEnd).trimEnd() !== "---") return undefined;
   let position = firstEnd + 1;
   const values: TextRange[] = [];
   while (position < text.length) {
     const lineEnd = endOfLine(text, position);
     const line = text.slice(position, lineEnd);
-    if (/^(?:---|\.\.\.)\s*$/.test(line)) {
-      for (const value of values) scanProse(text, value.start, value.end, sink, read);
-      return lineEnd + 1;
-    }
+    if (/^(?:---|\.\.\.)\s*$/.test(line)) return { kind: "frontMatter", start, end: lineEnd + 1, values };
     // "key: value", "- value", "  - key: value"; comments and keys stay unscanned.
     const entry = /^(\s*(?:-\s+)?)(?:([^:#\s][^:#]*):(?=\s|$))?\s*/.exec(line)!;
     const valueStart = position + entry[0].length;
@@ -108,26 +162,26 @@ function frontMatter(text: string, start: number, read: SpeciesReader, sink: Rec
     position = lineEnd + 1;
   }
   // No closing line: this was not front matter after all.
-  return start;
+  return undefined;
 }
 
-/** Skips (or, for chemistry fences, reads) a fenced block; returns the position after it. */
-function fencedBlock(text: string, start: number, fence: string, chemistry: boolean, read: SpeciesReader, sink: RecordSink): number {
+/** A fenced block whose opening line starts at `start`; its body starts at `bodyStart`. */
+function fencedBlock(text: string, start: number, bodyStart: number, fence: string, chemistry: boolean): MarkdownBlock {
   const marker = fence[0];
-  let position = start;
+  let position = bodyStart;
   while (position < text.length) {
     const lineEnd = endOfLine(text, position);
     const line = text.slice(position, Math.min(lineEnd, position + 200));
     const closing = /^ {0,3}(`{3,}|~{3,})\s*$/.exec(line);
-    if (closing && closing[1][0] === marker && closing[1].length >= fence.length) return lineEnd + 1;
-    if (chemistry) scanMhchemBody(text, position, lineEnd, read, sink);
+    if (closing && closing[1][0] === marker && closing[1].length >= fence.length)
+      return { kind: "fence", start, end: lineEnd + 1, bodyStart, bodyEnd: position, chemistry };
     position = lineEnd + 1;
   }
-  return text.length;
+  return { kind: "fence", start, end: text.length, bodyStart, bodyEnd: text.length, chemistry };
 }
 
-/** A pipe table starting at `start`; returns the position after its last line. */
-function table(text: string, start: number, read: SpeciesReader, sink: RecordSink): number {
+/** A pipe table starting at `start`, line by line. */
+function table(text: string, start: number): MarkdownBlock {
   const lines: TextRange[] = [];
   let position = start;
   while (position < text.length) {
@@ -137,6 +191,5 @@ function table(text: string, start: number, read: SpeciesReader, sink: RecordSin
     lines.push({ start: position, end: lineEnd });
     position = lineEnd + 1;
   }
-  scanMarkdownTable(text, lines, read, sink);
-  return Math.min(position, text.length);
+  return { kind: "table", start, end: Math.min(position, text.length), lines };
 }

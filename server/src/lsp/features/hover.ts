@@ -2,7 +2,7 @@
  * Hover: the species under the cursor, found among the model's occurrences, shown as a card.
  */
 import { MarkupKind, type Hover, type HoverParams } from "vscode-languageserver";
-import { resultMarkdown, speciesAtOffset } from "../../../../shared/src/index";
+import { resultMarkdown } from "../../../../shared/src/index";
 import type { Finding, TextRange } from "../core";
 import { guarded } from "../guardedHandler";
 import { OFF_THREAD_ATOMS, createOffThreadCards } from "../offThreadCards";
@@ -17,7 +17,8 @@ export function registerHover(context: ServerContext): void {
       const enabled = await enabledDocument(context, params.textDocument.uri);
       if (!enabled) return null;
       const { document, analysed, settings } = enabled;
-      const species = speciesAtOffset(analysed.model, document.offsetAt(params.position));
+      // Read from the rows or blocks around the position, not the whole model.
+      const species = analysed.speciesAt(document.offsetAt(params.position));
       if (!species) return null;
       const result = species.analysis;
       // The card is written in the format the client asked for, not merely labelled with it.

@@ -17,10 +17,11 @@ export function registerInlayHints(context: ServerContext): void {
       const enabled = await enabledDocument(context, params.textDocument.uri);
       if (!enabled || !hintsWanted(enabled.analysed.kind, enabled.settings)) return [];
       const { document, analysed } = enabled;
+      const range = offsetRange(document, params.range);
       const hints = geometryHints(
         document.getText(),
-        analysed.model,
-        offsetRange(document, params.range),
+        analysed.modelAround(range.start, range.end),
+        range,
         () => token.isCancellationRequested,
       );
       return hints.map((hint) => ({

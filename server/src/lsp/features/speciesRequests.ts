@@ -16,7 +16,6 @@ import {
   missingModelReason,
   shapeOf,
   shapeViewModelOf,
-  speciesAtOffset,
   type CheckTextParams,
   type CheckTextResult,
   type CoordinatesParams,
@@ -105,7 +104,7 @@ async function speciesAt(
   if (uri === undefined || !isPosition(candidate?.position)) return undefined;
   const enabled = await enabledDocument(context, uri);
   if (!enabled) return undefined;
-  const species = speciesAtOffset(enabled.analysed.model, enabled.document.offsetAt(candidate.position));
+  const species = enabled.analysed.speciesAt(enabled.document.offsetAt(candidate.position));
   return species ? { document: enabled.document, species } : undefined;
 }
 

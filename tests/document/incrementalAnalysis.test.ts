@@ -1,0 +1,160 @@
+// An edited document analysed segment by segment, reusing what each edit left alone, gives the
+// findings and the species of a from-scratch analysis of the same text (the core's own
+// analyzeDocument + checkDocument are the reference), after thousands of random edits to tables
+// and markdown notebooks.
+import { describe, expect, it } from "vitest";
+import {
+  analyzeDocument,
+  checkDocument,
+  chunkedTextOf,
+  createDocumentAnalyser,
+  editChunkedText,
+  speciesAtOffset,
+  wholeText,
+  type ChunkedText,
+  type DocumentKind,
+  type Finding,
+} from "../../shared/src/index";
+import { seededRandom } from "../support/seededRandom";
+
+function fromScratch(text: string, kind: DocumentKind): Finding[] {
+  const model = analyzeDocument(text, kind);
+  return [...model.problems, ...checkDocument(model)].sort((a, b) => a.range.start - b.range.start || a.range.end - b.range.end);
+}
+
+/** Findings in one canonical order, so ties between equal ranges do not matter. */
+function canonical(findings: readonly Finding[]): Finding[] {
+  const key = (finding: Finding): string => `${finding.range.start}:${finding.range.end}:${finding.code}:${finding.message}`;
+  return [...findings].sort((a, b) => (key(a) < key(b) ? -1 : key(a) > key(b) ? 1 : 0));
+}
+
+// common practice: valence electron counts, lone pairs and shapes of these cylinder gases, right and wrong.
+const TABLE_ROWS = [
+  "KR-1,sulfur hexafluoride,SF6,48,0,octahedral",
+  "KR-2,nitrogen trifluoride,NF3,26,1,trigonal pyramidal",
+  "KR-3,ammonia,NH3,8,1,trigonal planar",
+  "KR-4,xenon tetrafluoride,XeF4,36,2,square planar",
+  "KR-5,nitrogen trifluoride,NF3,24,1,trigonal pyramidal",
+  "KR-6,methane,CH5,10,0,tetrahedral",
+  'KR-7,"boron, trifluoride",BF3,24,0,trigonal planar',
+  'KR-8,"a note over\ntwo lines",SF4,34,1,seesaw',
+  "KR-9,,Sf4,34,1,seesaw",
+  "",
+  'KR-10,"never closed,SF4,34,1,seesaw',
+  "KR-11,water,H2O,8,2,bent\r",
+];
+const TABLE_HEADERS = [
+  "id,species,formula,valence electrons,lone pairs,molecular geometry",
+  "id,name,formula,electrons,lone pairs on central atom,shape",
+  "id,species,formula,notes,lone pairs,molecular geometry",
+];
+
+// Markdown written the way the lab's notebooks are: prose, headings, chemistry fences, tables, comments.
+const MARKDOWN_LINES = [
+  "# Run 15: NF3 against SF6",
+  "Dana weighed SF4 and XeF4 into the glovebox; NH4+ stayed in the fridge.",
+  "The Sf4 cylinder label is wrong, and CLF3 was not opened.",
+  "NO2 is a radical; so is ClO2.",
+  "",
+  "```chem",
+  "SF4 + F2 -> SF6",
+  "```",
+  "```python",
+  "print('CO2')",
+  "~~~",
+  "| Formula | Molecular geometry |",
+  "|---|---|",
+  "| SF4 | seesaw |",
+  "| NF3 | trigonal planar |",
+  "<!-- reviewer: check XeF2 -->",
+  "<!--",
+  "-->",
+  "---",
+  "title: CO2 storage",
+  "...",
+  "$\\ce{H2SO4}$ and `smiles:C1CC1` in one line.",
+  "<!-- DO NOT USE -->NO is kept in bay 3.",
+];
+
+interface Session {
+  text: ChunkedText;
+  readonly analyser: ReturnType<typeof createDocumentAnalyser>;
+}
+
+function randomEdit(session: Session, random: () => number, pieces: readonly string[]): void {
+  const plain = wholeText(session.text);
+  const lineStarts = [0, ...[...plain.matchAll(/\n/g)].map((match) => match.index + 1)];
+  const pick = <T>(items: readonly T[]): T => items[Math.floor(random() * items.length)];
+  const choice = random();
+  let start: number;
+  let end: number;
+  let insert: string;
+  if (choice < 0.5) {
+    // Replace a whole line, as typing over a row does.
+    const line = Math.floor(random() * lineStarts.length);
+    start = lineStarts[line];
+    const lineFeed = plain.indexOf("\n", start);
+    end = lineFeed < 0 ? plain.length : lineFeed;
+    insert = pick(pieces);
+  } else if (choice < 0.75) {
+    // Insert or delete whole lines.
+    start = pick(lineStarts);
+    end = random() < 0.5 ? start : Math.min(plain.length, pick(lineStarts.filter((at) => at >= start)));
+    insert = random() < 0.5 ? "" : `${pick(pieces)}\n`;
+  } else {
+    // A keystroke anywhere: one character typed or deleted.
+    start = Math.floor(random() * (plain.length + 1));
+    end = random() < 0.5 ? start : Math.min(plain.length, start + 1);
+    insert = random() < 0.5 ? "" : pick(["4", "F", " ", "\n", '"', "|", "`", ",", "<!--", "-->"]);
+  }
+  session.text = editChunkedText(session.text, start, end, insert);
+}
+
+function checkAgainstScratch(session: Session, kind: DocumentKind, random: () => number): void {
+  const plain = wholeText(session.text);
+  const analysis = session.analyser.analyse(session.text);
+  expect(canonical(analysis.findings())).toEqual(canonical(fromScratch(plain, kind)));
+  // The species a hover asks for, at a few random places.
+  const model = analyzeDocument(plain, kind);
+  for (let probe = 0; probe < 3; probe++) {
+    const offset = Math.floor(random() * (plain.length + 1));
+    expect(analysis.speciesAt(offset)?.range).toEqual(speciesAtOffset(model, offset)?.range);
+  }
+}
+
+describe("incremental analysis after random edits", () => {
+  it.each([1, 2, 3, 4])("a table keeps the findings of a fresh analysis through 600 edits (seed %i)", (seed) => {
+    const random = seededRandom(seed);
+    const rows = Array.from({ length: 120 }, (_, index) => TABLE_ROWS[(index * 7 + seed) % 6]);
+    const kind = "csv";
+    // Small chunks, so that a table of a few hundred rows has many segments.
+    const session: Session = {
+      text: chunkedTextOf(`${[TABLE_HEADERS[0], ...rows].join("\n")}\n`, 256),
+      analyser: createDocumentAnalyser(kind),
+    };
+    for (let edit = 0; edit < 600; edit++) {
+      randomEdit(session, random, random() < 0.03 ? TABLE_HEADERS : TABLE_ROWS);
+      checkAgainstScratch(session, kind, random);
+    }
+  });
+
+  it.each([1, 2, 3, 4])("a markdown notebook keeps the findings of a fresh analysis through 600 edits (seed %i)", (seed) => {
+    const random = seededRandom(seed);
+    const lines = Array.from({ length: 60 }, (_, index) => MARKDOWN_LINES[(index * 5 + seed) % MARKDOWN_LINES.length]);
+    const kind = "markdown";
+    const session: Session = { text: chunkedTextOf(`${lines.join("\n")}\n`, 256), analyser: createDocumentAnalyser(kind) };
+    for (let edit = 0; edit < 600; edit++) {
+      randomEdit(session, random, MARKDOWN_LINES);
+      checkAgainstScratch(session, kind, random);
+    }
+  });
+
+  it.each(["plaintext", "json", "yaml"] as const)("%s is read whole and agrees with a fresh analysis", (kind) => {
+    const random = seededRandom(7);
+    const session: Session = { text: chunkedTextOf("SF4 and NF3\n"), analyser: createDocumentAnalyser(kind) };
+    for (let edit = 0; edit < 50; edit++) {
+      randomEdit(session, random, ['{"formula": "SF4", "valence electrons": 30}', "- formula: NF3", "XeF4 is square planar", "Sf4"]);
+      checkAgainstScratch(session, kind, random);
+    }
+  });
+});
