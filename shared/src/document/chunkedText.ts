@@ -14,11 +14,13 @@ export const CHUNK_TARGET = 16 * 1024;
 const LF = 0x0a;
 const CR = 0x0d;
 
-/** One piece of the text and where its lines start. */
+/** One piece of the text and its line breaks. */
 export interface TextChunk {
   readonly text: string;
-  /** Offsets in `text` just past each line break (a CRLF counts once). */
-  readonly lineStarts: Int32Array;
+  /** How many line breaks `text` holds (a CRLF counts once). */
+  readonly lineBreaks: number;
+  /** Offsets in `text` just past each line break, worked out when a position is first asked for. */
+  lineStarts(): Int32Array;
 }
 
 /** One version of a document's text. Never changed: an edit makes a new version. */
@@ -104,16 +106,17 @@ export function positionOf(text: ChunkedText, offset: number): LineAndCharacter 
   if (text.chunks.length === 0) return { line: 0, character: 0 };
   const index = chunkIndexAt(text, at);
   const chunk = text.chunks[index];
+  const lineStarts = chunk.lineStarts();
   const local = at - text.starts[index];
   // The number of line starts at or before `local`.
   let low = 0;
-  let high = chunk.lineStarts.length;
+  let high = lineStarts.length;
   while (low < high) {
     const middle = (low + high) >> 1;
-    if (chunk.lineStarts[middle] <= local) low = middle + 1;
+    if (lineStarts[middle] <= local) low = middle + 1;
     else high = middle;
   }
-  const lineStart = low === 0 ? 0 : chunk.lineStarts[low - 1];
+  const lineStart = low === 0 ? 0 : lineStarts[low - 1];
   return { line: text.firstLines[index] + low, character: beforeLineBreak(chunk.text, local, lineStart) - lineStart };
 }
 
@@ -124,9 +127,10 @@ export function offsetOf(text: ChunkedText, position: LineAndCharacter): number 
   const index = chunkIndexOfLine(text, position.line);
   const chunk = text.chunks[index];
   const lineInChunk = position.line - text.firstLines[index];
-  const lineStart = lineInChunk === 0 ? 0 : chunk.lineStarts[lineInChunk - 1];
+  const lineStarts = chunk.lineStarts();
+  const lineStart = lineInChunk === 0 ? 0 : lineStarts[lineInChunk - 1];
   if (position.character <= 0) return text.starts[index] + lineStart;
-  const nextLineStart = lineInChunk < chunk.lineStarts.length ? chunk.lineStarts[lineInChunk] : chunk.text.length;
+  const nextLineStart = lineInChunk < lineStarts.length ? lineStarts[lineInChunk] : chunk.text.length;
   const local = Math.min(lineStart + Math.floor(position.character), nextLineStart);
   return text.starts[index] + beforeLineBreak(chunk.text, local, lineStart);
 }
@@ -157,23 +161,34 @@ function chunksOf(text: string, target: number): TextChunk[] {
     const lineFeed = text.length - start > target ? text.indexOf("\n", start + target - 1) : -1;
     const end = lineFeed < 0 ? text.length : lineFeed + 1;
     const piece = start === 0 && end === text.length ? text : text.slice(start, end);
-    chunks.push({ text: piece, lineStarts: lineStartsOf(piece) });
+    chunks.push(chunkOf(piece));
     start = end;
   }
   return chunks;
 }
 
-function lineStartsOf(text: string): Int32Array {
-  const starts: number[] = [];
+function chunkOf(text: string): TextChunk {
+  let starts: Int32Array | undefined;
+  return { text, lineBreaks: countLineBreaks(text), lineStarts: () => (starts ??= lineStartsOf(text)) };
+}
+
+function countLineBreaks(text: string): number {
+  let count = 0;
   for (let index = 0; index < text.length; index++) {
     const code = text.charCodeAt(index);
-    if (code === LF) starts.push(index + 1);
-    else if (code === CR) {
-      if (text.charCodeAt(index + 1) === LF) index++;
-      starts.push(index + 1);
-    }
+    if (code <= CR && (code === LF || (code === CR && text.charCodeAt(index + 1) !== LF))) count++;
   }
-  return Int32Array.from(starts);
+  return count;
+}
+
+function lineStartsOf(text: string): Int32Array {
+  const starts = new Int32Array(countLineBreaks(text));
+  let next = 0;
+  for (let index = 0; index < text.length; index++) {
+    const code = text.charCodeAt(index);
+    if (code <= CR && (code === LF || (code === CR && text.charCodeAt(index + 1) !== LF))) starts[next++] = index + 1;
+  }
+  return starts;
 }
 
 function assemble(chunks: readonly TextChunk[], chunkTarget: number): ChunkedText {
@@ -181,7 +196,7 @@ function assemble(chunks: readonly TextChunk[], chunkTarget: number): ChunkedTex
   const firstLines: number[] = [0];
   for (const chunk of chunks) {
     starts.push(starts[starts.length - 1] + chunk.text.length);
-    firstLines.push(firstLines[firstLines.length - 1] + chunk.lineStarts.length);
+    firstLines.push(firstLines[firstLines.length - 1] + chunk.lineBreaks);
   }
   const length = starts[starts.length - 1];
   return { chunks, starts, firstLines, length, lineCount: firstLines[firstLines.length - 1] + 1, chunkTarget };
