@@ -105,4 +105,14 @@ describe("import graph", () => {
     ].map((edge) => `${edge.file} imports ${edge.specifier}`);
     expect(crossing).toEqual([]);
   });
+
+  it("the file search both programs use (server/src/files) belongs to neither", () => {
+    const files = sourceFiles("server/src/files");
+    expect(files.length).toBeGreaterThan(0);
+    const crossing = files
+      .flatMap(importsOf)
+      .filter((edge) => edge.target?.startsWith("server/src/lsp") || edge.target?.startsWith("server/src/cli"))
+      .map((edge) => `${edge.file} imports ${edge.specifier}`);
+    expect(crossing).toEqual([]);
+  });
 });

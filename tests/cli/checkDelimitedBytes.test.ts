@@ -17,7 +17,7 @@ async function checked(path: string, kind: "csv" | "tsv", options: { ordinaryRea
   const located: LocatedFinding[] = [];
   const summary = emptySummary();
   await checkFile(
-    { path, displayPath: "table", kind, size: 0 },
+    { path, displayPath: "table", kind, size: 0, modifiedMs: 0 },
     { fix: false, dryRun: false, ...options },
     {
       reporter: { findings: (found) => located.push(...found), end: () => undefined },

@@ -4,8 +4,6 @@
  * the window, hide the rest of a line), and a newline in a name would break "one finding per
  * line". Every such character is printed as a visible escape instead.
  */
-import { isUtf8 } from "node:buffer";
-
 // C0 controls, DEL, C1 controls, line and paragraph separators, and the bidirectional
 // embeddings, overrides and isolates that can make a line read differently from its bytes.
 // eslint-disable-next-line no-control-regex -- matching control characters is the point
@@ -22,36 +20,6 @@ export function terminalSafe(text: string): string {
     const code = character.charCodeAt(0);
     return code < 0x100 ? `\\x${code.toString(16).padStart(2, "0")}` : `\\u${code.toString(16).padStart(4, "0")}`;
   });
-}
-
-/**
- * A file name given as bytes, for display: the parts that are UTF-8 as text (made terminal
- * safe), each byte that is not as `\xHH`.
- */
-export function displayBytes(bytes: Uint8Array): string {
-  let shown = "";
-  let index = 0;
-  while (index < bytes.length) {
-    const length = sequenceLength(bytes[index]);
-    const sequence = bytes.subarray(index, index + length);
-    if (length > 0 && sequence.length === length && isUtf8(sequence)) {
-      shown += terminalSafe(Buffer.from(sequence).toString("utf8"));
-      index += length;
-    } else {
-      shown += `\\x${bytes[index].toString(16).padStart(2, "0")}`;
-      index++;
-    }
-  }
-  return shown;
-}
-
-/** Bytes in the UTF-8 sequence a lead byte starts; 0 for a byte that cannot start one. */
-function sequenceLength(lead: number): number {
-  if (lead < 0x80) return 1;
-  if (lead >= 0xc2 && lead <= 0xdf) return 2;
-  if (lead >= 0xe0 && lead <= 0xef) return 3;
-  if (lead >= 0xf0 && lead <= 0xf4) return 4;
-  return 0;
 }
 
 /**

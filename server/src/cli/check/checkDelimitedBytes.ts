@@ -15,7 +15,7 @@ import { findHeader, recognisedColumns, workOutRow } from "../../../../shared/sr
 import type { SpeciesReader } from "../../../../shared/src/index";
 import type { Finding, FindingSeverity } from "../../../../shared/src/index";
 import { SNIFF_CHARACTERS } from "../documents/documentBatches";
-import type { DocumentFile } from "../documents/findDocuments";
+import type { DocumentFile } from "../../files/findDocuments";
 import { countLineFeeds } from "../documents/lineIndex";
 import type { DelimitedRowMemo } from "../../../../shared/src/index";
 import { countFinding } from "./checkSummary";

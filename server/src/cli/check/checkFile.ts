@@ -8,7 +8,7 @@ import { delimitedRowMemo } from "../../../../shared/src/index";
 import type { Finding, TextFix } from "../../../../shared/src/index";
 import { batchModel } from "../documents/batchModel";
 import { readDocument, type DocumentBatch, type ResumeAt } from "../documents/documentBatches";
-import type { DocumentFile } from "../documents/findDocuments";
+import type { DocumentFile } from "../../files/findDocuments";
 import { lineIndexOf, type LineIndex } from "../documents/lineIndex";
 import { checkDelimitedBytes } from "./checkDelimitedBytes";
 import type { CheckReporter } from "./checkReporter";

@@ -13,7 +13,7 @@ import { removeOnSignals, temporaryFiles } from "../check/temporaryFiles";
 import { textReporter } from "../check/textReporter";
 import type { CliCommand, CliIo } from "../cliCommand";
 import { EXIT_FAILURE, EXIT_OK, EXIT_USAGE, parseCommandLine, usageError } from "../cliCommand";
-import { findDocuments, ioMessage } from "../documents/findDocuments";
+import { findDocuments, ioMessage } from "../../files/findDocuments";
 import { terminalSafe, terminalSafeLines } from "../terminalText";
 
 const HELP = `Usage: lonepair check [options] <files or folders...>
@@ -62,9 +62,10 @@ async function runCheck(args: readonly string[], io: CliIo): Promise<number> {
   if (positionals.length === 0) return usageError(checkCommand, io, "give at least one file or folder");
 
   const found = findDocuments(positionals);
-  for (const unreadable of found.unreadable) io.writeError(`lonepair check: ${unreadable.path}: ${unreadable.message}\n`);
+  for (const unreadable of found.unreadable)
+    io.writeError(`lonepair check: ${terminalSafe(unreadable.path)}: ${terminalSafe(unreadable.message)}\n`);
   for (const skipped of found.skipped)
-    io.writeError(`lonepair check: ${skipped}: not a markdown, text, CSV/TSV, JSON or YAML file; skipped\n`);
+    io.writeError(`lonepair check: ${terminalSafe(skipped)}: not a markdown, text, CSV/TSV, JSON or YAML file; skipped\n`);
 
   const fixing = values.fix === true;
   const dryRun = values["dry-run"] === true;
@@ -98,7 +99,7 @@ async function runCheck(args: readonly string[], io: CliIo): Promise<number> {
         );
       } catch (error) {
         progress.finish();
-        io.writeError(`lonepair check: ${terminalSafe(file.displayPath)}: ${ioMessage(error)}\n`);
+        io.writeError(`lonepair check: ${terminalSafe(file.displayPath)}: ${terminalSafe(ioMessage(error))}\n`);
         summary.unreadable++;
       }
       bytesBefore += file.size;

@@ -5,7 +5,7 @@
 import type { CliCommand, CliIo } from "../cliCommand";
 import { EXIT_OK, EXIT_USAGE, parseCommandLine, usageError } from "../cliCommand";
 import { speciesInFile } from "../documents/documentSpecies";
-import { findDocuments, ioMessage } from "../documents/findDocuments";
+import { findDocuments, ioMessage } from "../../files/findDocuments";
 import { jsonTerminalSafe, terminalSafe } from "../terminalText";
 
 const HELP = `Usage: lonepair list [--json] <files or folders...>
@@ -33,9 +33,10 @@ async function runList(args: readonly string[], io: CliIo): Promise<number> {
   if (parsed.exit !== undefined) return parsed.exit;
   if (parsed.positionals.length === 0) return usageError(listCommand, io, "give at least one file or folder.");
   const found = findDocuments(parsed.positionals);
-  for (const unreadable of found.unreadable) io.writeError(`lonepair list: ${unreadable.path}: ${unreadable.message}\n`);
+  for (const unreadable of found.unreadable)
+    io.writeError(`lonepair list: ${terminalSafe(unreadable.path)}: ${terminalSafe(unreadable.message)}\n`);
   for (const skipped of found.skipped)
-    io.writeError(`lonepair list: ${skipped}: not a markdown, text, CSV/TSV, JSON or YAML file; skipped\n`);
+    io.writeError(`lonepair list: ${terminalSafe(skipped)}: not a markdown, text, CSV/TSV, JSON or YAML file; skipped\n`);
   let failed = found.unreadable.length > 0;
   const json = parsed.values.json === true;
   let written = 0;
@@ -73,7 +74,7 @@ async function runList(args: readonly string[], io: CliIo): Promise<number> {
         await io.outputDrained?.();
       }
     } catch (error) {
-      io.writeError(`lonepair list: ${terminalSafe(file.displayPath)}: ${ioMessage(error)}\n`);
+      io.writeError(`lonepair list: ${terminalSafe(file.displayPath)}: ${terminalSafe(ioMessage(error))}\n`);
       failed = true;
     }
   }

@@ -9,7 +9,7 @@ import { MODEL_CAUTION, analyzeTyped, createSummaryCollector, summaryTable } fro
 import type { CliCommand, CliIo } from "../cliCommand";
 import { EXIT_FAILURE, EXIT_OK, EXIT_USAGE, parseCommandLine, usageError } from "../cliCommand";
 import { speciesInFile } from "../documents/documentSpecies";
-import { findDocuments, ioMessage } from "../documents/findDocuments";
+import { findDocuments, ioMessage } from "../../files/findDocuments";
 import { terminalSafe, terminalSafeLines } from "../terminalText";
 
 const HELP = `Usage: lonepair table [--format md|csv] <files, folders or species...>
@@ -52,13 +52,14 @@ async function runTable(args: readonly string[], io: CliIo): Promise<number> {
       continue;
     }
     const found = findDocuments([argument]);
-    for (const unreadable of found.unreadable) io.writeError(`lonepair table: ${unreadable.path}: ${unreadable.message}\n`);
+    for (const unreadable of found.unreadable)
+      io.writeError(`lonepair table: ${terminalSafe(unreadable.path)}: ${terminalSafe(unreadable.message)}\n`);
     failed ||= found.unreadable.length > 0;
     for (const file of found.files) {
       try {
         for await (const batch of speciesInFile(file)) for (const species of batch) collected.addOccurrence(species.occurrence);
       } catch (error) {
-        io.writeError(`lonepair table: ${terminalSafe(file.displayPath)}: ${ioMessage(error)}\n`);
+        io.writeError(`lonepair table: ${terminalSafe(file.displayPath)}: ${terminalSafe(ioMessage(error))}\n`);
         failed = true;
       }
     }

@@ -8,7 +8,7 @@
 import { open, readFile } from "node:fs/promises";
 import { sniffDelimiter } from "../../../../shared/src/index";
 import type { DocumentKind } from "../../../../shared/src/index";
-import type { TextEncoding } from "./findDocuments";
+import type { TextEncoding } from "../../files/findDocuments";
 import { lineIndexOf, type LineIndex } from "./lineIndex";
 import { recordBoundaryScanner, type RecordBoundaryScanner } from "./recordBoundaries";
 

@@ -6,7 +6,7 @@ import { memoisedReader } from "../../../../shared/src/index";
 import type { SpeciesOccurrence } from "../../../../shared/src/index";
 import { batchModel } from "./batchModel";
 import { readDocument } from "./documentBatches";
-import type { DocumentFile } from "./findDocuments";
+import type { DocumentFile } from "../../files/findDocuments";
 
 /** One mention, placed in its file. */
 export interface PlacedSpecies {

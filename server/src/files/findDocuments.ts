@@ -1,18 +1,20 @@
 /**
- * Turns the paths on a command line into the documents to read: files as given, folders
- * searched for markdown, text, CSV/TSV, JSON and YAML files. Inside a git work tree a folder is
- * listed by git, so .gitignore is respected; elsewhere (or without git) a plain walk skips
- * node_modules and dot-folders. Binary files are never documents. Whatever could not be read is
- * reported, never passed over in silence: a named path always, a file in a folder when its
- * extension makes it a document, and every folder that could not be listed.
+ * Turns paths (a command line's, or an editor's workspace folders) into the documents to read:
+ * files as given, folders searched for markdown, text, CSV/TSV, JSON and YAML files. Inside a git
+ * work tree a folder is listed by git, so .gitignore is respected; elsewhere (or without git) a
+ * plain walk skips node_modules and dot-folders. Binary files are never documents. Whatever could
+ * not be read is reported, never passed over in silence: a named path always, a file in a folder
+ * when its extension makes it a document, and every folder that could not be listed. Both
+ * programs use this, so the command line and the editor's workspace check read the same files.
+ * Paths and messages are plain text; each program makes them safe for where it shows them.
  */
 import { isUtf8 } from "node:buffer";
 import { execFileSync } from "node:child_process";
 import { closeSync, openSync, readdirSync, readSync, statSync } from "node:fs";
 import { join, relative, resolve, sep } from "node:path";
-import { documentKindFor, gitCommandForUntrustedFolder } from "../../../../shared/src/index";
-import type { DocumentKind } from "../../../../shared/src/index";
-import { displayBytes, terminalSafe } from "../terminalText";
+import { documentKindFor, gitCommandForUntrustedFolder } from "../../../shared/src/index";
+import type { DocumentKind } from "../../../shared/src/index";
+import { bytesAsText } from "./pathText";
 
 /** A file to read, with the path to show for it. */
 export interface DocumentFile {
@@ -21,6 +23,8 @@ export interface DocumentFile {
   readonly displayPath: string;
   readonly kind: DocumentKind;
   readonly size: number;
+  /** When the file was last written, in milliseconds (the file system's clock). */
+  readonly modifiedMs: number;
   /** How the text is stored: UTF-8 (the default), or UTF-16 when the file opens with its byte-order mark. */
   readonly encoding?: TextEncoding;
 }
@@ -40,7 +44,7 @@ export interface FoundDocuments {
   /**
    * Paths that do not exist, or documents and folders that cannot be read (permissions, a path
    * too long for the system, a name that is not valid UTF-8): an I/O error for the caller.
-   * `path` is ready for a terminal (control characters and bytes that are not UTF-8 escaped).
+   * In `path`, bytes that are not UTF-8 are written `\xHH`.
    */
   readonly unreadable: readonly UnreadablePath[];
   /** Files named on the command line that are not documents lonepair reads. */
@@ -60,6 +64,12 @@ const SNIFF_CHARACTERS = 4096;
 /** A folder entry: its path as text, or as bytes when the name is not valid UTF-8. */
 type ListedPath = string | Buffer;
 
+/** One step of a search: a document found, a path that could not be read, or a named file skipped. */
+export type FoundItem =
+  | { readonly kind: "document"; readonly file: DocumentFile }
+  | { readonly kind: "unreadable"; readonly unreadable: UnreadablePath }
+  | { readonly kind: "skipped"; readonly path: string };
+
 /**
  * Finds the documents under `paths`, in the order given, folders sorted, each file once. Never
  * runs a program from the folders searched (see `gitListing`).
@@ -68,24 +78,40 @@ export function findDocuments(paths: readonly string[], workingDirectory = proce
   const files: DocumentFile[] = [];
   const unreadable: UnreadablePath[] = [];
   const skipped: string[] = [];
+  for (const item of searchDocuments(paths, workingDirectory)) {
+    if (item.kind === "document") files.push(item.file);
+    else if (item.kind === "unreadable") unreadable.push(item.unreadable);
+    else skipped.push(item.path);
+  }
+  return { files, unreadable, skipped };
+}
+
+/**
+ * The same search one step at a time: each folder is listed at once (git answers in one go), and
+ * each file in it is opened and sniffed only when the caller asks for the next step, so a caller
+ * can stop, report progress or let other work run between files.
+ */
+export function* searchDocuments(paths: readonly string[], workingDirectory = process.cwd()): Generator<FoundItem> {
   const seen = new Set<string>();
-  const add = (path: ListedPath, named: boolean): void => {
+  const visit = (path: ListedPath, named: boolean): FoundItem | undefined => {
     if (typeof path !== "string") {
       // Node reads such a name only as bytes; every step after this one works on text.
-      const shown = displayBytes(Buffer.from(relativeBytes(path, workingDirectory)));
+      const shown = bytesAsText(relativeBytes(path, workingDirectory));
       if (named || documentKindFor(path.toString("utf8")))
-        unreadable.push({ path: shown, message: "the file name is not valid UTF-8; not checked" });
-      return;
+        return { kind: "unreadable", unreadable: { path: shown, message: "the file name is not valid UTF-8; not checked" } };
+      return undefined;
     }
     const absolute = resolve(workingDirectory, path);
-    if (seen.has(absolute)) return;
+    if (seen.has(absolute)) return undefined;
     seen.add(absolute);
     const file = documentFile(absolute, workingDirectory);
-    if (file.kind === "document") files.push(file.document);
-    else if (file.kind === "unreadable") {
+    if (file.kind === "document") return { kind: "document", file: file.document };
+    if (file.kind === "unreadable") {
       if (named || documentKindFor(absolute))
-        unreadable.push({ path: terminalSafe(displayPathOf(absolute, workingDirectory)), message: ioMessage(file.error) });
-    } else if (named) skipped.push(terminalSafe(displayPathOf(absolute, workingDirectory)));
+        return { kind: "unreadable", unreadable: { path: displayPathOf(absolute, workingDirectory), message: ioMessage(file.error) } };
+      return undefined;
+    }
+    return named ? { kind: "skipped", path: displayPathOf(absolute, workingDirectory) } : undefined;
   };
   for (const path of paths) {
     const absolute = resolve(workingDirectory, path);
@@ -93,7 +119,7 @@ export function findDocuments(paths: readonly string[], workingDirectory = proce
     try {
       stats = statSync(absolute);
     } catch (error) {
-      unreadable.push({ path: terminalSafe(path), message: ioMessage(error) });
+      yield { kind: "unreadable", unreadable: { path, message: ioMessage(error) } };
       continue;
     }
     if (stats.isDirectory()) {
@@ -101,16 +127,19 @@ export function findDocuments(paths: readonly string[], workingDirectory = proce
       for (const folder of listed.unreadableFolders) {
         const shown =
           typeof folder.path === "string"
-            ? terminalSafe(displayPathOf(folder.path, workingDirectory))
-            : displayBytes(relativeBytes(folder.path, workingDirectory));
-        unreadable.push({ path: shown, message: `folder not searched: ${folder.message}` });
+            ? displayPathOf(folder.path, workingDirectory)
+            : bytesAsText(relativeBytes(folder.path, workingDirectory));
+        yield { kind: "unreadable", unreadable: { path: shown, message: `folder not searched: ${folder.message}` } };
       }
-      for (const found of listed.files.sort(comparePaths)) add(found, false);
+      for (const found of listed.files.sort(comparePaths)) {
+        const item = visit(found, false);
+        if (item) yield item;
+      }
     } else {
-      add(absolute, true);
+      const item = visit(absolute, true);
+      if (item) yield item;
     }
   }
-  return { files, unreadable, skipped };
 }
 
 /** A plain message for a failed file operation: "no such file or directory" rather than a stack. */
@@ -121,7 +150,7 @@ export function ioMessage(error: unknown): string {
   if (code === "EISDIR") return "is a folder";
   if (code === "ENAMETOOLONG") return "the path is longer than the system allows";
   if (code === "ELOOP") return "too many symbolic links (a link loop?)";
-  return terminalSafe(error instanceof Error ? error.message : String(error));
+  return error instanceof Error ? error.message : String(error);
 }
 
 /** The path relative to the working directory, with forward slashes. */
@@ -150,11 +179,13 @@ const OTHER: FileVerdict = { kind: "other" };
 
 function documentFile(absolute: string, workingDirectory: string): FileVerdict {
   let size: number;
+  let modifiedMs: number;
   let start: Buffer;
   try {
     const stats = statSync(absolute);
     if (!stats.isFile()) return OTHER;
     size = stats.size;
+    modifiedMs = stats.mtimeMs;
     start = readStart(absolute);
   } catch (error) {
     // Gone since it was listed (git still indexes a deleted file) or a link to nothing: nothing to read.
@@ -167,7 +198,7 @@ function documentFile(absolute: string, workingDirectory: string): FileVerdict {
   const text = encoding === "utf-8" ? start.toString("utf8") : new TextDecoder(encoding).decode(start);
   const kind = documentKindFor(absolute, undefined, text.slice(0, SNIFF_CHARACTERS));
   if (!kind) return OTHER;
-  const file: DocumentFile = { path: absolute, displayPath: displayPathOf(absolute, workingDirectory), kind, size };
+  const file: DocumentFile = { path: absolute, displayPath: displayPathOf(absolute, workingDirectory), kind, size, modifiedMs };
   return { kind: "document", document: encoding === "utf-8" ? file : { ...file, encoding } };
 }
 
