@@ -1,6 +1,6 @@
 /**
- * Which documents lonepair reads: the language selector for the client and the file globs for
- * the workspace check, kept side by side so they cannot drift apart.
+ * Which open documents the client hands to the language server. (Which files on disk the
+ * workspace check reads is the server's decision, the same as `lonepair check`'s.)
  */
 /** A filter both the editor API and the protocol accept. */
 export type LonepairDocumentFilter = { readonly language: string } | { readonly scheme: string; readonly pattern: string };
@@ -14,6 +14,3 @@ export const DOCUMENT_SELECTOR: readonly LonepairDocumentFilter[] = [
   { language: "yaml" },
   { scheme: "file", pattern: "**/*.{csv,tsv}" },
 ];
-
-/** Files the workspace check looks at: the selector's languages by their usual extensions. */
-export const WORKSPACE_GLOB = "**/*.{md,markdown,txt,json,jsonc,yaml,yml,csv,tsv}";

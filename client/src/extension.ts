@@ -26,17 +26,13 @@ export async function activate(context: vscode.ExtensionContext): Promise<void> 
     return;
   }
   const started = client;
-  // Problems found by the workspace check in files that are not open; an opened file is the server's.
-  const workspaceProblems = vscode.languages.createDiagnosticCollection("lonepair-workspace");
   const shapePanel = createShapePanelController(context.extensionUri, started, log);
   context.subscriptions.push(
-    workspaceProblems,
     shapePanel,
     createStatusBar(started),
-    vscode.workspace.onDidOpenTextDocument((document) => workspaceProblems.delete(document.uri)),
     vscode.commands.registerCommand("lonepair.insertSummaryTable", () => insertSummaryTable(started, log)),
     vscode.commands.registerCommand("lonepair.showShape", () => showShape(shapePanel)),
-    vscode.commands.registerCommand("lonepair.checkWorkspace", () => checkWorkspace(started, workspaceProblems, log)),
+    vscode.commands.registerCommand("lonepair.checkWorkspace", () => checkWorkspace(started, log)),
     vscode.commands.registerCommand("lonepair.exportCoordinates", () => exportCoordinates(started, log)),
   );
 }

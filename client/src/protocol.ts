@@ -5,14 +5,11 @@
  */
 import { RequestType } from "vscode-languageclient/node";
 import {
-  CHECK_TEXT_METHOD,
   COORDINATES_METHOD,
   DOCUMENT_SUMMARY_METHOD,
   SHAPE_MODEL_METHOD,
   SPECIES_AT_METHOD,
   SUMMARY_TABLE_METHOD,
-  type CheckTextParams,
-  type CheckTextResult,
   type CoordinatesParams,
   type CoordinatesResult,
   type DocumentSummaryParams,
@@ -32,4 +29,3 @@ export const speciesAtRequest = new RequestType<SpeciesAtParams, SpeciesAtResult
 export const shapeModelRequest = new RequestType<ShapeModelParams, ShapeModelResult | null, void>(SHAPE_MODEL_METHOD);
 export const coordinatesRequest = new RequestType<CoordinatesParams, CoordinatesResult | null, void>(COORDINATES_METHOD);
 export const documentSummaryRequest = new RequestType<DocumentSummaryParams, DocumentSummaryResult | null, void>(DOCUMENT_SUMMARY_METHOD);
-export const checkTextRequest = new RequestType<CheckTextParams, CheckTextResult, void>(CHECK_TEXT_METHOD);

@@ -1,7 +1,8 @@
 /**
  * The status-bar item: species mentioned and lonepair problems in the active document.
  * Problems are the diagnostics with source "lonepair" that the editor holds for the document
- * (the server's, plus the workspace check's), so the count is the Problems panel's; the species
+ * (all from the server: the document's own and the workspace check's), so the count is the Problems
+ * panel's; the species
  * count is the server's, asked with `lonepair/documentSummary`.
  */
 import * as vscode from "vscode";

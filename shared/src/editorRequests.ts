@@ -119,3 +119,25 @@ export interface CheckedTextDiagnostic {
 export interface CheckTextResult {
   readonly diagnostics: CheckedTextDiagnostic[];
 }
+
+/**
+ * `lonepair.checkWorkspaceFolders`, run with `workspace/executeCommand`: checks every file lonepair
+ * reads in the workspace folders (as `lonepair check` finds them: .gitignore honoured, binary files
+ * left out), with work-done progress that can be cancelled. A client that does not pull
+ * diagnostics gets them published for each file that is not open; open files keep their own.
+ */
+export const WORKSPACE_CHECK_COMMAND = "lonepair.checkWorkspaceFolders";
+
+/** What one run of the workspace check found. */
+export interface WorkspaceCheckResult {
+  /** Files found to check. */
+  readonly files: number;
+  readonly checked: number;
+  readonly filesWithProblems: number;
+  readonly problems: number;
+  /** Files and folders that could not be read, each named in the server's log. */
+  readonly unreadable: number;
+  readonly cancelled: boolean;
+  /** Set when the search stopped at this many files; the rest were not checked. */
+  readonly stoppedAt?: number;
+}

@@ -79,6 +79,7 @@ export {
   SHAPE_MODEL_METHOD,
   SPECIES_AT_METHOD,
   SUMMARY_TABLE_METHOD,
+  WORKSPACE_CHECK_COMMAND,
 } from "./editorRequests";
 export type * from "./editorRequests";
 export { analysedTextOf, MAX_ANALYSED_LENGTH } from "./document/analysedText";

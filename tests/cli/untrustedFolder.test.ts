@@ -2,12 +2,10 @@
 // configuration: a planted `.git/config` asks git for a file-system monitor and a pager that
 // would each leave a marker file. Plain git runs them (so the plant works), lonepair must not.
 import { execFileSync } from "node:child_process";
-import { chmodSync, existsSync, mkdtempSync, rmSync, writeFileSync } from "node:fs";
+import { chmodSync, existsSync, mkdtempSync, writeFileSync } from "node:fs";
 import { tmpdir } from "node:os";
 import { join } from "node:path";
 import { beforeAll, describe, expect, it } from "vitest";
-import { gitKeptFiles } from "../../client/src/gitKeptFiles";
-import { gitCommandForUntrustedFolder as clientGitCommand } from "../../client/src/untrustedGit";
 import { gitCommandForUntrustedFolder } from "../../shared/src/index";
 import { ensureBuilt, runCli } from "./cliRunner";
 
@@ -76,23 +74,10 @@ describe("check on a folder with a planted git configuration", () => {
     runCli(["table", "."], folder);
     expect(existsSync(marker)).toBe(false);
   });
-
-  it("the editor's workspace check asks git the same safe way", async () => {
-    const { folder, marker } = plantedRepository();
-    const kept = await gitKeptFiles(folder);
-    expect(existsSync(marker)).toBe(false);
-    expect(kept?.keeps(join(folder, "cylinders.csv"))).toBe(true);
-    expect(kept?.keeps(join(folder, "scratch.md"))).toBe(false);
-    rmSync(folder, { recursive: true, force: true });
-  });
 });
 
 describe("the git command for a folder that is not trusted", () => {
   const environment = { PATH: "/usr/bin", HOME: "/home/kestrel", GIT_DIR: "/elsewhere/.git", GIT_EXTERNAL_DIFF: "/tmp/x" };
-
-  it("is the same in the editor client (a copy, as the client bundles no core) and the core", () => {
-    expect(clientGitCommand(["ls-files"], environment)).toEqual(gitCommandForUntrustedFolder(["ls-files"], environment));
-  });
 
   it("points git at no other repository or program from the environment", () => {
     const command = gitCommandForUntrustedFolder(["ls-files"], environment);

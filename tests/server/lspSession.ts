@@ -19,10 +19,17 @@ import {
   RegistrationRequest,
   ShutdownRequest,
   StreamMessageReader,
+  WorkDoneProgress,
+  WorkDoneProgressCreateRequest,
   StreamMessageWriter,
   createProtocolConnection,
   type ClientCapabilities,
   type InitializeResult,
+  type ProgressToken,
+  type WorkDoneProgressBegin,
+  type WorkDoneProgressEnd,
+  type WorkDoneProgressReport,
+  type WorkspaceFolder,
   type ProtocolConnection,
   type PublishDiagnosticsParams,
   type TextDocumentContentChangeEvent,
@@ -49,6 +56,14 @@ export interface SessionOptions {
   readonly capabilities?: ClientCapabilities;
   /** Answer to every `workspace/configuration` item (the `lonepair` section), read at each request. */
   readonly configuration?: () => unknown;
+  /** The workspace folders to announce (default: none, with the made-up lab folder as root). */
+  readonly workspaceFolders?: WorkspaceFolder[];
+}
+
+/** One `$/progress` notification of work done, as the client received it. */
+export interface ProgressEvent {
+  readonly token: ProgressToken;
+  readonly value: WorkDoneProgressBegin | WorkDoneProgressReport | WorkDoneProgressEnd;
 }
 
 /** A running server and the client side of its connection. */
@@ -59,6 +74,10 @@ export interface LspSession {
   /** Every diagnostics notification, in arrival order. */
   readonly published: PublishDiagnosticsParams[];
   readonly logs: string[];
+  /** Tokens the server created with `window/workDoneProgress/create`, in order. */
+  readonly createdProgress: ProgressToken[];
+  /** Every work-done progress notification, in arrival order. */
+  readonly progress: ProgressEvent[];
   /** Open documents as the client sees them, for applying edits. */
   readonly documents: Map<string, TextDocument>;
   open(uri: string, languageId: string, text: string): TextDocument;
@@ -90,6 +109,8 @@ export async function startSession(options: SessionOptions = {}): Promise<LspSes
   const connection = createProtocolConnection(new StreamMessageReader(child.stdout), new StreamMessageWriter(child.stdin));
   const published: PublishDiagnosticsParams[] = [];
   const logs: string[] = [];
+  const createdProgress: ProgressToken[] = [];
+  const progress: ProgressEvent[] = [];
   const waiters = new Set<() => void>();
   const documents = new Map<string, TextDocument>();
   child.stderr.on("data", (chunk: Buffer) => logs.push(chunk.toString()));
@@ -102,14 +123,21 @@ export async function startSession(options: SessionOptions = {}): Promise<LspSes
   });
   connection.onRequest(ConfigurationRequest.type, (params) => params.items.map(() => options.configuration?.() ?? null));
   connection.onRequest(RegistrationRequest.type, () => undefined);
+  connection.onRequest(WorkDoneProgressCreateRequest.type, (params) => {
+    createdProgress.push(params.token);
+    // Every created token is listened to, so its reports are recorded.
+    connection.onProgress(WorkDoneProgress.type, params.token, (value) => {
+      progress.push({ token: params.token, value });
+    });
+  });
   connection.onError(() => undefined);
   connection.listen();
 
   const initializeResult = await connection.sendRequest(InitializeRequest.type, {
     processId: process.pid,
-    rootUri: "file:///kestrel-ridge",
+    rootUri: options.workspaceFolders?.[0]?.uri ?? "file:///kestrel-ridge",
     capabilities: options.capabilities ?? FULL_CAPABILITIES,
-    workspaceFolders: null,
+    workspaceFolders: options.workspaceFolders ?? null,
   });
   await connection.sendNotification(InitializedNotification.type, {});
 
@@ -120,6 +148,8 @@ export async function startSession(options: SessionOptions = {}): Promise<LspSes
     initializeResult,
     published,
     logs,
+    createdProgress,
+    progress,
     documents,
     open(uri, languageId, text) {
       const document = TextDocument.create(uri, languageId, 1, text);

@@ -13,6 +13,10 @@ export interface ClientFeatures {
   /** The client pulls diagnostics (`textDocument/diagnostic`); otherwise we push them. */
   readonly pullDiagnostics: boolean;
   readonly diagnosticRefresh: boolean;
+  /** The client tells of workspace folders added and removed. */
+  readonly workspaceFolders: boolean;
+  /** File watching can be registered dynamically (`workspace/didChangeWatchedFiles`). */
+  readonly watchedFilesRegistration: boolean;
   readonly inlayHints: boolean;
   readonly inlayHintRefresh: boolean;
   /** Workspace edits may carry versioned document changes. */
@@ -34,6 +38,8 @@ export function clientFeaturesFrom(capabilities: ClientCapabilities): ClientFeat
     configurationRegistration: workspace?.didChangeConfiguration?.dynamicRegistration === true,
     pullDiagnostics: isObject(textDocument?.diagnostic),
     diagnosticRefresh: workspace?.diagnostics?.refreshSupport === true,
+    workspaceFolders: workspace?.workspaceFolders === true,
+    watchedFilesRegistration: workspace?.didChangeWatchedFiles?.dynamicRegistration === true,
     inlayHints: isObject(textDocument?.inlayHint),
     inlayHintRefresh: workspace?.inlayHint?.refreshSupport === true,
     documentChanges: workspace?.workspaceEdit?.documentChanges === true,

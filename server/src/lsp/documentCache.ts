@@ -121,16 +121,20 @@ function firstBytesRange(document: TextDocument) {
 /**
  * Analyses one version of a document as `kind` (also for text that is not open). With the
  * analyser kept for an open document, only the parts an edit changed are read again; everything
- * is worked out the first time a feature asks for it.
+ * is worked out the first time a feature asks for it. `readUpTo` says that `document` holds only
+ * the start of a file, up to there.
  */
 export function analyseDocument(
   document: TextDocument,
   kind: DocumentKind,
   revision: number,
   analyser: DocumentAnalyser = createDocumentAnalyser(kind),
+  readUpTo?: number,
 ): AnalysedDocument {
   const text = isChunkedDocument(document) ? document.chunked : chunkedTextOf(document.getText());
   const analysis: DocumentAnalysis = analyser.analyse(text);
+  // A file read only up to `readUpTo` (the workspace check's bound) is as cut as a huge open document.
+  const truncatedAt = analysis.truncatedAt ?? readUpTo;
   let findings: readonly Finding[] | undefined;
   return {
     uri: document.uri,
@@ -142,10 +146,10 @@ export function analyseDocument(
     },
     modelAround: (start, end) => analysis.modelAround(start, end),
     speciesAt: (offset) => analysis.speciesAt(offset),
-    truncatedAt: analysis.truncatedAt,
+    truncatedAt,
     binary: analysis.binary,
     findings() {
-      findings ??= [...truncationNote(analysis.truncatedAt), ...analysis.findings()];
+      findings ??= [...truncationNote(truncatedAt), ...analysis.findings()];
       return findings;
     },
   };

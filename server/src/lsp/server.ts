@@ -8,6 +8,7 @@ import {
   TextDocumentSyncKind,
   TextDocuments,
   type Connection,
+  type ExecuteCommandParams,
   type InitializeParams,
   type InitializeResult,
 } from "vscode-languageserver";
@@ -23,6 +24,9 @@ import { registerHover } from "./features/hover";
 import { registerInlayHints } from "./features/inlayHints";
 import { registerSpeciesRequests } from "./features/speciesRequests";
 import { SUMMARY_TABLE_COMMAND, registerSummaryTable, summaryTableCommand } from "./features/summaryTable";
+import { registerWorkspaceCheck, type WorkspaceCheckFeature } from "./features/workspaceCheck";
+import { WORKSPACE_CHECK_COMMAND } from "../../../shared/src/index";
+import { workspaceFoldersFrom, type WorkspaceFolders } from "./workspaceFolders";
 
 /** Starts serving on `connection`; returns once the handlers are registered. */
 export function startServer(connection: Connection): void {
@@ -34,6 +38,8 @@ export function startServer(connection: Connection): void {
   const documents = new TextDocuments(CHUNKED_DOCUMENTS);
   let features: ClientFeatures | undefined;
   let diagnostics: DiagnosticsFeature | undefined;
+  let workspaceCheck: WorkspaceCheckFeature | undefined;
+  let folders: WorkspaceFolders | undefined;
   const settings = createSettingsStore(connection, () => features?.configuration ?? false, log);
   const context: ServerContext = {
     connection,
@@ -42,10 +48,12 @@ export function startServer(connection: Connection): void {
     settings,
     log,
     clientFeatures: () => features ?? clientFeaturesFrom({}),
+    workspaceFolders: () => folders?.current() ?? [],
   };
 
   connection.onInitialize((params: InitializeParams): InitializeResult => {
     features = clientFeaturesFrom(params.capabilities ?? {});
+    folders = workspaceFoldersFrom(params);
     // Clients without workspace/configuration may hand settings over here: { settings: { lonepair: {...} } }.
     const initialSettings = (params.initializationOptions as { settings?: unknown } | null | undefined)?.settings;
     if (initialSettings !== undefined) settings.changed(initialSettings);
@@ -55,10 +63,20 @@ export function startServer(connection: Connection): void {
     registerSpeciesRequests(context);
     if (features.inlayHints) registerInlayHints(context);
     diagnostics = registerDiagnostics(context);
+    workspaceCheck = registerWorkspaceCheck(context);
+    if (features.workspaceFolders) {
+      connection.workspace.onDidChangeWorkspaceFolders(
+        guardedNotification(log, "workspace folders change", (event) => {
+          folders?.changed(event);
+          workspaceCheck?.filesMayHaveChanged();
+        }),
+      );
+    }
     return { capabilities: serverCapabilities(features), serverInfo: { name: "lonepair" } };
   });
 
   connection.onInitialized(() => {
+    workspaceCheck?.initialized();
     if (features?.configurationRegistration) {
       connection.client.register(DidChangeConfigurationNotification.type, { section: "lonepair" }).catch(() => undefined);
     }
@@ -68,15 +86,20 @@ export function startServer(connection: Connection): void {
     guardedNotification(log, "settings change", (params) => {
       settings.changed(params.settings);
       diagnostics?.settingsChanged();
+      workspaceCheck?.filesMayHaveChanged();
       if (features?.inlayHintRefresh) connection.languages.inlayHint.refresh().catch(() => undefined);
     }),
   );
 
   connection.onExecuteCommand(
-    guarded(log, "command", null, (params, token) =>
-      params.command === SUMMARY_TABLE_COMMAND ? summaryTableCommand(context)(params, token) : null,
-    ),
+    guarded<ExecuteCommandParams, unknown>(log, "command", null, (params, token) => {
+      if (params.command === SUMMARY_TABLE_COMMAND) return summaryTableCommand(context)(params, token);
+      if (params.command === WORKSPACE_CHECK_COMMAND) return workspaceCheck?.runCommand(params, token) ?? null;
+      return null;
+    }),
   );
+
+  connection.onDidChangeWatchedFiles(guardedNotification(log, "watched files change", () => workspaceCheck?.filesMayHaveChanged()));
 
   documents.onDidChangeContent(
     guardedNotification(log, "document change", (event) => {
@@ -90,6 +113,8 @@ export function startServer(connection: Connection): void {
       context.cache.delete(event.document.uri);
       settings.forget(event.document.uri);
       diagnostics?.documentClosed(event.document.uri);
+      // The file is the one on disk again, which may differ from the text the editor had.
+      workspaceCheck?.filesMayHaveChanged();
     }),
   );
   documents.listen(connection);
@@ -108,8 +133,9 @@ function serverCapabilities(features: ClientFeatures): InitializeResult["capabil
       : false,
     inlayHintProvider: features.inlayHints ? { resolveProvider: false } : undefined,
     diagnosticProvider: features.pullDiagnostics
-      ? { identifier: "lonepair", interFileDependencies: false, workspaceDiagnostics: false }
+      ? { identifier: "lonepair", interFileDependencies: false, workspaceDiagnostics: true }
       : undefined,
-    executeCommandProvider: { commands: [SUMMARY_TABLE_COMMAND] },
+    executeCommandProvider: { commands: [SUMMARY_TABLE_COMMAND, WORKSPACE_CHECK_COMMAND] },
+    workspace: { workspaceFolders: { supported: true, changeNotifications: true } },
   };
 }

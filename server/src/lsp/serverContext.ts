@@ -9,6 +9,7 @@ import type { AnalysedDocument, DocumentCache } from "./documentCache";
 import type { ServerLog } from "./guardedHandler";
 import type { ServerSettings } from "./settings";
 import type { SettingsStore } from "./settingsStore";
+import type { WorkspaceFolderPath } from "./workspaceFolders";
 
 export interface ServerContext {
   readonly connection: Connection;
@@ -18,6 +19,8 @@ export interface ServerContext {
   readonly log: ServerLog;
   /** Known once `initialize` has been answered. */
   clientFeatures(): ClientFeatures;
+  /** The editor's open folders on disk (empty before `initialize`). */
+  workspaceFolders(): readonly WorkspaceFolderPath[];
 }
 
 /** An open document that lonepair is enabled for, with its model and settings. */
