@@ -4,7 +4,15 @@
  * analysis and with Lewis structures as textbooks draw them.
  */
 import { describe, expect, it } from "vitest";
-import { analyzeSmiles, analyzeSpecies, chargeLabel, lewisDiagram, type LewisDiagram, type SpeciesAnalysis } from "../../shared/src/index";
+import {
+  analyzeSmiles,
+  analyzeSpecies,
+  chargeLabel,
+  hoverMarkdown,
+  lewisDiagram,
+  type LewisDiagram,
+  type SpeciesAnalysis,
+} from "../../shared/src/index";
 import { parseXml, type XmlElement } from "../support/parseXml";
 
 function analysed(text: string): SpeciesAnalysis {
@@ -330,5 +338,42 @@ describe("Lewis diagram: themes", () => {
     const result = lewisDiagram(analysed(chain));
     expect(result.ok).toBe(false);
     if (!result.ok) expect(result.message).toMatch(/at most \d+/);
+  });
+});
+
+describe("Lewis diagram in the hover card", () => {
+  const imageOf = (card: string, alt: string): string | undefined => {
+    const start = card.indexOf(`![${alt}`);
+    if (start < 0) return undefined;
+    const uri = card.slice(card.indexOf("](", start) + 2, card.indexOf(")", card.indexOf("](", start)));
+    return Buffer.from(uri.slice(uri.indexOf(",") + 1), "base64").toString("utf8");
+  };
+
+  it("shows SF4's diagram as an SVG data image beside the sketch, with every dot of its lone pairs", () => {
+    const card = hoverMarkdown(analysed("SF4"), { angleDecimals: 1 });
+    const svg = imageOf(card, "Lewis structure of SF4");
+    expect(svg, "a Lewis image in the card").toBeDefined();
+    // from memory: Housecroft and Sharpe, Inorganic Chemistry, ch. 2 (SF4: one lone pair on S, three on each F)
+    expect(parseXml(svg!).filter((element) => element.attributes.class === "electron").length).toBe(26);
+    // Both pictures share one line, so the card grows by no line for the diagram.
+    const pictureLine = card.split("\n").find((line) => line.includes("![Lewis structure"));
+    expect(pictureLine).toContain("![ball-and-stick sketch");
+    expect(card.length).toBeLessThan(100_000);
+  });
+
+  it("keeps the hover diagram small: at most 220 px on its longer side", () => {
+    const card = hoverMarkdown(analysed("smiles:CC(=O)Oc1ccccc1C(=O)O"), { angleDecimals: 1 });
+    const svg = imageOf(card, "Lewis structure of");
+    expect(svg).toBeDefined();
+    const root = parseXml(svg!)[0];
+    expect(Math.max(Number(root.attributes.width), Number(root.attributes.height))).toBeLessThanOrEqual(220);
+  });
+
+  it.each([
+    ["a plain-text client", "SF4", "plaintext"],
+    ["a species of more than 24 atoms", `smiles:${"C".repeat(10)}`, "markdown"],
+  ] as const)("leaves the diagram out for %s", (_, text, format) => {
+    const card = hoverMarkdown(analysed(text), { angleDecimals: 1, format });
+    expect(card).not.toContain("Lewis structure of");
   });
 });

@@ -14,6 +14,7 @@ import type {
 } from "../chemistry/types";
 import { isotopeNote, stateNote } from "./notationNotes";
 import { shapeSketchSvg, svgDataUri } from "./shapeSketch";
+import { lewisDiagram } from "./lewisDiagram";
 import { compositeKind, distinctAnalysedParts, innerParts, roleWords } from "./compositeParts";
 import { partShapeText } from "../chemistry/analysis/partShapes";
 import { vibrationsOf } from "../chemistry/vibrations/speciesVibrations";
@@ -48,6 +49,14 @@ const MAX_CARD_LENGTH = 20_000;
  * cut at MAX_CARD_LENGTH never falls inside its URI.
  */
 const MAX_SKETCH_LENGTH = 16_000;
+
+/**
+ * The Lewis diagram joins the hover for species up to this many atoms: beyond it the diagram is
+ * too dense to read at hover size, and the card would wait for its layout.
+ */
+const MAX_HOVER_LEWIS_ATOMS = 24;
+/** Largest side of the hover's Lewis diagram, in pixels. */
+const HOVER_LEWIS_SIZE = 220;
 
 /** Writes an angle in degrees with a fixed number of decimals, e.g. "109.5°". */
 export function formatAngle(degrees: number, decimals: number): string {
@@ -88,8 +97,8 @@ export function hoverMarkdown(analysis: SpeciesAnalysis, options: HoverMarkdownO
   lines.push("");
   const notation = notationLine(analysis, markup);
   if (notation) lines.push(notation, "");
-  const sketch = markup.images ? sketchLine(analysis) : undefined;
-  if (sketch) lines.push(sketch, "");
+  const pictures = markup.images ? picturesLine(analysis) : undefined;
+  if (pictures) lines.push(pictures, "");
   lines.push(electronLine(analysis));
   lines.push("");
   const measured = measuredLines(analysis.measuredAngles.slice(0, MAX_LISTED), options.angleDecimals, markup);
@@ -185,6 +194,28 @@ function titleLine(analysis: SpeciesAnalysis, markup: Markup): string {
   const formula = markup.code(analysis.reading.formula);
   const name = analysis.reading.name;
   return name ? `${markup.strong(markup.text(name))} · ${formula}` : markup.strong(formula);
+}
+
+/**
+ * The Lewis diagram and the ball-and-stick sketch side by side, as markdown images (editors drop
+ * raw HTML and remote SVG in hovers); together they stay within MAX_SKETCH_LENGTH, the sketch
+ * taking precedence, since the card's cut must never fall inside a URI.
+ */
+function picturesLine(analysis: SpeciesAnalysis): string | undefined {
+  const sketch = sketchLine(analysis);
+  const lewis = lewisLine(analysis);
+  if (lewis && (sketch?.length ?? 0) + lewis.length + 1 <= MAX_SKETCH_LENGTH) return sketch ? `${lewis} ${sketch}` : lewis;
+  return sketch;
+}
+
+/** The Lewis diagram as a markdown image, its alt text from the core; undefined for large species. */
+function lewisLine(analysis: SpeciesAnalysis): string | undefined {
+  // A lone atom's dots say no more than the card's electron count; keep its card short.
+  const atomCount = analysis.graph.atoms.length;
+  if (atomCount < 2 || atomCount > MAX_HOVER_LEWIS_ATOMS) return undefined;
+  const result = lewisDiagram(analysis, { maxSize: HOVER_LEWIS_SIZE });
+  if (!result.ok) return undefined;
+  return `![${escapeMarkdown(result.diagram.altText)}](${svgDataUri(result.diagram.svg)})`;
 }
 
 /** A markdown image (editors drop raw HTML and remote SVG in hovers), alt text naming the shape. */

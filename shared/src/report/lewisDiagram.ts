@@ -32,6 +32,11 @@ export interface LewisDiagramOptions {
   readonly form?: number;
   /** Colours (default `plate`). */
   readonly theme?: DiagramTheme;
+  /**
+   * Largest width or height in pixels at which the picture is shown; a larger diagram is scaled
+   * down to fit (the drawing keeps its proportions). Default: natural size.
+   */
+  readonly maxSize?: number;
 }
 
 /** A drawn Lewis diagram and what it shows. */
@@ -92,7 +97,7 @@ export function lewisDiagram(analysis: SpeciesAnalysis, options: LewisDiagramOpt
   const layout = layoutOf(analysis, graph);
   const theme = options.theme ?? "plate";
   const altText = altTextOf(analysis, form);
-  const drawing = draw(graph, layout, analysis.reading.charge, analysis.resonanceForms, form, theme, altText);
+  const drawing = draw(graph, layout, analysis.reading.charge, analysis.resonanceForms, form, theme, altText, options.maxSize);
   return {
     ok: true,
     diagram: {
@@ -164,6 +169,7 @@ function draw(
   form: number,
   theme: DiagramTheme,
   altText: string,
+  maxSize: number | undefined,
 ): { svg: string; width: number; height: number } {
   // Pixel positions, y down.
   const at: Point[] = layout.positions.map((point) => ({ x: point.x * SCALE, y: -point.y * SCALE }));
@@ -274,13 +280,16 @@ function draw(
 
   const width = Math.ceil(right - left);
   const height = Math.ceil(bottom - top);
+  const fit = maxSize !== undefined && maxSize > 0 ? Math.min(1, maxSize / Math.max(width, height)) : 1;
+  const shownWidth = Math.max(1, Math.round(width * fit));
+  const shownHeight = Math.max(1, Math.round(height * fit));
   const ink = THEME_INK[theme];
   const plate =
     theme === "plate"
       ? `<rect class="plate" x="${round(left)}" y="${round(top)}" width="${width}" height="${height}" rx="6" fill="#ffffff"/>`
       : "";
   const svg = [
-    `<svg xmlns="http://www.w3.org/2000/svg" width="${width}" height="${height}" viewBox="${round(left)} ${round(top)} ${width} ${height}" role="img" aria-label="${escapeXml(altText)}">`,
+    `<svg xmlns="http://www.w3.org/2000/svg" width="${shownWidth}" height="${shownHeight}" viewBox="${round(left)} ${round(top)} ${width} ${height}" role="img" aria-label="${escapeXml(altText)}">`,
     `<title>${escapeXml(altText)}</title>`,
     `<desc>${escapeXml(MODEL_CAUTION)}</desc>`,
     plate,
@@ -305,5 +314,5 @@ function draw(
   ]
     .filter((line) => line.length > 0)
     .join("\n");
-  return { svg, width, height };
+  return { svg, width: shownWidth, height: shownHeight };
 }
