@@ -6,7 +6,7 @@
  * UTF-16), so the fixture puts multi-byte characters before the species on purpose.
  */
 import { spawn, spawnSync } from "node:child_process";
-import { existsSync, mkdtempSync, readFileSync, rmSync } from "node:fs";
+import { cpSync, existsSync, mkdtempSync, readFileSync, rmSync } from "node:fs";
 import { tmpdir } from "node:os";
 import { join } from "node:path";
 import { fileURLToPath } from "node:url";
@@ -45,6 +45,12 @@ interface NeovimReport {
     readonly error?: string;
   }[];
   readonly coordinates?: { readonly word: string; readonly text?: string; readonly extension?: string; readonly error?: string };
+  readonly workspace?: {
+    readonly error?: string;
+    readonly result?: { readonly files: number; readonly checked: number; readonly problems: number; readonly cancelled: boolean };
+    readonly diagnostics: readonly { readonly file: string; readonly lnum: number; readonly col: number; readonly code?: string }[];
+    readonly progress_titles: readonly string[];
+  };
 }
 
 interface NeovimRun {
@@ -67,7 +73,7 @@ const title =
 if (!haveNeovim && !inCi) console.warn(`tests/editors/neovim.test.ts skipped: ${SKIP_REASON}`);
 
 /** Runs the Lua script in headless Neovim with its own state folders, killed after a timeout. */
-function runNeovim(resultPath: string, homeDir: string): Promise<NeovimRun> {
+function runNeovim(resultPath: string, homeDir: string, workspace: string): Promise<NeovimRun> {
   return new Promise((resolve) => {
     const child = spawn("nvim", ["--headless", "--clean", "-n", "-c", `luafile ${SCRIPT}`], {
       cwd: ROOT,
@@ -82,6 +88,7 @@ function runNeovim(resultPath: string, homeDir: string): Promise<NeovimRun> {
         LONEPAIR_DOCUMENT: DOCUMENT,
         LONEPAIR_HOVER_WORDS: HOVER_WORDS.join(","),
         LONEPAIR_RESULT: resultPath,
+        LONEPAIR_WORKSPACE: workspace,
         LONEPAIR_TIMEOUT_MS: "15000",
       },
     });
@@ -114,6 +121,7 @@ function locate(text: string, needle: string): { line: number; byteColumn: numbe
 describe.skipIf(!haveNeovim && !inCi)(title, () => {
   const documentText = readFileSync(DOCUMENT, "utf8");
   let workDir: string;
+  let workspace: string;
   let run: NeovimRun;
   let report: NeovimReport;
 
@@ -121,7 +129,10 @@ describe.skipIf(!haveNeovim && !inCi)(title, () => {
     expect(existsSync(SERVER), "dist/server.js is missing: run `npm run build` first").toBe(true);
     workDir = mkdtempSync(join(tmpdir(), "lonepair-nvim-"));
     const resultPath = join(workDir, "report.json");
-    run = await runNeovim(resultPath, workDir);
+    // The lab's project folder: the documents every edge is compared on.
+    workspace = join(workDir, "lab");
+    cpSync(join(ROOT, "tests", "fixtures", "edges"), workspace, { recursive: true });
+    run = await runNeovim(resultPath, workDir, workspace);
     expect(run.startError, `nvim could not be started: ${SKIP_REASON}`).toBeUndefined();
     expect(run.timedOut, `nvim did not finish within ${NVIM_TIMEOUT_MS} ms\n${run.stderr}`).toBe(false);
     expect(existsSync(resultPath), `nvim wrote no report (exit ${run.exitCode})\n${run.stderr}`).toBe(true);
@@ -134,7 +145,7 @@ describe.skipIf(!haveNeovim && !inCi)(title, () => {
 
   it("runs every step of the script and exits cleanly", () => {
     expect(report.error, `script failed after steps ${report.steps.join(", ")}`).toBeUndefined();
-    expect(report.steps).toEqual(["opened", "started", "initialized", "diagnostics", "hovers", "coordinates", "stopped"]);
+    expect(report.steps).toEqual(["opened", "started", "initialized", "diagnostics", "hovers", "coordinates", "workspace", "stopped"]);
     expect(run.exitCode).toBe(0);
     // The markdown file type is what Neovim sends as the languageId.
     expect(report.filetype).toBe("markdown");
@@ -190,5 +201,25 @@ describe.skipIf(!haveNeovim && !inCi)(title, () => {
         .map((line) => line.trim().split(/\s+/)[0])
         .sort(),
     ).toEqual(["F", "F", "F", "F", "S"]);
+  });
+
+  it("checks every file of the workspace folder with the server's command, as the README shows", () => {
+    expect(report.workspace?.error).toBeUndefined();
+    // The command line reads the same folder with the same search: its findings are the expected ones.
+    const cli = spawnSync(process.execPath, [join(ROOT, "dist", "cli.js"), "check", "--format", "json", "."], {
+      cwd: workspace,
+      encoding: "utf8",
+    });
+    const expected = (JSON.parse(cli.stdout) as { file: string; line: number; column: number; code: string }[])
+      .map((finding) => `${finding.file} ${finding.line - 1} ${finding.code}`)
+      .sort();
+    expect(expected.length).toBeGreaterThan(0);
+    expect(report.workspace?.result).toMatchObject({ files: 5, checked: 5, problems: expected.length, cancelled: false });
+    const seen = (report.workspace?.diagnostics ?? [])
+      .map((diagnostic) => `${diagnostic.file} ${diagnostic.lnum} ${diagnostic.code}`)
+      .sort();
+    expect(seen).toEqual(expected);
+    // Neovim showed the server's work-done progress.
+    expect(report.workspace?.progress_titles).toContain("lonepair: checking workspace files");
   });
 });

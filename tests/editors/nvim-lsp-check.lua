@@ -7,6 +7,7 @@
 --   LONEPAIR_DOCUMENT     absolute path of the document to open
 --   LONEPAIR_HOVER_WORDS  comma-separated words to hover on (the first match of each, as a whole word)
 --   LONEPAIR_RESULT       file that receives the JSON report
+--   LONEPAIR_WORKSPACE    absolute path of the project folder (the server's workspace folder)
 --   LONEPAIR_TIMEOUT_MS   how long to wait for each step (default 10000)
 --
 -- Positions are reported as Neovim sees them: 0-based lines and 0-based byte columns for
@@ -15,6 +16,7 @@
 local server_path = os.getenv("LONEPAIR_SERVER")
 local document_path = os.getenv("LONEPAIR_DOCUMENT")
 local result_path = os.getenv("LONEPAIR_RESULT")
+local workspace_path = os.getenv("LONEPAIR_WORKSPACE")
 local hover_words = vim.split(os.getenv("LONEPAIR_HOVER_WORDS") or "", ",", { trimempty = true })
 local timeout_ms = tonumber(os.getenv("LONEPAIR_TIMEOUT_MS") or "") or 10000
 
@@ -124,6 +126,36 @@ local function coordinates_of(client, bufnr, word)
   return { word = word, text = response.result.file.text, extension = response.result.file.extension }
 end
 
+-- The workspace check, run as the README's :LonepairCheckWorkspace runs it: the server's command,
+-- which publishes the diagnostics of every file it checks. Reports the command's answer, the
+-- diagnostics Neovim then holds for files in the workspace folder, and the progress titles seen.
+local function check_workspace(client, bufnr)
+  local response, err = client.request_sync(
+    "workspace/executeCommand",
+    { command = "lonepair.checkWorkspaceFolders", arguments = {} },
+    timeout_ms,
+    bufnr
+  )
+  if response == nil then
+    return { error = tostring(err) }
+  elseif response.err ~= nil then
+    return { error = vim.inspect(response.err) }
+  end
+  local entry = { result = response.result, diagnostics = {}, progress_titles = {} }
+  for _, diagnostic in ipairs(vim.diagnostic.get()) do
+    local name = vim.api.nvim_buf_get_name(diagnostic.bufnr)
+    if vim.startswith(name, workspace_path .. "/") then
+      local plain = plain_diagnostic(diagnostic)
+      plain.file = name:sub(#workspace_path + 2)
+      table.insert(entry.diagnostics, plain)
+    end
+  end
+  for _, progress in pairs(client.messages and client.messages.progress or {}) do
+    table.insert(entry.progress_titles, progress.title)
+  end
+  return entry
+end
+
 local function run()
   assert(server_path and document_path and result_path, "LONEPAIR_SERVER, LONEPAIR_DOCUMENT and LONEPAIR_RESULT must be set")
   -- -u NONE / --clean leave file type detection off; the file type becomes the LSP languageId.
@@ -136,7 +168,7 @@ local function run()
   local client_id = vim.lsp.start_client({
     name = "lonepair",
     cmd = { "node", server_path, "--stdio" },
-    root_dir = vim.fn.fnamemodify(document_path, ":p:h"),
+    root_dir = workspace_path or vim.fn.fnamemodify(document_path, ":p:h"),
   })
   assert(client_id, "vim.lsp.start_client did not start the server")
   assert(vim.lsp.buf_attach_client(bufnr, client_id), "vim.lsp.buf_attach_client failed")
@@ -170,6 +202,11 @@ local function run()
     report.coordinates = coordinates_of(client, bufnr, hover_words[1])
   end
   step("coordinates")
+
+  if workspace_path then
+    report.workspace = check_workspace(client, bufnr)
+  end
+  step("workspace")
 
   client.stop()
   report.stopped = vim.wait(timeout_ms, function()
