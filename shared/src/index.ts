@@ -32,6 +32,8 @@ export { analyzeOccurrence } from "./document/analyzeOccurrence";
 export { analyzeOccurrenceSafely, internalErrorProblem, occurrenceAt, speciesAtOffset } from "./document/speciesAt";
 export type { SpeciesAtOffset } from "./document/speciesAt";
 export { checkDocument } from "./document/checkDocument";
+export { findingsInParts } from "./document/findingsInParts";
+export type { FindingPartsOptions } from "./document/findingsInParts";
 export { documentKindFor } from "./document/documentKind";
 export { memoisedReader } from "./document/speciesReader";
 export type { SpeciesReader } from "./document/speciesReader";

@@ -38,14 +38,7 @@ export function analyzeDocument(
     problems = readByKind(source, kind, read, sink, options);
   } catch (error) {
     // Every reader is written not to throw; this keeps a document usable if one still does.
-    problems = [
-      {
-        range: { start: 0, end: 0 },
-        severity: "error",
-        code: "document-unreadable",
-        message: `lonepair could not read this document: ${error instanceof Error ? error.message : String(error)}`,
-      },
-    ];
+    problems = [documentUnreadable(error)];
   }
   return {
     kind,
@@ -74,8 +67,18 @@ function readByKind(text: string, kind: DocumentKind, read: SpeciesReader, sink:
   }
 }
 
+/** The one problem reported when a reader throws after all. */
+export function documentUnreadable(error: unknown): Finding {
+  return {
+    range: { start: 0, end: 0 },
+    severity: "error",
+    code: "document-unreadable",
+    message: `lonepair could not read this document: ${error instanceof Error ? error.message : String(error)}`,
+  };
+}
+
 /** Sorted by start; scanners mostly emit in order already, so this is close to linear. */
-function inDocumentOrder(occurrences: SpeciesOccurrence[]): SpeciesOccurrence[] {
+export function inDocumentOrder(occurrences: SpeciesOccurrence[]): SpeciesOccurrence[] {
   for (let index = 1; index < occurrences.length; index++) {
     if (occurrences[index].range.start < occurrences[index - 1].range.start) {
       return [...occurrences].sort((a, b) => a.range.start - b.range.start);

@@ -15,6 +15,17 @@ import type { DocumentModel, Finding, SpeciesOccurrence, UnreadableSpecies } fro
 
 /** Findings for `model`, with `analyze` working out each distinct species once. */
 export function checkDocument(model: DocumentModel, analyze: (text: string) => AnalysisResult = analyzeSpecies): Finding[] {
+  return documentChecker(analyze)(model);
+}
+
+/** Distinct species texts a checker remembers; past this many it starts afresh. */
+const CHECKER_MEMO_LIMIT = 20_000;
+
+/**
+ * A `checkDocument` that keeps its analyses from call to call, for a document checked part by
+ * part: the findings of each part are those the whole document gives inside that part.
+ */
+export function documentChecker(analyze: (text: string) => AnalysisResult = analyzeSpecies): (model: DocumentModel) => Finding[] {
   const memo = new Map<string, AnalysisResult>();
   const analysisOf = (occurrence: SpeciesOccurrence): AnalysisResult | undefined => {
     let result = memo.get(occurrence.text);
@@ -24,11 +35,19 @@ export function checkDocument(model: DocumentModel, analyze: (text: string) => A
       } catch (error) {
         result = { ok: false, problem: { code: "no-valid-structure", message: String(error) } };
       }
+      if (memo.size >= CHECKER_MEMO_LIMIT) memo.clear();
       memo.set(occurrence.text, result);
     }
     return result;
   };
+  return (model) => checkModel(model, analysisOf, analyze);
+}
 
+function checkModel(
+  model: DocumentModel,
+  analysisOf: (occurrence: SpeciesOccurrence) => AnalysisResult | undefined,
+  analyze: AnalyzeText,
+): Finding[] {
   // A name beside a formula for the same species would repeat the formula's note: say it once, on the formula.
   const echoes = new Set<SpeciesOccurrence>();
   for (const record of model.records) {

@@ -4,7 +4,7 @@
  */
 import type { TextRange } from "../chemistry/types";
 import { scanProse } from "./scanProse";
-import type { SpeciesReader } from "./speciesReader";
+import type { ScanSteps, SpeciesReader } from "./speciesReader";
 import { isFormulaHeader, meaningOfHeader, namesSpecies } from "./tables/headers";
 import { addRecord, type RecordField, type RecordSink } from "./tables/records";
 
@@ -47,9 +47,16 @@ function trimmed(text: string, start: number, end: number): TextRange {
 
 /**
  * Reads the table whose header line is `lines[0]` (the delimiter row is `lines[1]`); `lines` are
- * the [start, end) ranges of the table's lines.
+ * the [start, end) ranges of the table's lines. Pauses between rows whenever `sink` holds at least
+ * `pauseAt` items (see `ScanSteps`).
  */
-export function scanMarkdownTable(text: string, lines: readonly TextRange[], read: SpeciesReader, sink: RecordSink): void {
+export function* markdownTableSteps(
+  text: string,
+  lines: readonly TextRange[],
+  read: SpeciesReader,
+  sink: RecordSink,
+  pauseAt: number,
+): ScanSteps {
   const header = tableCells(text, lines[0].start, lines[0].end);
   const columns = header.map((cell) => {
     const title = text.slice(cell.start, cell.end);
@@ -59,6 +66,7 @@ export function scanMarkdownTable(text: string, lines: readonly TextRange[], rea
   const hasSpeciesColumn = columns.some((column) => namesSpecies(column?.meaning));
   for (const cell of header) if (!columns[header.indexOf(cell)]) scanProse(text, cell.start, cell.end, sink, read);
   for (const line of lines.slice(2)) {
+    if (sink.occurrences.length + sink.unreadable.length + sink.records.length >= pauseAt) yield line.start;
     const cells = tableCells(text, line.start, line.end);
     const fields: RecordField[] = [];
     cells.forEach((cell, index) => {

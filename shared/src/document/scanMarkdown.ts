@@ -4,10 +4,10 @@
  * pipe tables (records when a column names species), and everything else scanned as prose.
  */
 import type { TextRange } from "../chemistry/types";
-import { isDelimiterRow, scanMarkdownTable } from "./markdownTable";
+import { isDelimiterRow, markdownTableSteps } from "./markdownTable";
 import { scanMhchemBody } from "./mhchemSpan";
-import { scanProse } from "./scanProse";
-import type { SpeciesReader } from "./speciesReader";
+import { proseSteps, scanProse } from "./scanProse";
+import type { ScanSteps, SpeciesReader } from "./speciesReader";
 import type { RecordSink } from "./tables/records";
 
 const CHEMISTRY_FENCES = new Set(["chem", "mhchem", "ce"]);
@@ -29,6 +29,17 @@ export type MarkdownBlock =
 /** Scans a whole markdown document into `sink`. */
 export function scanMarkdown(text: string, read: SpeciesReader, sink: RecordSink): void {
   for (const block of markdownBlocks(text)) scanMarkdownBlock(text, block, read, sink);
+}
+
+/**
+ * `scanMarkdown` that pauses whenever `sink` holds at least `pauseAt` items, at a point where
+ * nothing found later starts before the offset it yields (see `ScanSteps`).
+ */
+export function* markdownSteps(text: string, read: SpeciesReader, sink: RecordSink, pauseAt: number): ScanSteps {
+  for (const block of markdownBlocks(text)) {
+    if (sink.occurrences.length + sink.unreadable.length + sink.records.length >= pauseAt) yield block.start;
+    yield* markdownBlockSteps(text, block, read, sink, pauseAt);
+  }
 }
 
 /**
@@ -100,9 +111,14 @@ export function markdownBlocks(text: string): MarkdownBlock[] {
 
 /** Scans one block of `text` (found by `markdownBlocks`) into `sink`, with offsets into `text`. */
 export function scanMarkdownBlock(text: string, block: MarkdownBlock, read: SpeciesReader, sink: RecordSink): void {
+  for (const _ of markdownBlockSteps(text, block, read, sink, Infinity));
+}
+
+/** `scanMarkdownBlock` that pauses whenever `sink` holds at least `pauseAt` items (see `ScanSteps`). */
+function* markdownBlockSteps(text: string, block: MarkdownBlock, read: SpeciesReader, sink: RecordSink, pauseAt: number): ScanSteps {
   switch (block.kind) {
     case "prose":
-      scanProse(text, block.start, block.end, sink, read);
+      yield* proseSteps(text, block.start, block.end, sink, read, pauseAt);
       return;
     case "frontMatter":
       for (const value of block.values) scanProse(text, value.start, value.end, sink, read);
@@ -111,6 +127,7 @@ export function scanMarkdownBlock(text: string, block: MarkdownBlock, read: Spec
       if (!block.chemistry) return;
       let position = block.bodyStart;
       while (position < block.bodyEnd) {
+        if (sink.occurrences.length + sink.unreadable.length >= pauseAt) yield position;
         const lineEnd = endOfLine(text, position);
         scanMhchemBody(text, position, lineEnd, read, sink);
         position = lineEnd + 1;
@@ -118,7 +135,7 @@ export function scanMarkdownBlock(text: string, block: MarkdownBlock, read: Spec
       return;
     }
     case "table":
-      scanMarkdownTable(text, block.lines, read, sink);
+      yield* markdownTableSteps(text, block.lines, read, sink, pauseAt);
   }
 }
 

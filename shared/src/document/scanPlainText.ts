@@ -5,8 +5,8 @@
  * the content of other directives (".. note::") included, is prose.
  */
 import { scanLatexMath } from "./latexMathSpan";
-import { scanProse } from "./scanProse";
-import type { ScanSink, SpeciesReader } from "./speciesReader";
+import { proseSteps } from "./scanProse";
+import type { ScanSink, ScanSteps, SpeciesReader } from "./speciesReader";
 
 /** Directives whose indented content is code or math, not prose (a ".. note::" holds prose). */
 const CODE_DIRECTIVES: ReadonlySet<string> = new Set([
@@ -25,6 +25,11 @@ const CODE_DIRECTIVES: ReadonlySet<string> = new Set([
 
 /** Scans a whole plain-text document into `sink`. */
 export function scanPlainText(text: string, read: SpeciesReader, sink: ScanSink): void {
+  for (const _ of plainTextSteps(text, read, sink, Infinity));
+}
+
+/** `scanPlainText` that pauses whenever `sink` holds at least `pauseAt` items (see `ScanSteps`). */
+export function* plainTextSteps(text: string, read: SpeciesReader, sink: ScanSink, pauseAt: number): ScanSteps {
   let proseStart = 0;
   let position = 0;
   while (position < text.length) {
@@ -37,7 +42,7 @@ export function scanPlainText(text: string, read: SpeciesReader, sink: ScanSink)
       const blockEnd = indentedBlockEnd(text, blockStart, indentOf(line));
       if (blockEnd > blockStart) {
         // The opening line's own text ("Run it like this::") is still prose.
-        scanProse(text, proseStart, lineEnd, sink, read);
+        yield* proseSteps(text, proseStart, lineEnd, sink, read, pauseAt);
         if (/^\s*\.\.\s+math::/.test(line)) scanMathLines(text, blockStart, blockEnd, read, sink);
         proseStart = blockEnd;
         position = blockEnd;
@@ -46,7 +51,7 @@ export function scanPlainText(text: string, read: SpeciesReader, sink: ScanSink)
     }
     position = lineEnd + 1;
   }
-  scanProse(text, proseStart, text.length, sink, read);
+  yield* proseSteps(text, proseStart, text.length, sink, read, pauseAt);
 }
 
 function endOfLine(text: string, position: number): number {

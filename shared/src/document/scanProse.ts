@@ -14,7 +14,7 @@ import { isPartOfCode, isWordContext } from "./proseContext";
 import { isConfidentToken, needsCalmContext, shapeOf } from "./proseTokenRules";
 import { isOccurrence, smilesAt, smilesOccurrence } from "./smilesSpan";
 import { newNameScanState, scanNamesInChunk, type NameScanState } from "./proseNames";
-import { emptySink, memoisedReader, occurrenceAt, unreadableAt, type ScanSink, type SpeciesReader } from "./speciesReader";
+import { emptySink, memoisedReader, occurrenceAt, unreadableAt, type ScanSink, type ScanSteps, type SpeciesReader } from "./speciesReader";
 import type { SpeciesOccurrence } from "./types";
 
 /** Chunks longer than this are pasted data (base64, hashes, minified text), not words. */
@@ -54,6 +54,14 @@ interface ProseScan {
 
 /** Scans `text[start, end)` and adds what it finds to `sink`, with offsets into `text`. */
 export function scanProse(text: string, start: number, end: number, sink: ScanSink, read: SpeciesReader): void {
+  for (const _ of proseSteps(text, start, end, sink, read, Infinity));
+}
+
+/**
+ * `scanProse` that pauses whenever `sink` holds at least `pauseAt` items, yielding the offset it
+ * goes on from: whatever it adds to `sink` later starts there or after.
+ */
+export function* proseSteps(text: string, start: number, end: number, sink: ScanSink, read: SpeciesReader, pauseAt: number): ScanSteps {
   const scan: ProseScan = {
     text,
     end,
@@ -67,6 +75,7 @@ export function scanProse(text: string, start: number, end: number, sink: ScanSi
   };
   let index = start;
   while (index < end) {
+    if (sink.occurrences.length + sink.unreadable.length >= pauseAt) yield index;
     const code = text.charCodeAt(index);
     if (isSpaceCode(code)) {
       index++;

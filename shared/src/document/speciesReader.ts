@@ -57,6 +57,12 @@ export interface ScanSink {
   readonly unreadable: UnreadableSpecies[];
 }
 
+/**
+ * A scan that pauses now and then (see `proseSteps`): each value is the offset the scan goes on
+ * from, and nothing it adds to its sink afterwards starts before that offset.
+ */
+export type ScanSteps = Generator<number, void, void>;
+
 export function emptySink(): ScanSink {
   return { occurrences: [], unreadable: [] };
 }

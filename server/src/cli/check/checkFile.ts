@@ -84,10 +84,12 @@ export async function checkFile(file: DocumentFile, options: CheckOptions, outpu
             : `${file.displayPath}: not fixed: the file is UTF-16, and fixes are written into UTF-8 files only`,
         );
       }
-      const findings = batchModel(batch, file.kind, context).findings();
-      let lines: LineIndex = batch.lines;
-      let reported: readonly Finding[] = findings;
-      if (fixing) {
+      const model = batchModel(batch, file.kind, context);
+      if (!fixing) {
+        // Findings go out as the core hands them over: millions of them are never held at once.
+        for (const part of model.findingParts()) foundHere += await report(outputs, file.displayPath, batch.lines, part);
+      } else {
+        const findings = model.findings();
         const { fixed, remaining } = chooseFixes(batch.text, findings);
         const fixes = fixed.map((finding) => finding.fix);
         const fixedText = applyFixes(batch.text, fixes);
@@ -98,22 +100,16 @@ export async function checkFile(file: DocumentFile, options: CheckOptions, outpu
         }
         await writer?.add(batch.byteOffset, batch.text, fixedText, fixes.length > 0);
         fixedHere += fixes.length;
+        let lines: LineIndex = batch.lines;
+        let reported: readonly Finding[] = remaining;
         if (fixes.length > 0) {
           const moved = movedLines(batch, fixedText, lineShift);
           lines = moved.lines;
           lineShift = moved.lineShift;
           const moveOffset = fixedOffsets(fixes);
           reported = remaining.map((finding) => movedFinding(finding, moveOffset));
-        } else {
-          reported = remaining;
         }
-      }
-      foundHere += reported.length;
-      for (let start = 0; start < reported.length; start += REPORT_CHUNK) {
-        const chunk = reported.length <= REPORT_CHUNK ? reported : reported.slice(start, start + REPORT_CHUNK);
-        for (const finding of chunk) countFinding(outputs.summary, finding.severity);
-        outputs.reporter.findings(chunk.map((finding) => locateFinding(file.displayPath, lines, finding)));
-        if (start + REPORT_CHUNK < reported.length) await outputs.drain?.();
+        foundHere += await report(outputs, file.displayPath, lines, reported);
       }
       outputs.progress(batch.byteOffset + (utf8 ? Buffer.byteLength(batch.text) : 2 * batch.text.length));
       await outputs.drain?.();
@@ -124,6 +120,17 @@ export async function checkFile(file: DocumentFile, options: CheckOptions, outpu
     throw error;
   }
   finishFile(outputs, foundHere, fixing, fixedHere);
+}
+
+/** Counts and reports `findings`, a chunk at a time, waiting while the output is backed up. */
+async function report(outputs: CheckOutputs, displayPath: string, lines: LineIndex, findings: readonly Finding[]): Promise<number> {
+  for (let start = 0; start < findings.length; start += REPORT_CHUNK) {
+    const chunk = findings.length <= REPORT_CHUNK ? findings : findings.slice(start, start + REPORT_CHUNK);
+    for (const finding of chunk) countFinding(outputs.summary, finding.severity);
+    outputs.reporter.findings(chunk.map((finding) => locateFinding(displayPath, lines, finding)));
+    await outputs.drain?.();
+  }
+  return findings.length;
 }
 
 function finishFile(outputs: CheckOutputs, found: number, fixing: boolean, fixed: number): void {

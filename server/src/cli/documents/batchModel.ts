@@ -4,7 +4,7 @@
  * of the batch for its header) yields is dropped: it was reported with the first batch.
  */
 import { analyzeDocument } from "../../../../shared/src/index";
-import { checkDocument } from "../../../../shared/src/index";
+import { checkDocument, findingsInParts } from "../../../../shared/src/index";
 import type { SpeciesReader } from "../../../../shared/src/index";
 import { checkDelimitedText, moved, type DelimitedRowMemo } from "../../../../shared/src/index";
 import type { DocumentKind, DocumentModel, Finding, SpeciesOccurrence } from "../../../../shared/src/index";
@@ -15,6 +15,11 @@ export interface BatchModel {
   readonly occurrences: readonly SpeciesOccurrence[];
   /** Problems of the text itself and the checks' findings, in document order. */
   findings(): Finding[];
+  /**
+   * The same findings a part at a time, in document order: a document with millions of them is
+   * never held whole. A table batch comes as one part (a batch is small already).
+   */
+  findingParts(): Iterable<readonly Finding[]>;
 }
 
 /** What a file's batches share. */
@@ -42,15 +47,36 @@ export function batchModel(batch: DocumentBatch, kind: DocumentKind, context: Ba
         .map((occurrence) => local(occurrence)));
     },
     findings() {
-      if (kind === "csv" || kind === "tsv") {
-        // Rows are checked once per distinct content; the result is the same as the whole reading's.
-        const found = checkDelimitedText(text, kind, { delimiter: batch.delimiter, from: shift, memo: context.rows, read: context.read });
-        return shift === 0 ? found : found.map((finding) => moved(finding, -shift));
-      }
+      if (kind === "csv" || kind === "tsv") return delimitedFindings();
       const current = modelOf();
-      const findings = [...current.problems, ...checkDocument(current)].filter(own).map((finding) => moved(finding, -shift));
-      // Problems of the text and the checks' findings come in two lists; report them in document order.
-      return findings.sort((a, b) => a.range.start - b.range.start || a.range.end - b.range.end);
+      return inDocumentOrder([...current.problems, ...checkDocument(current)]);
+    },
+    *findingParts() {
+      if (kind === "csv" || kind === "tsv") {
+        yield delimitedFindings();
+        return;
+      }
+      // Markdown and plain text come in parts that follow one another through the text, so
+      // sorting each part sorts the whole.
+      for (const part of findingsInParts(text, kind, { read: context.read, delimiter: batch.delimiter })) yield inDocumentOrder(part);
     },
   };
+
+  function delimitedFindings(): Finding[] {
+    // Rows are checked once per distinct content; the result is the same as the whole reading's.
+    const found = checkDelimitedText(text, kind as "csv" | "tsv", {
+      delimiter: batch.delimiter,
+      from: shift,
+      memo: context.rows,
+      read: context.read,
+    });
+    return shift === 0 ? found : found.map((finding) => moved(finding, -shift));
+  }
+
+  /** Own findings only, in offsets of the batch's text, in document order. */
+  function inDocumentOrder(findings: readonly Finding[]): Finding[] {
+    const local = findings.filter(own).map((finding) => moved(finding, -shift));
+    // Problems of the text and the checks' findings come in two lists; report them in document order.
+    return local.sort((a, b) => a.range.start - b.range.start || a.range.end - b.range.end);
+  }
 }
