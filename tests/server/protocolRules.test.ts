@@ -223,6 +223,26 @@ describe("diagnostics per document are capped", () => {
     expect(summary[0].range.start.line).toBe(1000);
   });
 
+  it("stops looking through a document once the shown errors are settled, and says the count is a lower bound", async () => {
+    const uri = fixtureUri("notebook/endless-mistakes.md");
+    const lines = 20_000;
+    pushing.open(uri, "markdown", noteWithImpossibleSpecies(lines));
+    const published = await pushing.waitForDiagnostics(uri, undefined, 60_000);
+    expect(published.diagnostics).toHaveLength(1001);
+    const summary = published.diagnostics.find((diagnostic) => diagnostic.code === LIMIT_CODE);
+    const message = String(summary?.message ?? "");
+    const counted = /^At least ([\d,]+) more problems/.exec(message);
+    expect(counted, `the summary should give a lower bound, got: ${message}`).not.toBeNull();
+    const leftOut = Number(counted![1].replace(/,/g, ""));
+    // Every line holds one CH5, so exactly lines - 1000 are left out; fewer were looked at.
+    expect(leftOut).toBeGreaterThan(0);
+    expect(leftOut).toBeLessThan(lines - 1000);
+    expect(summary!.range.start.line).toBe(1000);
+    expect(
+      published.diagnostics.filter((diagnostic) => diagnostic.code !== LIMIT_CODE).map((diagnostic) => diagnostic.range.start.line),
+    ).toEqual(Array.from({ length: 1000 }, (_, line) => line));
+  });
+
   it.each([
     [10, 25, 11],
     [10, 10, 10],

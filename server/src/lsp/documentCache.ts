@@ -33,6 +33,11 @@ export interface AnalysedDocument {
   readonly binary: boolean;
   /** The core's findings for this version, plus a note when the document was cut. */
   findings(): readonly Finding[];
+  /**
+   * The same findings a part at a time, worked out only as far as the caller reads: diagnostics
+   * that show a capped number never build the rest of a document full of findings.
+   */
+  findingParts(): Iterable<readonly Finding[]>;
 }
 
 export interface DocumentCache {
@@ -151,6 +156,15 @@ export function analyseDocument(
     findings() {
       findings ??= [...truncationNote(truncatedAt), ...analysis.findings()];
       return findings;
+    },
+    *findingParts() {
+      if (findings) {
+        yield findings;
+        return;
+      }
+      const note = truncationNote(analysis.truncatedAt);
+      if (note.length > 0) yield note;
+      yield* analysis.findingParts();
     },
   };
 }

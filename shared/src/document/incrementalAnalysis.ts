@@ -14,6 +14,7 @@
 import { analysedTextOf, MAX_ANALYSED_LENGTH } from "./analysedText";
 import { analyzeDocument } from "./analyzeDocument";
 import { checkDocument } from "./checkDocument";
+import { findingsInParts } from "./findingsInParts";
 import { sliceOf, wholeText, type ChunkedText, type TextChunk } from "./chunkedText";
 import { markdownBlocks, scanMarkdownBlock, type MarkdownBlock } from "./scanMarkdown";
 import { memoisedReader, type SpeciesReader } from "./speciesReader";
@@ -32,6 +33,11 @@ export interface DocumentAnalysis {
   readonly binary: boolean;
   /** The problems of the text and the checks' findings, in document order. */
   findings(): readonly Finding[];
+  /**
+   * The same findings a part at a time, in document order; where they are not worked out yet,
+   * only as far as the caller reads (see `findingsInParts`).
+   */
+  findingParts(): Iterable<readonly Finding[]>;
   /** The whole document's model (for a large table this reads every row: prefer the two below). */
   model(): DocumentModel;
   /** The model of the segments that overlap `start`..`end`: what a request about that stretch needs. */
@@ -85,6 +91,14 @@ function wholeAnalysis(
     binary: flags.binary ?? false,
     truncatedAt: flags.truncatedAt,
     findings: () => (findings ??= sortedFindings([...modelOf().problems, ...checkDocument(modelOf())])),
+    *findingParts() {
+      if (findings || model || flags.binary) {
+        yield this.findings();
+        return;
+      }
+      // Markdown and plain text parts follow one another through the text: sorting each sorts the whole.
+      for (const part of findingsInParts(text, kind, { read })) yield sortedFindings([...part]);
+    },
     model: modelOf,
     modelAround: modelOf,
     speciesAt: (offset) => speciesAtOffset(modelOf(), offset),
@@ -185,6 +199,9 @@ function tableSegments(kind: "csv" | "tsv", read: SpeciesReader): (text: Chunked
         findings = all;
         return findings;
       },
+      findingParts() {
+        return [this.findings()];
+      },
       model: () => (model ??= joinedModels(kind, segments.map(modelOf))),
       modelAround: around,
       speciesAt(offset) {
@@ -281,6 +298,7 @@ function markdownSegments(read: SpeciesReader): (text: string) => DocumentAnalys
       kind: "markdown",
       binary: false,
       findings: () => (findings ??= parts.flatMap((part) => part.findings)),
+      findingParts: () => (findings ? [findings] : parts.map((part) => part.findings)),
       model: modelOf,
       modelAround: modelOf,
       speciesAt: (offset) => speciesAtOffset(modelOf(), offset),

@@ -65,7 +65,7 @@ async function currentDiagnostics(
   const enabled = await enabledDocument(context, uri);
   if (!enabled) return undefined;
   const { document, analysed, settings } = enabled;
-  const items = diagnosticsOf(document, cappedFindings(analysed.findings(), settings.diagnostics.maxPerDocument));
+  const items = diagnosticsOf(document, cappedFindings(analysed.findingParts(), settings.diagnostics.maxPerDocument));
   return { version: document.version, revision: analysed.revision, items };
 }
 
@@ -75,25 +75,59 @@ const SEVERITY_RANK: Readonly<Record<FindingSeverity, number>> = { error: 0, war
  * Keeps the `limit` most serious findings (earlier first among equals), in document order, and
  * adds one finding that says how many were left out, at the first of them. A document full of
  * impossible species must not become a message of many megabytes sent on every pause in typing.
+ * `parts` are the findings in document order, a part at a time: at most `limit` of each severity
+ * are held, and once `limit` errors are in hand nothing later could be shown, so the rest of the
+ * document is not worked out and the summary gives the count found so far as a lower bound.
  */
-export function cappedFindings(findings: readonly Finding[], limit: number): readonly Finding[] {
-  if (findings.length <= limit) return findings;
-  const rank = (finding: Finding): number => SEVERITY_RANK[finding.severity] ?? SEVERITY_RANK.information;
-  const order = findings.map((_, index) => index);
-  order.sort((a, b) => rank(findings[a]) - rank(findings[b]) || findings[a].range.start - findings[b].range.start || a - b);
-  const kept = order.slice(0, limit).sort((a, b) => findings[a].range.start - findings[b].range.start || a - b);
-  const left = order.slice(limit);
-  const firstLeft = left.reduce((first, index) => (findings[index].range.start < findings[first].range.start ? index : first), left[0]);
-  const mostSeriousLeft = findings[left[0]].severity;
+export function cappedFindings(parts: Iterable<readonly Finding[]>, limit: number): readonly Finding[] {
+  const keptByRank: { finding: Finding; order: number }[][] = [[], [], [], []];
+  const firstDropped: (Finding | undefined)[] = [];
+  let dropped = 0;
+  let order = 0;
+  let stoppedEarly = false;
+  for (const part of parts) {
+    if (keptByRank[0].length >= limit) {
+      // Errors rank first and the earliest win: whatever comes later is left out whatever it is.
+      // One more part says that there is more; the rest of the document is not worked out.
+      if (part.length === 0) continue;
+      dropped += part.length;
+      firstDropped[rankOf(part[0])] ??= part[0];
+      stoppedEarly = true;
+      break;
+    }
+    for (const finding of part) {
+      const rank = rankOf(finding);
+      const kept = keptByRank[rank];
+      if (kept.length < limit) kept.push({ finding, order: order++ });
+      else {
+        dropped++;
+        firstDropped[rank] ??= finding;
+      }
+    }
+  }
+  const ranked = keptByRank.flat();
+  if (ranked.length <= limit && dropped === 0) return ranked.sort((a, b) => a.order - b.order).map((entry) => entry.finding);
+  const shown = ranked.slice(0, limit).sort((a, b) => a.finding.range.start - b.finding.range.start || a.order - b.order);
+  const cut = ranked.slice(limit).map((entry) => entry.finding);
+  // The most serious left out: the first cut one (ranked first), or a dropped one of a higher rank.
+  const leftOut = [...cut, ...firstDropped.filter((finding): finding is Finding => finding !== undefined)];
+  const mostSerious = leftOut.reduce((best, finding) => (rankOf(finding) < rankOf(best) ? finding : best), leftOut[0]);
+  const firstStart = Math.min(...leftOut.map((finding) => finding.range.start));
+  const count = (cut.length + dropped).toLocaleString("en-US");
   const summary: Finding = {
-    range: { start: findings[firstLeft].range.start, end: findings[firstLeft].range.start },
-    severity: mostSeriousLeft === "error" || mostSeriousLeft === "warning" ? "warning" : "information",
+    range: { start: firstStart, end: firstStart },
+    severity: mostSerious.severity === "error" || mostSerious.severity === "warning" ? "warning" : "information",
     code: "diagnostics-limit-reached",
     message:
-      `${left.length.toLocaleString("en-US")} more problems in this document are not shown: ` +
-      `lonepair shows at most ${limit.toLocaleString("en-US")} per document (setting lonepair.diagnostics.maxPerDocument).`,
+      `${stoppedEarly ? `At least ${count}` : count} more problems in this document are not shown: ` +
+      `lonepair shows at most ${limit.toLocaleString("en-US")} per document (setting lonepair.diagnostics.maxPerDocument)` +
+      (stoppedEarly ? ", and stops looking once it has that many errors." : "."),
   };
-  return [...kept.map((index) => findings[index]), summary];
+  return [...shown.map((entry) => entry.finding), summary];
+}
+
+function rankOf(finding: Finding): number {
+  return SEVERITY_RANK[finding.severity] ?? SEVERITY_RANK.information;
 }
 
 function registerPull(context: ServerContext): DiagnosticsFeature {
