@@ -63,7 +63,14 @@ export { coordinateFileOf, missingModelReason, shapeViewModelOf } from "./report
 export { geometryHints, geometryLabel, isProseKind } from "./report/geometryHints";
 export type { GeometryHint } from "./report/geometryHints";
 export type { CoordinateFile, CoordinateFileResult, CoordinateFormat } from "./report/speciesModel";
-export { SUMMARY_COLUMNS, createSummaryCollector, isSummaryColumn, summaryEntryOf, summaryTable } from "./report/summaryTable";
+export {
+  OPTIONAL_SUMMARY_COLUMNS,
+  SUMMARY_COLUMNS,
+  createSummaryCollector,
+  isSummaryColumn,
+  summaryEntryOf,
+  summaryTable,
+} from "./report/summaryTable";
 export type {
   SpeciesWithParts,
   SummaryCollector,

@@ -30,7 +30,15 @@ export type ColumnMeaning =
   | "molecularGeometry"
   | "bondAngle"
   | "hybridization"
-  | "polarity";
+  | "polarity"
+  /** Fundamentals expected in the IR spectrum (one band per occurrence of an IR-active symmetry). */
+  | "irBands"
+  /** Fundamentals expected in the Raman spectrum. */
+  | "ramanBands"
+  /** IR-active fundamentals, written as bands or with degenerate modes counted singly. */
+  | "irActiveModes"
+  /** Normal modes: 3N − 6, or 3N − 5 for a linear molecule. */
+  | "vibrationalModes";
 
 /** One value cell of a record, with the exact range of the value (without quotes). */
 export interface TableCell {

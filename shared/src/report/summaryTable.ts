@@ -8,10 +8,21 @@ import { analyzeOccurrenceSafely } from "../document/speciesAt";
 import type { SpeciesOccurrence } from "../document/types";
 import { compositeKind, leafParts } from "./compositeParts";
 import { HOVER_CAUTION, formatAngle } from "./hoverMarkdown";
+import { vibrationsOf } from "../chemistry/vibrations/speciesVibrations";
 
 /** A column the table can show. */
 export type SummaryColumn =
-  "formula" | "name" | "valenceElectrons" | "axe" | "electronGeometry" | "molecularGeometry" | "idealAngles" | "hybridization" | "polarity";
+  | "formula"
+  | "name"
+  | "valenceElectrons"
+  | "axe"
+  | "electronGeometry"
+  | "molecularGeometry"
+  | "idealAngles"
+  | "hybridization"
+  | "polarity"
+  | "irBands"
+  | "ramanBands";
 
 export type SummaryFormat = "markdown" | "csv" | "tsv";
 
@@ -28,6 +39,10 @@ export const SUMMARY_COLUMNS: readonly SummaryColumn[] = [
   "polarity",
 ];
 
+/** Columns shown only when asked for: the IR and Raman band counts of the vibrational analysis. */
+export const OPTIONAL_SUMMARY_COLUMNS: readonly SummaryColumn[] = ["irBands", "ramanBands"];
+
+// The headers read back as the columns the table checks know, so a pasted table is checked too.
 const COLUMN_HEADERS: Readonly<Record<SummaryColumn, string>> = {
   formula: "Formula",
   name: "Name",
@@ -38,6 +53,8 @@ const COLUMN_HEADERS: Readonly<Record<SummaryColumn, string>> = {
   idealAngles: "Ideal angles",
   hybridization: "Hybridization",
   polarity: "Polarity",
+  irBands: "IR bands",
+  ramanBands: "Raman bands",
 };
 
 /** A species that could not be analysed, listed under a markdown table. */
@@ -75,7 +92,10 @@ export interface SummaryTableInput {
 
 /** True for a string that names a known column. */
 export function isSummaryColumn(value: unknown): value is SummaryColumn {
-  return typeof value === "string" && (SUMMARY_COLUMNS as readonly string[]).includes(value);
+  return (
+    typeof value === "string" &&
+    ((SUMMARY_COLUMNS as readonly string[]).includes(value) || (OPTIONAL_SUMMARY_COLUMNS as readonly string[]).includes(value))
+  );
 }
 
 /** Builds the table text. An empty or unknown column list falls back to every column. */
@@ -125,7 +145,17 @@ function cellText(entry: SummaryEntry, column: SummaryColumn, decimals: number):
       return perCentre(analysis.centres, (centre) => centre.hybridization);
     case "polarity":
       return analysis.polarity.undetermined ? "not judged" : analysis.polarity.polar ? "polar" : "nonpolar";
+    case "irBands":
+    case "ramanBands":
+      return bandCount(analysis, column);
   }
+}
+
+/** The band count, or empty where the vibrations are not predicted. */
+function bandCount(analysis: SpeciesAnalysis, column: "irBands" | "ramanBands"): string {
+  const result = vibrationsOf(analysis);
+  if (!result.ok) return "";
+  return String(column === "irBands" ? result.value.irBands : result.value.ramanBands);
 }
 
 /**
@@ -141,7 +171,9 @@ function partsCellText(entry: SpeciesWithParts, column: SummaryColumn, decimals:
   for (const part of leafParts(entry.parts)) {
     const analysis = part.analysis?.ok ? part.analysis.value : undefined;
     let value: string;
-    if (column === "molecularGeometry" || analysis === undefined) {
+    if (column === "irBands" || column === "ramanBands") {
+      value = analysis === undefined ? "" : bandCount(analysis, column);
+    } else if (column === "molecularGeometry" || analysis === undefined) {
       value = column === "molecularGeometry" ? partShapeText(part) : "";
     } else {
       value = perCentre(analysis.centres, (centre) => centreValue(centre, column, decimals), ", ", " ");

@@ -2,12 +2,9 @@
  * The vibrational analysis in words, shared by the text card, the hover and the JSON: one
  * decision about how modes and band counts are written.
  */
-import type { ModeSymmetry, VibrationalModes, VibrationalModesResult } from "../chemistry/vibrations/normalModes";
+import { modeSum, type ModeSymmetry, type VibrationalModes, type VibrationalModesResult } from "../chemistry/vibrations/normalModes";
 
-/** "2A1 + B2": the symmetry species with their counts, in character-table order. */
-export function modeSum(modes: readonly ModeSymmetry[]): string {
-  return modes.map((mode) => `${mode.count > 1 ? mode.count : ""}${mode.symmetry}`).join(" + ");
-}
+export { modeSum };
 
 function bands(count: number): string {
   return `${count} band${count === 1 ? "" : "s"}`;

@@ -39,6 +39,10 @@ const DESCRIPTIONS: Readonly<Record<string, string>> = {
   "table-bond-angle": "A table's bond angle is far from the model's range.",
   "table-hybridization": "A table's hybridization disagrees with the model.",
   "table-polarity": "A table's polarity disagrees with the model.",
+  "table-ir-bands": "A table's count of IR bands disagrees with the symmetry prediction.",
+  "table-raman-bands": "A table's count of Raman bands disagrees with the symmetry prediction.",
+  "table-ir-active-modes": "A table's count of IR-active modes disagrees with the symmetry prediction.",
+  "table-vibrational-modes": "A table's count of vibrational modes is not 3N - 6 (3N - 5 if linear).",
 };
 
 /** The sentence for `code`. */

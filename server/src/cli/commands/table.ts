@@ -5,14 +5,23 @@
  * analysed, 2 on a usage or I/O error.
  */
 import { statSync } from "node:fs";
-import { MODEL_CAUTION, analyzeTyped, createSummaryCollector, summaryTable } from "../../../../shared/src/index";
+import {
+  MODEL_CAUTION,
+  OPTIONAL_SUMMARY_COLUMNS,
+  SUMMARY_COLUMNS,
+  analyzeTyped,
+  createSummaryCollector,
+  isSummaryColumn,
+  summaryTable,
+  type SummaryColumn,
+} from "../../../../shared/src/index";
 import type { CliCommand, CliIo } from "../cliCommand";
 import { EXIT_FAILURE, EXIT_OK, EXIT_USAGE, parseCommandLine, usageError } from "../cliCommand";
 import { speciesInFile } from "../documents/documentSpecies";
 import { findDocuments, ioMessage } from "../../files/findDocuments";
 import { terminalSafe, terminalSafeLines } from "../terminalText";
 
-const HELP = `Usage: lonepair table [--format md|csv] <files, folders or species...>
+const HELP = `Usage: lonepair table [--format md|csv] [--columns <list>] <files, folders or species...>
 
 Prints the geometry summary table (formula, name, valence electrons, AXE class, electron and
 molecular geometry, ideal angles, hybridization, polarity) of every species in the files, and
@@ -22,6 +31,10 @@ a markdown table (on stderr with --format csv).
 
 Options:
   --format <md|csv>  markdown table (default) or CSV
+  --columns <list>   the columns to show, comma-separated, in order: formula, name,
+                     valenceElectrons, axe, electronGeometry, molecularGeometry, idealAngles,
+                     hybridization, polarity (the default set), and irBands and ramanBands (the
+                     IR and Raman bands expected from the symmetry of the model)
   --help             show this help
 
 Exit status: 0 a table with at least one row, 1 no species could be analysed, 2 usage or I/O error.
@@ -38,8 +51,17 @@ export const tableCommand: CliCommand = {
 };
 
 async function runTable(args: readonly string[], io: CliIo): Promise<number> {
-  const parsed = parseCommandLine(tableCommand, args, io, { format: { type: "string" } });
+  const parsed = parseCommandLine(tableCommand, args, io, { format: { type: "string" }, columns: { type: "string" } });
   if (parsed.exit !== undefined) return parsed.exit;
+  const columns = parsed.values.columns === undefined ? undefined : parsed.values.columns.split(",").map((column) => column.trim());
+  const unknown = columns?.find((column) => !isSummaryColumn(column));
+  if (unknown !== undefined) {
+    return usageError(
+      tableCommand,
+      io,
+      `unknown column '${unknown}' (use ${[...SUMMARY_COLUMNS, ...OPTIONAL_SUMMARY_COLUMNS].join(", ")})`,
+    );
+  }
   const requested = parsed.values.format ?? "md";
   if (!["md", "markdown", "csv"].includes(requested)) return usageError(tableCommand, io, `unknown format '${requested}' (use md or csv)`);
   if (parsed.positionals.length === 0) return usageError(tableCommand, io, "give at least one file, folder or species");
@@ -68,7 +90,17 @@ async function runTable(args: readonly string[], io: CliIo): Promise<number> {
   const format = requested === "csv" ? "csv" : "markdown";
   const analyses = collected.analyses;
   if (analyses.length > 0) {
-    io.writeOut(terminalSafeLines(summaryTable({ analyses, unanalysed: collected.unanalysed, format, angleDecimals: ANGLE_DECIMALS })));
+    io.writeOut(
+      terminalSafeLines(
+        summaryTable({
+          analyses,
+          unanalysed: collected.unanalysed,
+          format,
+          angleDecimals: ANGLE_DECIMALS,
+          columns: columns as SummaryColumn[] | undefined,
+        }),
+      ),
+    );
   }
   if (format === "csv" || analyses.length === 0) {
     for (const item of collected.unanalysed)

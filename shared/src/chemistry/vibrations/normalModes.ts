@@ -56,6 +56,11 @@ export interface VibrationalModes {
 export type VibrationalModesResult =
   { readonly ok: true; readonly value: VibrationalModes } | { readonly ok: false; readonly reason: string };
 
+/** "2A1 + B2": the symmetry species with their counts, in character-table order. */
+export function modeSum(modes: readonly ModeSymmetry[]): string {
+  return modes.map((mode) => `${mode.count > 1 ? mode.count : ""}${mode.symmetry}`).join(" + ");
+}
+
 /** Options for {@link vibrationalModes}. */
 export interface VibrationalModesOptions {
   /** The point group, when already found for these coordinates (saves a second search). */

@@ -10,6 +10,8 @@ import { computedGeometry, normalizeGeometry } from "./geometryText";
 import { hybridizationInStyleOf, normalizeHybridization } from "./hybridizationText";
 import { parsePolarity, polarityInStyleOf } from "./polarityText";
 import { inStyleOf } from "./textStyle";
+import { vibrationsOf } from "../../chemistry/vibrations/speciesVibrations";
+import { modeSum } from "../../chemistry/vibrations/normalModes";
 
 const MODEL = "(VSEPR model prediction)";
 
@@ -114,6 +116,11 @@ function checkCell(cell: TableCell, species: string, analysis: SpeciesAnalysis, 
       return checkPolarity(cell, species, analysis);
     case "bondAngle":
       return centre && checkAngle(cell, species, analysis, centre);
+    case "irBands":
+    case "ramanBands":
+    case "irActiveModes":
+    case "vibrationalModes":
+      return checkVibrationCount(cell, species, analysis);
     default:
       return undefined;
   }
@@ -177,6 +184,46 @@ function checkPolarity(cell: TableCell, species: string, analysis: SpeciesAnalys
     `${species} is ${polar ? "polar" : "nonpolar"} by the model (${analysis.polarity.reason}), the table says ${cell.text}.`,
     polarityInStyleOf(polar, cell.text),
   );
+}
+
+/** "3", "3 bands", "15 modes": a count as a table writes it. */
+const WRITTEN_COUNT = /^(\d+)(\s*)(band|mode|fundamental|vibration)?(s?)$/i;
+
+/**
+ * A count of modes or bands against the symmetry prediction. Checked only where the model's
+ * symmetry is trusted; a number larger than 3N is no count of modes (a wavenumber, say), so it
+ * is left alone. "IR-active modes" is right counted either way: one per band, or each
+ * degenerate mode on its own.
+ */
+function checkVibrationCount(cell: TableCell, species: string, analysis: SpeciesAnalysis): Finding | undefined {
+  const match = WRITTEN_COUNT.exec(cell.text.trim());
+  if (!match) return undefined;
+  const written = Number(match[1]);
+  if (written > 3 * analysis.graph.atoms.length) return undefined;
+  const result = vibrationsOf(analysis);
+  if (!result.ok) return undefined;
+  const value = result.value;
+  const why = `${value.pointGroup}: ${modeSum(value.representation)}; a symmetry prediction from the model`;
+  // "1 band" becomes "2 bands": the unit word follows the new number.
+  const [, , space, unit, plural] = match;
+  const inStyle = (computed: number) => `${computed}${space}${unit ?? ""}${unit ? (computed === 1 ? "" : plural || "s") : ""}`;
+  const fix = (computed: number, code: string, subject: string) =>
+    written === computed
+      ? undefined
+      : mismatch(cell, code, `${subject} for ${species}: ${computed} (${why}), the table says ${cell.text}.`, inStyle(computed));
+  switch (cell.meaning) {
+    case "irBands":
+      return fix(value.irBands, "table-ir-bands", "IR bands expected");
+    case "ramanBands":
+      return fix(value.ramanBands, "table-raman-bands", "Raman bands expected");
+    case "irActiveModes": {
+      const counted = value.representation.filter((mode) => mode.ir).reduce((sum, mode) => sum + mode.count * mode.degeneracy, 0);
+      if (written === counted) return undefined;
+      return fix(value.irBands, "table-ir-active-modes", "IR-active fundamentals");
+    }
+    default:
+      return fix(value.modes, "table-vibrational-modes", "Vibrational modes");
+  }
 }
 
 /** How far a written angle may sit outside the expected range before it is called wrong. */

@@ -171,6 +171,58 @@ const HEADERS: ReadonlyMap<string, ColumnMeaning> = new Map<string, ColumnMeanin
     "polar molecule",
     "molecular polarity",
   ]),
+  ...words("irBands", [
+    "ir bands",
+    "ir band",
+    "number of ir bands",
+    "no of ir bands",
+    "ir band count",
+    "infrared bands",
+    "number of infrared bands",
+    "ir active bands",
+    "ir fundamentals",
+    "ir active fundamentals",
+    "bands in ir",
+    "bands in the ir",
+  ]),
+  ...words("ramanBands", [
+    "raman bands",
+    "raman band",
+    "number of raman bands",
+    "no of raman bands",
+    "raman band count",
+    "raman active bands",
+    "raman fundamentals",
+    "raman active fundamentals",
+    "bands in raman",
+    "bands in the raman",
+  ]),
+  ...words("irActiveModes", [
+    "ir active modes",
+    "ir active mode",
+    "number of ir active modes",
+    "no of ir active modes",
+    "infrared active modes",
+    "ir active vibrations",
+    "ir active",
+  ]),
+  ...words("vibrationalModes", [
+    "vibrational modes",
+    "number of vibrational modes",
+    "no of vibrational modes",
+    "vibrational mode count",
+    "normal modes",
+    "number of normal modes",
+    "no of normal modes",
+    "vibrational degrees of freedom",
+    "3n 6",
+    "3n 5",
+    "3n 6 or 3n 5",
+    "modes",
+    "number of modes",
+    "vibrations",
+    "number of vibrations",
+  ]),
 ]);
 
 function words(meaning: ColumnMeaning, headers: readonly string[]): [string, ColumnMeaning][] {
@@ -181,6 +233,9 @@ const MAX_HEADER = 80;
 
 /** Unit words that may trail a header without brackets: "angle deg", "bond angle degrees". */
 const TRAILING_UNITS = /\s+(?:deg|degs|degree|degrees|in degrees|count|no|number|y n|yes no)$/;
+
+/** Units of band positions: a column with them holds wavenumbers or frequencies, never counts. */
+const WAVENUMBER_UNITS = /cm\s*(?:-|\u2212|\u207b|\^-?)\s*1|cm\u207b\u00b9|wavenumber|frequenc|\bhz\b|position/i;
 
 /** The header reduced to plain lower-case words. */
 export function normalizeHeader(header: string): string {
@@ -202,6 +257,15 @@ export function normalizeHeader(header: string): string {
 export function meaningOfHeader(header: string): ColumnMeaning | undefined {
   // Headers are a few words; anything longer is data, and not worth a regular expression's time.
   if (header.length > MAX_HEADER) return undefined;
+  const meaning = plainMeaningOfHeader(header);
+  // "IR bands (cm-1)" lists band positions, not a count of bands.
+  if (meaning && VIBRATION_COUNTS.has(meaning) && WAVENUMBER_UNITS.test(header)) return undefined;
+  return meaning;
+}
+
+const VIBRATION_COUNTS: ReadonlySet<ColumnMeaning> = new Set(["irBands", "ramanBands", "irActiveModes", "vibrationalModes"]);
+
+function plainMeaningOfHeader(header: string): ColumnMeaning | undefined {
   const normalized = normalizeHeader(header);
   const known = HEADERS.get(normalized) ?? HEADERS.get(normalized.replace(/^(?:the|predicted|expected|ideal|vsepr) /, ""));
   if (known) return known;
