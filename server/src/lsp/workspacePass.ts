@@ -146,7 +146,7 @@ async function checkOne(
     const enabled = await enabledDocument(context, openUri);
     if (enabled) {
       const { document, analysed } = enabled;
-      const diagnostics = diagnosticsOf(document, cappedFindings(analysed.findings(), enabled.settings.diagnostics.maxPerDocument));
+      const diagnostics = diagnosticsOf(document, cappedFindings(analysed.findingParts(), enabled.settings.diagnostics.maxPerDocument));
       return {
         uri: openUri,
         path: file.path,
@@ -162,7 +162,7 @@ async function checkOne(
   if (previous?.get(file.path) === resultId) return { uri, path: file.path, version: null, resultId, open: openUri !== undefined };
   const read = await readDocumentText(file, MAX_ANALYSED_LENGTH);
   const document = TextDocument.create(uri, "", 0, read.text);
-  const findings = analyseDocument(document, file.kind, 0, undefined, read.cutAt).findings();
+  const findings = analyseDocument(document, file.kind, 0, undefined, read.cutAt).findingParts();
   const diagnostics = diagnosticsOf(document, cappedFindings(findings, settings.diagnostics.maxPerDocument));
   return { uri, path: file.path, version: null, resultId, diagnostics, open: openUri !== undefined };
 }
