@@ -12,8 +12,21 @@ const entries = [
   { in: "shared/src/index.ts", out: "core" },
 ].filter((entry) => existsSync(entry.in));
 
-await Promise.all(
-  entries.map((entry) =>
+// The 3D page's renderer, a browser script loaded by the webview next to client/media/shapeView.js.
+const webviewBuild = build({
+  entryPoints: { shapeScene: "client/webview/shapeSceneGlobal.ts" },
+  outdir: "dist/webview",
+  bundle: true,
+  platform: "browser",
+  target: "es2020",
+  format: "iife",
+  minify: true,
+  logLevel: "warning",
+});
+
+await Promise.all([
+  webviewBuild,
+  ...entries.map((entry) =>
     build({
       entryPoints: { [entry.out]: entry.in },
       outdir: "dist",
@@ -29,4 +42,4 @@ await Promise.all(
       logLevel: "warning",
     }),
   ),
-);
+]);

@@ -1,5 +1,6 @@
-// The 3D shape page: draws a shape view model (plain JSON posted by the extension) as a
-// ball-and-stick SVG with an orthographic projection, and rotates it by dragging.
+// The 3D shape page: draws a shape view model (plain JSON posted by the extension) with the
+// core's ball-and-stick renderer (dist/webview/shapeScene.js, loaded first), fits it to the
+// pane as the pane resizes, rotates it by dragging, and saves the current view as SVG.
 // Every piece of text from the document goes in through textContent, never as markup.
 // Every message (and the saved state) is checked before it is drawn: anything malformed
 // shows "No model" with a reason instead of throwing.
@@ -12,23 +13,29 @@
   /** More atoms than any model the extension builds: a message this large is refused unread. */
   const MAX_ATOMS = 20000;
   const host = acquireVsCodeApi();
+  const renderer = globalThis.lonepairShapeScene;
 
   const svg = document.getElementById("model");
   const empty = document.getElementById("empty");
   const modeButtons = Array.from(document.querySelectorAll("button[data-mode]"));
+  const saveButton = document.getElementById("save-svg");
+  /** The scene last drawn: what "Save view as SVG" writes. */
+  let lastScene = null;
+  /** Scale and origin held while the user turns the model, so it does not zoom as it turns. */
+  let heldFrame = null;
 
   /** @type {{ model: any, problem: any, mode: "molecular" | "electron", rotation: number[] }} */
   const state = restoredState(host.getState());
 
   function restoredState(saved) {
-    const fresh = { model: null, problem: null, mode: "molecular", rotation: startingRotation() };
+    const fresh = { model: null, problem: null, mode: "molecular", rotation: IDENTITY };
     if (!isObject(saved)) return fresh;
     const checked = saved.model === null || saved.model === undefined ? { model: null } : checkedModel(saved.model);
     return {
       model: checked.model,
       problem: checked.reason ? noModelProblem(checked.reason) : checkedProblem(saved.problem),
       mode: saved.mode === "electron" ? "electron" : "molecular",
-      rotation: isRotation(saved.rotation) ? saved.rotation : fresh.rotation,
+      rotation: isRotation(saved.rotation) ? saved.rotation : startingRotation(checked.model),
     };
   }
 
@@ -66,7 +73,9 @@
     if (!isText(atom.symbol) || atom.symbol.length === 0) return "an atom has no element symbol";
     if (!isVector(atom.position)) return `atom ${atom.symbol} has no position`;
     if (atom.radius !== undefined && !(isFiniteNumber(atom.radius) && atom.radius > 0)) return `atom ${atom.symbol} has a bad radius`;
-    if (atom.colour !== undefined && !isText(atom.colour)) return `atom ${atom.symbol} has a bad colour`;
+    for (const key of ["colour", "outline", "ink"]) {
+      if (atom[key] !== undefined && !isText(atom[key])) return `atom ${atom.symbol} has a bad ${key}`;
+    }
     return "";
   }
 
@@ -111,6 +120,7 @@
     if (!isText(raw.title) || !isText(raw.formula)) return refuse("the shape data has no title or formula");
     if (raw.name !== undefined && raw.name !== null && !isText(raw.name)) return refuse("the shape data has a bad name");
     if (raw.extent !== undefined && !isFiniteNumber(raw.extent)) return refuse("the shape data has a bad size");
+    if (raw.viewRotation !== undefined && !isRotation(raw.viewRotation)) return refuse("the shape data has a bad starting view");
     const count = raw.atoms.length;
     const bonds = optionalList(raw.bonds);
     const lonePairs = optionalList(raw.lonePairs);
@@ -155,13 +165,25 @@
     return { text: isText(raw.text) ? raw.text : "", message: isText(raw.message) ? raw.message : "" };
   }
 
-  function startingRotation() {
-    // A slight tilt, so a planar or linear species still reads as 3D.
-    return multiply(rotationAbout([1, 0, 0], -22 * DEGREE), rotationAbout([0, 1, 0], 28 * DEGREE));
+  /** The view the core chose from the model's symmetry, the same one the hover sketch shows. */
+  function startingRotation(model) {
+    return model && isRotation(model.viewRotation) ? model.viewRotation.slice() : IDENTITY.slice();
   }
 
   function save() {
     host.setState(state);
+  }
+
+  /** The editor theme's text and background colours as #rrggbb, for labels and depth fading. */
+  function themeColours() {
+    const style = getComputedStyle(document.body);
+    return { foreground: hexOf(style.color, "#d4d4d4"), background: hexOf(style.backgroundColor, "#1e1e1e") };
+  }
+
+  function hexOf(cssColour, fallback) {
+    const match = /^rgba?\((\d+),\s*(\d+),\s*(\d+)(?:,\s*([\d.]+))?\)$/.exec(String(cssColour).trim());
+    if (!match || match[4] === "0") return fallback;
+    return `#${[match[1], match[2], match[3]].map((n) => Number(n).toString(16).padStart(2, "0")).join("")}`;
   }
 
   // ----- small 3x3 matrix helpers (row-major) -----
@@ -193,14 +215,6 @@
     return result;
   }
 
-  function apply(matrix, v) {
-    return [
-      matrix[0] * v[0] + matrix[1] * v[1] + matrix[2] * v[2],
-      matrix[3] * v[0] + matrix[4] * v[1] + matrix[5] * v[2],
-      matrix[6] * v[0] + matrix[7] * v[1] + matrix[8] * v[2],
-    ];
-  }
-
   function isRotation(value) {
     return Array.isArray(value) && value.length === 9 && value.every((n) => typeof n === "number" && Number.isFinite(n));
   }
@@ -212,16 +226,12 @@
     return node;
   }
 
-  function safeColour(colour) {
-    return typeof colour === "string" && /^#[0-9a-fA-F]{6}$/.test(colour) ? colour : "#cccccc";
-  }
-
-  function number(value, fallback) {
-    return typeof value === "number" && Number.isFinite(value) ? value : fallback;
-  }
-
-  function vector(value) {
-    return Array.isArray(value) && value.length === 3 ? value.map((n) => number(n, 0)) : [0, 0, 0];
+  /** A scene node as DOM: attributes set one by one, text only ever as textContent. */
+  function nodeOf(sceneNode) {
+    const node = element(sceneNode.tag, sceneNode.attributes);
+    if (sceneNode.text !== undefined) node.textContent = String(sceneNode.text);
+    for (const child of sceneNode.children || []) node.appendChild(nodeOf(child));
+    return node;
   }
 
   /** Draws the state; should drawing fail all the same, the page says so instead of breaking. */
@@ -242,200 +252,24 @@
     const hasModel = Boolean(model && Array.isArray(model.atoms) && model.atoms.length > 0);
     empty.hidden = hasModel;
     svg.classList.toggle("hidden", !hasModel);
+    saveButton.disabled = !hasModel;
+    lastScene = null;
     if (!hasModel) return;
+    if (!renderer) throw new Error("the renderer did not load");
 
-    const width = svg.clientWidth || 480;
-    const height = svg.clientHeight || 420;
+    const width = Math.round(svg.clientWidth || 480);
+    const height = Math.round(svg.clientHeight || 420);
     svg.setAttribute("viewBox", `0 0 ${width} ${height}`);
-    const scale = (0.46 * Math.min(width, height)) / Math.max(number(model.extent, 1), 0.5);
-    const rotation = isRotation(state.rotation) ? state.rotation : IDENTITY;
-    const project = (position) => {
-      const [x, y, z] = apply(rotation, vector(position));
-      return { x: width / 2 + x * scale, y: height / 2 - y * scale, depth: z };
-    };
-
-    const defs = element("defs");
-    svg.appendChild(defs);
-    const gradientFor = gradientMaker(defs);
-
-    const atoms = model.atoms.map((atom) => ({ atom, screen: project(atom.position) }));
-    const items = [];
-    for (const bond of Array.isArray(model.bonds) ? model.bonds : []) {
-      const from = atoms[bond.from];
-      const to = atoms[bond.to];
-      if (!from || !to) continue;
-      // The stick runs between the balls' surfaces, so it shows only where it leaves a ball.
-      const start = vector(from.atom.position);
-      const end = vector(to.atom.position);
-      const length = Math.hypot(end[0] - start[0], end[1] - start[1], end[2] - start[2]) || 1;
-      const along = (t) => start.map((value, k) => value + ((end[k] - start[k]) * t) / length);
-      const a = project(along(0.92 * number(from.atom.radius, 0.3)));
-      const b = project(along(length - 0.92 * number(to.atom.radius, 0.3)));
-      items.push({ depth: (from.screen.depth + to.screen.depth) / 2, draw: () => drawBond(a, b, number(bond.order, 1), scale) });
-    }
-    const electronView = state.mode === "electron";
-    for (const lonePair of Array.isArray(model.lonePairs) ? model.lonePairs : []) {
-      const owner = atoms[lonePair.atom];
-      if (!owner) continue;
-      if (electronView) {
-        const site = project(lonePair.sitePosition);
-        items.push({ depth: site.depth, draw: () => drawGhostSite(owner, site, scale, lonePair.electrons === 1) });
-      } else {
-        const direction = apply(rotation, vector(lonePair.direction));
-        const length = number(lonePair.lobeLength, 0.7);
-        const origin = vector(owner.atom.position);
-        const tip = project(origin.map((value, k) => value + vector(lonePair.direction)[k] * length));
-        items.push({
-          depth: (owner.screen.depth + tip.depth) / 2,
-          draw: () => drawLobe(owner, direction, length, scale, lonePair.electrons === 1),
-        });
-      }
-    }
-    for (const item of atoms) {
-      items.push({ depth: item.screen.depth, draw: () => drawAtom(item, scale, gradientFor) });
-    }
-    // Painter's order: farthest first (larger depth is nearer the viewer).
-    items.sort((a, b) => a.depth - b.depth);
-    for (const item of items) svg.appendChild(item.draw());
-
-    for (const angle of Array.isArray(model.angles) ? model.angles : []) svg.appendChild(drawAngle(angle, project));
-    // Symbols last, so sticks never cover them; a symbol whose atom is hidden behind a nearer ball is left out.
-    for (const item of atoms) {
-      if (!hiddenBehindNearerBall(item, atoms, scale)) svg.appendChild(drawAtomLabel(item));
-    }
-  }
-
-  function gradientMaker(defs) {
-    const made = new Map();
-    return (colour) => {
-      const safe = safeColour(colour);
-      if (made.has(safe)) return made.get(safe);
-      const id = `shade-${made.size}`;
-      const gradient = element("radialGradient", { id, cx: "35%", cy: "32%", r: "70%" });
-      gradient.appendChild(element("stop", { offset: "0%", "stop-color": "#ffffff", "stop-opacity": 0.85 }));
-      gradient.appendChild(element("stop", { offset: "35%", "stop-color": safe }));
-      gradient.appendChild(element("stop", { offset: "100%", "stop-color": safe, "stop-opacity": 1 }));
-      defs.appendChild(gradient);
-      made.set(safe, id);
-      return id;
-    };
-  }
-
-  function drawAtom(item, scale, gradientFor) {
-    const { atom, screen } = item;
-    const group = element("g", { class: atom.isCentre ? "atom centre" : "atom" });
-    const radius = Math.max(4, number(atom.radius, 0.3) * scale);
-    group.appendChild(
-      element("circle", { cx: screen.x, cy: screen.y, r: radius, fill: `url(#${gradientFor(atom.colour)})`, class: "ball" }),
-    );
-    const title = element("title");
-    title.textContent = String(atom.symbol);
-    group.appendChild(title);
-    return group;
-  }
-
-  function drawAtomLabel(item) {
-    const label = element("text", {
-      x: item.screen.x,
-      y: item.screen.y,
-      class: "atom-label",
-      "text-anchor": "middle",
-      "dominant-baseline": "central",
+    const scene = renderer.shapeScene(model, {
+      width,
+      height,
+      rotation: isRotation(state.rotation) ? state.rotation : IDENTITY,
+      mode: state.mode,
+      theme: themeColours(),
+      frame: heldFrame || undefined,
     });
-    label.textContent = String(item.atom.symbol);
-    return label;
-  }
-
-  function hiddenBehindNearerBall(item, atoms, scale) {
-    return atoms.some(
-      (other) =>
-        other !== item &&
-        other.screen.depth > item.screen.depth &&
-        Math.hypot(other.screen.x - item.screen.x, other.screen.y - item.screen.y) < 0.8 * number(other.atom.radius, 0.3) * scale,
-    );
-  }
-
-  function drawBond(from, to, order, scale) {
-    const group = element("g", { class: "bond" });
-    const dx = to.x - from.x;
-    const dy = to.y - from.y;
-    const length = Math.hypot(dx, dy) || 1;
-    const offsetX = (-dy / length) * Math.max(3, 0.07 * scale);
-    const offsetY = (dx / length) * Math.max(3, 0.07 * scale);
-    const count = Math.max(1, Math.min(3, Math.round(order)));
-    for (let line = 0; line < count; line++) {
-      const shift = line - (count - 1) / 2;
-      group.appendChild(
-        element("line", {
-          x1: from.x + offsetX * shift,
-          y1: from.y + offsetY * shift,
-          x2: to.x + offsetX * shift,
-          y2: to.y + offsetY * shift,
-          class: "stick",
-          "stroke-width": count === 1 ? Math.max(3, 0.09 * scale) : Math.max(2, 0.05 * scale),
-        }),
-      );
-    }
-    return group;
-  }
-
-  function drawLobe(owner, rotatedDirection, length, scale, oddElectron) {
-    // An ellipse along the projected direction; seen end-on it shrinks to a round blob.
-    const along = Math.hypot(rotatedDirection[0], rotatedDirection[1]);
-    const reach = length * scale;
-    const width = 0.26 * scale;
-    const halfLength = Math.max(width, (reach * along) / 2 + width * (1 - along) * 0.6);
-    const angle = (Math.atan2(-rotatedDirection[1], rotatedDirection[0]) * 180) / Math.PI;
-    const centreX = owner.screen.x + rotatedDirection[0] * (reach / 2);
-    const centreY = owner.screen.y - rotatedDirection[1] * (reach / 2);
-    const group = element("g", { class: oddElectron ? "odd-electron lobe" : "lone-pair lobe" });
-    group.appendChild(
-      element("ellipse", {
-        cx: centreX,
-        cy: centreY,
-        rx: halfLength,
-        ry: width,
-        transform: `rotate(${angle} ${centreX} ${centreY})`,
-        class: "lobe-shape",
-      }),
-    );
-    // Two dots side by side across the lobe: the pair of electrons.
-    const screenX = along > 1e-6 ? rotatedDirection[0] / along : 1;
-    const screenY = along > 1e-6 ? -rotatedDirection[1] / along : 0;
-    for (const side of oddElectron ? [0] : [-1, 1]) {
-      const dotX = centreX + screenX * reach * 0.12 - screenY * side * width * 0.4;
-      const dotY = centreY + screenY * reach * 0.12 + screenX * side * width * 0.4;
-      group.appendChild(element("circle", { cx: dotX, cy: dotY, r: Math.max(1.5, 0.045 * scale), class: "electron" }));
-    }
-    const title = element("title");
-    title.textContent = oddElectron ? "odd electron" : "lone pair";
-    group.appendChild(title);
-    return group;
-  }
-
-  function drawGhostSite(owner, site, scale, oddElectron) {
-    const group = element("g", { class: oddElectron ? "odd-electron ghost" : "lone-pair ghost" });
-    group.appendChild(element("line", { x1: owner.screen.x, y1: owner.screen.y, x2: site.x, y2: site.y, class: "ghost-stick" }));
-    group.appendChild(element("circle", { cx: site.x, cy: site.y, r: Math.max(5, 0.24 * scale), class: "ghost-site" }));
-    const title = element("title");
-    title.textContent = oddElectron ? "odd-electron site" : "lone-pair site";
-    group.appendChild(title);
-    return group;
-  }
-
-  function drawAngle(angle, project) {
-    const group = element("g", { class: "angle" });
-    const points = (Array.isArray(angle.arc) ? angle.arc : []).map(project);
-    if (points.length > 1) {
-      group.appendChild(
-        element("polyline", { points: points.map((p) => `${p.x.toFixed(1)},${p.y.toFixed(1)}`).join(" "), class: "angle-arc" }),
-      );
-    }
-    const at = project(angle.labelPosition);
-    const label = element("text", { x: at.x, y: at.y, class: "angle-label", "text-anchor": "middle", "dominant-baseline": "central" });
-    label.textContent = `${number(angle.degrees, 0).toFixed(1)}°`;
-    group.appendChild(label);
-    return group;
+    for (const node of scene.nodes) svg.appendChild(nodeOf(node));
+    lastScene = scene;
   }
 
   // ----- legend -----
@@ -509,6 +343,7 @@
 
   // ----- interaction -----
   function rotateBy(aboutScreenY, aboutScreenX) {
+    if (!heldFrame && lastScene) heldFrame = lastScene.frame;
     const turn = multiply(rotationAbout([1, 0, 0], aboutScreenX), rotationAbout([0, 1, 0], aboutScreenY));
     state.rotation = multiply(turn, isRotation(state.rotation) ? state.rotation : IDENTITY);
     render();
@@ -540,7 +375,8 @@
       save();
       event.preventDefault();
     } else if (event.key === "r" || event.key === "R") {
-      state.rotation = startingRotation();
+      state.rotation = startingRotation(state.model);
+      heldFrame = null;
       render();
       save();
     }
@@ -548,12 +384,24 @@
   for (const button of modeButtons) {
     button.addEventListener("click", () => {
       state.mode = button.dataset.mode === "electron" ? "electron" : "molecular";
+      heldFrame = null;
       render();
       save();
       host.postMessage({ type: "mode", mode: state.mode });
     });
   }
-  window.addEventListener("resize", render);
+  saveButton.addEventListener("click", () => {
+    if (!lastScene || !state.model) return;
+    const svgText = renderer.sceneSvg(lastScene, themeColours().background);
+    host.postMessage({ type: "save-svg", svg: svgText, formula: String(state.model.formula) });
+  });
+  // The pane follows the editor layout: refit whenever the drawing area changes size.
+  const refit = () => {
+    heldFrame = null;
+    render();
+  };
+  if (typeof ResizeObserver === "function") new ResizeObserver(refit).observe(svg);
+  else window.addEventListener("resize", refit);
 
   window.addEventListener("message", (event) => {
     const message = event.data;
@@ -562,6 +410,8 @@
       const checked = checkedModel(message.model);
       state.model = checked.model;
       state.problem = checked.reason ? noModelProblem(checked.reason) : null;
+      state.rotation = startingRotation(checked.model);
+      heldFrame = null;
     } else if (message.type === "problem") {
       state.model = null;
       state.problem = checkedProblem(message);

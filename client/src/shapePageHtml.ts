@@ -10,6 +10,8 @@ export interface ShapePageResources {
   /** A fresh random nonce; the one script tag carries it. */
   readonly nonce: string;
   readonly scriptUri: string;
+  /** The renderer bundle the page script draws with; loaded first. */
+  readonly rendererUri: string;
   readonly styleUri: string;
 }
 
@@ -53,9 +55,11 @@ export function shapePageHtml(resources: ShapePageResources): string {
     <p id="polarity" class="polarity"></p>
     <ul id="warnings" class="warnings"></ul>
     <p id="caution" class="caution"></p>
+    <p class="actions"><button type="button" id="save-svg">Save view as SVG…</button></p>
     <p class="hint">Drag to rotate. Arrow keys rotate too; R resets the view.</p>
   </aside>
 </main>
+<script nonce="${attribute(resources.nonce)}" src="${attribute(resources.rendererUri)}"></script>
 <script nonce="${attribute(resources.nonce)}" src="${attribute(resources.scriptUri)}"></script>
 </body>
 </html>`;

@@ -32,6 +32,8 @@ export function createShapePanelController(
   log: vscode.OutputChannel,
 ): ShapePanelController {
   const mediaRoot = vscode.Uri.joinPath(extensionUri, "client", "media");
+  // The renderer the page draws with: the core's drawing code, bundled for the browser.
+  const rendererRoot = vscode.Uri.joinPath(extensionUri, "dist", "webview");
   let panel: vscode.WebviewPanel | undefined;
   let lastMessage: PageMessage = { type: "clear" };
   let lastKey = "";
@@ -80,19 +82,21 @@ export function createShapePanelController(
       VIEW_TYPE,
       "lonepair: 3D shape",
       { viewColumn: vscode.ViewColumn.Beside, preserveFocus: true },
-      { enableScripts: true, localResourceRoots: [mediaRoot] },
+      { enableScripts: true, localResourceRoots: [mediaRoot, rendererRoot] },
     );
     const webview = created.webview;
     webview.html = shapePageHtml({
       cspSource: webview.cspSource,
       nonce: randomBytes(18).toString("base64"),
       scriptUri: webview.asWebviewUri(vscode.Uri.joinPath(mediaRoot, "shapeView.js")).toString(),
+      rendererUri: webview.asWebviewUri(vscode.Uri.joinPath(rendererRoot, "shapeScene.js")).toString(),
       styleUri: webview.asWebviewUri(vscode.Uri.joinPath(mediaRoot, "shapeView.css")).toString(),
     });
     const subscriptions = [
-      webview.onDidReceiveMessage((message: { type?: unknown }) => {
+      webview.onDidReceiveMessage((message: { type?: unknown; svg?: unknown; formula?: unknown }) => {
         // The page asks once it has loaded (or reloaded after being hidden): give it the current species.
         if (message?.type === "ready") void webview.postMessage(lastMessage);
+        else if (message?.type === "save-svg") void saveViewSvg(message.svg, message.formula, log);
       }),
       created.onDidDispose(() => {
         panel = undefined;
@@ -123,4 +127,33 @@ export function createShapePanelController(
       panel?.dispose();
     },
   };
+}
+
+/** Pictures of a few hundred atoms stay well under this; anything larger is not the page's own. */
+const MAX_SAVED_SVG_LENGTH = 5_000_000;
+
+/** Saves the page's current view where the user chooses; the page's text is checked first. */
+async function saveViewSvg(svg: unknown, formula: unknown, log: vscode.OutputChannel): Promise<void> {
+  if (typeof svg !== "string" || !svg.startsWith("<svg ") || svg.length > MAX_SAVED_SVG_LENGTH) {
+    log.appendLine("3D view: the page sent no picture to save.");
+    return;
+  }
+  const baseName = (typeof formula === "string" ? formula : "").replace(/[^A-Za-z0-9+-]+/g, "_").replace(/^_+|_+$/g, "") || "shape";
+  const folder = vscode.workspace.workspaceFolders?.[0]?.uri;
+  const target = await vscode.window.showSaveDialog({
+    ...(folder ? { defaultUri: vscode.Uri.joinPath(folder, `${baseName}-shape.svg`) } : {}),
+    filters: { "SVG picture": ["svg"] },
+    title: "Save the 3D view as SVG",
+  });
+  if (!target) return;
+  try {
+    await vscode.workspace.fs.writeFile(target, new TextEncoder().encode(svg));
+  } catch (error) {
+    log.appendLine(`3D view: could not write ${target.toString()}: ${String(error)}`);
+    void vscode.window.showErrorMessage(`lonepair: could not write ${target.fsPath || target.toString()}.`);
+    return;
+  }
+  void vscode.window.showInformationMessage(
+    "lonepair: saved the view. Model prediction, not measured data: follow the safety data sheet, local rules and licensed practice.",
+  );
 }

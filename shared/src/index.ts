@@ -60,6 +60,15 @@ export { DIAGRAM_THEMES, MAX_DIAGRAM_ATOMS, chargeLabel, lewisDiagram } from "./
 export type { DiagramTheme, LewisDiagram, LewisDiagramOptions, LewisDiagramResult } from "./report/lewisDiagram";
 export type { ShapeViewModel } from "./report/shapeViewModel";
 export { coordinateFileOf, missingModelReason, shapeViewModelOf } from "./report/speciesModel";
+export { MAX_SKETCH_ATOMS, shapePictureSvg, shapeSketchSvg, svgDataUri } from "./report/shapeSketch";
+export type { ShapePictureOptions, ShapeSketchOptions } from "./report/shapeSketch";
+export { NEUTRAL_THEME, sceneSvg, shapeScene } from "./report/shapeScene";
+export type { PlacedBox, PlacedCircle, SceneFrame, SceneNode, SceneOptions, SceneTheme, ShapeScene } from "./report/shapeScene";
+export { startingOrientation } from "./report/viewOrientation";
+export type { ViewRotation } from "./report/viewOrientation";
+export { DARK_BACKGROUND, LIGHT_BACKGROUND, atomPaint, elementColour, isConventionColour } from "./report/elementPalette";
+export type { AtomPaint } from "./report/elementPalette";
+export { contrastRatio, relativeLuminance } from "./report/colourMath";
 export { geometryHints, geometryLabel, isProseKind } from "./report/geometryHints";
 export type { GeometryHint } from "./report/geometryHints";
 export type { CoordinateFile, CoordinateFileResult, CoordinateFormat } from "./report/speciesModel";

@@ -19,6 +19,8 @@ import { shapeViewModel, type ShapeViewModel } from "../../shared/src/report/sha
 const ORIGIN = "https://lonepair-webview.test";
 const ROOT = fileURLToPath(new URL("../..", import.meta.url));
 const MEDIA = join(ROOT, "client", "media");
+// The renderer bundle the build writes (node esbuild.config.mjs).
+const RENDERER = join(ROOT, "dist", "webview", "shapeScene.js");
 const ARTIFACTS = join(ROOT, ".test-artifacts");
 const INJECTED = "<script>alert(1)</script>";
 
@@ -73,11 +75,13 @@ describe.skipIf(!haveBrowser)("3D shape page in headless Chromium", () => {
       cspSource: ORIGIN,
       nonce,
       scriptUri: `${ORIGIN}/media/shapeView.js`,
+      rendererUri: `${ORIGIN}/webview/shapeScene.js`,
       styleUri: `${ORIGIN}/media/shapeView.css`,
     });
     await page.route(`${ORIGIN}/**`, async (route) => {
       const path = new URL(route.request().url()).pathname;
       if (path === "/index.html") return route.fulfill({ contentType: "text/html", body: html });
+      if (path === "/webview/shapeScene.js") return route.fulfill({ contentType: "text/javascript", body: readFileSync(RENDERER) });
       const file = { "/media/shapeView.js": "text/javascript", "/media/shapeView.css": "text/css" }[path];
       if (!file) return route.fulfill({ status: 404, body: "" });
       return route.fulfill({ contentType: file, body: readFileSync(join(MEDIA, path.slice("/media/".length))) });
@@ -112,7 +116,8 @@ describe.skipIf(!haveBrowser)("3D shape page in headless Chromium", () => {
     expect(await page.locator("g.atom").count()).toBe(5);
     expect(await page.locator("g.lone-pair").count()).toBe(1);
     expect(await page.locator("g.lone-pair.lobe").count()).toBe(1);
-    expect(await page.locator("g.bond").count()).toBe(4);
+    const bondIds = await page.locator("g.bond").evaluateAll((groups) => groups.map((group) => group.getAttribute("data-bond")));
+    expect(new Set(bondIds).size).toBe(4);
     expect(await page.locator(".angle-label").allTextContents()).toEqual(["90.0°", "120.0°", "180.0°"]);
     const legend = await page.locator(".legend").innerText();
     for (const expected of ["AX4E1", "trigonal bipyramidal", "seesaw", "sp3d"]) expect(legend).toContain(expected);
@@ -172,8 +177,8 @@ describe.skipIf(!haveBrowser)("3D shape page in headless Chromium", () => {
     await page.waitForSelector("g.atom");
     expect(await page.locator("#title").textContent()).toBe(INJECTED);
     expect(await page.locator("#warnings li").textContent()).toBe(INJECTED);
-    // One script element only: the page's own.
-    expect(await page.locator("script").count()).toBe(1);
+    // The page's own two script elements only: the renderer and the page script.
+    expect(await page.locator("script").count()).toBe(2);
     expect(await page.locator("img").count()).toBe(0);
     await page.evaluate((message) => (globalThis as unknown as PageGlobals).postMessage(message, "*"), {
       type: "problem",
@@ -181,7 +186,7 @@ describe.skipIf(!haveBrowser)("3D shape page in headless Chromium", () => {
       message: INJECTED,
     });
     expect(await page.locator("#title").textContent()).toBe(INJECTED);
-    expect(await page.locator("script").count()).toBe(1);
+    expect(await page.locator("script").count()).toBe(2);
     await page.waitForTimeout(200);
     expect(dialogs).toEqual([]);
     expect(errors).toEqual([]);

@@ -6,7 +6,9 @@
 import { elementBySymbol } from "../chemistry/elements";
 import { angleDegrees, add, cross, distance, dot, norm, normalize, scale, sub, type Vec3 } from "../chemistry/geometry/vectors";
 import type { SpeciesAnalysis } from "../chemistry/types";
+import { atomPaint } from "./elementPalette";
 import { HOVER_CAUTION } from "./hoverMarkdown";
+import { startingOrientation, type ViewRotation } from "./viewOrientation";
 
 /** 3D positions of a species' atoms (ångströms) and the direction of each lone pair. */
 export interface ShapeCoordinates {
@@ -22,8 +24,12 @@ export interface ShapeViewAtom {
   readonly position: Vec3;
   /** Drawing radius in ångströms (ball-and-stick, not a space-filling radius). */
   readonly radius: number;
-  /** `#rrggbb`. */
+  /** `#rrggbb`, from the one element palette. */
   readonly colour: string;
+  /** `#rrggbb`: the ball's edge, visible on light and dark backgrounds. */
+  readonly outline: string;
+  /** `#rrggbb`: the ink of the element symbol drawn on the ball. */
+  readonly ink: string;
   readonly isCentre: boolean;
 }
 
@@ -89,31 +95,10 @@ export interface ShapeViewModel {
   readonly warnings: readonly string[];
   /** Distance from the origin that holds every atom, ghost site and lobe; the page scales to it. */
   readonly extent: number;
+  /** The starting view, chosen from the model's symmetry: rows are screen right, up and towards the viewer. */
+  readonly viewRotation: ViewRotation;
   readonly caution: string;
 }
-
-/** Conventional CPK colour families (H white, C dark grey, N blue, O red, F/Cl green, S yellow, P orange). */
-const ELEMENT_COLOURS: Readonly<Record<string, string>> = {
-  H: "#f4f4f4",
-  B: "#f2b8a0",
-  C: "#555555",
-  N: "#3a5cf0",
-  O: "#e8281e",
-  F: "#8fdc5a",
-  Si: "#d9b98c",
-  P: "#f28c1c",
-  S: "#e9d334",
-  Cl: "#2fc83a",
-  Br: "#9a2f26",
-  I: "#8a1f9a",
-  Xe: "#3fa3b8",
-  Kr: "#57b9cc",
-  Se: "#f0a020",
-  As: "#b47fd6",
-  Te: "#c0822f",
-};
-const NOBLE_GAS_COLOUR = "#5cc4d6";
-const OTHER_COLOUR = "#d27fc4";
 
 /** How far outside the centre atom's ball the arc runs, and its label beyond that (ångströms). */
 const ARC_CLEARANCE = 0.22;
@@ -134,7 +119,9 @@ export function shapeViewModel(analysis: SpeciesAnalysis, coordinates: ShapeCoor
     symbol: atom.symbol,
     position: roundVector(sub(atom.position, centroid)),
     radius: drawingRadius(atom.symbol),
-    colour: colourOf(atom.symbol),
+    colour: atomPaint(atom.symbol).fill,
+    outline: atomPaint(atom.symbol).outline,
+    ink: atomPaint(atom.symbol).ink,
     isCentre: centreIndices.has(index),
   }));
   const bonds = analysis.graph.bonds
@@ -176,6 +163,7 @@ export function shapeViewModel(analysis: SpeciesAnalysis, coordinates: ShapeCoor
     polarity: { polar: analysis.polarity.polar, reason: analysis.polarity.reason },
     warnings: [...analysis.warnings],
     extent: extentOf(atoms, lonePairs, angles),
+    viewRotation: startingOrientation({ atoms, lonePairs, centres: [...centreIndices].filter((index) => index < atomCount) }),
     caution: HOVER_CAUTION,
   };
 }
@@ -190,12 +178,6 @@ function centroidOf(positions: readonly Vec3[]): Vec3 {
 function drawingRadius(symbol: string): number {
   const covalentPicometres = elementBySymbol(symbol)?.covalentRadius ?? 100;
   return round(0.16 + 0.24 * (covalentPicometres / 100));
-}
-
-function colourOf(symbol: string): string {
-  const known = ELEMENT_COLOURS[symbol];
-  if (known) return known;
-  return elementBySymbol(symbol)?.category === "noble-gas" ? NOBLE_GAS_COLOUR : OTHER_COLOUR;
 }
 
 function neighbourLists(bonds: readonly ShapeViewBond[], atomCount: number): number[][] {
