@@ -233,11 +233,21 @@ export function shapeScene(model: ShapeViewModel, options: SceneOptions): ShapeS
   };
 }
 
+/** Words a standalone picture carries for readers and screen readers. */
+export interface SceneCaption {
+  readonly title?: string;
+  readonly description?: string;
+}
+
 /** The scene as a standalone SVG document: colours inline, text escaped. */
-export function sceneSvg(scene: ShapeScene, background?: string): string {
+export function sceneSvg(scene: ShapeScene, background?: string, caption: SceneCaption = {}): string {
   const backdrop = background && isHexColour(background) ? `<rect width="100%" height="100%" fill="${background}"/>` : "";
+  const words =
+    (caption.title ? `<title>${escapeXml(caption.title)}</title>` : "") +
+    (caption.description ? `<desc>${escapeXml(caption.description)}</desc>` : "");
   return (
     `<svg xmlns="http://www.w3.org/2000/svg" width="${scene.width}" height="${scene.height}" viewBox="0 0 ${scene.width} ${scene.height}">` +
+    words +
     backdrop +
     scene.nodes.map(nodeMarkup).join("") +
     "</svg>"

@@ -3,7 +3,8 @@
  * scripts, no fonts or images fetched, nothing from the document (only element symbols).
  */
 import type { SpeciesAnalysis } from "../chemistry/types";
-import { shapeScene, sceneSvg } from "./shapeScene";
+import type { DiagramTheme } from "./lewisDiagram";
+import { NEUTRAL_THEME, shapeScene, sceneSvg, type SceneTheme } from "./shapeScene";
 import { shapeViewModelOf } from "./speciesModel";
 
 /** Size and labelling of a sketch. */
@@ -57,20 +58,35 @@ export function svgDataUri(svg: string): string {
 }
 
 /** Whole pixels within reason, so the markup never carries NaN or a runaway size. */
-function pixelSize(asked: number | undefined, fallback: number): number {
-  return asked !== undefined && Number.isFinite(asked) ? Math.max(40, Math.min(1000, Math.round(asked))) : fallback;
+function pixelSize(asked: number | undefined, fallback: number, largest = 1000): number {
+  return asked !== undefined && Number.isFinite(asked) ? Math.max(40, Math.min(largest, Math.round(asked))) : fallback;
 }
+
+/** Pixels on a side of a report picture at most. */
+const LARGEST_PICTURE = 4000;
 
 /** Size, view and backdrop of a full picture of a species' shape. */
 export interface ShapePictureOptions {
-  /** Pixels (default 480 × 400). */
+  /** Pixels, 40 to 4000 (default 480 × 400). */
   readonly width?: number;
   readonly height?: number;
   /** Lone pairs as lobes (default) or as empty electron sites. */
   readonly mode?: "molecular" | "electron";
-  /** A `#rrggbb` backdrop; none (transparent) by default. */
-  readonly background?: string;
+  /**
+   * The page it goes on, as for Lewis diagrams: "plate" (default) a white card with dark text,
+   * "light" or "dark" transparent for a page of that kind, "current" transparent with mid-grey
+   * text that reads on either.
+   */
+  readonly theme?: DiagramTheme;
 }
+
+/** Angle-label ink, the colour far atoms fade towards, and the backdrop, for each kind of page. */
+const PICTURE_THEMES: Readonly<Record<DiagramTheme, { readonly scene: SceneTheme; readonly backdrop?: string }>> = {
+  plate: { scene: { foreground: "#333333", background: "#ffffff" }, backdrop: "#ffffff" },
+  light: { scene: { foreground: "#333333", background: "#ffffff" } },
+  dark: { scene: { foreground: "#d4d4d4", background: "#1e1e1e" } },
+  current: { scene: NEUTRAL_THEME },
+};
 
 /**
  * The full ball-and-stick picture of a species (symbols, lone pairs, labelled angles) as a
@@ -79,10 +95,16 @@ export interface ShapePictureOptions {
 export function shapePictureSvg(analysis: SpeciesAnalysis, options: ShapePictureOptions = {}): string | undefined {
   const model = shapeViewModelOf(analysis);
   if (!model) return undefined;
+  const look = PICTURE_THEMES[options.theme ?? "plate"] ?? PICTURE_THEMES.plate;
   const scene = shapeScene(model, {
-    width: pixelSize(options.width, 480),
-    height: pixelSize(options.height, 400),
+    width: pixelSize(options.width, 480, LARGEST_PICTURE),
+    height: pixelSize(options.height, 400, LARGEST_PICTURE),
     mode: options.mode ?? "molecular",
+    theme: look.scene,
   });
-  return sceneSvg(scene, options.background);
+  const geometries = [...new Set(model.centres.map((centre) => centre.molecularGeometry))].join(", ");
+  return sceneSvg(scene, look.backdrop, {
+    title: `Ball-and-stick model of ${model.formula}${geometries ? ` (${geometries})` : ""}`,
+    description: model.caution,
+  });
 }
