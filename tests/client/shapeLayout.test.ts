@@ -70,11 +70,19 @@ interface Box {
   readonly height: number;
 }
 
+interface Segment {
+  readonly x1: number;
+  readonly y1: number;
+  readonly x2: number;
+  readonly y2: number;
+}
+
 interface Layout {
   readonly width: number;
   readonly height: number;
   readonly atoms: readonly Circle[];
   readonly labels: readonly Box[];
+  readonly bonds: readonly Segment[];
 }
 
 /** What the page script sees in the page's global scope (the type-check has no DOM library). */
@@ -119,6 +127,25 @@ function labelsOnAtoms(layout: Layout): string[] {
       const nearestX = Math.max(label.x, Math.min(atom.x, label.x + label.width));
       const nearestY = Math.max(label.y, Math.min(atom.y, label.y + label.height));
       if (Math.hypot(atom.x - nearestX, atom.y - nearestY) < atom.r - 0.5) found.push(`${label.kind} "${label.text}" on atom ${atom.atom}`);
+    }
+  }
+  return found;
+}
+
+/** Angle labels that a bond line runs through (sampled every half pixel along each line). */
+function angleLabelsOnBonds(layout: Layout): string[] {
+  const found: string[] = [];
+  for (const label of layout.labels.filter((box) => box.kind === "angle label")) {
+    for (const bond of layout.bonds) {
+      const steps = Math.max(1, Math.ceil(2 * Math.hypot(bond.x2 - bond.x1, bond.y2 - bond.y1)));
+      for (let step = 0; step <= steps; step++) {
+        const x = bond.x1 + ((bond.x2 - bond.x1) * step) / steps;
+        const y = bond.y1 + ((bond.y2 - bond.y1) * step) / steps;
+        if (x > label.x && x < label.x + label.width && y > label.y && y < label.y + label.height) {
+          found.push(`"${label.text}" crosses a bond at ${x.toFixed(0)},${y.toFixed(0)}`);
+          break;
+        }
+      }
     }
   }
   return found;
@@ -179,7 +206,13 @@ async function layoutIn(page: Page, selector: string): Promise<Layout> {
       }
       return { kind, atom: owner, text: text.textContent ?? "", x: box.x, y: box.y, width: box.width, height: box.height };
     });
-    return { width: viewBox[2], height: viewBox[3], atoms: numbered, labels };
+    const bonds = all(svg, "g.bond line").map((line) => ({
+      x1: Number(line.getAttribute("x1")),
+      y1: Number(line.getAttribute("y1")),
+      x2: Number(line.getAttribute("x2")),
+      y2: Number(line.getAttribute("y2")),
+    }));
+    return { width: viewBox[2], height: viewBox[3], atoms: numbered, labels, bonds };
   }, selector);
 }
 
@@ -224,6 +257,7 @@ describe.skipIf(!haveBrowser)("pictures that read at a glance (headless Chromium
       expect(layout.atoms.length).toBe(modelOf(species).atoms.length);
       expect(overlappingAtoms(layout.atoms), "balls that overlap").toEqual([]);
       expect(labelsOnAtoms(layout), "labels on a ball").toEqual([]);
+      expect(angleLabelsOnBonds(layout), "angle labels on a bond").toEqual([]);
       expect(insidePane(layout)).toEqual([]);
       expect(filledFraction(layout), "share of the pane's smaller side the model spans").toBeGreaterThanOrEqual(0.6);
       await page.screenshot({ path: join(ARTIFACTS, `page-${species.replace(/[^A-Za-z0-9]+/g, "_")}.png`) });

@@ -11,7 +11,7 @@ import { CHROMIUM, launchHeadlessChromium } from "../support/headlessChromium";
 import { afterAll, beforeAll, describe, expect, it } from "vitest";
 import { analyzeSmiles, analyzeSpecies, type SpeciesAnalysis } from "../../shared/src/index";
 import { hoverMarkdown } from "../../shared/src/report/hoverMarkdown";
-import { MAX_SKETCH_ATOMS, shapeSketchSvg, svgDataUri } from "../../shared/src/report/shapeSketch";
+import { MAX_SKETCH_ATOMS, shapePictureSvg, shapeSketchSvg, svgDataUri } from "../../shared/src/report/shapeSketch";
 
 const ARTIFACTS = join(fileURLToPath(new URL("../..", import.meta.url)), ".test-artifacts");
 
@@ -140,6 +140,24 @@ describe("shape sketch", () => {
     const card = hoverMarkdown(dodecane.value, { angleDecimals: 1 });
     expect(card).toContain("](data:image/svg+xml;base64,");
     expect(card.length).toBeLessThan(25_000);
+  });
+
+  /** Ball centres in paint order, moved to their centroid and scaled to unit spread. */
+  function normalisedBalls(svg: string, ballPattern: RegExp): [number, number][] {
+    const centres = [...svg.matchAll(ballPattern)].map((match) => [Number(match[1]), Number(match[2])] as [number, number]);
+    const mean = centres.reduce((sum, [x, y]) => [sum[0] + x / centres.length, sum[1] + y / centres.length], [0, 0]);
+    const spread = Math.sqrt(centres.reduce((sum, [x, y]) => sum + (x - mean[0]) ** 2 + (y - mean[1]) ** 2, 0) / centres.length);
+    return centres.map(([x, y]) => [(x - mean[0]) / spread, (y - mean[1]) / spread]);
+  }
+
+  it.each(["ClF3", "SF4", "XeF4", "NH3", "SF6", "C2H4"])("%s: the sketch shows the same view as the 3D view's picture", (formula) => {
+    const sketchBalls = normalisedBalls(sketch(formula), /<circle cx="([\d.-]+)" cy="([\d.-]+)"/g);
+    const pictureBalls = normalisedBalls(shapePictureSvg(analysis(formula))!, /<circle class="ball" cx="([\d.-]+)" cy="([\d.-]+)"/g);
+    expect(sketchBalls).toHaveLength(pictureBalls.length);
+    sketchBalls.forEach(([x, y], index) => {
+      expect(x).toBeCloseTo(pictureBalls[index][0], 1);
+      expect(y).toBeCloseTo(pictureBalls[index][1], 1);
+    });
   });
 
   it("leaves the image out of a card for a single atom", () => {
