@@ -198,7 +198,14 @@ export function shapeScene(model: ShapeViewModel, options: SceneOptions): ShapeS
       ],
     });
   }
-  nodes.push(...painted.map((item) => item.node));
+  if (compact) {
+    // One group carries the bonds' stroke, so each of the many lines stays short.
+    nodes.push({
+      tag: "g",
+      attributes: { stroke: BOND_COLOUR, "stroke-width": round(bondWidth), "stroke-linecap": "round" },
+      children: painted.map((item) => item.node),
+    });
+  } else nodes.push(...painted.map((item) => item.node));
 
   // Symbols go over everything, except on a ball a nearer ball covers.
   if ((options.atomLabels ?? true) && model.atoms.length > 0) {
@@ -332,6 +339,7 @@ function bondNode(from: Projected, to: Projected, order: number, bondWidth: numb
   const dy = to.y - from.y;
   const length = Math.hypot(dx, dy);
   const lines = Math.max(1, Math.min(3, Math.round(order)));
+  // A compact scene's lines take colour, cap and the single-bond width from the group round them.
   const lineNode = (x1: number, y1: number, x2: number, y2: number, strokeWidth: number): SceneNode => ({
     tag: "line",
     attributes: {
@@ -339,9 +347,8 @@ function bondNode(from: Projected, to: Projected, order: number, bondWidth: numb
       y1: round(y1),
       x2: round(x2),
       y2: round(y2),
-      stroke: BOND_COLOUR,
-      "stroke-width": round(strokeWidth),
-      "stroke-linecap": "round",
+      ...(compact ? {} : { stroke: BOND_COLOUR, "stroke-linecap": "round" }),
+      ...(compact && strokeWidth === bondWidth ? {} : { "stroke-width": round(strokeWidth) }),
     },
   });
   let children: SceneNode[];
