@@ -1,12 +1,13 @@
 /**
  * The lonepair extension: starts the language server and adds what needs the editor itself:
- * the summary-table insertion, the 3D shape panel, the workspace check, coordinate export and a
+ * the summary-table and Lewis-diagram insertions, the 3D shape panel, the workspace check, coordinate export and a
  * status-bar count.
  */
 import * as vscode from "vscode";
 import type { LanguageClient } from "vscode-languageclient/node";
 import { checkWorkspace } from "./commands/checkWorkspace";
 import { exportCoordinates } from "./commands/exportCoordinates";
+import { insertLewisDiagram } from "./commands/insertLewisDiagram";
 import { insertSummaryTable } from "./commands/insertSummaryTable";
 import { showShape } from "./commands/showShape";
 import { startLanguageClient } from "./languageClient";
@@ -34,6 +35,7 @@ export async function activate(context: vscode.ExtensionContext): Promise<void> 
     vscode.commands.registerCommand("lonepair.showShape", () => showShape(shapePanel)),
     vscode.commands.registerCommand("lonepair.checkWorkspace", () => checkWorkspace(started, log)),
     vscode.commands.registerCommand("lonepair.exportCoordinates", () => exportCoordinates(started, log)),
+    vscode.commands.registerCommand("lonepair.insertLewisDiagram", () => insertLewisDiagram(started, log)),
   );
 }
 

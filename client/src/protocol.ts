@@ -7,6 +7,7 @@ import { RequestType } from "vscode-languageclient/node";
 import {
   COORDINATES_METHOD,
   DOCUMENT_SUMMARY_METHOD,
+  LEWIS_FIGURE_METHOD,
   SHAPE_MODEL_METHOD,
   SPECIES_AT_METHOD,
   SUMMARY_TABLE_METHOD,
@@ -14,6 +15,8 @@ import {
   type CoordinatesResult,
   type DocumentSummaryParams,
   type DocumentSummaryResult,
+  type LewisFigureParams,
+  type LewisFigureRequestResult,
   type ShapeModelParams,
   type ShapeModelResult,
   type SpeciesAtParams,
@@ -29,3 +32,4 @@ export const speciesAtRequest = new RequestType<SpeciesAtParams, SpeciesAtResult
 export const shapeModelRequest = new RequestType<ShapeModelParams, ShapeModelResult | null, void>(SHAPE_MODEL_METHOD);
 export const coordinatesRequest = new RequestType<CoordinatesParams, CoordinatesResult | null, void>(COORDINATES_METHOD);
 export const documentSummaryRequest = new RequestType<DocumentSummaryParams, DocumentSummaryResult | null, void>(DOCUMENT_SUMMARY_METHOD);
+export const lewisFigureRequest = new RequestType<LewisFigureParams, LewisFigureRequestResult | null, void>(LEWIS_FIGURE_METHOD);

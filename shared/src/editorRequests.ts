@@ -8,6 +8,8 @@
 import type { SummaryFormat } from "./report/summaryTable";
 import type { ShapeViewModel } from "./report/shapeViewModel";
 import type { CoordinateFile, CoordinateFormat } from "./report/speciesModel";
+import type { DiagramTheme } from "./report/lewisDiagram";
+import type { LewisFigure } from "./report/lewisFigure";
 
 /** A zero-based line and UTF-16 character offset in that line. */
 export interface EditorPosition {
@@ -77,6 +79,34 @@ export interface CoordinatesParams extends SpeciesAtParams {
 export interface CoordinatesResult extends SpeciesAtResult {
   /** The file to save; absent when there is none (see `problem`). */
   readonly file?: CoordinateFile;
+}
+
+/**
+ * `lonepair/lewisFigure`: a Lewis diagram to save beside a document and link from it, for the
+ * species at a position or for a species typed by the user; null when there is neither. The
+ * figures folder comes from the `lonepair.figuresFolder` setting of the document.
+ */
+export const LEWIS_FIGURE_METHOD = "lonepair/lewisFigure";
+
+export interface LewisFigureParams {
+  readonly uri: string;
+  /** The position whose species is drawn; ignored when `species` is given. */
+  readonly position?: EditorPosition;
+  /** A species typed by the user (a formula, a name, or SMILES after "smiles:"). */
+  readonly species?: string;
+  /** Which equivalent structure, counting from 1 (default 1). */
+  readonly form?: number;
+  readonly theme?: DiagramTheme;
+}
+
+export interface LewisFigureRequestResult {
+  /** The species as written: in the document (with its range) or as typed. */
+  readonly text: string;
+  readonly range?: EditorRange;
+  readonly formula?: string;
+  /** The figure; absent when the species cannot be analysed or drawn (see `problem`). */
+  readonly figure?: LewisFigure;
+  readonly problem?: { readonly code: string; readonly message: string };
 }
 
 /** `lonepair/documentSummary`: how many species mentions and problems an open document has, or null. */

@@ -58,6 +58,8 @@ export type { HoverFormat, HoverMarkdownOptions } from "./report/hoverMarkdown";
 export { shapeViewModel } from "./report/shapeViewModel";
 export { DIAGRAM_THEMES, MAX_DIAGRAM_ATOMS, chargeLabel, lewisDiagram } from "./report/lewisDiagram";
 export type { DiagramTheme, LewisDiagram, LewisDiagramOptions, LewisDiagramResult } from "./report/lewisDiagram";
+export { DEFAULT_FIGURES_FOLDER, figureFileName, figuresFolderFrom, lewisFigureOf, markdownImage } from "./report/lewisFigure";
+export type { LewisFigure, LewisFigureOptions, LewisFigureResult } from "./report/lewisFigure";
 export type { ShapeViewModel } from "./report/shapeViewModel";
 export { coordinateFileOf, missingModelReason, shapeViewModelOf } from "./report/speciesModel";
 export { MAX_SKETCH_ATOMS, shapePictureSvg, shapeSketchSvg, svgDataUri } from "./report/shapeSketch";
@@ -94,6 +96,7 @@ export {
   CHECK_TEXT_METHOD,
   COORDINATES_METHOD,
   DOCUMENT_SUMMARY_METHOD,
+  LEWIS_FIGURE_METHOD,
   SHAPE_MODEL_METHOD,
   SPECIES_AT_METHOD,
   SUMMARY_TABLE_METHOD,

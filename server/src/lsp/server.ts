@@ -23,6 +23,7 @@ import { registerDiagnostics, type DiagnosticsFeature } from "./features/diagnos
 import { registerHover } from "./features/hover";
 import { registerInlayHints } from "./features/inlayHints";
 import { registerSpeciesRequests } from "./features/speciesRequests";
+import { registerLewisFigure } from "./features/lewisFigure";
 import { SUMMARY_TABLE_COMMAND, registerSummaryTable, summaryTableCommand } from "./features/summaryTable";
 import { registerWorkspaceCheck, type WorkspaceCheckFeature } from "./features/workspaceCheck";
 import { WORKSPACE_CHECK_COMMAND } from "../../../shared/src/index";
@@ -61,6 +62,7 @@ export function startServer(connection: Connection): void {
     registerCodeActions(context);
     registerSummaryTable(context);
     registerSpeciesRequests(context);
+    registerLewisFigure(context);
     if (features.inlayHints) registerInlayHints(context);
     diagnostics = registerDiagnostics(context);
     workspaceCheck = registerWorkspaceCheck(context);

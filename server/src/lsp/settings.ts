@@ -2,7 +2,7 @@
  * The `lonepair.*` settings the server reads, their defaults, and how a raw value from the
  * client becomes a checked settings object (anything malformed falls back to the default).
  */
-import { SUMMARY_COLUMNS, isSummaryColumn, type SummaryColumn } from "../../../shared/src/index";
+import { DEFAULT_FIGURES_FOLDER, SUMMARY_COLUMNS, figuresFolderFrom, isSummaryColumn, type SummaryColumn } from "../../../shared/src/index";
 import type { DocumentKind } from "./core";
 
 /** Settings that apply to one document. */
@@ -22,6 +22,8 @@ export interface ServerSettings {
     /** At most this many diagnostics per document; one more says how many were left out. */
     readonly maxPerDocument: number;
   };
+  /** Folder, relative to the document, where inserted figures are written ("" for the document's own). */
+  readonly figuresFolder: string;
 }
 
 /** Bounds of `diagnostics.maxPerDocument`: at least one shown, and never a message of tens of megabytes. */
@@ -35,6 +37,7 @@ export const DEFAULT_SETTINGS: ServerSettings = {
   angleDecimals: 1,
   summaryTable: { columns: SUMMARY_COLUMNS },
   diagnostics: { maxPerDocument: 1000 },
+  figuresFolder: DEFAULT_FIGURES_FOLDER,
 };
 
 /** Reads the `lonepair` section as the client sent it; never throws. */
@@ -52,6 +55,7 @@ export function settingsFrom(raw: unknown): ServerSettings {
     angleDecimals: decimals(section.angleDecimals),
     summaryTable: { columns: columnList(table.columns) ?? DEFAULT_SETTINGS.summaryTable.columns },
     diagnostics: { maxPerDocument: diagnosticLimit(diagnostics.maxPerDocument) },
+    figuresFolder: figuresFolderFrom(section.figuresFolder),
   };
 }
 

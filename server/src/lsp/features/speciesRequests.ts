@@ -95,7 +95,7 @@ export function registerSpeciesRequests(context: ServerContext): void {
 }
 
 /** The open document and the species at the asked position, or undefined. */
-async function speciesAt(
+export async function speciesAt(
   context: ServerContext,
   params: unknown,
 ): Promise<{ document: TextDocument; species: SpeciesAtOffset } | undefined> {
@@ -108,7 +108,7 @@ async function speciesAt(
   return species ? { document: enabled.document, species } : undefined;
 }
 
-function describe(document: TextDocument, species: SpeciesAtOffset): SpeciesAtResult {
+export function describe(document: TextDocument, species: SpeciesAtOffset): SpeciesAtResult {
   const range = lspRange(document, species.range);
   return species.analysis.ok
     ? { text: species.text, range, formula: species.analysis.value.reading.formula }
@@ -133,7 +133,7 @@ async function checkText(context: ServerContext, params: unknown): Promise<Check
  * The document a request names: `uri`, or `textDocument.uri` as in the protocol's own position
  * parameters (what editors' helpers such as Neovim's `make_position_params` build).
  */
-function documentUri(params: unknown): string | undefined {
+export function documentUri(params: unknown): string | undefined {
   const candidate = params as { uri?: unknown; textDocument?: { uri?: unknown } } | null;
   if (typeof candidate?.uri === "string") return candidate.uri;
   return typeof candidate?.textDocument?.uri === "string" ? candidate.textDocument.uri : undefined;
