@@ -1,7 +1,7 @@
 // Normal modes by symmetry, through the core's facade, against the worked examples of
 // group-theory and vibrational-spectroscopy texts.
 import { describe, expect, it } from "vitest";
-import { analyzeSpecies, analyzeTyped, vibrationalModes, vibrationsOf, type VibrationalModes } from "../../shared/src/index";
+import { analyzeSpecies, analyzeTyped, shapeOf, vibrationalModes, vibrationsOf, type VibrationalModes } from "../../shared/src/index";
 import { crownRing, cubane } from "../support/moleculeBuilders";
 import { randomlyPlaced, seededRandom } from "../support/randomFrames";
 
@@ -230,6 +230,15 @@ describe("properties", () => {
     if (!vibrations.ok) return;
     const stretches = vibrations.value.stretching.reduce((total, mode) => total + mode.count * mode.degeneracy, 0);
     expect(stretches).toBe(result.value.graph.bonds.length);
+  });
+
+  // common practice: reusing the point-group search must give what a fresh search gives
+  it.each(SPECIES)("%s: the analysis of the species equals a fresh analysis of its coordinates", (text) => {
+    const result = analyzeTyped(text);
+    if (!result.ok) throw new Error(result.problem.message);
+    const atoms = shapeOf(result.value).coordinates.atoms.map((atom) => ({ element: atom.symbol, position: atom.position }));
+    const bonds = result.value.graph.bonds.map((bond): [number, number] => [bond.from, bond.to]);
+    expect(vibrationsOf(result.value)).toEqual(vibrationalModes(atoms, bonds));
   });
 
   // source: symmetry does not depend on where a molecule sits or how it is turned

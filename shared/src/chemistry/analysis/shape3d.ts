@@ -7,7 +7,7 @@ import { applyDoubleBondStereo } from "../geometry/applyDoubleBondStereo";
 import { buildCoordinates, type MolecularCoordinates } from "../geometry/buildCoordinates";
 import { add, norm, normalize, scale, sub, type Vec3 } from "../geometry/vectors";
 import { atomTraits } from "../lewis/electronBookkeeping";
-import { findPointGroup } from "../symmetry/pointGroup";
+import { searchPointGroup, type PointGroupSearch } from "../symmetry/pointGroup";
 import type { MolecularGraph, PolarityVerdict, SpeciesAnalysis } from "../types";
 
 export interface SpeciesShape {
@@ -36,8 +36,18 @@ export function computeShape(graph: MolecularGraph, radical: boolean): SpeciesSh
   const built = buildCoordinates(graph, radical);
   if (built.tooLarge !== undefined) return { coordinates: built, pointGroup: undefined };
   const coordinates = applyDoubleBondStereo(graph, built);
-  const found = findPointGroup(coordinates.atoms.map((atom) => ({ element: atom.symbol, position: atom.position })));
-  return { coordinates, pointGroup: found.ok ? found.value.symbol : undefined };
+  const search = searchPointGroup(coordinates.atoms.map((atom) => ({ element: atom.symbol, position: atom.position })));
+  const shape = { coordinates, pointGroup: search.result.ok ? search.result.value.symbol : undefined };
+  searches.set(shape, search);
+  return shape;
+}
+
+/** The symmetry search behind each shape, kept for analyses that use its elements (vibrations). */
+const searches = new WeakMap<SpeciesShape, PointGroupSearch>();
+
+/** The symmetry search the shape's point group came from, if the shape had one. */
+export function symmetrySearchOf(shape: SpeciesShape): PointGroupSearch | undefined {
+  return searches.get(shape);
 }
 
 /** Weight of one lone pair against a bond dipole of one electronegativity unit (a model choice). */

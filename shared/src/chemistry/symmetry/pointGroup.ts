@@ -69,22 +69,43 @@ export type PointGroupResult =
  * aside, so "D" differs from "H" and isotopic substitution lowers the symmetry.
  */
 export function findPointGroup(atoms: readonly PositionedAtom[], tolerance: number = DEFAULT_SYMMETRY_TOLERANCE): PointGroupResult {
+  return searchPointGroup(atoms, tolerance).result;
+}
+
+/**
+ * The point group with what the search found on the way, for callers that go on to use the
+ * symmetry elements themselves (the vibrational analysis) instead of searching again.
+ */
+export interface PointGroupSearch {
+  readonly result: PointGroupResult;
+  /** The centred molecule; absent when the input was refused. */
+  readonly molecule?: CentredMolecule;
+  /** The symmetry elements found; absent for a lone atom and a linear molecule, which need no search. */
+  readonly elements?: FoundSymmetryElements;
+}
+
+/** {@link findPointGroup}, keeping the centred molecule and the symmetry elements. */
+export function searchPointGroup(atoms: readonly PositionedAtom[], tolerance: number = DEFAULT_SYMMETRY_TOLERANCE): PointGroupSearch {
   const problem = inputProblem(atoms, tolerance);
-  if (problem) return { ok: false, problem };
+  if (problem) return { result: { ok: false, problem } };
 
   const molecule = centreMolecule(atoms, tolerance);
-  if (atoms.length === 1) return { ok: true, value: loneAtom(molecule) };
-  if (isLinear(molecule, tolerance)) return { ok: true, value: linear(molecule, tolerance) };
+  if (atoms.length === 1) return { result: { ok: true, value: loneAtom(molecule) }, molecule };
+  if (isLinear(molecule, tolerance)) return { result: { ok: true, value: linear(molecule, tolerance) }, molecule };
 
   const elements = findSymmetryElements(molecule, tolerance);
   const { symbol, principalAxis } = classifyPointGroup(elements);
   return {
-    ok: true,
-    value: {
-      symbol,
-      elements: summarise(elements, principalAxis?.direction ?? null),
-      centre: molecule.centre,
+    result: {
+      ok: true,
+      value: {
+        symbol,
+        elements: summarise(elements, principalAxis?.direction ?? null),
+        centre: molecule.centre,
+      },
     },
+    molecule,
+    elements,
   };
 }
 

@@ -10,7 +10,7 @@ import type { Matrix3 } from "../geometry/symmetricEigen";
 import { centreMolecule, type CentredMolecule, type PositionedAtom } from "../symmetry/centredMolecule";
 import { classifyPointGroup } from "../symmetry/classifyPointGroup";
 import { findSymmetryElements } from "../symmetry/findSymmetryElements";
-import { DEFAULT_SYMMETRY_TOLERANCE, findPointGroup, MAX_SYMMETRY_ATOMS } from "../symmetry/pointGroup";
+import { DEFAULT_SYMMETRY_TOLERANCE, findPointGroup, MAX_SYMMETRY_ATOMS, type PointGroupSearch } from "../symmetry/pointGroup";
 import { symmetryPermutation } from "../symmetry/operations";
 import { characterTable, reduceRepresentation, rotationCharacters, vectorCharacters } from "./characterTables";
 import { multiplyMatrices, operationMatrix } from "./classOperation";
@@ -67,6 +67,8 @@ export interface VibrationalModesOptions {
   readonly pointGroup?: string;
   /** Ångströms; the same tolerance the point group was found with. */
   readonly tolerance?: number;
+  /** The search that found the point group for these coordinates, whose elements are then reused. */
+  readonly search?: PointGroupSearch;
 }
 
 /**
@@ -94,8 +96,9 @@ export function vibrationalModes(
   if (!table) return { ok: false, reason: `no character table for the point group ${group}` };
   if (group === "C1") return trivialModes(table, atoms.length, bonds.length);
 
-  const molecule = centreMolecule(atoms, tolerance);
-  const elements = subgroup ? undefined : findSymmetryElements(molecule, tolerance);
+  const reused = options.search?.molecule && options.search.molecule.atoms.length === atoms.length ? options.search : undefined;
+  const molecule = reused?.molecule ?? centreMolecule(atoms, tolerance);
+  const elements = subgroup ? undefined : (reused?.elements ?? findSymmetryElements(molecule, tolerance));
   const principal = elements ? classifyPointGroup(elements).principalAxis?.direction : undefined;
   for (const frame of candidateFrames(group, molecule, elements, principal, tolerance)) {
     const permutations = classPermutations(table, frame, molecule, tolerance);

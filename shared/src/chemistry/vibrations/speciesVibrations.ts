@@ -4,7 +4,7 @@
  * out less symmetric than the real molecule (S8, P4O10) would predict too many bands, so it gets
  * a reason instead of numbers.
  */
-import { shapeOf } from "../analysis/shape3d";
+import { shapeOf, symmetrySearchOf } from "../analysis/shape3d";
 import { singleStructureFor } from "../analysis/structuresByFormula";
 import type { MolecularGraph, SpeciesAnalysis } from "../types";
 import { vibrationalModes, type VibrationalModesResult } from "./normalModes";
@@ -40,7 +40,7 @@ function computeVibrations(analysis: SpeciesAnalysis): VibrationalModesResult {
   }
   const atoms = shape.coordinates.atoms.map((atom) => ({ element: atom.symbol, position: atom.position }));
   const bonds = graph.bonds.map((bond): readonly [number, number] => [bond.from, bond.to]);
-  return vibrationalModes(atoms, bonds, { pointGroup: group });
+  return vibrationalModes(atoms, bonds, { pointGroup: group, search: symmetrySearchOf(shape) });
 }
 
 function connected(graph: MolecularGraph): boolean {
