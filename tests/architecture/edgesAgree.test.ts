@@ -9,7 +9,7 @@ import { join } from "node:path";
 import { pathToFileURL } from "node:url";
 import { afterAll, beforeAll, describe, expect, it } from "vitest";
 import { DiagnosticSeverity, type Diagnostic } from "vscode-languageserver-protocol/node";
-import type { CoordinatesResult, SummaryTableResult } from "../../shared/src/editorRequests";
+import type { CoordinatesResult, ShapeModelResult, SummaryTableResult } from "../../shared/src/editorRequests";
 import { ensureBuilt, repositoryRoot, runCli } from "../cli/cliRunner";
 import { startSession, type LspSession } from "../server/lspSession";
 
@@ -95,5 +95,41 @@ describe("the language server and the command line agree", () => {
     const run = runCli(["coords", `smiles:${smiles}`]);
     expect(run.status).toBe(0);
     expect(fromServer?.file?.text).toBe(run.stdout);
+  });
+
+  it.each([
+    ["cis", "F/C=C\\F"],
+    ["trans", "F/C=C/F"],
+  ])("on the 3D view model of the %s isomer: the atoms the command line writes, where it writes them", async (_isomer, smiles) => {
+    const text = readFileSync(join(FOLDER, "run-16-isomers.md"), "utf8");
+    const before = text.slice(0, text.indexOf(smiles) + 2).split("\n");
+    const view = await session.connection.sendRequest<ShapeModelResult | null>("lonepair/shapeModel", {
+      uri: uriOf("run-16-isomers.md"),
+      position: { line: before.length - 1, character: before[before.length - 1].length },
+    });
+    expect(view?.model, JSON.stringify(view)).toBeDefined();
+    // The view is centred for turning and rounds to 0.001 Å; the file keeps the model's frame. The
+    // same model in both means the same atoms in the same order at the same distances.
+    const fromView = view!.model!.atoms.map((atom) => ({ symbol: atom.symbol, position: atom.position as readonly number[] }));
+    const run = runCli(["coords", `smiles:${smiles}`]);
+    const fromCli = run.stdout
+      .trim()
+      .split("\n")
+      .slice(2)
+      .map((line) => {
+        const [symbol, ...position] = line.trim().split(/\s+/);
+        return { symbol, position: position.map(Number) };
+      });
+    expect(fromView.map((atom) => atom.symbol)).toEqual(fromCli.map((atom) => atom.symbol));
+    const distance = (a: readonly number[], b: readonly number[]) => Math.hypot(a[0] - b[0], a[1] - b[1], a[2] - b[2]);
+    for (let first = 0; first < fromCli.length; first += 1) {
+      for (let second = first + 1; second < fromCli.length; second += 1) {
+        const inView = distance(fromView[first].position, fromView[second].position);
+        const inFile = distance(fromCli[first].position, fromCli[second].position);
+        expect(Math.abs(inView - inFile), `atoms ${first} and ${second}: ${inView} Å in the view, ${inFile} Å in the file`).toBeLessThan(
+          0.003,
+        );
+      }
+    }
   });
 });
