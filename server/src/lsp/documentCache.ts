@@ -162,7 +162,7 @@ export function analyseDocument(
         yield findings;
         return;
       }
-      const note = truncationNote(analysis.truncatedAt);
+      const note = truncationNote(truncatedAt);
       if (note.length > 0) yield note;
       yield* analysis.findingParts();
     },
