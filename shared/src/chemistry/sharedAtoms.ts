@@ -6,6 +6,8 @@
  */
 import type { GraphAtom } from "./types";
 
+// Bound: the key packs values that `fits` keeps in range (127 elements, 16 lone-pair counts, 31
+// charges, radical or not, aromatic or not), so at most about 250,000 atoms; far fewer occur.
 const atomsAlike = new Map<number, GraphAtom>();
 
 /** The one shared atom with these values (a fresh one when they are out of the usual range). */

@@ -51,6 +51,7 @@ const METAL_SATURATION = 0.35;
 const GROUP_ONE_HUE = 165;
 const HUE_STEP = 20;
 
+// Bound: one paint per element symbol; a symbol that names no element is painted but not kept.
 const paints = new Map<string, AtomPaint>();
 
 /** The paint of an element symbol ("Cl"); unknown symbols get a neutral grey. */
@@ -59,7 +60,7 @@ export function atomPaint(symbol: string): AtomPaint {
   if (cached) return cached;
   const fill = elementFill(symbol);
   const paint: AtomPaint = Object.freeze({ fill, outline: outlineFor(fill), ink: inkFor(fill) });
-  paints.set(symbol, paint);
+  if (elementBySymbol(symbol) || CONVENTION[symbol]) paints.set(symbol, paint);
   return paint;
 }
 
