@@ -14,7 +14,8 @@ export { characterTable, reduceRepresentation } from "./chemistry/vibrations/cha
 export type { CharacterTable, IrreducibleRepresentation, SymmetryClass } from "./chemistry/vibrations/characterTables";
 export { vibrationalModes } from "./chemistry/vibrations/normalModes";
 export type { ModeSymmetry, VibrationalModes, VibrationalModesOptions, VibrationalModesResult } from "./chemistry/vibrations/normalModes";
-export { vibrationsOf } from "./chemistry/vibrations/speciesVibrations";
+export { measuredFundamentalsOf, vibrationsOf } from "./chemistry/vibrations/speciesVibrations";
+export type { MeasuredFundamental, MeasuredFundamentals } from "./chemistry/vibrations/measuredFundamentals";
 export { idealDirections, siteKind, lonePairSiteOrder } from "./chemistry/geometry/idealDirections";
 export type { Vec3 } from "./chemistry/geometry/vectors";
 export { shapeOf, pointGroupAllowsDipole } from "./chemistry/analysis/shape3d";

@@ -67,6 +67,16 @@ describe("analyze --json: the vibrations object", () => {
     expect(t2u).toEqual({ symmetry: "T2u", count: 1, ir: false, raman: false });
   });
 
+  // from memory: Herzberg, "Infrared and Raman Spectra of Polyatomic Molecules": CO2's
+  // antisymmetric stretch is the Σu+ fundamental at 2349 cm⁻¹
+  it("CO2: the measured fundamentals follow the fixed fields, with their source", () => {
+    const [co2] = analyzeJson("CO2");
+    const extra = co2.vibrations as unknown as { measured: { fundamentals: { symmetry: string; wavenumber: number }[]; source: string } };
+    expect(Object.keys(co2.vibrations!).indexOf("measured")).toBeGreaterThan(6);
+    expect(extra.measured.fundamentals).toContainEqual({ mode: "ν3", symmetry: "Σu+", wavenumber: 2349 });
+    expect(extra.measured.source).toMatch(/Shimanouchi/);
+  });
+
   // from memory: descriptive inorganic chemistry texts: S8 is a D4d crown, which the model does not reach
   it("S8: vibrations null, with the reason naming the real group", () => {
     const [s8] = analyzeJson("S8");

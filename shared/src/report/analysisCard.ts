@@ -7,8 +7,8 @@ import type { AngleExpectation, AnalysisResult, CentreAnalysis, MeasuredAngle, S
 import { lewisJson } from "./analysisJson";
 import { compositeKind, distinctAnalysedParts, innerParts, partLabel } from "./compositeParts";
 import { isotopeNote, stateNote } from "./notationNotes";
-import { vibrationsOf } from "../chemistry/vibrations/speciesVibrations";
-import { bandsLine, coincidenceLine, countedInNote, modesLine, notPredictedLine, stretchingLine } from "./vibrationText";
+import { measuredFundamentalsOf, vibrationsOf } from "../chemistry/vibrations/speciesVibrations";
+import { bandsLine, coincidenceLine, countedInNote, measuredLine, modesLine, notPredictedLine, stretchingLine } from "./vibrationText";
 
 /** Wrappers for the parts of a card a caller may want to highlight. Identity by default. */
 export interface CardStyle {
@@ -125,7 +125,16 @@ function vibrationLines(analysis: SpeciesAnalysis, style: CardStyle): string[] {
     row(style, "", bandsLine(value)),
     row(style, "", coincidenceLine(value)),
     row(style, "Stretching modes", stretchingLine(value)),
+    ...measuredRows(analysis, style),
   ];
+}
+
+function measuredRows(analysis: SpeciesAnalysis, style: CardStyle): string[] {
+  const measured = measuredFundamentalsOf(analysis);
+  if (!measured) return [];
+  const rows = [row(style, "Measured fundamentals", `${measuredLine(measured)} ${style.muted(`(source: ${measured.source})`)}`)];
+  if (measured.note) rows.push(row(style, "", style.muted(measured.note)));
+  return rows;
 }
 
 function lewisLines(analysis: SpeciesAnalysis, style: CardStyle): string[] {

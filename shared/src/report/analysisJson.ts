@@ -14,7 +14,8 @@ import type {
   SpeciesPart,
 } from "../chemistry/types";
 import { partShapeText } from "../chemistry/analysis/partShapes";
-import { vibrationsOf } from "../chemistry/vibrations/speciesVibrations";
+import { measuredFundamentalsOf, vibrationsOf } from "../chemistry/vibrations/speciesVibrations";
+import type { MeasuredFundamentals } from "../chemistry/vibrations/measuredFundamentals";
 import type { ModeSymmetry, VibrationalModes } from "../chemistry/vibrations/normalModes";
 
 /** One centre in the JSON output. */
@@ -108,6 +109,8 @@ export interface VibrationsJson {
   readonly coincidences: number;
   /** For a linear molecule, the finite group the counting was done in. */
   readonly countedIn?: string;
+  /** Measured gas-phase fundamentals (cm⁻¹) with their source, for the species that have them listed. */
+  readonly measured?: MeasuredFundamentals;
 }
 
 /** A species that could not be read or analysed. */
@@ -191,7 +194,14 @@ function successJson(input: string, analysis: SpeciesAnalysis): AnalysisJsonSucc
 
 function vibrationsFields(analysis: SpeciesAnalysis): { vibrations: VibrationsJson | null; vibrationsNote?: string } {
   const result = vibrationsOf(analysis);
-  return result.ok ? { vibrations: vibrationsJson(result.value) } : { vibrations: null, vibrationsNote: result.reason };
+  if (!result.ok) return { vibrations: null, vibrationsNote: result.reason };
+  const measured = measuredFundamentalsOf(analysis);
+  const vibrations = vibrationsJson(result.value);
+  return {
+    vibrations: measured
+      ? { ...vibrations, measured: { ...measured, fundamentals: measured.fundamentals.map((value) => ({ ...value })) } }
+      : vibrations,
+  };
 }
 
 function modeJson(mode: ModeSymmetry): VibrationModeJson {

@@ -17,8 +17,8 @@ import { shapeSketchSvg, svgDataUri } from "./shapeSketch";
 import { lewisDiagram } from "./lewisDiagram";
 import { compositeKind, distinctAnalysedParts, innerParts, roleWords } from "./compositeParts";
 import { partShapeText } from "../chemistry/analysis/partShapes";
-import { vibrationsOf } from "../chemistry/vibrations/speciesVibrations";
-import { bandsLine, coincidenceLine, countedInNote, modesLine, notPredictedLine, stretchingLine } from "./vibrationText";
+import { measuredFundamentalsOf, vibrationsOf } from "../chemistry/vibrations/speciesVibrations";
+import { bandsLine, coincidenceLine, countedInNote, measuredLine, modesLine, notPredictedLine, stretchingLine } from "./vibrationText";
 
 /** The caution every editor-facing result carries (hover cards and summary tables). */
 export const HOVER_CAUTION = "Model prediction, not measured data: follow the safety data sheet, local rules and licensed practice.";
@@ -343,7 +343,15 @@ function vibrationBlock(analysis: SpeciesAnalysis, markup: Markup): string[] {
     `- ${markup.text(bandsLine(value))}`,
     `- ${markup.text(coincidenceLine(value))}`,
     `- Stretching: ${markup.text(stretchingLine(value))}`,
+    ...measuredHoverLines(analysis, markup),
   ];
+}
+
+function measuredHoverLines(analysis: SpeciesAnalysis, markup: Markup): string[] {
+  const measured = measuredFundamentalsOf(analysis);
+  if (!measured) return [];
+  const note = measured.note ? `; ${measured.note}` : "";
+  return [`- Measured: ${markup.text(measuredLine(measured))} (source: ${markup.text(measured.source)}${markup.text(note)})`];
 }
 
 /** Text from the document or the core goes into markdown; keep it from turning into markup. */

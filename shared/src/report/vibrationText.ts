@@ -2,6 +2,7 @@
  * The vibrational analysis in words, shared by the text card, the hover and the JSON: one
  * decision about how modes and band counts are written.
  */
+import type { MeasuredFundamentals } from "../chemistry/vibrations/measuredFundamentals";
 import { modeSum, type ModeSymmetry, type VibrationalModes, type VibrationalModesResult } from "../chemistry/vibrations/normalModes";
 
 export { modeSum };
@@ -51,4 +52,9 @@ export function countedInNote(value: VibrationalModes): string | undefined {
 /** The one-line reason given in place of the numbers. */
 export function notPredictedLine(result: Extract<VibrationalModesResult, { ok: false }>): string {
   return `not predicted: ${result.reason}`;
+}
+
+/** "ν1 3657 (A1), ν2 1595 (A1), ν3 3756 (B2) cm⁻¹". */
+export function measuredLine(measured: MeasuredFundamentals): string {
+  return `${measured.fundamentals.map((value) => `${value.mode} ${value.wavenumber} (${value.symmetry})`).join(", ")} cm⁻¹`;
 }

@@ -7,6 +7,7 @@
 import { shapeOf, symmetrySearchOf } from "../analysis/shape3d";
 import { singleStructureFor } from "../analysis/structuresByFormula";
 import type { MolecularGraph, SpeciesAnalysis } from "../types";
+import { measuredFundamentalsFor, type MeasuredFundamentals } from "./measuredFundamentals";
 import { vibrationalModes, type VibrationalModesResult } from "./normalModes";
 
 const results = new WeakMap<SpeciesAnalysis, VibrationalModesResult>();
@@ -18,6 +19,12 @@ export function vibrationsOf(analysis: SpeciesAnalysis): VibrationalModesResult 
   const result = computeVibrations(analysis);
   results.set(analysis, result);
   return result;
+}
+
+/** Measured gas-phase fundamentals of the species, where they are listed for the analysed model. */
+export function measuredFundamentalsOf(analysis: SpeciesAnalysis): MeasuredFundamentals | undefined {
+  const result = vibrationsOf(analysis);
+  return result.ok ? measuredFundamentalsFor(analysis.reading.composition, analysis.reading.charge, result.value) : undefined;
 }
 
 function computeVibrations(analysis: SpeciesAnalysis): VibrationalModesResult {
