@@ -116,7 +116,13 @@ function checkAgainstScratch(session: Session, kind: DocumentKind, random: () =>
   const scratch = canonical(fromScratch(plain, kind));
   // Findings a part at a time, before the whole list is asked for, give the same list.
   expect(canonical([...session.analyser.analyse(session.text).findingParts()].flat())).toEqual(scratch);
+  // Part of the work done a part at a time, as a server between other requests does it, the rest at once.
+  for (const _ of analysis.findingParts()) if (random() < 0.05) break;
   expect(canonical(analysis.findings())).toEqual(scratch);
+  // A request about one place sees every finding there.
+  const place = Math.floor(random() * (plain.length + 1));
+  const touching = (finding: Finding): boolean => finding.range.start <= place && place <= finding.range.end;
+  expect(canonical(analysis.findingsAround(place, place).filter(touching))).toEqual(scratch.filter(touching));
   // The species a hover asks for, at a few random places.
   const model = analyzeDocument(plain, kind);
   for (let probe = 0; probe < 3; probe++) {

@@ -11,6 +11,7 @@ import {
   type DocumentAnalyser,
   type DocumentAnalysis,
   type SpeciesAtOffset,
+  type SpeciesOccurrence,
 } from "../../../shared/src/index";
 import { isChunkedDocument } from "./chunkedDocument";
 import { documentKindFor, type DocumentKind, type DocumentModel, type Finding } from "./core";
@@ -28,6 +29,8 @@ export interface AnalysedDocument {
   modelAround(start: number, end: number): DocumentModel;
   /** The species at `offset`, read from the part of the document around it. */
   speciesAt(offset: number): SpeciesAtOffset | undefined;
+  /** One occurrence per distinct species text (none for tables); ranges may be out of date. */
+  distinctSpecies(): readonly SpeciesOccurrence[];
   /** Set when only a prefix was analysed. */
   readonly truncatedAt?: number;
   readonly binary: boolean;
@@ -35,9 +38,12 @@ export interface AnalysedDocument {
   findings(): readonly Finding[];
   /**
    * The same findings a part at a time, worked out only as far as the caller reads: diagnostics
-   * that show a capped number never build the rest of a document full of findings.
+   * that show a capped number never build the rest of a document full of findings, and a caller
+   * may answer other requests between parts.
    */
   findingParts(): Iterable<readonly Finding[]>;
+  /** The findings of the part of the document around `start`..`end`. */
+  findingsAround(start: number, end: number): readonly Finding[];
 }
 
 export interface DocumentCache {
@@ -151,6 +157,7 @@ export function analyseDocument(
     },
     modelAround: (start, end) => analysis.modelAround(start, end),
     speciesAt: (offset) => analysis.speciesAt(offset),
+    distinctSpecies: () => analysis.distinctSpecies(),
     truncatedAt,
     binary: analysis.binary,
     findings() {
@@ -166,6 +173,7 @@ export function analyseDocument(
       if (note.length > 0) yield note;
       yield* analysis.findingParts();
     },
+    findingsAround: (start, end) => analysis.findingsAround(start, end),
   };
 }
 

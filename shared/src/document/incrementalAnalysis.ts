@@ -34,16 +34,25 @@ export interface DocumentAnalysis {
   /** The problems of the text and the checks' findings, in document order. */
   findings(): readonly Finding[];
   /**
-   * The same findings a part at a time, in document order; where they are not worked out yet,
-   * only as far as the caller reads (see `findingsInParts`).
+   * The same findings a part at a time (a segment or block each), in document order; where they
+   * are not worked out yet, only as far as the caller reads (see `findingsInParts`). A caller that
+   * must stay responsive reads a few parts, answers other requests, and goes on, or gives up when
+   * the text has changed: the segments done are kept for the next version.
    */
   findingParts(): Iterable<readonly Finding[]>;
+  /** The findings of the segments that overlap `start`..`end` (what a request about that stretch needs). */
+  findingsAround(start: number, end: number): readonly Finding[];
   /** The whole document's model (for a large table this reads every row: prefer the two below). */
   model(): DocumentModel;
   /** The model of the segments that overlap `start`..`end`: what a request about that stretch needs. */
   modelAround(start: number, end: number): DocumentModel;
   /** The species at `offset`, decided as `speciesAtOffset` decides it on the whole model. */
   speciesAt(offset: number): SpeciesAtOffset | undefined;
+  /**
+   * One occurrence of each distinct species text met so far (for a table: none, its rows are
+   * read only where asked); ranges may be those of an earlier version. For preparing hovers.
+   */
+  distinctSpecies(): readonly SpeciesOccurrence[];
 }
 
 /** Analyses successive versions of one document, reusing what an edit left alone. */
@@ -99,10 +108,18 @@ function wholeAnalysis(
       // Markdown and plain text parts follow one another through the text: sorting each sorts the whole.
       for (const part of findingsInParts(text, kind, { read })) yield sortedFindings([...part]);
     },
+    findingsAround: () => (findings ??= sortedFindings([...modelOf().problems, ...checkDocument(modelOf())])),
     model: modelOf,
     modelAround: modelOf,
     speciesAt: (offset) => speciesAtOffset(modelOf(), offset),
+    distinctSpecies: () => distinct(modelOf().occurrences),
   };
+}
+
+function distinct(occurrences: Iterable<SpeciesOccurrence>): SpeciesOccurrence[] {
+  const byText = new Map<string, SpeciesOccurrence>();
+  for (const occurrence of occurrences) if (!byText.has(occurrence.text)) byText.set(occurrence.text, occurrence);
+  return [...byText.values()];
 }
 
 function sortedFindings(findings: Finding[]): Finding[] {
@@ -199,11 +216,20 @@ function tableSegments(kind: "csv" | "tsv", read: SpeciesReader): (text: Chunked
         findings = all;
         return findings;
       },
-      findingParts() {
-        return [this.findings()];
+      *findingParts() {
+        if (findings) {
+          yield findings;
+          return;
+        }
+        for (const segment of segments) yield findingsOf(segment).map((finding) => moved(finding, segment.start));
       },
+      findingsAround: (from, to) =>
+        segments
+          .filter((segment) => segment.end >= from && segment.start <= to)
+          .flatMap((segment) => findingsOf(segment).map((finding) => moved(finding, segment.start))),
       model: () => (model ??= joinedModels(kind, segments.map(modelOf))),
       modelAround: around,
+      distinctSpecies: () => [],
       speciesAt(offset) {
         const segment = segments.find((candidate) => offset < candidate.end) ?? segments[segments.length - 1];
         return segment ? speciesAtOffset(modelOf(segment), offset) : undefined;
@@ -270,7 +296,10 @@ function sameChunks(a: readonly TextChunk[], b: readonly TextChunk[]): boolean {
 /** What one block yields, with offsets into the text it was read in. */
 interface BlockPart {
   readonly start: number;
-  readonly model: DocumentModel;
+  /** The block's model, moved to `start` when first asked for (findings need no model). */
+  model(): DocumentModel;
+  /** The model as first read, wherever the block then was. */
+  readonly unplaced: DocumentModel;
   readonly findings: readonly Finding[];
 }
 
@@ -278,30 +307,63 @@ function markdownSegments(read: SpeciesReader): (text: string) => DocumentAnalys
   let remembered = new Map<string, BlockPart>();
   return (text) => {
     const blocks = markdownBlocks(text);
-    const next = new Map<string, BlockPart>();
-    const parts = blocks.map((block) => {
+    // Each block is read (or found among the last version's) when first needed.
+    const known = new Map<string, BlockPart>();
+    const previous = remembered;
+    remembered = known;
+    const parts: (BlockPart | undefined)[] = new Array(blocks.length);
+    const partOf = (index: number): BlockPart => {
+      let part = parts[index];
+      if (part) return part;
+      const block = blocks[index];
       const key = blockKey(text, block);
-      const known = next.get(key) ?? remembered.get(key);
-      const part = known ? shiftedPart(known, block.start) : blockPart(text, block, read);
-      next.set(key, part);
+      const before = known.get(key) ?? previous.get(key);
+      part = before ? shiftedPart(before, block.start) : blockPart(text, block, read);
+      known.set(key, part);
+      parts[index] = part;
       return part;
-    });
-    remembered = next;
+    };
+    /** The indexes of the blocks that overlap `start`..`end`, ends included. */
+    const indexesAround = (start: number, end: number): number[] => {
+      const indexes: number[] = [];
+      let low = 0;
+      let high = blocks.length;
+      while (low < high) {
+        const middle = (low + high) >> 1;
+        if (blocks[middle].end < start) low = middle + 1;
+        else high = middle;
+      }
+      for (let index = low; index < blocks.length && blocks[index].start <= end; index++) indexes.push(index);
+      return indexes;
+    };
     let model: DocumentModel | undefined;
     let findings: readonly Finding[] | undefined;
     const modelOf = (): DocumentModel =>
       (model ??= joinedModels(
         "markdown",
-        parts.map((part) => part.model),
+        blocks.map((_, index) => partOf(index).model()),
       ));
+    const modelAround = (start: number, end: number): DocumentModel =>
+      joinedModels(
+        "markdown",
+        indexesAround(start, end).map((index) => partOf(index).model()),
+      );
     return {
       kind: "markdown",
       binary: false,
-      findings: () => (findings ??= parts.flatMap((part) => part.findings)),
-      findingParts: () => (findings ? [findings] : parts.map((part) => part.findings)),
+      findings: () => (findings ??= blocks.flatMap((_, index) => partOf(index).findings)),
+      *findingParts() {
+        if (findings) {
+          yield findings;
+          return;
+        }
+        for (let index = 0; index < blocks.length; index++) yield partOf(index).findings;
+      },
+      findingsAround: (start, end) => indexesAround(start, end).flatMap((index) => partOf(index).findings),
       model: modelOf,
-      modelAround: modelOf,
-      speciesAt: (offset) => speciesAtOffset(modelOf(), offset),
+      modelAround,
+      speciesAt: (offset) => speciesAtOffset(modelAround(offset, offset), offset),
+      distinctSpecies: () => distinct(blocks.flatMap((_, index) => partOf(index).unplaced.occurrences)),
     };
   };
 }
@@ -324,13 +386,19 @@ function blockPart(text: string, block: MarkdownBlock, read: SpeciesReader): Blo
     problems: [],
     unreadable: [...sink.unreadable].sort((a, b) => a.range.start - b.range.start),
   };
-  return { start: block.start, model, findings: checkDocument(model, undefined) };
+  return { start: block.start, model: () => model, unplaced: model, findings: checkDocument(model, undefined) };
 }
 
 function shiftedPart(part: BlockPart, start: number): BlockPart {
   const by = start - part.start;
   if (by === 0) return part;
-  return { start, model: shiftedModel(part.model, by), findings: part.findings.map((finding) => moved(finding, by)) };
+  let model: DocumentModel | undefined;
+  return {
+    start,
+    model: () => (model ??= shiftedModel(part.model(), by)),
+    unplaced: part.unplaced,
+    findings: part.findings.map((finding) => moved(finding, by)),
+  };
 }
 
 // ---------------------------------------------------------------------------------------------

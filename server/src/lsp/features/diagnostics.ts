@@ -15,6 +15,7 @@ import type { Finding, FindingSeverity } from "../core";
 import { guarded } from "../guardedHandler";
 import { lspRange } from "../ranges";
 import { enabledDocument, type ServerContext } from "../serverContext";
+import { prepareHoverCards } from "./hover";
 
 /** Every diagnostic carries this source, so users can filter and quick fixes can match. */
 export const DIAGNOSTIC_SOURCE = "lonepair";
@@ -23,7 +24,7 @@ export const DIAGNOSTIC_SOURCE = "lonepair";
  * How long typing must pause before pushed diagnostics are recomputed, whatever the document's
  * size: an edit to a large table re-checks only the rows it changed.
  */
-const PUSH_DELAY_MS = 50;
+const PUSH_DELAY_MS = 15;
 
 const SEVERITIES: Readonly<Record<FindingSeverity, DiagnosticSeverity>> = {
   error: DiagnosticSeverity.Error,
@@ -57,16 +58,55 @@ export function registerDiagnostics(context: ServerContext): DiagnosticsFeature 
   return context.clientFeatures().pullDiagnostics ? registerPull(context) : registerPush(context);
 }
 
-/** The diagnostics of a document's current text, at most `maxPerDocument` plus one summary. */
+/**
+ * The diagnostics of a document's current text, at most `maxPerDocument` plus one summary.
+ * Worked out in slices, so hovers are answered meanwhile; a newer text restarts the work (what
+ * was done is kept for it), and `cancelled` gives up.
+ */
 async function currentDiagnostics(
   context: ServerContext,
   uri: string,
+  cancelled: () => boolean = () => false,
 ): Promise<{ version: number; revision: number; items: Diagnostic[] } | undefined> {
-  const enabled = await enabledDocument(context, uri);
-  if (!enabled) return undefined;
-  const { document, analysed, settings } = enabled;
-  const items = diagnosticsOf(document, cappedFindings(analysed.findingParts(), settings.diagnostics.maxPerDocument));
-  return { version: document.version, revision: analysed.revision, items };
+  while (!cancelled()) {
+    const enabled = await enabledDocument(context, uri);
+    if (!enabled) return undefined;
+    const { document, analysed, settings } = enabled;
+    const limit = settings.diagnostics.maxPerDocument;
+    const stop = (): boolean => cancelled() || context.cache.revisionOf(uri) !== analysed.revision;
+    const parts = await partsInSlices(analysed.findingParts(), limit, stop);
+    if (!parts) continue;
+    const items = diagnosticsOf(document, cappedFindings(parts, limit));
+    return { version: document.version, revision: analysed.revision, items };
+  }
+  return undefined;
+}
+
+/** How long diagnostics are worked out before other requests are let in. */
+const SLICE_MS = 8;
+
+/**
+ * Reads `parts` as far as `cappedFindings` will (up to one non-empty part after the cap's worth
+ * of errors), letting other requests in every few milliseconds; undefined once `stop()` says so.
+ */
+async function partsInSlices(
+  parts: Iterable<readonly Finding[]>,
+  limit: number,
+  stop: () => boolean,
+): Promise<(readonly Finding[])[] | undefined> {
+  const taken: (readonly Finding[])[] = [];
+  let errors = 0;
+  let sliceStart = performance.now();
+  for (const part of parts) {
+    taken.push(part);
+    if (errors >= limit && part.length > 0) break;
+    for (const finding of part) if (finding.severity === "error") errors++;
+    if (performance.now() - sliceStart < SLICE_MS) continue;
+    await new Promise((resolve) => setImmediate(resolve));
+    if (stop()) return undefined;
+    sliceStart = performance.now();
+  }
+  return taken;
 }
 
 const SEVERITY_RANK: Readonly<Record<FindingSeverity, number>> = { error: 0, warning: 1, information: 2, hint: 3 };
@@ -130,24 +170,44 @@ function rankOf(finding: Finding): number {
   return SEVERITY_RANK[finding.severity] ?? SEVERITY_RANK.information;
 }
 
+/** The species whose hover cards were written ahead, per open document. */
+function preparedCards(): { preparedFor(uri: string): Set<string>; forget(uri: string): void } {
+  const prepared = new Map<string, Set<string>>();
+  return {
+    preparedFor(uri) {
+      let species = prepared.get(uri);
+      if (!species) {
+        species = new Set();
+        prepared.set(uri, species);
+      }
+      return species;
+    },
+    forget: (uri) => void prepared.delete(uri),
+  };
+}
+
 function registerPull(context: ServerContext): DiagnosticsFeature {
+  const { preparedFor, forget } = preparedCards();
   const empty: DocumentDiagnosticReport = { kind: DocumentDiagnosticReportKind.Full, items: [] };
   // The result depends only on the text (its revision) and the settings; both are in the id.
   const resultIdOf = (revision: number): string => `${revision}:${context.settings.generation}`;
   context.connection.languages.diagnostics.on(
-    guarded<DocumentDiagnosticParams, DocumentDiagnosticReport>(context.log, "diagnostics", empty, async (params) => {
+    guarded<DocumentDiagnosticParams, DocumentDiagnosticReport>(context.log, "diagnostics", empty, async (params, token) => {
       const uri = params.textDocument.uri;
       if (!context.documents.get(uri)) return empty;
       const resultId = resultIdOf(context.cache.revisionOf(uri));
       if (params.previousResultId === resultId) return { kind: DocumentDiagnosticReportKind.Unchanged, resultId };
-      const current = await currentDiagnostics(context, uri);
+      const current = await currentDiagnostics(context, uri, () => token.isCancellationRequested);
       if (!current) return empty;
+      // Once the answer has gone out, hover cards are written while the editor is quiet.
+      const stale = (): boolean => context.cache.revisionOf(uri) !== current.revision;
+      setImmediate(() => void prepareHoverCards(context, uri, preparedFor(uri), stale).catch(() => undefined));
       return { kind: DocumentDiagnosticReportKind.Full, resultId: resultIdOf(current.revision), items: current.items };
     }),
   );
   return {
     documentChanged: () => undefined,
-    documentClosed: () => undefined,
+    documentClosed: forget,
     settingsChanged() {
       if (context.clientFeatures().diagnosticRefresh) {
         context.connection.languages.diagnostics.refresh().catch(() => undefined);
@@ -157,6 +217,7 @@ function registerPull(context: ServerContext): DiagnosticsFeature {
 }
 
 function registerPush(context: ServerContext): DiagnosticsFeature {
+  const { preparedFor, forget } = preparedCards();
   const timers = new Map<string, NodeJS.Timeout>();
 
   const publish = async (uri: string): Promise<void> => {
@@ -164,12 +225,14 @@ function registerPush(context: ServerContext): DiagnosticsFeature {
     if (!context.documents.get(uri)) return;
     const requestedRevision = context.cache.revisionOf(uri);
     try {
-      const current = await currentDiagnostics(context, uri);
+      // A newer text has its own publication scheduled: give this one up.
+      const current = await currentDiagnostics(context, uri, () => context.cache.revisionOf(uri) !== requestedRevision);
       // A newer text or a close wins over this result: it is stale, drop it.
       const now = context.documents.get(uri);
       if (!now || context.cache.revisionOf(uri) !== requestedRevision) return;
       if (current && current.revision !== requestedRevision) return;
       await context.connection.sendDiagnostics({ uri, version: now.version, diagnostics: current?.items ?? [] });
+      await prepareHoverCards(context, uri, preparedFor(uri), () => context.cache.revisionOf(uri) !== requestedRevision);
     } catch (error) {
       context.log.error(`lonepair: diagnostics for ${uri} failed: ${String(error)}`);
     }
@@ -186,6 +249,7 @@ function registerPush(context: ServerContext): DiagnosticsFeature {
   return {
     documentChanged: schedule,
     documentClosed(uri) {
+      forget(uri);
       clearTimeout(timers.get(uri));
       timers.delete(uri);
       context.connection.sendDiagnostics({ uri, diagnostics: [] }).catch(() => undefined);

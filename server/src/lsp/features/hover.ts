@@ -2,7 +2,7 @@
  * Hover: the species under the cursor, found among the model's occurrences, shown as a card.
  */
 import { MarkupKind, type Hover, type HoverParams } from "vscode-languageserver";
-import { resultMarkdown } from "../../../../shared/src/index";
+import { analyzeOccurrenceSafely, resultMarkdown } from "../../../../shared/src/index";
 import type { Finding, TextRange } from "../core";
 import { guarded } from "../guardedHandler";
 import { OFF_THREAD_ATOMS, createOffThreadCards } from "../offThreadCards";
@@ -28,7 +28,8 @@ export function registerHover(context: ServerContext): void {
       // thread, so that other requests are answered meanwhile.
       const large = result.ok && result.value.reading.notation === "smiles" && result.value.graph.atoms.length > OFF_THREAD_ATOMS;
       const written = large && result.ok ? await offThread.card(result.value.reading.text, options) : undefined;
-      const alsoAProblem = !result.ok && isReported(analysed.findings(), species.range, result.problem.message);
+      const alsoAProblem =
+        !result.ok && isReported(analysed.findingsAround(species.range.start, species.range.end), species.range, result.problem.message);
       const value = written ?? resultMarkdown(species.text, result, options, { alsoAProblem });
       return {
         contents: { kind: format === "markdown" ? MarkupKind.Markdown : MarkupKind.PlainText, value },
@@ -36,6 +37,38 @@ export function registerHover(context: ServerContext): void {
       };
     }),
   );
+}
+
+/** Distinct species whose cards are written ahead of hovers, per document version. */
+const PREPARED_CARDS_LIMIT = 2000;
+/** How long card preparation runs before it lets requests in. */
+const PREPARE_SLICE_MS = 4;
+
+/**
+ * Writes, a few at a time between other requests, the hover card of each distinct species of a
+ * document whose analysis is done, so that the first hover on a species costs no more than the
+ * next (the card's 3D model is remembered with its analysis). `prepared` holds the species done
+ * for this document already. Tables are left out: their models are read only around the rows
+ * asked about. Gives up as soon as `stale()` says the text changed.
+ */
+export async function prepareHoverCards(context: ServerContext, uri: string, prepared: Set<string>, stale: () => boolean): Promise<void> {
+  const enabled = await enabledDocument(context, uri);
+  if (!enabled) return;
+  const options = { angleDecimals: enabled.settings.angleDecimals, format: context.clientFeatures().hoverFormat };
+  let sliceStart = performance.now();
+  for (const occurrence of enabled.analysed.distinctSpecies()) {
+    if (prepared.size >= PREPARED_CARDS_LIMIT) return;
+    if (prepared.has(occurrence.text)) continue;
+    prepared.add(occurrence.text);
+    const result = analyzeOccurrenceSafely(occurrence);
+    // Large SMILES species get their cards on the worker thread when hovered.
+    if (!result.ok || (result.value.reading.notation === "smiles" && result.value.graph.atoms.length > OFF_THREAD_ATOMS)) continue;
+    resultMarkdown(occurrence.text, result, options, { alsoAProblem: false });
+    if (performance.now() - sliceStart < PREPARE_SLICE_MS) continue;
+    await new Promise((resolve) => setImmediate(resolve));
+    if (stale()) return;
+    sliceStart = performance.now();
+  }
 }
 
 /** Whether the editor already shows `message` as a problem on `range` (the hover then need not repeat it). */
