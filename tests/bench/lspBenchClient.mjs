@@ -1,0 +1,123 @@
+// A protocol client for the editor benchmarks: starts the built server over stdio as an editor
+// does, with pull diagnostics or with pushed ones, and times what an editor waits for.
+import { spawn } from "node:child_process";
+import { existsSync, readFileSync } from "node:fs";
+import { loadavg } from "node:os";
+import { fileURLToPath } from "node:url";
+import {
+  DidChangeTextDocumentNotification,
+  DidCloseTextDocumentNotification,
+  DidOpenTextDocumentNotification,
+  DocumentDiagnosticRequest,
+  HoverRequest,
+  InitializeRequest,
+  InitializedNotification,
+  PublishDiagnosticsNotification,
+  StreamMessageReader,
+  StreamMessageWriter,
+  createProtocolConnection,
+} from "vscode-languageserver-protocol/node";
+
+const serverPath = fileURLToPath(new URL("../../dist/server.js", import.meta.url));
+
+/** The machine's load beside each figure: the benchmark shares its cores. */
+export function loadNote() {
+  return `load average ${loadavg()
+    .map((value) => value.toFixed(2))
+    .join(" ")}`;
+}
+
+export function percentile(values, fraction) {
+  const sorted = [...values].sort((a, b) => a - b);
+  return sorted[Math.min(sorted.length - 1, Math.floor(fraction * sorted.length))];
+}
+
+export const verdict = (met) => (met ? "meets aim" : "MISSES aim");
+
+/**
+ * Starts the server; `mode` is "pull" (the client asks for diagnostics) or "push" (the server
+ * publishes them after a pause in typing).
+ */
+export async function startServer(mode) {
+  if (!existsSync(serverPath)) {
+    console.error("dist/server.js is missing: run `npm run build` first.");
+    process.exit(2);
+  }
+  // LONEPAIR_BENCH_PROFILE=<folder> writes a CPU profile of the server there.
+  const profile = process.env.LONEPAIR_BENCH_PROFILE;
+  const flags = profile ? ["--cpu-prof", `--cpu-prof-dir=${profile}`] : [];
+  const child = spawn(process.execPath, [...flags, serverPath, "--stdio"], { stdio: ["pipe", "pipe", "inherit"] });
+  const connection = createProtocolConnection(new StreamMessageReader(child.stdout), new StreamMessageWriter(child.stdin));
+  connection.onRequest("workspace/configuration", (params) => params.items.map(() => null));
+  connection.onRequest("client/registerCapability", () => null);
+  const published = new Map();
+  const waiting = [];
+  connection.onNotification(PublishDiagnosticsNotification.type, (params) => {
+    published.set(params.uri, params);
+    for (const waiter of [...waiting]) waiter();
+  });
+  connection.onNotification(() => undefined);
+  connection.listen();
+  const textDocument =
+    mode === "pull" ? { diagnostic: { dynamicRegistration: false }, publishDiagnostics: {} } : { publishDiagnostics: {} };
+  await connection.sendRequest(InitializeRequest.type, {
+    processId: process.pid,
+    rootUri: null,
+    capabilities: { textDocument: { ...textDocument, hover: { contentFormat: ["markdown"] } } },
+    workspaceFolders: null,
+  });
+  await connection.sendNotification(InitializedNotification.type, {});
+
+  const pushedFor = (uri, version) =>
+    new Promise((resolve) => {
+      const check = () => {
+        const params = published.get(uri);
+        if (params && params.version === version) {
+          waiting.splice(waiting.indexOf(check), 1);
+          resolve(params.diagnostics);
+        }
+      };
+      waiting.push(check);
+      check();
+    });
+
+  return {
+    mode,
+    /** Diagnostics of `uri` at `version`: pulled, or waited for. */
+    async diagnostics(uri, version) {
+      if (mode === "pull") return (await connection.sendRequest(DocumentDiagnosticRequest.type, { textDocument: { uri } })).items ?? [];
+      return pushedFor(uri, version);
+    },
+    open(uri, languageId, version, text) {
+      return connection.sendNotification(DidOpenTextDocumentNotification.type, { textDocument: { uri, languageId, version, text } });
+    },
+    replaceLine(uri, version, line, oldLength, text) {
+      return connection.sendNotification(DidChangeTextDocumentNotification.type, {
+        textDocument: { uri, version },
+        contentChanges: [{ range: { start: { line, character: 0 }, end: { line, character: oldLength } }, text }],
+      });
+    },
+    close(uri) {
+      return connection.sendNotification(DidCloseTextDocumentNotification.type, { textDocument: { uri } });
+    },
+    hover(uri, position) {
+      return connection.sendRequest(HoverRequest.type, { textDocument: { uri }, position });
+    },
+    /** The server's peak resident memory so far, in MB. */
+    peakMegabytes() {
+      try {
+        const match = /VmHWM:\s+(\d+) kB/.exec(readFileSync(`/proc/${child.pid}/status`, "utf8"));
+        return match ? Number(match[1]) / 1024 : NaN;
+      } catch {
+        return NaN;
+      }
+    },
+    async stop() {
+      if (!profile) return void child.kill();
+      // A profile is written only on an orderly exit.
+      await connection.sendRequest("shutdown");
+      await connection.sendNotification("exit");
+      await new Promise((resolve) => child.on("exit", resolve));
+    },
+  };
+}
