@@ -28,7 +28,7 @@
   const state = restoredState(host.getState());
 
   function restoredState(saved) {
-    const fresh = { model: null, problem: null, mode: "molecular", rotation: IDENTITY };
+    const fresh = { model: null, problem: null, mode: "molecular", rotation: IDENTITY, lewis: null };
     if (!isObject(saved)) return fresh;
     const checked = saved.model === null || saved.model === undefined ? { model: null } : checkedModel(saved.model);
     return {
@@ -36,6 +36,7 @@
       problem: checked.reason ? noModelProblem(checked.reason) : checkedProblem(saved.problem),
       mode: saved.mode === "electron" ? "electron" : "molecular",
       rotation: isRotation(saved.rotation) ? saved.rotation : startingRotation(checked.model),
+      lewis: checked.model ? checkedLewis(saved.lewis) : null,
     };
   }
 
@@ -158,6 +159,13 @@
 
   function noModelProblem(reason) {
     return { text: "No model", message: `The shape could not be drawn: ${reason}.` };
+  }
+
+  /** The Lewis diagram's two images: only SVG data URIs of a sane size, and text for the alt. */
+  function checkedLewis(raw) {
+    if (!isObject(raw) || !isText(raw.altText)) return null;
+    const image = (uri) => isText(uri) && uri.startsWith("data:image/svg+xml;base64,") && uri.length < 400000;
+    return image(raw.light) && image(raw.dark) ? { light: raw.light, dark: raw.dark, altText: raw.altText } : null;
   }
 
   function checkedProblem(raw) {
@@ -286,6 +294,7 @@
     const warnings = document.getElementById("warnings");
     while (warnings.firstChild) warnings.removeChild(warnings.firstChild);
     if (!model) {
+      renderLewis();
       text("title", problem ? String(problem.text || "No model") : "No species");
       text("subtitle", problem ? String(problem.message) : "");
       text("mode-note", "");
@@ -294,6 +303,7 @@
       return;
     }
     text("title", String(model.title));
+    renderLewis();
     const subtitle = [model.formula !== model.title ? model.formula : "", model.name || ""].filter(Boolean).join(" · ");
     text("subtitle", subtitle);
     text(
@@ -310,6 +320,26 @@
       warnings.appendChild(item);
     }
     text("caution", String(model.caution || ""));
+  }
+
+  /** The Lewis diagram in the ink that reads on the editor's theme (dark themes get light ink). */
+  function renderLewis() {
+    const figure = document.getElementById("lewis");
+    const lewis = state.model ? state.lewis : null;
+    figure.hidden = !lewis;
+    let image = figure.querySelector("img");
+    if (!lewis) {
+      if (image) image.remove();
+      return;
+    }
+    if (!image) {
+      image = document.createElement("img");
+      figure.insertBefore(image, figure.firstChild);
+    }
+    const classes = document.body.classList;
+    const darkTheme = classes.contains("vscode-dark") || classes.contains("vscode-high-contrast");
+    image.src = darkTheme ? lewis.dark : lewis.light;
+    image.alt = lewis.altText;
   }
 
   function centreEntry(centre) {
@@ -411,12 +441,15 @@
       state.model = checked.model;
       state.problem = checked.reason ? noModelProblem(checked.reason) : null;
       state.rotation = startingRotation(checked.model);
+      state.lewis = checked.model ? checkedLewis(message.lewis) : null;
       heldFrame = null;
     } else if (message.type === "problem") {
       state.model = null;
+      state.lewis = null;
       state.problem = checkedProblem(message);
     } else if (message.type === "clear") {
       state.model = null;
+      state.lewis = null;
       state.problem = null;
     } else {
       return;

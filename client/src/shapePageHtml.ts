@@ -46,6 +46,7 @@ export function shapePageHtml(resources: ShapePageResources): string {
   <aside class="legend" aria-label="Legend">
     <h1 id="title"></h1>
     <p id="subtitle" class="subtitle"></p>
+    <figure id="lewis" class="lewis" hidden><figcaption>Lewis structure</figcaption></figure>
     <div class="toggle" role="group" aria-label="What to show">
       <button type="button" id="show-molecular" data-mode="molecular">Molecular geometry</button>
       <button type="button" id="show-electron" data-mode="electron">Electron geometry</button>

@@ -17,7 +17,7 @@ const FOLLOW_DELAY_MS = 200;
 
 /** What the page is told. */
 type PageMessage =
-  | { readonly type: "show"; readonly model: unknown }
+  | { readonly type: "show"; readonly model: unknown; readonly lewis?: unknown }
   | { readonly type: "problem"; readonly text: string; readonly message: string }
   | { readonly type: "clear" };
 
@@ -63,7 +63,7 @@ export function createShapePanelController(
       lastKey = key;
       post(
         found.model
-          ? { type: "show", model: found.model }
+          ? { type: "show", model: found.model, lewis: found.lewis }
           : { type: "problem", text: found.text, message: found.problem?.message ?? "No 3D model could be built for this species." },
       );
     } catch (error) {

@@ -8,7 +8,7 @@
 import type { SummaryFormat } from "./report/summaryTable";
 import type { ShapeViewModel } from "./report/shapeViewModel";
 import type { CoordinateFile, CoordinateFormat } from "./report/speciesModel";
-import type { DiagramTheme } from "./report/lewisDiagram";
+import type { DiagramTheme, LewisViewImages } from "./report/lewisDiagram";
 import type { LewisFigure } from "./report/lewisFigure";
 
 /** A zero-based line and UTF-16 character offset in that line. */
@@ -67,6 +67,8 @@ export type ShapeModelParams = SpeciesAtParams;
 export interface ShapeModelResult extends SpeciesAtResult {
   /** What the 3D view draws; absent when the species has no model (see `problem`). */
   readonly model?: ShapeViewModel;
+  /** The species' Lewis diagram for the view's side panel; absent when it has none to show. */
+  readonly lewis?: LewisViewImages;
 }
 
 /** `lonepair/coordinates`: model coordinates of the species at a position as a file's text, or null. */

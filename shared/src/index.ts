@@ -57,8 +57,15 @@ export { toAnalysisJson } from "./report/analysisJson";
 export { HOVER_CAUTION, hoverMarkdown, problemMarkdown, resultMarkdown } from "./report/hoverMarkdown";
 export type { HoverFormat, HoverMarkdownOptions } from "./report/hoverMarkdown";
 export { shapeViewModel } from "./report/shapeViewModel";
-export { DIAGRAM_THEMES, MAX_DIAGRAM_ATOMS, chargeLabel, lewisDiagram } from "./report/lewisDiagram";
-export type { DiagramTheme, LewisDiagram, LewisDiagramOptions, LewisDiagramResult } from "./report/lewisDiagram";
+export {
+  DIAGRAM_THEMES,
+  MAX_DIAGRAM_ATOMS,
+  MAX_VIEW_DIAGRAM_ATOMS,
+  chargeLabel,
+  lewisDiagram,
+  lewisViewImages,
+} from "./report/lewisDiagram";
+export type { DiagramTheme, LewisDiagram, LewisDiagramOptions, LewisDiagramResult, LewisViewImages } from "./report/lewisDiagram";
 export { DEFAULT_FIGURES_FOLDER, figureFileName, figuresFolderFrom, lewisFigureOf, markdownImage } from "./report/lewisFigure";
 export type { LewisFigure, LewisFigureOptions, LewisFigureResult } from "./report/lewisFigure";
 export type { ShapeViewModel } from "./report/shapeViewModel";

@@ -12,7 +12,7 @@ import type { BrowserContext, Page } from "playwright-core";
 import { CHROMIUM, launchHeadlessChromium } from "../support/headlessChromium";
 import { afterAll, beforeAll, describe, expect, it } from "vitest";
 import { shapePageHtml } from "../../client/src/shapePageHtml";
-import { analyzeSpecies } from "../../shared/src/index";
+import { analyzeSpecies, lewisViewImages } from "../../shared/src/index";
 import { buildCoordinates } from "../../shared/src/chemistry/geometry/buildCoordinates";
 import { shapeViewModel, type ShapeViewModel } from "../../shared/src/report/shapeViewModel";
 
@@ -158,6 +158,36 @@ describe.skipIf(!haveBrowser)("3D shape page in headless Chromium", () => {
     expect(saved.mode).toBe("electron");
     expect(saved.model.formula).toBe("XeF4");
     expect(saved.rotation).toHaveLength(9);
+    expect(errors).toEqual([]);
+    await page.close();
+  });
+
+  it("shows the Lewis diagram in the side panel in the ink of the editor's theme, and only as an SVG data image", async () => {
+    const { page, errors } = await openPage();
+    const analysed = analyzeSpecies("ClF3");
+    if (!analysed.ok) throw new Error(analysed.problem.message);
+    const lewis = lewisViewImages(analysed.value)!;
+    await page.evaluate(
+      () => ((globalThis as unknown as { document: { body: { className: string } } }).document.body.className = "vscode-dark"),
+    );
+    await page.evaluate((message) => (globalThis as unknown as PageGlobals).postMessage(message, "*"), {
+      type: "show",
+      model: viewOf("ClF3"),
+      lewis,
+    });
+    await page.waitForSelector("#lewis img");
+    expect(await page.locator("#lewis img").getAttribute("src")).toBe(lewis.dark);
+    expect(await page.locator("#lewis img").getAttribute("alt")).toBe("Lewis structure of ClF3 (chlorine trifluoride)");
+    const hostile = { ...lewis, light: "https://lonepair-webview.test/elsewhere.svg", dark: "javascript:alert(4)" };
+    await page.evaluate((message) => (globalThis as unknown as PageGlobals).postMessage(message, "*"), {
+      type: "show",
+      model: viewOf("SF4"),
+      lewis: hostile,
+    });
+    await page.waitForFunction(
+      () => (globalThis as unknown as { document: { querySelector(s: string): unknown } }).document.querySelector("#lewis img") === null,
+    );
+    expect(await page.locator("#lewis").isHidden()).toBe(true);
     expect(errors).toEqual([]);
     await page.close();
   });

@@ -3,7 +3,7 @@
  * editor writes beside a document and links from it, for the species at a position or a typed one.
  */
 import { afterAll, beforeAll, describe, expect, it } from "vitest";
-import type { LewisFigureRequestResult } from "../../shared/src/editorRequests";
+import type { LewisFigureRequestResult, ShapeModelResult } from "../../shared/src/editorRequests";
 import { parseXml } from "../support/parseXml";
 import { fixtureUri, startSession, type LspSession } from "./lspSession";
 
@@ -62,5 +62,20 @@ describe("lonepair/lewisFigure", () => {
     const result = await ask({ species: "CH5" });
     expect(result?.figure).toBeUndefined();
     expect(result?.problem?.message).toBeTruthy();
+  });
+
+  it("gives the 3D view's side panel the diagram in dark and light ink", async () => {
+    const result = await session.connection.sendRequest<ShapeModelResult | null>("lonepair/shapeModel", {
+      uri: NOTE_URI,
+      position: { line: 2, character: 13 },
+    });
+    expect(result?.text).toBe("ClF3");
+    const lewis = result!.lewis!;
+    expect(lewis.altText).toBe("Lewis structure of ClF3 (chlorine trifluoride)");
+    const decoded = (uri: string) => Buffer.from(uri.slice(uri.indexOf(",") + 1), "base64").toString("utf8");
+    expect(parseXml(decoded(lewis.dark)).some((element) => element.attributes.fill === "#ececec")).toBe(true);
+    expect(parseXml(decoded(lewis.light)).some((element) => element.attributes.fill === "#1b1b1b")).toBe(true);
+    // from memory: Housecroft and Sharpe, Inorganic Chemistry, ch. 2 (ClF3: two lone pairs on Cl, three on each F)
+    expect(parseXml(decoded(lewis.light)).filter((element) => element.attributes.class === "electron").length).toBe(2 * (2 + 9));
   });
 });

@@ -7,6 +7,7 @@
  */
 import type { MolecularGraph, SpeciesAnalysis } from "../chemistry/types";
 import { MODEL_CAUTION } from "./analysisCard";
+import { svgDataUri } from "./shapeSketch";
 import { centreLayout } from "./lewis/centreLayout";
 import { clearestDirection, normalised, spreadInGaps } from "./lewis/directions";
 import { equivalentForms } from "./lewis/equivalentForms";
@@ -315,4 +316,30 @@ function draw(
     .filter((line) => line.length > 0)
     .join("\n");
   return { svg, width: shownWidth, height: shownHeight };
+}
+
+/** The Lewis diagram for a page that follows the editor's theme: one image for each kind of theme. */
+export interface LewisViewImages {
+  /** Data URI of the diagram in dark ink, for light themes. */
+  readonly light: string;
+  /** Data URI of the diagram in light ink, for dark and high-contrast themes. */
+  readonly dark: string;
+  readonly altText: string;
+}
+
+/** Past this many atoms the side panel's diagram is too dense to read and too slow to follow the cursor. */
+export const MAX_VIEW_DIAGRAM_ATOMS = 60;
+
+/**
+ * The diagram of structure 1 as two transparent images (light and dark themes), at most
+ * `maxSize` pixels on a side; undefined for a lone atom, a species of more than
+ * {@link MAX_VIEW_DIAGRAM_ATOMS} atoms, or one that cannot be drawn.
+ */
+export function lewisViewImages(analysis: SpeciesAnalysis, maxSize = 260): LewisViewImages | undefined {
+  const atomCount = analysis.graph.atoms.length;
+  if (atomCount < 2 || atomCount > MAX_VIEW_DIAGRAM_ATOMS) return undefined;
+  const light = lewisDiagram(analysis, { theme: "light", maxSize });
+  const dark = lewisDiagram(analysis, { theme: "dark", maxSize });
+  if (!light.ok || !dark.ok) return undefined;
+  return { light: svgDataUri(light.diagram.svg), dark: svgDataUri(dark.diagram.svg), altText: light.diagram.altText };
 }

@@ -13,6 +13,7 @@ import {
   SPECIES_AT_METHOD,
   coordinateFileOf,
   documentKindFor,
+  lewisViewImages,
   missingModelReason,
   shapeOf,
   shapeViewModelOf,
@@ -51,7 +52,8 @@ export function registerSpeciesRequests(context: ServerContext): void {
       const described = describe(found.document, found.species);
       if (!found.species.analysis.ok) return described;
       const model = shapeViewModelOf(found.species.analysis.value);
-      if (model) return { ...described, model };
+      const lewis = lewisViewImages(found.species.analysis.value);
+      if (model) return { ...described, model, ...(lewis ? { lewis } : {}) };
       const tooLarge = shapeOf(found.species.analysis.value).coordinates.tooLarge;
       return {
         ...described,
