@@ -97,6 +97,15 @@ describe("analyze: the text card", () => {
   });
 });
 
+describe("analyze: the point group of a model less symmetric than the molecule", () => {
+  // from memory: descriptive inorganic chemistry texts: P4O10 is a Td cage
+  it("P4O10's card says the real molecule is Td", () => {
+    const { stdout } = runCli("analyze", "P4O10");
+    expect(stdout).toMatch(/Point group\s+C3v \(of the model coordinates; the real molecule is Td\)/);
+    expect(stdout).toMatch(/Vibrations\s+not predicted/);
+  });
+});
+
 describe("the hover card's Vibrations section", () => {
   // from memory: Cotton, "Chemical Applications of Group Theory": H2O 2A1 + B2 (molecule in yz), all active
   it("water: modes, bands and stretching", () => {

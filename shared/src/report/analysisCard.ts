@@ -7,7 +7,7 @@ import type { AngleExpectation, AnalysisResult, CentreAnalysis, MeasuredAngle, S
 import { lewisJson } from "./analysisJson";
 import { compositeKind, distinctAnalysedParts, innerParts, partLabel } from "./compositeParts";
 import { isotopeNote, stateNote } from "./notationNotes";
-import { measuredFundamentalsOf, vibrationsOf } from "../chemistry/vibrations/speciesVibrations";
+import { measuredFundamentalsOf, realPointGroupOf, vibrationsOf } from "../chemistry/vibrations/speciesVibrations";
 import { bandsLine, coincidenceLine, countedInNote, measuredLine, modesLine, notPredictedLine, stretchingLine } from "./vibrationText";
 
 /** Wrappers for the parts of a card a caller may want to highlight. Identity by default. */
@@ -98,7 +98,11 @@ function successLines(input: string, analysis: SpeciesAnalysis, style: CardStyle
   analysis.centres.forEach((centre, position) => lines.push(...centreLines(centre, position === 0 ? analysis.measuredAngles : [], style)));
   if (analysis.centres.length === 0) lines.push(row(style, "Centres", "none (no atom has two or more neighbours)"));
   const pointGroup = shapeOf(analysis).pointGroup;
-  if (pointGroup) lines.push(row(style, "Point group", pointGroup));
+  if (pointGroup) {
+    const real = realPointGroupOf(analysis);
+    const note = real && real !== pointGroup ? ` ${style.muted(`(of the model coordinates; the real molecule is ${real})`)}` : "";
+    lines.push(row(style, "Point group", pointGroup + note));
+  }
   const verdict = analysis.polarity.undetermined ? "not judged" : analysis.polarity.polar ? "polar" : "nonpolar";
   lines.push(row(style, "Polarity", `${verdict} - ${analysis.polarity.reason}`));
   lines.push(...vibrationLines(analysis, style));

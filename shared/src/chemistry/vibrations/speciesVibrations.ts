@@ -27,8 +27,13 @@ export function measuredFundamentalsOf(analysis: SpeciesAnalysis): MeasuredFunda
   return result.ok ? measuredFundamentalsFor(analysis.reading.composition, analysis.reading.charge, result.value) : undefined;
 }
 
+/** The point group of the real molecule where it is known apart from the model (cages and rings such as S8). */
+export function realPointGroupOf(analysis: SpeciesAnalysis): string | undefined {
+  return singleStructureFor(analysis.reading.composition, analysis.reading.charge)?.pointGroup;
+}
+
 function computeVibrations(analysis: SpeciesAnalysis): VibrationalModesResult {
-  const { graph, reading } = analysis;
+  const { graph } = analysis;
   if (graph.atoms.length < 2) return { ok: false, reason: "a single atom has no vibrations" };
   if (!connected(graph)) {
     return { ok: false, reason: "the species is in separate pieces, each with its own vibrations; analyse each piece on its own" };
@@ -38,7 +43,7 @@ function computeVibrations(analysis: SpeciesAnalysis): VibrationalModesResult {
   if (tooLarge !== undefined) return { ok: false, reason: lowerFirst(tooLarge) };
   const group = shape.pointGroup;
   if (group === undefined) return { ok: false, reason: "the point group of the model could not be found" };
-  const real = singleStructureFor(reading.composition, reading.charge)?.pointGroup;
+  const real = realPointGroupOf(analysis);
   if (real !== undefined && real !== group) {
     return {
       ok: false,
