@@ -50,6 +50,19 @@ export {
 export type { DelimitedRowMemo } from "./document/tables/delimitedFindings";
 export type * from "./document/types";
 
+// Equations: reading them, balancing them, and what the checks say about them.
+export type * from "./document/reactions/reactionTypes";
+export { readWholeEquation, equationsInLine } from "./document/reactions/readEquation";
+export { equationsInProse } from "./document/reactions/proseEquations";
+export { judgeReaction, rewrittenWithCoefficients, imbalanceText, termsOf } from "./document/reactions/judgeReaction";
+export { reactionFinding, reactionFindings, REACTION_CODES } from "./document/reactions/reactionFindings";
+export { balanceText, NOT_AN_EQUATION } from "./document/reactions/balanceText";
+export type { BalanceAnswer } from "./document/reactions/balanceText";
+export { balanceEquation, CHARGE_LABEL } from "./chemistry/reactions/balance";
+export type { BalanceLine, BalanceTerm, BalanceVerdict } from "./chemistry/reactions/balance";
+export { formatFraction, fraction } from "./chemistry/reactions/rational";
+export type { Fraction } from "./chemistry/reactions/rational";
+
 // Reports: cards, JSON, hovers, summary tables and the 3D view model.
 export { MODEL_CAUTION, PLAIN_CARD_STYLE, formatAnalysisCard } from "./report/analysisCard";
 export type { CardStyle } from "./report/analysisCard";

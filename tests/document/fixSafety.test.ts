@@ -116,12 +116,17 @@ function errorKey(text: string, finding: Finding, at: number): string {
  * Returns a description of each violation.
  */
 function fixViolations(text: string, kind: DocumentKind): string[] {
-  const findings = checkDocument(analyzeDocument(text, kind));
+  const model = analyzeDocument(text, kind);
+  const findings = checkDocument(model);
   const violations: string[] = [];
+  // An equation's finding sits on its arrow; its fix rewrites the coefficients, within the equation.
+  const reach = (finding: Finding): { start: number; end: number } =>
+    model.reactions?.find((reaction) => reaction.arrow.range.start === finding.range.start)?.range ?? finding.range;
   for (const finding of findings) {
     const fix = finding.fix;
     if (!fix) continue;
-    if (fix.range.start < finding.range.start || fix.range.end > finding.range.end) {
+    const allowed = reach(finding);
+    if (fix.range.start < allowed.start || fix.range.end > allowed.end) {
       violations.push(`fix for ${finding.code} reaches outside its finding`);
       continue;
     }
@@ -130,8 +135,18 @@ function fixViolations(text: string, kind: DocumentKind): string[] {
     const before = new Set(
       findings.filter((other) => other.severity === "error" && other !== finding).map((other) => errorKey(text, other, other.range.start)),
     );
-    for (const after of checkDocument(analyzeDocument(fixed, kind))) {
+    const fixedModel = analyzeDocument(fixed, kind);
+    for (const after of checkDocument(fixedModel)) {
       if (after.severity !== "error") continue;
+      // An equation with a species the core refused was not judged; once the species is fixed, it is.
+      const equation = fixedModel.reactions?.find((reaction) => reaction.arrow.range.start === after.range.start);
+      if (
+        equation &&
+        !finding.code.startsWith("equation-") &&
+        equation.range.start <= fix.range.start &&
+        equation.range.end >= fix.range.start + fix.newText.length
+      )
+        continue;
       const inFix = after.range.start < fix.range.start + fix.newText.length && after.range.end > fix.range.start;
       const original = after.range.start >= fix.range.start + fix.newText.length ? after.range.start - shift : after.range.start;
       if (inFix || !before.has(errorKey(fixed, after, original))) {

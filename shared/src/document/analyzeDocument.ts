@@ -9,6 +9,7 @@ import { readDelimitedRecords } from "./tables/delimitedRecords";
 import { readJsonRecords } from "./tables/json";
 import type { RecordSink } from "./tables/records";
 import { readYamlRecords } from "./tables/yaml";
+import type { Reaction } from "./reactions/reactionTypes";
 import type { DocumentKind, DocumentModel, Finding, SpeciesOccurrence } from "./types";
 
 /** What a caller may already know about a document. */
@@ -31,7 +32,7 @@ export function analyzeDocument(
   read: SpeciesReader = memoisedReader(),
   options: AnalyzeOptions = {},
 ): DocumentModel {
-  const sink: RecordSink = { occurrences: [], unreadable: [], records: [] };
+  const sink: RecordSink = { occurrences: [], unreadable: [], records: [], reactions: [] };
   let problems: readonly Finding[];
   try {
     const source = typeof text === "string" ? text : "";
@@ -46,6 +47,7 @@ export function analyzeDocument(
     records: sink.records,
     problems,
     unreadable: [...sink.unreadable].sort((a, b) => a.range.start - b.range.start),
+    reactions: distinctReactions(sink.reactions ?? []),
   };
 }
 
@@ -85,4 +87,15 @@ export function inDocumentOrder(occurrences: SpeciesOccurrence[]): SpeciesOccurr
     }
   }
   return occurrences;
+}
+
+/** In document order, one per arrow: a cell read as an equation is not read again as prose. */
+function distinctReactions(reactions: readonly Reaction[]): Reaction[] {
+  const seen = new Set<number>();
+  const distinct = reactions.filter((reaction) => {
+    if (seen.has(reaction.arrow.range.start)) return false;
+    seen.add(reaction.arrow.range.start);
+    return true;
+  });
+  return distinct.sort((a, b) => a.range.start - b.range.start);
 }

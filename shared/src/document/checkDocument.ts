@@ -11,6 +11,7 @@ import { checkRecord } from "./checks/recordChecks";
 import { severityOf } from "./findingSeverity";
 import { isSafeSpellingFix, type AnalyzeText } from "./fixPolicy";
 import { groupAbbreviationIn } from "./groupAbbreviations";
+import { reactionFindings } from "./reactions/reactionFindings";
 import type { DocumentModel, Finding, SpeciesOccurrence, UnreadableSpecies } from "./types";
 
 /** Findings for `model`, with `analyze` working out each distinct species once. */
@@ -66,6 +67,21 @@ function checkModel(
   for (const record of model.records) {
     const result = analysisOf(record.species);
     if (result?.ok) checkRecord(record, result.value, findings);
+  }
+  if (model.reactions && model.reactions.length > 0) {
+    const analysisOfText = (text: string): AnalysisResult | undefined => {
+      let result = memo.get(text);
+      if (!result) {
+        try {
+          result = analyze(text);
+        } catch (error) {
+          result = { ok: false, problem: { code: "no-valid-structure", message: String(error) } };
+        }
+        memo.set(text, result);
+      }
+      return result;
+    };
+    findings.push(...reactionFindings(model.reactions, analysisOfText));
   }
   return findings.sort((a, b) => a.range.start - b.range.start);
 }

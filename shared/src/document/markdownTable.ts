@@ -5,7 +5,8 @@
 import type { TextRange } from "../chemistry/types";
 import { scanProse } from "./scanProse";
 import type { ScanSteps, SpeciesReader } from "./speciesReader";
-import { isFormulaHeader, meaningOfHeader, namesSpecies } from "./tables/headers";
+import { readWholeEquation } from "./reactions/readEquation";
+import { isEquationHeader, isFormulaHeader, meaningOfHeader, namesSpecies } from "./tables/headers";
 import { addRecord, type RecordField, type RecordSink } from "./tables/records";
 
 const DELIMITER_ROW = /^ {0,3}\|?\s*:?-+:?\s*(?:\|\s*:?-+:?\s*)*\|?\s*$/;
@@ -64,12 +65,17 @@ export function* markdownTableSteps(
     return meaning ? { meaning, formulaHeader: isFormulaHeader(title) } : undefined;
   });
   const hasSpeciesColumn = columns.some((column) => namesSpecies(column?.meaning));
+  const equationColumns = header.map((cell) => isEquationHeader(text.slice(cell.start, cell.end)));
   for (const cell of header) if (!columns[header.indexOf(cell)]) scanProse(text, cell.start, cell.end, sink, read);
   for (const line of lines.slice(2)) {
     if (sink.occurrences.length + sink.unreadable.length + sink.records.length >= pauseAt) yield line.start;
     const cells = tableCells(text, line.start, line.end);
     const fields: RecordField[] = [];
     cells.forEach((cell, index) => {
+      if (equationColumns[index] && sink.reactions) {
+        const reaction = readWholeEquation(text, cell.start, cell.end, "table", read);
+        if (reaction) sink.reactions.push(reaction);
+      }
       const column = hasSpeciesColumn ? columns[index] : undefined;
       const cellText = text.slice(cell.start, cell.end);
       const naming = column && namesSpecies(column.meaning);

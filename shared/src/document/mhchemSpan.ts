@@ -3,6 +3,7 @@
  * an equation ("SF4 + 2 H2O -> SO2 + 4 HF"), without coefficients, arrows and state symbols.
  */
 import type { TextRange } from "../chemistry/types";
+import { readWholeEquation } from "./reactions/readEquation";
 import { occurrenceAt, unreadableAt, type ScanSink, type SpeciesReader } from "./speciesReader";
 
 /** Longest `\ce{...}` body looked at; longer spans are not notes but pasted data. */
@@ -115,6 +116,10 @@ const HYDRATE_GAP = /^[ \t]*[*\u00b7\u2022\u2219\u22c5][ \t]*(?:\d+[ \t]*)?$/;
  * chemistry by the writer's own say-so, so a formula-shaped piece that does not read is reported.
  */
 export function scanMhchemBody(text: string, start: number, end: number, read: SpeciesReader, sink: ScanSink): void {
+  if (sink.reactions) {
+    const reaction = readWholeEquation(text, start, end, "mhchem", read);
+    if (reaction) sink.reactions.push(reaction);
+  }
   const pieces = mhchemPieces(text, start, end);
   // "\ce{A ->[H2O] B}": a lone capital that is no element makes the equation a scheme, whose
   // lone capitals (B too) stand for any species.

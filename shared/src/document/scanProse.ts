@@ -10,6 +10,7 @@ import { isSafeSpellingFix } from "./fixPolicy";
 import { isAlloyDesignation, isGroupFragment, isSeriesId, type SeriesMemo } from "./nonSpeciesContext";
 import { latexMathSpan, scanLatexMath, type MathSpan } from "./latexMathSpan";
 import { mhchemSpanEnd, scanMhchemBody } from "./mhchemSpan";
+import { equationsInProse } from "./reactions/proseEquations";
 import { isPartOfCode, isWordContext } from "./proseContext";
 import { isConfidentToken, needsCalmContext, shapeOf } from "./proseTokenRules";
 import { isOccurrence, smilesAt, smilesOccurrence } from "./smilesSpan";
@@ -73,6 +74,7 @@ export function* proseSteps(text: string, start: number, end: number, sink: Scan
     seriesMemo: new Map(),
     smilesMemo: new Map(),
   };
+  if (sink.reactions) sink.reactions.push(...equationsInProse(text, start, end, read));
   let index = start;
   while (index < end) {
     if (sink.occurrences.length + sink.unreadable.length >= pauseAt) yield index;

@@ -4,6 +4,7 @@
  */
 import type { ReadResult, SpeciesNotation, SpeciesReading } from "../chemistry/types";
 import { readSpecies } from "../chemistry/reader/readSpecies";
+import type { Reaction } from "./reactions/reactionTypes";
 import type { SpeciesOccurrence, UnreadableSpecies } from "./types";
 
 /** Reads one whole species string; the document code only ever asks through this. */
@@ -55,6 +56,8 @@ export function unreadableAt(text: string, start: number, result: ReadResult & {
 export interface ScanSink {
   readonly occurrences: SpeciesOccurrence[];
   readonly unreadable: UnreadableSpecies[];
+  /** Where equations go, when the caller collects them. */
+  readonly reactions?: Reaction[];
 }
 
 /**

@@ -3,6 +3,7 @@
  * Offsets are UTF-16 indices into the document text; editors turn them into positions.
  */
 import type { Problem, SpeciesReading, TextRange } from "../chemistry/types";
+import type { Reaction } from "./reactions/reactionTypes";
 
 export type DocumentKind = "markdown" | "plaintext" | "csv" | "tsv" | "json" | "yaml";
 
@@ -90,6 +91,8 @@ export interface DocumentModel {
    * cell "Sf4", a `\ce{Xy3}` span, a prose token like "CLF3" with a suggested spelling).
    */
   readonly unreadable?: readonly UnreadableSpecies[];
+  /** Equations written in the document (mhchem, prose lines, equation columns), in document order. */
+  readonly reactions?: readonly Reaction[];
 }
 
 /** A confident species mention that could not be read, with the reader's problem. */

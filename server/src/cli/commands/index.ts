@@ -4,13 +4,14 @@
  */
 import type { CliCommand } from "../cliCommand";
 import { analyzeCommand } from "./analyze";
+import { balanceCommand } from "./balance";
 import { checkCommand } from "./check";
 import { coordsCommand } from "./coords";
 import { drawCommand } from "./draw";
 import { listCommand } from "./list";
 import { tableCommand } from "./table";
 
-export const COMMANDS: readonly CliCommand[] = [analyzeCommand, checkCommand, listCommand, tableCommand, coordsCommand, drawCommand];
+export const COMMANDS: readonly CliCommand[] = [analyzeCommand, balanceCommand, checkCommand, listCommand, tableCommand, coordsCommand, drawCommand];
 
 /** The command with this name, if there is one. */
 export function findCommand(name: string): CliCommand | undefined {

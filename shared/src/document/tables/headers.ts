@@ -288,3 +288,8 @@ export function namesSpecies(meaning: ColumnMeaning | undefined): boolean {
 export function isFormulaHeader(header: string): boolean {
   return header.length <= MAX_HEADER && /formula/.test(normalizeHeader(header));
 }
+
+/** Headers of a column of equations: "Reaction", "Balanced equation", "Half-reaction". */
+export function isEquationHeader(header: string): boolean {
+  return header.length <= MAX_HEADER && /\b(?:reactions?|equations?|half[- ]reactions?)\b/.test(normalizeHeader(header));
+}

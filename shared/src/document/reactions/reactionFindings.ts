@@ -1,0 +1,73 @@
+/**
+ * Findings about equations: on the arrow, saying what does not balance, with a fix that rewrites
+ * only the coefficients when one set of smallest whole numbers balances it. An equation with a
+ * species the core refuses is not judged: that species has its own finding.
+ */
+import type { AnalysisResult } from "../../chemistry/types";
+import { severityOf } from "../findingSeverity";
+import type { Finding } from "../types";
+import { imbalanceText, judgeReaction, rewrittenWithCoefficients, termsOf } from "./judgeReaction";
+import type { Reaction } from "./reactionTypes";
+
+/** Stable codes of the equation findings. */
+export const REACTION_CODES = {
+  unbalanced: "equation-unbalanced",
+  notUnique: "equation-balance-not-unique",
+  impossible: "equation-cannot-balance",
+} as const;
+
+/** Findings for `reactions`; `analyze` tells which species the core refuses. */
+export function reactionFindings(reactions: readonly Reaction[], analyze: (text: string) => AnalysisResult | undefined): Finding[] {
+  const findings: Finding[] = [];
+  for (const reaction of reactions) {
+    if (!judgeable(reaction, analyze)) continue;
+    const finding = reactionFinding(reaction);
+    if (finding) findings.push(finding);
+  }
+  return findings;
+}
+
+function judgeable(reaction: Reaction, analyze: (text: string) => AnalysisResult | undefined): boolean {
+  for (const term of termsOf(reaction)) {
+    if (term.electron) continue;
+    const result = analyze(term.speciesText);
+    if (result && !result.ok && severityOf(result.problem.code) === "error") return false;
+  }
+  return true;
+}
+
+/** The finding for one equation, or undefined when it balances. */
+export function reactionFinding(reaction: Reaction): Finding | undefined {
+  const verdict = judgeReaction(reaction);
+  const range = reaction.arrow.range;
+  switch (verdict.kind) {
+    case "balanced":
+      return undefined;
+    case "unbalanced": {
+      const newText = rewrittenWithCoefficients(reaction, verdict.coefficients);
+      return {
+        range,
+        severity: "error",
+        code: REACTION_CODES.unbalanced,
+        message: `Equation not balanced: ${imbalanceText(verdict.sheet)}. Balanced: ${newText}`,
+        fix: { range: reaction.range, newText, title: `Balance: ${verdict.coefficients.join(", ")}` },
+      };
+    }
+    case "not-unique":
+      return {
+        range,
+        severity: "error",
+        code: REACTION_CODES.notUnique,
+        message:
+          `Equation not balanced: ${imbalanceText(verdict.sheet)}. It can be balanced in ${verdict.ways} independent ways ` +
+          "(two reactions written as one?), so no single set of coefficients is offered.",
+      };
+    case "impossible":
+      return {
+        range,
+        severity: "error",
+        code: REACTION_CODES.impossible,
+        message: `Equation cannot balance: ${verdict.reason}. As written: ${imbalanceText(verdict.sheet)}.`,
+      };
+  }
+}
