@@ -56,6 +56,8 @@ export { readWholeEquation, equationsInLine } from "./document/reactions/readEqu
 export { equationsInProse } from "./document/reactions/proseEquations";
 export { judgeReaction, rewrittenWithCoefficients, imbalanceText, termsOf } from "./document/reactions/judgeReaction";
 export { reactionFinding, reactionFindings, REACTION_CODES } from "./document/reactions/reactionFindings";
+export { oxidationStatesOf, oxidationStatesText, formatOxidationState } from "./chemistry/redox/oxidationStates";
+export type { ElementOxidationStates, OxidationStates } from "./chemistry/redox/oxidationStates";
 export { balanceText, NOT_AN_EQUATION } from "./document/reactions/balanceText";
 export type { BalanceAnswer } from "./document/reactions/balanceText";
 export { balanceEquation, CHARGE_LABEL } from "./chemistry/reactions/balance";
@@ -69,6 +71,8 @@ export type { CardStyle } from "./report/analysisCard";
 export { toAnalysisJson } from "./report/analysisJson";
 export { HOVER_CAUTION, hoverMarkdown, problemMarkdown, resultMarkdown } from "./report/hoverMarkdown";
 export type { HoverFormat, HoverMarkdownOptions } from "./report/hoverMarkdown";
+export { reactionAtOffset, reactionCard, redoxSummary } from "./report/reactionCard";
+export type { OxidationChange, RedoxSummary } from "./report/reactionCard";
 export { shapeViewModel } from "./report/shapeViewModel";
 export {
   DIAGRAM_THEMES,

@@ -90,7 +90,7 @@ export function inDocumentOrder(occurrences: SpeciesOccurrence[]): SpeciesOccurr
 }
 
 /** In document order, one per arrow: a cell read as an equation is not read again as prose. */
-function distinctReactions(reactions: readonly Reaction[]): Reaction[] {
+export function distinctReactions(reactions: readonly Reaction[]): Reaction[] {
   const seen = new Set<number>();
   const distinct = reactions.filter((reaction) => {
     if (seen.has(reaction.arrow.range.start)) return false;

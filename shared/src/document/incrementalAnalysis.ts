@@ -12,7 +12,8 @@
  * (plain text, JSON, YAML) are read whole on every version.
  */
 import { analysedTextOf, MAX_ANALYSED_LENGTH } from "./analysedText";
-import { analyzeDocument } from "./analyzeDocument";
+import { analyzeDocument, distinctReactions } from "./analyzeDocument";
+import { shiftedReaction } from "./reactions/proseEquations";
 import { checkDocument } from "./checkDocument";
 import { findingsInParts } from "./findingsInParts";
 import { sliceOf, wholeText, type ChunkedText, type TextChunk } from "./chunkedText";
@@ -377,7 +378,7 @@ function blockKey(text: string, block: MarkdownBlock): string {
 }
 
 function blockPart(text: string, block: MarkdownBlock, read: SpeciesReader): BlockPart {
-  const sink: RecordSink = { occurrences: [], unreadable: [], records: [] };
+  const sink: RecordSink = { occurrences: [], unreadable: [], records: [], reactions: [] };
   scanMarkdownBlock(text, block, read, sink);
   const model: DocumentModel = {
     kind: "markdown",
@@ -385,6 +386,7 @@ function blockPart(text: string, block: MarkdownBlock, read: SpeciesReader): Blo
     records: sink.records,
     problems: [],
     unreadable: [...sink.unreadable].sort((a, b) => a.range.start - b.range.start),
+    reactions: distinctReactions(sink.reactions ?? []),
   };
   return { start: block.start, model: () => model, unplaced: model, findings: checkDocument(model, undefined) };
 }
@@ -412,6 +414,7 @@ function joinedModels(kind: DocumentKind, models: readonly DocumentModel[]): Doc
     records: models.flatMap((model) => model.records),
     problems: models.flatMap((model) => model.problems),
     unreadable: models.flatMap((model) => model.unreadable ?? []),
+    reactions: models.flatMap((model) => model.reactions ?? []),
   };
 }
 
@@ -445,6 +448,7 @@ function shiftedModel(model: DocumentModel, by: number): DocumentModel {
     records: model.records.map(record),
     problems: model.problems.map((finding) => moved(finding, by)),
     unreadable: (model.unreadable ?? []).map(unreadable),
+    reactions: (model.reactions ?? []).map((reaction) => shiftedReaction(reaction, by)),
   };
 }
 

@@ -2,7 +2,7 @@
  * Hover: the species under the cursor, found among the model's occurrences, shown as a card.
  */
 import { MarkupKind, type Hover, type HoverParams } from "vscode-languageserver";
-import { analyzeOccurrenceSafely, resultMarkdown } from "../../../../shared/src/index";
+import { analyzeOccurrenceSafely, reactionAtOffset, reactionCard, resultMarkdown } from "../../../../shared/src/index";
 import type { Finding, TextRange } from "../core";
 import { guarded } from "../guardedHandler";
 import { OFF_THREAD_ATOMS, createOffThreadCards } from "../offThreadCards";
@@ -17,12 +17,20 @@ export function registerHover(context: ServerContext): void {
       const enabled = await enabledDocument(context, params.textDocument.uri);
       if (!enabled) return null;
       const { document, analysed, settings } = enabled;
-      // Read from the rows or blocks around the position, not the whole model.
-      const species = analysed.speciesAt(document.offsetAt(params.position));
-      if (!species) return null;
-      const result = species.analysis;
+      const offset = document.offsetAt(params.position);
       // The card is written in the format the client asked for, not merely labelled with it.
       const format = context.clientFeatures().hoverFormat;
+      // Read from the rows or blocks around the position, not the whole model.
+      const reaction = reactionAtOffset(analysed.modelAround(offset, offset), offset);
+      if (reaction) {
+        return {
+          contents: { kind: format === "markdown" ? MarkupKind.Markdown : MarkupKind.PlainText, value: reactionCard(reaction, format) },
+          range: lspRange(document, reaction.arrow.range),
+        };
+      }
+      const species = analysed.speciesAt(offset);
+      if (!species) return null;
+      const result = species.analysis;
       const options = { angleDecimals: settings.angleDecimals, format };
       // A large SMILES species' card (its polarity needs the 3D model) is written on a worker
       // thread, so that other requests are answered meanwhile.

@@ -1,0 +1,88 @@
+/**
+ * Oxidation states against textbook values, through the core's public face: from the Lewis
+ * structure where lonepair draws one, by the usual rules where it does not (Fe3O4, MnO4-).
+ */
+import { describe, expect, it } from "vitest";
+import { analyzeSpecies, oxidationStatesOf, oxidationStatesText, readSpecies } from "../../shared/src/index";
+
+/** Each element's states, one per atom, ascending: "S:-1,5 O:-2,-2,-2". */
+function statesOf(formula: string): string {
+  const reading = readSpecies(formula);
+  if (!reading.ok) return `unread: ${reading.problem.message}`;
+  const states = oxidationStatesOf(reading.value, analyzeSpecies(formula));
+  if (!states) return "unknown";
+  return states.elements.map((element) => `${element.symbol}:${element.states.join(",")}`).join(" ");
+}
+
+describe("oxidation states of every atom", () => {
+  it.each<[string, string]>([
+    // from memory: Zumdahl, Chemistry, ch. 4 (rules for assigning oxidation states)
+    ["H2O", "H:1,1 O:-2"],
+    ["CO2", "C:4 O:-2,-2"],
+    ["CH4", "C:-4 H:1,1,1,1"],
+    ["NH3", "N:-3 H:1,1,1"],
+    ["SO4^2-", "S:6 O:-2,-2,-2,-2"],
+    ["HNO3", "H:1 N:5 O:-2,-2,-2"],
+    ["NO2-", "N:3 O:-2,-2"],
+    ["ClO3-", "Cl:5 O:-2,-2,-2"],
+    ["HClO4", "H:1 Cl:7 O:-2,-2,-2,-2"],
+    ["H3PO4", "H:1,1,1 P:5 O:-2,-2,-2,-2"],
+    ["CN-", "C:2 N:-3"],
+    // from memory: Brown, LeMay & Bursten, Chemistry: The Central Science, ch. 4
+    ["Cr2O7^2-", "Cr:6,6 O:-2,-2,-2,-2,-2,-2,-2"],
+    ["MnO4-", "Mn:7 O:-2,-2,-2,-2"],
+    ["KMnO4", "K:1 Mn:7 O:-2,-2,-2,-2"],
+    ["K2Cr2O7", "K:1,1 Cr:6,6 O:-2,-2,-2,-2,-2,-2,-2"],
+    ["Fe2O3", "Fe:3,3 O:-2,-2,-2"],
+    ["NaCl", "Na:1 Cl:-1"],
+    // from memory: Housecroft & Sharpe, Inorganic Chemistry (peroxides and fluorides of oxygen)
+    ["H2O2", "H:1,1 O:-1,-1"],
+    ["OF2", "O:2 F:-1,-1"],
+    ["Na2O2", "Na:1,1 O:-1,-1"],
+    // from memory: Housecroft & Sharpe (saline hydrides)
+    ["NaH", "Na:1 H:-1"],
+    ["CaH2", "Ca:2 H:-1,-1"],
+    ["LiAlH4", "Li:1 Al:3 H:-1,-1,-1,-1"],
+    // from memory: IUPAC technical report on the definition of oxidation state (Lewis structure, bonds to the more electronegative atom)
+    ["S2O3^2-", "S:-1,5 O:-2,-2,-2"],
+    // from memory: Brown, LeMay & Bursten, ch. 20 (ammonium nitrate: N -3 and +5)
+    ["NH4NO3", "N:-3,5 H:1,1,1,1 O:-2,-2,-2"],
+    // from memory: Clayden, Organic Chemistry (oxidation levels of carbon in acetic acid)
+    ["CH3COOH", "C:-3,3 H:1,1,1,1 O:-2,-2"],
+    ["CH3OH", "C:-2 H:1,1,1,1 O:-2"],
+    ["HCOOH", "H:1,1 C:2 O:-2,-2"],
+    ["C2H6", "C:-3,-3 H:1,1,1,1,1,1"],
+    // from memory: Greenwood & Earnshaw, Chemistry of the Elements (interhalogens and xenon fluorides)
+    ["ClF3", "Cl:3 F:-1,-1,-1"],
+    ["IF7", "I:7 F:-1,-1,-1,-1,-1,-1,-1"],
+    ["XeF4", "Xe:4 F:-1,-1,-1,-1"],
+    ["SF6", "S:6 F:-1,-1,-1,-1,-1,-1"],
+    ["BrO3-", "Br:5 O:-2,-2,-2"],
+    ["N2H4", "N:-2,-2 H:1,1,1,1"],
+    ["P4O10", "P:5,5,5,5 O:-2,-2,-2,-2,-2,-2,-2,-2,-2,-2"],
+    ["N2O4", "N:4,4 O:-2,-2,-2,-2"],
+    // common practice: an element on its own is 0
+    ["O2", "O:0,0"],
+    // from memory: Greenwood & Earnshaw (magnetite is Fe(II)Fe(III)2O4, red lead Pb(II)2Pb(IV)O4)
+    ["Fe3O4", "Fe:2,3,3 O:-2,-2,-2,-2"],
+    ["Pb3O4", "Pb:2,2,4 O:-2,-2,-2,-2"],
+    // from memory: Zumdahl, ch. 4 (copper(II) sulfate pentahydrate)
+    ["CuSO4·5H2O", "Cu:2 S:6 O:-2,-2,-2,-2,-2,-2,-2,-2,-2 H:1,1,1,1,1,1,1,1,1,1"],
+  ])("%s has %s", (formula, expected) => {
+    expect(statesOf(formula), `oxidation states of ${formula}`).toBe(expected);
+  });
+
+  it("shows an average with the per-atom split", () => {
+    const reading = readSpecies("Fe3O4");
+    const states = reading.ok ? oxidationStatesOf(reading.value, analyzeSpecies("Fe3O4")) : undefined;
+    // from memory: Greenwood & Earnshaw: magnetite averages +8/3 over two Fe(III) and one Fe(II)
+    expect(states && oxidationStatesText(states)).toBe("Fe 2× +3, 1× +2 (average +8/3); O -2");
+  });
+
+  it("says so when nothing tells which atom has which state", () => {
+    const reading = readSpecies("S4O6^2-");
+    const states = reading.ok ? oxidationStatesOf(reading.value, analyzeSpecies("S4O6^2-")) : undefined;
+    // from memory: Harris, Quantitative Chemical Analysis: tetrathionate sulfur averages +2.5
+    expect(states && oxidationStatesText(states)).toContain("S +5/2 (average");
+  });
+});
