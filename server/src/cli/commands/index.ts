@@ -11,7 +11,15 @@ import { drawCommand } from "./draw";
 import { listCommand } from "./list";
 import { tableCommand } from "./table";
 
-export const COMMANDS: readonly CliCommand[] = [analyzeCommand, balanceCommand, checkCommand, listCommand, tableCommand, coordsCommand, drawCommand];
+export const COMMANDS: readonly CliCommand[] = [
+  analyzeCommand,
+  balanceCommand,
+  checkCommand,
+  listCommand,
+  tableCommand,
+  coordsCommand,
+  drawCommand,
+];
 
 /** The command with this name, if there is one. */
 export function findCommand(name: string): CliCommand | undefined {
