@@ -41,13 +41,29 @@ export function documentChecker(analyze: (text: string) => AnalysisResult = anal
     }
     return result;
   };
-  return (model) => checkModel(model, analysisOf, analyze);
+  // Equation terms are plain species texts: their analyses are remembered apart from occurrences.
+  const textMemo = new Map<string, AnalysisResult>();
+  const analysisOfText = (text: string): AnalysisResult => {
+    let result = textMemo.get(text);
+    if (!result) {
+      try {
+        result = analyze(text);
+      } catch (error) {
+        result = { ok: false, problem: { code: "no-valid-structure", message: String(error) } };
+      }
+      if (textMemo.size >= CHECKER_MEMO_LIMIT) textMemo.clear();
+      textMemo.set(text, result);
+    }
+    return result;
+  };
+  return (model) => checkModel(model, analysisOf, analyze, analysisOfText);
 }
 
 function checkModel(
   model: DocumentModel,
   analysisOf: (occurrence: SpeciesOccurrence) => AnalysisResult | undefined,
   analyze: AnalyzeText,
+  analysisOfText: (text: string) => AnalysisResult,
 ): Finding[] {
   // A name beside a formula for the same species would repeat the formula's note: say it once, on the formula.
   const echoes = new Set<SpeciesOccurrence>();
@@ -68,21 +84,7 @@ function checkModel(
     const result = analysisOf(record.species);
     if (result?.ok) checkRecord(record, result.value, findings);
   }
-  if (model.reactions && model.reactions.length > 0) {
-    const analysisOfText = (text: string): AnalysisResult | undefined => {
-      let result = memo.get(text);
-      if (!result) {
-        try {
-          result = analyze(text);
-        } catch (error) {
-          result = { ok: false, problem: { code: "no-valid-structure", message: String(error) } };
-        }
-        memo.set(text, result);
-      }
-      return result;
-    };
-    findings.push(...reactionFindings(model.reactions, analysisOfText));
-  }
+  if (model.reactions && model.reactions.length > 0) findings.push(...reactionFindings(model.reactions, analysisOfText));
   return findings.sort((a, b) => a.range.start - b.range.start);
 }
 

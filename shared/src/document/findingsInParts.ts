@@ -4,7 +4,8 @@
  * soon as the scan has moved past it. Joined, the parts are exactly the findings of the whole
  * document, `[...model.problems, ...checkDocument(model)]`, in the same order.
  */
-import { analyzeDocument, documentUnreadable, inDocumentOrder, type AnalyzeOptions } from "./analyzeDocument";
+import { analyzeDocument, distinctReactions, documentUnreadable, inDocumentOrder, type AnalyzeOptions } from "./analyzeDocument";
+import type { Reaction } from "./reactions/reactionTypes";
 import { documentChecker } from "./checkDocument";
 import { markdownSteps } from "./scanMarkdown";
 import { plainTextSteps } from "./scanPlainText";
@@ -42,7 +43,7 @@ export function* findingsInParts(
     if (found.length > 0) yield found;
     return;
   }
-  const sink: RecordSink = { occurrences: [], unreadable: [], records: [] };
+  const sink: RecordSink = { occurrences: [], unreadable: [], records: [], reactions: [] };
   const partSize = Math.max(1, options.partSize ?? DEFAULT_PART_SIZE);
   const steps: ScanSteps = kind === "markdown" ? markdownSteps(text, read, sink, partSize) : plainTextSteps(text, read, sink, partSize);
   const partBefore = (limit: number): Finding[] =>
@@ -52,6 +53,7 @@ export function* findingsInParts(
       records: takeBefore(sink.records, limit, (record) => record.species.range.start),
       problems: [],
       unreadable: takeBefore(sink.unreadable, limit).sort((a, b) => a.range.start - b.range.start),
+      reactions: distinctReactions(takeBefore(sink.reactions ?? [], limit)),
     });
   let problem: Finding | undefined;
   try {
@@ -72,7 +74,7 @@ export function* findingsInParts(
  * Removes from `items` and returns those that start before `limit`. Scanners add in document
  * order, so this is almost always the whole list.
  */
-function takeBefore<T extends SpeciesOccurrence | UnreadableSpecies | TableRecord>(
+function takeBefore<T extends SpeciesOccurrence | UnreadableSpecies | TableRecord | Reaction>(
   items: T[],
   limit: number,
   startOf: (item: T) => number = (item) => (item as SpeciesOccurrence).range.start,
