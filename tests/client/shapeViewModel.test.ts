@@ -3,7 +3,7 @@
  * will draw for well-known VSEPR species.
  */
 import { describe, expect, it } from "vitest";
-import { analyzeSpecies, type SpeciesAnalysis } from "../../shared/src/index";
+import { analyzeSpecies, analyzeTyped, shapeViewModelOf, type SpeciesAnalysis } from "../../shared/src/index";
 import { buildCoordinates } from "../../shared/src/chemistry/geometry/buildCoordinates";
 import { angleDegrees, norm, sub, type Vec3 } from "../../shared/src/chemistry/geometry/vectors";
 import { shapeViewModel, type ShapeViewModel } from "../../shared/src/report/shapeViewModel";
@@ -178,4 +178,22 @@ describe("shape view model", () => {
     expect(view.atoms).toHaveLength(2);
     expect(view.bonds.every((bond) => bond.from < 2 && bond.to < 2)).toBe(true);
   });
+
+  it.each(["ClF3", "SF4", "XeF4", "CH4", "SF6", "IF7", "XeF2", "smiles:CC(=O)O", "smiles:c1ccccc1", "smiles:OO"])(
+    "%s: the starting view is a proper rotation (orthonormal rows, no mirror image)",
+    (species) => {
+      const result = analyzeTyped(species);
+      if (!result.ok) throw new Error(result.problem.message);
+      const rotation = shapeViewModelOf(result.value)!.viewRotation;
+      // common practice: a rotation matrix has orthonormal rows and determinant +1
+      const rows: Vec3[] = [0, 3, 6].map((at) => [rotation[at], rotation[at + 1], rotation[at + 2]] as Vec3);
+      for (const [i, a] of rows.entries()) {
+        for (const [j, b] of rows.entries()) expect(a[0] * b[0] + a[1] * b[1] + a[2] * b[2]).toBeCloseTo(i === j ? 1 : 0, 4);
+      }
+      // A mirror image would swap the hands of a chiral molecule: right × up must be towards the viewer.
+      const [right, up, towards] = rows;
+      const crossed = [right[1] * up[2] - right[2] * up[1], right[2] * up[0] - right[0] * up[2], right[0] * up[1] - right[1] * up[0]];
+      crossed.forEach((value, k) => expect(value).toBeCloseTo(towards[k], 4));
+    },
+  );
 });

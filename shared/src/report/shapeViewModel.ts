@@ -109,8 +109,11 @@ const STRAIGHT_ARC_CANDIDATES = 36;
 /** Angles closer than this (degrees) share one label. */
 const SAME_ANGLE = 0.5;
 
-/** Builds the view model; mismatched or missing coordinates give fewer items, never an exception. */
-export function shapeViewModel(analysis: SpeciesAnalysis, coordinates: ShapeCoordinates): ShapeViewModel {
+/**
+ * Builds the view model; mismatched or missing coordinates give fewer items, never an exception.
+ * `principalAxis` (null: none) spares a second symmetry search when the caller has the point group.
+ */
+export function shapeViewModel(analysis: SpeciesAnalysis, coordinates: ShapeCoordinates, principalAxis?: Vec3 | null): ShapeViewModel {
   const atomCount = Math.min(analysis.graph.atoms.length, coordinates.atoms.length);
   const centroid = centroidOf(coordinates.atoms.slice(0, atomCount).map((atom) => atom.position));
   const centreIndices = new Set(analysis.centres.map((centre) => centre.index));
@@ -163,7 +166,12 @@ export function shapeViewModel(analysis: SpeciesAnalysis, coordinates: ShapeCoor
     polarity: { polar: analysis.polarity.polar, reason: analysis.polarity.reason },
     warnings: [...analysis.warnings],
     extent: extentOf(atoms, lonePairs, angles),
-    viewRotation: startingOrientation({ atoms, lonePairs, centres: [...centreIndices].filter((index) => index < atomCount) }),
+    viewRotation: startingOrientation({
+      atoms,
+      lonePairs,
+      centres: [...centreIndices].filter((index) => index < atomCount),
+      principalAxis,
+    }),
     caution: HOVER_CAUTION,
   };
 }

@@ -3,7 +3,7 @@
  * files an export writes, both from the one model of the species (`shapeOf`, which keeps cis/trans
  * from the SMILES), so the view, the export and the hover's point group always agree.
  */
-import { shapeOf } from "../chemistry/analysis/shape3d";
+import { shapeOf, symmetrySearchOf } from "../chemistry/analysis/shape3d";
 import { toMolfile } from "../chemistry/formats/molfile";
 import { toXyz } from "../chemistry/formats/xyz";
 import type { SpeciesAnalysis } from "../chemistry/types";
@@ -33,9 +33,20 @@ export function missingModelReason(analysis: SpeciesAnalysis): string | undefine
 
 /** The view model of an analysed species; undefined if no atoms could be placed (see `missingModelReason`). */
 export function shapeViewModelOf(analysis: SpeciesAnalysis): ShapeViewModel | undefined {
-  const { coordinates } = shapeOf(analysis);
-  return coordinates.atoms.length > 0 ? shapeViewModel(analysis, coordinates) : undefined;
+  const known = viewModels.get(analysis);
+  if (known) return known;
+  const shape = shapeOf(analysis);
+  if (shape.coordinates.atoms.length === 0) return undefined;
+  // The point group search already found the axis (or its absence) when it named the group.
+  const search = symmetrySearchOf(shape)?.result;
+  const axis = search?.ok ? search.value.elements.principalAxis : undefined;
+  const model = shapeViewModel(analysis, shape.coordinates, axis);
+  viewModels.set(analysis, model);
+  return model;
 }
+
+/** View models are kept per analysis, as the model itself is: hovers and the 3D view ask again and again. */
+const viewModels = new WeakMap<SpeciesAnalysis, ShapeViewModel>();
 
 /** The file for `analysis`, or why there is none (no atoms placed, too many for a V2000 molfile). */
 export function coordinateFileOf(analysis: SpeciesAnalysis, format: CoordinateFormat): CoordinateFileResult {

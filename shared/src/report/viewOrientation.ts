@@ -18,6 +18,8 @@ export interface OrientationInput {
   readonly lonePairs: readonly { readonly atom: number; readonly direction: Vec3 }[];
   /** Atoms that are VSEPR centres, heaviest weight when deciding which way is up. */
   readonly centres: readonly number[];
+  /** The principal axis when the caller has already found the point group; searched for otherwise. */
+  readonly principalAxis?: Vec3 | null;
 }
 
 /** Atoms this far (Å) from a plane or line still count as on it. */
@@ -105,6 +107,8 @@ function uprightInPlane(input: OrientationInput, positions: readonly Vec3[], nor
 }
 
 function principalAxisOf(input: OrientationInput): Vec3 | undefined {
+  if (input.principalAxis !== undefined)
+    return input.principalAxis && norm(input.principalAxis) > 0 ? normalize(input.principalAxis) : undefined;
   if (input.atoms.length > MAX_SYMMETRY_SEARCH_ATOMS) return undefined;
   const found = findPointGroup(
     input.atoms.map((atom) => ({ element: atom.symbol, position: atom.position })),
@@ -159,7 +163,7 @@ function clearHiddenAtoms(input: OrientationInput, frame: Frame): ViewRotation {
         [second, first],
       ]) {
         const turned = turnFrame(frame, aboutUp, aboutRight);
-        const gap = smallestGap(input, turned);
+        const gap = smallestGap(input, turned, bestGap);
         if (gap >= WANTED_GAP) return rotationOf(turned);
         if (gap > bestGap + 1e-9) {
           best = turned;
@@ -188,8 +192,11 @@ function rotateAbout(vector: Vec3, axis: Vec3, angle: number): Vec3 {
   return add(add(scale(vector, cosine), scale(cross(axis, vector), Math.sin(angle))), scale(axis, dot(axis, vector) * (1 - cosine)));
 }
 
-/** The smallest on-screen gap between two balls (Å), radii grown as the renderer grows near atoms. */
-function smallestGap(input: OrientationInput, frame: Frame): number {
+/**
+ * The smallest on-screen gap between two balls (Å), radii grown as the renderer grows near atoms.
+ * Stops early once the gap is no better than `toBeat`: that view has already lost.
+ */
+function smallestGap(input: OrientationInput, frame: Frame, toBeat: number): number {
   const projected = input.atoms.map((atom) => [dot(atom.position, frame.right), dot(atom.position, frame.up)] as const);
   let smallest = Infinity;
   for (let first = 0; first < projected.length; first++) {
@@ -197,6 +204,7 @@ function smallestGap(input: OrientationInput, frame: Frame): number {
       const apart = Math.hypot(projected[first][0] - projected[second][0], projected[first][1] - projected[second][1]);
       const touching = NEAREST_RADIUS_FACTOR * (input.atoms[first].radius + input.atoms[second].radius);
       smallest = Math.min(smallest, apart - touching);
+      if (smallest <= toBeat) return smallest;
     }
   }
   return smallest;
