@@ -105,6 +105,8 @@ export interface LewisFigureRequestResult {
   /** The species as written: in the document (with its range) or as typed. */
   readonly text: string;
   readonly range?: EditorRange;
+  /** Where the link goes when the cursor is on the mention: after it and any markup round it (a `\ce{...}`). */
+  readonly linkPosition?: EditorPosition;
   readonly formula?: string;
   /** The figure; absent when the species cannot be analysed or drawn (see `problem`). */
   readonly figure?: LewisFigure;

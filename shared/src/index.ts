@@ -83,7 +83,14 @@ export {
   lewisViewImages,
 } from "./report/lewisDiagram";
 export type { DiagramTheme, LewisDiagram, LewisDiagramOptions, LewisDiagramResult, LewisViewImages } from "./report/lewisDiagram";
-export { DEFAULT_FIGURES_FOLDER, figureFileName, figuresFolderFrom, lewisFigureOf, markdownImage } from "./report/lewisFigure";
+export {
+  DEFAULT_FIGURES_FOLDER,
+  figureFileName,
+  figureLinkOffset,
+  figuresFolderFrom,
+  lewisFigureOf,
+  markdownImage,
+} from "./report/lewisFigure";
 export type { LewisFigure, LewisFigureOptions, LewisFigureResult } from "./report/lewisFigure";
 export type { ShapeViewModel } from "./report/shapeViewModel";
 export { coordinateFileOf, missingModelReason, shapeViewModelOf } from "./report/speciesModel";

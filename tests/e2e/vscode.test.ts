@@ -1,7 +1,7 @@
 /**
  * The packaged extension in a real VS Code (code-server 4.100.3, VS Code 1.100.3) driven through
  * Debian's headless Chromium, on a copy of the demo workspace: hover card, squiggle and Problems
- * panel, quick fix, summary-table insertion with undo, and the 3D view. Each scenario leaves a
+ * panel, quick fix, summary-table insertion with undo, Lewis-diagram insertion with undo, and the 3D view. Each scenario leaves a
  * screenshot in .test-artifacts/e2e/.
  */
 import { execFile } from "node:child_process";
@@ -33,6 +33,7 @@ import {
   webviewFrame,
   type Workbench,
 } from "./workbench";
+import { parseXml } from "../support/parseXml";
 
 const ARTIFACTS = join(REPOSITORY_ROOT, ".test-artifacts", "e2e");
 const SCENARIO_TIMEOUT_MS = 150_000;
@@ -150,6 +151,9 @@ describe("lonepair in a real VS Code (code-server in headless Chromium)", () => 
       expect(card).toContain("AX4E1");
       expect(card).toContain("seesaw");
       expect(card.toLowerCase()).toContain("model prediction");
+      // The card shows the Lewis diagram as an SVG data image beside the ball-and-stick sketch.
+      const lewis = page.locator(".monaco-hover:visible img[alt^='Lewis structure of SF4']").first();
+      expect(await lewis.getAttribute("src")).toMatch(/^data:image\/svg\+xml;base64,/);
     },
     SCENARIO_TIMEOUT_MS,
   );
@@ -272,6 +276,36 @@ describe("lonepair in a real VS Code (code-server in headless Chromium)", () => 
       const undone = await diskText(file, (text) => text === original);
       expect(undone).toBe(original);
       await screenshot(page, "4-table-undone");
+    },
+    SCENARIO_TIMEOUT_MS,
+  );
+
+  it(
+    "inserts a Lewis diagram after the species under the cursor, writes its SVG, and one undo takes the link out",
+    async () => {
+      const file = join(workspace, "notebook", "run-14-fluorinating-agents.md");
+      const figure = join(workspace, "notebook", "figures", "lewis-ClF3.svg");
+      const original = readFileSync(file, "utf8");
+      await openFile(page, "run-14-fluorinating-agents.md");
+      const at = positionOf(original, "\\ce{ClF3} has two");
+      await goTo(page, at.line, at.column + "\\ce{".length + 2);
+      await runCommand(page, "lonepair: Insert Lewis diagram");
+      await page.locator(".editor-group-container.active .view-line", { hasText: "![Lewis structure of ClF3" }).first().waitFor();
+      await screenshot(page, "6-lewis-inserted");
+      await page.keyboard.press("Control+S");
+      const withLink = await diskText(file, (text) => text !== original);
+      // The link follows the whole mhchem span, never splitting it.
+      const link = "![Lewis structure of ClF3 (chlorine trifluoride)](figures/lewis-ClF3.svg)";
+      expect(withLink).toBe(original.replace("\\ce{ClF3} has two", `\\ce{ClF3} ${link} has two`));
+      const svg = readFileSync(figure, "utf8");
+      // from memory: Housecroft and Sharpe, Inorganic Chemistry, ch. 2 (ClF3: two lone pairs on Cl, three on each F)
+      expect(parseXml(svg).filter((element) => element.attributes.class === "electron").length).toBe(22);
+
+      await page.keyboard.press("Control+Z");
+      await page.keyboard.press("Control+S");
+      const undone = await diskText(file, (text) => text === original);
+      expect(undone).toBe(original);
+      await screenshot(page, "6-lewis-undone");
     },
     SCENARIO_TIMEOUT_MS,
   );

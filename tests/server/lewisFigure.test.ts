@@ -7,7 +7,13 @@ import type { LewisFigureRequestResult, ShapeModelResult } from "../../shared/sr
 import { parseXml } from "../support/parseXml";
 import { fixtureUri, startSession, type LspSession } from "./lspSession";
 
-const NOTE = ["# Run 14: fluorinating agents for the etch study", "", "Bay C keeps ClF3 beside the SF4 cylinder.", ""].join("\n");
+const NOTE = [
+  "# Run 14: fluorinating agents for the etch study",
+  "",
+  "Bay C keeps ClF3 beside the SF4 cylinder.",
+  "In mhchem: $\\ce{XeF4}$ and `smiles:FS(F)(F)F` as code.",
+  "",
+].join("\n");
 const NOTE_URI = fixtureUri("notebook/run-14.md");
 
 let figuresFolder: unknown = undefined;
@@ -77,5 +83,22 @@ describe("lonepair/lewisFigure", () => {
     expect(parseXml(decoded(lewis.light)).some((element) => element.attributes.fill === "#1b1b1b")).toBe(true);
     // from memory: Housecroft and Sharpe, Inorganic Chemistry, ch. 2 (ClF3: two lone pairs on Cl, three on each F)
     expect(parseXml(decoded(lewis.light)).filter((element) => element.attributes.class === "electron").length).toBe(2 * (2 + 9));
+  });
+
+  it.each([
+    // [character on line 3 inside the mention, the text the link follows]
+    [18, "$\\ce{XeF4}$"],
+    [36, "`smiles:FS(F)(F)F`"],
+  ])("puts the link after the markup round a mention (cursor at %i)", async (character, enclosing) => {
+    figuresFolder = undefined;
+    const result = await ask({ position: { line: 3, character } });
+    const line = NOTE.split("\n")[3];
+    expect(result?.figure, JSON.stringify(result)).toBeDefined();
+    expect(result?.linkPosition).toEqual({ line: 3, character: line.indexOf(enclosing) + enclosing.length });
+  });
+
+  it("puts the link right after a mention in prose", async () => {
+    const result = await ask({ position: { line: 2, character: 13 } });
+    expect(result?.linkPosition).toEqual({ line: 2, character: 16 });
   });
 });

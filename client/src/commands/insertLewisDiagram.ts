@@ -89,10 +89,11 @@ export async function insertLewisDiagram(client: LanguageClient, log: vscode.Out
   const link =
     target.relativePath === figure.relativePath ? figure.markdown : figure.markdown.replace(figure.relativePath, target.relativePath);
   const mention = found.range ? client.protocol2CodeConverter.asRange(found.range) : undefined;
+  const afterMention = found.linkPosition ? client.protocol2CodeConverter.asPosition(found.linkPosition) : mention?.end;
   const ok = await editor.edit((builder) => {
     for (const selection of editor.selections) {
-      // Never split the species' own text: after it when the cursor is inside it.
-      const at = mention?.contains(selection.active) ? mention.end : selection.active;
+      // Never split the species' own text or its markup: after them when the cursor is on it.
+      const at = mention?.contains(selection.active) && afterMention ? afterMention : selection.active;
       const before = at.character > 0 ? document.lineAt(at.line).text.charAt(at.character - 1) : "";
       builder.insert(at, before !== "" && !/\s/.test(before) ? ` ${link}` : link);
     }

@@ -91,3 +91,25 @@ export function lewisFigureOf(analysis: SpeciesAnalysis, options: LewisFigureOpt
     },
   };
 }
+
+/**
+ * Where a figure's link goes after a species mention at [start, end) of `text`: right after the
+ * mention, or after the markup that encloses it on its line (an inline code span, an mhchem
+ * `\ce{...}` and the `$` around it), so the link never lands inside the chemistry's own text.
+ */
+export function figureLinkOffset(text: string, start: number, end: number): number {
+  const lineStart = text.lastIndexOf("\n", start - 1) + 1;
+  const lineEndAt = text.indexOf("\n", end);
+  const lineEnd = lineEndAt < 0 ? text.length : lineEndAt;
+  const before = text.slice(lineStart, start);
+  let offset = end;
+  const after = (character: string): number => {
+    const found = text.indexOf(character, offset);
+    return found >= 0 && found < lineEnd ? found + 1 : offset;
+  };
+  if ((before.match(/`/g)?.length ?? 0) % 2 === 1) offset = after("`");
+  const opened = before.lastIndexOf("\\ce{");
+  if (opened >= 0 && before.indexOf("}", opened) < 0) offset = after("}");
+  if ((before.match(/\$/g)?.length ?? 0) % 2 === 1) offset = after("$");
+  return offset;
+}

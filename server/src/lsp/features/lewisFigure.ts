@@ -8,6 +8,7 @@ import {
   DIAGRAM_THEMES,
   LEWIS_FIGURE_METHOD,
   analyzeTyped,
+  figureLinkOffset,
   lewisFigureOf,
   type AnalysisResult,
   type DiagramTheme,
@@ -52,7 +53,9 @@ async function lewisFigure(context: ServerContext, params: unknown): Promise<Lew
     const found = await speciesAt(context, params);
     if (!found) return null;
     analysis = found.species.analysis;
-    described = describe(found.document, found.species);
+    const text = found.document.getText();
+    const linkOffset = figureLinkOffset(text, found.species.range.start, found.species.range.end);
+    described = { ...describe(found.document, found.species), linkPosition: found.document.positionAt(linkOffset) };
   }
   if (!analysis.ok) return { ...described, problem: { code: analysis.problem.code, message: analysis.problem.message } };
   const settings = await context.settings.forUri(uri);
