@@ -348,6 +348,62 @@ describe("one large species", () => {
     expect(JSON.stringify(large.result)).toMatch(/Polarity/);
   });
 
+  // A chain of 999 carbons, just inside the 1,000 characters a `smiles:` span may hold: 2,999 atoms
+  // with its hydrogens, so building its 3D model takes a while.
+  const NEAR_LIMIT = "C".repeat(999);
+  const CHAIN_TEXT = `Run 35: the paraffin standard is \`smiles:${NEAR_LIMIT}\`; the reference gas is SF4.
+`;
+  const ON_CHAIN = { line: 0, character: 45 };
+  const ON_CHAIN_GAS = { line: 0, character: CHAIN_TEXT.indexOf("SF4") + 1 };
+
+  /** A session with the chain note open and analysed. */
+  async function chainSession(): Promise<RawSession> {
+    const session = startRawSession();
+    session.send({ id: 1, method: "initialize", params: INITIALIZE_PARAMS });
+    await session.responseTo(1);
+    session.send(
+      { method: "initialized", params: {} },
+      { method: "textDocument/didOpen", params: { textDocument: { uri: NOTE_URI, languageId: "markdown", version: 1, text: CHAIN_TEXT } } },
+      { id: 2, method: "textDocument/hover", params: { textDocument: { uri: NOTE_URI }, position: ON_CHAIN_GAS } },
+    );
+    await session.responseTo(2);
+    return session;
+  }
+
+  it.each(["lonepair/shapeModel", "lonepair/coordinates"])(
+    "answers a hover on a small species while %s builds a model near the size limit",
+    async (method) => {
+      raw = await chainSession();
+      raw.send(
+        { id: 3, method, params: { uri: NOTE_URI, position: ON_CHAIN, format: "xyz" } },
+        { id: 4, method: "textDocument/hover", params: { textDocument: { uri: NOTE_URI }, position: ON_CHAIN_GAS } },
+      );
+      const [model, gas] = await Promise.all([raw.responseTo(3, 120_000), raw.responseTo(4)]);
+      const order = raw.received
+        .filter((message) => "id" in message && !("method" in message))
+        .map((message) => (message as unknown as { id: number }).id);
+      expect(order.indexOf(4), "the hover waited for the 3D model of the large species").toBeLessThan(order.indexOf(3));
+      // common practice: SF4 is a seesaw
+      expect(JSON.stringify(gas.result)).toContain("seesaw");
+      const answer = model.result as { model?: { atoms: unknown[] }; file?: { text: string } };
+      // common practice: CnH2n+2, so 999 carbons carry 2,000 hydrogens: 2,999 atoms in all
+      if (method === "lonepair/shapeModel") expect(answer.model?.atoms).toHaveLength(2999);
+      else expect(answer.file?.text.split("\n")[0].trim()).toBe("2999");
+    },
+  );
+
+  it("answers a cancelled 3D model request with RequestCancelled and goes on serving models", async () => {
+    raw = await chainSession();
+    raw.send({ id: 3, method: "lonepair/shapeModel", params: { uri: NOTE_URI, position: ON_CHAIN } });
+    raw.send({ method: "$/cancelRequest", params: { id: 3 } });
+    const cancelled = await raw.responseTo(3, 120_000);
+    expect(cancelled.error?.code).toBe(-32800);
+    raw.send({ id: 4, method: "lonepair/coordinates", params: { uri: NOTE_URI, position: ON_CHAIN, format: "xyz" } });
+    const file = await raw.responseTo(4, 120_000);
+    // common practice: CnH2n+2, so 999 carbons carry 2,000 hydrogens
+    expect((file.result as { file?: { text: string } }).file?.text.split("\n")[0].trim()).toBe("2999");
+  });
+
   it("answers the 3D model request for a species past the limit with the reason", async () => {
     const session = await startSession();
     try {

@@ -21,6 +21,7 @@ import { createSettingsStore } from "./settingsStore";
 import { registerCodeActions } from "./features/codeActions";
 import { registerDiagnostics, type DiagnosticsFeature } from "./features/diagnostics";
 import { registerHover } from "./features/hover";
+import { createOffThreadSpecies } from "./offThreadSpecies";
 import { registerInlayHints } from "./features/inlayHints";
 import { registerSpeciesRequests } from "./features/speciesRequests";
 import { registerLewisFigure } from "./features/lewisFigure";
@@ -58,10 +59,12 @@ export function startServer(connection: Connection): void {
     // Clients without workspace/configuration may hand settings over here: { settings: { lonepair: {...} } }.
     const initialSettings = (params.initializationOptions as { settings?: unknown } | null | undefined)?.settings;
     if (initialSettings !== undefined) settings.changed(initialSettings);
-    registerHover(context);
+    // One worker for every request about a large species: hovers, 3D models, coordinate files.
+    const offThread = createOffThreadSpecies(log);
+    registerHover(context, offThread);
     registerCodeActions(context);
     registerSummaryTable(context);
-    registerSpeciesRequests(context);
+    registerSpeciesRequests(context, offThread);
     registerLewisFigure(context);
     if (features.inlayHints) registerInlayHints(context);
     diagnostics = registerDiagnostics(context);

@@ -5,15 +5,14 @@ import { MarkupKind, type Hover, type HoverParams } from "vscode-languageserver"
 import { analyzeOccurrenceSafely, reactionAtOffset, reactionCard, resultMarkdown } from "../../../../shared/src/index";
 import type { Finding, TextRange } from "../core";
 import { guarded } from "../guardedHandler";
-import { OFF_THREAD_ATOMS, createOffThreadCards } from "../offThreadCards";
+import { isLargeSmiles, type OffThreadSpecies } from "../offThreadSpecies";
 import { lspRange } from "../ranges";
 import { enabledDocument, type ServerContext } from "../serverContext";
 
 /** Registers the hover handler. */
-export function registerHover(context: ServerContext): void {
-  const offThread = createOffThreadCards(context.log);
+export function registerHover(context: ServerContext, offThread: OffThreadSpecies): void {
   context.connection.onHover(
-    guarded<HoverParams, Hover | null>(context.log, "hover", null, async (params) => {
+    guarded<HoverParams, Hover | null>(context.log, "hover", null, async (params, token) => {
       const enabled = await enabledDocument(context, params.textDocument.uri);
       if (!enabled) return null;
       const { document, analysed, settings } = enabled;
@@ -34,8 +33,12 @@ export function registerHover(context: ServerContext): void {
       const options = { angleDecimals: settings.angleDecimals, format };
       // A large SMILES species' card (its polarity needs the 3D model) is written on a worker
       // thread, so that other requests are answered meanwhile.
-      const large = result.ok && result.value.reading.notation === "smiles" && result.value.graph.atoms.length > OFF_THREAD_ATOMS;
-      const written = large && result.ok ? await offThread.card(result.value.reading.text, options) : undefined;
+      const answer =
+        result.ok && isLargeSmiles(result.value)
+          ? await offThread.run({ kind: "card", smiles: result.value.reading.text, options }, token)
+          : undefined;
+      if (answer?.kind === "cancelled") return null;
+      const written = answer?.kind === "done" ? answer.value : undefined;
       const alsoAProblem =
         !result.ok && isReported(analysed.findingsAround(species.range.start, species.range.end), species.range, result.problem.message);
       const value = written ?? resultMarkdown(species.text, result, options, { alsoAProblem });
@@ -70,7 +73,7 @@ export async function prepareHoverCards(context: ServerContext, uri: string, pre
     prepared.add(occurrence.text);
     const result = analyzeOccurrenceSafely(occurrence);
     // Large SMILES species get their cards on the worker thread when hovered.
-    if (!result.ok || (result.value.reading.notation === "smiles" && result.value.graph.atoms.length > OFF_THREAD_ATOMS)) continue;
+    if (!result.ok || isLargeSmiles(result.value)) continue;
     resultMarkdown(occurrence.text, result, options, { alsoAProblem: false });
     if (performance.now() - sliceStart < PREPARE_SLICE_MS) continue;
     await new Promise((resolve) => setImmediate(resolve));

@@ -11,12 +11,7 @@ import {
   DOCUMENT_SUMMARY_METHOD,
   SHAPE_MODEL_METHOD,
   SPECIES_AT_METHOD,
-  coordinateFileOf,
   documentKindFor,
-  lewisViewImages,
-  missingModelReason,
-  shapeOf,
-  shapeViewModelOf,
   type CheckTextParams,
   type CheckTextResult,
   type CoordinatesParams,
@@ -33,9 +28,11 @@ import { guarded } from "../guardedHandler";
 import { lspRange } from "../ranges";
 import { enabledDocument, type ServerContext } from "../serverContext";
 import { diagnosticsOf } from "./diagnostics";
+import { isLargeSmiles, type OffThreadSpecies } from "../offThreadSpecies";
+import { coordinatesAnswer, shapeModelAnswer } from "../speciesModelAnswers";
 
 /** Registers the five requests. */
-export function registerSpeciesRequests(context: ServerContext): void {
+export function registerSpeciesRequests(context: ServerContext, offThread: OffThreadSpecies): void {
   const { connection, log } = context;
   connection.onRequest(
     SPECIES_AT_METHOD,
@@ -46,32 +43,35 @@ export function registerSpeciesRequests(context: ServerContext): void {
   );
   connection.onRequest(
     SHAPE_MODEL_METHOD,
-    guarded<unknown, ShapeModelResult | null>(log, "shape model", null, async (params) => {
+    guarded<unknown, ShapeModelResult | null>(log, "shape model", null, async (params, token) => {
       const found = await speciesAt(context, params);
       if (!found) return null;
       const described = describe(found.document, found.species);
       if (!found.species.analysis.ok) return described;
-      const model = shapeViewModelOf(found.species.analysis.value);
-      const lewis = lewisViewImages(found.species.analysis.value);
-      if (model) return { ...described, model, ...(lewis ? { lewis } : {}) };
-      const tooLarge = shapeOf(found.species.analysis.value).coordinates.tooLarge;
-      return {
-        ...described,
-        problem: { code: tooLarge ? "too-large-for-model" : "no-model", message: missingModelReason(found.species.analysis.value)! },
-      };
+      const analysis = found.species.analysis.value;
+      // A large species' model takes a while to build: on the worker, so other requests go on.
+      const answer = isLargeSmiles(analysis)
+        ? await offThread.run({ kind: "shapeModel", smiles: analysis.reading.text }, token)
+        : undefined;
+      if (answer?.kind === "cancelled") return null;
+      return { ...described, ...((answer?.kind === "done" ? answer.value : undefined) ?? shapeModelAnswer(analysis)) };
     }),
   );
   connection.onRequest(
     COORDINATES_METHOD,
-    guarded<unknown, CoordinatesResult | null>(log, "coordinates", null, async (params) => {
+    guarded<unknown, CoordinatesResult | null>(log, "coordinates", null, async (params, token) => {
       const format = (params as Partial<CoordinatesParams> | null)?.format;
       if (format !== "xyz" && format !== "molfile") return null;
       const found = await speciesAt(context, params);
       if (!found) return null;
       const described = describe(found.document, found.species);
       if (!found.species.analysis.ok) return described;
-      const file = coordinateFileOf(found.species.analysis.value, format);
-      return file.ok ? { ...described, file: file.value } : { ...described, problem: { code: "no-coordinates", message: file.message } };
+      const analysis = found.species.analysis.value;
+      const answer = isLargeSmiles(analysis)
+        ? await offThread.run({ kind: "coordinates", smiles: analysis.reading.text, format }, token)
+        : undefined;
+      if (answer?.kind === "cancelled") return null;
+      return { ...described, ...((answer?.kind === "done" ? answer.value : undefined) ?? coordinatesAnswer(analysis, format)) };
     }),
   );
   connection.onRequest(
