@@ -61,7 +61,9 @@ describe("check over examples/", () => {
     expect(lines).toContain(
       "examples/reference/species.json:16:78: warning: Valence electrons for XeF4 are 36, the table says 34. [table-valence-electrons]",
     );
-    expect(lines.at(-2)).toBe("1 error, 5 warnings and 1 note in 4 of 5 files checked.");
+    // from memory: Zumdahl, Chemistry, ch. 4: Ca2+ + 2 F- -> CaF2; sulfite to sulfate takes 2 SO3^2- per O2
+    expect(lines.filter((line) => line.endsWith("[equation-unbalanced]"))).toHaveLength(2);
+    expect(lines.at(-2)).toBe("3 errors, 5 warnings and 2 notes in 5 of 6 files checked.");
     expect(lines.at(-1)).toMatch(/^Caution: Model prediction, not measured data/);
   });
 
@@ -75,6 +77,10 @@ describe("check over examples/", () => {
       ["examples/inventory/cylinders.csv", "transition-metal-centre", "WF6"],
       ["examples/inventory/ions.yaml", "table-molecular-geometry", "linear"],
       ["examples/notebook/run-14-fluorinating-agents.md", "table-valence-electrons", "40"],
+      // The two equations wrong on purpose: the finding sits on the arrow.
+      ["examples/notebook/run-16-scrubber-chemistry.md", "equation-unbalanced", "→"],
+      ["examples/notebook/run-16-scrubber-chemistry.md", "ionic-solid", "CaF2"],
+      ["examples/notebook/run-16-scrubber-chemistry.md", "equation-unbalanced", "->"],
       ["examples/reference/species.json", "table-valence-electrons", "34"],
     ]);
   });

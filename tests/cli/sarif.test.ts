@@ -46,7 +46,14 @@ describe("check --format sarif", () => {
     expect(only.tool.driver.version).toBe(JSON.parse(readFileSync(join(repositoryRoot, "package.json"), "utf8")).version);
     const ruleIds = only.tool.driver.rules.map((rule: { id: string }) => rule.id);
     expect(new Set(ruleIds)).toEqual(new Set(only.results.map((result: { ruleId: string }) => result.ruleId)));
-    expect(ruleIds.sort()).toEqual(["octet-exceeded", "table-molecular-geometry", "table-valence-electrons", "transition-metal-centre"]);
+    expect(ruleIds.sort()).toEqual([
+      "equation-unbalanced",
+      "ionic-solid",
+      "octet-exceeded",
+      "table-molecular-geometry",
+      "table-valence-electrons",
+      "transition-metal-centre",
+    ]);
     for (const result of only.results) expect(only.tool.driver.rules[result.ruleIndex].id).toBe(result.ruleId);
   });
 
@@ -59,6 +66,8 @@ describe("check --format sarif", () => {
       "table-molecular-geometry": "warning",
       "octet-exceeded": "error",
       "transition-metal-centre": "note",
+      "equation-unbalanced": "error",
+      "ionic-solid": "note",
     });
     const ch5 = results.find((result: { ruleId: string }) => result.ruleId === "octet-exceeded");
     expect(ch5.locations[0].physicalLocation).toEqual({

@@ -42,6 +42,9 @@ const DESCRIPTIONS: Readonly<Record<string, string>> = {
   "table-ir-bands": "A table's count of IR bands disagrees with the symmetry prediction.",
   "table-raman-bands": "A table's count of Raman bands disagrees with the symmetry prediction.",
   "table-ir-active-modes": "A table's count of IR-active modes disagrees with the symmetry prediction.",
+  "equation-unbalanced": "An equation does not conserve every element and the charge; the fix rewrites its coefficients.",
+  "equation-balance-not-unique": "An unbalanced equation that balances in more than one independent way: no single fix.",
+  "equation-cannot-balance": "An equation that no positive coefficients balance: an element or the charge cannot match.",
   "table-vibrational-modes": "A table's count of vibrational modes is not 3N - 6 (3N - 5 if linear).",
 };
 
