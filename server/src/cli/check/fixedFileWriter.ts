@@ -7,8 +7,9 @@
  * What the replacement keeps:
  * - Changes made meanwhile: the file is replaced only if it is still exactly what was read (same
  *   size, modification time, inode and content hash, checked just before); otherwise nothing is
- *   written and `FileChangedError` says so. The last check and the replacement run without a
- *   pause, so only a write landing in that instant could still be missed.
+ *   written and `FileChangedError` says so. The hash is checked first, then the cheap signs once
+ *   more, and the replacement follows with nothing in between: only a write landing between that
+ *   last stat call and the rename could still be missed (see DEVELOPERS.md).
  * - Symbolic links: the link is left as it is and its target is fixed.
  * - Mode, owner and group: the temporary file gets them before it replaces the original.
  * - Hard links, and an owner the temporary file cannot be given (another user's file fixed by
@@ -119,6 +120,9 @@ export async function fixedFileWriter(path: string, temporaries: TemporaryFiles)
         temporary = undefined;
         // From here on nothing awaits: no other work (nor a signal handler) runs in between.
         if (!unchangedSince(target, before, readBytes, readHash.digest("hex"))) throw new FileChangedError();
+        // Hashing a large file takes a while: the cheap signs are checked once more right before
+        // the replacement, so the window left is that of one stat call.
+        if (!sameSigns(target, before, readBytes)) throw new FileChangedError();
         if (writeInPlace) {
           // The temporary file goes only once the copy is complete and on disk.
           copyInto(temporaryPath, target);
@@ -149,6 +153,11 @@ function removeTemporary(path: string, temporaries: TemporaryFiles): void {
 
 /** True when `path` is still the file that was read: same file, size, time and content. */
 function unchangedSince(path: string, before: BigIntStats, readBytes: number, readHash: string): boolean {
+  return sameSigns(path, before, readBytes) && hashOf(path) === readHash;
+}
+
+/** True when `path` is still the same file, of the size read, with the same modification and change times. */
+function sameSigns(path: string, before: BigIntStats, readBytes: number): boolean {
   let now: BigIntStats;
   try {
     now = statSync(path, { bigint: true });
@@ -157,8 +166,7 @@ function unchangedSince(path: string, before: BigIntStats, readBytes: number, re
   }
   const sameFile = now.ino === before.ino && now.dev === before.dev;
   const sameSize = now.size === before.size && now.size === BigInt(readBytes);
-  if (!sameFile || !sameSize || now.mtimeNs !== before.mtimeNs) return false;
-  return hashOf(path) === readHash;
+  return sameFile && sameSize && now.mtimeNs === before.mtimeNs && now.ctimeNs === before.ctimeNs;
 }
 
 function hashOf(path: string): string {
