@@ -99,6 +99,12 @@ describe("plain-text equations", () => {
     ["2 ⟦Al⟧ + ⟦Fe2O3⟧ gives a lot of heat.", "plaintext"],
     ["Vitamin C + zinc. I + you. A 3D print, a 4K screen, 2CO in words.", "plaintext"],
     ["Grade B → grade A after the retest.", "plaintext"],
+    // common practice: without superscripts a charge is typed after a space
+    ["⟦I2⟧ + 2⟦S2O3 2-⟧ -> 2⟦I-⟧ + ⟦S4O6 2-⟧", "plaintext"],
+    ["⟦Sulfate⟧ as ⟦SO4 2-⟧. Add 2-3 g of ⟦NaCl⟧; ⟦NO3⟧ 2-fold.", "plaintext"],
+    // common practice: titration records write the volume, amount or mass of a species as V(X), n(X), m(X)
+    ["V(⟦NaOH⟧)/mL   25.30\nn(⟦KHP⟧) = m / M\nV(⟦HCl⟧) = 10.00 mL", "plaintext"],
+    ["⟦V(OH)3⟧ and ⟦V(CO)6⟧ are vanadium compounds.", "plaintext"],
   ])("%s", (marked, kind) => {
     check(marked, kind as DocumentKind);
   });

@@ -118,12 +118,16 @@ describe("alkyl and aryl groups written as blocks", () => {
 
 describe("dimeric and chain oxoanions", () => {
   // from memory: descriptive inorganic chemistry texts (thiosulfate S-SO3; disulfite O2S-SO3;
-  // dithionate O3S-SO3; peroxodisulfate O3S-O-O-SO3; diphosphate O3P-O-PO3; oxalate O2C-CO2)
+  // dithionate O3S-SO3; dithionite O2S-SO2; tetrathionate O3S-S-S-SO3; peroxodisulfate
+  // O3S-O-O-SO3; diphosphate O3P-O-PO3; oxalate O2C-CO2)
   it.each<StructureCase>([
     { text: "S2O3^2-", smiles: "[O-]S([O-])(=O)=S" },
     { text: "S2O5^2-", smiles: "[O-]S(=O)S(=O)(=O)[O-]" },
     { text: "S2O6^2-", smiles: "[O-]S(=O)(=O)S(=O)(=O)[O-]" },
     { text: "S2O8^2-", smiles: "[O-]S(=O)(=O)OOS(=O)(=O)[O-]" },
+    { text: "S2O4^2-", smiles: "[O-]S(=O)S(=O)[O-]" },
+    { text: "S4O6^2-", smiles: "[O-]S(=O)(=O)SSS(=O)(=O)[O-]" },
+    { text: "tetrathionate", smiles: "[O-]S(=O)(=O)SSS(=O)(=O)[O-]" },
     { text: "P2O7^4-", smiles: "[O-]P(=O)([O-])OP(=O)([O-])[O-]" },
     { text: "C2O4^2-", smiles: "[O-]C(=O)C(=O)[O-]" },
     { text: "oxalate", smiles: "[O-]C(=O)C(=O)[O-]" },

@@ -222,6 +222,11 @@ function scanChunk(scan: ProseScan, start: number, end: number): void {
   if (URL_OR_MAIL.test(chunk)) return;
   // The later words of a name already found are part of it, formulas included.
   if (start < scan.names.nameEnd) return;
+  // "V(NaOH)/mL", "n(KHP) =": a quantity of the species in brackets; the species starts inside.
+  if (isQuantityOf(text, start, end)) {
+    scanChunk(scan, start + 2, end);
+    return;
+  }
   scanNamesInChunk(text, start, end, scan.end, scan.read, scan.sink, scan.names);
   if (start < scan.names.nameEnd) return;
   scanFormulas(scan, start, end);
@@ -324,6 +329,7 @@ function formulaToken(scan: ProseScan, start: number, end: number): number {
   } else {
     while (tokenEnd < end && isSuperscript(text.charCodeAt(tokenEnd))) tokenEnd++;
     if (tokenEnd === bodyEnd) tokenEnd = chargeEnd(text, bodyEnd, end);
+    if (tokenEnd === bodyEnd && state === 0) tokenEnd = spacedChargeEnd(text, start, bodyEnd, scan.end);
   }
   // "CuSO4.5H2O", "CuSO4•5H2O", "CuSO4 · 5H2O": water of crystallisation after a hydrate dot.
   // A period with no count and formula right after it ends the sentence.
@@ -451,6 +457,43 @@ function stateSymbolAt(text: string, at: number, end: number): number {
     if (at + state.length <= end && text.startsWith(state, at)) return state.length;
   }
   return 0;
+}
+
+/**
+ * "V(NaOH)/mL", "n(KHP) = m / M", "c(HCl)": a quantity symbol (volume, amount, mass, concentration,
+ * molar mass) with the species in brackets. Of these only V is also an element symbol: "V(CO)6" and
+ * "V(OH)3" carry a count after the bracket and stay vanadium compounds.
+ */
+function isQuantityOf(text: string, start: number, end: number): boolean {
+  if (!QUANTITY_SYMBOLS.has(text.charCodeAt(start)) || text.charCodeAt(start + 1) !== 0x28 || !isUpper(text.charCodeAt(start + 2))) {
+    return false;
+  }
+  let close = start + 2;
+  while (close < end && isWordCharacter(text.charCodeAt(close))) close++;
+  if (text.charCodeAt(close) !== 0x29) return false;
+  const after = text.charCodeAt(close + 1);
+  return !isWordCharacter(after) && !isSubscriptCode(after) && after !== 0x28 && after !== 0x5b;
+}
+
+// common practice: V volume, n amount, m mass, c concentration, M molar mass
+const QUANTITY_SYMBOLS: ReadonlySet<number> = new Set([0x56, 0x6e, 0x6d, 0x63, 0x4d]);
+
+function isSubscriptCode(code: number): boolean {
+  return code >= 0x2080 && code <= 0x2089;
+}
+
+/**
+ * Plain text without superscripts writes an ion's charge after a space: "S2O3 2-", "SO4 2-". Taken
+ * only after a formula with a count (a polyatomic ion) and a one-digit charge that ends the word.
+ */
+function spacedChargeEnd(text: string, start: number, bodyEnd: number, limit: number): number {
+  if (text.charCodeAt(bodyEnd) !== 0x20 || bodyEnd + 3 > limit) return bodyEnd;
+  const digit = text.charCodeAt(bodyEnd + 1);
+  if (digit < 0x31 || digit > 0x34 || !isSign(text.charCodeAt(bodyEnd + 2))) return bodyEnd;
+  const after = text.charCodeAt(bodyEnd + 3);
+  if (bodyEnd + 3 < limit && (isWordCharacter(after) || isSign(after))) return bodyEnd;
+  if (!/[A-Z][a-z]?\d/.test(text.slice(start, bodyEnd))) return bodyEnd;
+  return bodyEnd + 3;
 }
 
 /** The end of a charge such as "+", "2-", "^2-", "^{2-}" right after a formula body. */

@@ -98,6 +98,18 @@ const SINGLE: Readonly<Record<string, KnownStructure>> = {
     smiles: true,
     note: "Disulfite (metabisulfite) has an S-S bond: O2S-SO3.",
   },
+  "O4S2^-2": {
+    name: "dithionite",
+    written: "[O-]S(=O)S(=O)[O-]",
+    smiles: true,
+    note: "Dithionite has a long, weak S-S bond: O2S-SO2.",
+  },
+  "O6S4^-2": {
+    name: "tetrathionate",
+    written: "[O-]S(=O)(=O)SSS(=O)(=O)[O-]",
+    smiles: true,
+    note: "Tetrathionate is a chain of four S atoms: O3S-S-S-SO3.",
+  },
   "O6S2^-2": { name: "dithionate", written: "[O-]S(=O)(=O)S(=O)(=O)[O-]", smiles: true, note: "Dithionate has an S-S bond: O3S-SO3." },
   "O8S2^-2": {
     name: "peroxodisulfate",
