@@ -105,8 +105,26 @@ function checkCell(cell: TableCell, species: string, analysis: SpeciesAnalysis, 
     case "axe":
       return centre && checkAxe(cell, species, centre);
     case "electronGeometry":
+      if (isPerCentre(cell.text)) {
+        return checkPerCentreGeometry(
+          cell,
+          analysis,
+          (each) => each.electronGeometry,
+          "table-electron-geometry",
+          `Electron geometry in ${species}`,
+        );
+      }
       return centre && checkGeometry(cell, centre.electronGeometry, "table-electron-geometry", `Electron geometry of ${species}`);
     case "molecularGeometry": {
+      if (isPerCentre(cell.text)) {
+        return checkPerCentreGeometry(
+          cell,
+          analysis,
+          (each) => each.molecularGeometry,
+          "table-molecular-geometry",
+          `Molecular geometry in ${species}`,
+        );
+      }
       const geometry = centre?.molecularGeometry ?? (atomCount(analysis) === 2 ? "linear" : undefined);
       return geometry && checkGeometry(cell, geometry, "table-molecular-geometry", `Molecular geometry of ${species}`);
     }
@@ -153,6 +171,44 @@ function checkAxe(cell: TableCell, species: string, centre: CentreAnalysis): Fin
   if (written.bonded === computed.bonded && written.lonePairs === computed.lonePairs) return undefined;
   const newText = axeInStyleOf(computed, cell.text);
   return mismatch(cell, "table-axe", `AXE class of ${species} is ${centre.axe} ${MODEL}, the table says ${cell.text}.`, newText);
+}
+
+/** "C: tetrahedral; O: bent": a value for each kind of centre, as the summary table writes it. */
+function isPerCentre(text: string): boolean {
+  return /^\s*[A-Z][a-z]?\s*:/.test(text);
+}
+
+/**
+ * A per-centre cell is right when each "atom: geometry" part names a geometry that some centre of
+ * that element has; the parts need not list every centre. No fix: which centre was meant is not
+ * for lonepair to guess.
+ */
+function checkPerCentreGeometry(
+  cell: TableCell,
+  analysis: SpeciesAnalysis,
+  geometryOf: (centre: CentreAnalysis) => string,
+  code: string,
+  subject: string,
+): Finding | undefined {
+  for (const part of cell.text.split(";")) {
+    const match = /^\s*([A-Z][a-z]?)\s*:\s*(.*?)\s*$/.exec(part);
+    if (!match) return undefined;
+    const [, atom, value] = match;
+    const written = normalizeGeometry(value);
+    if (written === undefined) continue;
+    const computed = [
+      ...new Set(analysis.centres.filter((centre) => centre.atom === atom).map((centre) => computedGeometry(geometryOf(centre)))),
+    ];
+    if (computed.includes(written)) continue;
+    const actual = computed.length === 0 ? `no ${atom} centre is analysed` : `the ${atom} centres are ${computed.join(" or ")}`;
+    return {
+      range: cell.range,
+      severity: "warning",
+      code,
+      message: `${subject}: the table says ${atom}: ${value}, but ${actual} ${MODEL}.`,
+    };
+  }
+  return undefined;
 }
 
 function checkGeometry(cell: TableCell, computed: string, code: string, subject: string): Finding | undefined {
