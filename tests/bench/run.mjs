@@ -15,6 +15,7 @@ import { runCoordinatesBench } from "./coordinates.mjs";
 import { runLargeSmilesBench } from "./largeSmiles.mjs";
 import { runProseScanBench } from "./proseScan.mjs";
 import { runRealStyleBench } from "./realStyle.mjs";
+import { runEquationsBench } from "./equations.mjs";
 
 const corePath = fileURLToPath(new URL("../../dist/core.js", import.meta.url));
 if (!existsSync(corePath)) {
@@ -131,6 +132,7 @@ missed.push(...(await runSmilesAnalysisBench()));
 missed.push(...runCoordinatesBench());
 missed.push(...runLargeSmilesBench());
 missed.push(...runProseScanBench());
+missed.push(...runEquationsBench());
 missed.push(...(await runRealStyleBench()));
 if (missed.length > 0) {
   console.log(`\nmissed: ${missed.join(", ")}`);

@@ -37,19 +37,21 @@ export function equationsInProse(text: string, start: number, end: number, read:
 
 /** The line with code spans, `\ce{...}`, `$...$` and `<!-- -->` replaced by spaces of the same length. */
 function maskedLine(line: string): string {
-  let masked = "";
+  // Most lines hold nothing to mask.
+  if (!/[`$\\<]/.test(line)) return line;
+  const pieces: string[] = [];
+  let copied = 0;
   let index = 0;
   while (index < line.length) {
     const end = maskedEnd(line, index);
     if (end > index) {
-      masked += " ".repeat(end - index);
+      pieces.push(line.slice(copied, index), " ".repeat(end - index));
+      copied = end;
       index = end;
-    } else {
-      masked += line[index];
-      index++;
-    }
+    } else index++;
   }
-  return masked;
+  pieces.push(line.slice(copied));
+  return pieces.join("");
 }
 
 /** Where a span that is not prose, starting at `index`, ends; `index` itself when none starts there. */

@@ -19,12 +19,30 @@ export const REACTION_CODES = {
 /** Findings for `reactions`; `analyze` tells which species the core refuses. */
 export function reactionFindings(reactions: readonly Reaction[], analyze: (text: string) => AnalysisResult | undefined): Finding[] {
   const findings: Finding[] = [];
+  // Notebooks repeat their equations: one verdict per distinct text, placed at each copy.
+  const memo = new Map<string, { readonly at: number; readonly finding: Finding | undefined }>();
   for (const reaction of reactions) {
     if (!judgeable(reaction, analyze)) continue;
-    const finding = reactionFinding(reaction);
-    if (finding) findings.push(finding);
+    const key = `${reaction.notation}\u0000${reaction.text}`;
+    let known = memo.get(key);
+    if (!known) {
+      known = { at: reaction.range.start, finding: reactionFinding(reaction) };
+      if (memo.size >= MEMO_LIMIT) memo.clear();
+      memo.set(key, known);
+    }
+    if (known.finding) findings.push(movedFinding(known.finding, reaction.range.start - known.at));
   }
   return findings;
+}
+
+/** Distinct equation texts remembered per check. */
+const MEMO_LIMIT = 10_000;
+
+function movedFinding(finding: Finding, by: number): Finding {
+  if (by === 0) return finding;
+  const range = { start: finding.range.start + by, end: finding.range.end + by };
+  const fix = finding.fix && { ...finding.fix, range: { start: finding.fix.range.start + by, end: finding.fix.range.end + by } };
+  return fix ? { ...finding, range, fix } : { ...finding, range };
 }
 
 function judgeable(reaction: Reaction, analyze: (text: string) => AnalysisResult | undefined): boolean {
