@@ -79,10 +79,18 @@ describe("oxidation states of every atom", () => {
     expect(states && oxidationStatesText(states)).toBe("Fe 2× +3, 1× +2 (average +8/3); O -2");
   });
 
-  it("says so when nothing tells which atom has which state", () => {
+  it("splits tetrathionate's average from its structure", () => {
     const reading = readSpecies("S4O6^2-");
     const states = reading.ok ? oxidationStatesOf(reading.value, analyzeSpecies("S4O6^2-")) : undefined;
-    // from memory: Harris, Quantitative Chemical Analysis: tetrathionate sulfur averages +2.5
-    expect(states && oxidationStatesText(states)).toContain("S +5/2 (average");
+    // from memory: Harris, Quantitative Chemical Analysis: tetrathionate sulfur averages +2.5,
+    // the two sulfonate S +5 and the two bridging S 0
+    expect(states && oxidationStatesText(states)).toBe("S 2× +5, 2× 0 (average +5/2); O -2");
+  });
+
+  it("says so when nothing tells which atom has which state", () => {
+    const reading = readSpecies("S3O6^2-");
+    const states = reading.ok ? oxidationStatesOf(reading.value, analyzeSpecies("S3O6^2-")) : undefined;
+    // from memory: Greenwood & Earnshaw, sulfur chapter: trithionate sulfur averages +10/3
+    expect(states && oxidationStatesText(states)).toContain("S +10/3 (average");
   });
 });
