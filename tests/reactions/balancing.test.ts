@@ -179,6 +179,18 @@ describe("documents: a finding on the arrow and a fix that touches only coeffici
     expect(equationFindings(text)).toEqual(expected);
   });
 
+  it.each<[string, string, string]>([
+    // common practice: a wrong coefficient is the writer's mistake
+    ["a coefficient missing", "\\ce{H2 + O2 -> 2 H2O}", "error"],
+    // common practice: reaction schemes leave out by-products (the water of an esterification)
+    ["a scheme without its by-product", "\\ce{CH3COOH + CH3CH2OH -> CH3COOCH2CH3}", "warning"],
+    // common practice: two reactions written as one
+    ["two reactions in one", "\\ce{H2 + O2 -> H2O + H2O2}", "warning"],
+  ])("%s: %s", (_, text, severity) => {
+    const found = checkDocument(analyzeDocument(text, "markdown")).filter((finding) => finding.code.startsWith("equation-"));
+    expect(found.map((finding) => finding.severity)).toEqual([severity]);
+  });
+
   it("keeps the refused species' own finding", () => {
     // common practice: CH5 has one hydrogen too many for carbon
     const codes = checkDocument(analyzeDocument("\\ce{CH5 + O2 -> CO2 + H2O}", "markdown")).map((finding) => finding.code);

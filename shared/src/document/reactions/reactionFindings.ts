@@ -74,7 +74,8 @@ export function reactionFinding(reaction: Reaction): Finding | undefined {
     case "not-unique":
       return {
         range,
-        severity: "error",
+        // Two reactions written as one, or a scheme: worth a look, not a verdict.
+        severity: "warning",
         code: REACTION_CODES.notUnique,
         message:
           `Equation not balanced: ${imbalanceText(verdict.sheet)}. It can be balanced in ${verdict.ways} independent ways ` +
@@ -83,9 +84,12 @@ export function reactionFinding(reaction: Reaction): Finding | undefined {
     case "impossible":
       return {
         range,
-        severity: "error",
+        // Reaction schemes leave out by-products on purpose ("-> ester", no water): a warning, not an error.
+        severity: "warning",
         code: REACTION_CODES.impossible,
-        message: `Equation cannot balance: ${verdict.reason}. As written: ${imbalanceText(verdict.sheet)}.`,
+        message:
+          `Equation cannot balance: ${verdict.reason}. As written: ${imbalanceText(verdict.sheet)}. ` +
+          "A species is missing, or this is a scheme that leaves out by-products.",
       };
   }
 }
