@@ -155,21 +155,16 @@ function childDirections(occupied: readonly number[], count: number, domainCount
 
 /** Atoms reachable from `start` without stepping onto `blocked`. */
 function reachableWithout(adjacency: readonly number[][], start: number, blocked: number): number {
-  const seen = new Set<number>([blocked, start]);
-  const stack = [start];
-  while (stack.length > 0) {
-    const atom = stack.pop()!;
-    for (const other of adjacency[atom]) {
-      if (seen.has(other)) continue;
-      seen.add(other);
-      stack.push(other);
-    }
-  }
-  return seen.size - 1;
+  return reachedFrom(adjacency, start, blocked).size - 1;
 }
 
 function componentOf(adjacency: readonly number[][], start: number): number[] {
-  const seen = new Set<number>([start]);
+  return [...reachedFrom(adjacency, start)].sort((a, b) => a - b);
+}
+
+/** `start` and every atom reachable from it, with `blocked` (if given) counted as seen and never crossed. */
+function reachedFrom(adjacency: readonly number[][], start: number, blocked?: number): Set<number> {
+  const seen = new Set<number>(blocked === undefined ? [start] : [blocked, start]);
   const stack = [start];
   while (stack.length > 0) {
     const atom = stack.pop()!;
@@ -179,7 +174,7 @@ function componentOf(adjacency: readonly number[][], start: number): number[] {
       stack.push(other);
     }
   }
-  return [...seen].sort((a, b) => a - b);
+  return seen;
 }
 
 /** The largest ring system, or else the middle atom of the longest chain of heavy atoms. */
