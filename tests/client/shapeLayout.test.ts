@@ -4,21 +4,17 @@
  * ball clear of every other ball and every label clear of the balls, and the page's model fills
  * its pane. Label boxes come from the browser's own text layout, not from our estimates.
  */
-import { existsSync, mkdirSync, mkdtempSync, readFileSync, rmSync } from "node:fs";
+import { existsSync, mkdirSync, mkdtempSync, rmSync } from "node:fs";
 import { tmpdir } from "node:os";
 import { join } from "node:path";
-import { randomBytes } from "node:crypto";
 import { fileURLToPath } from "node:url";
 import type { BrowserContext, Page } from "playwright-core";
 import { afterAll, beforeAll, describe, expect, it } from "vitest";
 import { CHROMIUM, launchHeadlessChromium } from "../support/headlessChromium";
-import { shapePageHtml } from "../../client/src/shapePageHtml";
+import { routeShapePage, SHAPE_PAGE_ORIGIN } from "../support/shapePageRoutes";
 import { analyzeTyped, shapeSketchSvg, shapeViewModelOf, type ShapeViewModel, type SpeciesAnalysis } from "../../shared/src/index";
 
-const ORIGIN = "https://lonepair-webview.test";
 const ROOT = fileURLToPath(new URL("../..", import.meta.url));
-const MEDIA = join(ROOT, "client", "media");
-const RENDERER = join(ROOT, "dist", "webview", "shapeScene.js");
 const ARTIFACTS = join(ROOT, ".test-artifacts", "shapes");
 
 // common practice: one species for each VSEPR shape, as general-chemistry tables list them.
@@ -336,22 +332,7 @@ describe.skipIf(!haveBrowser)("pictures that read at a glance (headless Chromium
 /** The page as the extension builds it, plus an empty host for sketches. */
 async function openShapePage(context: BrowserContext): Promise<Page> {
   const page = await context.newPage();
-  const nonce = randomBytes(18).toString("base64");
-  const html = shapePageHtml({
-    cspSource: ORIGIN,
-    nonce,
-    scriptUri: `${ORIGIN}/media/shapeView.js`,
-    rendererUri: `${ORIGIN}/webview/shapeScene.js`,
-    styleUri: `${ORIGIN}/media/shapeView.css`,
-  }).replace("</body>", '<div id="sketch-host"></div></body>');
-  await page.route(`${ORIGIN}/**`, async (route) => {
-    const path = new URL(route.request().url()).pathname;
-    if (path === "/index.html") return route.fulfill({ contentType: "text/html", body: html });
-    if (path === "/webview/shapeScene.js") return route.fulfill({ contentType: "text/javascript", body: readFileSync(RENDERER) });
-    const type = { "/media/shapeView.js": "text/javascript", "/media/shapeView.css": "text/css" }[path];
-    if (!type) return route.fulfill({ status: 404, body: "" });
-    return route.fulfill({ contentType: type, body: readFileSync(join(MEDIA, path.slice("/media/".length))) });
-  });
+  await routeShapePage(page, '<div id="sketch-host"></div>');
   await page.addInitScript(() => {
     const record = globalThis as unknown as PageGlobals;
     record.posted = [];
@@ -361,7 +342,7 @@ async function openShapePage(context: BrowserContext): Promise<Page> {
       setState: () => undefined,
     });
   });
-  await page.goto(`${ORIGIN}/index.html`);
+  await page.goto(`${SHAPE_PAGE_ORIGIN}/index.html`);
   await page.waitForFunction(() => (globalThis as unknown as PageGlobals).posted.some((message) => message.type === "ready"));
   return page;
 }

@@ -3,24 +3,19 @@
  * Policy the extension gives it: the page's files are served from a made-up origin by request
  * interception (no network), and `acquireVsCodeApi` is stood in for by an init script.
  */
-import { existsSync, mkdirSync, mkdtempSync, readFileSync, rmSync } from "node:fs";
+import { existsSync, mkdirSync, mkdtempSync, rmSync } from "node:fs";
 import { tmpdir } from "node:os";
 import { join } from "node:path";
-import { randomBytes } from "node:crypto";
 import { fileURLToPath } from "node:url";
 import type { BrowserContext, Page } from "playwright-core";
 import { CHROMIUM, launchHeadlessChromium } from "../support/headlessChromium";
 import { afterAll, beforeAll, describe, expect, it } from "vitest";
-import { shapePageHtml } from "../../client/src/shapePageHtml";
+import { routeShapePage, SHAPE_PAGE_ORIGIN } from "../support/shapePageRoutes";
 import { analyzeSpecies, lewisViewImages } from "../../shared/src/index";
 import { buildCoordinates } from "../../shared/src/chemistry/geometry/buildCoordinates";
 import { shapeViewModel, type ShapeViewModel } from "../../shared/src/report/shapeViewModel";
 
-const ORIGIN = "https://lonepair-webview.test";
 const ROOT = fileURLToPath(new URL("../..", import.meta.url));
-const MEDIA = join(ROOT, "client", "media");
-// The renderer bundle the build writes (node esbuild.config.mjs).
-const RENDERER = join(ROOT, "dist", "webview", "shapeScene.js");
 const ARTIFACTS = join(ROOT, ".test-artifacts");
 const INJECTED = "<script>alert(1)</script>";
 
@@ -70,22 +65,7 @@ describe.skipIf(!haveBrowser)("3D shape page in headless Chromium", () => {
       dialogs.push(dialog.message());
       void dialog.dismiss();
     });
-    const nonce = randomBytes(18).toString("base64");
-    const html = shapePageHtml({
-      cspSource: ORIGIN,
-      nonce,
-      scriptUri: `${ORIGIN}/media/shapeView.js`,
-      rendererUri: `${ORIGIN}/webview/shapeScene.js`,
-      styleUri: `${ORIGIN}/media/shapeView.css`,
-    });
-    await page.route(`${ORIGIN}/**`, async (route) => {
-      const path = new URL(route.request().url()).pathname;
-      if (path === "/index.html") return route.fulfill({ contentType: "text/html", body: html });
-      if (path === "/webview/shapeScene.js") return route.fulfill({ contentType: "text/javascript", body: readFileSync(RENDERER) });
-      const file = { "/media/shapeView.js": "text/javascript", "/media/shapeView.css": "text/css" }[path];
-      if (!file) return route.fulfill({ status: 404, body: "" });
-      return route.fulfill({ contentType: file, body: readFileSync(join(MEDIA, path.slice("/media/".length))) });
-    });
+    await routeShapePage(page);
     // The editor injects acquireVsCodeApi; this stand-in records what the page posts and saves.
     await page.addInitScript((initialState) => {
       const record = globalThis as unknown as PageGlobals;
@@ -99,7 +79,7 @@ describe.skipIf(!haveBrowser)("3D shape page in headless Chromium", () => {
         },
       });
     }, savedState);
-    await page.goto(`${ORIGIN}/index.html`);
+    await page.goto(`${SHAPE_PAGE_ORIGIN}/index.html`);
     await page.waitForFunction(() => (globalThis as unknown as PageGlobals).posted.some((message) => message.type === "ready"));
     return { page, errors, dialogs };
   }
