@@ -70,7 +70,9 @@ export { MODEL_CAUTION, PLAIN_CARD_STYLE, formatAnalysisCard } from "./report/an
 export type { CardStyle } from "./report/analysisCard";
 export { toAnalysisJson } from "./report/analysisJson";
 export { HOVER_CAUTION, hoverMarkdown, problemMarkdown, resultMarkdown } from "./report/hoverMarkdown";
-export type { HoverFormat, HoverMarkdownOptions } from "./report/hoverMarkdown";
+export type { HoverFormat, HoverMarkdownOptions, ProblemCardOptions } from "./report/hoverMarkdown";
+export { HOVER_CARD_MEMO_CHARACTERS, createHoverCardMemo } from "./report/hoverCards";
+export type { HoverCardMemo } from "./report/hoverCards";
 export { reactionAtOffset, reactionCard, redoxSummary } from "./report/reactionCard";
 export type { OxidationChange, RedoxSummary } from "./report/reactionCard";
 export { shapeViewModel } from "./report/shapeViewModel";

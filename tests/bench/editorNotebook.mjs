@@ -69,7 +69,7 @@ for (const mode of ["pull", "push"]) {
     }
     const p99 = percentile(all, 0.99);
     console.log(
-      `  hover over ${HOVERS} random species   p50 ${percentile(all, 0.5).toFixed(1)} ms  p99 ${p99.toFixed(1)} ms   aim p99 < ${AIMS.hoverP99Ms} ms   ${verdict(p99 < AIMS.hoverP99Ms)}`,
+      `  hover over ${HOVERS} random species, first hovers included   p50 ${percentile(all, 0.5).toFixed(1)} ms  p95 ${percentile(all, 0.95).toFixed(1)} ms  p99 ${p99.toFixed(1)} ms   aim p99 < ${AIMS.hoverP99Ms} ms   ${verdict(p99 < AIMS.hoverP99Ms)}`,
     );
     console.log(
       `  first hover on each of ${first.length} species  slowest ${Math.max(...first).toFixed(1)} ms, median ${percentile(first, 0.5).toFixed(1)} ms; ${answered} of ${HOVERS} hovers answered`,

@@ -17,6 +17,7 @@ import {
   type TextEdit,
 } from "vscode-languageserver-protocol/node";
 import type { TextDocument } from "vscode-languageserver-textdocument";
+import { analyzeSpecies, resultMarkdown } from "../../shared/src/index";
 import { applyEdits, fixture, fixtureUri, positionOf, startSession, type LspSession } from "./lspSession";
 
 const CAUTION = "Model prediction, not measured data: follow the safety data sheet, local rules and licensed practice.";
@@ -110,6 +111,16 @@ describe("hover", () => {
     const reported = diagnosticAt(MARKDOWN, "CH5", "A trainee wrote CH5");
     expect(reported?.message).toContain("carbon");
     expect(text).not.toContain(String(reported?.message));
+  });
+
+  it.each(["SF4", "XeF4"])("the card of %s, written ahead after diagnostics, is the one the core writes", async (species) => {
+    const document = opened.get(MARKDOWN)!;
+    const position = positionOf(document, species === "SF4" ? "SF4 is the one" : "XeF4, keeps", 1);
+    const first = hoverText(await session.connection.sendRequest(HoverRequest.type, { textDocument: { uri: MARKDOWN }, position }));
+    const again = hoverText(await session.connection.sendRequest(HoverRequest.type, { textDocument: { uri: MARKDOWN }, position }));
+    // The server's default is one decimal for angles; this client reads markdown.
+    expect(first).toBe(resultMarkdown(species, analyzeSpecies(species), { angleDecimals: 1, format: "markdown" }));
+    expect(again).toBe(first);
   });
 
   it("answers null away from any species", async () => {

@@ -20,7 +20,7 @@ import type { ServerContext } from "./serverContext";
 import { createSettingsStore } from "./settingsStore";
 import { registerCodeActions } from "./features/codeActions";
 import { registerDiagnostics, type DiagnosticsFeature } from "./features/diagnostics";
-import { registerHover } from "./features/hover";
+import { registerHover, type HoverFeature } from "./features/hover";
 import { createOffThreadSpecies } from "./offThreadSpecies";
 import { registerInlayHints } from "./features/inlayHints";
 import { registerSpeciesRequests } from "./features/speciesRequests";
@@ -40,6 +40,7 @@ export function startServer(connection: Connection): void {
   const documents = new TextDocuments(CHUNKED_DOCUMENTS);
   let features: ClientFeatures | undefined;
   let diagnostics: DiagnosticsFeature | undefined;
+  let hover: HoverFeature | undefined;
   let workspaceCheck: WorkspaceCheckFeature | undefined;
   let folders: WorkspaceFolders | undefined;
   const settings = createSettingsStore(connection, () => features?.configuration ?? false, log);
@@ -61,13 +62,14 @@ export function startServer(connection: Connection): void {
     if (initialSettings !== undefined) settings.changed(initialSettings);
     // One worker for every request about a large species: hovers, 3D models, coordinate files.
     const offThread = createOffThreadSpecies(log);
-    registerHover(context, offThread);
+    hover = registerHover(context, offThread);
     registerCodeActions(context);
     registerSummaryTable(context);
     registerSpeciesRequests(context, offThread);
     registerLewisFigure(context);
-    if (features.inlayHints) registerInlayHints(context);
-    diagnostics = registerDiagnostics(context);
+    if (features.inlayHints) registerInlayHints(context, hover);
+    // Once a document's diagnostics are out, its hover cards are written ahead.
+    diagnostics = registerDiagnostics(context, hover.prepare);
     workspaceCheck = registerWorkspaceCheck(context);
     if (features.workspaceFolders) {
       connection.workspace.onDidChangeWorkspaceFolders(
@@ -118,6 +120,7 @@ export function startServer(connection: Connection): void {
       context.cache.delete(event.document.uri);
       settings.forget(event.document.uri);
       diagnostics?.documentClosed(event.document.uri);
+      hover?.closed(event.document.uri);
       // The file is the one on disk again, which may differ from the text the editor had.
       workspaceCheck?.filesMayHaveChanged();
     }),

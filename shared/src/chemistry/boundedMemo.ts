@@ -11,16 +11,16 @@ export interface BoundedMemo<V> {
 }
 
 /**
- * Holds at most about `budget` units, where each entry weighs `weight(key)` units (1 by default:
- * a count of entries).
+ * Holds at most about `budget` units, where each entry weighs `weight(key, value)` units (1 by
+ * default: a count of entries).
  */
-export function boundedMemo<V>(budget: number, weight: (key: string) => number = () => 1): BoundedMemo<V> {
+export function boundedMemo<V>(budget: number, weight: (key: string, value: V) => number = () => 1): BoundedMemo<V> {
   const generationBudget = Math.max(budget / 2, 1);
   let young = new Map<string, V>();
   let old = new Map<string, V>();
   let youngWeight = 0;
   const set = (key: string, value: V): void => {
-    const heavy = weight(key);
+    const heavy = weight(key, value);
     if (youngWeight + heavy > generationBudget && young.size > 0) {
       old = young;
       young = new Map();

@@ -15,7 +15,6 @@ import type { Finding, FindingSeverity } from "../core";
 import { guarded } from "../guardedHandler";
 import { lspRange } from "../ranges";
 import { enabledDocument, type ServerContext } from "../serverContext";
-import { prepareHoverCards } from "./hover";
 
 /** Every diagnostic carries this source, so users can filter and quick fixes can match. */
 export const DIAGNOSTIC_SOURCE = "lonepair";
@@ -53,9 +52,15 @@ export interface DiagnosticsFeature {
   settingsChanged(): void;
 }
 
+/**
+ * Work to do once a document's diagnostics are out (hover cards written ahead); it gives up when
+ * `stale()` says the text changed.
+ */
+export type AfterDiagnostics = (uri: string, stale: () => boolean) => Promise<void>;
+
 /** Registers pull diagnostics or sets up pushing, depending on the client. */
-export function registerDiagnostics(context: ServerContext): DiagnosticsFeature {
-  return context.clientFeatures().pullDiagnostics ? registerPull(context) : registerPush(context);
+export function registerDiagnostics(context: ServerContext, after: AfterDiagnostics = () => Promise.resolve()): DiagnosticsFeature {
+  return context.clientFeatures().pullDiagnostics ? registerPull(context, after) : registerPush(context, after);
 }
 
 /**
@@ -170,24 +175,7 @@ function rankOf(finding: Finding): number {
   return SEVERITY_RANK[finding.severity] ?? SEVERITY_RANK.information;
 }
 
-/** The species whose hover cards were written ahead, per open document. */
-function preparedCards(): { preparedFor(uri: string): Set<string>; forget(uri: string): void } {
-  const prepared = new Map<string, Set<string>>();
-  return {
-    preparedFor(uri) {
-      let species = prepared.get(uri);
-      if (!species) {
-        species = new Set();
-        prepared.set(uri, species);
-      }
-      return species;
-    },
-    forget: (uri) => void prepared.delete(uri),
-  };
-}
-
-function registerPull(context: ServerContext): DiagnosticsFeature {
-  const { preparedFor, forget } = preparedCards();
+function registerPull(context: ServerContext, after: AfterDiagnostics): DiagnosticsFeature {
   const empty: DocumentDiagnosticReport = { kind: DocumentDiagnosticReportKind.Full, items: [] };
   // The result depends only on the text (its revision) and the settings; both are in the id.
   const resultIdOf = (revision: number): string => `${revision}:${context.settings.generation}`;
@@ -201,13 +189,13 @@ function registerPull(context: ServerContext): DiagnosticsFeature {
       if (!current) return empty;
       // Once the answer has gone out, hover cards are written while the editor is quiet.
       const stale = (): boolean => context.cache.revisionOf(uri) !== current.revision;
-      setImmediate(() => void prepareHoverCards(context, uri, preparedFor(uri), stale).catch(() => undefined));
+      setImmediate(() => void after(uri, stale).catch(() => undefined));
       return { kind: DocumentDiagnosticReportKind.Full, resultId: resultIdOf(current.revision), items: current.items };
     }),
   );
   return {
     documentChanged: () => undefined,
-    documentClosed: forget,
+    documentClosed: () => undefined,
     settingsChanged() {
       if (context.clientFeatures().diagnosticRefresh) {
         context.connection.languages.diagnostics.refresh().catch(() => undefined);
@@ -216,8 +204,7 @@ function registerPull(context: ServerContext): DiagnosticsFeature {
   };
 }
 
-function registerPush(context: ServerContext): DiagnosticsFeature {
-  const { preparedFor, forget } = preparedCards();
+function registerPush(context: ServerContext, after: AfterDiagnostics): DiagnosticsFeature {
   const timers = new Map<string, NodeJS.Timeout>();
 
   const publish = async (uri: string): Promise<void> => {
@@ -232,7 +219,7 @@ function registerPush(context: ServerContext): DiagnosticsFeature {
       if (!now || context.cache.revisionOf(uri) !== requestedRevision) return;
       if (current && current.revision !== requestedRevision) return;
       await context.connection.sendDiagnostics({ uri, version: now.version, diagnostics: current?.items ?? [] });
-      await prepareHoverCards(context, uri, preparedFor(uri), () => context.cache.revisionOf(uri) !== requestedRevision);
+      await after(uri, () => context.cache.revisionOf(uri) !== requestedRevision);
     } catch (error) {
       context.log.error(`lonepair: diagnostics for ${uri} failed: ${String(error)}`);
     }
@@ -249,7 +236,6 @@ function registerPush(context: ServerContext): DiagnosticsFeature {
   return {
     documentChanged: schedule,
     documentClosed(uri) {
-      forget(uri);
       clearTimeout(timers.get(uri));
       timers.delete(uri);
       context.connection.sendDiagnostics({ uri, diagnostics: [] }).catch(() => undefined);

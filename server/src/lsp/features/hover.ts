@@ -1,16 +1,51 @@
 /**
  * Hover: the species under the cursor, found among the model's occurrences, shown as a card.
+ * Cards are kept in a bounded memo and written ahead, once a document's analysis is done, for
+ * the species it names (those in view first), so the first hover on a species is as quick as
+ * the next.
  */
 import { MarkupKind, type Hover, type HoverParams } from "vscode-languageserver";
-import { analyzeOccurrenceSafely, reactionAtOffset, reactionCard, resultMarkdown } from "../../../../shared/src/index";
+import {
+  analyzeOccurrenceSafely,
+  createHoverCardMemo,
+  reactionAtOffset,
+  reactionCard,
+  type HoverCardMemo,
+  type SpeciesOccurrence,
+} from "../../../../shared/src/index";
 import type { Finding, TextRange } from "../core";
+import type { AnalysedDocument } from "../documentCache";
 import { guarded } from "../guardedHandler";
 import { isLargeSmiles, type OffThreadSpecies } from "../offThreadSpecies";
 import { lspRange } from "../ranges";
 import { enabledDocument, type ServerContext } from "../serverContext";
 
-/** Registers the hover handler. */
-export function registerHover(context: ServerContext, offThread: OffThreadSpecies): void {
+/** What the rest of the server tells the hover feature. */
+export interface HoverFeature {
+  /**
+   * Writes ahead, between other requests, the cards of the species in `uri`'s analysed text, those
+   * in view first; gives up as soon as `stale()` says the text changed or a newer pass starts.
+   */
+  prepare(uri: string, stale: () => boolean): Promise<void>;
+  /** The editor shows `start`..`end` of `uri` (an inlay hint request says so): its species come first. */
+  viewed(uri: string, start: number, end: number): void;
+  /** Forgets a closed document. */
+  closed(uri: string): void;
+}
+
+/** Distinct species whose cards one pass writes ahead: with cards of 5,000-20,000 characters, they fit the memo. */
+const PREPARED_CARDS_LIMIT = 200;
+/** Around a hovered position, this many characters either side count as in view. */
+const HOVER_VIEW_CHARACTERS = 2_000;
+
+/** Registers the hover handler; `cards` defaults to a memo of its own. */
+export function registerHover(
+  context: ServerContext,
+  offThread: OffThreadSpecies,
+  cards: HoverCardMemo = createHoverCardMemo(),
+): HoverFeature {
+  const inView = new Map<string, TextRange>();
+  const passes = new Map<string, number>();
   context.connection.onHover(
     guarded<HoverParams, Hover | null>(context.log, "hover", null, async (params, token) => {
       const enabled = await enabledDocument(context, params.textDocument.uri);
@@ -19,67 +54,85 @@ export function registerHover(context: ServerContext, offThread: OffThreadSpecie
       const offset = document.offsetAt(params.position);
       // The card is written in the format the client asked for, not merely labelled with it.
       const format = context.clientFeatures().hoverFormat;
+      const kind = format === "markdown" ? MarkupKind.Markdown : MarkupKind.PlainText;
       // Read from the rows or blocks around the position, not the whole model.
       const reaction = reactionAtOffset(analysed.modelAround(offset, offset), offset);
       if (reaction) {
-        return {
-          contents: { kind: format === "markdown" ? MarkupKind.Markdown : MarkupKind.PlainText, value: reactionCard(reaction, format) },
-          range: lspRange(document, reaction.arrow.range),
-        };
+        return { contents: { kind, value: reactionCard(reaction, format) }, range: lspRange(document, reaction.arrow.range) };
       }
       const species = analysed.speciesAt(offset);
       if (!species) return null;
+      // Where the user looks: the next pass writes the cards around here first.
+      inView.set(document.uri, aroundHover(offset));
       const result = species.analysis;
       const options = { angleDecimals: settings.angleDecimals, format };
-      // A large SMILES species' card (its polarity needs the 3D model) is written on a worker
-      // thread, so that other requests are answered meanwhile.
-      const answer =
-        result.ok && isLargeSmiles(result.value)
-          ? await offThread.run({ kind: "card", smiles: result.value.reading.text, options }, token)
-          : undefined;
-      if (answer?.kind === "cancelled") return null;
-      const written = answer?.kind === "done" ? answer.value : undefined;
       const alsoAProblem =
         !result.ok && isReported(analysed.findingsAround(species.range.start, species.range.end), species.range, result.problem.message);
-      const value = written ?? resultMarkdown(species.text, result, options, { alsoAProblem });
-      return {
-        contents: { kind: format === "markdown" ? MarkupKind.Markdown : MarkupKind.PlainText, value },
-        range: lspRange(document, species.range),
-      };
+      const problemOptions = { alsoAProblem };
+      let value = cards.known(species.text, result, options, problemOptions);
+      if (value === undefined && result.ok && isLargeSmiles(result.value)) {
+        // A large SMILES species' card (its polarity needs the 3D model) is written on a worker
+        // thread, so that other requests are answered meanwhile.
+        const answer = await offThread.run({ kind: "card", smiles: result.value.reading.text, options }, token);
+        if (answer.kind === "cancelled") return null;
+        if (answer.kind === "done" && answer.value !== undefined) {
+          value = answer.value;
+          cards.remember(species.text, result, options, value, problemOptions);
+        }
+      }
+      value ??= cards.card(species.text, result, options, problemOptions);
+      return { contents: { kind, value }, range: lspRange(document, species.range) };
     }),
   );
+
+  return {
+    async prepare(uri, stale) {
+      const pass = (passes.get(uri) ?? 0) + 1;
+      passes.set(uri, pass);
+      const superseded = (): boolean => stale() || passes.get(uri) !== pass;
+      const enabled = await enabledDocument(context, uri);
+      if (!enabled || superseded()) return;
+      const { analysed, settings } = enabled;
+      const options = { angleDecimals: settings.angleDecimals, format: context.clientFeatures().hoverFormat };
+      const seen = new Set<string>();
+      for (const occurrence of occurrencesInViewFirst(analysed, inView.get(uri))) {
+        if (seen.size >= PREPARED_CARDS_LIMIT) break;
+        if (seen.has(occurrence.text)) continue;
+        seen.add(occurrence.text);
+        const result = analyzeOccurrenceSafely(occurrence);
+        // Large SMILES species get their cards on the worker thread when hovered; a plain
+        // refusal's card is a sentence, quick to write when asked.
+        if (result.ok ? isLargeSmiles(result.value) : !result.parts) continue;
+        if (cards.known(occurrence.text, result, options) !== undefined) continue;
+        cards.card(occurrence.text, result, options);
+        // One card at a time: a request or an edit that came meanwhile goes first.
+        await new Promise((resolve) => setImmediate(resolve));
+        if (superseded()) return;
+      }
+    },
+    viewed(uri, start, end) {
+      inView.set(uri, { start, end });
+    },
+    closed(uri) {
+      inView.delete(uri);
+      passes.delete(uri);
+    },
+  };
 }
 
-/** Distinct species whose cards are written ahead of hovers, per document version. */
-const PREPARED_CARDS_LIMIT = 2000;
-/** How long card preparation runs before it lets requests in. */
-const PREPARE_SLICE_MS = 4;
-
-/**
- * Writes, a few at a time between other requests, the hover card of each distinct species of a
- * document whose analysis is done, so that the first hover on a species costs no more than the
- * next (the card's 3D model is remembered with its analysis). `prepared` holds the species done
- * for this document already. Tables are left out: their models are read only around the rows
- * asked about. Gives up as soon as `stale()` says the text changed.
- */
-export async function prepareHoverCards(context: ServerContext, uri: string, prepared: Set<string>, stale: () => boolean): Promise<void> {
-  const enabled = await enabledDocument(context, uri);
-  if (!enabled) return;
-  const options = { angleDecimals: enabled.settings.angleDecimals, format: context.clientFeatures().hoverFormat };
-  let sliceStart = performance.now();
-  for (const occurrence of enabled.analysed.distinctSpecies()) {
-    if (prepared.size >= PREPARED_CARDS_LIMIT) return;
-    if (prepared.has(occurrence.text)) continue;
-    prepared.add(occurrence.text);
-    const result = analyzeOccurrenceSafely(occurrence);
-    // Large SMILES species get their cards on the worker thread when hovered.
-    if (!result.ok || isLargeSmiles(result.value)) continue;
-    resultMarkdown(occurrence.text, result, options, { alsoAProblem: false });
-    if (performance.now() - sliceStart < PREPARE_SLICE_MS) continue;
-    await new Promise((resolve) => setImmediate(resolve));
-    if (stale()) return;
-    sliceStart = performance.now();
+/** The occurrences in the range the editor shows (when known), then one of each distinct species in the document. */
+function* occurrencesInViewFirst(analysed: AnalysedDocument, view: TextRange | undefined): Generator<SpeciesOccurrence> {
+  if (view) {
+    for (const occurrence of analysed.modelAround(view.start, view.end).occurrences) {
+      if (occurrence.range.end >= view.start && occurrence.range.start <= view.end) yield occurrence;
+    }
   }
+  // Tables have none here: their models are read only around the rows asked about.
+  yield* analysed.distinctSpecies();
+}
+
+function aroundHover(offset: number): TextRange {
+  return { start: Math.max(0, offset - HOVER_VIEW_CHARACTERS), end: offset + HOVER_VIEW_CHARACTERS };
 }
 
 /** Whether the editor already shows `message` as a problem on `range` (the hover then need not repeat it). */

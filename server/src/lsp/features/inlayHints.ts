@@ -8,16 +8,22 @@ import { HOVER_CAUTION, geometryHints, isProseKind, type DocumentKind } from "..
 import { guarded } from "../guardedHandler";
 import { offsetRange } from "../ranges";
 import { enabledDocument, type ServerContext } from "../serverContext";
+import type { HoverFeature } from "./hover";
 import type { ServerSettings } from "../settings";
 
-/** Registers the inlay hint handler (only called when the client supports inlay hints). */
-export function registerInlayHints(context: ServerContext): void {
+/**
+ * Registers the inlay hint handler (only called when the client supports inlay hints). The range
+ * asked for is the part of the document in view, which `view` is told of.
+ */
+export function registerInlayHints(context: ServerContext, view?: Pick<HoverFeature, "viewed">): void {
   context.connection.languages.inlayHint.on(
     guarded<InlayHintParams, InlayHint[]>(context.log, "inlay hints", [], async (params, token) => {
       const enabled = await enabledDocument(context, params.textDocument.uri);
-      if (!enabled || !hintsWanted(enabled.analysed.kind, enabled.settings)) return [];
+      if (!enabled) return [];
       const { document, analysed } = enabled;
       const range = offsetRange(document, params.range);
+      view?.viewed(document.uri, range.start, range.end);
+      if (!hintsWanted(analysed.kind, enabled.settings)) return [];
       const hints = geometryHints(
         document.getText(),
         analysed.modelAround(range.start, range.end),
