@@ -71,12 +71,19 @@ function groupsOf(tokens: readonly EquationToken[]): (Word[] | undefined)[] {
 /**
  * Both sides written in formulas, and an equation beyond doubt: a "+" or a coefficient, or (for
  * an arrow) a line that is nothing but the equation. "grade B → grade A" and "C → D" are not.
+ * A half-reaction counts too: electrons and an ion or formula beside a bare element ("Fe → Fe³⁺ + 3e⁻").
  */
 function clearlyAnEquation(left: readonly ReactionTerm[], right: readonly ReactionTerm[], wholeLine: boolean): boolean {
-  if (!left.some(looksLikeFormula) || !right.some(looksLikeFormula)) return false;
+  if (!(left.some(looksLikeFormula) && right.some(looksLikeFormula)) && !isHalfReaction(left, right)) return false;
   const terms = [...left, ...right];
   const counted = left.length + right.length > 2 || terms.some((term) => term.coefficient.written !== undefined);
   return counted || wholeLine;
+}
+
+/** Electrons on one side, and a species written as a formula (not only a bare symbol) besides them. */
+function isHalfReaction(left: readonly ReactionTerm[], right: readonly ReactionTerm[]): boolean {
+  const terms = [...left, ...right];
+  return terms.some((term) => term.electron) && terms.some((term) => !term.electron && looksLikeFormula(term));
 }
 
 function reactionOf(text: string, notation: ReactionNotation, arrow: Arrow, left: ReactionTerm[], right: ReactionTerm[]): Reaction {
