@@ -49,12 +49,13 @@ export {
 } from "./document/tables/delimitedFindings";
 export type { DelimitedRowMemo } from "./document/tables/delimitedFindings";
 export type * from "./document/types";
+export { editsOfFix, movedFix, shiftedFix } from "./document/fixEdits";
 
 // Equations: reading them, balancing them, and what the checks say about them.
 export type * from "./document/reactions/reactionTypes";
 export { readWholeEquation, equationsInLine } from "./document/reactions/readEquation";
 export { equationsInProse } from "./document/reactions/proseEquations";
-export { judgeReaction, rewrittenWithCoefficients, imbalanceText, termsOf } from "./document/reactions/judgeReaction";
+export { judgeReaction, rewrittenWithCoefficients, coefficientEdits, imbalanceText, termsOf } from "./document/reactions/judgeReaction";
 export { reactionFinding, reactionFindings, REACTION_CODES } from "./document/reactions/reactionFindings";
 export { oxidationStatesOf, oxidationStatesText, formatOxidationState } from "./chemistry/redox/oxidationStates";
 export type { ElementOxidationStates, OxidationStates } from "./chemistry/redox/oxidationStates";

@@ -8,7 +8,15 @@ import { readdirSync, readFileSync, statSync } from "node:fs";
 import { join, relative } from "node:path";
 import fc from "fast-check";
 import { describe, expect, it } from "vitest";
-import { analyzeDocument, checkDocument, documentKindFor, type DocumentKind, type Finding } from "../../shared/src/index";
+import {
+  analyzeDocument,
+  checkDocument,
+  documentKindFor,
+  type DocumentKind,
+  type DocumentModel,
+  type Finding,
+  type TextFix,
+} from "../../shared/src/index";
 import { stripLabels } from "./labelledText";
 
 const ROOT = join(__dirname, "..", "..");
@@ -111,23 +119,57 @@ function errorKey(text: string, finding: Finding, at: number): string {
 }
 
 /**
+ * Where an equation's fix may write: each term's coefficient slot, from its written coefficient
+ * (or, when none is written, the species' start) up to the species, and nothing else.
+ */
+function coefficientSlots(model: DocumentModel, finding: Finding): readonly { start: number; end: number }[] {
+  const reaction = model.reactions?.find((candidate) => candidate.arrow.range.start === finding.range.start);
+  if (!reaction || !finding.code.startsWith("equation-")) return [];
+  return [...reaction.left, ...reaction.right].map((term) => ({
+    start: term.coefficient.written?.start ?? term.speciesRange.start,
+    end: term.speciesRange.start,
+  }));
+}
+
+/** Why the edits of `fix` are not one coherent change inside `allowed` ranges, or undefined. */
+function editProblem(text: string, fix: TextFix, allowed: readonly { start: number; end: number }[]): string | undefined {
+  const edits = fix.edits ?? [{ range: fix.range, newText: fix.newText }];
+  let previousEnd = -1;
+  let rebuilt = "";
+  for (const edit of edits) {
+    if (edit.range.start < previousEnd) return "edits overlap or are out of order";
+    if (!allowed.some((range) => edit.range.start >= range.start && edit.range.end <= range.end)) {
+      return `edit of "${text.slice(edit.range.start, edit.range.end)}" reaches outside its finding`;
+    }
+    rebuilt += text.slice(previousEnd < 0 ? fix.range.start : previousEnd, edit.range.start) + edit.newText;
+    previousEnd = edit.range.end;
+  }
+  if (edits[0].range.start !== fix.range.start || previousEnd !== fix.range.end) return "the fix's range is not its edits' span";
+  if (rebuilt !== fix.newText) return "the fix's text is not what its edits make";
+  return undefined;
+}
+
+/**
  * Applies each fix offered for `text` on its own and checks the outcome: only the fixed range
- * changed, the new text there is no error, and every error elsewhere was already there.
- * Returns a description of each violation.
+ * changed (an equation's fix only its coefficients, each edit inside one coefficient slot and
+ * writing nothing but a number), the new text there is no error, and every error elsewhere was
+ * already there. Returns a description of each violation.
  */
 function fixViolations(text: string, kind: DocumentKind): string[] {
   const model = analyzeDocument(text, kind);
   const findings = checkDocument(model);
   const violations: string[] = [];
-  // An equation's finding sits on its arrow; its fix rewrites the coefficients, within the equation.
-  const reach = (finding: Finding): { start: number; end: number } =>
-    model.reactions?.find((reaction) => reaction.arrow.range.start === finding.range.start)?.range ?? finding.range;
   for (const finding of findings) {
     const fix = finding.fix;
     if (!fix) continue;
-    const allowed = reach(finding);
-    if (fix.range.start < allowed.start || fix.range.end > allowed.end) {
-      violations.push(`fix for ${finding.code} reaches outside its finding`);
+    const slots = coefficientSlots(model, finding);
+    const problem = editProblem(text, fix, slots.length > 0 ? slots : [finding.range]);
+    if (problem) {
+      violations.push(`fix for ${finding.code}: ${problem}`);
+      continue;
+    }
+    if (slots.length > 0 && (fix.edits ?? [fix]).some((edit) => !/^(?:[1-9]\d*\s?)?$/.test(edit.newText))) {
+      violations.push(`fix for ${finding.code} writes more than a coefficient`);
       continue;
     }
     const fixed = text.slice(0, fix.range.start) + fix.newText + text.slice(fix.range.end);
@@ -168,6 +210,21 @@ describe("applying a fix never creates an error", () => {
 
   it.each(documents.map((document) => [document.name, document] as const))("in %s", (_, document) => {
     expect(fixViolations(document.text, document.kind)).toEqual([]);
+  });
+
+  it.each<[string, string, DocumentKind]>([
+    // from memory: Zumdahl, Chemistry, ch. 3 (methane burns 1:2:1:2); two coefficients of 2 removed or kept
+    ["a coefficient deleted", "\\ce{2 CH4 + 2 O2 -> CO2 + 2 H2O}", "markdown"],
+    // from memory: Tro, Chemistry: A Molecular Approach, ch. 7 (4 Fe + 3 O2 -> 2 Fe2O3); a glued number replaced
+    ["a glued coefficient replaced", "Rust: 4Fe + 2O2 → 2Fe2O3", "plaintext"],
+    // from memory: Brown, LeMay & Bursten, ch. 3 (N2 + 3 H2 -> 2 NH3); replaced and inserted together
+    ["replaced and inserted", "3 H2 + N2 -> 3 NH3", "plaintext"],
+    // from memory: Zumdahl, ch. 18 (Fe -> Fe3+ + 3e-); an electron count replaced in a half-reaction
+    ["a half-reaction's electrons", "Fe -> Fe^3+ + 2e-", "plaintext"],
+  ])("an equation fix that %s touches only coefficients", (_, text, kind) => {
+    const fixes = checkDocument(analyzeDocument(text, kind)).filter((finding) => finding.fix);
+    expect(fixes.map((finding) => finding.code)).toEqual(["equation-unbalanced"]);
+    expect(fixViolations(text, kind)).toEqual([]);
   });
 
   // common practice: how formulas, names, abbreviations and words appear in lab documents; each

@@ -142,11 +142,18 @@ describe("equations that have no single answer", () => {
   });
 });
 
-/** Equation findings of a document as [code, text under the finding, fixed text or "-"]. */
+/** Equation findings of a document as [code, text under the finding, the equation after the fix or "-"]. */
 function equationFindings(text: string, kind: "markdown" | "plaintext" = "markdown"): [string, string, string][] {
-  return checkDocument(analyzeDocument(text, kind))
+  const model = analyzeDocument(text, kind);
+  return checkDocument(model)
     .filter((finding) => finding.code.startsWith("equation-"))
-    .map((finding) => [finding.code, text.slice(finding.range.start, finding.range.end), finding.fix?.newText ?? "-"]);
+    .map((finding) => {
+      const fix = finding.fix;
+      const equation = model.reactions?.find((reaction) => reaction.arrow.range.start === finding.range.start)?.range;
+      const fixed =
+        fix && equation ? text.slice(equation.start, fix.range.start) + fix.newText + text.slice(fix.range.end, equation.end) : "-";
+      return [finding.code, text.slice(finding.range.start, finding.range.end), fixed];
+    });
 }
 
 describe("documents: a finding on the arrow and a fix that touches only coefficients", () => {

@@ -75,6 +75,10 @@ describe("an unbalanced equation in a notebook", () => {
     const fix = actions.find((action) => action.kind === "quickfix");
     expect(fix?.title).toBe("Balance: 1, 8, 5, 1, 5, 4");
     const edits = (fix!.edit!.documentChanges ?? []).flatMap((change) => ("edits" in change ? change.edits : [])) as TextEdit[];
+    // One action, so one undo step; inside it one insertion per coefficient and nothing else.
+    expect(actions.filter((action) => action.kind === "quickfix")).toHaveLength(1);
+    expect(edits.map((edit) => edit.newText)).toEqual(["8 ", "5 ", "5 ", "4 "]);
+    expect(edits.every((edit) => edit.range.start.line === 6 && edit.range.start.character === edit.range.end.character)).toBe(true);
     const after = applyEdits(session.documents.get(URI)!, edits);
     // from memory: Zumdahl, Chemistry, ch. 18 (permanganate titration of iron(II))
     expect(after).toBe(TEXT.replace("MnO4- + H+ + Fe^2+ -> Mn^2+ + Fe^3+ + H2O", "MnO4- + 8 H+ + 5 Fe^2+ -> Mn^2+ + 5 Fe^3+ + 4 H2O"));

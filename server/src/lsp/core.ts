@@ -6,6 +6,7 @@ export { analyzeSpecies } from "../../../shared/src/index";
 export { analyzeDocument } from "../../../shared/src/index";
 export { documentKindFor } from "../../../shared/src/index";
 export { checkDocument } from "../../../shared/src/index";
+export { editsOfFix } from "../../../shared/src/index";
 export type { AnalysisResult, SpeciesAnalysis, TextRange } from "../../../shared/src/index";
 export type {
   DocumentKind,
@@ -14,5 +15,6 @@ export type {
   FindingSeverity,
   SpeciesOccurrence,
   TableRecord,
+  FixEdit,
   TextFix,
 } from "../../../shared/src/index";

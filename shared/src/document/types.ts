@@ -60,12 +60,26 @@ export interface TableRecord {
 
 export type FindingSeverity = "error" | "warning" | "information" | "hint";
 
+/** One replacement of a fix: `range` becomes `newText`. */
+export interface FixEdit {
+  readonly range: TextRange;
+  readonly newText: string;
+}
+
 /** A replacement that fixes a finding: only the offending token or cell. */
 export interface TextFix {
+  /** The whole stretch the fix changes (from its first edit to its last). */
   readonly range: TextRange;
+  /** What `range` holds after the fix. */
   readonly newText: string;
   /** Short title for the quick fix, e.g. "Change to 26". */
   readonly title: string;
+  /**
+   * The same change as the smallest separate edits (in order, not overlapping, inside `range`),
+   * when it touches pieces apart from each other: an equation's coefficients. Edges that apply
+   * a fix apply these, all together as one change.
+   */
+  readonly edits?: readonly FixEdit[];
 }
 
 /** A problem or note about a document: the core's diagnostic, free of protocol types. */

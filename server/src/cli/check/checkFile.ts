@@ -3,9 +3,9 @@
  * (written atomically, or shown as a diff in a dry run). Findings that remain after fixing are
  * placed in the fixed text.
  */
-import { memoisedReader } from "../../../../shared/src/index";
+import { editsOfFix, memoisedReader, movedFix } from "../../../../shared/src/index";
 import { delimitedRowMemo } from "../../../../shared/src/index";
-import type { Finding, TextFix } from "../../../../shared/src/index";
+import type { Finding } from "../../../../shared/src/index";
 import { batchModel } from "../documents/batchModel";
 import { readDocument, type DocumentBatch, type ResumeAt } from "../documents/documentBatches";
 import type { DocumentFile } from "../../files/findDocuments";
@@ -91,7 +91,8 @@ export async function checkFile(file: DocumentFile, options: CheckOptions, outpu
       } else {
         const findings = model.findings();
         const { fixed, remaining } = chooseFixes(batch.text, findings);
-        const fixes = fixed.map((finding) => finding.fix);
+        // A fix of several edits (an equation's coefficients) is applied edit by edit.
+        const fixes = fixed.flatMap((finding) => editsOfFix(finding.fix).map((edit) => ({ ...edit, title: finding.fix.title })));
         const fixedText = applyFixes(batch.text, fixes);
         if (options.dryRun && fixes.length > 0) {
           if (!headerWritten) outputs.writeDiff(diffHeader(terminalSafe(file.displayPath)));
@@ -99,7 +100,7 @@ export async function checkFile(file: DocumentFile, options: CheckOptions, outpu
           outputs.writeDiff(diffHunks(batch.text, batch.lines, fixes, lineShift).text);
         }
         await writer?.add(batch.byteOffset, batch.text, fixedText, fixes.length > 0);
-        fixedHere += fixes.length;
+        fixedHere += fixed.length;
         let lines: LineIndex = batch.lines;
         let reported: readonly Finding[] = remaining;
         if (fixes.length > 0) {
@@ -152,6 +153,5 @@ function movedLines(batch: DocumentBatch, fixedText: string, lineShift: number):
 function movedFinding(finding: Finding, moved: (offset: number) => number): Finding {
   const range = { start: moved(finding.range.start), end: moved(finding.range.end) };
   if (!finding.fix) return { ...finding, range };
-  const fix: TextFix = { ...finding.fix, range: { start: moved(finding.fix.range.start), end: moved(finding.fix.range.end) } };
-  return { ...finding, range, fix };
+  return { ...finding, range, fix: movedFix(finding.fix, moved) };
 }

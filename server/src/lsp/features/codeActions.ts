@@ -11,7 +11,7 @@ import {
   type WorkspaceEdit,
 } from "vscode-languageserver";
 import type { TextDocument } from "vscode-languageserver-textdocument";
-import type { DocumentModel, Finding, TextFix, TextRange } from "../core";
+import { editsOfFix, type DocumentModel, type Finding, type FixEdit, type TextFix, type TextRange } from "../core";
 import type { AnalysedDocument } from "../documentCache";
 import { guarded } from "../guardedHandler";
 import { lspRange, offsetRange, rangesTouch, rangeWithin } from "../ranges";
@@ -82,7 +82,7 @@ function fixAllEdit(context: ServerContext, document: TextDocument, analysed: An
   return workspaceEdit(
     context,
     document,
-    tableFixesOf(analysed).map((fix) => textEdit(document, fix)),
+    tableFixesOf(analysed).flatMap((fix) => editsOfFix(fix).map((edit) => textEdit(document, edit))),
   );
 }
 
@@ -114,7 +114,12 @@ function quickFix(
     kind: CodeActionKind.QuickFix,
     diagnostics: matching.length > 0 ? matching : [own],
     isPreferred: true,
-    edit: workspaceEdit(context, document, [textEdit(document, fix)]),
+    // A fix of several edits (an equation's coefficients) is one workspace edit: one undo step.
+    edit: workspaceEdit(
+      context,
+      document,
+      editsOfFix(fix).map((edit) => textEdit(document, edit)),
+    ),
   };
 }
 
@@ -158,8 +163,8 @@ function insideSomeCell(range: TextRange, sortedCells: readonly TextRange[]): bo
   return candidate >= 0 && rangeWithin(range, sortedCells[candidate]);
 }
 
-function textEdit(document: TextDocument, fix: TextFix): TextEdit {
-  return { range: lspRange(document, fix.range), newText: fix.newText };
+function textEdit(document: TextDocument, edit: FixEdit): TextEdit {
+  return { range: lspRange(document, edit.range), newText: edit.newText };
 }
 
 /** Versioned document changes where the client takes them, so a stale edit is refused. */

@@ -4,6 +4,7 @@
  */
 import { balanceEquation, lineDiffers, CHARGE_LABEL, type BalanceLine, type BalanceVerdict } from "../../chemistry/reactions/balance";
 import { formatFraction, fraction, type Fraction } from "../../chemistry/reactions/rational";
+import type { FixEdit } from "../types";
 import type { Reaction, ReactionTerm } from "./reactionTypes";
 
 /** Every term of the equation, left side first, in written order. */
@@ -29,26 +30,44 @@ export function judgeReaction(reaction: Reaction): BalanceVerdict {
 }
 
 /**
- * The equation's text with `coefficients` (one per term, in written order) in place of the
- * written ones; everything between the coefficients is kept as it was. A coefficient of 1 is
- * not written.
+ * The smallest edits that put `coefficients` (one per term, in written order) in place of the
+ * written ones, in document order: a written number is replaced, a coefficient of 1 is deleted
+ * with the space after it, a new one is inserted before its species (glued when the writer glues
+ * them). Nothing else in the equation changes.
  */
-export function rewrittenWithCoefficients(reaction: Reaction, coefficients: readonly bigint[]): string {
+export function coefficientEdits(reaction: Reaction, coefficients: readonly bigint[]): FixEdit[] {
   const terms = termsOf(reaction);
   const glued = terms.some((term) => term.coefficient.glued) && !terms.some((term) => term.coefficient.written && !term.coefficient.glued);
   const base = reaction.range.start;
-  let text = "";
-  let copied = 0;
+  const edits: FixEdit[] = [];
   terms.forEach((term, index) => {
     const wanted = coefficients[index];
     const written = term.coefficient.written;
-    // The old coefficient runs from its start up to the species; the gap after it goes too.
-    const from = (written?.start ?? term.speciesRange.start) - base;
-    const to = term.speciesRange.start - base;
-    text += reaction.text.slice(copied, from);
-    if (wanted !== 1n) text += glued ? String(wanted) : `${wanted} `;
-    copied = to;
+    if (!written) {
+      if (wanted !== 1n)
+        edits.push({
+          range: { start: term.speciesRange.start, end: term.speciesRange.start },
+          newText: glued ? String(wanted) : `${wanted} `,
+        });
+    } else if (wanted === 1n) {
+      // The old coefficient runs up to the species; the gap after it goes too.
+      edits.push({ range: { start: written.start, end: term.speciesRange.start }, newText: "" });
+    } else if (reaction.text.slice(written.start - base, written.end - base) !== String(wanted)) {
+      edits.push({ range: written, newText: String(wanted) });
+    }
   });
+  return edits;
+}
+
+/** The equation's text with `coefficients` in place of the written ones (see `coefficientEdits`). */
+export function rewrittenWithCoefficients(reaction: Reaction, coefficients: readonly bigint[]): string {
+  const base = reaction.range.start;
+  let text = "";
+  let copied = 0;
+  for (const edit of coefficientEdits(reaction, coefficients)) {
+    text += reaction.text.slice(copied, edit.range.start - base) + edit.newText;
+    copied = edit.range.end - base;
+  }
   return text + reaction.text.slice(copied);
 }
 

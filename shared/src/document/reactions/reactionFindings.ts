@@ -6,7 +6,8 @@
 import type { AnalysisResult } from "../../chemistry/types";
 import { severityOf } from "../findingSeverity";
 import type { Finding } from "../types";
-import { imbalanceText, judgeReaction, rewrittenWithCoefficients, termsOf } from "./judgeReaction";
+import { fixOfEdits, shiftedFix } from "../fixEdits";
+import { coefficientEdits, imbalanceText, judgeReaction, rewrittenWithCoefficients, termsOf } from "./judgeReaction";
 import type { Reaction } from "./reactionTypes";
 
 /** Stable codes of the equation findings. */
@@ -41,7 +42,7 @@ const MEMO_LIMIT = 10_000;
 function movedFinding(finding: Finding, by: number): Finding {
   if (by === 0) return finding;
   const range = { start: finding.range.start + by, end: finding.range.end + by };
-  const fix = finding.fix && { ...finding.fix, range: { start: finding.fix.range.start + by, end: finding.fix.range.end + by } };
+  const fix = finding.fix && shiftedFix(finding.fix, by);
   return fix ? { ...finding, range, fix } : { ...finding, range };
 }
 
@@ -63,12 +64,15 @@ export function reactionFinding(reaction: Reaction): Finding | undefined {
       return undefined;
     case "unbalanced": {
       const newText = rewrittenWithCoefficients(reaction, verdict.coefficients);
+      // Only the coefficients change: one edit each, applied together as one change.
+      const edits = coefficientEdits(reaction, verdict.coefficients);
+      const fix = fixOfEdits(reaction.text, reaction.range.start, edits, `Balance: ${verdict.coefficients.join(", ")}`);
       return {
         range,
         severity: "error",
         code: REACTION_CODES.unbalanced,
         message: `Equation not balanced: ${imbalanceText(verdict.sheet)}. Balanced: ${newText}`,
-        fix: { range: reaction.range, newText, title: `Balance: ${verdict.coefficients.join(", ")}` },
+        ...(fix && { fix }),
       };
     }
     case "not-unique":

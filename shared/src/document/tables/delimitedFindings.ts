@@ -11,6 +11,7 @@
  */
 import { analyzeDocument } from "../analyzeDocument";
 import { checkDocument } from "../checkDocument";
+import { shiftedFix } from "../fixEdits";
 import { memoisedReader, type SpeciesReader } from "../speciesReader";
 import type { Finding } from "../types";
 import { delimitedRowExtent, sniffDelimiter } from "./csv";
@@ -247,6 +248,5 @@ function documentFindings(text: string, kind: "csv" | "tsv", delimiter: string, 
 export function moved(finding: Finding, by: number): Finding {
   const range = { start: finding.range.start + by, end: finding.range.end + by };
   if (!finding.fix) return { ...finding, range };
-  const fix = { ...finding.fix, range: { start: finding.fix.range.start + by, end: finding.fix.range.end + by } };
-  return { ...finding, range, fix };
+  return { ...finding, range, fix: shiftedFix(finding.fix, by) };
 }
