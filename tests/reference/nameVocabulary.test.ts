@@ -100,6 +100,9 @@ const TRADE_NAMES: readonly Row[] = [
   ["borax", "Na2B4O17H20"],
   ["gypsum", "CaSO6H4"],
   ["sulfurous anhydride", "SO2"],
+  ["calcium carbide", "CaC2"],
+  ["lithium aluminium hydride", "LiAlH4"],
+  ["lithium aluminum hydride", "LiAlH4"],
 ];
 
 // from memory: mineral names and their formulas (a mineralogy handbook)
@@ -284,10 +287,12 @@ const IONS: readonly Row[] = [
   ["oxalate", "C2O4", -2],
   ["peroxide", "O2", -2],
   ["superoxide", "O2", -1],
+  ["acetylide", "C2", -2],
   ["borate", "BO3", -3],
   ["tetrafluoroborate", "BF4", -1],
   ["tetrahydroborate", "BH4", -1],
   ["borohydride", "BH4", -1],
+  ["tetrahydroaluminate", "AlH4", -1],
   ["hexafluorophosphate", "PF6", -1],
   ["hexafluorosilicate", "SiF6", -2],
   ["hexafluoroantimonate", "SbF6", -1],

@@ -284,7 +284,9 @@ describe("formulas that are not plainly salts are not forced into ions", () => {
     ["NH4+", "ok", "ammonium on its own is the ion"],
     ["TiCl4", "transition-metal-centre", "a molecular transition-metal halide"],
     ["[Fe(CN)6]4-", "transition-metal-centre", "a complex ion, not a salt"],
-    ["CaC2", "ionic-solid", "carbide C2 2- is not a listed ion: still ionic, but not split"],
+    ["CrO2", "transition-metal-centre", "chromium(IV) oxide: Cr4+ is not a usual ion charge, and it is no peroxide"],
+    ["SnCl4", "ok", "tin(IV) chloride is a tetrahedral molecular liquid"],
+    ["HgCl2", "ok", "mercury(II) chloride is a linear molecule"],
   ])("%s", (input, expected, why) => {
     const result = analyzeSpecies(input);
     if (expected === "ok") {

@@ -7,7 +7,7 @@
 import { elementBySymbol } from "../elements";
 import { chargeText } from "../reader/chargeText";
 import type { AnalysisResult, Problem, SpeciesPart, SpeciesReading } from "../types";
-import { metalIonCharges } from "./metalIonCharges";
+import { metalIonCharges, takesStockNumeral } from "./metalIonCharges";
 import { partShapeText, partsListText } from "./partShapes";
 import { saltIons, type SaltIon } from "./saltIons";
 import { readFormulaSpan } from "../reader/readFormula";
@@ -38,11 +38,21 @@ export function saltAnalysis(reading: SpeciesReading, analyze: AnalyzeText): Ana
 
 /**
  * "ammonium hydrogen carbonate", "copper(II) sulfate": cation names then the anion's, with a Stock
- * numeral for a metal that has more than one usual charge; undefined when a name is not known.
+ * numeral for a metal that has more than one usual charge ("iron(II,III) oxide" for a metal in
+ * two); undefined when a name is not known.
  */
 function saltName(ions: readonly SaltIon[]): string | undefined {
   const words: string[] = [];
-  for (const ion of ions) {
+  for (let k = 0; k < ions.length; k++) {
+    const ion = ions[k];
+    const next = ions[k + 1];
+    if (ion.monatomic && next?.role === "cation" && symbolOf(next) === symbolOf(ion)) {
+      const element = elementBySymbol(symbolOf(ion));
+      if (element === undefined) return undefined;
+      words.push(`${element.name}(${ROMAN[ion.charge]},${ROMAN[next.charge]})`);
+      k++;
+      continue;
+    }
     const word = ion.monatomic ? monatomicIonName(ion) : ionNameFor(ion.formula);
     if (word === undefined) return undefined;
     words.push(word);
@@ -50,12 +60,16 @@ function saltName(ions: readonly SaltIon[]): string | undefined {
   return words.join(" ");
 }
 
+function symbolOf(ion: SaltIon): string {
+  return ion.formula.slice(0, ion.formula.indexOf("^"));
+}
+
 function monatomicIonName(ion: SaltIon): string | undefined {
-  const symbol = ion.formula.slice(0, ion.formula.indexOf("^"));
+  const symbol = symbolOf(ion);
   if (ion.role === "anion") return ANION_ROOTS.find((root) => root.symbol === symbol && root.charge === ion.charge)?.root;
   const element = elementBySymbol(symbol);
   if (element === undefined) return undefined;
-  return metalIonCharges(symbol).length > 1 ? `${element.name}(${ROMAN[ion.charge] ?? ion.charge})` : element.name;
+  return takesStockNumeral(symbol) ? `${element.name}(${ROMAN[ion.charge] ?? ion.charge})` : element.name;
 }
 
 const ROMAN: readonly string[] = ["", "I", "II", "III", "IV", "V", "VI", "VII", "VIII"];

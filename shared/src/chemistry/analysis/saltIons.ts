@@ -1,9 +1,18 @@
 /**
  * Which ions a neutral formula is made of, decided by chemistry: a metal, ammonium or phosphonium
- * cation, then a known polyatomic anion (or a halide, oxide, sulfide... after a metal of groups 1
- * and 2, ammonium or phosphonium), with charges that balance in exactly one way. NH4Cl is NH4+
- * and Cl-; (NH4)2SO4 is two NH4+ and SO4 2-; K2Cr2O7 is two K+ and Cr2O7 2-. A formula that fits
- * no such reading, or fits it in two ways, is not split: it is left to the molecular path.
+ * cation, then a known polyatomic anion (or a single-element anion where the two make an ionic
+ * lattice: a halide, oxide, sulfide... after a metal of groups 1 and 2, ammonium or phosphonium;
+ * an oxide or sulfide after any listed metal), with charges that balance in exactly one way.
+ * NH4Cl is NH4+ and Cl-; (NH4)2SO4 is two NH4+ and SO4 2-; K2Cr2O7 is two K+ and Cr2O7 2-;
+ * MnO2 is Mn4+ and two O2-. A formula that fits no such reading, or fits it in two ways, is not
+ * split: it is left to the molecular path.
+ *
+ * Two readings of one formula are settled by one rule: an anion of one element bonded to itself
+ * (peroxide O2 2-, disulfide S2 2-, acetylide C2 2-) is read only where the metal's usual charges
+ * balance no single-atom anion. MnO2 and PbO2 are dioxides (Mn4+, Pb4+); BaO2 can only be Ba2+
+ * and peroxide, FeS2 only Fe2+ and disulfide. A metal with two neighbouring usual charges and a
+ * single-atom anion that neither balances alone is read as a mixed-valence lattice: Fe3O4 is one
+ * Fe2+, two Fe3+ and four O2-.
  */
 import { chargeText } from "../reader/chargeText";
 import { readFormulaBody } from "../reader/formulaBody";
@@ -11,7 +20,7 @@ import { ANION_ROOTS } from "../reader/names/anionRoots";
 import { ION_NAMES } from "../reader/names/ionNames";
 import type { FormulaPart, SpeciesReading } from "../types";
 import { compositionKey } from "../vsepr/measuredAngles";
-import { formsIonicBinarySalts, metalIonCharges } from "./metalIonCharges";
+import { formsIonicBinarySalts, formsIonicLattice, metalIonCharges } from "./metalIonCharges";
 
 /** One ion of a salt with its count in one formula unit. */
 export interface SaltIon {
@@ -38,8 +47,8 @@ interface CationChoice {
   readonly count: number;
   readonly charges: readonly number[];
   readonly monatomic: boolean;
-  /** Metals of groups 1-2 and the onium ions form ionic salts with monatomic anions too. */
-  readonly takesMonatomicAnions: boolean;
+  /** The metal's symbol; undefined for an onium ion, which forms ionic salts with every anion. */
+  readonly metal?: string;
   /** Units used. */
   readonly width: number;
 }
@@ -63,6 +72,12 @@ const UNBRACKETED_ONIUM = new Set(["NH4", "PH4"]);
  * (Hg(CN)2 is a molecule, Fe(SCN)3 a complex): their formulas are not split after such metals.
  */
 const COVALENT_WITH_D_METALS = new Set(["CN", "CNS", "CNO", "N3"]);
+
+/**
+ * Peroxide and superoxide (both O2) are the salts of groups 1-2; a dioxide of another metal
+ * (MnO2, PbO2, CrO2) is an oxide of that metal in a higher charge, never its peroxide.
+ */
+const S_BLOCK_ANIONS = new Set(["O2"]);
 
 /** Polyatomic ions by composition key, each with the charges they are listed with. */
 let ionTable: { readonly cations: Map<string, number[]>; readonly anions: Map<string, number[]> } | undefined;
@@ -101,8 +116,11 @@ export function saltIons(reading: SpeciesReading): readonly SaltIon[] | undefine
     const anion = wholeAnion(rest);
     if (anion && !anion.monatomic) collect([cation], anion, found);
   }
-  const distinct = new Map(found.map((split) => [split.map((ion) => `${ion.count}${ion.formula}`).join(" "), split]));
-  return distinct.size === 1 ? [...distinct.values()][0] : undefined;
+  const distinct = [...new Map(found.map((split) => [split.map((ion) => `${ion.count}${ion.formula}`).join(" "), split])).values()];
+  if (distinct.length === 1) return distinct[0];
+  // An anion bonded to itself only where no single-atom anion balances (SnS2 is Sn4+ and 2 S2-).
+  const singleAtom = distinct.filter((split) => split.every((ion) => ion.role === "cation" || ion.monatomic));
+  return singleAtom.length === 1 ? singleAtom[0] : undefined;
 }
 
 function collectSplits(first: CationChoice, rest: readonly WrittenUnit[], found: SaltIon[][]): void {
@@ -116,10 +134,10 @@ function collectSplits(first: CationChoice, rest: readonly WrittenUnit[], found:
 
 /** Adds every way the charges balance to zero. */
 function collect(cations: readonly CationChoice[], anion: AnionChoice, found: SaltIon[][]): void {
-  const needsIonicCation = anion.monatomic || COVALENT_WITH_D_METALS.has(anion.key);
-  if (needsIonicCation && !cations.every((cation) => cation.takesMonatomicAnions)) return;
+  if (!cations.every((cation) => ionicWith(cation, anion))) return;
   for (const anionCharge of anion.charges) {
     const negative = anion.count * anionCharge;
+    const before = found.length;
     for (const charges of chargeCombinations(cations)) {
       const positive = charges.reduce((sum, charge, k) => sum + charge * cations[k].count, 0);
       if (positive + negative !== 0) continue;
@@ -128,7 +146,40 @@ function collect(cations: readonly CationChoice[], anion: AnionChoice, found: Sa
         ion("anion", anion.count, anion.body, anionCharge, anion.monatomic),
       ]);
     }
+    if (found.length === before && cations.length === 1 && cations[0].metal !== undefined && anion.monatomic) {
+      for (const mixed of mixedValence(cations[0], -negative))
+        found.push([...mixed, ion("anion", anion.count, anion.body, anionCharge, true)]);
+    }
   }
+}
+
+/** Whether the cation and the anion make an ionic lattice rather than covalent bonds. */
+function ionicWith(cation: CationChoice, anion: AnionChoice): boolean {
+  if (cation.metal === undefined) return true;
+  if (anion.monatomic) return formsIonicLattice(cation.metal, anion.key);
+  if (COVALENT_WITH_D_METALS.has(anion.key) || S_BLOCK_ANIONS.has(anion.key)) return formsIonicBinarySalts(cation.metal);
+  return true;
+}
+
+/**
+ * The metal's atoms shared between two neighbouring usual charges so that they carry `positive`
+ * in all (Fe3O4: one Fe2+ and two Fe3+; Pb3O4: two Pb2+ and one Pb4+); none when no pair fits.
+ */
+function mixedValence(cation: CationChoice, positive: number): SaltIon[][] {
+  const splits: SaltIon[][] = [];
+  const charges = [...cation.charges].sort((a, b) => a - b);
+  for (let k = 0; k + 1 < charges.length; k++) {
+    const [lower, higher] = [charges[k], charges[k + 1]];
+    const excess = positive - lower * cation.count;
+    if (excess <= 0 || excess % (higher - lower) !== 0) continue;
+    const higherCount = excess / (higher - lower);
+    if (higherCount >= cation.count) continue;
+    splits.push([
+      ion("cation", cation.count - higherCount, cation.body, lower, true),
+      ion("cation", higherCount, cation.body, higher, true),
+    ]);
+  }
+  return splits;
 }
 
 function ion(role: SaltIon["role"], count: number, body: string, charge: number, monatomic: boolean): SaltIon {
@@ -171,7 +222,7 @@ function metalCation(unit: WrittenUnit, width: number): CationChoice {
     count: unit.count,
     charges: metalIonCharges(unit.body),
     monatomic: true,
-    takesMonatomicAnions: formsIonicBinarySalts(unit.body),
+    metal: unit.body,
     width,
   };
 }
@@ -182,13 +233,13 @@ function oniumAt(units: readonly WrittenUnit[], index: number): CationChoice | u
   if (unit === undefined) return undefined;
   if (unit.bracketed) {
     const charges = ions().cations.get(compositionKey(unit.composition, 0));
-    return charges ? { body: unit.body, count: unit.count, charges, monatomic: false, takesMonatomicAnions: true, width: 1 } : undefined;
+    return charges ? { body: unit.body, count: unit.count, charges, monatomic: false, width: 1 } : undefined;
   }
   const next = units[index + 1];
   if (next === undefined || next.bracketed || unit.count !== 1 || next.body !== "H" || next.count !== 4) return undefined;
   const body = `${unit.body}H4`;
   if (!UNBRACKETED_ONIUM.has(body)) return undefined;
-  return { body, count: 1, charges: [1], monatomic: false, takesMonatomicAnions: true, width: 2 };
+  return { body, count: 1, charges: [1], monatomic: false, width: 2 };
 }
 
 /**

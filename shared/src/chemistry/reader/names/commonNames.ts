@@ -95,4 +95,8 @@ export const COMMON_NAMES: readonly (readonly [name: string, formula: string])[]
   ["potassium alum", "KAl(SO4)2·12H2O"],
   ["alum", "KAl(SO4)2·12H2O"],
   ["chrome alum", "KCr(SO4)2·12H2O"],
+  // the carbide of the lab is the acetylide CaC2, not the Ca2C a rule-built name would give
+  ["calcium carbide", "CaC2"],
+  ["lithium aluminium hydride", "LiAlH4"],
+  ["lithium aluminum hydride", "LiAlH4"],
 ];

@@ -1,0 +1,149 @@
+/**
+ * Everyday inorganic solids of a lab report, read as what they are: the ions of an oxide in the
+ * metal's usual charge (MnO2 is Mn4+ and two O2-, not a peroxide), a true peroxide or disulfide
+ * only where the usual charges leave no other reading, mixed-valence oxides as two charges, and
+ * molecular halides left as molecules. Checked through the core's public face.
+ */
+import { describe, expect, it } from "vitest";
+import { analyzeSpecies, checkDocument, analyzeDocument } from "../../shared/src/index";
+import type { AnalysisResult } from "../../shared/src/index";
+
+type Failure = Extract<AnalysisResult, { ok: false }>;
+
+/** Formula -> the ions as "formula ×count" in order, the name shown. */
+type SolidRow = readonly [formula: string, ions: string, name: string];
+
+function ionsOf(formula: string): Failure {
+  const result = analyzeSpecies(formula);
+  expect(result.ok, `${formula} is not one molecule`).toBe(false);
+  return result as Failure;
+}
+
+function ionList(result: Failure): string {
+  return (result.parts ?? []).map((part) => `${part.formula} ×${part.count}`).join(", ");
+}
+
+const DIOXIDES: readonly SolidRow[] = [
+  // from memory: Greenwood & Earnshaw, Chemistry of the Elements (MnO2, rutile structure, Mn(IV))
+  ["MnO2", "Mn^4+ ×1, O^2- ×2", "manganese(IV) oxide"],
+  // from memory: Greenwood & Earnshaw (PbO2 is lead(IV) oxide, rutile structure)
+  ["PbO2", "Pb^4+ ×1, O^2- ×2", "lead(IV) oxide"],
+  // from memory: Greenwood & Earnshaw (SnO2, cassiterite, tin(IV) oxide)
+  ["SnO2", "Sn^4+ ×1, O^2- ×2", "tin(IV) oxide"],
+  // from memory: Greenwood & Earnshaw (TiO2, rutile and anatase, titanium(IV) oxide)
+  ["TiO2", "Ti^4+ ×1, O^2- ×2", "titanium(IV) oxide"],
+  // from memory: Greenwood & Earnshaw (SnS2, CdI2 layer structure, tin(IV) sulfide)
+  ["SnS2", "Sn^4+ ×1, S^2- ×2", "tin(IV) sulfide"],
+];
+
+const SELF_BONDED_ANIONS: readonly SolidRow[] = [
+  // from memory: Greenwood & Earnshaw (peroxides and superoxides of the alkali and alkaline-earth metals)
+  ["Na2O2", "Na^+ ×2, O2^2- ×1", "sodium peroxide"],
+  ["Li2O2", "Li^+ ×2, O2^2- ×1", "lithium peroxide"],
+  ["BaO2", "Ba^2+ ×1, O2^2- ×1", "barium peroxide"],
+  ["CaO2", "Ca^2+ ×1, O2^2- ×1", "calcium peroxide"],
+  ["KO2", "K^+ ×1, O2^- ×1", "potassium superoxide"],
+  // from memory: Greenwood & Earnshaw (pyrite is Fe(II) with S2 2- units)
+  ["FeS2", "Fe^2+ ×1, S2^2- ×1", "iron(II) disulfide"],
+  // from memory: Greenwood & Earnshaw (calcium carbide contains the C2 2- ion, isoelectronic with N2)
+  ["CaC2", "Ca^2+ ×1, C2^2- ×1", "calcium carbide"],
+];
+
+const EVERYDAY_IONIC: readonly SolidRow[] = [
+  // from memory: general-chemistry tables of common ions and Stock names (Fe3+, Cu+, Cu2+, Ag+, Al3+)
+  ["Fe2O3", "Fe^3+ ×2, O^2- ×3", "iron(III) oxide"],
+  ["FeO", "Fe^2+ ×1, O^2- ×1", "iron(II) oxide"],
+  ["Cu2O", "Cu^+ ×2, O^2- ×1", "copper(I) oxide"],
+  ["CuO", "Cu^2+ ×1, O^2- ×1", "copper(II) oxide"],
+  ["Ag2O", "Ag^+ ×2, O^2- ×1", "silver oxide"],
+  ["AgCl", "Ag^+ ×1, Cl^- ×1", "silver chloride"],
+  ["AgBr", "Ag^+ ×1, Br^- ×1", "silver bromide"],
+  ["Al2O3", "Al^3+ ×2, O^2- ×3", "aluminium oxide"],
+  ["ZnO", "Zn^2+ ×1, O^2- ×1", "zinc oxide"],
+  ["ZnS", "Zn^2+ ×1, S^2- ×1", "zinc sulfide"],
+  ["PbO", "Pb^2+ ×1, O^2- ×1", "lead(II) oxide"],
+  ["SnO", "Sn^2+ ×1, O^2- ×1", "tin(II) oxide"],
+  ["PbS", "Pb^2+ ×1, S^2- ×1", "lead(II) sulfide"],
+  // from memory: mercury(I) is Hg2 2+, so mercury(II) oxide carries its numeral
+  ["HgO", "Hg^2+ ×1, O^2- ×1", "mercury(II) oxide"],
+  // from memory: Greenwood & Earnshaw (magnetite is Fe(II)Fe(III)2O4, red lead Pb(II)2Pb(IV)O4, hausmannite Mn(II)Mn(III)2O4)
+  ["Fe3O4", "Fe^2+ ×1, Fe^3+ ×2, O^2- ×4", "iron(II,III) oxide"],
+  ["Pb3O4", "Pb^2+ ×2, Pb^4+ ×1, O^2- ×4", "lead(II,IV) oxide"],
+  ["Mn3O4", "Mn^2+ ×1, Mn^3+ ×2, O^2- ×4", "manganese(II,III) oxide"],
+  // from memory: Greenwood & Earnshaw (LiAlH4 is Li+ and tetrahedral AlH4-; Mg3N2 and NaN3 are ionic)
+  ["LiAlH4", "Li^+ ×1, AlH4^- ×1", "lithium aluminium hydride"],
+  ["NaN3", "Na^+ ×1, N3^- ×1", "sodium azide"],
+  ["Mg3N2", "Mg^2+ ×3, N^3- ×2", "magnesium nitride"],
+];
+
+describe("inorganic solids are their ions, with the name that matches", () => {
+  it.each([...DIOXIDES, ...SELF_BONDED_ANIONS, ...EVERYDAY_IONIC])("%s is %s (%s)", (formula, ions, name) => {
+    const result = ionsOf(formula);
+    expect(result.problem.code).toBe("ionic-solid");
+    expect(ionList(result)).toBe(ions);
+    expect(result.reading?.name).toBe(name);
+    // the note names the same ions as the list
+    for (const part of result.parts ?? []) expect(result.problem.message).toContain(part.formula);
+  });
+
+  it.each([
+    // from memory: Greenwood & Earnshaw (Stock names of the dioxides and the peroxides)
+    ["manganese(IV) oxide", "Mn^4+ ×1, O^2- ×2"],
+    ["lead(IV) oxide", "Pb^4+ ×1, O^2- ×2"],
+    ["barium peroxide", "Ba^2+ ×1, O2^2- ×1"],
+    ["calcium carbide", "Ca^2+ ×1, C2^2- ×1"],
+    ["silver chloride", "Ag^+ ×1, Cl^- ×1"],
+  ])("the name %s gives the same ions, %s", (name, ions) => {
+    expect(ionList(ionsOf(name))).toBe(ions);
+  });
+
+  it("the polyatomic anions are analysed for their own shapes", () => {
+    // from memory: AlH4- is tetrahedral (AX4), C2 2- is diatomic
+    const hydride = ionsOf("LiAlH4").parts?.find((part) => part.formula === "AlH4^-");
+    expect(hydride?.analysis?.ok && hydride.analysis.value.centres[0].molecularGeometry).toBe("tetrahedral");
+    const acetylide = ionsOf("CaC2").parts?.find((part) => part.formula === "C2^2-");
+    expect(acetylide?.analysis?.ok).toBe(true);
+  });
+});
+
+describe("molecular species stay molecules", () => {
+  // from memory: Greenwood & Earnshaw (gas-phase and molecular-liquid halides and hydrides)
+  it.each([
+    ["SnCl4", "tetrahedral"],
+    ["SnCl2", "bent"],
+    ["PbCl2", "bent"],
+    ["BeCl2", "linear"],
+    ["AlCl3", "trigonal planar"],
+    ["HgCl2", "linear"],
+    ["ZnCl2", "linear"],
+    ["H2O2", "bent"],
+  ])("%s is analysed as a %s molecule", (formula, shape) => {
+    const result = analyzeSpecies(formula);
+    expect(result.ok).toBe(true);
+    if (result.ok) expect(result.value.centres.map((centre) => centre.molecularGeometry)).toContain(shape);
+  });
+
+  it.each([
+    // from memory: Greenwood & Earnshaw (TiCl4 is a molecular liquid; CrO2 is chromium(IV) oxide, no peroxide)
+    ["TiCl4", "transition-metal-centre"],
+    ["CrO2", "transition-metal-centre"],
+  ])("%s is not forced into ions", (formula, code) => {
+    const result = ionsOf(formula);
+    expect(result.problem.code).toBe(code);
+    expect(result.parts).toBeUndefined();
+  });
+});
+
+describe("a lab report naming these solids gets notes, never errors", () => {
+  it("every solid is an information finding", () => {
+    // common practice: a correct lab report gets no error for naming a common solid
+    // (documents never spot "SnO", which is also a word)
+    const formulas = [...DIOXIDES, ...SELF_BONDED_ANIONS, ...EVERYDAY_IONIC]
+      .map(([formula]) => formula)
+      .filter((formula) => formula !== "SnO");
+    const text = `# Practical 4\n\n| Reagent | Mass / g |\n| --- | --- |\n${formulas.map((formula) => `| ${formula} | 1.0 |`).join("\n")}\n`;
+    const findings = checkDocument(analyzeDocument(text, "markdown"));
+    expect(findings.filter((finding) => finding.severity !== "information")).toEqual([]);
+    expect(new Set(findings.map((finding) => text.slice(finding.range.start, finding.range.end)))).toEqual(new Set(formulas));
+  });
+});
