@@ -118,9 +118,12 @@ describe("every element of the periodic table", () => {
     // from memory: Greenwood and Earnshaw, Chemistry of the Elements (actinide halides and oxides)
     ["UF6", "U1 F6", "f-block-centre", "uranium"],
     ["PuF6", "Pu1 F6", "f-block-centre", "plutonium"],
-    ["ThO2", "Th1 O2", "f-block-centre", "thorium"],
-    ["CeO2", "Ce1 O2", "f-block-centre", "cerium"],
+    ["ThCl4", "Th1 Cl4", "f-block-centre", "thorium"],
+    ["CeCl3", "Ce1 Cl3", "f-block-centre", "cerium"],
     ["GdCl3", "Gd1 Cl3", "f-block-centre", "gadolinium"],
+    // from memory: Greenwood and Earnshaw, ThO2 and CeO2 have the ionic fluorite lattice
+    ["ThO2", "Th1 O2", "ionic-solid", "Th^4+"],
+    ["CeO2", "Ce1 O2", "ionic-solid", "Ce^4+"],
     // from memory: Greenwood and Earnshaw, radium chloride is an ionic salt like BaCl2
     ["RaCl2", "Ra1 Cl2", "ionic-solid", "Ra"],
     ["FrCl", "Fr1 Cl1", "ionic-solid", "Fr"],
