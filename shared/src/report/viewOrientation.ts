@@ -7,6 +7,7 @@
  */
 import { findPointGroup } from "../chemistry/symmetry/pointGroup";
 import { symmetricEigen } from "../chemistry/geometry/symmetricEigen";
+import { smallestScreenGap } from "./screenGap";
 import { add, cross, dot, norm, normalize, scale, sub, type Vec3 } from "../chemistry/geometry/vectors";
 
 /** A rotation as three rows: the model-frame directions of screen right, screen up and towards the viewer. */
@@ -156,6 +157,7 @@ function bestPlaneNormalThrough(axis: Vec3, positions: readonly Vec3[]): Vec3 {
 function clearHiddenAtoms(input: OrientationInput, frame: Frame): ViewRotation {
   let best = frame;
   let bestGap = -Infinity;
+  const radii = input.atoms.map((atom) => atom.radius);
   for (const [index, first] of TURNS.entries()) {
     for (const second of TURNS.slice(0, index + 1)) {
       for (const [aboutUp, aboutRight] of [
@@ -163,7 +165,7 @@ function clearHiddenAtoms(input: OrientationInput, frame: Frame): ViewRotation {
         [second, first],
       ]) {
         const turned = turnFrame(frame, aboutUp, aboutRight);
-        const gap = smallestGap(input, turned, bestGap);
+        const gap = smallestGap(input, radii, turned, bestGap);
         if (gap >= WANTED_GAP) return rotationOf(turned);
         if (gap > bestGap + 1e-9) {
           best = turned;
@@ -196,18 +198,14 @@ function rotateAbout(vector: Vec3, axis: Vec3, angle: number): Vec3 {
  * The smallest on-screen gap between two balls (Å), radii grown as the renderer grows near atoms.
  * Stops early once the gap is no better than `toBeat`: that view has already lost.
  */
-function smallestGap(input: OrientationInput, frame: Frame, toBeat: number): number {
-  const projected = input.atoms.map((atom) => [dot(atom.position, frame.right), dot(atom.position, frame.up)] as const);
-  let smallest = Infinity;
-  for (let first = 0; first < projected.length; first++) {
-    for (let second = first + 1; second < projected.length; second++) {
-      const apart = Math.hypot(projected[first][0] - projected[second][0], projected[first][1] - projected[second][1]);
-      const touching = NEAREST_RADIUS_FACTOR * (input.atoms[first].radius + input.atoms[second].radius);
-      smallest = Math.min(smallest, apart - touching);
-      if (smallest <= toBeat) return smallest;
-    }
-  }
-  return smallest;
+function smallestGap(input: OrientationInput, radii: readonly number[], frame: Frame, toBeat: number): number {
+  const xs = new Float64Array(input.atoms.length);
+  const ys = new Float64Array(input.atoms.length);
+  input.atoms.forEach((atom, index) => {
+    xs[index] = dot(atom.position, frame.right);
+    ys[index] = dot(atom.position, frame.up);
+  });
+  return smallestScreenGap({ xs, ys, radii, growth: NEAREST_RADIUS_FACTOR }, toBeat);
 }
 
 function rotationOf(frame: Frame): ViewRotation {
