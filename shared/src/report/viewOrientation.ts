@@ -8,6 +8,7 @@
 import { findPointGroup } from "../chemistry/symmetry/pointGroup";
 import { symmetricEigen } from "../chemistry/geometry/symmetricEigen";
 import { smallestScreenGap } from "./screenGap";
+import { bestPlaneNormalThrough } from "./viewPlanes";
 import { add, cross, dot, norm, normalize, scale, sub, type Vec3 } from "../chemistry/geometry/vectors";
 
 /** A rotation as three rows: the model-frame directions of screen right, screen up and towards the viewer. */
@@ -61,7 +62,7 @@ function baseFrame(input: OrientationInput, positions: readonly Vec3[]): Frame {
     return orientUp(frameFrom(cross(upright, thinnest), upright), input);
   }
   const axis = principalAxisOf(input) ?? uniqueSpreadAxis(spread) ?? longest;
-  const viewDirection = bestPlaneNormalThrough(axis, positions);
+  const viewDirection = bestPlaneNormalThrough(axis, positions, ON_PLANE);
   const upright = lengthAlong(positions, axis) > LIE_DOWN_RATIO * lengthAcross(positions, axis) ? cross(viewDirection, axis) : axis;
   return orientUp(frameFrom(cross(upright, viewDirection), upright), input);
 }
@@ -126,31 +127,6 @@ function uniqueSpreadAxis(spread: ReturnType<typeof symmetricEigen>): Vec3 | und
   if (Math.abs(a - b) / scaleOf < 0.05 && Math.abs(b - c) / scaleOf > 0.1) return spread.vectors[2];
   if (Math.abs(b - c) / scaleOf < 0.05 && Math.abs(a - b) / scaleOf > 0.1) return spread.vectors[0];
   return undefined;
-}
-
-/**
- * Of the planes that contain `axis`, the one holding the most atoms (ties: the one the atoms
- * spread across most when seen face-on); its normal is the view direction.
- */
-function bestPlaneNormalThrough(axis: Vec3, positions: readonly Vec3[]): Vec3 {
-  const candidates: Vec3[] = [];
-  for (const position of positions) {
-    const across = sub(position, scale(axis, dot(position, axis)));
-    if (norm(across) > ON_PLANE) candidates.push(normalize(cross(axis, across)));
-  }
-  if (candidates.length === 0) candidates.push(perpendicularTo(axis));
-  let best = candidates[0];
-  let bestScore = -Infinity;
-  for (const normal of candidates) {
-    const held = positions.filter((position) => Math.abs(dot(position, normal)) < ON_PLANE).length;
-    const spread = positions.reduce((sum, position) => sum + dot(position, position) - dot(position, normal) ** 2, 0);
-    const score = held * 1000 + spread;
-    if (score > bestScore + 1e-6) {
-      best = normal;
-      bestScore = score;
-    }
-  }
-  return best;
 }
 
 /** Turns the view a little (about screen up first, then screen right) until no ball hides another. */
