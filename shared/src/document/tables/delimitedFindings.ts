@@ -16,6 +16,7 @@ import { memoisedReader, type SpeciesReader } from "../speciesReader";
 import type { Finding } from "../types";
 import { delimitedRowExtent, sniffDelimiter } from "./csv";
 import { columnUnder } from "./delimitedRecords";
+import { isEquationHeader } from "./headers";
 
 /** What a file's batches share: the findings of rows seen before. */
 export interface DelimitedRowMemo {
@@ -177,11 +178,12 @@ export function workOutRow(
 }
 
 /**
- * The first and last column (0-based) whose header a check reads; -1 for both when none does.
+ * The first and last column (0-based) whose header a check reads (equation columns included); -1
+ * for both when none does.
  * A row's findings depend only on its cells from `first` to `last`.
  */
 export function recognisedColumns(header: string, delimiter: string): { first: number; last: number } {
-  const columns = header.split(delimiter).map((cell) => columnUnder(cell) !== undefined);
+  const columns = header.split(delimiter).map((cell) => columnUnder(cell) !== undefined || isEquationHeader(cell));
   return { first: columns.indexOf(true), last: columns.lastIndexOf(true) };
 }
 

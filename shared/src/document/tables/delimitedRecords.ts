@@ -3,7 +3,8 @@
  */
 import type { SpeciesReader } from "../speciesReader";
 import { sniffDelimiter, visitDelimitedRows } from "./csv";
-import { isFormulaHeader, meaningOfHeader, namesSpecies } from "./headers";
+import { readEquationCell } from "./equationCells";
+import { isEquationHeader, isFormulaHeader, meaningOfHeader, namesSpecies } from "./headers";
 import { addRecord, type RecordField, type RecordSink } from "./records";
 import type { ColumnMeaning, Finding } from "../types";
 
@@ -40,7 +41,9 @@ export function readDelimitedRecords(
 ): readonly Finding[] {
   const delimiter = kind === "tsv" ? "\t" : (knownDelimiter ?? sniffDelimiter(text, ","));
   let columns: (Column | undefined)[] | undefined;
-  // A header without a species or name column: the rest is tokenized (for its problems) but not read.
+  // Columns of equations ("Reaction", "Balanced equation"), when the header has any.
+  let equationColumns: number[] | undefined;
+  // A header without a species, name or equation column: the rest is tokenized (for its problems) but not read.
   let noSpecies = false;
   const fields: RecordField[] = [];
   // Rows are used as the tokenizer hands them on and then dropped: a large batch never holds them all.
@@ -49,8 +52,15 @@ export function readDelimitedRecords(
     if (columns === undefined) {
       if (cells.every((cell) => cell.text.trim() === "")) return;
       columns = cells.map((cell) => columnUnder(cell.text));
-      noSpecies = !columns.some((column) => namesSpecies(column?.meaning));
+      equationColumns = equationColumnsOf(cells.map((cell) => cell.text));
+      noSpecies = !columns.some((column) => namesSpecies(column?.meaning)) && !equationColumns;
       return;
+    }
+    if (equationColumns) {
+      for (const index of equationColumns) {
+        const cell = cells[index];
+        if (cell) readEquationCell(text, cell.range, cell.text, read, sink);
+      }
     }
     // addRecord keeps the fields, not the list: one list serves every row.
     fields.length = 0;
@@ -63,4 +73,13 @@ export function readDelimitedRecords(
     }
     addRecord(fields, read, sink);
   });
+}
+
+/** The indexes of the columns whose header means equations, or undefined when there are none. */
+function equationColumnsOf(headers: readonly string[]): number[] | undefined {
+  const indexes: number[] = [];
+  headers.forEach((header, index) => {
+    if (isEquationHeader(header)) indexes.push(index);
+  });
+  return indexes.length > 0 ? indexes : undefined;
 }

@@ -289,7 +289,20 @@ export function isFormulaHeader(header: string): boolean {
   return header.length <= MAX_HEADER && /formula/.test(normalizeHeader(header));
 }
 
-/** Headers of a column of equations: "Reaction", "Balanced equation", "Half-reaction". */
+/**
+ * Headers (and keys) of a column of equations: "Reaction", "Balanced equation", "Net ionic
+ * equation", "Half-reaction", "rxn", "balancedEquation". The header must end in the word, so
+ * columns about a reaction ("Reaction time", "Heat of reaction", "Reaction ID") are not read.
+ */
 export function isEquationHeader(header: string): boolean {
-  return header.length <= MAX_HEADER && /\b(?:reactions?|equations?|half[- ]reactions?)\b/.test(normalizeHeader(header));
+  // "Reaction no." and "Reaction #" number the reactions; normalising would drop the "no".
+  if (header.length > MAX_HEADER || /(?:\bno\.?|\bnumber|#)\s*$/i.test(header)) return false;
+  // camelCase keys in JSON and YAML: "balancedEquation", "halfReaction".
+  return EQUATION_HEADER.test(normalizeHeader(header.replace(/([a-z])([A-Z])/g, "$1 $2")));
 }
+
+/** Words that may stand before "reaction" or "equation" in an equation column's header. */
+const EQUATION_QUALIFIERS =
+  "balanced|unbalanced|chemical|overall|net|ionic|full|complete|molecular|skeleton|skeletal|main|side|" +
+  "cell|redox|electrode|anode|cathode|anodic|cathodic|oxidation|reduction|half|reaction|written";
+const EQUATION_HEADER = new RegExp(`^(?:(?:${EQUATION_QUALIFIERS}) ){0,3}(?:reactions?|equations?|rxns?|eqns?)(?: \\d{1,2})?$`);

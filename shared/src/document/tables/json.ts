@@ -8,7 +8,8 @@
 import { parseTree, printParseErrorCode, type Node, type ParseError } from "jsonc-parser/lib/esm/main.js";
 import type { SpeciesReader } from "../speciesReader";
 import type { Finding } from "../types";
-import { isFormulaHeader, meaningOfHeader, namesSpecies } from "./headers";
+import { readEquationCell } from "./equationCells";
+import { isEquationHeader, isFormulaHeader, meaningOfHeader, namesSpecies } from "./headers";
 import { addRecord, type RecordField, type RecordSink } from "./records";
 
 const MESSAGES: Readonly<Record<string, string>> = {
@@ -72,6 +73,7 @@ function objectRecord(node: Node, text: string, read: SpeciesReader, sink: Recor
   for (const property of node.children ?? []) {
     const [key, value] = property.children ?? [];
     if (!key || !value || typeof key.value !== "string") continue;
+    if (isEquationHeader(key.value)) equationValues(value, text, read, sink);
     const meaning = meaningOfHeader(key.value);
     const field = meaning && valueField(value, text);
     if (meaning && field) fields.push({ meaning, formulaHeader: isFormulaHeader(key.value), ...field });
@@ -84,6 +86,16 @@ function objectRecord(node: Node, text: string, read: SpeciesReader, sink: Recor
     fields.unshift({ meaning: "species", formulaHeader: true, ...stringField(key) });
   }
   addRecord(fields, read, sink);
+}
+
+/** A string under an equation key, or each string of a list there, read as an equation. */
+function equationValues(value: Node, text: string, read: SpeciesReader, sink: RecordSink): void {
+  const strings = value.type === "array" ? (value.children ?? []) : [value];
+  for (const item of strings) {
+    if (item.type !== "string") continue;
+    const field = stringField(item);
+    readEquationCell(text, field.range, field.text, read, sink);
+  }
 }
 
 function valueField(value: Node, text: string): { text: string; range: { start: number; end: number } } | undefined {

@@ -7,7 +7,8 @@
 import { isMap, isPair, isScalar, isSeq, parseAllDocuments, Scalar, type Node, type Pair, type YAMLMap } from "yaml";
 import type { SpeciesReader } from "../speciesReader";
 import type { Finding } from "../types";
-import { isFormulaHeader, meaningOfHeader, namesSpecies } from "./headers";
+import { readEquationCell } from "./equationCells";
+import { isEquationHeader, isFormulaHeader, meaningOfHeader, namesSpecies } from "./headers";
 import { addRecord, type RecordField, type RecordSink } from "./records";
 
 /** Reads a YAML stream (one or more documents) into `sink`; returns its syntax problems. */
@@ -70,6 +71,7 @@ function walk(root: Node, text: string, read: SpeciesReader, sink: RecordSink): 
 function mappingRecord(node: YAMLMap, key: Scalar | undefined, text: string, read: SpeciesReader, sink: RecordSink): void {
   const fields: RecordField[] = [];
   for (const pair of node.items as Pair[]) {
+    if (isScalar(pair.key) && isEquationHeader(String(pair.key.value))) equationValues(pair.value as Node | null, text, read, sink);
     if (!isScalar(pair.key) || !isScalar(pair.value)) continue;
     const header = String(pair.key.value);
     const meaning = meaningOfHeader(header);
@@ -84,6 +86,16 @@ function mappingRecord(node: YAMLMap, key: Scalar | undefined, text: string, rea
     fields.unshift({ meaning: "species", formulaHeader: true, ...keyField });
   }
   addRecord(fields, read, sink);
+}
+
+/** A scalar under an equation key, or each scalar of a list there, read as an equation. */
+function equationValues(value: Node | null, text: string, read: SpeciesReader, sink: RecordSink): void {
+  const items = isSeq(value) ? (value.items as (Node | null)[]) : [value];
+  for (const item of items) {
+    if (!isScalar(item) || typeof item.value !== "string") continue;
+    const field = scalarField(item, text);
+    if (field) readEquationCell(text, field.range, field.text, read, sink);
+  }
 }
 
 /** A scalar's written value and the range of its characters (inside quotes when quoted). */
