@@ -66,6 +66,16 @@ export type { BalanceLine, BalanceTerm, BalanceVerdict } from "./chemistry/react
 export { formatFraction, fraction } from "./chemistry/reactions/rational";
 export type { Fraction } from "./chemistry/reactions/rational";
 
+// Redox in solution: completing half-reactions with H+/OH-, H2O and e-, and combining two halves.
+export { completeReaction, completionsOf } from "./document/reactions/completeEquation";
+export type { AddedTerm, Completion, SolutionMedium } from "./document/reactions/completeEquation";
+export { combinedEquations } from "./document/reactions/combineHalfReactions";
+export type { CombinedEquation } from "./document/reactions/combineHalfReactions";
+export { equationActions } from "./document/reactions/equationActions";
+export type { EquationAction } from "./document/reactions/equationActions";
+export { balanceInSolution } from "./document/reactions/balanceInSolution";
+export type { SolutionBalanceAnswer } from "./document/reactions/balanceInSolution";
+
 // Reports: cards, JSON, hovers, summary tables and the 3D view model.
 export { MODEL_CAUTION, PLAIN_CARD_STYLE, formatAnalysisCard } from "./report/analysisCard";
 export type { CardStyle } from "./report/analysisCard";

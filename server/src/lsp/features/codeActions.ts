@@ -12,6 +12,7 @@ import {
 } from "vscode-languageserver";
 import type { TextDocument } from "vscode-languageserver-textdocument";
 import { editsOfFix, type DocumentModel, type Finding, type FixEdit, type TextFix, type TextRange } from "../core";
+import { equationActions, type EquationAction } from "../../../../shared/src/index";
 import type { AnalysedDocument } from "../documentCache";
 import { guarded } from "../guardedHandler";
 import { lspRange, offsetRange, rangesTouch, rangeWithin } from "../ranges";
@@ -51,6 +52,13 @@ export function registerCodeActions(context: ServerContext): void {
           if (token.isCancellationRequested) return [];
           if (!finding.fix || !rangesTouch(finding.range, requested)) continue;
           actions.push(quickFix(context, document, finding, finding.fix, params.context.diagnostics));
+        }
+      }
+      if (wants(CodeActionKind.QuickFix) || wants(CodeActionKind.RefactorRewrite)) {
+        for (const action of equationActionsOf(document, analysed, offsetRange(document, params.range))) {
+          if (token.isCancellationRequested) return [];
+          const kind = action.kind === "complete" ? CodeActionKind.QuickFix : CodeActionKind.RefactorRewrite;
+          if (wants(kind)) actions.push(equationAction(context, document, action, params.context.diagnostics));
         }
       }
       const kind = wants(CodeActionKind.QuickFix) ? CodeActionKind.QuickFix : wants(FIX_ALL_KIND) ? FIX_ALL_KIND : undefined;
@@ -123,6 +131,38 @@ function quickFix(
   };
 }
 
+/** Completing or combining half-reactions on the arrows in `range`; tables are read only around it. */
+function equationActionsOf(document: TextDocument, analysed: AnalysedDocument, range: TextRange): EquationAction[] {
+  const model =
+    analysed.model.kind === "csv" || analysed.model.kind === "tsv" ? analysed.modelAround(range.start, range.end) : analysed.model;
+  if (!model.reactions || model.reactions.length === 0) return [];
+  return equationActions(document.getText(), model, range);
+}
+
+/** One action whose edits go in together, so one undo takes the whole change back. */
+function equationAction(
+  context: ServerContext,
+  document: TextDocument,
+  action: EquationAction,
+  contextDiagnostics: readonly Diagnostic[],
+): CodeAction {
+  const arrow = lspRange(document, action.arrow);
+  const diagnostics = contextDiagnostics.filter(
+    (diagnostic) =>
+      diagnostic.source === DIAGNOSTIC_SOURCE && diagnostic.code === action.findingCode && sameRange(diagnostic, { range: arrow }),
+  );
+  return {
+    title: action.title,
+    kind: action.kind === "complete" ? CodeActionKind.QuickFix : CodeActionKind.RefactorRewrite,
+    ...(diagnostics.length > 0 ? { diagnostics } : {}),
+    edit: workspaceEdit(
+      context,
+      document,
+      action.edits.map((fix) => textEdit(document, fix)),
+    ),
+  };
+}
+
 /**
  * Fixes whose range lies inside a recognised table cell, in document order, without overlaps
  * (two findings may want to rewrite the same cell; the first wins).
@@ -175,7 +215,7 @@ function workspaceEdit(context: ServerContext, document: TextDocument, edits: Te
   return { changes: { [document.uri]: edits } };
 }
 
-function sameRange(a: Diagnostic, b: Diagnostic): boolean {
+function sameRange(a: Pick<Diagnostic, "range">, b: Pick<Diagnostic, "range">): boolean {
   return (
     a.range.start.line === b.range.start.line &&
     a.range.start.character === b.range.start.character &&

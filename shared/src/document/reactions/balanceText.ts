@@ -28,10 +28,7 @@ export type BalanceAnswer =
 
 /** Balances the equation `input`; never throws. */
 export function balanceText(input: string, read: SpeciesReader = memoisedReader()): BalanceAnswer {
-  const wrapped = /^\s*\\ce\{([\s\S]*)\}\s*$/.exec(input);
-  const bodyStart = wrapped ? input.indexOf("{") + 1 : 0;
-  const bodyEnd = wrapped ? input.lastIndexOf("}") : input.length;
-  const reaction = readWholeEquation(input, bodyStart, bodyEnd, "mhchem", read);
+  const reaction = readTypedEquation(input, read);
   if (!reaction) return { input, ok: false, error: { code: NOT_AN_EQUATION, message: notAnEquationMessage(input, read) } };
   const verdict = judgeReaction(reaction);
   switch (verdict.kind) {
@@ -53,6 +50,14 @@ export function balanceText(input: string, read: SpeciesReader = memoisedReader(
     case "impossible":
       return { input, ok: false, error: { code: REACTION_CODES.impossible, message: `cannot balance: ${verdict.reason}` } };
   }
+}
+
+/** The one equation typed as `input` (plain, or wrapped in `\\ce{...}`), if it is one. */
+export function readTypedEquation(input: string, read: SpeciesReader): Reaction | undefined {
+  const wrapped = /^\s*\\ce\{([\s\S]*)\}\s*$/.exec(input);
+  const bodyStart = wrapped ? input.indexOf("{") + 1 : 0;
+  const bodyEnd = wrapped ? input.lastIndexOf("}") : input.length;
+  return readWholeEquation(input, bodyStart, bodyEnd, "mhchem", read);
 }
 
 function answer(input: string, reaction: Reaction, coefficients: readonly bigint[], wasBalanced: boolean): BalanceAnswer {

@@ -7,6 +7,7 @@ import type { AnalysisResult } from "../../chemistry/types";
 import { severityOf } from "../findingSeverity";
 import type { Finding } from "../types";
 import { fixOfEdits, shiftedFix } from "../fixEdits";
+import { completionNote } from "./completionNote";
 import { coefficientEdits, imbalanceText, judgeReaction, rewrittenWithCoefficients, termsOf } from "./judgeReaction";
 import type { Reaction } from "./reactionTypes";
 
@@ -83,7 +84,8 @@ export function reactionFinding(reaction: Reaction): Finding | undefined {
         code: REACTION_CODES.notUnique,
         message:
           `Equation not balanced: ${imbalanceText(verdict.sheet)}. It can be balanced in ${verdict.ways} independent ways ` +
-          "(two reactions written as one?), so no single set of coefficients is offered.",
+          (completionNote(reaction)?.replace(/^/, "as written. ") ??
+            "(two reactions written as one?), so no single set of coefficients is offered."),
       };
     case "impossible":
       return {
@@ -93,7 +95,7 @@ export function reactionFinding(reaction: Reaction): Finding | undefined {
         code: REACTION_CODES.impossible,
         message:
           `Equation cannot balance: ${verdict.reason}. As written: ${imbalanceText(verdict.sheet)}. ` +
-          "A species is missing, or this is a scheme that leaves out by-products.",
+          (completionNote(reaction) ?? "A species is missing, or this is a scheme that leaves out by-products."),
       };
   }
 }
