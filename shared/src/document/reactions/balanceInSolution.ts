@@ -23,7 +23,7 @@ export function balanceInSolution(input: string, medium: SolutionMedium, read: S
       ...plain,
       error: {
         ...plain.error,
-        message: `${plain.error.message}; adding ${supplies} (and electrons) gives no single balanced equation either`,
+        message: `${plain.error.message}; completing with ${supplies} is done only for a redox equation or half-reaction with one answer`,
       },
     };
   }
