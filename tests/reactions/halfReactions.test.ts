@@ -290,6 +290,13 @@ describe("combining two half-reactions", () => {
     expect(combine("-> Ag")).toEqual([]);
   });
 
+  it("a selection over both arrows offers the overall equation once", () => {
+    const text = "\\ce{Zn -> Zn^2+ + 2 e-}\n\\ce{Cu^2+ + 2 e- -> Cu}\n";
+    const actions = equationActions(text, analyzeDocument(text, "markdown"), { start: 0, end: text.length });
+    // from memory: Tro, ch. 18 (a zinc and copper cell)
+    expect(actions.map((action) => applied(text, action))).toEqual([`${text}\\ce{Zn + Cu^2+ -> Zn^2+ + Cu}\n`]);
+  });
+
   it("two halves of the same kind are not combined", () => {
     const text = "\\ce{Zn -> Zn^2+ + 2 e-}\n\\ce{Fe -> Fe^2+ + 2 e-}\n";
     expect(actionsAt(text, "->").filter((action) => action.kind === "combine")).toEqual([]);

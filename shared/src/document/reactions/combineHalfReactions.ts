@@ -167,7 +167,8 @@ export function combinedEquations(
     const again = readWholeEquation(overall.text, 0, overall.text.length, second.reaction.notation, read);
     if (!again || termsOf(again).some((term) => term.electron) || judgeReaction(again).kind !== "balanced") continue;
     const edit = insertionAfter(text, second.reaction, overall.text);
-    if (!edit) continue;
+    // A range over both arrows asks for the same pair twice.
+    if (!edit || results.some((result) => result.edit.range.start === edit.range.start && result.equation === overall.text)) continue;
     const [oxidation, reduction] = half.kind === "oxidation" ? [half.reaction, partner.reaction] : [partner.reaction, half.reaction];
     results.push({ oxidation, reduction, equation: overall.text, edit });
   }

@@ -92,15 +92,25 @@ export function completeReaction(reaction: Reaction, medium: SolutionMedium, rea
   const supplies = SUPPLIES[medium].filter((supply) => !terms.some((term) => sameSpecies(term, supply)));
   // A half-reaction gets electrons; an equation with both an oxidation and a reduction in it does not.
   const states = terms.map(statesOfTerm);
+  let solved: Solved | undefined;
   let halfReaction = electronsWritten;
-  if (!electronsWritten) {
+  if (electronsWritten) solved = solve(terms, supplies, states);
+  else {
     const directions = redoxDirections(terms, states);
     if (!directions.oxidised && !directions.reduced) return undefined;
-    halfReaction = !(directions.oxidised && directions.reduced);
+    // Both an oxidation and a reduction: no electrons, unless none but a half-reaction balances
+    // (a structure's states may mislead, as for a radical); one of them: a half-reaction.
+    const attempts = directions.oxidised && directions.reduced ? [false, true] : [true, false];
+    for (const withElectrons of attempts) {
+      solved = solve(terms, withElectrons ? [...supplies, ELECTRON] : supplies, states);
+      if (solved && withElectrons && solved.amounts[solved.amounts.length - 1] === 0n) solved = undefined;
+      if (solved) {
+        halfReaction = withElectrons;
+        break;
+      }
+    }
   }
-  const solved = solve(terms, halfReaction && !electronsWritten ? [...supplies, ELECTRON] : supplies, states);
   if (!solved) return undefined;
-  if (halfReaction && !electronsWritten && solved.amounts[solved.amounts.length - 1] === 0n) return undefined;
   const style = writingStyle(reaction);
   const added: AddedTerm[] = [];
   solved.supplies.forEach((supply, index) => {
