@@ -12,8 +12,8 @@ import { readSpecies } from "../../chemistry/reader/readSpecies";
 import { oxidationStatesOf, type OxidationStates } from "../../chemistry/redox/oxidationStates";
 import type { FormulaPart } from "../../chemistry/types";
 import type { SpeciesReader } from "../speciesReader";
-import type { TextFix } from "../types";
-import { coefficientOf, judgeReaction, termsOf } from "./judgeReaction";
+import type { FixEdit } from "../types";
+import { coefficientEdits, judgeReaction, termsOf } from "./judgeReaction";
 import { readWholeEquation } from "./readEquation";
 import type { Reaction, ReactionTerm } from "./reactionTypes";
 
@@ -39,7 +39,7 @@ export interface Completion {
   /** The equation is a half-reaction: electrons are written or added. */
   readonly halfReaction: boolean;
   /** Coefficient changes and inserted terms, in document order, none overlapping. */
-  readonly edits: readonly TextFix[];
+  readonly edits: readonly FixEdit[];
 }
 
 /** A species the medium supplies: its kind and what the balancer counts in it. */
@@ -336,37 +336,21 @@ function coefficientText(value: number, glued: boolean): string {
 }
 
 /** The edits that set the writer's coefficients and insert the added terms at the end of their side. */
-function completionEdits(reaction: Reaction, coefficients: readonly number[], added: readonly AddedTerm[], style: WritingStyle): TextFix[] {
-  const edits: TextFix[] = [];
-  termsOf(reaction).forEach((term, index) => {
-    const edit = coefficientEdit(term, coefficients[index], style.glued);
-    if (edit) edits.push(edit);
-    const lastOfSide =
-      term.side === "left" ? term === reaction.left[reaction.left.length - 1] : term === reaction.right[reaction.right.length - 1];
-    if (!lastOfSide) return;
+function completionEdits(reaction: Reaction, coefficients: readonly number[], added: readonly AddedTerm[], style: WritingStyle): FixEdit[] {
+  const edits = coefficientEdits(reaction, coefficients.map(BigInt));
+  for (const side of [reaction.left, reaction.right]) {
+    const last = side[side.length - 1];
     const inserted = added
-      .filter((addedTerm) => addedTerm.side === term.side)
-      .map((addedTerm) => style.separator + coefficientText(addedTerm.coefficient, style.glued) + addedTerm.text)
+      .filter((term) => term.side === last.side)
+      .map((term) => style.separator + coefficientText(term.coefficient, style.glued) + term.text)
       .join("");
-    if (inserted) edits.push({ range: { start: term.range.end, end: term.range.end }, newText: inserted, title: "" });
-  });
-  return edits.map((edit) => ({ ...edit, title: "" }));
-}
-
-/** The edit that gives `term` the coefficient `wanted`, or undefined when it has it already. */
-export function coefficientEdit(term: ReactionTerm, wanted: number, glued: boolean): TextFix | undefined {
-  const current = coefficientOf(term);
-  if (current.denominator === 1n && current.numerator === BigInt(wanted)) return undefined;
-  const written = term.coefficient.written;
-  if (!written)
-    return { range: { start: term.speciesRange.start, end: term.speciesRange.start }, newText: coefficientText(wanted, glued), title: "" };
-  // A coefficient that becomes 1 goes with the space after it.
-  if (wanted === 1) return { range: { start: written.start, end: term.speciesRange.start }, newText: "", title: "" };
-  return { range: written, newText: String(wanted), title: "" };
+    if (inserted) edits.push({ range: { start: last.range.end, end: last.range.end }, newText: inserted });
+  }
+  return edits.sort((a, b) => a.range.start - b.range.start);
 }
 
 /** The reaction's text with `edits` (document offsets, in order) applied. */
-export function applied(reaction: Reaction, edits: readonly TextFix[]): string {
+export function applied(reaction: Reaction, edits: readonly FixEdit[]): string {
   let text = "";
   let copied = reaction.range.start;
   for (const edit of edits) {

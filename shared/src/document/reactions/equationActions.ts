@@ -6,7 +6,7 @@
 import type { TextRange } from "../../chemistry/types";
 import { readSpecies } from "../../chemistry/reader/readSpecies";
 import type { SpeciesReader } from "../speciesReader";
-import type { DocumentModel, TextFix } from "../types";
+import type { DocumentModel, FixEdit } from "../types";
 import { combinedEquations } from "./combineHalfReactions";
 import { completionsOf, completionTitle } from "./completeEquation";
 import { judgeReaction } from "./judgeReaction";
@@ -22,7 +22,7 @@ export interface EquationAction {
   /** The code of the finding on that arrow the action answers, for "complete". */
   readonly findingCode?: string;
   /** Edits in document order, none overlapping: one undoable change. */
-  readonly edits: readonly TextFix[];
+  readonly edits: readonly FixEdit[];
 }
 
 /**
