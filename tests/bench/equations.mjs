@@ -22,6 +22,8 @@ const TEMPLATES = [
   (k) => `- Ca2+ + ${k} F- → CaF2`,
   (k) => `\\ce{CH3COOH + C2H5OH <=>[H2SO4] CH3COOC2H5 + ${k} H2O}`,
   (k) => `Cr2O7^2- + 14 H+ + ${k} e- → 2 Cr3+ + 7 H2O`,
+  // Skeletons that complete in acidic or basic solution.
+  (k) => `\\ce{MnO4- + ${k} Fe^2+ -> Mn^2+ + Fe^3+}`,
 ];
 
 function notebook() {
