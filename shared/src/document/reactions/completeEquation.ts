@@ -91,6 +91,9 @@ export function completeReaction(reaction: Reaction, medium: SolutionMedium, rea
   const electronsWritten = terms.some((term) => term.electron);
   const supplies = SUPPLIES[medium].filter((supply) => !terms.some((term) => sameSpecies(term, supply)));
   // A half-reaction gets electrons; an equation with both an oxidation and a reduction in it does not.
+  // Water, H+ and OH- bring only H and O: any other element written on one side only stays so.
+  // Checked first, since oxidation states need each species' structure.
+  if (!otherElementsOnBothSides(terms)) return undefined;
   const states = terms.map(statesOfTerm);
   let solved: Solved | undefined;
   let halfReaction = electronsWritten;
@@ -212,6 +215,14 @@ function sameSpecies(term: ReactionTerm, supply: Supply): boolean {
     return [...map.entries()].sort(([a], [b]) => a.localeCompare(b)).join(";");
   };
   return counts(reading.composition) === counts(supply.composition);
+}
+
+/** True when every element but H and O appears on both sides. */
+function otherElementsOnBothSides(terms: readonly ReactionTerm[]): boolean {
+  const sides = { left: new Set<string>(), right: new Set<string>() };
+  for (const term of terms) for (const part of term.reading?.composition ?? []) sides[term.side].add(part.symbol);
+  const oneSided = (from: Set<string>, to: Set<string>) => [...from].some((symbol) => symbol !== "H" && symbol !== "O" && !to.has(symbol));
+  return !oneSided(sides.left, sides.right) && !oneSided(sides.right, sides.left);
 }
 
 /** The oxidation states of a term's species (undefined for an electron or when unknown). */
