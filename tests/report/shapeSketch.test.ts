@@ -9,6 +9,7 @@ import { fileURLToPath } from "node:url";
 import type { BrowserContext } from "playwright-core";
 import { CHROMIUM, launchHeadlessChromium } from "../support/headlessChromium";
 import { afterAll, beforeAll, describe, expect, it } from "vitest";
+import { seededRandom } from "../support/seededRandom";
 import { analyzeSmiles, analyzeSpecies, type SpeciesAnalysis } from "../../shared/src/index";
 import { hoverMarkdown } from "../../shared/src/report/hoverMarkdown";
 import { MAX_SKETCH_ATOMS, shapePictureSvg, shapeSketchSvg, svgDataUri } from "../../shared/src/report/shapeSketch";
@@ -121,6 +122,24 @@ describe("shape sketch", () => {
     expect(uri.startsWith("data:image/svg+xml;base64,")).toBe(true);
     expect(uri.length).toBeLessThan(6_000);
     expect(Buffer.from(uri.slice(uri.indexOf(",") + 1), "base64").toString("utf8")).toBe(svg);
+  });
+
+  it("writes long SVG text with characters beyond ASCII into a URI that decodes to the same text", () => {
+    // common practice: UTF-8 for SVG text; the Ångström sign and degree sign take two bytes each
+    const svg = `<svg xmlns="http://www.w3.org/2000/svg">${"<text>S–F 1.56 Å, 90°</text>".repeat(700)}</svg>`;
+    expect(new TextEncoder().encode(svg).length).toBeGreaterThan(3 * 4096);
+    const uri = svgDataUri(svg);
+    expect(Buffer.from(uri.slice(uri.indexOf(",") + 1), "base64").toString("utf8")).toBe(svg);
+  });
+
+  it("encodes as Node's own base64 does, for every length and for text beyond ASCII", () => {
+    // source: RFC 4648 base64, as Node's Buffer writes it
+    const random = seededRandom(4648);
+    const alphabet = ["<", ">", "a", "Z", "0", " ", "=", '"', "°", "Å", "–", "→", "😀"];
+    for (let length = 0; length < 300; length++) {
+      const text = Array.from({ length }, () => alphabet[Math.floor(random() * alphabet.length)]).join("");
+      expect(svgDataUri(text), JSON.stringify(text)).toBe(`data:image/svg+xml;base64,${Buffer.from(text, "utf8").toString("base64")}`);
+    }
   });
 
   it("appears in the hover card as a markdown image right after the title, naming the geometry", () => {

@@ -51,10 +51,38 @@ export function shapeSketchSvg(analysis: SpeciesAnalysis, options: ShapeSketchOp
 
 /** A `data:` URI of an SVG, as markdown images in editor hovers accept it. */
 export function svgDataUri(svg: string): string {
-  const bytes = new TextEncoder().encode(svg);
-  let binary = "";
-  for (const byte of bytes) binary += String.fromCharCode(byte);
-  return `data:image/svg+xml;base64,${btoa(binary)}`;
+  return `data:image/svg+xml;base64,${base64Of(new TextEncoder().encode(svg))}`;
+}
+
+const BASE64_DIGITS = Array.from("ABCDEFGHIJKLMNOPQRSTUVWXYZabcdefghijklmnopqrstuvwxyz0123456789+/", (digit) => digit.charCodeAt(0));
+const BASE64_PAD = "=".charCodeAt(0);
+const ASCII = new TextDecoder();
+
+/**
+ * Standard base64 (RFC 4648) of `bytes`. Written out here since the core runs where Node's
+ * Buffer is missing, and btoa wants a string of one character per byte built first, which is slow.
+ */
+function base64Of(bytes: Uint8Array): string {
+  const codes = new Uint8Array(Math.ceil(bytes.length / 3) * 4);
+  let out = 0;
+  let index = 0;
+  for (; index + 2 < bytes.length; index += 3) {
+    const triple = (bytes[index] << 16) | (bytes[index + 1] << 8) | bytes[index + 2];
+    codes[out++] = BASE64_DIGITS[triple >> 18];
+    codes[out++] = BASE64_DIGITS[(triple >> 12) & 63];
+    codes[out++] = BASE64_DIGITS[(triple >> 6) & 63];
+    codes[out++] = BASE64_DIGITS[triple & 63];
+  }
+  const left = bytes.length - index;
+  if (left > 0) {
+    const triple = (bytes[index] << 16) | (left === 2 ? bytes[index + 1] << 8 : 0);
+    codes[out++] = BASE64_DIGITS[triple >> 18];
+    codes[out++] = BASE64_DIGITS[(triple >> 12) & 63];
+    codes[out++] = left === 2 ? BASE64_DIGITS[(triple >> 6) & 63] : BASE64_PAD;
+    codes[out] = BASE64_PAD;
+  }
+  // The digits are ASCII, which UTF-8 decoding leaves as they are.
+  return ASCII.decode(codes);
 }
 
 /** Whole pixels within reason, so the markup never carries NaN or a runaway size. */
