@@ -248,6 +248,30 @@ describe("JSON and YAML values under an equation key", () => {
   });
 });
 
+describe("correct files in the styles other people write stay quiet", () => {
+  const FIXTURES = join(__dirname, "..", "fixtures", "fix-safety");
+  it.each<[string, DocumentKind, number, string, string]>([
+    // from memory: CRC Handbook of Chemistry and Physics, electrochemical series (handbook charges, "=", glued
+    // electrons); the dropped coefficient is the 8 of 8H+ in the permanganate couple
+    ["handbook-reduction-potentials.tsv", "tsv", 11, "MnO4- + 8H+", "MnO4- + H+"],
+    // from memory: Tro, Chemistry: A Molecular Approach, ch. 4 and 19 (a student's exported lab report)
+    ["student-lab-report.json", "json", 5, "CaCO3(s) + 2 HCl(aq)", "CaCO3(s) + HCl(aq)"],
+    // from memory: Zumdahl, Chemistry, ch. 18 (permanganate and oxalate; iron(II) oxidised)
+    ["titration-log.yaml", "yaml", 3, "2 MnO4- + 5 C2O4^2-", "2 MnO4- + C2O4^2-"],
+    // from memory: Greenwood & Earnshaw (contact process, Haber process); Housecroft & Sharpe (Ostwald process)
+    ["run-log-export.csv", "csv", 5, "4 NH3 + 5 O2", "4 NH3 + O2"],
+  ])("%s: every equation is read, none is flagged; a dropped coefficient is", (name, kind, count, written, dropped) => {
+    const text = readFileSync(join(FIXTURES, name), "utf8");
+    const model = analyzeDocument(text, kind);
+    expect(model.reactions).toHaveLength(count);
+    expect(equationFindings(text, kind)).toEqual([]);
+    const broken = text.replace(written, dropped);
+    const found = equationFindings(broken, kind);
+    expect(found.map((finding) => finding.code)).toEqual(["equation-unbalanced"]);
+    expect(fixed(broken, found[0])).toBe(text);
+  });
+});
+
 describe("the example workspace", () => {
   it("shows only the two equations wrong on purpose", () => {
     const root = join(__dirname, "..", "..", "examples");
