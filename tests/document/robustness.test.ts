@@ -103,6 +103,17 @@ describe("robustness", () => {
     }
   });
 
+  // common practice: a no-break space or a stray byte order mark is white space to a reader.
+  it.each([
+    ["a no-break space in an mhchem span", "$\\ce{SF4\u00a0+ F2 -> SF6}$ and NF3"],
+    ["a byte order mark alone on a line of a chemistry fence", "```chem\nSF4 + F2\n\ufeff\nNF3\n"],
+    ["a byte order mark inside a chemistry fence line", "```chem\nSF4\ufeff+ F2\n```\nNF3"],
+  ])("reads %s to the end", (_, text) => {
+    const model = analyzeDocument(text, "markdown");
+    expect(model.occurrences.map((occurrence) => occurrence.text)).toContain("NF3");
+    expectRangesInside(model, text.length);
+  });
+
   it.each(KINDS)("reads a 2 MB document as %s", (kind) => {
     const line = '| SF4 | 34 | seesaw |, NF3,"x"\t- formula: NH4+ `smiles:C` \\ce{SO4^2-} KR-0412 ';
     const text = line.repeat(Math.ceil(2_000_000 / line.length));

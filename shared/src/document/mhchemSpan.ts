@@ -47,7 +47,9 @@ export function mhchemPieces(text: string, start: number, end: number, inLabel =
   let index = start;
   while (index < end) {
     const code = text.charCodeAt(index);
-    if (code === 0x20 || code === 0x0a || code === 0x09 || code === 0x0d) {
+    // Any white space ends a word, a no-break space or byte order mark too: the word after it
+    // starts past it, so the scan always moves on.
+    if (code === 0x20 || code === 0x0a || code === 0x09 || code === 0x0d || /\s/.test(text[index])) {
       index++;
       continue;
     }
