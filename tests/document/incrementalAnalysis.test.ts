@@ -76,6 +76,28 @@ const MARKDOWN_LINES = [
   "<!-- DO NOT USE -->NO is kept in bay 3.",
 ];
 
+// What writers also do to notebooks: CRLF lines, headings, other fences, mhchem spans, table rows,
+// pasted blocks of several lines, a stray byte order mark, front matter.
+const MORE_MARKDOWN_LINES = [
+  ...MARKDOWN_LINES,
+  "## Heading with SF4\r",
+  "NH3 and BF3 in one line\r",
+  "````",
+  "~~~chem",
+  "~~~",
+  "```mhchem",
+  "$\\ce{XeF4 + F2 -> XeF6}$ then $\\ce{SO4^2-}$",
+  "| XeF4 | square planar |\r",
+  "| CH5 | tetrahedral |",
+  "| Formula | Shape |\n|---|---|\n| SF4 | seesaw |",
+  "Pasted:\n\n```chem\nNF3 + F2\n```\n\nClF3 and CLF3",
+  "\ufeff",
+  "---\ntitle: SF4\n---",
+  "  ```",
+  "    indented SF4 code",
+  "Text with `NO2` and H<sub>2</sub>O",
+];
+
 interface Session {
   text: ChunkedText;
   readonly analyser: ReturnType<typeof createDocumentAnalyser>;
@@ -156,6 +178,36 @@ describe("incremental analysis after random edits", () => {
       randomEdit(session, random, MARKDOWN_LINES);
       checkAgainstScratch(session, kind, random);
     }
+  });
+
+  it.each([5, 6, 7, 8])("a markdown notebook with pasted blocks, CRLF and fences agrees through 600 edits (seed %i)", (seed) => {
+    const random = seededRandom(seed);
+    const lines = Array.from({ length: 80 }, (_, index) => MORE_MARKDOWN_LINES[(index * 7 + seed) % MORE_MARKDOWN_LINES.length]);
+    const kind = "markdown";
+    const session: Session = { text: chunkedTextOf(`${lines.join("\n")}\n`, 256), analyser: createDocumentAnalyser(kind) };
+    for (let edit = 0; edit < 600; edit++) {
+      randomEdit(session, random, MORE_MARKDOWN_LINES);
+      if (random() < 0.2) {
+        // A version only hovered over, its blocks split no further than the hover needed.
+        const analysis = session.analyser.analyse(session.text);
+        analysis.speciesAt(Math.floor(random() * session.text.length));
+        continue;
+      }
+      checkAgainstScratch(session, kind, random);
+    }
+  });
+
+  it("answers a hover far into a long notebook before the whole of it is split", () => {
+    // common practice: one paragraph repeated until the notebook is well past a megabyte.
+    const paragraph = "Dana weighed SF4 and XeF4 into the glovebox; NH4+ stayed in the fridge.\n\n";
+    const text = paragraph.repeat(20_000);
+    const analysis = createDocumentAnalyser("markdown").analyse(chunkedTextOf(text));
+    const offset = text.lastIndexOf("XeF4") + 1;
+    const expected = speciesAtOffset(analyzeDocument(text, "markdown"), offset);
+    expect(expected?.text).toBe("XeF4");
+    expect(analysis.speciesAt(offset)?.range).toEqual(expected?.range);
+    // The whole analysis still agrees once it is done.
+    expect(canonical(analysis.findings())).toEqual(canonical(fromScratch(text, "markdown")));
   });
 
   it.each(["plaintext", "json", "yaml"] as const)("%s is read whole and agrees with a fresh analysis", (kind) => {

@@ -8,22 +8,21 @@
  * Tables: segments are whole chunks of the chunked text (records never cross a segment's end);
  * each is read under the document's header, as the command line reads a file in batches, with
  * one row memo for the document. A changed header or delimiter reads every segment again.
- * Markdown: segments are the blocks of `markdownBlocks`, remembered by their text. Other kinds
- * (plain text, JSON, YAML) are read whole on every version.
+ * Markdown: segments are the blocks of `markdownBlocks`, split again only around an edit (see
+ * `markdownAnalyser`). Other kinds (plain text, JSON, YAML) are read whole on every version.
  */
 import { analysedTextOf, MAX_ANALYSED_LENGTH } from "./analysedText";
-import { analyzeDocument, distinctReactions } from "./analyzeDocument";
-import { shiftedReaction } from "./reactions/proseEquations";
+import { analyzeDocument } from "./analyzeDocument";
 import { checkDocument } from "./checkDocument";
 import { findingsInParts } from "./findingsInParts";
 import { sliceOf, wholeText, type ChunkedText, type TextChunk } from "./chunkedText";
-import { markdownBlocks, scanMarkdownBlock, type MarkdownBlock } from "./scanMarkdown";
+import { markdownAnalyser } from "./markdownAnalysis";
+import { joinedModels, shiftedModel } from "./shiftedModel";
 import { memoisedReader, type SpeciesReader } from "./speciesReader";
 import { speciesAtOffset, type SpeciesAtOffset } from "./speciesAt";
 import { delimitedRowExtent, sniffDelimiter } from "./tables/csv";
 import { checkDelimitedText, delimitedRowMemo, findHeader, moved } from "./tables/delimitedFindings";
-import type { RecordSink } from "./tables/records";
-import type { DocumentKind, DocumentModel, Finding, SpeciesOccurrence, TableCell, TableRecord, UnreadableSpecies } from "./types";
+import type { DocumentKind, DocumentModel, Finding, SpeciesOccurrence } from "./types";
 
 /** One analysed version of a document. Everything is worked out on first use. */
 export interface DocumentAnalysis {
@@ -71,7 +70,7 @@ const BINARY_PROBE_LENGTH = 8 * 1024;
 export function createDocumentAnalyser(kind: DocumentKind, limit = MAX_ANALYSED_LENGTH): DocumentAnalyser {
   const read = memoisedReader();
   const table = kind === "csv" || kind === "tsv" ? tableSegments(kind, read) : undefined;
-  const markdown = kind === "markdown" ? markdownSegments(read) : undefined;
+  const markdown = kind === "markdown" ? markdownAnalyser(read) : undefined;
   return {
     analyse(text) {
       if (sliceOf(text, 0, BINARY_PROBE_LENGTH).includes("\u0000")) return wholeAnalysis(kind, "", read, { binary: true });
@@ -80,7 +79,7 @@ export function createDocumentAnalyser(kind: DocumentKind, limit = MAX_ANALYSED_
         return wholeAnalysis(kind, analysed.text, read, { truncatedAt: analysed.truncatedAt });
       }
       if (table) return table(text);
-      if (markdown) return markdown(wholeText(text));
+      if (markdown) return markdown(text);
       return wholeAnalysis(kind, wholeText(text), read, {});
     },
   };
@@ -289,176 +288,4 @@ function endsOnRecordBoundary(chunks: readonly TextChunk[], delimiter: string): 
 
 function sameChunks(a: readonly TextChunk[], b: readonly TextChunk[]): boolean {
   return a.length === b.length && a.every((chunk, index) => chunk === b[index]);
-}
-
-// ---------------------------------------------------------------------------------------------
-// Markdown
-
-/** What one block yields, with offsets into the text it was read in. */
-interface BlockPart {
-  readonly start: number;
-  /** The block's model, moved to `start` when first asked for (findings need no model). */
-  model(): DocumentModel;
-  /** The model as first read, wherever the block then was. */
-  readonly unplaced: DocumentModel;
-  readonly findings: readonly Finding[];
-}
-
-function markdownSegments(read: SpeciesReader): (text: string) => DocumentAnalysis {
-  let remembered = new Map<string, BlockPart>();
-  return (text) => {
-    const blocks = markdownBlocks(text);
-    // Each block is read (or found among the last version's) when first needed.
-    const known = new Map<string, BlockPart>();
-    const previous = remembered;
-    remembered = known;
-    const parts: (BlockPart | undefined)[] = new Array(blocks.length);
-    const partOf = (index: number): BlockPart => {
-      let part = parts[index];
-      if (part) return part;
-      const block = blocks[index];
-      const key = blockKey(text, block);
-      const before = known.get(key) ?? previous.get(key);
-      part = before ? shiftedPart(before, block.start) : blockPart(text, block, read);
-      known.set(key, part);
-      parts[index] = part;
-      return part;
-    };
-    /** The indexes of the blocks that overlap `start`..`end`, ends included. */
-    const indexesAround = (start: number, end: number): number[] => {
-      const indexes: number[] = [];
-      let low = 0;
-      let high = blocks.length;
-      while (low < high) {
-        const middle = (low + high) >> 1;
-        if (blocks[middle].end < start) low = middle + 1;
-        else high = middle;
-      }
-      for (let index = low; index < blocks.length && blocks[index].start <= end; index++) indexes.push(index);
-      return indexes;
-    };
-    let model: DocumentModel | undefined;
-    let findings: readonly Finding[] | undefined;
-    const modelOf = (): DocumentModel =>
-      (model ??= joinedModels(
-        "markdown",
-        blocks.map((_, index) => partOf(index).model()),
-      ));
-    const modelAround = (start: number, end: number): DocumentModel =>
-      joinedModels(
-        "markdown",
-        indexesAround(start, end).map((index) => partOf(index).model()),
-      );
-    return {
-      kind: "markdown",
-      binary: false,
-      findings: () => (findings ??= blocks.flatMap((_, index) => partOf(index).findings)),
-      *findingParts() {
-        if (findings) {
-          yield findings;
-          return;
-        }
-        for (let index = 0; index < blocks.length; index++) yield partOf(index).findings;
-      },
-      findingsAround: (start, end) => indexesAround(start, end).flatMap((index) => partOf(index).findings),
-      model: modelOf,
-      modelAround,
-      speciesAt: (offset) => speciesAtOffset(modelAround(offset, offset), offset),
-      distinctSpecies: () => distinct(blocks.flatMap((_, index) => partOf(index).unplaced.occurrences)),
-    };
-  };
-}
-
-/** What a block's reading depends on: its kind, its text, and the rest of the lines it starts and ends on. */
-function blockKey(text: string, block: MarkdownBlock): string {
-  const lineStart = text.lastIndexOf("\n", block.start - 1) + 1;
-  let lineEnd = text.indexOf("\n", block.end);
-  if (lineEnd < 0) lineEnd = text.length;
-  return `${block.kind}\u0000${text.slice(lineStart, block.start)}\u0000${text.slice(block.start, block.end)}\u0000${text.slice(block.end, lineEnd)}`;
-}
-
-function blockPart(text: string, block: MarkdownBlock, read: SpeciesReader): BlockPart {
-  const sink: RecordSink = { occurrences: [], unreadable: [], records: [], reactions: [] };
-  scanMarkdownBlock(text, block, read, sink);
-  const model: DocumentModel = {
-    kind: "markdown",
-    occurrences: [...sink.occurrences].sort((a, b) => a.range.start - b.range.start),
-    records: sink.records,
-    problems: [],
-    unreadable: [...sink.unreadable].sort((a, b) => a.range.start - b.range.start),
-    reactions: distinctReactions(sink.reactions ?? []),
-  };
-  return { start: block.start, model: () => model, unplaced: model, findings: checkDocument(model, undefined) };
-}
-
-function shiftedPart(part: BlockPart, start: number): BlockPart {
-  const by = start - part.start;
-  if (by === 0) return part;
-  let model: DocumentModel | undefined;
-  return {
-    start,
-    model: () => (model ??= shiftedModel(part.model(), by)),
-    unplaced: part.unplaced,
-    findings: part.findings.map((finding) => moved(finding, by)),
-  };
-}
-
-// ---------------------------------------------------------------------------------------------
-// Models
-
-function joinedModels(kind: DocumentKind, models: readonly DocumentModel[]): DocumentModel {
-  if (models.length === 1) return models[0];
-  return {
-    kind,
-    occurrences: models.flatMap((model) => model.occurrences),
-    records: models.flatMap((model) => model.records),
-    problems: models.flatMap((model) => model.problems),
-    unreadable: models.flatMap((model) => model.unreadable ?? []),
-    reactions: models.flatMap((model) => model.reactions ?? []),
-  };
-}
-
-/** `model` with every range moved `by` characters; a record still shares its occurrences with the list. */
-function shiftedModel(model: DocumentModel, by: number): DocumentModel {
-  if (by === 0) return model;
-  const occurrences = new Map<SpeciesOccurrence, SpeciesOccurrence>();
-  const occurrence = (item: SpeciesOccurrence): SpeciesOccurrence => {
-    let shifted = occurrences.get(item);
-    if (!shifted) {
-      shifted = shiftedOccurrence(item, by);
-      occurrences.set(item, shifted);
-    }
-    return shifted;
-  };
-  const cell = (item: TableCell): TableCell => ({ ...item, range: shiftedRange(item.range, by) });
-  const record = (item: TableRecord): TableRecord => ({
-    ...item,
-    species: occurrence(item.species),
-    cells: item.cells.map(cell),
-    ...(item.otherNames ? { otherNames: item.otherNames.map(occurrence) } : {}),
-  });
-  const unreadable = (item: UnreadableSpecies): UnreadableSpecies => ({
-    ...item,
-    range: shiftedRange(item.range, by),
-    problem: item.problem.range ? { ...item.problem, range: shiftedRange(item.problem.range, by) } : item.problem,
-  });
-  return {
-    kind: model.kind,
-    occurrences: model.occurrences.map(occurrence),
-    records: model.records.map(record),
-    problems: model.problems.map((finding) => moved(finding, by)),
-    unreadable: (model.unreadable ?? []).map(unreadable),
-    reactions: (model.reactions ?? []).map((reaction) => shiftedReaction(reaction, by)),
-  };
-}
-
-function shiftedRange(range: { readonly start: number; readonly end: number }, by: number): { start: number; end: number } {
-  return { start: range.start + by, end: range.end + by };
-}
-
-function shiftedOccurrence(occurrence: SpeciesOccurrence, by: number): SpeciesOccurrence {
-  const range = shiftedRange(occurrence.range, by);
-  // A reading placed in the document carries the same range as its occurrence.
-  const readingRange = occurrence.reading.range === occurrence.range ? range : shiftedRange(occurrence.reading.range, by);
-  return { ...occurrence, range, reading: { ...occurrence.reading, range: readingRange } };
 }

@@ -47,24 +47,43 @@ export function* markdownSteps(text: string, read: SpeciesReader, sink: RecordSi
  * fenced blocks and pipe tables. Cheap: nothing is read as chemistry here. What a block yields
  * depends on its own text and the rest of the lines it starts and ends on.
  */
-export function markdownBlocks(text: string): MarkdownBlock[] {
-  const blocks: MarkdownBlock[] = [];
+export function markdownBlocks(text: string, options: MarkdownBlockOptions = {}): MarkdownBlock[] {
+  return [...markdownBlockStream(text, options)];
+}
+
+/** Where a split of markdown text starts. */
+export interface MarkdownBlockOptions {
+  /**
+   * False when `text` is a stretch of a document that starts where a block of the whole
+   * document starts: no byte order mark or front matter is looked for (default true).
+   */
+  readonly atDocumentStart?: boolean;
+}
+
+/**
+ * `markdownBlocks` one block at a time. Split from a block's start, the text after it yields the
+ * blocks a split of the whole document yields there: the split keeps no state across a block start.
+ */
+export function* markdownBlockStream(text: string, options: MarkdownBlockOptions = {}): Generator<MarkdownBlock, void, void> {
+  const atDocumentStart = options.atDocumentStart ?? true;
   const comments = commentRanges(text);
   let commentIndex = 0;
-  let position = text.charCodeAt(0) === 0xfeff ? 1 : 0;
-  const front = frontMatter(text, position);
+  let position = atDocumentStart && text.charCodeAt(0) === 0xfeff ? 1 : 0;
+  const front = atDocumentStart ? frontMatter(text, position) : undefined;
   if (front) {
-    blocks.push(front);
+    yield front;
     position = front.end;
   }
   let paragraphStart = -1;
   let paragraphEnd = -1;
+  const blocks: MarkdownBlock[] = [];
   const flush = (): void => {
     if (paragraphStart >= 0) blocks.push({ kind: "prose", start: paragraphStart, end: paragraphEnd });
     paragraphStart = -1;
   };
 
   while (position < text.length) {
+    if (blocks.length > 0) yield* blocks.splice(0, blocks.length);
     while (commentIndex < comments.length && comments[commentIndex].end <= position) commentIndex++;
     const comment = comments[commentIndex];
     if (comment && comment.start <= position) {
@@ -106,7 +125,7 @@ export function markdownBlocks(text: string): MarkdownBlock[] {
     position = next;
   }
   flush();
-  return blocks;
+  yield* blocks;
 }
 
 /** Scans one block of `text` (found by `markdownBlocks`) into `sink`, with offsets into `text`. */

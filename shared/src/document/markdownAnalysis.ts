@@ -1,0 +1,393 @@
+/**
+ * Markdown analysed version after version: the text is cut into the blocks of `markdownBlocks`,
+ * and an edit splits again only from a block start before it to the first block start after it
+ * where the new split meets the old one; the blocks before and after are the last version's,
+ * moved. Each block is read once, with offsets from its own start, so a block that only moved
+ * keeps its findings. The first split of a document is made as far as a request needs it, so a
+ * request about one place is not kept waiting by a long document.
+ */
+import { distinctReactions } from "./analyzeDocument";
+import { checkDocument } from "./checkDocument";
+import { chunkIndexAt, sliceOf, type ChunkedText } from "./chunkedText";
+import type { DocumentAnalysis } from "./incrementalAnalysis";
+import { markdownBlocks, markdownBlockStream, scanMarkdownBlock, type MarkdownBlock } from "./scanMarkdown";
+import { joinedModels, shiftedModel } from "./shiftedModel";
+import { speciesAtOffset } from "./speciesAt";
+import type { SpeciesReader } from "./speciesReader";
+import { moved } from "./tables/delimitedFindings";
+import type { RecordSink } from "./tables/records";
+import type { DocumentModel, Finding, SpeciesOccurrence } from "./types";
+
+/** What one block yields, with offsets from the block's start. */
+interface BlockReading {
+  readonly model: DocumentModel;
+  readonly findings: readonly Finding[];
+}
+
+/** One version's blocks, each with offsets from its own start, and where each starts. */
+interface BlockList {
+  readonly text: ChunkedText;
+  readonly blocks: MarkdownBlock[];
+  readonly starts: number[];
+  /** The split still to be made, from a block start to the end of the text. */
+  rest?: { readonly from: number; stream?: Generator<MarkdownBlock, void, void>; source?: string };
+}
+
+/** An edit that changes more text than this is split afresh. */
+const LARGE_CHANGE = 1024 * 1024;
+/** A request this far past where the first split has got to is answered from the lines around it. */
+const FAR_AHEAD = 256 * 1024;
+/** How much text around a position is read when the split has not got there yet. */
+const LOCAL_READ = 2048;
+/** Placed block models kept per version, for requests about one place. */
+const PLACED_MODELS_KEPT = 16;
+/** Readings remembered by their text, for blocks written again word for word (a repeated table row, a run's template). */
+const READINGS_BY_TEXT_KEPT = 2048;
+/** Only blocks shorter than this (with their lines) are remembered by text. */
+const READING_BY_TEXT_LENGTH = 2048;
+/** Distinct species texts remembered for preparing hovers. */
+const DISTINCT_SPECIES_KEPT = 4096;
+
+/** Analyses successive versions of one markdown document, reusing the blocks an edit left alone. */
+export function markdownAnalyser(read: SpeciesReader): (text: ChunkedText) => DocumentAnalysis {
+  // Keyed by a block object: a block an edit left alone is the same object in the next version.
+  const readings = new WeakMap<MarkdownBlock, BlockReading>();
+  const byText = new Map<string, BlockReading>();
+  const reader: BlockReader = { read, byText, met: new Map() };
+  let last: BlockList | undefined;
+  return (text) => {
+    const list: BlockList = (last && editedList(last, text)) ?? { text, blocks: [], starts: [], rest: { from: 0 } };
+    last = list;
+    return analysisOf(list, reader, readings);
+  };
+}
+
+/** How blocks are read: the species reader, and readings remembered by the text read (bounded). */
+interface BlockReader {
+  readonly read: SpeciesReader;
+  readonly byText: Map<string, BlockReading>;
+  /** One occurrence of each distinct species text read so far, in any version (bounded). */
+  readonly met: Map<string, SpeciesOccurrence>;
+}
+
+function analysisOf(list: BlockList, reader: BlockReader, readings: WeakMap<MarkdownBlock, BlockReading>): DocumentAnalysis {
+  const read = reader.read;
+  const { blocks, starts } = list;
+  const readingOf = (index: number): BlockReading => {
+    const block = blocks[index];
+    let reading = readings.get(block);
+    if (!reading) {
+      reading = blockReading(list, index, reader);
+      readings.set(block, reading);
+    }
+    return reading;
+  };
+  const placedFindings = (index: number): readonly Finding[] => {
+    const findings = readingOf(index).findings;
+    const start = starts[index];
+    return start === 0 ? findings : findings.map((finding) => moved(finding, start));
+  };
+  const placed = new Map<number, DocumentModel>();
+  const placedModel = (index: number): DocumentModel => {
+    let model = placed.get(index);
+    if (!model) {
+      model = shiftedModel(readingOf(index).model, starts[index]);
+      placed.set(index, model);
+      if (placed.size > PLACED_MODELS_KEPT) placed.delete(placed.keys().next().value as number);
+    }
+    return model;
+  };
+  /** The indexes of the blocks that overlap `start`..`end`, ends included (the split made that far). */
+  const indexesAround = (start: number, end: number): number[] => {
+    splitUpTo(list, end);
+    let low = 0;
+    let high = blocks.length;
+    while (low < high) {
+      const middle = (low + high) >> 1;
+      if (starts[middle] + blocks[middle].end < start) low = middle + 1;
+      else high = middle;
+    }
+    const indexes: number[] = [];
+    for (let index = low; index < blocks.length && starts[index] <= end; index++) indexes.push(index);
+    return indexes;
+  };
+  /** Whether the split must still go far to reach `offset`: the lines around it are read instead. */
+  const farAhead = (offset: number): boolean => list.rest !== undefined && offset - splitReached(list) > FAR_AHEAD;
+  const modelAround = (start: number, end: number): DocumentModel =>
+    farAhead(end) ? localModel(list.text, start, end, read) : joinedModels("markdown", indexesAround(start, end).map(placedModel));
+  let findings: readonly Finding[] | undefined;
+  const allFindings = (): readonly Finding[] => {
+    if (findings) return findings;
+    const all: Finding[] = [];
+    for (let index = 0; hasBlock(list, index); index++) for (const finding of placedFindings(index)) all.push(finding);
+    findings = all;
+    return findings;
+  };
+  return {
+    kind: "markdown",
+    binary: false,
+    findings: allFindings,
+    *findingParts() {
+      if (findings) {
+        yield findings;
+        return;
+      }
+      for (let index = 0; hasBlock(list, index); index++) yield placedFindings(index);
+    },
+    findingsAround: (start, end) =>
+      farAhead(end) ? localFindings(list.text, start, end, read) : indexesAround(start, end).flatMap(placedFindings),
+    model: () => {
+      const models: DocumentModel[] = [];
+      for (let index = 0; hasBlock(list, index); index++) models.push(placedModel(index));
+      return models.length === 0 ? emptyModel() : joinedModels("markdown", models);
+    },
+    modelAround,
+    speciesAt: (offset) => speciesAtOffset(modelAround(offset, offset), offset),
+    // Gathered as blocks are read, so a long document is not walked again on every version.
+    distinctSpecies: () => [...reader.met.values()],
+  };
+}
+
+// ---------------------------------------------------------------------------------------------
+// The split
+
+/** Whether block `index` exists, splitting further if needed. */
+function hasBlock(list: BlockList, index: number): boolean {
+  while (index >= list.blocks.length && list.rest) nextBlock(list);
+  return index < list.blocks.length;
+}
+
+/** Splits until every block starting at or before `offset` is known. */
+function splitUpTo(list: BlockList, offset: number): void {
+  while (list.rest && (list.starts.length === 0 || list.starts[list.starts.length - 1] <= offset)) nextBlock(list);
+}
+
+/** How far the split has got: every block starting before here is known. */
+function splitReached(list: BlockList): number {
+  const last = list.blocks.length - 1;
+  return last < 0 ? 0 : list.starts[last];
+}
+
+function nextBlock(list: BlockList): void {
+  const rest = list.rest;
+  if (!rest) return;
+  if (!rest.stream) {
+    rest.source = sliceOf(list.text, rest.from, list.text.length);
+    rest.stream = markdownBlockStream(rest.source, { atDocumentStart: rest.from === 0 });
+  }
+  const next = rest.stream.next();
+  if (next.done) {
+    list.rest = undefined;
+    return;
+  }
+  list.blocks.push(movedBlock(next.value, -next.value.start));
+  list.starts.push(rest.from + next.value.start);
+}
+
+/**
+ * The next version's blocks after an edit, or undefined when it is best split afresh. The split
+ * restarts at a block start whose line and the line after it lie before the edit (the split
+ * decides a line's block looking one line ahead), and stops at the first block start after the
+ * edit, on a line start in both versions, where the old version also had a block start: from a
+ * block start the split depends only on the text after it, which the edit left alone.
+ */
+function editedList(old: BlockList, text: ChunkedText): BlockList | undefined {
+  const change = changedStretch(old.text, text);
+  if (!change) return old;
+  if (change.oldEnd - change.start > LARGE_CHANGE || change.newEnd - change.start > LARGE_CHANGE) return undefined;
+  const lineStart = lineStartAt(text, change.start);
+  const lineBefore = lineStart > 0 ? lineStartAt(text, lineStart - 1) : 0;
+  const before = lastIndexBefore(old.starts, lineBefore);
+  const first = Math.max(0, before);
+  // Front matter ends wherever its closing line is: an edit to it, or to a document that opens
+  // with "---" and has none yet, is split afresh.
+  if ((first === 0 || old.blocks[0]?.kind !== "frontMatter") && opensWithFrontMatterLine(text)) return undefined;
+  const restart = before < 0 ? 0 : old.starts[before];
+  const kept = { blocks: old.blocks.slice(0, first), starts: old.starts.slice(0, first) };
+  // An old version not split to its end yet: split the new one on from the restart.
+  if (old.rest) return { text, blocks: kept.blocks, starts: kept.starts, rest: { from: restart } };
+  const delta = text.length - old.text.length;
+  for (let span = 8192; ; span *= 2) {
+    const reach = change.newEnd + span;
+    const windowEnd = reach >= text.length ? text.length : Math.min(text.length, lineEndAt(text, reach) + 1);
+    const complete = windowEnd >= text.length;
+    const window = sliceOf(text, restart, windowEnd);
+    const blocks = [...kept.blocks];
+    const starts = [...kept.starts];
+    for (const block of markdownBlockStream(window, { atDocumentStart: restart === 0 })) {
+      const at = restart + block.start;
+      if (at >= change.newEnd && block.start > 0 && window.charCodeAt(block.start - 1) === 0x0a) {
+        const lineEnd = window.indexOf("\n", block.start);
+        const decided = complete || (lineEnd >= 0 && window.indexOf("\n", lineEnd + 1) >= 0);
+        const match = decided ? indexOf(old.starts, at - delta) : -1;
+        if (match >= 0 && sliceOf(old.text, at - delta - 1, at - delta) === "\n") {
+          for (let index = match; index < old.blocks.length; index++) {
+            blocks.push(old.blocks[index]);
+            starts.push(old.starts[index] + delta);
+          }
+          return { text, blocks, starts };
+        }
+      }
+      blocks.push(movedBlock(block, -block.start));
+      starts.push(at);
+    }
+    if (complete) return { text, blocks, starts };
+  }
+}
+
+/** Where two versions differ: from `start` to `oldEnd` in the old one, to `newEnd` in the new. */
+function changedStretch(old: ChunkedText, text: ChunkedText): { start: number; oldEnd: number; newEnd: number } | undefined {
+  const shorter = Math.min(old.chunks.length, text.chunks.length);
+  let same = 0;
+  while (same < shorter && old.chunks[same] === text.chunks[same]) same++;
+  if (same === old.chunks.length && same === text.chunks.length) return undefined;
+  let sameAtEnd = 0;
+  while (sameAtEnd < shorter - same && old.chunks[old.chunks.length - 1 - sameAtEnd] === text.chunks[text.chunks.length - 1 - sameAtEnd])
+    sameAtEnd++;
+  const from = old.starts[same];
+  const oldTo = old.starts[old.chunks.length - sameAtEnd];
+  const newTo = text.starts[text.chunks.length - sameAtEnd];
+  if (oldTo - from > LARGE_CHANGE || newTo - from > LARGE_CHANGE) return { start: from, oldEnd: oldTo, newEnd: newTo };
+  // Chunks are a few kilobytes: narrow the change down to the characters that differ.
+  const before = sliceOf(old, from, oldTo);
+  const after = sliceOf(text, from, newTo);
+  let prefix = 0;
+  while (prefix < before.length && prefix < after.length && before.charCodeAt(prefix) === after.charCodeAt(prefix)) prefix++;
+  let suffix = 0;
+  while (
+    suffix < before.length - prefix &&
+    suffix < after.length - prefix &&
+    before.charCodeAt(before.length - 1 - suffix) === after.charCodeAt(after.length - 1 - suffix)
+  )
+    suffix++;
+  return { start: from + prefix, oldEnd: oldTo - suffix, newEnd: newTo - suffix };
+}
+
+/** Whether the first line is "---", which opens front matter if a closing line follows anywhere. */
+function opensWithFrontMatterLine(text: ChunkedText): boolean {
+  return /^\uFEFF?---\s*$/.test(sliceOf(text, 0, Math.min(lineEndAt(text, 0), 4096)));
+}
+
+/** The index of the last of the ascending `starts` below `limit`, or -1. */
+function lastIndexBefore(starts: readonly number[], limit: number): number {
+  let low = 0;
+  let high = starts.length;
+  while (low < high) {
+    const middle = (low + high) >> 1;
+    if (starts[middle] < limit) low = middle + 1;
+    else high = middle;
+  }
+  return low - 1;
+}
+
+/** The index of `value` in the ascending `starts`, or -1. */
+function indexOf(starts: readonly number[], value: number): number {
+  const index = lastIndexBefore(starts, value + 1);
+  return index >= 0 && starts[index] === value ? index : -1;
+}
+
+/** The start of the line holding `offset`. */
+function lineStartAt(text: ChunkedText, offset: number): number {
+  if (offset <= 0 || text.chunks.length === 0) return 0;
+  const index = chunkIndexAt(text, offset);
+  const local = offset - text.starts[index];
+  if (local === 0) return text.starts[index];
+  const lineFeed = text.chunks[index].text.lastIndexOf("\n", local - 1);
+  return lineFeed < 0 ? text.starts[index] : text.starts[index] + lineFeed + 1;
+}
+
+/** The offset of the line feed at or after `offset`, or the text's length. */
+function lineEndAt(text: ChunkedText, offset: number): number {
+  if (offset >= text.length) return text.length;
+  const index = chunkIndexAt(text, offset);
+  const lineFeed = text.chunks[index].text.indexOf("\n", offset - text.starts[index]);
+  return lineFeed < 0 ? text.length : text.starts[index] + lineFeed;
+}
+
+// ---------------------------------------------------------------------------------------------
+// Reading blocks
+
+/** `block` with every offset moved `by` characters. */
+function movedBlock(block: MarkdownBlock, by: number): MarkdownBlock {
+  if (by === 0) return block;
+  const range = (item: { readonly start: number; readonly end: number }) => ({ start: item.start + by, end: item.end + by });
+  switch (block.kind) {
+    case "prose":
+      return { kind: "prose", ...range(block) };
+    case "frontMatter":
+      return { kind: "frontMatter", ...range(block), values: block.values.map(range) };
+    case "fence":
+      return { ...block, ...range(block), bodyStart: block.bodyStart + by, bodyEnd: block.bodyEnd + by };
+    case "table":
+      return { kind: "table", ...range(block), lines: block.lines.map(range) };
+  }
+}
+
+/**
+ * Reads block `index` of `list` in the lines it starts and ends on (all a block's reading depends
+ * on), with offsets from the block's start.
+ */
+function blockReading(list: BlockList, index: number, reader: BlockReader): BlockReading {
+  const start = list.starts[index];
+  const block = list.blocks[index];
+  const from = lineStartAt(list.text, start);
+  const source = sliceOf(list.text, from, lineEndAt(list.text, start + block.end));
+  // The split decides a block's shape from its text: kind, place and text are all a reading depends on.
+  const key = source.length < READING_BY_TEXT_LENGTH ? `${block.kind}\u0000${start - from}\u0000${block.end}\u0000${source}` : undefined;
+  const known = key === undefined ? undefined : reader.byText.get(key);
+  if (known) {
+    reader.byText.delete(key!);
+    reader.byText.set(key!, known);
+    return known;
+  }
+  const placed = movedBlock(block, start - from);
+  const sink: RecordSink = { occurrences: [], unreadable: [], records: [], reactions: [] };
+  scanMarkdownBlock(source, placed, reader.read, sink);
+  const model = modelOf(sink);
+  const findings = checkDocument(model, undefined);
+  const by = from - start;
+  const reading = { model: shiftedModel(model, by), findings: by === 0 ? findings : findings.map((finding) => moved(finding, by)) };
+  for (const occurrence of model.occurrences) {
+    if (reader.met.size >= DISTINCT_SPECIES_KEPT) break;
+    if (!reader.met.has(occurrence.text)) reader.met.set(occurrence.text, occurrence);
+  }
+  if (key !== undefined) {
+    reader.byText.set(key, reading);
+    if (reader.byText.size > READINGS_BY_TEXT_KEPT) reader.byText.delete(reader.byText.keys().next().value as string);
+  }
+  return reading;
+}
+
+function modelOf(sink: RecordSink): DocumentModel {
+  return {
+    kind: "markdown",
+    occurrences: [...sink.occurrences].sort((a, b) => a.range.start - b.range.start),
+    records: sink.records,
+    problems: [],
+    unreadable: [...sink.unreadable].sort((a, b) => a.range.start - b.range.start),
+    reactions: distinctReactions(sink.reactions ?? []),
+  };
+}
+
+function emptyModel(): DocumentModel {
+  return { kind: "markdown", occurrences: [], records: [], problems: [], unreadable: [], reactions: [] };
+}
+
+/**
+ * The model of the lines around `start`..`end`, read as markdown of their own: for a request
+ * about a place the first split has not reached yet, the answer the lines there give.
+ */
+function localModel(text: ChunkedText, start: number, end: number, read: SpeciesReader): DocumentModel {
+  const from = lineStartAt(text, Math.max(0, start - LOCAL_READ));
+  const to = lineEndAt(text, Math.min(text.length, end + LOCAL_READ));
+  const source = sliceOf(text, from, to);
+  const sink: RecordSink = { occurrences: [], unreadable: [], records: [], reactions: [] };
+  for (const block of markdownBlocks(source, { atDocumentStart: from === 0 })) {
+    if (block.end >= start - from && block.start <= end - from) scanMarkdownBlock(source, block, read, sink);
+  }
+  return shiftedModel(modelOf(sink), from);
+}
+
+function localFindings(text: ChunkedText, start: number, end: number, read: SpeciesReader): readonly Finding[] {
+  return checkDocument(localModel(text, start, end, read), undefined);
+}
