@@ -58,6 +58,19 @@ export interface DiagnosticsFeature {
  */
 export type AfterDiagnostics = (uri: string, stale: () => boolean) => Promise<void>;
 
+/**
+ * How long a text must stay unchanged before the work after its diagnostics starts: while the
+ * user types, each edit's diagnostics come first, and cards are written in the pause after.
+ */
+const QUIET_MS = 200;
+
+/** Runs `after` once the text has stayed as it is for `QUIET_MS`; nothing if it changed. */
+function afterQuiet(after: AfterDiagnostics, uri: string, stale: () => boolean): void {
+  setTimeout(() => {
+    if (!stale()) after(uri, stale).catch(() => undefined);
+  }, QUIET_MS);
+}
+
 /** Registers pull diagnostics or sets up pushing, depending on the client. */
 export function registerDiagnostics(context: ServerContext, after: AfterDiagnostics = () => Promise.resolve()): DiagnosticsFeature {
   return context.clientFeatures().pullDiagnostics ? registerPull(context, after) : registerPush(context, after);
@@ -188,8 +201,7 @@ function registerPull(context: ServerContext, after: AfterDiagnostics): Diagnost
       const current = await currentDiagnostics(context, uri, () => token.isCancellationRequested);
       if (!current) return empty;
       // Once the answer has gone out, hover cards are written while the editor is quiet.
-      const stale = (): boolean => context.cache.revisionOf(uri) !== current.revision;
-      setImmediate(() => void after(uri, stale).catch(() => undefined));
+      afterQuiet(after, uri, () => context.cache.revisionOf(uri) !== current.revision);
       return { kind: DocumentDiagnosticReportKind.Full, resultId: resultIdOf(current.revision), items: current.items };
     }),
   );
@@ -219,7 +231,7 @@ function registerPush(context: ServerContext, after: AfterDiagnostics): Diagnost
       if (!now || context.cache.revisionOf(uri) !== requestedRevision) return;
       if (current && current.revision !== requestedRevision) return;
       await context.connection.sendDiagnostics({ uri, version: now.version, diagnostics: current?.items ?? [] });
-      await after(uri, () => context.cache.revisionOf(uri) !== requestedRevision);
+      afterQuiet(after, uri, () => context.cache.revisionOf(uri) !== requestedRevision);
     } catch (error) {
       context.log.error(`lonepair: diagnostics for ${uri} failed: ${String(error)}`);
     }
