@@ -1,10 +1,11 @@
 // Benchmark of the language server on very large files, driven over stdio by a protocol client:
 // a hover sent while a 10 MB notebook is being analysed (after opening it and after an edit),
+// one-line edits to that notebook and its peak memory,
 // and the server's peak memory while a 50 MB cylinder CSV is opened and edited ten times.
 // Prints the figures beside the aims and the machine's load.
 import { CYLINDER_HEADER, cylinderRow } from "./cylinderRows.mjs";
 import { notebookText } from "./notebookText.mjs";
-import { loadNote, startServer, verdict } from "./lspBenchClient.mjs";
+import { loadNote, percentile, startServer, verdict } from "./lspBenchClient.mjs";
 
 const AIMS = { hoverDuringAnalysisMs: 50, peakMb: 300 };
 const sleep = (ms) => new Promise((resolve) => setTimeout(resolve, ms));
@@ -32,8 +33,23 @@ const sleep = (ms) => new Promise((resolve) => setTimeout(resolve, ms));
   await server.hover(uri, { line: target.line, character: target.character + 1 });
   const editedHoverMs = performance.now() - editedStart;
   await editedDiagnostics;
+  // Ten more one-line edits spread through the notebook, each to its diagnostics.
+  const editTimes = [];
+  const lineCount = text.split("\n").length;
+  for (let edit = 0; edit < 10; edit++) {
+    const line = Math.floor(((edit + 1) * lineCount) / 12);
+    const start = performance.now();
+    await server.replaceLine(uri, 3 + edit, line, 0, "Checked: ");
+    await server.diagnostics(uri, 3 + edit);
+    editTimes.push(performance.now() - start);
+  }
+  const peak = server.peakMegabytes();
   console.log(`editor, ${(text.length / 1e6).toFixed(1)} MB notebook over stdio (pull diagnostics); ${loadNote()}`);
   console.log(`  open to diagnostics           ${analysisMs.toFixed(0)} ms`);
+  console.log(
+    `  one-line edit to diagnostics  median ${percentile(editTimes, 0.5).toFixed(0)} ms, slowest ${Math.max(...editTimes).toFixed(0)} ms over 10 edits`,
+  );
+  console.log(`  server peak memory            ${peak.toFixed(0)} MB   aim < ${AIMS.peakMb} MB   ${verdict(peak < AIMS.peakMb)}`);
   console.log(
     `  hover during analysis         ${hoverMs.toFixed(1)} ms after opening, ${editedHoverMs.toFixed(1)} ms after an edit   aim < ${AIMS.hoverDuringAnalysisMs} ms   ${verdict(Math.max(hoverMs, editedHoverMs) < AIMS.hoverDuringAnalysisMs)}${hover ? "" : " (no hover came back)"}`,
   );
