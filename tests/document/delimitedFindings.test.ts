@@ -5,7 +5,7 @@ import fc from "fast-check";
 import { describe, expect, it } from "vitest";
 import { analyzeDocument } from "../../shared/src/document/analyzeDocument";
 import { checkDocument } from "../../shared/src/document/checkDocument";
-import { checkDelimitedText, delimitedRowMemo } from "../../shared/src/document/tables/delimitedFindings";
+import { checkDelimitedText, delimitedRowMemo, findHeader } from "../../shared/src/document/tables/delimitedFindings";
 import type { Finding } from "../../shared/src/document/types";
 import { tableArbitrary } from "../support/randomTables";
 
@@ -45,6 +45,11 @@ describe("CSV findings worked out once per distinct row", () => {
         );
         const cutInsideFinding = expected.some((finding) => finding.range.start < cut && finding.range.end > cut);
         if (!cutInsideFinding) expect([...firstPiece, ...secondPiece]).toEqual(expected);
+        // The same piece handed over with only the header row, as the editor reads a part of a table.
+        const header = findHeader(text, delimiter);
+        if (!header || cutInsideFinding) return;
+        const underHeader = checkDelimitedText(text.slice(cut), kind, { delimiter, memo, header: header.text });
+        expect([...firstPiece, ...underHeader.map((finding) => shifted(finding, cut))]).toEqual(expected);
       }),
       { numRuns: 300, seed: 77 },
     );
@@ -60,6 +65,12 @@ describe("CSV findings worked out once per distinct row", () => {
     expect(memo.ordinary).toBe(true);
     expect(found).toEqual(ordinary(text, "csv", ","));
     expect(found.filter((finding) => finding.code.includes("valence"))).toHaveLength(10);
+    // The rows alone under the header row: the same findings, read the ordinary way too.
+    const rowsOnly = rows.join("\n");
+    const rowMemo = delimitedRowMemo();
+    const underHeader = checkDelimitedText(rowsOnly, "csv", { delimiter: ",", memo: rowMemo, header });
+    expect(rowMemo.ordinary).toBe(true);
+    expect(underHeader.map((finding) => shifted(finding, header.length + 1))).toEqual(found);
   });
 
   it("remembers a repeated row once and places its finding on every copy", () => {

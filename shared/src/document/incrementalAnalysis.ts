@@ -148,12 +148,24 @@ function tableSegments(kind: "csv" | "tsv", read: SpeciesReader): (text: Chunked
   // Keyed by a segment's first chunk: chunks an edit left alone are the same objects in the new version.
   let remembered = new WeakMap<TextChunk, SegmentFindings>();
   const models = new Map<TextChunk, { readonly chunks: readonly TextChunk[]; readonly model: DocumentModel }>();
+  // Whether a chunk read from a record's start ends on a record's end, worked out once per chunk
+  // (and delimiter) rather than once per version: a table full of quoted cells is not re-read per edit.
+  let boundaries = { delimiter: "", endsOnRecord: chunkFlag(() => true) };
+
+  // The delimiter and header as last read, with the chunks they were read from.
+  let tableStart:
+    { readonly chunks: readonly TextChunk[]; readonly delimiter: string; readonly header: { text: string; next: number } } | undefined;
 
   return (text) => {
-    const start = sliceOf(text, 0, 65_536);
-    const delimiter = kind === "tsv" ? "\t" : sniffDelimiter(start, ",");
-    const header = headerOf(text, delimiter);
+    const known = tableStart;
+    const sameStart = known !== undefined && known.chunks.every((chunk, index) => text.chunks[index] === chunk);
+    const delimiter = sameStart ? known.delimiter : kind === "tsv" ? "\t" : sniffDelimiter(sliceOf(text, 0, DELIMITER_SNIFF_LENGTH), ",");
+    const header = sameStart ? known.header : headerOf(text, delimiter);
     if (!header) return wholeAnalysis(kind, wholeText(text), read, {});
+    if (!sameStart) {
+      const readTo = Math.max(DELIMITER_SNIFF_LENGTH, header.next + 1);
+      tableStart = { chunks: text.chunks.filter((_, index) => text.starts[index] < readTo), delimiter, header };
+    }
     // Everything before the first record: the part each segment is read after.
     const prefix = sliceOf(text, 0, header.next);
     const key = `${delimiter}${prefix}`;
@@ -162,8 +174,12 @@ function tableSegments(kind: "csv" | "tsv", read: SpeciesReader): (text: Chunked
       remembered = new WeakMap();
       models.clear();
     }
-    const segments = recordSegments(text, header.next, delimiter);
-    const segmentText = (segment: TableSegment): string => segment.chunks.map((chunk) => chunk.text).join("");
+    if (boundaries.delimiter !== delimiter) {
+      boundaries = { delimiter, endsOnRecord: chunkFlag((chunk) => endsOnRecordBoundary([chunk], delimiter)) };
+    }
+    const segments = recordSegments(text, header.next, delimiter, boundaries.endsOnRecord);
+    const segmentText = (segment: TableSegment): string =>
+      segment.chunks.length === 1 ? segment.chunks[0].text : segment.chunks.map((chunk) => chunk.text).join("");
     // The segment holding the header is read on its own; the others after the header's text.
     const readAfterHeader = (segment: TableSegment): { text: string; shift: number; from: number } =>
       segment.start === 0
@@ -173,11 +189,13 @@ function tableSegments(kind: "csv" | "tsv", read: SpeciesReader): (text: Chunked
     const findingsOf = (segment: TableSegment): readonly Finding[] => {
       const known = remembered.get(segment.chunks[0]);
       if (known && sameChunks(known.chunks, segment.chunks)) return known.findings;
-      const source = readAfterHeader(segment);
-      const found = checkDelimitedText(source.text, kind, { delimiter, from: source.from, memo, read });
-      const relative = found.map((finding) => moved(finding, source.shift - segment.start));
-      remembered.set(segment.chunks[0], { chunks: segment.chunks, findings: relative });
-      return relative;
+      // Rows after the header's segment are read under the header row, without a copy of the document's start.
+      const found =
+        segment.start === 0
+          ? checkDelimitedText(segmentText(segment), kind, { delimiter, memo, read })
+          : checkDelimitedText(segmentText(segment), kind, { delimiter, header: header.text, memo, read });
+      remembered.set(segment.chunks[0], { chunks: segment.chunks, findings: found });
+      return found;
     };
 
     const modelOf = (segment: TableSegment): DocumentModel => {
@@ -238,11 +256,14 @@ function tableSegments(kind: "csv" | "tsv", read: SpeciesReader): (text: Chunked
   };
 }
 
+/** How much of a table's start its delimiter is guessed from. */
+const DELIMITER_SNIFF_LENGTH = 65_536;
+
 /** Past this many characters without a header row, a table is read whole. */
 const HEADER_SEARCH_LIMIT = 1024 * 1024;
 
 /** The header row, found in the first chunks (undefined when the table must be read whole). */
-function headerOf(text: ChunkedText, delimiter: string): { next: number } | undefined {
+function headerOf(text: ChunkedText, delimiter: string): { text: string; next: number } | undefined {
   for (let index = 0; index < text.chunks.length && text.starts[index] < HEADER_SEARCH_LIMIT; index++) {
     const end = text.starts[index + 1];
     const start = sliceOf(text, 0, end);
@@ -258,7 +279,12 @@ function headerOf(text: ChunkedText, delimiter: string): { next: number } | unde
  * The chunks cut into segments that start and end on record boundaries: a chunk ends at a line
  * feed, which ends a record unless a quoted field is open there, and then the next chunk joins.
  */
-function recordSegments(text: ChunkedText, firstRecord: number, delimiter: string): TableSegment[] {
+function recordSegments(
+  text: ChunkedText,
+  firstRecord: number,
+  delimiter: string,
+  endsOnRecord: (chunk: TextChunk) => boolean,
+): TableSegment[] {
   const segments: TableSegment[] = [];
   let index = 0;
   while (index < text.chunks.length) {
@@ -267,7 +293,9 @@ function recordSegments(text: ChunkedText, firstRecord: number, delimiter: strin
     index += 1;
     // The header's own chunk must reach past the header line.
     while (index < text.chunks.length && text.starts[index] < firstRecord) chunks.push(text.chunks[index++]);
-    while (index < text.chunks.length && !endsOnRecordBoundary(chunks, delimiter)) chunks.push(text.chunks[index++]);
+    while (index < text.chunks.length && !(chunks.length === 1 ? endsOnRecord(chunks[0]) : endsOnRecordBoundary(chunks, delimiter))) {
+      chunks.push(text.chunks[index++]);
+    }
     segments.push({ start: text.starts[first], end: text.starts[index], chunks });
   }
   return segments;
@@ -284,6 +312,19 @@ function endsOnRecordBoundary(chunks: readonly TextChunk[], delimiter: string): 
     position = row.next;
   }
   return true;
+}
+
+/** A property of a chunk worked out once: chunks an edit left alone are the same objects in the next version. */
+function chunkFlag(work: (chunk: TextChunk) => boolean): (chunk: TextChunk) => boolean {
+  const known = new WeakMap<TextChunk, boolean>();
+  return (chunk) => {
+    let flag = known.get(chunk);
+    if (flag === undefined) {
+      flag = work(chunk);
+      known.set(chunk, flag);
+    }
+    return flag;
+  };
 }
 
 function sameChunks(a: readonly TextChunk[], b: readonly TextChunk[]): boolean {

@@ -43,6 +43,11 @@ export interface DelimitedFindingOptions {
    * read in batches puts the start of the document in front of every batch.
    */
   readonly from?: number;
+  /**
+   * The header row (without its line end) when `text` holds only records: a document read in
+   * parts hands each part over with the header it is read under, instead of a copy of its start.
+   */
+  readonly header?: string;
   readonly memo?: DelimitedRowMemo;
   readonly read?: SpeciesReader;
 }
@@ -67,9 +72,9 @@ export function checkDelimitedText(text: string, kind: "csv" | "tsv", options: D
   const from = options.from ?? 0;
   const memo = options.memo ?? delimitedRowMemo();
   const read = options.read ?? memoisedReader();
-  const ordinary = (start: number): Finding[] => ordinaryFindings(text, kind, delimiter, read, from, start);
+  const ordinary = (start: number): Finding[] => ordinaryFindings(text, kind, delimiter, read, from, start, options.header);
 
-  const header = findHeader(text, delimiter);
+  const header = options.header !== undefined ? { text: options.header, next: 0 } : findHeader(text, delimiter);
   if (!header || memo.ordinary) return ordinary(0);
   const headerKey = `${delimiter}${header.text}`;
   if (memo.headerKey !== headerKey) {
@@ -224,7 +229,10 @@ export function rowFindings(
   return findings.filter((finding) => finding.range.start >= offset).map((finding) => moved(finding, shift - offset));
 }
 
-/** The ordinary reading of the text from `start` (a row start) on, findings before `from` dropped. */
+/**
+ * The ordinary reading of the text from `start` (a row start) on, findings before `from` dropped;
+ * under `givenHeader` when the text holds only records.
+ */
 function ordinaryFindings(
   text: string,
   kind: "csv" | "tsv",
@@ -232,7 +240,11 @@ function ordinaryFindings(
   read: SpeciesReader,
   from: number,
   start: number,
+  givenHeader?: string,
 ): Finding[] {
+  if (givenHeader !== undefined) {
+    return rowFindings(givenHeader, text.slice(start), start, kind, delimiter, read).filter((finding) => finding.range.start >= from);
+  }
   if (start === 0) return documentFindings(text, kind, delimiter, read).filter((finding) => finding.range.start >= from);
   // The rows from `start` on, under the header, as a document of their own.
   const header = findHeader(text, delimiter);
