@@ -15,6 +15,7 @@ import {
   type DocumentKind,
   type Finding,
 } from "../../shared/src/index";
+import { parseTree, type ParseError } from "jsonc-parser/lib/esm/main.js";
 import { seededRandom } from "../support/seededRandom";
 
 function fromScratch(text: string, kind: DocumentKind): Finding[] {
@@ -98,6 +99,83 @@ const MORE_MARKDOWN_LINES = [
   "Text with `NO2` and H<sub>2</sub>O",
 ];
 
+// A reference shelf's records as JSON, one record a line, with records that are right, wrong and
+// unreadable, and lines that break the JSON for a while (as typing does) or close it early.
+const JSON_RECORD_LINES = [
+  '    {"id": "KR-1", "name": "sulfur hexafluoride", "formula": "SF6", "valence electrons": 48, "molecular geometry": "octahedral"},',
+  '    {"id": "KR-2", "formula": "NF3", "valence electrons": 24, "lone pairs": 1},',
+  '    {"id": "KR-3", "formula": "NH3", "molecular geometry": "trigonal planar"},',
+  '    {"id": "KR-4", "formula": "Sf4", "lone pairs": 1},',
+  '    {"id": "KR-5", "formula": "CH5"}, {"id": "KR-6", "formula": "XeF4", "lone pairs": 2},',
+  '    {"SF4": {"lone pairs": 2}, "BF3": {"molecular geometry": "trigonal pyramidal"}},',
+  '    [{"formula": "ClF3", "valence electrons": 28}], "KR-7", 12, null, // shelf 7\r',
+  '    {"id": "KR-8", "formula": "SO2", "valence electrons": 18, /* checked */ "lone pairs": 1},',
+  '    {"id": "KR-10", "equation": "SF4 + F2 -> SF6"}, {"reaction": "N2 + H2 -> NH3", "formula": "NH3"},',
+];
+const JSON_BREAKING_LINES = [
+  '    {"id": "KR-9", "formula": "SF4',
+  "    ],",
+  '    {"formula": "NF3"}',
+  "  ]",
+  "/* an open comment",
+  '    "formula": "SF6",',
+];
+
+function jsonDocument(lines: readonly string[]): string {
+  return [
+    "{",
+    '  "lab": "Kestrel Ridge Analytical", "formula": "CO2", "valence electrons": 14,',
+    '  "records": [',
+    ...lines,
+    '    {"id": "end of shelf"}',
+    "  ],",
+    '  "reviewed by": {"formula": "NO2", "name": "nitrogen dioxide"}',
+    "}",
+    "",
+  ].join("\n");
+}
+
+/** Edits as a writer makes them to a JSON file: mostly whole records, sometimes a keystroke, often undone. */
+function randomJsonEdit(session: Session, random: () => number, undo: { start: number; length: number; removed: string }[]): void {
+  const plain = wholeText(session.text);
+  const pick = <T>(items: readonly T[]): T => items[Math.floor(random() * items.length)];
+  const lineStarts = [0, ...[...plain.matchAll(/\n/g)].map((match) => match.index + 1)];
+  const choice = random();
+  let start: number;
+  let end: number;
+  let insert: string;
+  const errors: ParseError[] = [];
+  parseTree(plain, errors, { allowTrailingComma: true, disallowComments: false });
+  const broken = errors.length > 0;
+  if (((broken && choice < 0.85) || choice < 0.1) && undo.length > 0) {
+    // Undo the last edit, as an editor does: mostly valid JSON again after a keystroke that broke it.
+    const last = undo.pop()!;
+    session.text = editChunkedText(session.text, last.start, last.start + last.length, last.removed);
+    return;
+  }
+  if (choice < 0.55) {
+    // Replace a line's text with a record line (or, rarely, one that breaks the JSON).
+    const line = Math.floor(random() * lineStarts.length);
+    start = lineStarts[line];
+    const lineFeed = plain.indexOf("\n", start);
+    end = lineFeed < 0 ? plain.length : lineFeed;
+    insert = random() < 0.9 ? pick(JSON_RECORD_LINES) : pick(JSON_BREAKING_LINES);
+  } else if (choice < 0.8) {
+    // Insert or delete whole lines; a paste of several records at once.
+    start = pick(lineStarts);
+    end = random() < 0.4 ? start : Math.min(plain.length, pick(lineStarts.filter((at) => at >= start).slice(0, 4)));
+    const count = 1 + Math.floor(random() * 3);
+    insert = random() < 0.3 ? "" : Array.from({ length: count }, () => `${pick(JSON_RECORD_LINES)}\n`).join("");
+  } else {
+    // A keystroke anywhere.
+    start = Math.floor(random() * (plain.length + 1));
+    end = random() < 0.5 ? start : Math.min(plain.length, start + 1);
+    insert = random() < 0.3 ? "" : pick(["4", "F", " ", "\n", "\r\n", '"', ",", "{", "}", "]", "/*", "*/", "8"]);
+  }
+  undo.push({ start, length: insert.length, removed: plain.slice(start, end) });
+  session.text = editChunkedText(session.text, start, end, insert);
+}
+
 interface Session {
   text: ChunkedText;
   readonly analyser: ReturnType<typeof createDocumentAnalyser>;
@@ -132,6 +210,34 @@ function randomEdit(session: Session, random: () => number, pieces: readonly str
   session.text = editChunkedText(session.text, start, end, insert);
 }
 
+/**
+ * Edits only a table gets: a paste of several rows (with CRLF line ends as often as not), or one
+ * cell retyped between its delimiters; otherwise one of `randomEdit`'s.
+ */
+function randomTableEdit(session: Session, random: () => number, delimiter: string): void {
+  const choice = random();
+  if (choice >= 0.3) {
+    const pieces = random() < 0.03 ? TABLE_HEADERS : TABLE_ROWS;
+    randomEdit(session, random, delimiter === "," ? pieces : pieces.map((piece) => piece.replaceAll(",", delimiter)));
+    return;
+  }
+  const plain = wholeText(session.text);
+  const pick = <T>(items: readonly T[]): T => items[Math.floor(random() * items.length)];
+  const lineStarts = [0, ...[...plain.matchAll(/\n/g)].map((match) => match.index + 1)];
+  if (choice < 0.15) {
+    const lineEnd = random() < 0.5 ? "\r\n" : "\n";
+    const rows = Array.from({ length: 2 + Math.floor(random() * 6) }, () => pick(TABLE_ROWS).replaceAll(",", delimiter));
+    const at = pick(lineStarts);
+    session.text = editChunkedText(session.text, at, at, rows.map((row) => `${row}${lineEnd}`).join(""));
+    return;
+  }
+  // A cell retyped: the text between two delimiters on one line replaced by a value from another row.
+  const cells = [...plain.matchAll(new RegExp(`[^${delimiter}\n]*`, "g"))].filter((match) => match.index !== undefined);
+  const cell = pick(cells);
+  const values = TABLE_ROWS.flatMap((row) => row.split(","));
+  session.text = editChunkedText(session.text, cell.index, cell.index + cell[0].length, pick(values));
+}
+
 function checkAgainstScratch(session: Session, kind: DocumentKind, random: () => number): void {
   const plain = wholeText(session.text);
   const analysis = session.analyser.analyse(session.text);
@@ -154,17 +260,24 @@ function checkAgainstScratch(session: Session, kind: DocumentKind, random: () =>
 }
 
 describe("incremental analysis after random edits", () => {
-  it.each([1, 2, 3, 4])("a table keeps the findings of a fresh analysis through 600 edits (seed %i)", (seed) => {
+  it.each([
+    [1, "csv"],
+    [2, "csv"],
+    [3, "csv"],
+    [4, "csv"],
+    [5, "tsv"],
+    [6, "tsv"],
+  ] as const)("a table keeps the findings of a fresh analysis through 600 edits (seed %i, %s)", (seed, kind) => {
     const random = seededRandom(seed);
-    const rows = Array.from({ length: 120 }, (_, index) => TABLE_ROWS[(index * 7 + seed) % 6]);
-    const kind = "csv";
+    const delimiter = kind === "tsv" ? "\t" : ",";
+    const rows = Array.from({ length: 120 }, (_, index) => TABLE_ROWS[(index * 7 + seed) % 6].replaceAll(",", delimiter));
     // Small chunks, so that a table of a few hundred rows has many segments.
     const session: Session = {
-      text: chunkedTextOf(`${[TABLE_HEADERS[0], ...rows].join("\n")}\n`, 256),
+      text: chunkedTextOf(`${[TABLE_HEADERS[0].replaceAll(",", delimiter), ...rows].join("\n")}\n`, 256),
       analyser: createDocumentAnalyser(kind),
     };
     for (let edit = 0; edit < 600; edit++) {
-      randomEdit(session, random, random() < 0.03 ? TABLE_HEADERS : TABLE_ROWS);
+      randomTableEdit(session, random, delimiter);
       checkAgainstScratch(session, kind, random);
     }
   });
@@ -197,6 +310,18 @@ describe("incremental analysis after random edits", () => {
     }
   });
 
+  it.each([1, 2, 3, 4])("a JSON list of records keeps the findings of a fresh analysis through 400 edits (seed %i)", (seed) => {
+    const random = seededRandom(seed);
+    const lines = Array.from({ length: 40 }, (_, index) => JSON_RECORD_LINES[(index * 3 + seed) % JSON_RECORD_LINES.length]);
+    const kind = "json";
+    const session: Session = { text: chunkedTextOf(jsonDocument(lines), 256), analyser: createDocumentAnalyser(kind) };
+    const undo: { start: number; length: number; removed: string }[] = [];
+    for (let edit = 0; edit < 400; edit++) {
+      randomJsonEdit(session, random, undo);
+      checkAgainstScratch(session, kind, random);
+    }
+  });
+
   it("answers a hover far into a long notebook before the whole of it is split", () => {
     // common practice: one paragraph repeated until the notebook is well past a megabyte.
     const paragraph = "Dana weighed SF4 and XeF4 into the glovebox; NH4+ stayed in the fridge.\n\n";
@@ -208,6 +333,46 @@ describe("incremental analysis after random edits", () => {
     expect(analysis.speciesAt(offset)?.range).toEqual(expected?.range);
     // The whole analysis still agrees once it is done.
     expect(canonical(analysis.findings())).toEqual(canonical(fromScratch(text, "markdown")));
+  });
+
+  it("a JSON list at the root, edited record by record, agrees with a fresh analysis", () => {
+    const random = seededRandom(11);
+    const lines = Array.from({ length: 60 }, (_, index) => JSON_RECORD_LINES[index % 4].replace(/,$/, index === 59 ? "" : ","));
+    const kind = "json";
+    const session: Session = { text: chunkedTextOf(`[\n${lines.join("\n")}\n]\n`, 256), analyser: createDocumentAnalyser(kind) };
+    const undo: { start: number; length: number; removed: string }[] = [];
+    for (let edit = 0; edit < 400; edit++) {
+      randomJsonEdit(session, random, undo);
+      checkAgainstScratch(session, kind, random);
+    }
+  });
+
+  // Edits at the edges of a record, where a re-read record alone is clean JSON but the document is not.
+  it.each([
+    ["a comma typed after a record's closing brace", [['"lone pairs": 1}', '"lone pairs": 1},']]],
+    ["a comma typed before a record", [['    {"id": "KR-2"', '    ,{"id": "KR-2"']]],
+    ["the comma between two records deleted", [['"lone pairs": 1},', '"lone pairs": 1}']]],
+    ["a bracket typed after a record", [['"lone pairs": 1}', '"lone pairs": 1}]']]],
+    ["a record's opening brace deleted", [['    {"id": "KR-3"', '    "id": "KR-3"']]],
+    ["a space typed before a record", [['    {"id": "KR-3"', '     {"id": "KR-3"']]],
+    ["a second record pasted after the first", [['"lone pairs": 1},', '"lone pairs": 1}, {"formula": "CH5"},']]],
+    [
+      "a comma typed between a record and its comment",
+      [
+        ['"lone pairs": 1},', '"lone pairs": 1} /* shelf 2 */,'],
+        ['"lone pairs": 1} /*', '"lone pairs": 1}, /*'],
+      ],
+    ],
+  ] as const)("a JSON edit at a record's edge: %s", (_, edits) => {
+    const lines = ['    {"id": "KR-1", "formula": "SF6", "valence electrons": 48},', ...JSON_RECORD_LINES.slice(1, 3)];
+    const session: Session = { text: chunkedTextOf(jsonDocument(lines), 256), analyser: createDocumentAnalyser("json") };
+    session.analyser.analyse(session.text).findings();
+    for (const [find, replace] of edits) {
+      const before = wholeText(session.text);
+      const at = before.indexOf(find);
+      session.text = editChunkedText(session.text, at, at + find.length, replace);
+      checkAgainstScratch(session, "json", seededRandom(3));
+    }
   });
 
   it.each(["plaintext", "json", "yaml"] as const)("%s is read whole and agrees with a fresh analysis", (kind) => {

@@ -173,7 +173,8 @@ function chunkOf(text: string): TextChunk {
 }
 
 function countLineBreaks(text: string): number {
-  // indexOf runs far faster than a loop over the characters; carriage returns are rare.
+  if (!hasLongLines(text)) return lineStartsByLoop(text, undefined);
+  // Over lines of some length indexOf runs far faster than a loop over the characters.
   let count = 0;
   for (let at = text.indexOf("\n"); at >= 0; at = text.indexOf("\n", at + 1)) count++;
   for (let at = text.indexOf("\r"); at >= 0; at = text.indexOf("\r", at + 1)) if (text.charCodeAt(at + 1) !== LF) count++;
@@ -182,16 +183,34 @@ function countLineBreaks(text: string): number {
 
 function lineStartsOf(text: string): Int32Array {
   const starts = new Int32Array(countLineBreaks(text));
-  let next = 0;
-  if (text.indexOf("\r") < 0) {
-    for (let at = text.indexOf("\n"); at >= 0; at = text.indexOf("\n", at + 1)) starts[next++] = at + 1;
+  if (!hasLongLines(text) || text.indexOf("\r") >= 0) {
+    lineStartsByLoop(text, starts);
     return starts;
   }
+  let next = 0;
+  for (let at = text.indexOf("\n"); at >= 0; at = text.indexOf("\n", at + 1)) starts[next++] = at + 1;
+  return starts;
+}
+
+/** Whether the first lines average more than a few characters (a run of blank lines does not). */
+function hasLongLines(text: string): boolean {
+  const sample = Math.min(text.length, 1024);
+  let breaks = 0;
+  for (let at = text.indexOf("\n"); at >= 0 && at < sample; at = text.indexOf("\n", at + 1)) breaks++;
+  return breaks * 16 < sample;
+}
+
+/** Counts line breaks one character at a time, writing the offset after each into `starts` when given. */
+function lineStartsByLoop(text: string, starts: Int32Array | undefined): number {
+  let count = 0;
   for (let index = 0; index < text.length; index++) {
     const code = text.charCodeAt(index);
-    if (code <= CR && (code === LF || (code === CR && text.charCodeAt(index + 1) !== LF))) starts[next++] = index + 1;
+    if (code <= CR && (code === LF || (code === CR && text.charCodeAt(index + 1) !== LF))) {
+      if (starts) starts[count] = index + 1;
+      count++;
+    }
   }
-  return starts;
+  return count;
 }
 
 function assemble(chunks: readonly TextChunk[], chunkTarget: number): ChunkedText {

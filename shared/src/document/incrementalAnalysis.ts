@@ -9,12 +9,14 @@
  * each is read under the document's header, as the command line reads a file in batches, with
  * one row memo for the document. A changed header or delimiter reads every segment again.
  * Markdown: segments are the blocks of `markdownBlocks`, split again only around an edit (see
- * `markdownAnalyser`). Other kinds (plain text, JSON, YAML) are read whole on every version.
+ * `markdownAnalyser`). JSON: the elements of its list of records (see `jsonListReader`). Other
+ * kinds (plain text, YAML) are read whole on every version.
  */
 import { analysedTextOf, MAX_ANALYSED_LENGTH } from "./analysedText";
 import { analyzeDocument } from "./analyzeDocument";
 import { checkDocument } from "./checkDocument";
 import { findingsInParts } from "./findingsInParts";
+import { jsonListReader } from "./jsonParts";
 import { sliceOf, wholeText, type ChunkedText, type TextChunk } from "./chunkedText";
 import { markdownAnalyser } from "./markdownAnalysis";
 import { joinedModels, shiftedModel } from "./shiftedModel";
@@ -71,6 +73,7 @@ export function createDocumentAnalyser(kind: DocumentKind, limit = MAX_ANALYSED_
   const read = memoisedReader();
   const table = kind === "csv" || kind === "tsv" ? tableSegments(kind, read) : undefined;
   const markdown = kind === "markdown" ? markdownAnalyser(read) : undefined;
+  const json = kind === "json" ? jsonSegments(read) : undefined;
   return {
     analyse(text) {
       if (sliceOf(text, 0, BINARY_PROBE_LENGTH).includes("\u0000")) return wholeAnalysis(kind, "", read, { binary: true });
@@ -80,6 +83,7 @@ export function createDocumentAnalyser(kind: DocumentKind, limit = MAX_ANALYSED_
       }
       if (table) return table(text);
       if (markdown) return markdown(text);
+      if (json) return json(text);
       return wholeAnalysis(kind, wholeText(text), read, {});
     },
   };
@@ -329,4 +333,38 @@ function chunkFlag(work: (chunk: TextChunk) => boolean): (chunk: TextChunk) => b
 
 function sameChunks(a: readonly TextChunk[], b: readonly TextChunk[]): boolean {
   return a.length === b.length && a.every((chunk, index) => chunk === b[index]);
+}
+
+// ---------------------------------------------------------------------------------------------
+// JSON
+
+/** Below this length a JSON document's species are all listed for preparing hovers. */
+const JSON_SPECIES_LISTED_UP_TO = 256 * 1024;
+
+function jsonSegments(read: SpeciesReader): (text: ChunkedText) => DocumentAnalysis {
+  const list = jsonListReader(read);
+  return (text) => {
+    const version = list(text);
+    let whole: DocumentAnalysis | undefined;
+    const plain = (): DocumentAnalysis => (whole ??= wholeAnalysis("json", wholeText(text), read, {}));
+    const around = (start: number, end: number): DocumentModel => {
+      const stretch = version.elementsAround(start, end);
+      if (!stretch) return plain().model();
+      // The elements read as a list of their own, as the list reader reads them.
+      return shiftedModel(analyzeDocument(`[${sliceOf(text, stretch.start, stretch.end)}]`, "json", read), stretch.start - 1);
+    };
+    return {
+      kind: "json",
+      binary: false,
+      findings: () => version.findings(),
+      *findingParts() {
+        yield version.findings();
+      },
+      findingsAround: (start, end) => version.findings().filter((finding) => finding.range.end >= start && finding.range.start <= end),
+      model: () => plain().model(),
+      modelAround: around,
+      speciesAt: (offset) => speciesAtOffset(around(offset, offset), offset),
+      distinctSpecies: () => (text.length <= JSON_SPECIES_LISTED_UP_TO ? plain().distinctSpecies() : []),
+    };
+  };
 }

@@ -8,8 +8,9 @@
 import { parseTree, printParseErrorCode, type Node, type ParseError } from "jsonc-parser/lib/esm/main.js";
 import type { SpeciesReader } from "../speciesReader";
 import type { Finding } from "../types";
+import { columnUnder } from "./delimitedRecords";
 import { readEquationCell } from "./equationCells";
-import { isEquationHeader, isFormulaHeader, meaningOfHeader, namesSpecies } from "./headers";
+import { isEquationHeader, namesSpecies } from "./headers";
 import { addRecord, type RecordField, type RecordSink } from "./records";
 
 const MESSAGES: Readonly<Record<string, string>> = {
@@ -27,12 +28,15 @@ const MESSAGES: Readonly<Record<string, string>> = {
   InvalidCharacter: "This character is not allowed here.",
 };
 
+/** How JSON is parsed: with comments and trailing commas, as settings files are written. */
+export const JSON_PARSE_OPTIONS = { allowTrailingComma: true, disallowComments: false } as const;
+
 /** Reads a JSON document into `sink`; returns its syntax problems. */
 export function readJsonRecords(text: string, read: SpeciesReader, sink: RecordSink): readonly Finding[] {
   const errors: ParseError[] = [];
   let root: Node | undefined;
   try {
-    root = parseTree(text, errors, { allowTrailingComma: true, disallowComments: false });
+    root = parseTree(text, errors, JSON_PARSE_OPTIONS);
   } catch {
     // Nesting deep enough to exhaust the stack: say so rather than fail.
     return [{ range: { start: 0, end: 0 }, severity: "error", code: "json-syntax", message: "This JSON is nested too deeply to read." }];
@@ -74,9 +78,10 @@ function objectRecord(node: Node, text: string, read: SpeciesReader, sink: Recor
     const [key, value] = property.children ?? [];
     if (!key || !value || typeof key.value !== "string") continue;
     if (isEquationHeader(key.value)) equationValues(value, text, read, sink);
-    const meaning = meaningOfHeader(key.value);
-    const field = meaning && valueField(value, text);
-    if (meaning && field) fields.push({ meaning, formulaHeader: isFormulaHeader(key.value), ...field });
+    // Keys repeat in every record: their meaning is worked out once, as a table's headers are.
+    const column = columnUnder(key.value);
+    const field = column && valueField(value, text);
+    if (column && field) fields.push({ meaning: column.meaning, formulaHeader: column.formulaHeader, ...field });
   }
   if (fields.length === 0) return;
   if (!fields.some((field) => namesSpecies(field.meaning))) {

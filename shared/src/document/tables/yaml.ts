@@ -7,8 +7,9 @@
 import { isMap, isPair, isScalar, isSeq, parseAllDocuments, Scalar, type Node, type Pair, type YAMLMap } from "yaml";
 import type { SpeciesReader } from "../speciesReader";
 import type { Finding } from "../types";
+import { columnUnder } from "./delimitedRecords";
 import { readEquationCell } from "./equationCells";
-import { isEquationHeader, isFormulaHeader, meaningOfHeader, namesSpecies } from "./headers";
+import { isEquationHeader, namesSpecies } from "./headers";
 import { addRecord, type RecordField, type RecordSink } from "./records";
 
 /** Reads a YAML stream (one or more documents) into `sink`; returns its syntax problems. */
@@ -73,10 +74,10 @@ function mappingRecord(node: YAMLMap, key: Scalar | undefined, text: string, rea
   for (const pair of node.items as Pair[]) {
     if (isScalar(pair.key) && isEquationHeader(String(pair.key.value))) equationValues(pair.value as Node | null, text, read, sink);
     if (!isScalar(pair.key) || !isScalar(pair.value)) continue;
-    const header = String(pair.key.value);
-    const meaning = meaningOfHeader(header);
-    const field = meaning && scalarField(pair.value, text);
-    if (meaning && field) fields.push({ meaning, formulaHeader: isFormulaHeader(header), ...field });
+    // Keys repeat in every record: their meaning is worked out once, as a table's headers are.
+    const column = columnUnder(String(pair.key.value));
+    const field = column && scalarField(pair.value, text);
+    if (column && field) fields.push({ meaning: column.meaning, formulaHeader: column.formulaHeader, ...field });
   }
   if (fields.length === 0) return;
   if (!fields.some((field) => namesSpecies(field.meaning))) {

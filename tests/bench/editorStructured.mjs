@@ -1,0 +1,101 @@
+// Benchmark of the language server on large structured files, driven over stdio by a protocol
+// client as an editor drives it (pull diagnostics): a 5 MB JSON list of reference records and a
+// 1 MB YAML one (one wrong electron count in every 997 records), opened, then one-line edits that
+// each make one more record wrong. Prints open-to-diagnostics time and edit-to-diagnostics
+// p50/p95 beside the aims and the machine's load. JSON re-reads only the records an edit touches;
+// YAML is read whole on every edit (DEVELOPERS.md says why), so its figure is printed to be watched.
+import { loadNote, percentile, startServer, verdict } from "./lspBenchClient.mjs";
+
+const EDITS = 20;
+const AIMS = { editP95Ms: 50 };
+
+// common practice: valence electron counts, lone pairs and shapes of these reference gases.
+const SPECIES = [
+  ["sulfur hexafluoride", "SF6", 48, 0, "octahedral"],
+  ["nitrogen trifluoride", "NF3", 26, 1, "trigonal pyramidal"],
+  ["ammonia", "NH3", 8, 1, "trigonal pyramidal"],
+  ["xenon tetrafluoride", "XeF4", 36, 2, "square planar"],
+];
+const isSeeded = (index) => index % 997 === 5;
+
+function jsonRecord(index, wrong = isSeeded(index)) {
+  const [name, formula, electrons, lonePairs, shape] = SPECIES[index % SPECIES.length];
+  return (
+    `    {"id": "REF-${index}", "name": "${name}", "formula": "${formula}", "valence electrons": ${wrong ? electrons - 2 : electrons}, ` +
+    `"lone pairs": ${lonePairs}, "molecular geometry": "${shape}", "shelf": "Kestrel Ridge reference shelf ${index % 50}"},`
+  );
+}
+
+function yamlRecord(index, wrong = isSeeded(index)) {
+  const [name, formula, electrons, lonePairs, shape] = SPECIES[index % SPECIES.length];
+  return `  - {id: REF-${index}, name: ${name}, formula: ${formula}, valence electrons: ${wrong ? electrons - 2 : electrons}, lone pairs: ${lonePairs}, molecular geometry: ${shape}}`;
+}
+
+/** Lines of a document: `head` lines, then one record a line, then `tail` lines. */
+function documentOf(size, head, record, tail) {
+  const lines = [...head];
+  let length = 0;
+  let count = 0;
+  while (length < size) {
+    const line = record(count);
+    lines.push(line);
+    length += line.length + 1;
+    count++;
+  }
+  return { lines: [...lines, ...tail], head: head.length, count };
+}
+
+const documents = [
+  {
+    label: "5 MB JSON reference records",
+    languageId: "json",
+    file: "reference-shelf.json",
+    record: jsonRecord,
+    ...documentOf(5_000_000, ['{"lab": "Kestrel Ridge Analytical", "records": ['], jsonRecord, ['    {"id": "end of shelf"}', "]}"]),
+  },
+  {
+    label: "1 MB YAML reference records",
+    languageId: "yaml",
+    file: "reference-shelf.yaml",
+    record: yamlRecord,
+    ...documentOf(1_000_000, ["lab: Kestrel Ridge Analytical", "records:"], yamlRecord, []),
+  },
+];
+
+const errorsIn = (items) => items.filter((item) => item.severity === 1 || item.severity === 2).length;
+
+// `node editorStructured.mjs json` runs one kind only.
+const only = process.argv[2];
+for (const document of documents.filter((candidate) => !only || candidate.languageId === only)) {
+  const server = await startServer("pull");
+  const uri = `file:///kestrel-ridge/reference/${document.file}`;
+  const text = `${document.lines.join("\n")}\n`;
+  let version = 1;
+  const openStart = performance.now();
+  await server.open(uri, document.languageId, version, text);
+  const opened = await server.diagnostics(uri, version);
+  const openMs = performance.now() - openStart;
+  const editTimes = [];
+  let last = opened;
+  for (let edit = 0; edit < EDITS; edit++) {
+    // Make a correct record far into the file wrong: its electron count drops by two.
+    let index = Math.floor(((edit + 1) * document.count) / (EDITS + 1));
+    if (isSeeded(index)) index += 1;
+    const before = document.record(index);
+    version += 1;
+    const start = performance.now();
+    await server.replaceLine(uri, version, document.head + index, before.length, document.record(index, true));
+    last = await server.diagnostics(uri, version);
+    editTimes.push(performance.now() - start);
+  }
+  const p95 = percentile(editTimes, 0.95);
+  console.log(`editor, ${document.label} over stdio (pull diagnostics), ${text.length.toLocaleString("en")} characters; ${loadNote()}`);
+  console.log(`  open to diagnostics        ${openMs.toFixed(0)} ms   (${errorsIn(opened)} errors reported)`);
+  console.log(
+    `  one-line edit to diagnostics  p50 ${percentile(editTimes, 0.5).toFixed(0)} ms  p95 ${p95.toFixed(0)} ms   aim p95 < ${AIMS.editP95Ms} ms   ${verdict(p95 < AIMS.editP95Ms)}`,
+  );
+  console.log(`  records made wrong by edits  ${errorsIn(last) - errorsIn(opened)} of ${EDITS} reported after the edits`);
+  console.log(`  server peak memory         ${server.peakMegabytes().toFixed(0)} MB`);
+  await server.stop();
+}
+process.exit(0);
