@@ -129,6 +129,7 @@ export {
 } from "./report/summaryTable";
 export type {
   SpeciesWithParts,
+  NetworkSolidRow,
   SummaryCollector,
   SummaryColumn,
   SummaryEntry,

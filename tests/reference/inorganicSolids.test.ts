@@ -4,9 +4,10 @@
  * only where the usual charges leave no other reading, mixed-valence oxides as two charges, and
  * molecular halides left as molecules. Checked through the core's public face.
  */
-import { describe, expect, it } from "vitest";
+import { beforeAll, describe, expect, it } from "vitest";
 import { analyzeSpecies, checkDocument, analyzeDocument } from "../../shared/src/index";
 import type { AnalysisResult } from "../../shared/src/index";
+import { ensureBuilt, runCli } from "../cli/cliRunner";
 
 type Failure = Extract<AnalysisResult, { ok: false }>;
 
@@ -106,6 +107,51 @@ describe("inorganic solids are their ions, with the name that matches", () => {
   });
 });
 
+/** Formula -> each atom's surroundings ("Si 4 O tetrahedral"), the name shown. */
+type NetworkRow = readonly [formula: string, sites: string, name: string];
+
+const NETWORK_SOLIDS: readonly NetworkRow[] = [
+  // from memory: Greenwood & Earnshaw (quartz: SiO4 tetrahedra sharing every corner, Si-O-Si bent)
+  ["SiO2", "Si 4 O tetrahedral; O 2 Si bent", "silicon dioxide"],
+  ["GeO2", "Ge 4 O tetrahedral; O 2 Ge bent", "germanium dioxide"],
+  // from memory: Greenwood & Earnshaw (B2O3: BO3 triangles linked through O)
+  ["B2O3", "B 3 O trigonal planar; O 2 B bent", "boron trioxide"],
+  // from memory: Wells, Structural Inorganic Chemistry (wurtzite BeO, AlN, GaN; zinc-blende GaAs, InP; carborundum SiC)
+  ["BeO", "Be 4 O tetrahedral; O 4 Be tetrahedral", "beryllium oxide"],
+  ["AlN", "Al 4 N tetrahedral; N 4 Al tetrahedral", "aluminium nitride"],
+  ["GaN", "Ga 4 N tetrahedral; N 4 Ga tetrahedral", "gallium nitride"],
+  ["GaAs", "Ga 4 As tetrahedral; As 4 Ga tetrahedral", "gallium arsenide"],
+  ["InP", "In 4 P tetrahedral; P 4 In tetrahedral", "indium phosphide"],
+  ["SiC", "Si 4 C tetrahedral; C 4 Si tetrahedral", "silicon carbide"],
+  // from memory: Greenwood & Earnshaw (hexagonal BN layers as in graphite; Si3N4: SiN4 tetrahedra, planar NSi3)
+  ["BN", "B 3 N trigonal planar; N 3 B trigonal planar", "boron nitride"],
+  ["Si3N4", "Si 4 N tetrahedral; N 3 Si trigonal planar", "silicon nitride"],
+];
+
+describe("network solids have no molecule and say each atom's surroundings", () => {
+  it.each(NETWORK_SOLIDS)("%s: %s (%s)", (formula, sites, name) => {
+    const result = ionsOf(formula);
+    expect(result.problem.code).toBe("network-solid");
+    expect(result.parts).toBeUndefined();
+    expect(result.lattice?.map((site) => `${site.symbol} ${site.neighbourCount} ${site.neighbour} ${site.geometry}`).join("; ")).toBe(
+      sites,
+    );
+    expect(result.reading?.name).toBe(name);
+    expect(result.problem.message).toContain(`no discrete ${formula} molecule`);
+  });
+
+  it.each([
+    // from memory: Greenwood & Earnshaw (CO2, SO3 and P4O10 are molecules; As4O6 likewise)
+    ["CO2", "linear"],
+    ["SO3", "trigonal planar"],
+    ["SiF4", "tetrahedral"],
+    ["BF3", "trigonal planar"],
+  ])("the molecule %s is still %s", (formula, shape) => {
+    const result = analyzeSpecies(formula);
+    expect(result.ok && result.value.centres[0].molecularGeometry).toBe(shape);
+  });
+});
+
 describe("molecular species stay molecules", () => {
   // from memory: Greenwood & Earnshaw (gas-phase and molecular-liquid halides and hydrides)
   it.each([
@@ -131,6 +177,30 @@ describe("molecular species stay molecules", () => {
     const result = ionsOf(formula);
     expect(result.problem.code).toBe(code);
     expect(result.parts).toBeUndefined();
+  });
+});
+
+describe("the command line says the same", () => {
+  beforeAll(ensureBuilt);
+
+  it.each([
+    // from memory: Greenwood & Earnshaw (MnO2 is manganese(IV) oxide; quartz is a network of SiO4 tetrahedra)
+    ["MnO2", ["MnO2 - manganese(IV) oxide - ionic compound", "Mn^4+ ×1 (cation)", "O^2- ×2 (anion)"]],
+    ["Fe3O4", ["Fe3O4 - iron(II,III) oxide - ionic compound", "Fe^2+ ×1 (cation)", "Fe^3+ ×2 (cation)"]],
+    ["SiO2", ["SiO2 - silicon dioxide - network solid", "Si: tetrahedral, bonded to 4 O", "O: bent, bonded to 2 Si"]],
+  ])("analyze %s", (formula, expected) => {
+    const run = runCli(["analyze", formula]);
+    expect(run.status).toBe(0);
+    for (const line of expected) expect(run.stdout).toContain(line);
+    expect(run.stdout).not.toMatch(/peroxide|Molecular geometry/);
+  });
+
+  it("the table gives a network solid a row of atoms' surroundings", () => {
+    // from memory: Greenwood & Earnshaw (quartz: Si tetrahedral, O bent)
+    const run = runCli(["table", "SiO2", "MnO2"]);
+    expect(run.stdout).toContain("| SiO2 | silicon dioxide |  |  |  | Si: tetrahedral (4 O); O: bent (2 Si) |  |  | network solid |");
+    expect(run.stdout).toContain("| MnO2 | manganese(IV) oxide |");
+    expect(run.stdout).not.toContain("could not analyse");
   });
 });
 

@@ -370,19 +370,20 @@ describe("hydrates are one species with their parts", () => {
 
 describe("network solids", () => {
   // from memory: Greenwood & Earnshaw (silica, boron nitride and silicon carbide are covalent networks)
-  it("SiO2 is shown as the gas-phase monomer with a note that the solid is a network", () => {
-    const result = analyzeSpecies("SiO2");
-    expect(result.ok).toBe(true);
-    if (!result.ok) return;
-    const note = result.value.warnings.join(" ");
-    expect(note).toMatch(/network solid/);
-    expect(note).toMatch(/gas-phase monomer/);
+  it("SiO2 is a network solid with no molecular shape, not the gas-phase O=Si=O", () => {
+    const result = refused("SiO2");
+    expect(result.problem.code).toBe("network-solid");
+    expect(result.problem.message).toMatch(/no discrete SiO2 molecule/);
+    expect(result.lattice?.map((site) => [site.symbol, site.neighbourCount, site.geometry])).toEqual([
+      ["Si", 4, "tetrahedral"],
+      ["O", 2, "bent"],
+    ]);
   });
 
   it.each(["BN", "SiC", "diamond", "graphite", "boron nitride"])("%s is a network solid", (input) => {
     const result = refused(input);
     expect(result.problem.code).toBe("network-solid");
-    expect(result.problem.message).toMatch(/network solid/);
+    expect(result.problem.message).toMatch(/network covalent solid/);
   });
 });
 
@@ -396,9 +397,9 @@ describe("names of network solids", () => {
   });
 
   it("quartz is read as SiO2 with the network note", () => {
-    const result = analyzeSpecies("quartz");
-    expect(result.ok && result.value.reading.formula).toBe("SiO2");
-    expect(result.ok && result.value.warnings.join(" ")).toMatch(/network solid/);
+    const result = refused("quartz");
+    expect(result.reading?.formula).toBe("SiO2");
+    expect(result.problem.message).toMatch(/network covalent solid/);
   });
 
   it("a carbon atom written C is not named diamond", () => {

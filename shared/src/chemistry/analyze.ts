@@ -23,7 +23,7 @@ import { metalCentreProblem } from "./analysis/metalCentre";
 import { chooseRespelling } from "./analysis/respelling";
 import { oversaturationProblem } from "./analysis/saturation";
 import { dottedAnalysis, metalIonComplexAnalysis, saltAnalysis } from "./analysis/compositeSpecies";
-import { networkMonomerNote, networkSolidProblem } from "./analysis/networkSolids";
+import { networkSolidFinding } from "./analysis/networkSolids";
 import { connectivitySignature } from "./analysis/connectivitySignature";
 import { matchName, normalizeName } from "./reader/names/nameLookup";
 
@@ -83,8 +83,8 @@ export function analyzeReading(reading: SpeciesReading): AnalysisResult {
   const composite =
     dottedAnalysis(reading, analyzeSpecies) ?? saltAnalysis(reading, analyzeSpecies) ?? metalIonComplexAnalysis(reading, analyzeSpecies);
   if (composite) return composite;
-  const network = networkSolidProblem(reading);
-  if (network) return { ok: false, reading, problem: network };
+  const network = networkSolidFinding(reading);
+  if (network) return { ok: false, reading: { ...reading, name: network.name }, problem: network.problem, lattice: network.sites };
   const scope = outOfScope(reading);
   if (scope) return { ok: false, reading, problem: scope };
   // A formula that does not spell out its connectivity but has one ordinary structure (P4O10,
@@ -106,15 +106,7 @@ export function analyzeReading(reading: SpeciesReading): AnalysisResult {
   }
   const isomers = isomerNote(reading);
   const named = isomers !== undefined || !nameFitsStructure(reading, chosen.structure.graph) ? withoutName(reading) : reading;
-  const analysis = buildAnalysis(named, chosen.structure, chosen.centre, isomers === undefined ? [] : [isomers]);
-  const monomerNote = networkMonomerNote(reading);
-  return { ok: true, value: monomerNote ? withWarning(analysis, monomerNote) : analysis };
-}
-
-/** The analysis with one more warning; centres and polarity are still worked out on first read. */
-function withWarning(analysis: SpeciesAnalysis, warning: string): SpeciesAnalysis {
-  (analysis as { warnings: readonly string[] }).warnings = [warning, ...analysis.warnings];
-  return analysis;
+  return { ok: true, value: buildAnalysis(named, chosen.structure, chosen.centre, isomers === undefined ? [] : [isomers]) };
 }
 
 /**

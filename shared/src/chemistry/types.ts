@@ -278,6 +278,16 @@ export interface SpeciesPart {
   readonly analysis?: AnalysisResult;
 }
 
+/** One kind of atom in a network solid with its surroundings there: each Si bonded to 4 O, tetrahedral. */
+export interface LatticeSite {
+  readonly symbol: string;
+  readonly neighbourCount: number;
+  /** The neighbours' element. */
+  readonly neighbour: string;
+  /** The arrangement of the neighbours: "tetrahedral", "bent", "trigonal planar". */
+  readonly geometry: string;
+}
+
 export type AnalysisResult =
   | { readonly ok: true; readonly value: SpeciesAnalysis }
   | {
@@ -286,4 +296,6 @@ export type AnalysisResult =
       readonly problem: Problem;
       /** A salt's ions, a hydrate's parts: each analysed, though the whole has no one shape. */
       readonly parts?: readonly SpeciesPart[];
+      /** A network solid's atoms, each with its surroundings in the solid (there is no molecule). */
+      readonly lattice?: readonly LatticeSite[];
     };

@@ -5,7 +5,7 @@
 import { shapeOf } from "../chemistry/analysis/shape3d";
 import type { AngleExpectation, AnalysisResult, CentreAnalysis, MeasuredAngle, SpeciesAnalysis } from "../chemistry/types";
 import { lewisJson } from "./analysisJson";
-import { compositeKind, distinctAnalysedParts, innerParts, partLabel } from "./compositeParts";
+import { NETWORK_SOLID_NOUN, compositeKind, distinctAnalysedParts, innerParts, latticeSiteLabel, partLabel } from "./compositeParts";
 import { isotopeNote, stateNote } from "./notationNotes";
 import { measuredFundamentalsOf, realPointGroupOf, vibrationsOf } from "../chemistry/vibrations/speciesVibrations";
 import { bandsLine, coincidenceLine, countedInNote, measuredLine, modesLine, notPredictedLine, stretchingLine } from "./vibrationText";
@@ -48,11 +48,22 @@ function failureLines(input: string, result: Extract<AnalysisResult, { ok: false
   const { problem, reading } = result;
   const heading = reading && reading.formula !== input.trim() ? `${input} (${reading.formula})` : input;
   if (result.parts) return compositeLines(heading, result, style);
+  if (result.lattice) return latticeLines(heading, result, style);
   const lines = [
     style.title(heading) + " " + style.error("- not analysed"),
     row(style, "Problem", style.error(`${problem.message} [${problem.code}]`)),
   ];
   if (problem.suggestion !== undefined) lines.push(row(style, "Did you mean", problem.suggestion));
+  return lines;
+}
+
+/** A network solid: what it is, each atom's surroundings in the solid, and the note. No molecule, no shape. */
+function latticeLines(heading: string, result: Extract<AnalysisResult, { ok: false }>, style: CardStyle): string[] {
+  const name = result.reading?.name;
+  const title = name && !heading.includes(name) ? `${heading} - ${name}` : heading;
+  const lines = [style.title(title) + " " + style.muted(`- ${NETWORK_SOLID_NOUN}`)];
+  (result.lattice ?? []).forEach((site, position) => lines.push(row(style, position === 0 ? "Atoms" : "", latticeSiteLabel(site))));
+  lines.push(row(style, "Note", `${result.problem.message} [${result.problem.code}]`));
   return lines;
 }
 

@@ -8,6 +8,7 @@ import type {
   AngleExpectation,
   AnalysisResult,
   CentreAnalysis,
+  LatticeSite,
   MeasuredAngle,
   ProblemCode,
   SpeciesAnalysis,
@@ -128,6 +129,8 @@ export interface AnalysisJsonFailure {
   readonly name?: string;
   /** A salt's ions, a hydrate's parts, a hydroxo ion's metal and ligands, each analysed on its own. */
   readonly parts?: readonly PartJson[];
+  /** A network solid's atoms, each with its surroundings in the solid. */
+  readonly lattice?: readonly LatticeSite[];
 }
 
 /** One part of a salt, hydrate or complex ion. */
@@ -156,8 +159,15 @@ export function toAnalysisJson(input: string, result: AnalysisResult): AnalysisJ
       ok: false,
       error: suggestion === undefined ? { code, message } : { code, message, suggestion },
     };
-    if (!result.parts) return failure;
     const { reading } = result;
+    if (result.lattice)
+      return {
+        ...failure,
+        ...(reading ? { formula: reading.formula } : {}),
+        ...(reading?.name ? { name: reading.name } : {}),
+        lattice: result.lattice.map((site) => ({ ...site })),
+      };
+    if (!result.parts) return failure;
     return {
       ...failure,
       ...(reading ? { formula: reading.formula } : {}),

@@ -3,7 +3,7 @@
  * ligands of a hydroxo ion): one wording, shared by the card, the hover, the JSON and the table.
  */
 import { partShapeText } from "../chemistry/analysis/partShapes";
-import type { ProblemCode, SpeciesAnalysis, SpeciesPart } from "../chemistry/types";
+import type { LatticeSite, ProblemCode, SpeciesAnalysis, SpeciesPart } from "../chemistry/types";
 
 /** How a kind of composite species is named, and what its parts are called. */
 export interface CompositeKind {
@@ -73,4 +73,12 @@ export function leafParts(parts: readonly SpeciesPart[]): SpeciesPart[] {
     else leaves.push(part);
   }
   return leaves;
+}
+
+/** What every report calls a network solid (SiO2, GaAs), which has atoms' surroundings, not parts. */
+export const NETWORK_SOLID_NOUN = "network solid";
+
+/** "Si: tetrahedral, bonded to 4 O". */
+export function latticeSiteLabel(site: LatticeSite): string {
+  return `${site.symbol}: ${site.geometry}, bonded to ${site.neighbourCount} ${site.neighbour}`;
 }

@@ -16,7 +16,7 @@ import type {
 import { isotopeNote, stateNote } from "./notationNotes";
 import { shapeSketchSvg, svgDataUri } from "./shapeSketch";
 import { lewisDiagram } from "./lewisDiagram";
-import { compositeKind, distinctAnalysedParts, innerParts, roleWords } from "./compositeParts";
+import { NETWORK_SOLID_NOUN, compositeKind, distinctAnalysedParts, innerParts, latticeSiteLabel, roleWords } from "./compositeParts";
 import { partShapeText } from "../chemistry/analysis/partShapes";
 import { measuredFundamentalsOf, vibrationsOf } from "../chemistry/vibrations/speciesVibrations";
 import { bandsLine, coincidenceLine, countedInNote, measuredLine, modesLine, notPredictedLine, stretchingLine } from "./vibrationText";
@@ -144,6 +144,7 @@ export function resultMarkdown(
 ): string {
   if (result.ok) return hoverMarkdown(result.value, options);
   if (result.parts) return compositeMarkdown(text, result, options);
+  if (result.lattice) return latticeMarkdown(text, result, options);
   return problemMarkdown(text, result.problem.message, options.format, problemOptions);
 }
 
@@ -172,6 +173,18 @@ function compositeMarkdown(text: string, result: Extract<AnalysisResult, { ok: f
   const body = lines.join("\n");
   const kept = body.length > MAX_CARD_LENGTH ? `${body.slice(0, MAX_CARD_LENGTH)}…\n\n` : body;
   return `${kept}${markup.emphasis(HOVER_CAUTION)}`;
+}
+
+/** A network solid: each atom's surroundings in the solid, then the note. */
+function latticeMarkdown(text: string, result: Extract<AnalysisResult, { ok: false }>, options: HoverMarkdownOptions): string {
+  const markup = markupFor(options.format);
+  const formula = markup.code(result.reading?.formula ?? text);
+  const name = result.reading?.name;
+  const title = name ? `${markup.strong(markup.text(name))} · ${formula}` : markup.strong(formula);
+  const lines = [`${title} · ${NETWORK_SOLID_NOUN}`, "", markup.strong("Atoms")];
+  for (const site of result.lattice ?? []) lines.push(`- ${markup.text(latticeSiteLabel(site))}`);
+  lines.push("", markup.text(result.problem.message), "", markup.emphasis(HOVER_CAUTION));
+  return lines.join("\n");
 }
 
 function partBullet(part: SpeciesPart, bullet: string, markup: Markup): string {

@@ -2,11 +2,11 @@
  * Builds a geometry table (markdown or CSV) for a list of analysed species.
  * Pure: the caller decides which species and in which order; duplicates are dropped here.
  */
-import type { AnalysisResult, CentreAnalysis, SpeciesAnalysis, SpeciesPart, SpeciesReading } from "../chemistry/types";
+import type { AnalysisResult, CentreAnalysis, LatticeSite, SpeciesAnalysis, SpeciesPart, SpeciesReading } from "../chemistry/types";
 import { partShapeText } from "../chemistry/analysis/partShapes";
 import { analyzeOccurrenceSafely } from "../document/speciesAt";
 import type { SpeciesOccurrence } from "../document/types";
-import { compositeKind, leafParts } from "./compositeParts";
+import { NETWORK_SOLID_NOUN, compositeKind, leafParts } from "./compositeParts";
 import { HOVER_CAUTION, formatAngle } from "./hoverMarkdown";
 import { vibrationsOf } from "../chemistry/vibrations/speciesVibrations";
 
@@ -70,14 +70,22 @@ export interface SpeciesWithParts {
   readonly parts: readonly SpeciesPart[];
 }
 
-/** One row of the table: an analysed species, or a species made of parts. */
-export type SummaryEntry = SpeciesAnalysis | SpeciesWithParts;
+/** A network solid (SiO2): one row with each atom's surroundings, and no molecular values. */
+export interface NetworkSolidRow {
+  readonly reading: SpeciesReading;
+  readonly kind: string;
+  readonly lattice: readonly LatticeSite[];
+}
+
+/** One row of the table: an analysed species, a species made of parts, or a network solid. */
+export type SummaryEntry = SpeciesAnalysis | SpeciesWithParts | NetworkSolidRow;
 
 /** The table row a result gives, if any; the rest go under "Not analysed". */
 export function summaryEntryOf(result: AnalysisResult): SummaryEntry | undefined {
   if (result.ok) return result.value;
   if (result.parts && result.reading)
     return { reading: result.reading, kind: compositeKind(result.problem.code).noun, parts: result.parts };
+  if (result.lattice && result.reading) return { reading: result.reading, kind: NETWORK_SOLID_NOUN, lattice: result.lattice };
   return undefined;
 }
 
@@ -125,6 +133,7 @@ function uniqueUnanalysed(items: readonly UnanalysedSpecies[]): UnanalysedSpecie
 
 function cellText(entry: SummaryEntry, column: SummaryColumn, decimals: number): string {
   if ("parts" in entry) return partsCellText(entry, column, decimals);
+  if ("lattice" in entry) return latticeCellText(entry, column);
   const analysis = entry;
   switch (column) {
     case "formula":
@@ -182,6 +191,15 @@ function partsCellText(entry: SpeciesWithParts, column: SummaryColumn, decimals:
     if (item !== "" && !entries.includes(item)) entries.push(item);
   }
   return entries.join("; ");
+}
+
+/** A network solid's row: its name and kind, and each atom's surroundings as its geometry ("Si: tetrahedral (4 O)"). */
+function latticeCellText(entry: NetworkSolidRow, column: SummaryColumn): string {
+  if (column === "formula") return entry.reading.formula;
+  if (column === "name") return entry.reading.name ?? "";
+  if (column === "polarity") return entry.kind;
+  if (column !== "molecularGeometry") return "";
+  return entry.lattice.map((site) => `${site.symbol}: ${site.geometry} (${site.neighbourCount} ${site.neighbour})`).join("; ");
 }
 
 function centreValue(centre: CentreAnalysis, column: SummaryColumn, decimals: number): string {

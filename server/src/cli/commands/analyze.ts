@@ -44,8 +44,9 @@ function runAnalyze(args: readonly string[], io: CliIo): number {
   // A SMILES string such as "CO" or "NO" is also a formula, so the reader is told, never left to guess.
   const analyze = parsed.values.smiles ? analyzeSmiles : analyzeTyped;
   const results = speciesTexts.map((text) => ({ text, result: analyze(text) }));
-  // A salt or hydrate counts as analysed: each of its parts was.
-  const failures = results.filter(({ result }) => !result.ok && result.parts === undefined).length;
+  // A salt or hydrate counts as analysed (each of its parts was), and so does a network solid
+  // (each atom's surroundings are given).
+  const failures = results.filter(({ result }) => !result.ok && result.parts === undefined && result.lattice === undefined).length;
 
   if (parsed.values.json) {
     const json = results.map(({ text, result }) => toAnalysisJson(text, result));
