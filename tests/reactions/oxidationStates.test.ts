@@ -3,7 +3,7 @@
  * structure where lonepair draws one, by the usual rules where it does not (Fe3O4, MnO4-).
  */
 import { describe, expect, it } from "vitest";
-import { analyzeSpecies, oxidationStatesOf, oxidationStatesText, readSpecies } from "../../shared/src/index";
+import { analyzeSpecies, formatOxidationState, oxidationStatesOf, oxidationStatesText, readSpecies } from "../../shared/src/index";
 
 /** Each element's states, one per atom, ascending: "S:-1,5 O:-2,-2,-2". */
 function statesOf(formula: string): string {
@@ -61,6 +61,17 @@ describe("oxidation states of every atom", () => {
     ["N2H4", "N:-2,-2 H:1,1,1,1"],
     ["P4O10", "P:5,5,5,5 O:-2,-2,-2,-2,-2,-2,-2,-2,-2,-2"],
     ["N2O4", "N:4,4 O:-2,-2,-2,-2"],
+    // from memory: Greenwood & Earnshaw (nitrogen dioxide is N(IV), nitric oxide N(II), chlorine dioxide Cl(IV))
+    ["NO2", "N:4 O:-2,-2"],
+    ["NO", "N:2 O:-2"],
+    ["ClO2", "Cl:4 O:-2,-2"],
+    // from memory: IUPAC technical report on oxidation state (ionic approximation; an odd electron on
+    // an atom with no less electronegative neighbour to carry it stays there)
+    ["CH3", "C:-3 H:1,1,1"],
+    ["OH", "O:-1 H:1"],
+    ["HO2", "H:1 O:-1,0"],
+    // from memory: Housecroft & Sharpe (ozone's Lewis structure: central O +1, terminal O 0 and -1)
+    ["O3", "O:-1,0,1"],
     // common practice: an element on its own is 0
     ["O2", "O:0,0"],
     // from memory: Greenwood & Earnshaw (magnetite is Fe(II)Fe(III)2O4, red lead Pb(II)2Pb(IV)O4)
@@ -70,6 +81,22 @@ describe("oxidation states of every atom", () => {
     ["CuSO4·5H2O", "Cu:2 S:6 O:-2,-2,-2,-2,-2,-2,-2,-2,-2 H:1,1,1,1,1,1,1,1,1,1"],
   ])("%s has %s", (formula, expected) => {
     expect(statesOf(formula), `oxidation states of ${formula}`).toBe(expected);
+  });
+
+  it.each<[string, string, string]>([
+    // from memory: Housecroft & Sharpe (superoxide O2- averages -1/2, as in KO2)
+    ["O2^-", "O", "-1/2"],
+    ["KO2", "O", "-1/2"],
+    // from memory: Greenwood & Earnshaw (hydroperoxyl HO2 averages -1/2 on oxygen; ozone 0)
+    ["HO2", "O", "-1/2"],
+    ["O3", "O", "0"],
+    // from memory: Zumdahl, ch. 4 (dinitrogen monoxide, N averages +1)
+    ["N2O", "N", "+1"],
+  ])("%s averages %s at %s", (formula, symbol, expected) => {
+    const reading = readSpecies(formula);
+    const states = reading.ok ? oxidationStatesOf(reading.value, analyzeSpecies(formula)) : undefined;
+    const element = states?.elements.find((candidate) => candidate.symbol === symbol);
+    expect(element && formatOxidationState(element.average.numerator, element.average.denominator)).toBe(expected);
   });
 
   it("shows an average with the per-atom split", () => {

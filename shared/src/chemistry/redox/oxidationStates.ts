@@ -2,7 +2,8 @@
  * Oxidation states of every atom. From a Lewis structure: each bond's electrons go to the more
  * electronegative atom (split evenly between like atoms), and a homonuclear multiple bond drawn
  * only to spare an expanded octet its formal charges is counted as the single bond of the octet
- * structure. A salt or hydrate adds up its parts. Where no structure is drawn (Fe3O4, MnO4-), the
+ * structure, and a radical's odd electron is counted on the least electronegative atom that can
+ * carry it. A salt or hydrate adds up its parts. Where no structure is drawn (Fe3O4, MnO4-), the
  * usual states of fluorine, oxygen, hydrogen and the s-block fix the rest, and a fractional
  * average is split into whole states the element commonly takes.
  */
@@ -103,6 +104,7 @@ function structureStates(graph: MolecularGraph): Map<string, number[]> {
       kept[bond.to] += bond.order;
     }
   }
+  placeOddElectrons(graph, kept);
   const states = new Map<string, number[]>();
   graph.atoms.forEach((atom, index) => {
     const valence = elementBySymbol(atom.symbol)?.valenceElectrons ?? 0;
@@ -111,6 +113,27 @@ function structureStates(graph: MolecularGraph): Map<string, number[]> {
     states.set(atom.symbol, list);
   });
   return states;
+}
+
+/**
+ * A radical's odd electron is counted on the least electronegative atom that can carry it: when
+ * the drawn structure puts it on an atom short of an octet next to a less electronegative atom
+ * with a lone pair, the resonance form with that lone pair's electron moved across is the one
+ * counted (NO2 is N +4 from O=N•-O-, not N +3 from O=N-O•), so the more electronegative atom
+ * completes its octet as the ionic approximation would.
+ */
+function placeOddElectrons(graph: MolecularGraph, kept: number[]): void {
+  const electronegativity = (index: number) => elementBySymbol(graph.atoms[index].symbol)?.electronegativity ?? 0;
+  graph.atoms.forEach((atom, radical) => {
+    if (atom.unpairedElectrons === 0 || kept[radical] >= 8) return;
+    const donors = graph.bonds
+      .map((bond) => (bond.from === radical ? bond.to : bond.to === radical ? bond.from : -1))
+      .filter((index) => index >= 0 && graph.atoms[index].lonePairs > 0 && electronegativity(index) < electronegativity(radical))
+      .sort((a, b) => electronegativity(a) - electronegativity(b));
+    if (donors.length === 0) return;
+    kept[donors[0]] -= 1;
+    kept[radical] += 1;
+  });
 }
 
 /** States elements nearly always take in compounds. */
