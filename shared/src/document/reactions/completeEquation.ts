@@ -101,17 +101,10 @@ export function completeReaction(reaction: Reaction, medium: SolutionMedium, rea
   else {
     const directions = redoxDirections(terms, states);
     if (!directions.oxidised && !directions.reduced) return undefined;
-    // Both an oxidation and a reduction: no electrons, unless none but a half-reaction balances
-    // (a structure's states may mislead, as for a radical); one of them: a half-reaction.
-    const attempts = directions.oxidised && directions.reduced ? [false, true] : [true, false];
-    for (const withElectrons of attempts) {
-      solved = solve(terms, withElectrons ? [...supplies, ELECTRON] : supplies, states);
-      if (solved && withElectrons && solved.amounts[solved.amounts.length - 1] === 0n) solved = undefined;
-      if (solved) {
-        halfReaction = withElectrons;
-        break;
-      }
-    }
+    // Both an oxidation and a reduction: no electrons; one of them: a half-reaction.
+    halfReaction = !(directions.oxidised && directions.reduced);
+    solved = solve(terms, halfReaction ? [...supplies, ELECTRON] : supplies, states);
+    if (solved && halfReaction && solved.amounts[solved.amounts.length - 1] === 0n) solved = undefined;
   }
   if (!solved) return undefined;
   const style = writingStyle(reaction);
