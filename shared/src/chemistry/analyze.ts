@@ -20,6 +20,7 @@ import {
   type KnownStructure,
 } from "./analysis/structuresByFormula";
 import { metalCentreProblem } from "./analysis/metalCentre";
+import { metallicElementProblem } from "./analysis/metallicElement";
 import { chooseRespelling } from "./analysis/respelling";
 import { oversaturationProblem } from "./analysis/saturation";
 import { dottedAnalysis, metalIonComplexAnalysis, saltAnalysis } from "./analysis/compositeSpecies";
@@ -228,6 +229,9 @@ const IONIC_GROUPS = new Set([1, 2]);
 
 /** Species VSEPR has nothing to say about: transition-metal centres, ionic solids, boranes. */
 function outOfScope(reading: SpeciesReading): Problem | undefined {
+  // A lone metal atom is the element itself, whichever block it belongs to.
+  const metallic = metallicElementProblem(reading);
+  if (metallic) return metallic;
   const metal = metalCentreProblem(
     reading.formula,
     reading.composition.map((part) => part.symbol),

@@ -109,6 +109,7 @@ export type ProblemCode =
   | "f-block-centre"
   | "superheavy-element"
   | "ionic-solid"
+  | "metallic-element"
   | "hydrate"
   | "adduct"
   | "network-solid"

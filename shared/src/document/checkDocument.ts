@@ -77,8 +77,10 @@ function checkModel(
     if (echoes.has(occurrence) || occurrence.inferred) continue;
     const result = analysisOf(occurrence);
     if (!result) continue;
-    if (!result.ok) findings.push(problemFinding(occurrence, result.problem, analyze));
-    else if (result.value.radical) findings.push(radicalFinding(occurrence, result.value.valenceElectrons));
+    if (!result.ok) {
+      // "4 Al + 3 O2": the metal itself, right as written; its hover says what it is.
+      if (result.problem.code !== "metallic-element") findings.push(problemFinding(occurrence, result.problem, analyze));
+    } else if (result.value.radical) findings.push(radicalFinding(occurrence, result.value.valenceElectrons));
   }
   for (const record of model.records) {
     const result = analysisOf(record.species);

@@ -3,6 +3,7 @@
  * There a coefficient may be glued to a formula and a lone element symbol is a reactant; in prose
  * neither holds ("3D", "vitamin C", "grade B").
  */
+import { elementBySymbol } from "../chemistry/elements";
 import { withUnicodeScripts } from "../chemistry/reader/htmlScripts";
 import { isConfidentToken, shapeOf, type TokenShape } from "./proseTokenRules";
 
@@ -67,6 +68,7 @@ function formulaShapeOf(word: string): { bare: string; body: string; shape: Toke
  * carries a count ("2 Al + Fe2O3"). "Grade B → grade A" and "vitamin C + zinc" stay prose.
  */
 export function isLoneReactant(text: string, start: number, end: number): boolean {
+  if (end - start === 1 && isPlaceholderEquation(text, start, end)) return false;
   let before = wordBefore(text, start);
   // A separate coefficient: "2 Al + ...".
   if (/^\d{1,2}$/.test(before.word)) before = wordBefore(text, before.start);
@@ -80,6 +82,44 @@ export function isLoneReactant(text: string, start: number, end: number): boolea
   if (!other) return false;
   if (isOnEquationLine(text, start, end)) return true;
   return (other.shape.hasCount || other.shape.hasCharge) && isConfidentToken(other.bare, other.body, other.shape);
+}
+
+/**
+ * True when the equation around `[start, end)` is written in letters that stand for species: one of
+ * its terms holds a capital that is no element ("A + B → C", "X + Y2 → XY2", "R + O2 → RO2"). There
+ * a single letter that happens to be a symbol (B, C, Y) is a placeholder too.
+ */
+function isPlaceholderEquation(text: string, start: number, end: number): boolean {
+  const windowStart = Math.max(0, start - LINE_REACH);
+  const lineStart = text.lastIndexOf("\n", start - 1) + 1;
+  const lineEndAt = text.indexOf("\n", end);
+  const line = text.slice(Math.max(windowStart, lineStart), Math.min(lineEndAt < 0 ? text.length : lineEndAt, end + LINE_REACH));
+  const words = line.split(/[ \t]+/);
+  for (let index = 0; index < words.length; index++) {
+    if (!isOperatorWord(words[index])) continue;
+    for (const neighbour of [termBefore(words, index), termAfter(words, index)]) {
+      if (neighbour !== undefined && hasNonElementCapital(neighbour)) return true;
+    }
+  }
+  return false;
+}
+
+/** The term before the operator at `index`, past a separate coefficient. */
+function termBefore(words: readonly string[], index: number): string | undefined {
+  const word = words[index - 1];
+  return word !== undefined && /^\d{1,2}$/.test(word) ? words[index - 2] : word;
+}
+
+/** The term after the operator at `index`, past a separate coefficient. */
+function termAfter(words: readonly string[], index: number): string | undefined {
+  const word = words[index + 1];
+  return word !== undefined && /^\d{1,2}$/.test(word) ? words[index + 2] : word;
+}
+
+/** "A", "XY2", "RO2": a formula-shaped term with a capital that starts no element symbol. */
+function hasNonElementCapital(word: string): boolean {
+  const term = formulaShapeOf(word);
+  return term !== undefined && term.shape.symbols.some((symbol) => elementBySymbol(symbol) === undefined);
 }
 
 /**

@@ -15,6 +15,7 @@ const DESCRIPTIONS: Readonly<Record<string, string>> = {
   "hydrogen-overbonded": "A hydrogen atom would need more than one bond.",
   "transition-metal-centre": "A transition-metal centre: VSEPR does not predict its shape.",
   "ionic-solid": "An ionic solid: it has no molecular shape; its polyatomic ions are analysed one by one.",
+  "metallic-element": "A lone metal symbol: the element as a metallic solid, with no molecular shape.",
   hydrate: "A hydrate: a salt or molecule with water of crystallisation; each part is analysed on its own.",
   adduct: "An adduct written with a dot: each part is analysed as a free species.",
   "network-solid": "A network solid: one covalent lattice with no molecules, so no molecular shape.",
