@@ -215,6 +215,8 @@ function tableSegments(kind: "csv" | "tsv", read: SpeciesReader): (text: Chunked
           records: whole.records.filter((record) => own(record.species)),
           problems: whole.problems.filter(own),
           unreadable: (whole.unreadable ?? []).filter(own),
+          // Equation cells too: the fix-all action and half-reaction completion read them here.
+          reactions: (whole.reactions ?? []).filter(own),
         },
         source.shift - segment.start,
       );

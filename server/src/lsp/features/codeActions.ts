@@ -1,6 +1,7 @@
 /**
  * Quick fixes: one per finding that carries a fix (replacing only that range), and one
- * action that fixes every table value in the file as a single workspace edit.
+ * action that fixes every table value (equation cells' coefficients included) in the file as a
+ * single workspace edit.
  */
 import {
   CodeActionKind,
@@ -11,11 +12,11 @@ import {
   type WorkspaceEdit,
 } from "vscode-languageserver";
 import type { TextDocument } from "vscode-languageserver-textdocument";
-import { editsOfFix, type DocumentModel, type Finding, type FixEdit, type TextFix, type TextRange } from "../core";
-import { equationActions, type EquationAction } from "../../../../shared/src/index";
+import { editsOfFix, type Finding, type FixEdit, type TextFix, type TextRange } from "../core";
+import { equationActions, tableValueFixes, type EquationAction } from "../../../../shared/src/index";
 import type { AnalysedDocument } from "../documentCache";
 import { guarded } from "../guardedHandler";
-import { lspRange, offsetRange, rangesTouch, rangeWithin } from "../ranges";
+import { lspRange, offsetRange, rangesTouch } from "../ranges";
 import { enabledDocument, type ServerContext } from "../serverContext";
 import { DIAGNOSTIC_SOURCE, diagnosticsOf } from "./diagnostics";
 
@@ -161,46 +162,6 @@ function equationAction(
       action.edits.map((fix) => textEdit(document, fix)),
     ),
   };
-}
-
-/**
- * Fixes whose range lies inside a recognised table cell, in document order, without overlaps
- * (two findings may want to rewrite the same cell; the first wins).
- */
-export function tableValueFixes(model: DocumentModel, findings: readonly Finding[]): TextFix[] {
-  const cells = model.records
-    .flatMap((record) => [record.species.range, ...record.cells.map((cell) => cell.range)])
-    .sort((a, b) => a.start - b.start);
-  const fixes = findings
-    .map((finding) => finding.fix)
-    .filter((fix): fix is TextFix => fix !== undefined && insideSomeCell(fix.range, cells))
-    .sort((a, b) => a.range.start - b.range.start);
-  const chosen: TextFix[] = [];
-  for (const fix of fixes) {
-    const previous = chosen[chosen.length - 1];
-    if (!previous || previous.range.end <= fix.range.start) chosen.push(fix);
-  }
-  return chosen;
-}
-
-/**
- * Cells do not overlap, so the only candidate is the last cell starting at or before the range:
- * a binary search keeps a table of thousands of rows cheap on every lightbulb request.
- */
-function insideSomeCell(range: TextRange, sortedCells: readonly TextRange[]): boolean {
-  let low = 0;
-  let high = sortedCells.length - 1;
-  let candidate = -1;
-  while (low <= high) {
-    const middle = (low + high) >> 1;
-    if (sortedCells[middle].start <= range.start) {
-      candidate = middle;
-      low = middle + 1;
-    } else {
-      high = middle - 1;
-    }
-  }
-  return candidate >= 0 && rangeWithin(range, sortedCells[candidate]);
 }
 
 function textEdit(document: TextDocument, edit: FixEdit): TextEdit {
