@@ -16,7 +16,7 @@ interface JsonFinding {
   severity: string;
   code: string;
   message: string;
-  fix?: { line: number; column: number; endLine: number; endColumn: number; newText: string; title: string };
+  fix?: { title: string; edits: { line: number; column: number; endLine: number; endColumn: number; newText: string }[] };
 }
 
 function checkJson(...args: string[]): { status: number | null; findings: JsonFinding[] } {
@@ -132,7 +132,7 @@ describe("check --format json", () => {
       code: "table-valence-electrons",
       // common practice: NF3 has 5 + 3 x 7 = 26 valence electrons
       message: "Valence electrons for NF3 are 26, the table says 24.",
-      fix: { line: 3, column: 14, endLine: 3, endColumn: 16, newText: "26", title: "Change to 26" },
+      fix: { title: "Change to 26", edits: [{ line: 3, column: 14, endLine: 3, endColumn: 16, newText: "26" }] },
     });
     expect(findings.map((finding) => [finding.code, coveredText(finding)])).toEqual([
       ["table-valence-electrons", "24"],

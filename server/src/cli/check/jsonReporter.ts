@@ -1,8 +1,8 @@
 /**
  * `--format json`: one array of findings, written as they come.
  * Each item: { file, line, column, endLine, endColumn, severity, code, message, fix? }, lines and
- * columns 1-based (columns in UTF-16 code units, end exclusive); a fix has the same position
- * fields plus newText and title.
+ * columns 1-based (columns in UTF-16 code units, end exclusive); a fix is { title, edits }, each
+ * edit the same position fields (in the file as read) plus newText.
  */
 import { jsonTerminalSafe } from "../terminalText";
 import type { CheckReporter } from "./checkReporter";

@@ -2,7 +2,7 @@
  * A finding placed in a file by line and column, as every report format shows it: 1-based
  * lines and columns, columns in UTF-16 code units, end exclusive.
  */
-import type { Finding, FindingSeverity } from "../../../../shared/src/index";
+import { editsOfFix, type Finding, type FindingSeverity, type TextFix } from "../../../../shared/src/index";
 import type { LineIndex } from "../documents/lineIndex";
 
 /** Start and end of a range, 1-based; the end column is just past the last character. */
@@ -13,13 +13,27 @@ export interface LineColumnRange {
   readonly endColumn: number;
 }
 
+/** One replacement of a fix, placed: what the range (as the file was read) becomes. */
+export interface LocatedEdit extends LineColumnRange {
+  readonly newText: string;
+}
+
+/**
+ * A fix placed in a file: the same separate edits the editor and `check --fix` apply (one per
+ * coefficient of an equation), in order and not overlapping, every range in the file as read.
+ */
+export interface LocatedFix {
+  readonly title: string;
+  readonly edits: readonly LocatedEdit[];
+}
+
 /** A finding in a file, ready for any report format. */
 export interface LocatedFinding extends LineColumnRange {
   readonly file: string;
   readonly severity: FindingSeverity;
   readonly code: string;
   readonly message: string;
-  readonly fix?: LineColumnRange & { readonly newText: string; readonly title: string };
+  readonly fix?: LocatedFix;
 }
 
 /** The line and column range of `range` (offsets into the indexed text). */
@@ -39,5 +53,10 @@ export function locateFinding(file: string, lines: LineIndex, finding: Finding):
     message: finding.message,
   };
   if (!finding.fix) return located;
-  return { ...located, fix: { ...lineColumnRange(lines, finding.fix.range), newText: finding.fix.newText, title: finding.fix.title } };
+  return { ...located, fix: locatedFix(finding.fix, (range) => lineColumnRange(lines, range)) };
+}
+
+/** `fix` with each of its edits placed by `place`: every report format carries these edits. */
+export function locatedFix(fix: TextFix, place: (range: { start: number; end: number }) => LineColumnRange): LocatedFix {
+  return { title: fix.title, edits: editsOfFix(fix).map((edit) => ({ ...place(edit.range), newText: edit.newText })) };
 }

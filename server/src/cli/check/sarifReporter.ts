@@ -100,8 +100,12 @@ function sarifResult(finding: LocatedFinding, level: string, index: number): obj
     result.fixes = [
       {
         description: { text: finding.fix.title },
+        // One replacement per edit (an equation's coefficients one by one), regions as the file was read.
         artifactChanges: [
-          { artifactLocation, replacements: [{ deletedRegion: region(finding.fix), insertedContent: { text: finding.fix.newText } }] },
+          {
+            artifactLocation,
+            replacements: finding.fix.edits.map((edit) => ({ deletedRegion: region(edit), insertedContent: { text: edit.newText } })),
+          },
         ],
       },
     ];
