@@ -23,6 +23,7 @@ import { hasLatexMarkup, latexToPlain } from "./latexFormula";
 import { LAB_ABBREVIATIONS } from "./names/synonyms";
 import { problemAt } from "./problem";
 import { readableRecasings, readFormulaSpan, withRespellings } from "./readFormula";
+import { radicalDotAt, radicalDotMismatch } from "./radicalDot";
 import { readStateSuffix } from "./stateSymbol";
 
 /** Longer input is not one species; the limit also bounds the work one call can do. */
@@ -93,6 +94,8 @@ function readVisible(text: string): ReadResult {
     if (!named.ok || stated === undefined) return named;
     return { ok: true, value: { ...named.value, text: text.slice(start, end), range: { start, end }, state: stated.state } };
   }
+  const dot = radicalDotAt(text, start, end);
+  if (dot >= 0) return readRadical(text, start, end, dot);
   const formula = withName(readFormulaSpan(text, start, end, "formula"));
   // Inventories write names in capitals ("ACETONE", "COPPER SULFATE"): a name, when no formula
   if (!formula.ok && end - start >= 4 && isCapitalWords(text, start, end)) {
@@ -100,6 +103,16 @@ function readVisible(text: string): ReadResult {
     if (named.ok) return named;
   }
   return formula;
+}
+
+/** "Cl•", "•OH", "O2•-": the species without its radical dot, placed over the whole written text. */
+function readRadical(text: string, start: number, end: number, dot: number): ReadResult {
+  const plain = text.slice(start, dot) + text.slice(dot + 1, end);
+  const result = readSpecies(plain);
+  if (!result.ok) return { ok: false, problem: problemAt(result.problem.code, result.problem.message, start, end) };
+  const mismatch = radicalDotMismatch(result.value);
+  if (mismatch) return { ok: false, problem: problemAt("malformed-formula", mismatch, dot, dot + 1) };
+  return { ok: true, value: { ...result.value, text: text.slice(start, end), range: { start, end } } };
 }
 
 function isCapitalWords(text: string, start: number, end: number): boolean {
