@@ -69,3 +69,33 @@ export function isWordContext(text: string, start: number, end: number): boolean
   const before = text.slice(Math.max(0, start - LOOK_AROUND), start);
   return /[A-Z][a-z]+,[ \t]*$/.test(before) && /^(?:[ \t]+\d{5}|[ \t]*(?:[.;)\r\n]|$))/.test(text.slice(end, end + 8));
 }
+
+/** How far around a word-like formula the chemistry it needs may sit, on the same line. */
+const CHEMICAL_LOOK_AROUND = 80;
+
+/** Words for binary compounds and their anions: "tin(II) oxide (SnO)", "indium nitride". */
+const COMPOUND_WORD =
+  /(?:^|[^A-Za-z])(?:oxide|nitride|sulfide|sulphide|selenide|telluride|chloride|fluoride|bromide|iodide|phosphide|arsenide|carbide|hydroxide)s?(?![A-Za-z])/i;
+/** A Stock numeral glued to a word: "tin(II)", "iron(III)". */
+const STOCK_NUMERAL = /[a-z]\((?:I|II|III|IV|V|VI|VII|VIII)\)/;
+/** Formula-shaped tokens with a count: "SnO2", "SnCl2·2H2O", "In2O3". */
+const COUNTED_FORMULA = /(?<![A-Za-z0-9])[A-Z][A-Za-z0-9()[\]]*\d[A-Za-z0-9()[\]]*/g;
+
+/**
+ * True when the line around a word-like formula (SnO, InN) is about chemistry: a compound word
+ * (oxide, nitride...), a Stock numeral, or another counted formula of the same first element
+ * (SnO beside SnO2). "SnO" in a sentence with none of these stays a word.
+ */
+export function isChemicalContext(text: string, start: number, end: number, firstSymbol: string): boolean {
+  const lineStart = Math.max(text.lastIndexOf("\n", start - 1) + 1, start - CHEMICAL_LOOK_AROUND);
+  const newline = text.indexOf("\n", end);
+  const lineEnd = Math.min(newline < 0 ? text.length : newline, end + CHEMICAL_LOOK_AROUND);
+  const around = text.slice(lineStart, start) + " " + text.slice(end, lineEnd);
+  if (COMPOUND_WORD.test(around) || STOCK_NUMERAL.test(around)) return true;
+  for (const match of around.matchAll(COUNTED_FORMULA)) {
+    const token = match[0];
+    const after = token.charCodeAt(firstSymbol.length);
+    if (token.startsWith(firstSymbol) && !(after >= 0x61 && after <= 0x7a)) return true;
+  }
+  return false;
+}

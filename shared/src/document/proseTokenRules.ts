@@ -36,8 +36,20 @@ const NOT_SPECIES = new Set([
   "PuB",
   "ScI",
   "SnO",
+  "InN",
   "ArXiv",
 ]);
+
+/**
+ * Entries of the list above that are also real compounds (tin(II) oxide, indium nitride): they
+ * count only where the words around them are about chemistry (see isChemicalContext).
+ */
+const WORDLIKE_COMPOUNDS = new Set(["SnO", "InN"]);
+
+/** Whether `body` is a compound whose formula also spells an ordinary word or abbreviation. */
+export function isWordlikeCompound(body: string): boolean {
+  return WORDLIKE_COMPOUNDS.has(body);
+}
 
 /** What the shape of a token says, before the reader has a look. */
 export interface TokenShape {

@@ -11,8 +11,8 @@ import { isAlloyDesignation, isGroupFragment, isSeriesId, type SeriesMemo } from
 import { latexMathSpan, scanLatexMath, type MathSpan } from "./latexMathSpan";
 import { mhchemSpanEnd, scanMhchemBody } from "./mhchemSpan";
 import { equationsInProse } from "./reactions/proseEquations";
-import { isPartOfCode, isWordContext } from "./proseContext";
-import { isConfidentToken, needsCalmContext, shapeOf } from "./proseTokenRules";
+import { isChemicalContext, isPartOfCode, isWordContext } from "./proseContext";
+import { isConfidentToken, isWordlikeCompound, needsCalmContext, shapeOf } from "./proseTokenRules";
 import { isOccurrence, smilesAt, smilesOccurrence } from "./smilesSpan";
 import { newNameScanState, scanNamesInChunk, type NameScanState } from "./proseNames";
 import { emptySink, memoisedReader, occurrenceAt, unreadableAt, type ScanSink, type ScanSteps, type SpeciesReader } from "./speciesReader";
@@ -370,7 +370,10 @@ function formulaToken(scan: ProseScan, start: number, end: number): number {
   if (!isConfidentToken(token, body, shape)) {
     // "C + O2 -> CO2": a lone element symbol counts as a reactant or product in an equation.
     const loneSymbol = shape.symbols.length === 1 && !shape.hasCount && !shape.hasCharge && body === shape.symbols[0];
-    if (!loneSymbol || !isLoneReactant(text, bodyStart, tokenEnd)) return next;
+    const reactant = loneSymbol && isLoneReactant(text, bodyStart, tokenEnd);
+    // "tin(II) oxide (SnO)": a formula that also spells a word counts beside chemistry words.
+    const chemical = !loneSymbol && isWordlikeCompound(body) && isChemicalContext(text, bodyStart, tokenEnd, shape.symbols[0]);
+    if (!reactant && !chemical) return next;
   }
   if (isPartOfCode(text, bodyStart, tokenEnd)) return next;
   if (isGroupFragment(text, bodyStart, tokenEnd, body) || isAlloyDesignation(shape.symbols)) return next;
