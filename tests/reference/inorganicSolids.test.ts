@@ -170,9 +170,9 @@ describe("molecular species stay molecules", () => {
   });
 
   it.each([
-    // from memory: Greenwood & Earnshaw (TiCl4 is a molecular liquid; CrO2 is chromium(IV) oxide, no peroxide)
+    // from memory: Greenwood & Earnshaw (TiCl4 is a molecular liquid; CrO3 is chains of CrO4 tetrahedra)
     ["TiCl4", "transition-metal-centre"],
-    ["CrO2", "transition-metal-centre"],
+    ["CrO3", "transition-metal-centre"],
   ])("%s is not forced into ions", (formula, code) => {
     const result = ionsOf(formula);
     expect(result.problem.code).toBe(code);

@@ -284,7 +284,8 @@ describe("formulas that are not plainly salts are not forced into ions", () => {
     ["NH4+", "ok", "ammonium on its own is the ion"],
     ["TiCl4", "transition-metal-centre", "a molecular transition-metal halide"],
     ["[Fe(CN)6]4-", "transition-metal-centre", "a complex ion, not a salt"],
-    ["CrO2", "transition-metal-centre", "chromium(IV) oxide: Cr4+ is not a usual ion charge, and it is no peroxide"],
+    ["Mn2O7", "transition-metal-centre", "manganese(VII) oxide is a molecular liquid, O3Mn-O-MnO3"],
+    ["VCl4", "transition-metal-centre", "vanadium(IV) chloride is a tetrahedral molecular liquid"],
     ["SnCl4", "ok", "tin(IV) chloride is a tetrahedral molecular liquid"],
     ["HgCl2", "ok", "mercury(II) chloride is a linear molecule"],
   ])("%s", (input, expected, why) => {

@@ -6,8 +6,8 @@
 import { elementBySymbol } from "../elements";
 
 // common practice: the usual charges of metal ions in salts and oxides, as in the tables of common
-// ions of general-chemistry texts (Mn4+ as in MnO2). Mercury(I) is the Hg2 2+ pair, not Hg+, so it
-// is left out.
+// ions of general-chemistry texts (Mn4+ as in MnO2, Cr4+ as in CrO2, V5+ as in V2O5). Mercury(I)
+// is the Hg2 2+ pair, not Hg+, so it is left out.
 const CHARGES: Readonly<Record<string, readonly number[]>> = {
   Be: [2],
   Al: [3],
@@ -19,8 +19,8 @@ const CHARGES: Readonly<Record<string, readonly number[]>> = {
   Bi: [3],
   Sc: [3],
   Ti: [3, 4],
-  V: [2, 3],
-  Cr: [2, 3],
+  V: [2, 3, 4, 5],
+  Cr: [2, 3, 4],
   Mn: [2, 3, 4],
   Fe: [2, 3],
   Co: [2, 3],
@@ -58,6 +58,46 @@ const CHALCOGENS = new Set(["O", "S", "Se", "Te"]);
 const HALOGENS = new Set(["F", "Cl", "Br", "I"]);
 
 /**
+ * Charges found only beside oxide ions: VO2, V2O5, CrO2 and MnO2 are oxides of these charges, but a
+ * cation this oxidising would oxidise sulfide (MnS2 is Mn2+ with the disulfide ion S2 2-, as in
+ * pyrite) and forms no simple salt with the common oxoanions.
+ */
+const OXIDE_ONLY_CHARGES: Readonly<Record<string, readonly number[]>> = {
+  V: [4, 5],
+  Cr: [4],
+  Mn: [4],
+};
+
+/**
+ * The charges of the metal's cation that form an ionic lattice with the anion `anionKey` (its
+ * composition key: "O", "Cl", "SO4"); `monatomic` tells a single-element anion from a polyatomic one.
+ */
+export function chargesBeside(symbol: string, anionKey: string, monatomic: boolean): readonly number[] {
+  const charges = metalIonCharges(symbol);
+  if (monatomic && !formsIonicLattice(symbol, anionKey)) return [];
+  const oxideOnly = OXIDE_ONLY_CHARGES[symbol];
+  const fitting = oxideOnly === undefined || anionKey === "O" ? charges : charges.filter((charge) => !oxideOnly.includes(charge));
+  // Halides of d-block metals are layer lattices up to the 3+ ion (FeCl2, CrCl3, CuCl); beyond it
+  // they are molecules (TiCl4, VCl4).
+  return monatomic && HALOGENS.has(anionKey) && !formsIonicBinarySalts(symbol) ? fitting.filter((charge) => charge <= 3) : fitting;
+}
+
+/**
+ * d-block metals whose halides are ionic lattices in their usual charges up to 3+. Not zinc and
+ * mercury (ZnCl2 and HgCl2 are linear molecules in the gas and strongly covalent solids), nor the
+ * platinum metals and gold, whose halides are chains and molecules of square-planar units (PdCl2,
+ * Au2Cl6).
+ */
+const COVALENT_D_HALIDES = new Set(["Zn", "Hg", "Pd", "Pt", "Au"]);
+
+function formsIonicHalides(symbol: string): boolean {
+  // Cadmium's are the layer lattices that name a structure type (CdCl2, CdI2); silver's are rock salt.
+  if (symbol === "Ag" || symbol === "Cd") return true;
+  const element = elementBySymbol(symbol);
+  return element?.category === "transition-metal" && !COVALENT_D_HALIDES.has(symbol) && metalIonCharges(symbol).length > 0;
+}
+
+/**
  * Metals whose binary compounds with halide, oxide and sulfide ions are plainly ionic lattices
  * (groups 1 and 2 but beryllium). Other metals' halides are often molecular (AlCl3, SnCl4, TiCl4),
  * so a metal and a single-element anion are split into ions only for these.
@@ -73,15 +113,16 @@ export function formsIonicBinarySalts(symbol: string): boolean {
  * lattice, so that the formula is read as their ions. Groups 1-2 (but beryllium) do with every
  * such anion. Every other listed metal does with oxide, sulfide, selenide and telluride in its
  * usual charges: no oxide or sulfide of these in such a charge is a molecule under ordinary
- * conditions (ZnO, Fe2O3, PbS). Their halides are often molecules (SnCl4, HgCl2, AlCl3), so only
- * silver's are split: the silver halides are ionic lattices. Nitrides, phosphides and carbides of
- * these metals are covalent networks (AlN, GaAs) or not simple ions at all.
+ * conditions (ZnO, Fe2O3, PbS). Main-group halides are often molecules (SnCl4, AlCl3), so of the
+ * other metals' halides only those of silver and of the d-block metals that form layer lattices
+ * (FeCl2, CoCl2, CrCl3, CuCl) are split. Nitrides, phosphides and carbides of these metals are
+ * covalent networks (AlN, GaAs) or not simple ions at all.
  */
 export function formsIonicLattice(symbol: string, anionSymbol: string): boolean {
   if (formsIonicBinarySalts(symbol)) return true;
   if (symbol === "Be" || metalIonCharges(symbol).length === 0) return false;
   if (CHALCOGENS.has(anionSymbol)) return true;
-  return symbol === "Ag" && HALOGENS.has(anionSymbol);
+  return HALOGENS.has(anionSymbol) && formsIonicHalides(symbol);
 }
 
 /**

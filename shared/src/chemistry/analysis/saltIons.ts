@@ -20,7 +20,7 @@ import { ANION_ROOTS } from "../reader/names/anionRoots";
 import { ION_NAMES } from "../reader/names/ionNames";
 import type { FormulaPart, SpeciesReading } from "../types";
 import { compositionKey } from "../vsepr/measuredAngles";
-import { formsIonicBinarySalts, formsIonicLattice, metalIonCharges } from "./metalIonCharges";
+import { chargesBeside, formsIonicBinarySalts, formsIonicLattice, metalIonCharges } from "./metalIonCharges";
 
 /** One ion of a salt with its count in one formula unit. */
 export interface SaltIon {
@@ -133,8 +133,13 @@ function collectSplits(first: CationChoice, rest: readonly WrittenUnit[], found:
 }
 
 /** Adds every way the charges balance to zero. */
-function collect(cations: readonly CationChoice[], anion: AnionChoice, found: SaltIon[][]): void {
-  if (!cations.every((cation) => ionicWith(cation, anion))) return;
+function collect(written: readonly CationChoice[], anion: AnionChoice, found: SaltIon[][]): void {
+  if (!written.every((cation) => ionicWith(cation, anion))) return;
+  // Only the charges each metal takes beside this anion (Mn4+ beside oxide, never beside sulfide).
+  const cations = written.map((cation) =>
+    cation.metal === undefined ? cation : { ...cation, charges: chargesBeside(cation.metal, anion.key, anion.monatomic) },
+  );
+  if (cations.some((cation) => cation.charges.length === 0)) return;
   for (const anionCharge of anion.charges) {
     const negative = anion.count * anionCharge;
     const before = found.length;
