@@ -10,6 +10,7 @@ import type { AnalysisResult, Problem, SpeciesPart, SpeciesReading } from "../ty
 import { metalIonCharges, takesStockNumeral } from "./metalIonCharges";
 import { partShapeText, partsListText } from "./partShapes";
 import { saltIons, type SaltIon } from "./saltIons";
+import { covalentCharacterNote } from "./networkSolids";
 import { readFormulaSpan } from "../reader/readFormula";
 import { ANION_ROOTS } from "../reader/names/anionRoots";
 import { ION_NAMES } from "../reader/names/ionNames";
@@ -29,11 +30,26 @@ export function saltAnalysis(reading: SpeciesReading, analyze: AnalyzeText): Ana
     shaped.length === 0
       ? "Monatomic ions have no shape of their own."
       : `${shaped.map((p) => `${p.formula}: ${partShapeText(p)}`).join("; ")}.`;
+  const covalent = covalentCharacterNote(reading.formula, reading.composition);
   const message =
     `${reading.formula} is an ionic compound of ${partsListText(parts)} ions: it forms a lattice of ions, ` +
-    `not discrete molecules, so the compound as a whole has no VSEPR shape. ${shapes}`;
+    `not discrete molecules, so the compound as a whole has no VSEPR shape. ${shapes}` +
+    (covalent ? ` ${covalent}` : metalSurroundingsNote(ions));
   const name = reading.name ?? saltName(ions);
   return { ok: false, reading: name ? { ...reading, name } : reading, problem: { code: "ionic-solid", message }, parts };
+}
+
+/**
+ * For a salt of a d-block metal ion, that VSEPR does not decide how the ions around it are arranged
+ * (the octahedral Cr3+ of Cr2O3 is no steric number); empty for other salts.
+ */
+function metalSurroundingsNote(ions: readonly SaltIon[]): string {
+  const metals = ions
+    .filter((ion) => ion.role === "cation" && ion.monatomic && elementBySymbol(symbolOf(ion))?.category === "transition-metal")
+    .map((ion) => ion.formula);
+  if (metals.length === 0) return "";
+  const subject = metals.length === 1 ? `each ${metals[0]} ion` : `the ${metals.join(" and ")} ions`;
+  return ` How the neighbouring ions are arranged around ${subject} is set by ion sizes and ligand-field effects, not by VSEPR, so no geometry is given for the metal.`;
 }
 
 /**
@@ -78,7 +94,9 @@ function ionNameFor(formula: string): string | undefined {
   const read = readFormulaSpan(formula, 0, formula.length, "formula");
   if (!read.ok) return undefined;
   const key = compositionKey(read.value.composition, 0);
-  return ION_NAMES.find((ion) => ion.charge === read.value.charge && ionKey(ion.body) === key)?.name;
+  const name = ION_NAMES.find((ion) => ion.charge === read.value.charge && ionKey(ion.body) === key)?.name;
+  // Names are listed in lower case for lookup; a Stock numeral is written in capitals.
+  return name?.replace(/\(([ivx]+)\)/g, (numeral) => numeral.toUpperCase());
 }
 
 function ionKey(body: string): string | undefined {

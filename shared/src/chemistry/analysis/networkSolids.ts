@@ -7,7 +7,8 @@
  * Listed: the binary oxides, nitrides, carbides, phosphides and arsenides of the metalloids, boron,
  * beryllium and the group 13 metals that are covalent networks with no discrete molecule under
  * ordinary conditions. Oxides and sulfides of the other metals are ionic lattices, read as their
- * ions (saltIons.ts); molecular oxides (CO2, P4O10, As4O6) are not listed.
+ * ions (saltIons.ts), with a word on the covalent character of those that are tetrahedral networks
+ * too (ZnO, ZnS, CuCl); molecular oxides (CO2, P4O10, As4O6) are not listed.
  */
 import type { FormulaPart, LatticeSite, Problem, SpeciesReading } from "../types";
 import { readFormulaBody } from "../reader/formulaBody";
@@ -67,6 +68,7 @@ const NETWORK_SOLIDS: Readonly<Record<string, NetworkSolid>> = {
   GaAs: { name: "gallium arsenide", forms: "zinc-blende structure", sites: tetrahedralPair("Ga", "As") },
   InP: { name: "indium phosphide", forms: "zinc-blende structure", sites: tetrahedralPair("In", "P") },
   InAs: { name: "indium arsenide", forms: "zinc-blende structure", sites: tetrahedralPair("In", "As") },
+  InN: { name: "indium nitride", forms: "wurtzite structure", sites: tetrahedralPair("In", "N") },
 };
 
 // from memory: Greenwood & Earnshaw, Chemistry of the Elements (allotropes of carbon)
@@ -75,17 +77,51 @@ const NETWORK_ELEMENTS: Readonly<Record<string, NetworkSolid>> = {
   graphite: { name: "graphite", forms: "in flat hexagonal layers", sites: [site("C", 3, "C", "trigonal planar")] },
 };
 
+// from memory: Greenwood & Earnshaw, Chemistry of the Elements, and Wells, Structural Inorganic
+// Chemistry (zinc oxide and sulfide, cadmium chalcogenides, copper(I) and silver iodide halides)
+const COVALENT_IONIC_LATTICES: Readonly<Record<string, NetworkSolid>> = {
+  ZnO: { name: "zinc oxide", forms: "wurtzite structure", sites: tetrahedralPair("Zn", "O") },
+  ZnS: { name: "zinc sulfide", forms: "zinc-blende and wurtzite structures", sites: tetrahedralPair("Zn", "S") },
+  ZnSe: { name: "zinc selenide", forms: "zinc-blende structure", sites: tetrahedralPair("Zn", "Se") },
+  CdS: { name: "cadmium sulfide", forms: "wurtzite structure", sites: tetrahedralPair("Cd", "S") },
+  CdSe: { name: "cadmium selenide", forms: "wurtzite structure", sites: tetrahedralPair("Cd", "Se") },
+  CuCl: { name: "copper(I) chloride", forms: "zinc-blende structure", sites: tetrahedralPair("Cu", "Cl") },
+  CuBr: { name: "copper(I) bromide", forms: "zinc-blende structure", sites: tetrahedralPair("Cu", "Br") },
+  CuI: { name: "copper(I) iodide", forms: "zinc-blende structure", sites: tetrahedralPair("Cu", "I") },
+  AgI: { name: "silver iodide", forms: "wurtzite form", sites: tetrahedralPair("Ag", "I") },
+};
+
+let covalentByComposition: Map<string, NetworkSolid> | undefined;
+
+/**
+ * A sentence for the ionic solids that are as much covalent networks as ionic lattices (ZnO, ZnS,
+ * CuCl): each atom tetrahedral among four of the other, as in the III-V semiconductors. Undefined
+ * for every other composition.
+ */
+export function covalentCharacterNote(formula: string, composition: readonly FormulaPart[]): string | undefined {
+  covalentByComposition ??= byKey(COVALENT_IONIC_LATTICES);
+  const solid = covalentByComposition.get(compositionKey(composition, 0));
+  if (solid === undefined) return undefined;
+  return (
+    `${formula} also has considerable covalent character: in its ${solid.forms} ${latticeSitesText(solid.sites)}, ` +
+    "a network solid as much as a lattice of ions."
+  );
+}
+
+function byKey(table: Readonly<Record<string, NetworkSolid>>): Map<string, NetworkSolid> {
+  const map = new Map<string, NetworkSolid>();
+  for (const [formula, solid] of Object.entries(table)) {
+    const read = readFormulaBody(formula, 0, formula.length);
+    if (read.ok) map.set(compositionKey(read.value.composition, 0), solid);
+  }
+  return map;
+}
+
 let byComposition: Map<string, NetworkSolid> | undefined;
 
 function solidFor(composition: readonly FormulaPart[], charge: number): NetworkSolid | undefined {
   if (charge !== 0) return undefined;
-  if (byComposition === undefined) {
-    byComposition = new Map();
-    for (const [formula, solid] of Object.entries(NETWORK_SOLIDS)) {
-      const read = readFormulaBody(formula, 0, formula.length);
-      if (read.ok) byComposition.set(compositionKey(read.value.composition, 0), solid);
-    }
-  }
+  byComposition ??= byKey(NETWORK_SOLIDS);
   return byComposition.get(compositionKey(composition, 0));
 }
 

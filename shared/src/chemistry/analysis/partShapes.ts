@@ -17,11 +17,12 @@ export function partShapeText(part: SpeciesPart): string {
 export function resultShapeText(result: AnalysisResult): string {
   if (!result.ok) {
     if (result.parts) return `made of ${partsListText(result.parts, true)}`;
-    if (result.problem.code === "transition-metal-centre") {
+    if (result.problem.code === "transition-metal-centre" || result.problem.code === "f-block-centre") {
       const metal = result.reading?.composition
         .map((part) => elementBySymbol(part.symbol))
         .find((element) => element && element.category !== "main-group" && element.category !== "noble-gas");
-      return `its centre is ${metal ? metal.name + ", " : ""}a transition metal, so VSEPR predicts no shape`;
+      const kind = result.problem.code === "f-block-centre" ? "an f-block metal" : "a transition metal";
+      return `its centre is ${metal ? metal.name + ", " : ""}${kind}, so VSEPR predicts no shape`;
     }
     return `no shape predicted (${result.problem.code})`;
   }
