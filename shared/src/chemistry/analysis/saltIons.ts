@@ -20,6 +20,7 @@ import { ANION_ROOTS } from "../reader/names/anionRoots";
 import { ION_NAMES } from "../reader/names/ionNames";
 import type { FormulaPart, SpeciesReading } from "../types";
 import { compositionKey } from "../vsepr/measuredAngles";
+import { complexCharges, complexIon } from "./complexIons";
 import { chargesBeside, formsIonicBinarySalts, formsIonicLattice, metalIonCharges } from "./metalIonCharges";
 
 /** One ion of a salt with its count in one formula unit. */
@@ -38,6 +39,8 @@ interface WrittenUnit {
   readonly body: string;
   readonly count: number;
   readonly bracketed: boolean;
+  /** Written in square brackets: a coordination complex, [Cu(NH3)4] or [Fe(CN)6]. */
+  readonly square: boolean;
   readonly composition: readonly FormulaPart[];
 }
 
@@ -62,10 +65,18 @@ interface AnionChoice {
   readonly monatomic: boolean;
 }
 
-/** Polyatomic cations whose salts are plainly ionic; nitrosyl and nitronium compounds (NOCl) are not split. */
-const ONIUM_CATIONS = new Set(["ammonium", "phosphonium", "hydronium"]);
-/** Onium ions that people write without brackets: NH4Cl, PH4I. */
-const UNBRACKETED_ONIUM = new Set(["NH4", "PH4"]);
+/**
+ * Polyatomic cations whose salts are plainly ionic, the oxocations of vanadium(IV) and uranium(VI)
+ * among them (VOSO4, UO2(NO3)2); nitrosyl and nitronium compounds (NOCl) are not split.
+ */
+const ONIUM_CATIONS = new Set(["ammonium", "phosphonium", "hydronium", "vanadyl", "uranyl"]);
+/** Polyatomic cations that people write without brackets: NH4Cl, PH4I, VOSO4, UO2(NO3)2. */
+const UNBRACKETED_ONIUM: ReadonlyMap<string, readonly [second: string, count: number]> = new Map([
+  ["NH4", ["H", 4]],
+  ["PH4", ["H", 4]],
+  ["VO", ["O", 1]],
+  ["UO2", ["O", 2]],
+]);
 
 /**
  * Anions that bind metals other than those of groups 1-2 by covalent bonds or as ligands
@@ -205,6 +216,8 @@ function leadingCations(units: readonly WrittenUnit[]): CationChoice[] {
   if (!first.bracketed && metalIonCharges(first.body).length > 0) choices.push(metalCation(first, 1));
   const onium = oniumAt(units, 0);
   if (onium) choices.push(onium);
+  const complex = first.square ? complexIon(first.body) : undefined;
+  if (complex) choices.push({ body: first.body, count: first.count, charges: complexCharges(complex, 1), monatomic: false, width: 1 });
   return choices;
 }
 
@@ -232,7 +245,7 @@ function metalCation(unit: WrittenUnit, width: number): CationChoice {
   };
 }
 
-/** Ammonium, phosphonium or hydronium at `index`: "(NH4)2" as one unit, or "NH4" written as N then H4. */
+/** Ammonium, phosphonium, vanadyl... at `index`: "(NH4)2" as one unit, or "NH4" written as N then H4. */
 function oniumAt(units: readonly WrittenUnit[], index: number): CationChoice | undefined {
   const unit = units[index];
   if (unit === undefined) return undefined;
@@ -241,10 +254,13 @@ function oniumAt(units: readonly WrittenUnit[], index: number): CationChoice | u
     return charges ? { body: unit.body, count: unit.count, charges, monatomic: false, width: 1 } : undefined;
   }
   const next = units[index + 1];
-  if (next === undefined || next.bracketed || unit.count !== 1 || next.body !== "H" || next.count !== 4) return undefined;
-  const body = `${unit.body}H4`;
-  if (!UNBRACKETED_ONIUM.has(body)) return undefined;
-  return { body, count: 1, charges: [1], monatomic: false, width: 2 };
+  if (next === undefined || next.bracketed || unit.bracketed || unit.count !== 1) return undefined;
+  const body = `${unit.body}${next.body}${next.count === 1 ? "" : next.count}`;
+  const second = UNBRACKETED_ONIUM.get(body);
+  if (second === undefined || second[0] !== next.body || second[1] !== next.count) return undefined;
+  const secondParts = next.composition.map((part) => ({ symbol: part.symbol, count: part.count * next.count }));
+  const charges = ions().cations.get(compositionKey([...unit.composition, ...secondParts], 0));
+  return charges ? { body, count: 1, charges, monatomic: false, width: 2 } : undefined;
 }
 
 /**
@@ -257,6 +273,8 @@ function anionsOf(rest: readonly WrittenUnit[]): AnionChoice[] {
     const key = compositionKey(rest[0].composition, 0);
     const charges = ions().anions.get(key);
     if (charges) choices.push({ body: rest[0].body, key, count: rest[0].count, charges, monatomic: false });
+    const complex = rest[0].square ? complexIon(rest[0].body) : undefined;
+    if (complex) choices.push({ body: rest[0].body, key, count: rest[0].count, charges: complexCharges(complex, -1), monatomic: false });
   }
   if (rest.length === 1 && !rest[0].bracketed) {
     const charge = MONATOMIC_ANION_CHARGE.get(rest[0].body);
@@ -291,6 +309,7 @@ function writtenUnits(formula: string): WrittenUnit[] | undefined {
     const code = formula.charCodeAt(i);
     let body: string;
     let bracketed = false;
+    const square = code === 0x5b;
     if (code >= 0x41 && code <= 0x5a) {
       const symbolEnd = i + 1 < formula.length && isLower(formula.charCodeAt(i + 1)) ? i + 2 : i + 1;
       body = formula.slice(i, symbolEnd);
@@ -309,7 +328,7 @@ function writtenUnits(formula: string): WrittenUnit[] | undefined {
     while (i < formula.length && isDigit(formula.charCodeAt(i))) count = count * 10 + formula.charCodeAt(i++) - 0x30;
     const read = readFormulaBody(body, 0, body.length);
     if (!read.ok) return undefined;
-    units.push({ body, count: i > countStart ? count : 1, bracketed, composition: read.value.composition });
+    units.push({ body, count: i > countStart ? count : 1, bracketed, square, composition: read.value.composition });
   }
   return units;
 }

@@ -181,6 +181,11 @@ const REFUSED: Readonly<Record<string, string>> = {
     "Al2Cl6 is aluminium chloride's bridged dimer: two Cl atoms each bond to both Al atoms, which makes each Al roughly tetrahedral, " +
     "but solid aluminium chloride is a layer lattice and the hot vapour is AlCl3, so the formula does not settle which form is meant. " +
     "Write AlCl3 for the monomer or the SMILES of the dimer, Cl[Al-]1(Cl)[Cl+][Al-](Cl)(Cl)[Cl+]1.",
+  // from memory: Greenwood & Earnshaw, Chemistry of the Elements (metasilicates are chains and
+  // rings of corner-sharing SiO4 tetrahedra; no salt holds a lone SiO3 2- ion)
+  "O3Si^-2":
+    "SiO3^2- (metasilicate) is no discrete ion: in its salts, such as Na2SiO3, SiO4 tetrahedra share two corners each in long chains " +
+    "or rings, so every Si is tetrahedral among four O. A lone trigonal-planar SiO3^2- is found in no salt, so no shape is given for it.",
 };
 
 /** Why a formula with a well-known but phase-dependent structure is not analysed, if it is one. */

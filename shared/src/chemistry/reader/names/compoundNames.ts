@@ -165,6 +165,8 @@ function balanced(cation: NamedPart, cationCharge: number, anion: NamedPart, ani
 }
 
 function group(named: NamedPart, count: number): string {
+  // A complex ion named as one word (ferricyanide) is written in square brackets: K3[Fe(CN)6].
+  if (!named.singleElement && isComplexBody(named.body)) return part(`[${named.body}]`, count);
   if (named.singleElement || count === 1) return part(named.body, count);
   return `(${named.body})${count}`;
 }
@@ -178,4 +180,11 @@ function leastCommonMultiple(a: number, b: number): number {
   let y = b;
   while (y !== 0) [x, y] = [y, x % y];
   return (a * b) / x;
+}
+
+/** A metal holding bracketed ligands: "Fe(CN)6", "Al(OH)4". */
+function isComplexBody(body: string): boolean {
+  const symbolEnd = body.length > 1 && body.charCodeAt(1) >= 0x61 && body.charCodeAt(1) <= 0x7a ? 2 : 1;
+  const symbol = body.slice(0, symbolEnd);
+  return elementBySymbol(symbol) !== undefined && !NONMETALS.has(symbol) && body.includes("(");
 }
