@@ -8,7 +8,7 @@ import { memoisedReader, type SpeciesReader } from "./speciesReader";
 import { readDelimitedRecords } from "./tables/delimitedRecords";
 import { readJsonRecords } from "./tables/json";
 import type { RecordSink } from "./tables/records";
-import { readYamlRecords } from "./tables/yaml";
+import { readYamlRecords, readYamlStream, type YamlStream } from "./tables/yaml";
 import type { Reaction } from "./reactions/reactionTypes";
 import type { DocumentKind, DocumentModel, Finding, SpeciesOccurrence } from "./types";
 
@@ -32,11 +32,23 @@ export function analyzeDocument(
   read: SpeciesReader = memoisedReader(),
   options: AnalyzeOptions = {},
 ): DocumentModel {
+  const source = typeof text === "string" ? text : "";
+  return modelOf(kind, (sink) => readByKind(source, kind, read, sink, options));
+}
+
+/**
+ * The model of a YAML stream `text` whose documents are already parsed: what `analyzeDocument`
+ * gives for `text`, without parsing it again (the caller also needs the documents' nodes).
+ */
+export function analyzeYamlStream(text: string, documents: YamlStream, read: SpeciesReader): DocumentModel {
+  return modelOf("yaml", (sink) => readYamlStream(documents, text, read, sink));
+}
+
+function modelOf(kind: DocumentKind, reader: (sink: RecordSink) => readonly Finding[]): DocumentModel {
   const sink: RecordSink = { occurrences: [], unreadable: [], records: [], reactions: [] };
   let problems: readonly Finding[];
   try {
-    const source = typeof text === "string" ? text : "";
-    problems = readByKind(source, kind, read, sink, options);
+    problems = reader(sink);
   } catch (error) {
     // Every reader is written not to throw; this keeps a document usable if one still does.
     problems = [documentUnreadable(error)];

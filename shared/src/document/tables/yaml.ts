@@ -4,7 +4,7 @@
  * the `yaml` package's node ranges; syntax errors become problems. Aliases are not followed, so
  * an alias bomb costs nothing.
  */
-import { isMap, isPair, isScalar, isSeq, parseAllDocuments, Scalar, type Node, type Pair, type YAMLMap } from "yaml";
+import { isMap, isPair, isScalar, isSeq, parseAllDocuments, Scalar, type Document, type Node, type Pair, type YAMLMap } from "yaml";
 import type { SpeciesReader } from "../speciesReader";
 import type { Finding } from "../types";
 import { columnUnder } from "./delimitedRecords";
@@ -12,17 +12,37 @@ import { readEquationCell } from "./equationCells";
 import { isEquationHeader, namesSpecies } from "./headers";
 import { addRecord, type RecordField, type RecordSink } from "./records";
 
+/** The documents of a YAML stream, as `parseYamlStream` gives them. */
+export type YamlStream = readonly Document.Parsed[];
+
+/** The problem reported when the `yaml` package throws on a text. */
+const UNREADABLE: Finding = {
+  range: { start: 0, end: 0 },
+  severity: "error",
+  code: "yaml-syntax",
+  message: "This YAML could not be read.",
+};
+
 /** Reads a YAML stream (one or more documents) into `sink`; returns its syntax problems. */
 export function readYamlRecords(text: string, read: SpeciesReader, sink: RecordSink): readonly Finding[] {
-  const problems: Finding[] = [];
-  let documents;
+  const documents = parseYamlStream(text);
+  return documents ? readYamlStream(documents, text, read, sink) : [UNREADABLE];
+}
+
+/** The documents of `text` (undefined when the `yaml` package throws on it). */
+export function parseYamlStream(text: string): YamlStream | undefined {
   try {
-    documents = parseAllDocuments(text, { prettyErrors: false, keepSourceTokens: false });
+    const documents = parseAllDocuments(text, { prettyErrors: false, keepSourceTokens: false });
+    return Array.isArray(documents) ? documents : [];
   } catch {
-    return [{ range: { start: 0, end: 0 }, severity: "error", code: "yaml-syntax", message: "This YAML could not be read." }];
+    return undefined;
   }
-  const list = Array.isArray(documents) ? documents : [];
-  for (const document of list) {
+}
+
+/** Reads the parsed `documents` of `text` into `sink`; returns their syntax problems. */
+export function readYamlStream(documents: YamlStream, text: string, read: SpeciesReader, sink: RecordSink): readonly Finding[] {
+  const problems: Finding[] = [];
+  for (const document of documents) {
     for (const error of document.errors) {
       problems.push({
         range: { start: Math.min(error.pos[0], text.length), end: Math.min(Math.max(error.pos[1], error.pos[0] + 1), text.length) },
