@@ -5,29 +5,15 @@
 import { describe, expect, it } from "vitest";
 import {
   analyzeDocument,
-  checkDocument,
   chunkedTextOf,
   createDocumentAnalyser,
   editChunkedText,
   speciesAtOffset,
   wholeText,
-  type ChunkedText,
-  type DocumentKind,
-  type Finding,
 } from "../../shared/src/index";
 import { parseTree, type ParseError } from "jsonc-parser/lib/esm/main.js";
+import { canonical, checkAgainstScratch, fromScratch, type Session } from "../support/incrementalCheck";
 import { seededRandom } from "../support/seededRandom";
-
-function fromScratch(text: string, kind: DocumentKind): Finding[] {
-  const model = analyzeDocument(text, kind);
-  return [...model.problems, ...checkDocument(model)].sort((a, b) => a.range.start - b.range.start || a.range.end - b.range.end);
-}
-
-/** Findings in one canonical order, so ties between equal ranges do not matter. */
-function canonical(findings: readonly Finding[]): Finding[] {
-  const key = (finding: Finding): string => `${finding.range.start}:${finding.range.end}:${finding.code}:${finding.message}`;
-  return [...findings].sort((a, b) => (key(a) < key(b) ? -1 : key(a) > key(b) ? 1 : 0));
-}
 
 // common practice: valence electron counts, lone pairs and shapes of these cylinder gases, right and wrong.
 const TABLE_ROWS = [
@@ -176,11 +162,6 @@ function randomJsonEdit(session: Session, random: () => number, undo: { start: n
   session.text = editChunkedText(session.text, start, end, insert);
 }
 
-interface Session {
-  text: ChunkedText;
-  readonly analyser: ReturnType<typeof createDocumentAnalyser>;
-}
-
 function randomEdit(session: Session, random: () => number, pieces: readonly string[]): void {
   const plain = wholeText(session.text);
   const lineStarts = [0, ...[...plain.matchAll(/\n/g)].map((match) => match.index + 1)];
@@ -236,27 +217,6 @@ function randomTableEdit(session: Session, random: () => number, delimiter: stri
   const cell = pick(cells);
   const values = TABLE_ROWS.flatMap((row) => row.split(","));
   session.text = editChunkedText(session.text, cell.index, cell.index + cell[0].length, pick(values));
-}
-
-function checkAgainstScratch(session: Session, kind: DocumentKind, random: () => number): void {
-  const plain = wholeText(session.text);
-  const analysis = session.analyser.analyse(session.text);
-  const scratch = canonical(fromScratch(plain, kind));
-  // Findings a part at a time, before the whole list is asked for, give the same list.
-  expect(canonical([...session.analyser.analyse(session.text).findingParts()].flat())).toEqual(scratch);
-  // Part of the work done a part at a time, as a server between other requests does it, the rest at once.
-  for (const _ of analysis.findingParts()) if (random() < 0.05) break;
-  expect(canonical(analysis.findings())).toEqual(scratch);
-  // A request about one place sees every finding there.
-  const place = Math.floor(random() * (plain.length + 1));
-  const touching = (finding: Finding): boolean => finding.range.start <= place && place <= finding.range.end;
-  expect(canonical(analysis.findingsAround(place, place).filter(touching))).toEqual(scratch.filter(touching));
-  // The species a hover asks for, at a few random places.
-  const model = analyzeDocument(plain, kind);
-  for (let probe = 0; probe < 3; probe++) {
-    const offset = Math.floor(random() * (plain.length + 1));
-    expect(analysis.speciesAt(offset)?.range).toEqual(speciesAtOffset(model, offset)?.range);
-  }
 }
 
 describe("incremental analysis after random edits", () => {
@@ -375,7 +335,7 @@ describe("incremental analysis after random edits", () => {
     }
   });
 
-  it.each(["plaintext", "json", "yaml"] as const)("%s is read whole and agrees with a fresh analysis", (kind) => {
+  it.each(["plaintext", "json", "yaml"] as const)("%s typed from a line of prose agrees with a fresh analysis", (kind) => {
     const random = seededRandom(7);
     const session: Session = { text: chunkedTextOf("SF4 and NF3\n"), analyser: createDocumentAnalyser(kind) };
     for (let edit = 0; edit < 50; edit++) {
