@@ -9,14 +9,16 @@
  * each is read under the document's header, as the command line reads a file in batches, with
  * one row memo for the document. A changed header or delimiter reads every segment again.
  * Markdown: segments are the blocks of `markdownBlocks`, split again only around an edit (see
- * `markdownAnalyser`). JSON: the elements of its list of records (see `jsonListReader`). Other
- * kinds (plain text, YAML) are read whole on every version.
+ * `markdownAnalyser`). JSON: the elements of its list of records (see `jsonListReader`). YAML:
+ * the items of its block list of records (see `yamlListReader`). Plain text, and JSON or YAML
+ * without such a list (or with a syntax error), are read whole on every version.
  */
 import { analysedTextOf, MAX_ANALYSED_LENGTH } from "./analysedText";
 import { analyzeDocument } from "./analyzeDocument";
 import { checkDocument } from "./checkDocument";
 import { findingsInParts } from "./findingsInParts";
 import { jsonListReader } from "./jsonParts";
+import { yamlListReader } from "./yamlParts";
 import { sliceOf, wholeText, type ChunkedText, type TextChunk } from "./chunkedText";
 import { markdownAnalyser } from "./markdownAnalysis";
 import { joinedModels, shiftedModel } from "./shiftedModel";
@@ -73,7 +75,7 @@ export function createDocumentAnalyser(kind: DocumentKind, limit = MAX_ANALYSED_
   const read = memoisedReader();
   const table = kind === "csv" || kind === "tsv" ? tableSegments(kind, read) : undefined;
   const markdown = kind === "markdown" ? markdownAnalyser(read) : undefined;
-  const json = kind === "json" ? jsonSegments(read) : undefined;
+  const list = kind === "json" ? jsonSegments(read) : kind === "yaml" ? yamlSegments(read) : undefined;
   return {
     analyse(text) {
       if (sliceOf(text, 0, BINARY_PROBE_LENGTH).includes("\u0000")) return wholeAnalysis(kind, "", read, { binary: true });
@@ -83,7 +85,7 @@ export function createDocumentAnalyser(kind: DocumentKind, limit = MAX_ANALYSED_
       }
       if (table) return table(text);
       if (markdown) return markdown(text);
-      if (json) return json(text);
+      if (list) return list(text);
       return wholeAnalysis(kind, wholeText(text), read, {});
     },
   };
@@ -338,25 +340,64 @@ function sameChunks(a: readonly TextChunk[], b: readonly TextChunk[]): boolean {
 }
 
 // ---------------------------------------------------------------------------------------------
-// JSON
+// JSON and YAML lists of records
 
-/** Below this length a JSON document's species are all listed for preparing hovers. */
-const JSON_SPECIES_LISTED_UP_TO = 256 * 1024;
+/** Below this length a JSON or YAML document's species are all listed for preparing hovers. */
+const LIST_SPECIES_LISTED_UP_TO = 256 * 1024;
+
+/** What a list reader says about one version. */
+interface ListVersion {
+  findings(): readonly Finding[];
+  /** The stretch of whole list elements around `start`..`end`; undefined outside them. */
+  around(start: number, end: number): { readonly start: number; readonly end: number } | undefined;
+}
 
 function jsonSegments(read: SpeciesReader): (text: ChunkedText) => DocumentAnalysis {
   const list = jsonListReader(read);
+  return listSegments(
+    "json",
+    read,
+    (text) => {
+      const version = list(text);
+      return { findings: () => version.findings(), around: (start, end) => version.elementsAround(start, end) };
+    },
+    // The elements read as a list of their own, as the list reader reads them.
+    (stretch) => shiftedModel(analyzeDocument(`[${stretch}]`, "json", read), -1),
+  );
+}
+
+function yamlSegments(read: SpeciesReader): (text: ChunkedText) => DocumentAnalysis {
+  const list = yamlListReader(read);
+  return listSegments(
+    "yaml",
+    read,
+    (text) => {
+      const version = list(text);
+      return { findings: () => version.findings(), around: (start, end) => version.itemsAround(start, end) };
+    },
+    // Whole items read alone read as they do in place (see `yamlListReader`).
+    (stretch) => analyzeDocument(stretch, "yaml", read),
+  );
+}
+
+/** A document whose list elements keep their findings from version to version; models are read around a place. */
+function listSegments(
+  kind: "json" | "yaml",
+  read: SpeciesReader,
+  versionOf: (text: ChunkedText) => ListVersion,
+  readStretch: (stretch: string) => DocumentModel,
+): (text: ChunkedText) => DocumentAnalysis {
   return (text) => {
-    const version = list(text);
+    const version = versionOf(text);
     let whole: DocumentAnalysis | undefined;
-    const plain = (): DocumentAnalysis => (whole ??= wholeAnalysis("json", wholeText(text), read, {}));
+    const plain = (): DocumentAnalysis => (whole ??= wholeAnalysis(kind, wholeText(text), read, {}));
     const around = (start: number, end: number): DocumentModel => {
-      const stretch = version.elementsAround(start, end);
+      const stretch = version.around(start, end);
       if (!stretch) return plain().model();
-      // The elements read as a list of their own, as the list reader reads them.
-      return shiftedModel(analyzeDocument(`[${sliceOf(text, stretch.start, stretch.end)}]`, "json", read), stretch.start - 1);
+      return shiftedModel(readStretch(sliceOf(text, stretch.start, stretch.end)), stretch.start);
     };
     return {
-      kind: "json",
+      kind,
       binary: false,
       findings: () => version.findings(),
       *findingParts() {
@@ -366,7 +407,7 @@ function jsonSegments(read: SpeciesReader): (text: ChunkedText) => DocumentAnaly
       model: () => plain().model(),
       modelAround: around,
       speciesAt: (offset) => speciesAtOffset(around(offset, offset), offset),
-      distinctSpecies: () => (text.length <= JSON_SPECIES_LISTED_UP_TO ? plain().distinctSpecies() : []),
+      distinctSpecies: () => (text.length <= LIST_SPECIES_LISTED_UP_TO ? plain().distinctSpecies() : []),
     };
   };
 }

@@ -227,7 +227,7 @@ function cleanElements(stretch: string): { start: number; end: number }[] | unde
  * Where two versions differ: from `start`, `oldEnd` in the old text and `newEnd` in the new one;
  * undefined when they are the same. Chunks both share are skipped without reading them.
  */
-function changedStretch(before: ChunkedText, after: ChunkedText): { start: number; oldEnd: number; newEnd: number } | undefined {
+export function changedStretch(before: ChunkedText, after: ChunkedText): { start: number; oldEnd: number; newEnd: number } | undefined {
   const oldChunks = before.chunks;
   const newChunks = after.chunks;
   const shorter = Math.min(oldChunks.length, newChunks.length);
@@ -255,7 +255,7 @@ function changedStretch(before: ChunkedText, after: ChunkedText): { start: numbe
 }
 
 /** The index of the last of the ascending `values` at or before `at`; -1 when none is. */
-function lastAtOrBefore(values: ArrayLike<number>, at: number): number {
+export function lastAtOrBefore(values: ArrayLike<number>, at: number): number {
   let low = 0;
   let high = values.length;
   while (low < high) {
