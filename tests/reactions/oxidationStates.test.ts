@@ -3,7 +3,14 @@
  * structure where lonepair draws one, by the usual rules where it does not (Fe3O4, MnO4-).
  */
 import { describe, expect, it } from "vitest";
-import { analyzeSpecies, formatOxidationState, oxidationStatesOf, oxidationStatesText, readSpecies } from "../../shared/src/index";
+import {
+  analyzeSpecies,
+  formatOxidationState,
+  hoverMarkdown,
+  oxidationStatesOf,
+  oxidationStatesText,
+  readSpecies,
+} from "../../shared/src/index";
 
 /** Each element's states, one per atom, ascending: "S:-1,5 O:-2,-2,-2". */
 function statesOf(formula: string): string {
@@ -119,5 +126,54 @@ describe("oxidation states of every atom", () => {
     const states = reading.ok ? oxidationStatesOf(reading.value, analyzeSpecies("S3O6^2-")) : undefined;
     // from memory: Greenwood & Earnshaw, sulfur chapter: trithionate sulfur averages +10/3
     expect(states && oxidationStatesText(states)).toContain("S +10/3 (average");
+  });
+});
+
+describe("per-atom splits and resonance", () => {
+  /** The hover card's text for one species' oxidation states, other forms included. */
+  function cardText(formula: string): string {
+    const reading = readSpecies(formula);
+    const states = reading.ok ? oxidationStatesOf(reading.value, analyzeSpecies(formula), { otherForms: true }) : undefined;
+    return states ? oxidationStatesText(states) : "unknown";
+  }
+
+  it.each<[string, string]>([
+    // from memory: Brown, LeMay & Bursten, ch. 8 (of N2O's forms, N≡N⁺–O⁻ puts the negative charge on
+    // the most electronegative atom and is the major one); IUPAC Recommendations 2016 on oxidation state
+    // (bonding electrons to the more electronegative atom, homonuclear bonds split evenly) then gives the
+    // terminal N 0 and the central N +2 in it, -1 and +3 in ⁻N=N⁺=O; the average +1 in both
+    ["N2O", "N 1× +2, 1× 0 in the drawn resonance form, 1× +3, 1× -1 in another (average +1 in every form); O -2"],
+    // from memory: Housecroft & Sharpe, Inorganic Chemistry, nitrogen chapter (azide is the symmetric
+    // [N=N=N]⁻): terminal N -1, central N +1, average -1/3
+    ["N3-", "N 1× +1, 2× -1 (average -1/3)"],
+    // from memory: Greenwood & Earnshaw, carbon chapter (thiocyanate S -2, C +4, N -3; cyanate O -2, C +4, N -3):
+    // carbon is the least electronegative atom, so every form gives the same split
+    ["SCN-", "S -2; C +4; N -3"],
+    ["OCN-", "O -2; C +4; N -3"],
+    // from memory: Zumdahl, Chemistry, ch. 4 (carbonate: C +4); its three forms differ only in which O is doubly bonded
+    ["CO3^2-", "C +4; O -2"],
+    // from memory: Harris, Quantitative Chemical Analysis (tetrathionate: two sulfonate S +5, two bridging S 0)
+    ["S4O6^2-", "S 2× +5, 2× 0 (average +5/2); O -2"],
+    // from memory: IUPAC technical report on oxidation state (thiosulfate: central S +5, terminal S -1)
+    ["S2O3^2-", "S 1× +5, 1× -1 (average +2); O -2"],
+    // from memory: Housecroft & Sharpe (ozone: central O +1, terminal O 0 and -1 in either form)
+    ["O3", "O 1× +1, 1× 0, 1× -1 (average 0)"],
+  ])("%s: %s", (formula, expected) => {
+    expect(cardText(formula)).toBe(expected);
+  });
+
+  it("the drawn form's split is the one with the negative charge on oxygen", () => {
+    // from memory: Brown, LeMay & Bursten, ch. 8 (formal charges choose N≡N⁺–O⁻ for N2O)
+    const result = analyzeSpecies("N2O");
+    expect(result.ok && result.value.graph.atoms.map((atom) => `${atom.symbol}${atom.formalCharge}`)).toEqual(["N1", "N0", "O-1"]);
+  });
+
+  it("the hover card says the split is the drawn form's only where forms differ", () => {
+    const n2o = analyzeSpecies("N2O");
+    const co2 = analyzeSpecies("CO2");
+    // from memory: Zumdahl, ch. 4 (CO2: C +4, O -2, one structure)
+    expect(n2o.ok && hoverMarkdown(n2o.value, { angleDecimals: 1, format: "plaintext" })).toContain("in the drawn resonance form");
+    expect(co2.ok && hoverMarkdown(co2.value, { angleDecimals: 1, format: "plaintext" })).toContain("Oxidation states: C +4; O -2");
+    expect(co2.ok && hoverMarkdown(co2.value, { angleDecimals: 1, format: "plaintext" })).not.toContain("resonance form");
   });
 });

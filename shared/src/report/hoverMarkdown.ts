@@ -102,7 +102,7 @@ export function hoverMarkdown(analysis: SpeciesAnalysis, options: HoverMarkdownO
   if (pictures) lines.push(pictures, "");
   lines.push(electronLine(analysis));
   lines.push("");
-  const states = oxidationStatesOf(analysis.reading, { ok: true, value: analysis });
+  const states = oxidationStatesOf(analysis.reading, { ok: true, value: analysis }, { otherForms: true });
   if (states) lines.push(`Oxidation states: ${markup.text(oxidationStatesText(states))}`, "");
   const measured = measuredLines(analysis.measuredAngles.slice(0, MAX_LISTED), options.angleDecimals, markup);
   const blocks = centreBlocks(analysis.centres, options, markup);
@@ -162,7 +162,7 @@ function compositeMarkdown(text: string, result: Extract<AnalysisResult, { ok: f
     for (const inner of innerParts(part).slice(0, MAX_LISTED)) lines.push(partBullet(inner, "  - ", markup));
   }
   lines.push("", markup.text(result.problem.message), "");
-  const states = result.reading && oxidationStatesOf(result.reading, result);
+  const states = result.reading && oxidationStatesOf(result.reading, result, { otherForms: true });
   if (states) lines.push(`Oxidation states: ${markup.text(oxidationStatesText(states))}`, "");
   for (const analysis of distinctAnalysedParts(parts).slice(0, MAX_LISTED)) {
     const centres = centreBlocks(analysis.centres, { ...options, maxCentreGroups: 2 }, markup);

@@ -6,10 +6,16 @@
  * carry it. A salt or hydrate adds up its parts. Where no structure is drawn (Fe3O4, MnO4-), the
  * usual states of fluorine, oxygen, hydrogen and the s-block fix the rest, and a fractional
  * average is split into whole states the element commonly takes.
+ *
+ * The per-atom split is the drawn resonance form's: each element's total is the same in every
+ * form, but which atom carries how much can differ (N2O: N≡N⁺–O⁻ gives the terminal N 0 and the
+ * central +2, ⁻N=N⁺=O gives -1 and +3). Asked for, the splits of the other forms are found too,
+ * so that a reader is told the split depends on the form.
  */
 import { elementBySymbol } from "../elements";
 import { readSpecies } from "../reader/readSpecies";
 import type { AnalysisResult, MolecularGraph, SpeciesPart, SpeciesReading } from "../types";
+import { otherResonanceForms } from "./resonanceForms";
 
 /** The states of one element's atoms in a species. */
 export interface ElementOxidationStates {
@@ -20,6 +26,11 @@ export interface ElementOxidationStates {
   readonly average: { readonly numerator: number; readonly denominator: number };
   /** False when the atoms differ but nothing says which has which state (no structure, no usual states). */
   readonly split: boolean;
+  /**
+   * Per-atom states (ascending) in other resonance forms where they differ from `states`, each
+   * split once; set only when asked for and some form differs.
+   */
+  readonly otherForms?: readonly (readonly number[])[];
 }
 
 /** Every element's oxidation states in one species, and how they were found. */
@@ -29,15 +40,52 @@ export interface OxidationStates {
   readonly from: "structure" | "rules";
 }
 
+/** What to work out beside the drawn form's states. */
+export interface OxidationStateOptions {
+  /** The per-atom splits of the other resonance forms (a search over bond orders: hovers only). */
+  readonly otherForms?: boolean;
+}
+
 /** The oxidation states of `reading`, using `analysis` when it drew a structure; undefined when unknown. */
-export function oxidationStatesOf(reading: SpeciesReading, analysis?: AnalysisResult): OxidationStates | undefined {
+export function oxidationStatesOf(
+  reading: SpeciesReading,
+  analysis?: AnalysisResult,
+  options: OxidationStateOptions = {},
+): OxidationStates | undefined {
   const perAtom = statesFrom(reading, analysis);
   if (!perAtom) return undefined;
+  const others = options.otherForms && analysis?.ok ? otherFormStates(analysis.value.graph) : [];
   const elements = reading.composition
     .map((part) => part.symbol)
     .filter((symbol, index, all) => all.indexOf(symbol) === index)
-    .map((symbol) => elementStates(symbol, perAtom.states.get(symbol) ?? [], !perAtom.unsplit?.has(symbol)));
+    .map((symbol) => {
+      const element = elementStates(symbol, perAtom.states.get(symbol) ?? [], !perAtom.unsplit?.has(symbol));
+      const differing = distinctSplits(
+        element.states,
+        others.map((states) => states.get(symbol) ?? []),
+      );
+      return differing.length > 0 ? { ...element, otherForms: differing } : element;
+    });
   return { elements, from: perAtom.from };
+}
+
+/** Each other resonance form's states per element (none when the forms were not searched). */
+function otherFormStates(graph: MolecularGraph): Map<string, number[]>[] {
+  return (otherResonanceForms(graph) ?? []).map(structureStates);
+}
+
+/** The splits in `others` (sorted) that differ from `drawn` and from each other. */
+function distinctSplits(drawn: readonly number[], others: readonly (readonly number[])[]): number[][] {
+  const seen = new Set([drawn.join(",")]);
+  const splits: number[][] = [];
+  for (const states of others) {
+    const sorted = [...states].sort((a, b) => a - b);
+    const key = sorted.join(",");
+    if (seen.has(key)) continue;
+    seen.add(key);
+    splits.push(sorted);
+  }
+  return splits;
 }
 
 type PerAtom = { states: Map<string, number[]>; from: "structure" | "rules"; unsplit?: Set<string> };
@@ -261,18 +309,36 @@ export function formatOxidationState(numerator: number, denominator = 1): string
   return numerator > 0 ? `+${text}` : numerator < 0 ? `-${text}` : "0";
 }
 
-/** "S 1× +5, 1× -1 (average +2); O -2" */
+/**
+ * "S 1× +5, 1× -1 (average +2); O -2"; where resonance forms split an element differently,
+ * "N 1× +2, 1× 0 in the drawn resonance form, 1× +3, 1× -1 in another (average +1 in every form)".
+ */
 export function oxidationStatesText(states: OxidationStates): string {
   return states.elements
     .map((element) => {
-      const distinct = [...new Set(element.states)].sort((a, b) => b - a);
+      const distinct = [...new Set(element.states)];
       const average = formatOxidationState(element.average.numerator, element.average.denominator);
+      if (element.otherForms && element.otherForms.length > 0) {
+        // A hover is a glance: two other splits at most, the rest counted.
+        const shown = element.otherForms.slice(0, MAX_OTHER_SPLITS).map(splitText);
+        const more = element.otherForms.length - shown.length;
+        const others = shown.join("; ") + (more > 0 ? `; ${more} more` : "");
+        const another = element.otherForms.length === 1 ? "another" : "others";
+        return `${element.symbol} ${splitText(element.states)} in the drawn resonance form, ${others} in ${another} (average ${average} in every form)`;
+      }
       if (distinct.length === 1) return `${element.symbol} ${formatOxidationState(distinct[0])}`;
       if (!element.split) return `${element.symbol} ${average} (average; no structure to say which atom has which)`;
-      const split = distinct
-        .map((state) => `${element.states.filter((value) => value === state).length}× ${formatOxidationState(state)}`)
-        .join(", ");
-      return `${element.symbol} ${split} (average ${average})`;
+      return `${element.symbol} ${splitText(element.states)} (average ${average})`;
     })
     .join("; ");
+}
+
+/** Other forms' splits written out on a card; the rest are counted. */
+const MAX_OTHER_SPLITS = 2;
+
+/** "1× +5, 1× -1": how many atoms have each state, highest first; "+1" when all have one. */
+function splitText(states: readonly number[]): string {
+  const distinct = [...new Set(states)].sort((a, b) => b - a);
+  if (distinct.length === 1 && states.length === 1) return formatOxidationState(distinct[0]);
+  return distinct.map((state) => `${states.filter((value) => value === state).length}× ${formatOxidationState(state)}`).join(", ");
 }
