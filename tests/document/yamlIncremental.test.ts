@@ -129,6 +129,18 @@ const STYLES: readonly Style[] = [
       ].join("\n"),
   },
   {
+    label: "a longer list of short tags beside the records",
+    indent: 2,
+    document: (items) =>
+      [
+        "tags:",
+        ...Array.from({ length: 40 }, (_, index) => `  - shelf-${index}`),
+        "records:",
+        ...items.map((item) => indented(item, 2)),
+        "",
+      ].join("\n"),
+  },
+  {
     label: "CRLF line ends",
     indent: 2,
     document: (items) => `records:\r\n${items.map((item) => indented(item, 2).replaceAll("\n", "\r\n")).join("\r\n")}\r\nnote: end\r\n`,

@@ -141,13 +141,15 @@ function wholeState(text: ChunkedText, read: SpeciesReader): ListState | { reado
 }
 
 /**
- * The list of records: the longest block list at the root of a document or directly under a key
- * of a root block mapping (not an equation key, whose strings are read as equations).
+ * The list of records: the block list that spans the most text (where edits mostly fall), at the
+ * root of a document or directly under a key of a root block mapping (not an equation key, whose
+ * strings are read as equations).
  */
 function recordList(documents: YamlStream): YAMLSeq | undefined {
   let longest: YAMLSeq | undefined;
+  const span = (node: YAMLSeq): number => (node.range ? node.range[1] - node.range[0] : 0);
   const consider = (node: unknown): void => {
-    if (isSeq(node) && !node.flow && node.range && node.items.length > (longest?.items.length ?? 0)) longest = node;
+    if (isSeq(node) && !node.flow && node.range && node.items.length > 0 && (!longest || span(node) > span(longest))) longest = node;
   };
   for (const document of documents) {
     const root = document.contents as Node | null;
