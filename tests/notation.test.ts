@@ -77,6 +77,55 @@ describe("charges in every style data exports use", () => {
   });
 });
 
+describe("sub- and superscripts set in markup", () => {
+  it.each([
+    // from memory: HTML 4 character entity references (minus, ndash) and numeric references to U+2212
+    ["SO<sub>4</sub><sup>2&minus;</sup>", "SO4^2-", -2],
+    ["CO<sub>3</sub><sup>2&#8722;</sup>", "CO3^2-", -2],
+    ["NO<sub>3</sub><sup>&#x2212;</sup>", "NO3^-", -1],
+    ["Cl<sup>&ndash;</sup>", "Cl^-", -1],
+    // from memory: MediaWiki {{sub}} and {{sup}} templates as reference wikis write formulas
+    ["H{{sub|2}}O", "H2O", 0],
+    ["SO{{sub|4}}{{sup|2−}}", "SO4^2-", -2],
+    ["N{{sub|2}}F{{sub|4}}", "N2F4", 0],
+    // from memory: AsciiDoc subscript ~text~ and superscript ^text^ (Asciidoctor user manual)
+    ["H~2~O", "H2O", 0],
+    ["SO~4~^2-^", "SO4^2-", -2],
+    ["Ca^2+^", "Ca^2+", 2],
+    // from memory: reStructuredText :sub: and :sup: roles, glued with escaped spaces (Docutils reference)
+    ["H\\ :sub:`2`\\ O", "H2O", 0],
+    ["NH\\ :sub:`4`\\ :sup:`+`", "NH4^+", 1],
+  ])("%s reads as %s (charge %d)", (input, formula, charge) => {
+    const reading = read(input);
+    expect(reading.formula).toBe(formula);
+    expect(reading.charge).toBe(charge);
+    expect(reading.range).toEqual({ start: 0, end: input.length });
+  });
+
+  it.each([
+    // from memory: IUPAC nuclide notation, the mass number as a left superscript, in each markup
+    ["<sup>13</sup>CO<sub>2</sub>", "C1 O2", "C", 13],
+    ["H<sub>2</sub><sup>18</sup>O", "H2 O1", "O", 18],
+    ["^13^CO~2~", "C1 O2", "C", 13],
+    ["\\mathrm{^{13}CO_2}", "C1 O2", "C", 13],
+    ["{}^{13}CO_2", "C1 O2", "C", 13],
+    ["\\mathrm{H_2^{18}O}", "H2 O1", "O", 18],
+  ])("%s reads as %s labelled %s-%i", (input, composition, symbol, massNumber) => {
+    const reading = read(input);
+    expect(partsText(reading.composition)).toBe(composition);
+    expect(reading.isotopes?.map((label) => [label.symbol, label.massNumber])).toEqual([[symbol, massNumber]]);
+  });
+
+  it.each([
+    // common practice: markup that holds words, not counts or charges, is no formula
+    ["H{{sub|two}}O"],
+    ["SO<sub>4</sub><sup>&amp;</sup>"],
+    ["H~x~O"],
+  ])("%s is refused", (input) => {
+    expect(readSpecies(input).ok).toBe(false);
+  });
+});
+
 describe("state symbols", () => {
   it.each([
     // from memory: IUPAC Green Book, state symbols (s), (l), (g), (aq) written after a formula

@@ -4,7 +4,7 @@
  * neither holds ("3D", "vitamin C", "grade B").
  */
 import { elementBySymbol } from "../chemistry/elements";
-import { withUnicodeScripts } from "../chemistry/reader/htmlScripts";
+import { hasScriptMarkup, withUnicodeScripts } from "../chemistry/reader/markupScripts";
 import { isConfidentToken, shapeOf, type TokenShape } from "./proseTokenRules";
 
 /** How far along the line an arrow is looked for. */
@@ -50,7 +50,7 @@ function wordAfter(text: string, end: number): { word: string; end: number } {
 
 /** The shape of a word that may be a formula, without coefficient, state symbol or punctuation. */
 function formulaShapeOf(word: string): { bare: string; body: string; shape: TokenShape } | undefined {
-  const plain = word.includes("<su") ? withUnicodeScripts(word) : word;
+  const plain = hasScriptMarkup(word) ? withUnicodeScripts(word) : word;
   if (plain === undefined) return undefined;
   const bare = plain
     .replace(/^\d{1,2}(?=[A-Z])/, "")

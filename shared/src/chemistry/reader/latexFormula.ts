@@ -59,6 +59,13 @@ export function latexToPlain(text: string): string | undefined {
       const script = scriptAt(text, index + 1);
       if (script === undefined) return undefined;
       const { content, end } = script;
+      // "^{13}CO_2", "H_2^{18}O", "{}^{13}C": a mass number before an element symbol labels the atom,
+      // kept in the braces the formula reader knows ("^{13}C").
+      if (character === "^" && /^[0-9]{1,3}$/.test(content) && beforeSymbol(text, end)) {
+        result += `^{${content}}`;
+        index = end;
+        continue;
+      }
       if (character === "_" ? !/^[0-9]+$/.test(content) : !/^[0-9]*[+\-\u2212]{1,3}$|^[+\-\u2212][0-9]?$/.test(content)) return undefined;
       result += character === "_" ? content : `^${content}`;
       index = end;
@@ -75,6 +82,11 @@ export function latexToPlain(text: string): string | undefined {
     index++;
   }
   return depth === 0 ? result.trim() : undefined;
+}
+
+/** True when an element symbol starts at `at`, perhaps inside a face command ("\\mathrm{C}"). */
+function beforeSymbol(text: string, at: number): boolean {
+  return /^(?:\\(?:mathrm|text|textrm|rm)\s*\{)?[A-Z]/.test(text.slice(at, at + 12));
 }
 
 /** The argument of "_" or "^" at `start`: one character, or a braced group (faces allowed inside). */

@@ -18,8 +18,8 @@ import { isAsciiLetter, isInvisibleFormatting, isLowerLetter, isSpace } from "./
 import { chargeText } from "./chargeText";
 import { matchName, nameForFormula, normalizeName, type NameMatch } from "./names/nameLookup";
 import { suggestName } from "./names/nameSuggestion";
-import { hasHtmlScript, withUnicodeScripts } from "./htmlScripts";
 import { hasLatexMarkup, latexToPlain } from "./latexFormula";
+import { hasScriptMarkup, withUnicodeScripts } from "./markupScripts";
 import { LAB_ABBREVIATIONS } from "./names/synonyms";
 import { problemAt } from "./problem";
 import { readableRecasings, readFormulaSpan, withRespellings } from "./readFormula";
@@ -78,7 +78,10 @@ function readVisible(text: string): ReadResult {
   if (start === end) {
     return { ok: false, problem: problemAt("empty-input", "There is nothing to read.", start, start) };
   }
-  if (hasHtmlScript(text)) return readHtmlScripts(text, start, end);
+  if (hasScriptMarkup(text)) {
+    const scripted = readScriptMarkup(text, start, end);
+    if (scripted) return scripted;
+  }
   if (text.startsWith(MHCHEM_OPEN, start)) return withName(readMhchem(text, start, end));
   // "DCM", "EtOH": exact case only, and before the formula reader sees "AcOH" as actinium
   const abbreviated = end - start <= 6 ? LAB_ABBREVIATIONS.get(text.slice(start, end)) : undefined;
@@ -123,11 +126,16 @@ function isCapitalWords(text: string, start: number, end: number): boolean {
   return true;
 }
 
-/** `CO<sub>2</sub>`: read as the same formula in Unicode scripts, placed over the whole written text. */
-function readHtmlScripts(text: string, start: number, end: number): ReadResult {
-  const plain = withUnicodeScripts(text.slice(start, end));
+/**
+ * `CO<sub>2</sub>`, `H{{sub|2}}O`, `H~2~O`: read as the same formula in Unicode scripts, placed over
+ * the whole written text. Undefined when the text holds no script markup after all ("SO4^2-").
+ */
+function readScriptMarkup(text: string, start: number, end: number): ReadResult | undefined {
+  const written = text.slice(start, end);
+  const plain = withUnicodeScripts(written);
+  if (plain === written) return undefined;
   if (plain === undefined) {
-    const message = "Only counts may sit in <sub> and charges in <sup>, like CO<sub>2</sub> or SO<sub>4</sub><sup>2-</sup>.";
+    const message = "Only counts may sit in a subscript and charges in a superscript, like CO<sub>2</sub> or SO<sub>4</sub><sup>2-</sup>.";
     return { ok: false, problem: problemAt("malformed-formula", message, start, end) };
   }
   return readConverted(plain, text, start, end);
