@@ -51,6 +51,40 @@ describe("HTML sub- and superscripts", () => {
   });
 });
 
+describe("sub- and superscripts in other markup", () => {
+  // common practice: course pages with HTML entities, reference wikis, AsciiDoc handbooks,
+  // reStructuredText guides and memos pasted from a word processor
+  it.each([
+    ["Add ⟦SO<sub>4</sub><sup>2&minus;</sup>⟧ &rarr; ⟦BaSO<sub>4</sub>⟧ with&nbsp;⟦Ba<sup>2+</sup>⟧.", "markdown"],
+    ["'''⟦NF{{sub|3}}⟧''' and [[sulfur hexafluoride|⟦SF{{sub|6}}⟧]]; the ion ⟦SO{{sub|4}}{{sup|2−}}⟧.", "plaintext"],
+    ["|⟦carbon dioxide⟧ |⟦CO~2~⟧ |linear\n\nThe band at 2349 cm^-1^ of ⟦^13^CO~2~⟧ and ⟦F^-^⟧ in ⟦H~2~O⟧.", "plaintext"],
+    ["Purge with ⟦N\\ :sub:`2`⟧; the ⟦SO\\ :sub:`4`\\ :sup:`2-`⟧ film and ⟦H\\ :sub:`2`\\ O⟧ go.", "plaintext"],
+    ["⟦Ag⁺⟧ + ⟦Cl–⟧ → ⟦AgCl⟧, then ⟦CrO₄²−⟧ and “⟦SO4 2–⟧”; pages 41–44, the Cl–C–Cl angle.", "plaintext"],
+    ["Not species: K<sub>a2</sub>, T<sub>d</sub>, AX<sub>4</sub>, sp<sup>3</sup>, M<sup>n+</sup>, ν~3~, C~3v~.", "markdown"],
+  ])("%s", (marked, kind) => {
+    check(marked, kind as DocumentKind);
+  });
+});
+
+describe("isotope labels", () => {
+  // from memory: IUPAC nuclide notation; D for hydrogen-2 (IUPAC recommendations)
+  it.each([
+    ["The labelled salt is ⟦NaH¹³CO3⟧; the gas is ⟦¹²CO₂⟧, ⟦13CO2⟧ and ⟦D2O⟧ in ⟦CD3OD⟧.", "markdown"],
+    ["A tracer of ⟦<sup>13</sup>CO<sub>2</sub>⟧ and ⟦H<sub>2</sub><sup>18</sup>O⟧.", "markdown"],
+    ["Ratio $R = n(⟦^{13}CO_2⟧)/n(⟦^{12}CO_2⟧)$ and $\\mathrm{⟦C^{16}O^{18}O⟧}$.", "markdown"],
+    ["Atoms are not species: ¹H NMR, ¹³C shifts, $^{18}$O, $\\delta^{13}\\mathrm{C}$, 2H and 12 ⟦CO2⟧ cylinders.", "markdown"],
+  ])("%s", (marked, kind) => {
+    check(marked, kind as DocumentKind);
+  });
+
+  it("reads a labelled species as the unlabelled one, with its labels", () => {
+    const [occurrence] = analyzeDocument("Background 13CO2 in air.", "plaintext").occurrences;
+    // from memory: carbon-13 dioxide is CO2 with one carbon-13
+    expect(occurrence.reading.formula).toBe("CO2");
+    expect(occurrence.reading.isotopes?.map((label) => [label.symbol, label.massNumber])).toEqual([["C", 13]]);
+  });
+});
+
 describe("LaTeX math outside mhchem", () => {
   // common practice: how LaTeX-minded writers type formulas in markdown
   it.each([
@@ -61,6 +95,8 @@ describe("LaTeX math outside mhchem", () => {
     ["Nested: $\\ce{⟦SO4^2-⟧ + ⟦Ba^2+⟧ -> ⟦BaSO4⟧ v}$ in the notes.", "markdown"],
     ["Math is not chemistry: $x_i$, $E = mc^2$, $K_a$, $\\Delta H$, $pK_a$.", "markdown"],
     ["Prices: $5 and $10 per cylinder, or $5-$10 for small ones.", "markdown"],
+    ["$$\\mathrm{⟦CO_2⟧ + ⟦H_2O⟧ \\rightleftharpoons ⟦H_2CO_3⟧}$$ and $⟦\\text{CO}_2⟧$, $2\\,\\mathrm{⟦H_2O_2⟧}$.", "markdown"],
+    ["The draft was $⟦H_2O⟧$-free, dried under ⟦N_2⟧; no ⟦H_2O⟧ left. Not CO_2_ppm or run_2.", "markdown"],
   ])("%s", (marked, kind) => {
     check(marked, kind as DocumentKind);
   });
@@ -79,7 +115,9 @@ describe("mhchem details", () => {
     ["\\ce{⟦N2⟧ + 3⟦H2⟧ <=>[⟦Fe⟧][{400 °C}] 2⟦NH3⟧}", "markdown"],
     ["\\ce{A ->[⟦H2O⟧] B} is the general scheme.", "markdown"],
     ["\\ce{{Ox} + e- -> {Red}}", "markdown"],
-    ["\\ce{⟦NaCl⟧(aq) + ⟦AgNO3⟧(aq) -> ⟦AgCl⟧(s) + ⟦NaNO3⟧(aq)}", "markdown"],
+    // A state symbol is part of the mention, in mhchem as in prose, glued or after a space.
+    ["\\ce{⟦NaCl(aq)⟧ + ⟦AgNO3(aq)⟧ -> ⟦AgCl(s)⟧ + ⟦NaNO3(aq)⟧}", "markdown"],
+    ["\\ce{⟦Ag+ (aq)⟧ + ⟦Cl- (aq)⟧ -> ⟦AgCl⟧ v}", "markdown"],
   ])("%s", (marked, kind) => {
     check(marked, kind as DocumentKind);
   });

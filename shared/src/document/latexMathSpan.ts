@@ -67,9 +67,40 @@ export function scanLatexMath(text: string, start: number, end: number, read: Sp
     if (face && text.charCodeAt(wordEnd - 1) === 0x7d && balanced(text, wordStart + face[0].length, wordEnd - 1)) {
       wordStart += face[0].length;
       wordEnd--;
+      // "\mathrm{CO_2 + H_2O \rightarrow H_2CO_3}": a whole equation set upright.
+      if (/\s/.test(text.slice(wordStart, wordEnd))) {
+        scanLatexMath(text, wordStart, wordEnd, read, sink);
+        continue;
+      }
     }
-    if (!readMathPiece(text, wordStart, wordEnd, read, sink)) readFaceGroups(text, wordStart, wordEnd, read, sink);
+    if (readMathPiece(text, wordStart, wordEnd, read, sink)) continue;
+    const quantities = quantityArguments(text, wordStart, wordEnd);
+    if (quantities.length > 0) for (const [from, to] of quantities) readMathPiece(text, from, to, read, sink);
+    else readFaceGroups(text, wordStart, wordEnd, read, sink);
   }
+}
+
+/**
+ * "n(^{13}CO_2)/n(^{12}CO_2)", "c(H_2O)": the species in the brackets of a quantity symbol (amount,
+ * concentration, mass, volume, molar mass, mole fraction), as [start, end) pairs.
+ */
+function quantityArguments(text: string, start: number, end: number): [number, number][] {
+  const found: [number, number][] = [];
+  const quantity = /(?:^|[^A-Za-z\\])[nmcVMx]\(/g;
+  const word = text.slice(start, end);
+  for (let match = quantity.exec(word); match; match = quantity.exec(word)) {
+    const open = start + match.index + match[0].length;
+    let depth = 1;
+    let close = open;
+    while (close < end && depth > 0) {
+      const code = text.charCodeAt(close);
+      if (code === 0x28) depth++;
+      else if (code === 0x29) depth--;
+      if (depth > 0) close++;
+    }
+    if (depth === 0 && close > open) found.push([open, close]);
+  }
+  return found;
 }
 
 /** Reads `text[start, end)` as one species when it is one; true when it was read. */
@@ -78,16 +109,27 @@ function readMathPiece(text: string, start: number, end: number, read: SpeciesRe
   if (written.length === 0 || OPERATORS.test(written)) return false;
   const plain = latexToPlain(written);
   if (plain === undefined || plain.length === 0) return false;
-  const caret = plain.indexOf("^");
-  const body = caret < 0 ? plain : plain.slice(0, caret);
-  const shape = shapeOf(body, caret < 0 ? "" : plain.slice(caret));
-  if (!shape || !isConfidentToken(plain, body, shape)) return false;
+  // "^{13}CO_2" has the shape of CO2: mass numbers label atoms, they add none.
+  const unlabelled = plain.replace(MASS_NUMBERS, "");
+  const caret = unlabelled.indexOf("^");
+  const body = caret < 0 ? unlabelled : unlabelled.slice(0, caret);
+  const shape = shapeOf(body, caret < 0 ? "" : unlabelled.slice(caret));
+  if (!shape) return false;
+  // Labelling an atom of a molecule ("C^{16}O^{18}O") says it is chemistry; a lone "^{18}O" is an atom.
+  const labelled = unlabelled !== plain && shape.symbols.length > 1;
+  if (!labelled && !isConfidentToken(unlabelled, body, shape)) return false;
   const result = read(written);
   if (result.ok) sink.occurrences.push(occurrenceAt(result.value, written, start, "formula"));
   return result.ok;
 }
 
-/** "\frac{[\mathrm{H_3O^+}][\mathrm{A^-}]}{...}": each upright group inside a larger expression. */
+/** Mass numbers before an element symbol, as `latexToPlain` writes them ("^{13}C"). */
+const MASS_NUMBERS = /\^\{[0-9]{1,3}\}(?=[A-Z])/g;
+
+/**
+ * "\frac{[\mathrm{H_3O^+}][\mathrm{A^-}]}{...}": each upright group inside a larger expression;
+ * a group holding several words ("\mathrm{CO_2 + H_2O \rightarrow H_2CO_3}") is math of its own.
+ */
 function readFaceGroups(text: string, start: number, end: number, read: SpeciesReader, sink: ScanSink): void {
   const face = /\\(?:mathrm|text|textrm)\{/g;
   const word = text.slice(start, end);
@@ -101,7 +143,9 @@ function readFaceGroups(text: string, start: number, end: number, read: SpeciesR
       else if (code === 0x7d) depth--;
       if (depth > 0) close++;
     }
-    if (depth === 0) readMathPiece(text, open, close, read, sink);
+    if (depth > 0) continue;
+    if (/\s/.test(text.slice(open, close))) scanLatexMath(text, open, close, read, sink);
+    else readMathPiece(text, open, close, read, sink);
   }
 }
 

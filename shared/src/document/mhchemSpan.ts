@@ -27,6 +27,8 @@ export function mhchemSpanEnd(text: string, open: number, limit: number): number
 const OPERATOR = /^(?:\+|-|=|->|<-|<=>|<->|<=>>|<<=>|<-->|\^|v|&|\\\\|\$.*\$|->\[.*\]|\(\+\)|\*|\.|·)$/;
 const COEFFICIENT = /^(?:\d+(?:\/\d+)?|\d*\.\d+)/;
 const STATE = /\((?:g|l|s|aq|cr)\)$/;
+/** A state symbol right after a piece, glued or after one space. */
+const STATE_AFTER = /^ ?\((?:g|l|s|aq|cr)\)(?![^\s}])/;
 
 /** An mhchem arrow that may carry text above and below it: "->[H2O]", "<=>[k_1][k_{-1}]". */
 const LABELLED_ARROW = /(?:<=>>|<<=>|<=>|<-->|<->|->|<-|<=>)(?=\[)/y;
@@ -140,7 +142,12 @@ export function scanMhchemBody(text: string, start: number, end: number, read: S
     const pieceText = text.slice(piece.start, piece.end);
     if (pieceText.length === 1 && (schematic || !read(pieceText).ok)) continue;
     const result = read(pieceText);
-    if (result.ok) sink.occurrences.push(occurrenceAt(result.value, pieceText, piece.start, "mhchem"));
+    // "Fe^3+(aq)", "Ag+ (aq)": the state symbol belongs to the mention when the whole reads.
+    const state = STATE_AFTER.exec(text.slice(piece.end, Math.min(end, piece.end + 6)));
+    const stated = result.ok && state ? text.slice(piece.start, piece.end + state[0].length) : undefined;
+    const statedResult = stated === undefined ? undefined : read(stated);
+    if (stated !== undefined && statedResult?.ok) sink.occurrences.push(occurrenceAt(statedResult.value, stated, piece.start, "mhchem"));
+    else if (result.ok) sink.occurrences.push(occurrenceAt(result.value, pieceText, piece.start, "mhchem"));
     // A label may be any note ("Pt gauze"); only what is written as a species outside one is a mistake.
     else if (!piece.inLabel && /^[A-Z([]/.test(pieceText) && result.problem.code !== "unknown-name") {
       sink.unreadable.push(unreadableAt(pieceText, piece.start, result));

@@ -380,7 +380,16 @@ function stockNumeralIn(text: string, start: number, end: number): NameWord | un
 /** Punctuation that may sit before a word: ( [ " ' * _ and curly quotes. */
 function isLeadingPunctuation(code: number): boolean {
   return (
-    code === 0x28 || code === 0x5b || code === 0x22 || code === 0x27 || code === 0x2a || code === 0x5f || code === 0x201c || code === 0x2018
+    code === 0x28 ||
+    code === 0x5b ||
+    code === 0x22 ||
+    code === 0x27 ||
+    code === 0x2a ||
+    code === 0x5f ||
+    code === 0x201c ||
+    code === 0x2018 ||
+    // A table cell in lightweight markup: "|sulfur dioxide |".
+    code === 0x7c
   );
 }
 

@@ -4,7 +4,7 @@
  * Precision comes first: a token counts only when its shape and context leave no doubt, and the
  * species reader has the last word on every candidate.
  */
-import { htmlScriptEnd, withUnicodeScripts } from "../chemistry/reader/htmlScripts";
+import { scriptMarkupAt, withUnicodeScripts } from "../chemistry/reader/markupScripts";
 import { isGluedCoefficient, isLoneReactant } from "./equationContext";
 import { isSafeSpellingFix } from "./fixPolicy";
 import { isAlloyDesignation, isGroupFragment, isSeriesId, type SeriesMemo } from "./nonSpeciesContext";
@@ -107,6 +107,12 @@ export function* proseSteps(text: string, start: number, end: number, sink: Scan
     let chunkEnd = index + 1;
     while (chunkEnd < end) {
       const next = text.charCodeAt(chunkEnd);
+      // reStructuredText glues a role to the letters around it with escaped spaces: "H\ :sub:`2`\ O".
+      const role = next === 0x5c || next === 0x3a ? scriptMarkupAt(text, chunkEnd, end) : undefined;
+      if (role) {
+        chunkEnd = role.end;
+        continue;
+      }
       if (isSpaceCode(next) || next === 0x60 || (next === 0x5c && text.startsWith("\\ce{", chunkEnd))) break;
       // Math may open right after a bracket or quote: "($H_2O$)".
       if (next === 0x24 && isLeadingPunctuation(text.charCodeAt(chunkEnd - 1))) break;
@@ -253,13 +259,27 @@ function scanFormulas(scan: ProseScan, start: number, end: number): void {
   let index = start;
   while (index < end) {
     const code = text.charCodeAt(index);
-    const startsToken = isUpper(code) || code === 0x28 || code === 0x5b;
+    const startsToken = isUpper(code) || code === 0x28 || code === 0x5b || massNumberEnd(text, index, end) > index;
     if (!startsToken || (isWordCharacter(text.charCodeAt(index - 1)) && !afterCoefficient(text, start, index))) {
-      index++;
+      const massStart = isUpper(code) ? asciiMassNumberStart(text, start, index) : index;
+      index = massStart < index ? formulaToken(scan, massStart, end, index - massStart) : index + 1;
       continue;
     }
     index = formulaToken(scan, index, end);
   }
+}
+
+/**
+ * "13CO2", "15N2" outside an equation: digits glued before a formula at the start of a word are a
+ * mass number when there are two or three of them (a coefficient would be one digit, and "2H" is
+ * a proton count). Returns where the digits start, or `index` when they are no mass number.
+ */
+function asciiMassNumberStart(text: string, chunkStart: number, index: number): number {
+  let digitsStart = index;
+  while (digitsStart > chunkStart && index - digitsStart < 4 && isDigitCode(text.charCodeAt(digitsStart - 1))) digitsStart--;
+  if (index - digitsStart < 2 || index - digitsStart > 3 || text.charCodeAt(digitsStart) === 0x30) return index;
+  for (let at = chunkStart; at < digitsStart; at++) if (!isLeadingPunctuation(text.charCodeAt(at))) return index;
+  return isGluedCoefficient(text, digitsStart, index) ? index : digitsStart;
 }
 
 /** "2H2O" at the start of a chunk, on an equation line: the formula starts after the digits. */
@@ -302,39 +322,94 @@ function isSuperscript(code: number): boolean {
 }
 
 function isSign(code: number): boolean {
-  return code === 0x2b || code === 0x2d || code === 0x2212;
+  // An en dash is how word processors and hand-typed memos often write the minus: "Cl–", "SO4 2–".
+  return code === 0x2b || code === 0x2d || code === 0x2212 || code === 0x2013;
+}
+
+/**
+ * The end of a TeX subscript count at `at` after a symbol or a bracket ("H_2O", "Fe_{2}O_3"), or
+ * `at`. Snake-case names ("NH3_flow", "run_2") are not counts: the body must be formula-like.
+ */
+function texSubscriptEnd(text: string, start: number, at: number, end: number): number {
+  if (text.charCodeAt(at) !== 0x5f || at === start || !/[A-Za-z)\]]/.test(text[at - 1])) return at;
+  const match = /^_(?:[0-9]{1,3}|\{[0-9]{1,3}\})/.exec(text.slice(at, Math.min(end, at + 6)));
+  if (!match) return at;
+  const after = text.charCodeAt(at + match[0].length);
+  // "CO_2_ppm": a name made of words, not a formula.
+  if (after === 0x5f || (after >= 0x61 && after <= 0x7a)) return at;
+  return at + match[0].length;
+}
+
+/** Superscript mass numbers before an element symbol: "¹³C", "¹⁸O". */
+const MASS_NUMBERS = /[\u00b9\u00b2\u00b3\u2070\u2074-\u2079]+(?=[A-Z])/g;
+
+/**
+ * The end of a mass number written before an element symbol at `at` ("¹³CO₂", "NaH¹³CO3",
+ * "<sup>13</sup>CO<sub>2</sub>", "^13^CO~2~"), or `at` when there is none.
+ */
+function massNumberEnd(text: string, at: number, end: number): number {
+  let index = at;
+  while (index < end && index - at < 3 && isSuperscriptDigit(text.charCodeAt(index))) index++;
+  if (index > at) return isUpper(text.charCodeAt(index)) ? index : at;
+  const code = text.charCodeAt(at);
+  if (code !== 0x3c && code !== 0x7b && code !== 0x5e && code !== 0x5c) return at;
+  const markup = scriptMarkupAt(text, at, end);
+  if (!markup?.superscript || !/^[0-9]{1,3}$/.test(markup.content) || !isUpper(text.charCodeAt(markup.end))) return at;
+  return markup.end;
+}
+
+function isSuperscriptDigit(code: number): boolean {
+  return code === 0xb9 || code === 0xb2 || code === 0xb3 || code === 0x2070 || (code >= 0x2074 && code <= 0x2079);
 }
 
 /** Reads one token starting at `start`; returns where scanning goes on. */
-function formulaToken(scan: ProseScan, start: number, end: number): number {
+function formulaToken(scan: ProseScan, start: number, end: number, massDigits = 0): number {
   const { text } = scan;
   let bodyEnd = start;
-  // HTML counts and charges: "Al<sub>2</sub>(CO<sub>3</sub>)<sub>3</sub>", "SO<sub>4</sub><sup>2−</sup>".
-  let html = false;
+  // Counts, charges and mass numbers in markup: "Al<sub>2</sub>(CO<sub>3</sub>)<sub>3</sub>",
+  // "SO<sub>4</sub><sup>2−</sup>", "H{{sub|2}}O", "H~2~O", "H\ :sub:`2`\ O", "<sup>13</sup>CO<sub>2</sub>".
+  let markup = false;
+  // "H_2O", "N_2" typed in prose by someone used to LaTeX.
+  let tex = false;
   for (;;) {
     while (bodyEnd < end && isBodyCharacter(text.charCodeAt(bodyEnd))) bodyEnd++;
-    const subscriptEnd = text.startsWith("<sub>", bodyEnd) ? htmlScriptEnd(text, bodyEnd, end) : -1;
-    if (subscriptEnd < 0) break;
-    bodyEnd = subscriptEnd;
-    html = true;
+    const massEnd = massNumberEnd(text, bodyEnd, end);
+    if (massEnd > bodyEnd) {
+      markup ||= !isSuperscript(text.charCodeAt(bodyEnd));
+      bodyEnd = massEnd;
+      continue;
+    }
+    const subscript = scriptMarkupAt(text, bodyEnd, end);
+    if (subscript && !subscript.superscript) {
+      bodyEnd = subscript.end;
+      markup = true;
+      continue;
+    }
+    const texEnd = texSubscriptEnd(text, start, bodyEnd, end);
+    if (texEnd === bodyEnd) break;
+    bodyEnd = texEnd;
+    tex = true;
   }
   // "NaCl(aq)": the state symbol follows the formula; the shape rules look at the formula alone.
   const state = stateSymbolBefore(text, start, bodyEnd);
   if (state > 0) bodyEnd -= state;
   let tokenEnd = bodyEnd;
-  const superscriptEnd = text.startsWith("<sup>", bodyEnd) ? htmlScriptEnd(text, bodyEnd, end) : -1;
-  if (superscriptEnd > 0) {
-    tokenEnd = superscriptEnd;
-    html = true;
+  const superscript = scriptMarkupAt(text, bodyEnd, end);
+  if (superscript?.superscript) {
+    tokenEnd = superscript.end;
+    markup = true;
   } else {
     while (tokenEnd < end && isSuperscript(text.charCodeAt(tokenEnd))) tokenEnd++;
+    // "CrO₄²−": a superscript count with the sign typed on the line.
+    if (tokenEnd > bodyEnd && tokenEnd < end && isSign(text.charCodeAt(tokenEnd)) && !isWordCharacter(text.charCodeAt(tokenEnd + 1)))
+      tokenEnd++;
     if (tokenEnd === bodyEnd) tokenEnd = chargeEnd(text, bodyEnd, end);
     if (tokenEnd === bodyEnd && state === 0) tokenEnd = spacedChargeEnd(text, start, bodyEnd, scan.end);
   }
   // "CuSO4.5H2O", "CuSO4•5H2O", "CuSO4 · 5H2O": water of crystallisation after a hydrate dot.
   // A period with no count and formula right after it ends the sentence.
   let hydrate: HydrateTail | undefined;
-  if (!html && state === 0 && tokenEnd === bodyEnd) {
+  if (!markup && state === 0 && tokenEnd === bodyEnd) {
     hydrate = hydrateTail(text, bodyEnd, scan.end);
     // Only when the whole reads as one species: "Chloroform · Carbon tetrachloride" is a list.
     if (hydrate && !readsAsOne(scan, start, hydrate.end)) hydrate = undefined;
@@ -363,8 +438,11 @@ function formulaToken(scan: ProseScan, start: number, end: number): number {
   const written = hydrate
     ? `${text.slice(bodyStart, hydrate.dotStart)}·${text.slice(hydrate.partStart, bodyEnd).replace(/[ \t]/g, "")}`
     : text.slice(bodyStart, bodyEnd);
-  const body = html ? withUnicodeScripts(written) : written;
-  if (body === undefined) return next;
+  const converted = markup ? withUnicodeScripts(written) : tex ? written.replace(/_\{?([0-9]+)\}?/g, "$1") : written;
+  if (converted === undefined) return next;
+  // "¹³CO₂" has the shape of CO₂: the mass numbers label atoms, they add none.
+  const body = converted.slice(massDigits).replace(MASS_NUMBERS, "");
+  if (body.length === 0) return next;
   const shape = shapeOf(body, text.slice(bodyEnd, tokenEnd));
   if (!shape) return next;
   if (!isConfidentToken(token, body, shape)) {
@@ -384,10 +462,16 @@ function formulaToken(scan: ProseScan, start: number, end: number): number {
   if (stateLength > 0) {
     const withState = text.slice(bodyStart, tokenEnd + stateLength);
     const stateResult = scan.read(withState);
-    if (stateResult.ok) scan.sink.occurrences.push(occurrenceAt(stateResult.value, withState, bodyStart, "formula"));
+    if (stateResult.ok && (massDigits === 0 || stateResult.value.isotopes))
+      scan.sink.occurrences.push(occurrenceAt(stateResult.value, withState, bodyStart, "formula"));
     return tokenEnd + stateLength;
   }
   const result = scan.read(token);
+  // Digits read as a mass number only when the reader agrees they label an isotope.
+  if (massDigits > 0) {
+    if (result.ok && result.value.isotopes) scan.sink.occurrences.push(occurrenceAt(result.value, token, bodyStart, "formula"));
+    return next;
+  }
   if (result.ok) {
     scan.sink.occurrences.push(occurrenceAt(result.value, token, bodyStart, "formula"));
   } else if ((shape.hasCount || shape.hasCharge) && new Set(shape.symbols).size > 1) {
