@@ -24,6 +24,8 @@ export type ColumnMeaning =
   | "species"
   | "name"
   | "smiles"
+  /** Another species the row's species is made of: its cation or anion. Spotted, never checked against the row. */
+  | "constituent"
   | "valenceElectrons"
   | "lonePairs"
   | "axe"

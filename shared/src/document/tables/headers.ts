@@ -28,6 +28,18 @@ const HEADERS: ReadonlyMap<string, ColumnMeaning> = new Map<string, ColumnMeanin
     "molecule ion",
     "formula ion",
   ]),
+  ...words("constituent", [
+    "cation",
+    "anion",
+    "cations",
+    "anions",
+    "cation formula",
+    "anion formula",
+    "counterion",
+    "counter ion",
+    "positive ion",
+    "negative ion",
+  ]),
   ...words("smiles", [
     "smiles",
     "canonical smiles",

@@ -68,6 +68,10 @@ export function addRecord(fields: readonly RecordField[], read: SpeciesReader, s
   for (const written of fields) {
     const field = trimmedField(written);
     if (field.text.length === 0 || isPlaceholder(field.text)) continue;
+    if (field.meaning === "constituent") {
+      constituentOf(field, read, sink);
+      continue;
+    }
     if (namesSpecies(field.meaning)) naming.push(unwrapped(field));
     else cells.push({ meaning: field.meaning, range: field.range, text: field.text });
   }
@@ -101,6 +105,17 @@ export function addRecord(fields: readonly RecordField[], read: SpeciesReader, s
   }
   if (found.length === 0) return;
   sink.records.push(found.length === 1 ? { species: found[0], cells } : { species: found[0], cells, otherNames: found.slice(1) });
+}
+
+/**
+ * A cation or anion cell ("Ca++", "SO4-2", "chloride"): a species of its own, spotted where it is
+ * written. It is not the row's species, so no other cell is checked against it; and a cell it
+ * cannot read is left alone, as such a column may hold notes ("mixed", "see text").
+ */
+function constituentOf(field: RecordField, read: SpeciesReader, sink: RecordSink): void {
+  const cell = unwrapped(field);
+  const result = read(cell.text);
+  if (result.ok) sink.occurrences.push(occurrenceAt(result.value, cell.text, cell.range.start));
 }
 
 /**
