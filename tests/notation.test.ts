@@ -95,6 +95,9 @@ describe("sub- and superscripts set in markup", () => {
     // from memory: reStructuredText :sub: and :sup: roles, glued with escaped spaces (Docutils reference)
     ["H\\ :sub:`2`\\ O", "H2O", 0],
     ["NH\\ :sub:`4`\\ :sup:`+`", "NH4^+", 1],
+    // from memory: LaTeX text-mode \textsubscript and \textsuperscript; "--" is LaTeX's en dash
+    ["H\\textsubscript{2}O", "H2O", 0],
+    ["SO\\textsubscript{4}\\textsuperscript{2--}", "SO4^2-", -2],
   ])("%s reads as %s (charge %d)", (input, formula, charge) => {
     const reading = read(input);
     expect(reading.formula).toBe(formula);

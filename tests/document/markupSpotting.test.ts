@@ -66,6 +66,16 @@ describe("sub- and superscripts in other markup", () => {
   });
 });
 
+describe("state symbols after a space", () => {
+  // common practice: word-processor and handbook text often puts a space before the state symbol
+  it.each([
+    ["⟦NaCl (s)⟧ dissolves to ⟦Na⁺ (aq)⟧; ⟦H₂SO₄ (aq)⟧ too, but salt(s) and (s)-forms stay words.", "plaintext"],
+    ["Dry ⟦CO2 (g)⟧ and ⟦H2O (l)⟧, then ⟦CO2⟧ (gas) in words.", "markdown"],
+  ])("%s", (marked, kind) => {
+    check(marked, kind as DocumentKind);
+  });
+});
+
 describe("isotope labels", () => {
   // from memory: IUPAC nuclide notation; D for hydrogen-2 (IUPAC recommendations)
   it.each([
@@ -96,6 +106,10 @@ describe("LaTeX math outside mhchem", () => {
     ["Math is not chemistry: $x_i$, $E = mc^2$, $K_a$, $\\Delta H$, $pK_a$.", "markdown"],
     ["Prices: $5 and $10 per cylinder, or $5-$10 for small ones.", "markdown"],
     ["$$\\mathrm{⟦CO_2⟧ + ⟦H_2O⟧ \\rightleftharpoons ⟦H_2CO_3⟧}$$ and $⟦\\text{CO}_2⟧$, $2\\,\\mathrm{⟦H_2O_2⟧}$.", "markdown"],
+    [
+      "States in math: $\\mathrm{⟦NaCl_{(aq)}⟧}$, $⟦\\text{CO}_{2(g)}⟧$, $\\mathrm{⟦H_2O(l)⟧}$; text mode ⟦H\\textsubscript{2}O⟧.",
+      "markdown",
+    ],
     ["The draft was $⟦H_2O⟧$-free, dried under ⟦N_2⟧; no ⟦H_2O⟧ left. Not CO_2_ppm or run_2.", "markdown"],
   ])("%s", (marked, kind) => {
     check(marked, kind as DocumentKind);

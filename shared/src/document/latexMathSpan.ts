@@ -110,7 +110,7 @@ function readMathPiece(text: string, start: number, end: number, read: SpeciesRe
   const plain = latexToPlain(written);
   if (plain === undefined || plain.length === 0) return false;
   // "^{13}CO_2" has the shape of CO2: mass numbers label atoms, they add none.
-  const unlabelled = plain.replace(MASS_NUMBERS, "");
+  const unlabelled = plain.replace(MASS_NUMBERS, "").replace(STATE, "");
   const caret = unlabelled.indexOf("^");
   const body = caret < 0 ? unlabelled : unlabelled.slice(0, caret);
   const shape = shapeOf(body, caret < 0 ? "" : unlabelled.slice(caret));
@@ -122,6 +122,9 @@ function readMathPiece(text: string, start: number, end: number, read: SpeciesRe
   if (result.ok) sink.occurrences.push(occurrenceAt(result.value, written, start, "formula"));
   return result.ok;
 }
+
+/** A state symbol ending the formula: "H_2O(l)", "NaCl_{(aq)}". */
+const STATE = /\((?:aq|s|l|g)\)$/;
 
 /** Mass numbers before an element symbol, as `latexToPlain` writes them ("^{13}C"). */
 const MASS_NUMBERS = /\^\{[0-9]{1,3}\}(?=[A-Z])/g;

@@ -466,6 +466,17 @@ function formulaToken(scan: ProseScan, start: number, end: number, massDigits = 
       scan.sink.occurrences.push(occurrenceAt(stateResult.value, withState, bodyStart, "formula"));
     return tokenEnd + stateLength;
   }
+  // "NaCl (s)", "H₂SO₄ (aq)": a state symbol after one space belongs to the mention too, when the whole reads.
+  const spacedStateEnd = spacedStateSymbolEnd(text, tokenEnd, scan.end);
+  if (spacedStateEnd > tokenEnd) {
+    const withState = text.slice(bodyStart, spacedStateEnd);
+    const stateResult = scan.read(withState);
+    if (stateResult.ok && (massDigits === 0 || stateResult.value.isotopes)) {
+      scan.sink.occurrences.push(occurrenceAt(stateResult.value, withState, bodyStart, "formula"));
+      if (spacedStateEnd > end) scan.resumeAt = Math.max(scan.resumeAt, spacedStateEnd);
+      return spacedStateEnd;
+    }
+  }
   const result = scan.read(token);
   // Digits read as a mass number only when the reader agrees they label an isotope.
   if (massDigits > 0) {
@@ -537,6 +548,15 @@ function stateSymbolBefore(text: string, start: number, end: number): number {
 }
 
 const STATE_SYMBOLS = ["(aq)", "(s)", "(l)", "(g)"];
+
+/** The end of " (aq)", " (s)", " (l)" or " (g)" after a formula ending at `at`, or `at`. */
+function spacedStateSymbolEnd(text: string, at: number, limit: number): number {
+  if (text.charCodeAt(at) !== 0x20) return at;
+  const length = stateSymbolAt(text, at + 1, limit);
+  if (length === 0) return at;
+  const end = at + 1 + length;
+  return end < limit && isWordCharacter(text.charCodeAt(end)) ? at : end;
+}
 
 /** The length of a state symbol starting at `at`, or 0. */
 function stateSymbolAt(text: string, at: number, end: number): number {

@@ -66,6 +66,12 @@ export function latexToPlain(text: string): string | undefined {
         index = end;
         continue;
       }
+      // "NaCl_{(aq)}", "CO_{2(g)}": a state symbol set as a subscript.
+      if (character === "_" && /^[0-9]*\((?:aq|s|l|g)\)$/.test(content)) {
+        result += content;
+        index = end;
+        continue;
+      }
       if (character === "_" ? !/^[0-9]+$/.test(content) : !/^[0-9]*[+\-\u2212]{1,3}$|^[+\-\u2212][0-9]?$/.test(content)) return undefined;
       result += character === "_" ? content : `^${content}`;
       index = end;

@@ -5,7 +5,8 @@
  * - HTML: `CO<sub>2</sub>`, `SO<sub>4</sub><sup>2&minus;</sup>` (character references allowed);
  * - wiki templates: `H{{sub|2}}O`, `SO{{sub|4}}{{sup|2−}}`;
  * - AsciiDoc: `H~2~O`, `SO~4~^2-^`, `^13^CO~2~`;
- * - reStructuredText roles: `H\ :sub:`2`\ O`, `NH\ :sub:`4`\ :sup:`+``.
+ * - reStructuredText roles: `H\ :sub:`2`\ O`, `NH\ :sub:`4`\ :sup:`+``;
+ * - LaTeX text mode: `H\textsubscript{2}O`, `SO\textsubscript{4}\textsuperscript{2--}`.
  *
  * Each becomes the Unicode subscript or superscript characters the formula reader already knows.
  * A subscript holds a count; a superscript holds a charge ("2-", "+") or, right before an element
@@ -37,6 +38,7 @@ export function hasScriptMarkup(text: string): boolean {
     text.includes("{{su") ||
     text.includes(":sub:`") ||
     text.includes(":sup:`") ||
+    text.includes("\\textsu") ||
     /~[0-9]{1,3}~|\^[0-9+\-\u2212\u2013]{1,4}\^/.test(text)
   );
 }
@@ -84,8 +86,19 @@ function delimited(text: string, at: number, limit: number): ScriptMarkup | unde
   return scriptOf(text.slice(at + 1, close), mark === "^", close + 1);
 }
 
+/** LaTeX `\textsubscript{2}` and `\textsuperscript{2-}`; "--" is how LaTeX text types a dash. */
+function textCommand(text: string, at: number, limit: number): ScriptMarkup | undefined {
+  const command = /^\\text(sub|super)script\{/.exec(text.slice(at, at + 18));
+  if (!command) return undefined;
+  const contentStart = at + command[0].length;
+  const close = text.indexOf("}", contentStart);
+  if (close < 0 || close - contentStart > MAX_RAW_CONTENT || close + 1 > limit) return undefined;
+  return scriptOf(text.slice(contentStart, close).replace(/--/g, "-"), command[1] === "super", close + 1);
+}
+
 /** reStructuredText `\ :sub:`2`\ ` (the escaped spaces glue the role to the letters around it). */
 function role(text: string, at: number, limit: number): ScriptMarkup | undefined {
+  if (text.startsWith("\\text", at)) return textCommand(text, at, limit);
   let open = at;
   if (text.charCodeAt(open) === 0x5c) {
     if (text.charCodeAt(open + 1) !== 0x20) return undefined;
