@@ -66,6 +66,17 @@ describe("sub- and superscripts in other markup", () => {
   });
 });
 
+describe("LaTeX source kept as plain text", () => {
+  // common practice: cross-reference keys, citations and verbatim environments in LaTeX reports
+  it.each([
+    ["\\section{Why}\\label{sec:NO2}\nSee Eq.~\\ref{eq:NO2} and \\cite{KR2025NO2}: ⟦NO\\textsubscript{2}⟧ forms.", "plaintext"],
+    ["\\usepackage[version=4]{mhchem}\nUse \\ce{⟦KNO3⟧} (Table~\\ref{tab:KNO3}) and $c(\\mathrm{⟦NO_2^-⟧})$.", "plaintext"],
+    ["Before ⟦SO2⟧.\n\\begin{verbatim}\ngriess --gas NO2\n\\end{verbatim}\nAfter ⟦CO2⟧.", "plaintext"],
+  ])("%s", (marked, kind) => {
+    check(marked, kind as DocumentKind);
+  });
+});
+
 describe("state symbols after a space", () => {
   // common practice: word-processor and handbook text often puts a space before the state symbol
   it.each([

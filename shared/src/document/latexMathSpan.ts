@@ -75,7 +75,7 @@ export function scanLatexMath(text: string, start: number, end: number, read: Sp
     }
     if (readMathPiece(text, wordStart, wordEnd, read, sink)) continue;
     const quantities = quantityArguments(text, wordStart, wordEnd);
-    if (quantities.length > 0) for (const [from, to] of quantities) readMathPiece(text, from, to, read, sink);
+    if (quantities.length > 0) for (const [from, to] of quantities) readMathPiece(text, ...withoutFace(text, from, to), read, sink);
     else readFaceGroups(text, wordStart, wordEnd, read, sink);
   }
 }
@@ -101,6 +101,13 @@ function quantityArguments(text: string, start: number, end: number): [number, n
     if (depth === 0 && close > open) found.push([open, close]);
   }
   return found;
+}
+
+/** `text[start, end)` without a face command around all of it: "\mathrm{NO_2^-}" -> "NO_2^-". */
+function withoutFace(text: string, start: number, end: number): [number, number] {
+  const face = /^\\(?:mathrm|text|textrm|rm|mathit|mathsf)\{/.exec(text.slice(start, Math.min(end, start + 10)));
+  if (!face || text.charCodeAt(end - 1) !== 0x7d || !balanced(text, start + face[0].length, end - 1)) return [start, end];
+  return [start + face[0].length, end - 1];
 }
 
 /** Reads `text[start, end)` as one species when it is one; true when it was read. */

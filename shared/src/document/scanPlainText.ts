@@ -2,8 +2,10 @@
  * Plain text, with the one structure plain-text markup shares: reStructuredText literal blocks.
  * A code directive (".. code-block:: python") or a line ending in "::" ("Example::") opens an
  * indented block of code, skipped; a ".. math::" block is read as LaTeX math. Everything else,
- * the content of other directives (".. note::") included, is prose.
+ * the content of other directives (".. note::") included, is prose. LaTeX source kept as plain
+ * text skips its verbatim environments the same way.
  */
+import { verbatimBlockEnd } from "./latexCommands";
 import { scanLatexMath } from "./latexMathSpan";
 import { proseSteps } from "./scanProse";
 import type { ScanSink, ScanSteps, SpeciesReader } from "./speciesReader";
@@ -35,6 +37,14 @@ export function* plainTextSteps(text: string, read: SpeciesReader, sink: ScanSin
   while (position < text.length) {
     const lineEnd = endOfLine(text, position);
     const line = text.slice(position, Math.min(lineEnd, position + 200)).trimEnd();
+    // LaTeX source: "\begin{verbatim}" ... "\end{verbatim}" is code.
+    const verbatimEnd = line.includes("\\begin{") ? verbatimBlockEnd(text, position, lineEnd) : position;
+    if (verbatimEnd > position) {
+      yield* proseSteps(text, proseStart, position, sink, read, pauseAt);
+      proseStart = verbatimEnd;
+      position = verbatimEnd;
+      continue;
+    }
     const directive = /^\s*\.\.\s+([a-z-]+)::/.exec(line);
     const literal = directive ? CODE_DIRECTIVES.has(directive[1]) : line.endsWith("::") && !/^\s*::$/.test(line);
     if (literal && line.length < 200) {

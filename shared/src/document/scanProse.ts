@@ -8,6 +8,7 @@ import { scriptMarkupAt, withUnicodeScripts } from "../chemistry/reader/markupSc
 import { isGluedCoefficient, isLoneReactant } from "./equationContext";
 import { isSafeSpellingFix } from "./fixPolicy";
 import { isAlloyDesignation, isGroupFragment, isSeriesId, type SeriesMemo } from "./nonSpeciesContext";
+import { latexKeyCommandEnd } from "./latexCommands";
 import { latexMathSpan, scanLatexMath, type MathSpan } from "./latexMathSpan";
 import { mhchemSpanEnd, scanMhchemBody } from "./mhchemSpan";
 import { equationsInProse } from "./reactions/proseEquations";
@@ -91,6 +92,11 @@ export function* proseSteps(text: string, start: number, end: number, sink: Scan
       index = mhchemSpan(scan, index);
       continue;
     }
+    const keyEnd = code === 0x5c ? latexKeyCommandEnd(text, index, end) : index;
+    if (keyEnd > index) {
+      index = keyEnd;
+      continue;
+    }
     if (code === 0x24 || (code === 0x5c && (text.charCodeAt(index + 1) === 0x28 || text.charCodeAt(index + 1) === 0x5b))) {
       const math = latexMathSpan(text, index, end);
       if (math) {
@@ -114,6 +120,8 @@ export function* proseSteps(text: string, start: number, end: number, sink: Scan
         continue;
       }
       if (isSpaceCode(next) || next === 0x60 || (next === 0x5c && text.startsWith("\\ce{", chunkEnd))) break;
+      // "Eq.~\ref{eq:NO2}": a key is no prose.
+      if (next === 0x5c && latexKeyCommandEnd(text, chunkEnd, end) > chunkEnd) break;
       // Math may open right after a bracket or quote: "($H_2O$)".
       if (next === 0x24 && isLeadingPunctuation(text.charCodeAt(chunkEnd - 1))) break;
       chunkEnd++;
