@@ -60,4 +60,45 @@ describe("frame decoder", () => {
     expect(frames[0].kind).toBe("error");
     expect(frames[frames.length - 1]).toEqual({ kind: "message", message: exit });
   });
+
+  it("reads a body whose characters are cut between chunks at every byte", () => {
+    // source: Unicode Standard, UTF-8 encoding forms: "é" is 2 bytes, "🧪" 4, "€" 3
+    const message = { jsonrpc: "2.0", method: "note", params: { text: "é🧪€ at Kestrel Ridge" } };
+    const stream = frame(message);
+    for (let first = 0; first < stream.length; first += 1) {
+      for (let second = first; second <= Math.min(stream.length, first + 5); second += 1) {
+        const frames = decodeAll([stream.subarray(0, first), stream.subarray(first, second), stream.subarray(second)]);
+        expect(frames).toEqual([{ kind: "message", message }]);
+      }
+    }
+  });
+
+  it("reads invalid UTF-8 in a string as Buffer#toString does, however it is split", () => {
+    // source: WHATWG Encoding Standard, UTF-8 decoder: each maximal invalid subpart becomes U+FFFD
+    const invalid = Buffer.from([0xc3, 0x28, 0xe2, 0x82, 0xf0, 0x9f, 0x41, 0xff]);
+    const body = Buffer.concat([Buffer.from('{"jsonrpc":"2.0","method":"note","params":"'), invalid, Buffer.from('"}')]);
+    const stream = Buffer.concat([Buffer.from(`Content-Length: ${body.length}\r\n\r\n`), body]);
+    const expected = JSON.parse(body.toString("utf8")) as unknown;
+    for (let cut = 0; cut <= stream.length; cut += 1) {
+      expect(decodeAll([stream.subarray(0, cut), stream.subarray(cut)])).toEqual([{ kind: "message", message: expected }]);
+    }
+  });
+
+  it("keeps a byte-order mark at the start of a body, so the body is not JSON // common practice", () => {
+    const body = Buffer.concat([Buffer.from([0xef, 0xbb, 0xbf]), Buffer.from(JSON.stringify(exit))]);
+    const frames = decodeAll([Buffer.from(`Content-Length: ${body.length}\r\n\r\n`), body, frame(hover)]);
+    expect(frames.map((item) => item.kind)).toEqual(["error", "message"]);
+  });
+
+  it("reads a large message that arrives in many chunks, and the frame after it in the same chunk", () => {
+    const text = "Cylinder KR-0042 holds SF6 at 21 bar.\n".repeat(40_000);
+    const open = { jsonrpc: "2.0", method: "textDocument/didOpen", params: { textDocument: { text } } };
+    const stream = Buffer.concat([frame(open), frame(hover)]);
+    const chunks: Buffer[] = [];
+    for (let at = 0; at < stream.length; at += 65_536) chunks.push(stream.subarray(at, at + 65_536));
+    expect(decodeAll(chunks)).toEqual([
+      { kind: "message", message: open },
+      { kind: "message", message: hover },
+    ]);
+  });
 });

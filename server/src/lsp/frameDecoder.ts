@@ -4,11 +4,14 @@
  * body that is not a JSON object is reported and dropped, and reading goes on.
  */
 
+import { TextDecoder } from "node:util";
+
 /** What one step of decoding produced. */
 export type DecodedFrame =
   { readonly kind: "message"; readonly message: Record<string, unknown> } | { readonly kind: "error"; readonly error: Error };
 
 export interface FrameDecoder {
+  /** Hands `chunk` over: the decoder keeps it, without a copy, so the caller must not change it afterwards. */
   push(chunk: Uint8Array): void;
   /** The next message or error, or undefined when more bytes are needed. */
   next(): DecodedFrame | undefined;
@@ -25,32 +28,49 @@ const MAX_HEADER_BYTES = 16 * 1024;
 const HEADER_END = Buffer.from("\r\n\r\n");
 const LENGTH_KEY = Buffer.from("content-length:");
 
+/** A body being read: its text so far, decoded as its bytes arrive. */
+interface BodyInProgress {
+  remaining: number;
+  readonly pieces: string[];
+  readonly decoder: TextDecoder;
+}
+
 export function createFrameDecoder(): FrameDecoder {
+  // Bytes not yet decoded, in arrival order; the first may be a view into a larger chunk.
   let chunks: Buffer[] = [];
   let pending = 0;
-  let bodyLength: number | undefined;
+  let body: BodyInProgress | undefined;
 
-  /** Joins the first chunks until `length` bytes are contiguous; joins at most once per message. */
+  /** Joins the first chunks until `length` bytes (or all there are) are contiguous, joining no more than that. */
   const front = (length: number): Buffer => {
-    if (chunks[0].length < length && chunks.length > 1) chunks = [Buffer.concat(chunks)];
+    if (chunks[0].length >= length || chunks.length === 1) return chunks[0];
+    let joined = 0;
+    let count = 0;
+    while (count < chunks.length && joined < length) joined += chunks[count++].length;
+    chunks = [Buffer.concat(chunks.slice(0, count)), ...chunks.slice(count)];
     return chunks[0];
   };
 
-  const consume = (length: number): Buffer => {
-    if (length === 0) return Buffer.alloc(0);
-    const joined = front(length);
-    const taken = joined.subarray(0, length);
-    const rest = joined.subarray(length);
-    chunks = rest.length > 0 ? [rest, ...chunks.slice(1)] : chunks.slice(1);
+  /** Drops `length` bytes from the front. */
+  const drop = (length: number): void => {
+    let left = length;
+    while (left > 0) {
+      const first = chunks[0];
+      if (first.length > left) {
+        chunks[0] = first.subarray(left);
+        break;
+      }
+      left -= first.length;
+      chunks.shift();
+    }
     pending -= length;
-    return taken;
   };
 
   /** Drops bytes up to the next "Content-Length:" after the first byte (or all but a possible partial key). */
   const resync = (): void => {
     const head = front(pending);
     const next = indexOfCaseless(head, LENGTH_KEY, 1);
-    consume(next >= 0 ? next : Math.max(1, head.length - LENGTH_KEY.length));
+    drop(next >= 0 ? next : Math.max(1, head.length - LENGTH_KEY.length));
   };
 
   const readHeader = (): DecodedFrame | "wait" | "ok" => {
@@ -66,31 +86,47 @@ export function createFrameDecoder(): FrameDecoder {
       resync();
       return { kind: "error", error: new Error("Message header without a usable Content-Length; skipped") };
     }
-    consume(end + HEADER_END.length);
-    bodyLength = length;
+    drop(end + HEADER_END.length);
+    // As Buffer#toString reads UTF-8: invalid bytes become U+FFFD and a byte-order mark stays.
+    body = { remaining: length, pieces: [], decoder: new TextDecoder("utf-8", { ignoreBOM: true }) };
     return "ok";
+  };
+
+  /**
+   * Decodes the body's bytes that have arrived, chunk by chunk, so a large message is turned
+   * into text while it streams in rather than copied whole at its end; true once it is complete.
+   */
+  const readBody = (reading: BodyInProgress): boolean => {
+    while (reading.remaining > 0 && chunks.length > 0) {
+      const first = chunks[0];
+      const taken = first.length <= reading.remaining ? first : first.subarray(0, reading.remaining);
+      reading.pieces.push(reading.decoder.decode(taken, { stream: true }));
+      reading.remaining -= taken.length;
+      drop(taken.length);
+    }
+    return reading.remaining === 0;
   };
 
   return {
     push(chunk) {
       if (chunk.length === 0) return;
-      chunks.push(Buffer.from(chunk));
+      chunks.push(Buffer.isBuffer(chunk) ? chunk : Buffer.from(chunk.buffer, chunk.byteOffset, chunk.length));
       pending += chunk.length;
     },
     next() {
-      while (pending > 0 || bodyLength === 0) {
-        if (bodyLength === undefined) {
-          const header = readHeader();
-          if (header === "wait") return undefined;
-          if (header !== "ok") return header;
-          continue;
+      for (;;) {
+        if (body) {
+          if (!readBody(body)) return undefined;
+          body.pieces.push(body.decoder.decode());
+          const text = body.pieces.length === 1 ? body.pieces[0] : body.pieces.join("");
+          body = undefined;
+          return decodeBody(text);
         }
-        if (pending < bodyLength) return undefined;
-        const body = consume(bodyLength).toString("utf8");
-        bodyLength = undefined;
-        return decodeBody(body);
+        if (pending === 0) return undefined;
+        const header = readHeader();
+        if (header === "wait") return undefined;
+        if (header !== "ok") return header;
       }
-      return undefined;
     },
     get pendingBytes() {
       return pending;
