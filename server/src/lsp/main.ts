@@ -19,6 +19,7 @@ import {
 } from "vscode-languageserver/node";
 import { describeError } from "./guardedHandler";
 import { gatedReader } from "./lifecycleGate";
+import { createQuickRequestGate, watchedReader, watchedWriter, type QuickRequestGate } from "./quickRequests";
 import { startServer } from "./server";
 import { createTolerantReader } from "./tolerantReader";
 
@@ -55,20 +56,23 @@ function stdioSetup(connection: Connection): void {
   console.error = (...values: unknown[]) => connection.console.error(values.map(String).join(" "));
 }
 
-function openConnection(): Connection {
+function openConnection(quickRequests: QuickRequestGate): Connection {
   const chosen = transportFromArguments(process.argv.slice(2));
   // Without a transport argument the library reports the usage error itself.
   if (!chosen) return createConnection(ProposedFeatures.all);
   const [reader, writer] = chosen.transport;
-  const connection = createConnection(ProposedFeatures.all, gatedReader(reader, writer), writer);
+  // Long work gives way to the quick requests this sees come in, until it sees them answered.
+  const watched = watchedWriter(writer, quickRequests);
+  const connection = createConnection(ProposedFeatures.all, watchedReader(gatedReader(reader, watched), quickRequests), watched);
   if (chosen.stdio) stdioSetup(connection);
   return connection;
 }
 
-const connection = openConnection();
+const quickRequests = createQuickRequestGate();
+const connection = openConnection(quickRequests);
 
 // A bug in one feature must cost one answer, not the editor's whole language server.
 process.on("uncaughtException", (error) => connection.console.error(`lonepair: uncaught: ${describeError(error)}`));
 process.on("unhandledRejection", (reason) => connection.console.error(`lonepair: unhandled: ${describeError(reason)}`));
 
-startServer(connection);
+startServer(connection, quickRequests);

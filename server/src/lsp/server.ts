@@ -15,7 +15,8 @@ import {
 import { CHUNKED_DOCUMENTS } from "./chunkedDocument";
 import { clientFeaturesFrom, type ClientFeatures } from "./clientFeatures";
 import { createDocumentCache } from "./documentCache";
-import { guarded, guardedNotification, type ServerLog } from "./guardedHandler";
+import { guarded, guardedNotification, yieldToEventLoop, type ServerLog } from "./guardedHandler";
+import type { LongWork } from "./quickRequests";
 import type { ServerContext } from "./serverContext";
 import { createSettingsStore } from "./settingsStore";
 import { registerCodeActions } from "./features/codeActions";
@@ -30,8 +31,11 @@ import { registerWorkspaceCheck, type WorkspaceCheckFeature } from "./features/w
 import { WORKSPACE_CHECK_COMMAND } from "../../../shared/src/index";
 import { workspaceFoldersFrom, type WorkspaceFolders } from "./workspaceFolders";
 
-/** Starts serving on `connection`; returns once the handlers are registered. */
-export function startServer(connection: Connection): void {
+/**
+ * Starts serving on `connection`; returns once the handlers are registered. Long work gives way
+ * to quick requests through `longWork` (when the transport is watched; otherwise it only yields).
+ */
+export function startServer(connection: Connection, longWork: LongWork = { giveWay: yieldToEventLoop }): void {
   const log: ServerLog = {
     error: (message) => connection.console.error(message),
     info: (message) => connection.console.info(message),
@@ -50,6 +54,7 @@ export function startServer(connection: Connection): void {
     cache: createDocumentCache(),
     settings,
     log,
+    longWork,
     clientFeatures: () => features ?? clientFeaturesFrom({}),
     workspaceFolders: () => folders?.current() ?? [],
   };

@@ -7,6 +7,7 @@ import type { ChunkedTextDocument } from "./chunkedDocument";
 import type { ClientFeatures } from "./clientFeatures";
 import type { AnalysedDocument, DocumentCache } from "./documentCache";
 import type { ServerLog } from "./guardedHandler";
+import type { LongWork } from "./quickRequests";
 import type { ServerSettings } from "./settings";
 import type { SettingsStore } from "./settingsStore";
 import type { WorkspaceFolderPath } from "./workspaceFolders";
@@ -17,6 +18,8 @@ export interface ServerContext {
   readonly cache: DocumentCache;
   readonly settings: SettingsStore;
   readonly log: ServerLog;
+  /** Long work calls `giveWay()` between slices, so quick requests are answered meanwhile. */
+  readonly longWork: LongWork;
   /** Known once `initialize` has been answered. */
   clientFeatures(): ClientFeatures;
   /** The editor's open folders on disk (empty before `initialize`). */

@@ -14,7 +14,7 @@ import { searchDocuments, type DocumentFile } from "../files/findDocuments";
 import { readDocumentText } from "../files/readDocumentText";
 import { analyseDocument } from "./documentCache";
 import { cappedFindings, diagnosticsOf } from "./features/diagnostics";
-import { describeError, yieldToEventLoop } from "./guardedHandler";
+import { describeError } from "./guardedHandler";
 import { enabledDocument, type ServerContext } from "./serverContext";
 import type { ServerSettings } from "./settings";
 
@@ -61,7 +61,7 @@ export async function checkWorkspaceFolders(context: ServerContext, options: Pas
     const settings = await context.settings.forUri(folder.uri || pathToFileURL(folder.path).href);
     for (const item of searchDocuments([folder.path], folder.path)) {
       if (++steps % SEARCH_STEPS_PER_YIELD === 0) {
-        await yieldToEventLoop();
+        await context.longWork.giveWay();
         if (token.isCancellationRequested) break search;
         options.progress(`finding files: ${found.length}`);
       }
@@ -101,7 +101,7 @@ export async function checkWorkspaceFolders(context: ServerContext, options: Pas
       context.log.info(`lonepair: workspace check: ${file.path}: ${describeError(error)}`);
     }
     // Lets a cancellation, an edit or another request in between files.
-    await yieldToEventLoop();
+    await context.longWork.giveWay();
   }
   return {
     files: found.length,

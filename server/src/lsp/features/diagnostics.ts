@@ -13,6 +13,7 @@ import {
 import type { TextDocument } from "vscode-languageserver-textdocument";
 import type { Finding, FindingSeverity } from "../core";
 import { guarded } from "../guardedHandler";
+import type { LongWork } from "../quickRequests";
 import { lspRange } from "../ranges";
 import { enabledDocument, type ServerContext } from "../serverContext";
 
@@ -92,7 +93,7 @@ async function currentDiagnostics(
     const { document, analysed, settings } = enabled;
     const limit = settings.diagnostics.maxPerDocument;
     const stop = (): boolean => cancelled() || context.cache.revisionOf(uri) !== analysed.revision;
-    const parts = await partsInSlices(analysed.findingParts(), limit, stop);
+    const parts = await partsInSlices(analysed.findingParts(), limit, stop, context.longWork);
     if (!parts) continue;
     const items = diagnosticsOf(document, cappedFindings(parts, limit));
     return { version: document.version, revision: analysed.revision, items };
@@ -111,6 +112,7 @@ async function partsInSlices(
   parts: Iterable<readonly Finding[]>,
   limit: number,
   stop: () => boolean,
+  longWork: LongWork,
 ): Promise<(readonly Finding[])[] | undefined> {
   const taken: (readonly Finding[])[] = [];
   let errors = 0;
@@ -120,7 +122,7 @@ async function partsInSlices(
     if (errors >= limit && part.length > 0) break;
     for (const finding of part) if (finding.severity === "error") errors++;
     if (performance.now() - sliceStart < SLICE_MS) continue;
-    await new Promise((resolve) => setImmediate(resolve));
+    await longWork.giveWay();
     if (stop()) return undefined;
     sliceStart = performance.now();
   }

@@ -106,7 +106,7 @@ export function registerHover(
         if (cards.known(occurrence.text, result, options) !== undefined) continue;
         cards.card(occurrence.text, result, options);
         // One card at a time: a request or an edit that came meanwhile goes first.
-        await new Promise((resolve) => setImmediate(resolve));
+        await context.longWork.giveWay();
         if (superseded()) return;
       }
     },
