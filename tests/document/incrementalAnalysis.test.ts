@@ -253,22 +253,70 @@ describe("incremental analysis after random edits", () => {
     }
   });
 
-  it.each([5, 6, 7, 8])("a markdown notebook with pasted blocks, CRLF and fences agrees through 600 edits (seed %i)", (seed) => {
+  it.each([
+    [5, undefined],
+    [6, undefined],
+    [7, undefined],
+    [8, undefined],
+    [9, 40],
+    [10, 40],
+    [11, 200],
+    [12, 200],
+  ])("a markdown notebook with pasted blocks, CRLF and fences agrees through 600 edits (seed %i, split %s at a time)", (seed, stretch) => {
     const random = seededRandom(seed);
     const lines = Array.from({ length: 80 }, (_, index) => MORE_MARKDOWN_LINES[(index * 7 + seed) % MORE_MARKDOWN_LINES.length]);
     const kind = "markdown";
-    const session: Session = { text: chunkedTextOf(`${lines.join("\n")}\n`, 256), analyser: createDocumentAnalyser(kind) };
+    const session: Session = {
+      text: chunkedTextOf(`${lines.join("\n")}\n`, 256),
+      analyser: createDocumentAnalyser(kind, undefined, { markdownStretch: stretch }),
+    };
     for (let edit = 0; edit < 600; edit++) {
       randomEdit(session, random, MORE_MARKDOWN_LINES);
-      if (random() < 0.2) {
+      const partly = random();
+      if (partly < 0.2) {
         // A version only hovered over, its blocks split no further than the hover needed.
         const analysis = session.analyser.analyse(session.text);
         analysis.speciesAt(Math.floor(random() * session.text.length));
         continue;
       }
+      if (partly < 0.35) {
+        // A version whose diagnostics were given up after a few parts, as a newer edit came.
+        let parts = Math.floor(random() * 12);
+        for (const _ of session.analyser.analyse(session.text).findingParts()) if (parts-- <= 0) break;
+        continue;
+      }
       checkAgainstScratch(session, kind, random);
     }
   });
+
+  it.each([
+    [13, 40],
+    [14, 120],
+    [15, 400],
+  ])(
+    "a notebook whose split stopped part way keeps agreeing through edits before it is finished (seed %i, split %i at a time)",
+    (seed, stretch) => {
+      const random = seededRandom(seed);
+      const kind = "markdown";
+      for (let round = 0; round < 40; round++) {
+        // As a server opens a notebook and stops reading once it has a screenful of diagnostics.
+        const lines = Array.from({ length: 80 }, () => MORE_MARKDOWN_LINES[Math.floor(random() * MORE_MARKDOWN_LINES.length)]);
+        const session: Session = {
+          text: chunkedTextOf(`${lines.join("\n")}\n`, 256),
+          analyser: createDocumentAnalyser(kind, undefined, { markdownStretch: stretch }),
+        };
+        for (let edit = 0, edits = 1 + Math.floor(random() * 8); edit <= edits; edit++) {
+          if (edit > 0) randomEdit(session, random, MORE_MARKDOWN_LINES);
+          const analysis = session.analyser.analyse(session.text);
+          if (random() < 0.3) analysis.speciesAt(Math.floor(random() * session.text.length));
+          let parts = Math.floor(random() * 30);
+          for (const _ of analysis.findingParts()) if (parts-- <= 0) break;
+        }
+        randomEdit(session, random, MORE_MARKDOWN_LINES);
+        checkAgainstScratch(session, kind, random);
+      }
+    },
+  );
 
   it.each([1, 2, 3, 4])("a JSON list of records keeps the findings of a fresh analysis through 400 edits (seed %i)", (seed) => {
     const random = seededRandom(seed);

@@ -47,6 +47,15 @@ export function checkAgainstScratch(session: Session, kind: DocumentKind, random
   expect(canonical(analysis.findingsAround(place, place).filter(touching))).toEqual(scratch.filter(touching));
   // The species a hover asks for, at a few random places.
   const model = analyzeDocument(plain, kind);
+  if (kind === "markdown") {
+    // Every mention, table row and equation where a fresh reading finds it.
+    const whole = analysis.model();
+    const places = (items: readonly { readonly range: { readonly start: number; readonly end: number } }[]): string[] =>
+      items.map((item) => `${item.range.start}-${item.range.end}`);
+    expect(places(whole.occurrences)).toEqual(places(model.occurrences));
+    expect(places(whole.records.map((record) => record.species))).toEqual(places(model.records.map((record) => record.species)));
+    expect((whole.reactions ?? []).length).toEqual((model.reactions ?? []).length);
+  }
   for (let probe = 0; probe < 3; probe++) {
     const offset = Math.floor(random() * (plain.length + 1));
     expect(analysis.speciesAt(offset)?.range).toEqual(speciesAtOffset(model, offset)?.range);

@@ -70,11 +70,17 @@ const SEGMENT_MODELS_KEPT = 16;
 /** How much of the start is checked for NUL characters (as `analysedTextOf` does). */
 const BINARY_PROBE_LENGTH = 8 * 1024;
 
+/** Sizes an analyser works in; the defaults suit editors, tests make them small. */
+export interface AnalyserTuning {
+  /** How many characters of markdown the split into blocks reads at a time. */
+  readonly markdownStretch?: number;
+}
+
 /** An analyser for a document of `kind`; keep one per open document, across its edits. */
-export function createDocumentAnalyser(kind: DocumentKind, limit = MAX_ANALYSED_LENGTH): DocumentAnalyser {
+export function createDocumentAnalyser(kind: DocumentKind, limit = MAX_ANALYSED_LENGTH, tuning: AnalyserTuning = {}): DocumentAnalyser {
   const read = memoisedReader();
   const table = kind === "csv" || kind === "tsv" ? tableSegments(kind, read) : undefined;
-  const markdown = kind === "markdown" ? markdownAnalyser(read) : undefined;
+  const markdown = kind === "markdown" ? markdownAnalyser(read, tuning.markdownStretch) : undefined;
   const list = kind === "json" ? jsonSegments(read) : kind === "yaml" ? yamlSegments(read) : undefined;
   return {
     analyse(text) {

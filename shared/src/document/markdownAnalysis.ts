@@ -30,9 +30,34 @@ interface BlockList {
   readonly blocks: MarkdownBlock[];
   readonly starts: number[];
   /** The split still to be made, from a block start to the end of the text. */
-  rest?: { readonly from: number; stream?: Generator<MarkdownBlock, void, void>; source?: string };
+  rest?: SplitRest;
+  /** How much text a stretch of the split reads at first. */
+  readonly stretch: number;
 }
 
+/**
+ * Where the split goes on: a block start of this version (or the text's start), and the stretch
+ * of text after it being split. The split reads a stretch at a time, never the whole rest.
+ */
+interface SplitRest {
+  readonly from: number;
+  /** How much text the next stretch reads (it grows when one block is longer). */
+  readonly size: number;
+  stretch?: SplitStretch;
+}
+
+/** Text from `SplitRest.from` being split; offsets of its blocks are from its start. */
+interface SplitStretch {
+  readonly source: string;
+  /** Whether `source` runs to the end of the text. */
+  readonly complete: boolean;
+  readonly stream: Generator<MarkdownBlock, void, void>;
+  /** The last block found, kept back until the block after it shows that it is finished. */
+  pending?: MarkdownBlock;
+}
+
+/** How much text the split reads at a time, at first. */
+const SPLIT_STRETCH = 64 * 1024;
 /** An edit that changes more text than this is split afresh. */
 const LARGE_CHANGE = 1024 * 1024;
 /** A request this far past where the first split has got to is answered from the lines around it. */
@@ -48,15 +73,24 @@ const READING_BY_TEXT_LENGTH = 2048;
 /** Distinct species texts remembered for preparing hovers. */
 const DISTINCT_SPECIES_KEPT = 4096;
 
-/** Analyses successive versions of one markdown document, reusing the blocks an edit left alone. */
-export function markdownAnalyser(read: SpeciesReader): (text: ChunkedText) => DocumentAnalysis {
+/**
+ * Analyses successive versions of one markdown document, reusing the blocks an edit left alone;
+ * the split reads `stretch` characters of text at a time (tests make it small).
+ */
+export function markdownAnalyser(read: SpeciesReader, stretch = SPLIT_STRETCH): (text: ChunkedText) => DocumentAnalysis {
   // Keyed by a block object: a block an edit left alone is the same object in the next version.
   const readings = new WeakMap<MarkdownBlock, BlockReading>();
   const byText = new Map<string, BlockReading>();
   const reader: BlockReader = { read, byText, met: new Map() };
   let last: BlockList | undefined;
   return (text) => {
-    const list: BlockList = (last && editedList(last, text)) ?? { text, blocks: [], starts: [], rest: { from: 0 } };
+    const list: BlockList = (last && editedList(last, text, stretch)) ?? {
+      text,
+      blocks: [],
+      starts: [],
+      rest: { from: 0, size: stretch },
+      stretch,
+    };
     last = list;
     return analysisOf(list, reader, readings);
   };
@@ -168,20 +202,62 @@ function splitReached(list: BlockList): number {
   return last < 0 ? 0 : list.starts[last];
 }
 
+/** Where the split stands: a block start (or the text's start) before which every block is known. */
+function splitFrontier(rest: SplitRest): number {
+  const pending = rest.stretch?.pending;
+  return pending ? rest.from + pending.start : rest.from;
+}
+
+/**
+ * Adds the next block to `list` (or finds there is none). The split reads a stretch of text at
+ * a time; a block is taken once the block after it starts on lines the stretch holds whole, as
+ * then the rest of the text cannot change it. Otherwise the split reads on from the block kept
+ * back, with a longer stretch when that block is the stretch's first.
+ */
 function nextBlock(list: BlockList): void {
-  const rest = list.rest;
-  if (!rest) return;
-  if (!rest.stream) {
-    rest.source = sliceOf(list.text, rest.from, list.text.length);
-    rest.stream = markdownBlockStream(rest.source, { atDocumentStart: rest.from === 0 });
+  for (;;) {
+    const rest = list.rest;
+    if (!rest) return;
+    rest.stretch ??= splitStretch(list.text, rest);
+    const stretch = rest.stretch;
+    const next = stretch.stream.next();
+    if (!next.done && (stretch.complete || isDecided(stretch.source, next.value.start))) {
+      const taken = stretch.pending;
+      stretch.pending = next.value;
+      if (!taken) continue;
+      list.blocks.push(movedBlock(taken, -taken.start));
+      list.starts.push(rest.from + taken.start);
+      return;
+    }
+    if (next.done && stretch.complete) {
+      const last = stretch.pending;
+      if (last) {
+        list.blocks.push(movedBlock(last, -last.start));
+        list.starts.push(rest.from + last.start);
+      }
+      list.rest = undefined;
+      return;
+    }
+    // The stretch ends before its last block is settled: read on from that block.
+    const restart = stretch.pending?.start ?? 0;
+    list.rest = restart > 0 ? { from: rest.from + restart, size: list.stretch } : { from: rest.from, size: rest.size * 2 };
   }
-  const next = rest.stream.next();
-  if (next.done) {
-    list.rest = undefined;
-    return;
-  }
-  list.blocks.push(movedBlock(next.value, -next.value.start));
-  list.starts.push(rest.from + next.value.start);
+}
+
+/** The stretch of text the split reads next: from `rest.from`, about `rest.size` characters, whole lines. */
+function splitStretch(text: ChunkedText, rest: SplitRest): SplitStretch {
+  // Front matter ends wherever its closing line is: a document that opens with it is split whole.
+  const whole = rest.from === 0 && opensWithFrontMatterLine(text);
+  const reach = rest.from + rest.size;
+  const end = whole || reach >= text.length ? text.length : Math.min(text.length, lineEndAt(text, reach) + 1);
+  const source = sliceOf(text, rest.from, end);
+  return { source, complete: end >= text.length, stream: markdownBlockStream(source, { atDocumentStart: rest.from === 0 }) };
+}
+
+/** Whether a block starting at `start` of `source` is settled there: its line and the next end inside `source`. */
+function isDecided(source: string, start: number): boolean {
+  const lineEnd = source.indexOf("\n", start);
+  return lineEnd >= 0 && source.indexOf("\n", lineEnd + 1) >= 0;
 }
 
 /**
@@ -191,7 +267,7 @@ function nextBlock(list: BlockList): void {
  * edit, on a line start in both versions, where the old version also had a block start: from a
  * block start the split depends only on the text after it, which the edit left alone.
  */
-function editedList(old: BlockList, text: ChunkedText): BlockList | undefined {
+function editedList(old: BlockList, text: ChunkedText, stretch: number): BlockList | undefined {
   const change = changedStretch(old.text, text);
   if (!change) return old;
   if (change.oldEnd - change.start > LARGE_CHANGE || change.newEnd - change.start > LARGE_CHANGE) return undefined;
@@ -204,8 +280,12 @@ function editedList(old: BlockList, text: ChunkedText): BlockList | undefined {
   if ((first === 0 || old.blocks[0]?.kind !== "frontMatter") && opensWithFrontMatterLine(text)) return undefined;
   const restart = before < 0 ? 0 : old.starts[before];
   const kept = { blocks: old.blocks.slice(0, first), starts: old.starts.slice(0, first) };
-  // An old version not split to its end yet: split the new one on from the restart.
-  if (old.rest) return { text, blocks: kept.blocks, starts: kept.starts, rest: { from: restart } };
+  // An old version not split to its end yet: the blocks it has are kept where the edit left
+  // them alone, and the split goes on from where it stood.
+  const frontier = old.rest ? splitFrontier(old.rest) : undefined;
+  if (frontier !== undefined && lineBefore > frontier) {
+    return { text, blocks: old.blocks.slice(), starts: old.starts.slice(), rest: { from: frontier, size: stretch }, stretch };
+  }
   const delta = text.length - old.text.length;
   for (let span = 8192; ; span *= 2) {
     const reach = change.newEnd + span;
@@ -225,13 +305,18 @@ function editedList(old: BlockList, text: ChunkedText): BlockList | undefined {
             blocks.push(old.blocks[index]);
             starts.push(old.starts[index] + delta);
           }
-          return { text, blocks, starts };
+          return frontier === undefined
+            ? { text, blocks, starts, stretch }
+            : { text, blocks, starts, rest: { from: frontier + delta, size: stretch }, stretch };
         }
+        // Past where the old split had got to: the split goes on from this block.
+        if (decided && frontier !== undefined && at - delta >= frontier)
+          return { text, blocks, starts, rest: { from: at, size: stretch }, stretch };
       }
       blocks.push(movedBlock(block, -block.start));
       starts.push(at);
     }
-    if (complete) return { text, blocks, starts };
+    if (complete) return { text, blocks, starts, stretch };
   }
 }
 
