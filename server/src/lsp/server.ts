@@ -89,6 +89,7 @@ export function startServer(connection: Connection, longWork: LongWork = { giveW
 
   connection.onInitialized(() => {
     workspaceCheck?.initialized();
+    hover?.warmUp().catch((error: unknown) => log.error(`lonepair: hover warm-up failed: ${String(error)}`));
     if (features?.configurationRegistration) {
       connection.client.register(DidChangeConfigurationNotification.type, { section: "lonepair" }).catch(() => undefined);
     }

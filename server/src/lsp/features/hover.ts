@@ -7,6 +7,7 @@
 import { MarkupKind, type Hover, type HoverParams } from "vscode-languageserver";
 import {
   analyzeOccurrenceSafely,
+  analyzeSpecies,
   createHoverCardMemo,
   reactionAtOffset,
   reactionCard,
@@ -18,6 +19,7 @@ import type { AnalysedDocument } from "../documentCache";
 import { guarded } from "../guardedHandler";
 import { isLargeSmiles, type OffThreadSpecies } from "../offThreadSpecies";
 import { lspRange } from "../ranges";
+import { DEFAULT_SETTINGS } from "../settings";
 import { enabledDocument, type ServerContext } from "../serverContext";
 
 /** What the rest of the server tells the hover feature. */
@@ -31,7 +33,16 @@ export interface HoverFeature {
   viewed(uri: string, start: number, end: number): void;
   /** Forgets a closed document. */
   closed(uri: string): void;
+  /**
+   * Writes a few cards nobody asked for, one per turn of the event loop, into a memo of their
+   * own: the first cards a process writes run code the engine has not compiled yet, several
+   * times slower than later ones, and the first hover should not pay for that.
+   */
+  warmUp(): Promise<void>;
 }
+
+// common practice: one small species of each common electron geometry, for the warm-up.
+const WARM_UP_SPECIES = ["H2O", "NH3", "BF3", "SF6", "XeF4"];
 
 /** Distinct species whose cards one pass writes ahead: with cards of 5,000-20,000 characters, they fit the memo. */
 const PREPARED_CARDS_LIMIT = 200;
@@ -108,6 +119,14 @@ export function registerHover(
         // One card at a time: a request or an edit that came meanwhile goes first.
         await context.longWork.giveWay();
         if (superseded()) return;
+      }
+    },
+    async warmUp() {
+      const scratch = createHoverCardMemo();
+      const options = { angleDecimals: DEFAULT_SETTINGS.angleDecimals, format: context.clientFeatures().hoverFormat };
+      for (const text of WARM_UP_SPECIES) {
+        await context.longWork.giveWay();
+        scratch.card(text, analyzeSpecies(text), options);
       }
     },
     viewed(uri, start, end) {
