@@ -16,8 +16,9 @@ export function latexKeyCommandEnd(text: string, at: number, limit: number): num
   const command = KEY_COMMAND.exec(text.slice(at, at + 120));
   if (!command) return at;
   const open = at + command[0].length;
-  const close = text.indexOf("}", open);
-  if (close < 0 || close >= limit || close - open > MAX_KEY) return at;
+  const found = text.slice(open, open + MAX_KEY + 1).indexOf("}");
+  const close = found < 0 ? -1 : open + found;
+  if (close < 0 || close >= limit) return at;
   return close + 1;
 }
 

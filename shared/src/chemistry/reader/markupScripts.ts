@@ -62,7 +62,7 @@ function tagged(text: string, at: number, limit: number): ScriptMarkup | undefin
   if (kind !== "<sub>" && kind !== "<sup>") return undefined;
   const superscript = kind === "<sup>";
   const contentStart = at + 5;
-  const close = text.indexOf(superscript ? "</sup>" : "</sub>", contentStart);
+  const close = closingWithin(text, superscript ? "</sup>" : "</sub>", contentStart);
   if (close < 0 || close - contentStart > MAX_RAW_CONTENT || close + 6 > limit) return undefined;
   return scriptOf(text.slice(contentStart, close), superscript, close + 6);
 }
@@ -72,7 +72,7 @@ function templated(text: string, at: number, limit: number): ScriptMarkup | unde
   const kind = text.slice(at, at + 6);
   if (kind !== "{{sub|" && kind !== "{{sup|") return undefined;
   const contentStart = at + 6;
-  const close = text.indexOf("}}", contentStart);
+  const close = closingWithin(text, "}}", contentStart);
   if (close < 0 || close - contentStart > MAX_RAW_CONTENT || close + 2 > limit) return undefined;
   return scriptOf(text.slice(contentStart, close), kind === "{{sup|", close + 2);
 }
@@ -91,7 +91,7 @@ function textCommand(text: string, at: number, limit: number): ScriptMarkup | un
   const command = /^\\text(sub|super)script\{/.exec(text.slice(at, at + 18));
   if (!command) return undefined;
   const contentStart = at + command[0].length;
-  const close = text.indexOf("}", contentStart);
+  const close = closingWithin(text, "}", contentStart);
   if (close < 0 || close - contentStart > MAX_RAW_CONTENT || close + 1 > limit) return undefined;
   return scriptOf(text.slice(contentStart, close).replace(/--/g, "-"), command[1] === "super", close + 1);
 }
@@ -107,11 +107,20 @@ function role(text: string, at: number, limit: number): ScriptMarkup | undefined
   const kind = text.slice(open, open + 6);
   if (kind !== ":sub:`" && kind !== ":sup:`") return undefined;
   const contentStart = open + 6;
-  const close = text.indexOf("`", contentStart);
+  const close = closingWithin(text, "`", contentStart);
   if (close < 0 || close - contentStart > MAX_RAW_CONTENT || close + 1 > limit) return undefined;
   let end = close + 1;
   if (text.charCodeAt(end) === 0x5c && text.charCodeAt(end + 1) === 0x20 && end + 2 <= limit) end += 2;
   return scriptOf(text.slice(contentStart, close), kind === ":sup:`", end);
+}
+
+/**
+ * Where `closing` starts, looked for only as far as a script's content may reach from `from`, or
+ * -1: a long document full of unclosed tags is not searched to its end at every tag.
+ */
+function closingWithin(text: string, closing: string, from: number): number {
+  const found = text.slice(from, from + MAX_RAW_CONTENT + closing.length).indexOf(closing);
+  return found < 0 ? -1 : from + found;
 }
 
 /** The markup's content checked and decoded, or undefined when it is not a count or a charge. */
