@@ -30,6 +30,15 @@ const VALID = [
   "hydrogen carbonate",
   "acetic acid",
   "K4[Fe(CN)6]",
+  "H<sub>2</sub>O",
+  "SO<sub>4</sub><sup>2&minus;</sup>",
+  "SO{{sub|4}}{{sup|2−}}",
+  "SO~4~^2-^",
+  "NH\\ :sub:`4`\\ :sup:`+`",
+  "H\\textsubscript{2}O",
+  "NaH¹³CO3",
+  "^{13}CO_2",
+  "\\mathrm{H_2^{18}O}",
 ];
 const PIECES = [
   "(",
@@ -58,6 +67,22 @@ const PIECES = [
   "ion",
   "di",
   "Xe",
+  "<sub>",
+  "</sub>",
+  "<sup>",
+  "</sup>",
+  "&minus;",
+  "&#x2212;",
+  "{{sub|",
+  "{{sup|",
+  "}}",
+  "~",
+  ":sub:`",
+  "`",
+  "\\ ",
+  "\\textsuperscript{",
+  "¹³",
+  "_{(aq)}",
 ];
 
 const READING_CODES = new Set([
