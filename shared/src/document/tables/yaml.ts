@@ -23,14 +23,90 @@ const UNREADABLE: Finding = {
   message: "This YAML could not be read.",
 };
 
+/**
+ * How deep a YAML text may nest before it is refused unread. The `yaml` package recurses once per
+ * level and runs out of stack at about 900; after such an overflow the process can fail outright
+ * on its next large allocation, so the text is never handed over. Real data nests a few dozen deep.
+ */
+export const MAX_YAML_NESTING = 256;
+
+/** The problem reported for a text that nests deeper than `MAX_YAML_NESTING`. */
+const TOO_DEEP: Finding = {
+  range: { start: 0, end: 0 },
+  severity: "error",
+  code: "yaml-syntax",
+  message: `This YAML nests deeper than ${MAX_YAML_NESTING} levels; it was not read.`,
+};
+
 /** Reads a YAML stream (one or more documents) into `sink`; returns its syntax problems. */
 export function readYamlRecords(text: string, read: SpeciesReader, sink: RecordSink): readonly Finding[] {
-  const documents = parseYamlStream(text);
+  if (yamlNestingBound(text) > MAX_YAML_NESTING) return [TOO_DEEP];
+  const documents = parseNested(text);
   return documents ? readYamlStream(documents, text, read, sink) : [UNREADABLE];
 }
 
-/** The documents of `text` (undefined when the `yaml` package throws on it). */
+/**
+ * An upper bound on how deep the nodes of `text` nest, in one pass: block levels open only with
+ * more indentation than every level still open, or with indicators (`- `, `? `, `: `) at the
+ * start of a line's content; flow levels open with `[` or `{`. Quotes and comments are not
+ * skipped, so brackets inside them may only raise the bound.
+ */
+export function yamlNestingBound(text: string): number {
+  const indents: number[] = [];
+  let flow = 0;
+  let deepest = 0;
+  let index = 0;
+  while (index < text.length) {
+    let indent = 0;
+    while (text.charCodeAt(index + indent) === SPACE) indent++;
+    let position = index + indent;
+    let code = text.charCodeAt(position);
+    // Blank and comment lines close no levels.
+    const blank = code === LINE_FEED || code === CARRIAGE_RETURN || code === HASH || Number.isNaN(code);
+    let compact = 0;
+    if (!blank && flow === 0) {
+      while (indents.length > 0 && indents[indents.length - 1] >= indent) indents.pop();
+      indents.push(indent);
+      // "- - - x" and "? - x": each indicator followed by a space opens one more level.
+      while ((code === DASH || code === QUESTION || code === COLON) && text.charCodeAt(position + 1) === SPACE) {
+        compact++;
+        position += 2;
+        while (text.charCodeAt(position) === SPACE) position++;
+        code = text.charCodeAt(position);
+      }
+    }
+    let lineEnd = text.indexOf("\n", position);
+    if (lineEnd < 0) lineEnd = text.length;
+    let deepestFlow = flow;
+    for (let at = position; at < lineEnd; at++) {
+      const character = text.charCodeAt(at);
+      if (character === OPEN_BRACKET || character === OPEN_BRACE) deepestFlow = Math.max(deepestFlow, ++flow);
+      else if ((character === CLOSE_BRACKET || character === CLOSE_BRACE) && flow > 0) flow--;
+    }
+    deepest = Math.max(deepest, indents.length + compact + deepestFlow);
+    index = lineEnd + 1;
+  }
+  return deepest;
+}
+
+const SPACE = 0x20;
+const LINE_FEED = 0x0a;
+const CARRIAGE_RETURN = 0x0d;
+const DASH = 0x2d;
+const QUESTION = 0x3f;
+const HASH = 0x23;
+const COLON = 0x3a;
+const OPEN_BRACKET = 0x5b;
+const CLOSE_BRACKET = 0x5d;
+const OPEN_BRACE = 0x7b;
+const CLOSE_BRACE = 0x7d;
+
+/** The documents of `text` (undefined when the `yaml` package throws on it or it nests too deep). */
 export function parseYamlStream(text: string): YamlStream | undefined {
+  return yamlNestingBound(text) > MAX_YAML_NESTING ? undefined : parseNested(text);
+}
+
+function parseNested(text: string): YamlStream | undefined {
   try {
     const documents = parseAllDocuments(text, { prettyErrors: false, keepSourceTokens: false });
     return Array.isArray(documents) ? documents : [];
