@@ -171,8 +171,9 @@ describe("every element of the periodic table", () => {
     ["UF6", "U1 F6", "f-block-centre", "uranium"],
     ["PuF6", "Pu1 F6", "f-block-centre", "plutonium"],
     ["ThCl4", "Th1 Cl4", "f-block-centre", "thorium"],
-    ["CeCl3", "Ce1 Cl3", "f-block-centre", "cerium"],
-    ["GdCl3", "Gd1 Cl3", "f-block-centre", "gadolinium"],
+    // from memory: Cotton, Lanthanide and Actinide Chemistry (LnCl3 are ionic lattices of Ln3+)
+    ["CeCl3", "Ce1 Cl3", "ionic-solid", "Ce^3+"],
+    ["GdCl3", "Gd1 Cl3", "ionic-solid", "Gd^3+"],
     // from memory: Greenwood and Earnshaw, ThO2 and CeO2 have the ionic fluorite lattice
     ["ThO2", "Th1 O2", "ionic-solid", "Th^4+"],
     ["CeO2", "Ce1 O2", "ionic-solid", "Ce^4+"],

@@ -83,7 +83,8 @@ export function chargesBeside(symbol: string, anionKey: string, monatomic: boole
 }
 
 /**
- * d-block metals whose halides are ionic lattices in their usual charges up to 3+. Not zinc and
+ * d-block metals whose halides are ionic lattices in their usual charges up to 3+ (and the
+ * lanthanides, in their 3+ ion). Not zinc and
  * mercury (ZnCl2 and HgCl2 are linear molecules in the gas and strongly covalent solids), nor the
  * platinum metals and gold, whose halides are chains and molecules of square-planar units (PdCl2,
  * Au2Cl6).
@@ -94,6 +95,8 @@ function formsIonicHalides(symbol: string): boolean {
   // Cadmium's are the layer lattices that name a structure type (CdCl2, CdI2); silver's are rock salt.
   if (symbol === "Ag" || symbol === "Cd") return true;
   const element = elementBySymbol(symbol);
+  // The lanthanide trihalides are ionic lattices too (LaCl3, GdCl3).
+  if (element?.category === "lanthanide") return true;
   return element?.category === "transition-metal" && !COVALENT_D_HALIDES.has(symbol) && metalIonCharges(symbol).length > 0;
 }
 
