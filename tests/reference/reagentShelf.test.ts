@@ -46,7 +46,7 @@ const SALTS: readonly (readonly [formula: string, ions: string, name: string])[]
   ["FeCl2", "Fe^2+ ×1, Cl^- ×2", "iron(II) chloride"],
   ["FeCl3", "Fe^3+ ×1, Cl^- ×3", "iron(III) chloride"],
   ["CoCl2", "Co^2+ ×1, Cl^- ×2", "cobalt(II) chloride"],
-  ["NiCl2", "Ni^2+ ×1, Cl^- ×2", "nickel chloride"],
+  ["NiCl2", "Ni^2+ ×1, Cl^- ×2", "nickel(II) chloride"],
   ["MnCl2", "Mn^2+ ×1, Cl^- ×2", "manganese(II) chloride"],
   ["CrCl3", "Cr^3+ ×1, Cl^- ×3", "chromium(III) chloride"],
   ["CdCl2", "Cd^2+ ×1, Cl^- ×2", "cadmium chloride"],
@@ -189,5 +189,41 @@ describe("what is not a salt stays unsplit", () => {
     expect(ion.problem.message).not.toMatch(/is trigonal planar/);
     const salt = refused("Na2SiO3");
     expect(salt.problem.message).not.toContain("SiO3^2-: trigonal planar");
+  });
+});
+
+describe("molecular metal halides keep their shape and get their Stock names", () => {
+  // from memory: Greenwood & Earnshaw (gas-phase SnCl2 bent, SnCl4 tetrahedral, HgCl2 linear,
+  // calomel a molecular solid of linear Cl-Hg-Hg-Cl units)
+  it.each([
+    ["SnCl2", "tin(II) chloride", "bent"],
+    ["SnCl4", "tin(IV) chloride", "tetrahedral"],
+    ["PbCl2", "lead(II) chloride", "bent"],
+    ["HgCl2", "mercury(II) chloride", "linear"],
+    ["Hg2Cl2", "mercury(I) chloride", "linear"],
+    ["BiCl3", "bismuth(III) chloride", "trigonal pyramidal"],
+  ])("%s is %s, %s", (formula, name, shape) => {
+    const result = analyzeSpecies(formula);
+    expect(result.ok).toBe(true);
+    if (!result.ok) return;
+    expect(result.value.reading.name).toBe(name);
+    expect(result.value.centres.map((centre) => centre.molecularGeometry)).toContain(shape);
+  });
+
+  it.each(["Sn2Cl4", "Hg3Cl2"])("%s, not in lowest terms for a usual charge, gets no Stock name", (formula) => {
+    const result = analyzeSpecies(formula);
+    const reading = result.ok ? result.value.reading : result.reading;
+    expect(reading?.name ?? "").not.toMatch(/\((?:I|II|III|IV)\)/);
+  });
+});
+
+describe("lanthanide halides are salts", () => {
+  // from memory: Cotton, Lanthanide and Actinide Chemistry (LnCl3 are ionic lattices of Ln3+)
+  it.each([
+    ["LaCl3", "La^3+ ×1, Cl^- ×3"],
+    ["GdCl3", "Gd^3+ ×1, Cl^- ×3"],
+    ["CeCl3", "Ce^3+ ×1, Cl^- ×3"],
+  ])("%s is %s", (formula, ions) => {
+    expect(ionsOf(formula)).toBe(ions);
   });
 });

@@ -7,6 +7,7 @@
  */
 import { elementByName, elementBySymbol } from "../../elements";
 import type { ElementData, FormulaPart } from "../../types";
+import { metalIonCharges } from "../../analysis/metalIonCharges";
 import { NONMETALS } from "../nonmetals";
 import { anionRootByName, anionRootBySymbol } from "./anionRoots";
 import { joinPrefix, prefixFor, prefixReadings } from "./greekPrefixes";
@@ -89,12 +90,32 @@ export function binaryCovalentName(sequence: readonly FormulaPart[], charge: num
     const fits = first.count === lcm / usual && second.count === lcm / -anion.charge;
     return fits ? `${firstElement.name} ${anion.root}` : undefined;
   }
+  if (!NONMETALS.has(first.symbol) && second.symbol !== "H") return metalHalideName(firstElement, first.count, second.count, anion);
   // hydrides of nonmetals go by parent-hydride names (methane, silane), never "carbon tetrahydride"
   if (!NONMETALS.has(first.symbol) || second.symbol === "H") return undefined;
   const firstPrefix = first.count === 1 ? "" : prefixFor(first.count);
   const secondPrefix = prefixFor(second.count);
   if (firstPrefix === undefined || secondPrefix === undefined) return undefined;
   return `${firstPrefix}${firstElement.name} ${joinPrefix(secondPrefix, anion.root)}`;
+}
+
+/**
+ * "tin(II) chloride", "mercury(I) chloride", "bismuth(III) chloride": a metal's halide named by
+ * the charge its count implies, when that is one of the metal's usual charges (Hg2Cl2 holds the
+ * Hg2 2+ pair). Oxides and sulfides are left to the salt reader, which knows MnS2 is a disulfide.
+ */
+function metalHalideName(
+  metal: ElementData,
+  metalCount: number,
+  anionCount: number,
+  anion: { root: string; charge: number },
+): string | undefined {
+  if (anion.charge !== -1) return undefined;
+  const mercuryPair = metal.symbol === "Hg" && metalCount === 2 && anionCount === 2;
+  const charge = mercuryPair ? 1 : anionCount;
+  // One metal atom per formula: Sn2Cl4 is not how tin(II) chloride is written.
+  if (!mercuryPair && (metalCount !== 1 || !metalIonCharges(metal.symbol).includes(charge))) return undefined;
+  return `${metal.name}(${ROMAN_NUMERALS[charge - 1].toUpperCase()}) ${anion.root}`;
 }
 
 function readCationWord(word: string): NamedPart | undefined {
