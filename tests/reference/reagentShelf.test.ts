@@ -54,7 +54,8 @@ const SALTS: readonly (readonly [formula: string, ions: string, name: string])[]
 ];
 
 // from memory: Housecroft & Sharpe, Inorganic Chemistry (vanadyl and uranyl oxocations; tungstate,
-// metavanadate and heptamolybdate anions; charges of ammine, cyanido, chlorido and nitrosyl complexes)
+// metavanadate and heptamolybdate anions; charges and names of ammine, aqua, cyano, chloro,
+// oxalato and nitrosyl complexes)
 const OXOCATION_AND_COMPLEX_SALTS: readonly (readonly [formula: string, ions: string, name: string | undefined])[] = [
   ["VOSO4", "VO^2+ ×1, SO4^2- ×1", "vanadyl sulfate"],
   ["UO2(NO3)2", "UO2^2+ ×1, NO3^- ×2", "uranyl nitrate"],
@@ -63,13 +64,17 @@ const OXOCATION_AND_COMPLEX_SALTS: readonly (readonly [formula: string, ions: st
   ["(NH4)6Mo7O24", "NH4^+ ×6, Mo7O24^6- ×1", "ammonium heptamolybdate"],
   ["K3[Fe(CN)6]", "K^+ ×3, Fe(CN)6^3- ×1", "potassium hexacyanoferrate(III)"],
   ["K4[Fe(CN)6]", "K^+ ×4, Fe(CN)6^4- ×1", "potassium hexacyanoferrate(II)"],
-  ["[Cu(NH3)4]SO4", "Cu(NH3)4^2+ ×1, SO4^2- ×1", undefined],
-  ["[Co(NH3)6]Cl3", "Co(NH3)6^3+ ×1, Cl^- ×3", undefined],
-  ["[Co(NH3)5Cl]Cl2", "Co(NH3)5Cl^2+ ×1, Cl^- ×2", undefined],
-  ["[Ag(NH3)2]NO3", "Ag(NH3)2^+ ×1, NO3^- ×1", undefined],
-  ["K2[PtCl6]", "K^+ ×2, PtCl6^2- ×1", undefined],
-  ["K2[CuCl4]", "K^+ ×2, CuCl4^2- ×1", undefined],
+  ["[Cu(NH3)4]SO4", "Cu(NH3)4^2+ ×1, SO4^2- ×1", "tetraamminecopper(II) sulfate"],
+  ["[Co(NH3)6]Cl3", "Co(NH3)6^3+ ×1, Cl^- ×3", "hexaamminecobalt(III) chloride"],
+  ["[Co(NH3)5Cl]Cl2", "Co(NH3)5Cl^2+ ×1, Cl^- ×2", "pentaamminechlorocobalt(III) chloride"],
+  ["[Ag(NH3)2]NO3", "Ag(NH3)2^+ ×1, NO3^- ×1", "diamminesilver(I) nitrate"],
+  ["K2[PtCl6]", "K^+ ×2, PtCl6^2- ×1", "potassium hexachloroplatinate(IV)"],
+  ["K2[CuCl4]", "K^+ ×2, CuCl4^2- ×1", "potassium tetrachlorocuprate(II)"],
+  // nitroprusside is named two ways (nitrosyl as NO+ or NO), so no name is made for it
   ["Na2[Fe(CN)5NO]", "Na^+ ×2, Fe(CN)5NO^2- ×1", undefined],
+  ["[Cr(H2O)6]Cl3", "Cr(H2O)6^3+ ×1, Cl^- ×3", "hexaaquachromium(III) chloride"],
+  ["K3[Fe(C2O4)3]", "K^+ ×3, Fe(C2O4)3^3- ×1", "potassium trioxalatoferrate(III)"],
+  ["[Co(NH3)4Cl2]Cl", "Co(NH3)4Cl2^+ ×1, Cl^- ×1", "tetraamminedichlorocobalt(III) chloride"],
 ];
 
 describe("salts of the d-block metals are their ions with the usual charges", () => {

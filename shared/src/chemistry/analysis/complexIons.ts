@@ -37,10 +37,11 @@ const LIGAND_CHARGES: ReadonlyMap<string, number> = new Map([
 const BARE_LIGAND = /(Cl|Br|NO|CN|CO|F|I)(\d*)/y;
 const BRACKETED_LIGAND = /\(([A-Za-z0-9]+)\)(\d*)/y;
 
-/** A complex's metal and what its ligands add to the charge. */
+/** A complex's metal, its ligands as written, and what they add to the charge. */
 export interface ComplexIon {
   readonly metal: string;
   readonly ligandCharge: number;
+  readonly ligands: readonly { readonly formula: string; readonly count: number }[];
 }
 
 /** The metal and ligand charge of a bracket's body ("Cu(NH3)4"), or undefined when it is not a complex of known ligands. */
@@ -49,7 +50,7 @@ export function complexIon(body: string): ComplexIon | undefined {
   const metal = body.slice(0, symbolEnd);
   if (elementBySymbol(metal)?.category !== "transition-metal" || metalIonCharges(metal).length === 0) return undefined;
   let ligandCharge = 0;
-  let ligands = 0;
+  const ligands: { formula: string; count: number }[] = [];
   let i = symbolEnd;
   while (i < body.length) {
     const pattern = body[i] === "(" ? BRACKETED_LIGAND : BARE_LIGAND;
@@ -60,10 +61,10 @@ export function complexIon(body: string): ComplexIon | undefined {
     const count = match[2] === "" ? 1 : Number(match[2]);
     if (count === 0) return undefined;
     ligandCharge += charge * count;
-    ligands += count;
+    ligands.push({ formula: match[1], count });
     i = pattern.lastIndex;
   }
-  return ligands > 0 ? { metal, ligandCharge } : undefined;
+  return ligands.length > 0 ? { metal, ligandCharge, ligands } : undefined;
 }
 
 /** The charges the complex may carry with the given sign: the metal's usual charges plus the ligands'. */
@@ -71,4 +72,66 @@ export function complexCharges(complex: ComplexIon, sign: 1 | -1): readonly numb
   return metalIonCharges(complex.metal)
     .map((charge) => charge + complex.ligandCharge)
     .filter((charge) => Math.sign(charge) === sign);
+}
+
+// common practice: the ligand names of laboratory labels and older texts (as in hexacyanoferrate),
+// sorted alphabetically in a name; nitrosyl is left out, since its complexes are named two ways.
+const LIGAND_NAMES: ReadonlyMap<string, string> = new Map([
+  ["NH3", "ammine"],
+  ["H2O", "aqua"],
+  ["OH2", "aqua"],
+  ["CO", "carbonyl"],
+  ["F", "fluoro"],
+  ["Cl", "chloro"],
+  ["Br", "bromo"],
+  ["I", "iodo"],
+  ["CN", "cyano"],
+  ["OH", "hydroxo"],
+  ["NO2", "nitro"],
+  ["SCN", "thiocyanato"],
+  ["C2O4", "oxalato"],
+]);
+
+const COUNT_PREFIXES: readonly string[] = ["", "", "di", "tri", "tetra", "penta", "hexa"];
+
+/** Anion names of metals whose Latin root is used: ferrate, cuprate, argentate. */
+const ANION_ROOTS: ReadonlyMap<string, string> = new Map([
+  ["Fe", "ferrate"],
+  ["Cu", "cuprate"],
+  ["Ag", "argentate"],
+  ["Au", "aurate"],
+  ["Pt", "platinate"],
+  ["Co", "cobaltate"],
+  ["Ni", "nickelate"],
+  ["Cr", "chromate"],
+  ["Mn", "manganate"],
+  ["Zn", "zincate"],
+  ["Hg", "mercurate"],
+  ["Pd", "palladate"],
+]);
+
+const ROMAN: readonly string[] = ["0", "I", "II", "III", "IV", "V", "VI"];
+
+/**
+ * "tetraamminecopper(II)", "hexachloroplatinate(IV)": the name of the complex with this charge,
+ * or undefined when a ligand or the metal has no name here.
+ */
+export function complexName(complex: ComplexIon, charge: number): string | undefined {
+  const named: { readonly prefix: string; readonly name: string }[] = [];
+  for (const ligand of complex.ligands) {
+    const name = LIGAND_NAMES.get(ligand.formula);
+    const prefix = COUNT_PREFIXES[ligand.count];
+    if (name === undefined || prefix === undefined) return undefined;
+    named.push({ prefix, name });
+  }
+  // Alphabetical by ligand name, the count prefix aside.
+  const ligandText = named
+    .sort((a, b) => (a.name < b.name ? -1 : a.name > b.name ? 1 : 0))
+    .map((ligand) => ligand.prefix + ligand.name)
+    .join("");
+  const oxidationState = charge - complex.ligandCharge;
+  const numeral = ROMAN[oxidationState];
+  if (numeral === undefined || oxidationState < 1) return undefined;
+  const metalName = charge < 0 ? ANION_ROOTS.get(complex.metal) : elementBySymbol(complex.metal)?.name.toLowerCase();
+  return metalName === undefined ? undefined : `${ligandText}${metalName}(${numeral})`;
 }

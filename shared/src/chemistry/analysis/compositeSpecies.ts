@@ -11,6 +11,7 @@ import { metalIonCharges, takesStockNumeral } from "./metalIonCharges";
 import { partShapeText, partsListText } from "./partShapes";
 import { saltIons, type SaltIon } from "./saltIons";
 import { covalentCharacterNote } from "./networkSolids";
+import { complexIon, complexName } from "./complexIons";
 import { readFormulaSpan } from "../reader/readFormula";
 import { ANION_ROOTS } from "../reader/names/anionRoots";
 import { ION_NAMES } from "../reader/names/ionNames";
@@ -69,11 +70,17 @@ function saltName(ions: readonly SaltIon[]): string | undefined {
       k++;
       continue;
     }
-    const word = ion.monatomic ? monatomicIonName(ion) : ionNameFor(ion.formula);
+    const word = ion.monatomic ? monatomicIonName(ion) : (ionNameFor(ion.formula) ?? complexNameFor(ion));
     if (word === undefined) return undefined;
     words.push(word);
   }
   return words.join(" ");
+}
+
+/** "tetraamminecopper(II)" for the complex ion Cu(NH3)4^2+. */
+function complexNameFor(ion: SaltIon): string | undefined {
+  const complex = complexIon(ion.formula.slice(0, ion.formula.indexOf("^")));
+  return complex === undefined ? undefined : complexName(complex, ion.charge);
 }
 
 function symbolOf(ion: SaltIon): string {
