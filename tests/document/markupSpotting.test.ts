@@ -60,6 +60,7 @@ describe("sub- and superscripts in other markup", () => {
     ["|⟦carbon dioxide⟧ |⟦CO~2~⟧ |linear\n\nThe band at 2349 cm^-1^ of ⟦^13^CO~2~⟧ and ⟦F^-^⟧ in ⟦H~2~O⟧.", "plaintext"],
     ["Purge with ⟦N\\ :sub:`2`⟧; the ⟦SO\\ :sub:`4`\\ :sup:`2-`⟧ film and ⟦H\\ :sub:`2`\\ O⟧ go.", "plaintext"],
     ["⟦Ag⁺⟧ + ⟦Cl–⟧ → ⟦AgCl⟧, then ⟦CrO₄²−⟧ and “⟦SO4 2–⟧”; pages 41–44, the Cl–C–Cl angle.", "plaintext"],
+    ["Soft hyphens: ⟦sulfur tetra\u00adfluoride⟧ and ⟦tetra\u00adhydro\u00adfuran⟧, ⟦carbon di\u200boxide⟧.", "plaintext"],
     ["Not species: K<sub>a2</sub>, T<sub>d</sub>, AX<sub>4</sub>, sp<sup>3</sup>, M<sup>n+</sup>, ν~3~, C~3v~.", "markdown"],
   ])("%s", (marked, kind) => {
     check(marked, kind as DocumentKind);

@@ -15,6 +15,7 @@ import {
   mayStartName,
 } from "../chemistry/reader/names/nameWords";
 import { elementByName } from "../chemistry/elements";
+import { isInvisibleFormatting } from "../chemistry/reader/characters";
 import { NONMETALS } from "../chemistry/reader/nonmetals";
 import { occurrenceAt, type ScanSink, type SpeciesReader } from "./speciesReader";
 
@@ -442,7 +443,8 @@ function nameWordIn(text: string, start: number, end: number): NameWord | undefi
   let letters = 0;
   for (let index = wordStart; index < wordEnd; index++) {
     const code = text.charCodeAt(index);
-    if (!isNameCharacter(code)) return undefined;
+    // Word processors leave soft hyphens and zero-width spaces inside long words: "tetra\u00adfluoride".
+    if (!isNameCharacter(code) && !isInvisibleFormatting(code)) return undefined;
     if (isLetter(code)) letters++;
   }
   if (letters < 2) return undefined;
@@ -452,5 +454,7 @@ function nameWordIn(text: string, start: number, end: number): NameWord | undefi
     // Emphasis may close around a name; any other punctuation ends it.
     if (code !== 0x2a && code !== 0x5f) open = false;
   }
-  return { start: wordStart, end: wordEnd, lower: text.slice(wordStart, wordEnd).toLowerCase(), open };
+  const written = text.slice(wordStart, wordEnd);
+  const visible = /[\u00ad\u200b-\u200d\u2060\ufeff]/.test(written) ? written.replace(/[\u00ad\u200b-\u200d\u2060\ufeff]/g, "") : written;
+  return { start: wordStart, end: wordEnd, lower: visible.toLowerCase(), open };
 }
