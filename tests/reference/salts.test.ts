@@ -176,6 +176,31 @@ const SALTS: readonly (readonly [salt: string, ions: readonly IonRow[]])[] = [
       ["SO4^2-", 2, "[O-]S(=O)(=O)[O-]", "tetrahedral"],
     ],
   ],
+  // Double salts written with the metal first, as inventories and handbooks often do.
+  [
+    "Fe(NH4)2(SO4)2",
+    [
+      ["Fe^2+", 1, "[Fe+2]", MONATOMIC],
+      ["NH4^+", 2, "[NH4+]", "tetrahedral"],
+      ["SO4^2-", 2, "[O-]S(=O)(=O)[O-]", "tetrahedral"],
+    ],
+  ],
+  [
+    "FeNH4(SO4)2",
+    [
+      ["Fe^3+", 1, "[Fe+3]", MONATOMIC],
+      ["NH4^+", 1, "[NH4+]", "tetrahedral"],
+      ["SO4^2-", 2, "[O-]S(=O)(=O)[O-]", "tetrahedral"],
+    ],
+  ],
+  [
+    "MgNH4PO4",
+    [
+      ["Mg^2+", 1, "[Mg+2]", MONATOMIC],
+      ["NH4^+", 1, "[NH4+]", "tetrahedral"],
+      ["PO4^3-", 1, "[O-]P(=O)([O-])[O-]", "tetrahedral"],
+    ],
+  ],
   [
     "NaCl",
     [

@@ -136,10 +136,15 @@ export function saltIons(reading: SpeciesReading): readonly SaltIon[] | undefine
 
 function collectSplits(first: CationChoice, rest: readonly WrittenUnit[], found: SaltIon[][]): void {
   for (const anion of anionsOf(rest)) collect([first], anion, found);
-  // Double salts: a second metal before the anion, as in the alum KCr(SO4)2.
-  if (rest.length >= 2 && !rest[0].bracketed && metalIonCharges(rest[0].body).length > 0) {
-    const second: CationChoice = metalCation(rest[0], 1);
-    for (const anion of anionsOf(rest.slice(1))) if (!anion.monatomic) collect([first, second], anion, found);
+  // Double salts: a second metal or onium ion before the anion, as in the alum KCr(SO4)2 or
+  // Fe(NH4)2(SO4)2, the metal written first.
+  if (rest.length < 2) return;
+  const seconds: CationChoice[] = [];
+  if (!rest[0].bracketed && metalIonCharges(rest[0].body).length > 0) seconds.push(metalCation(rest[0], 1));
+  const onium = first.metal !== undefined ? oniumAt(rest, 0) : undefined;
+  if (onium) seconds.push(onium);
+  for (const second of seconds) {
+    for (const anion of anionsOf(rest.slice(second.width))) if (!anion.monatomic) collect([first, second], anion, found);
   }
 }
 
