@@ -162,3 +162,4 @@ export { chunkIndexAt, chunkedTextOf, editChunkedText, offsetOf, positionOf, sli
 export type { ChunkedText, LineAndCharacter, TextChunk } from "./document/chunkedText";
 export { createDocumentAnalyser } from "./document/incrementalAnalysis";
 export type { DocumentAnalyser, DocumentAnalysis } from "./document/incrementalAnalysis";
+export type { FindingPart } from "./document/findingPart";

@@ -10,6 +10,7 @@ import {
   createDocumentAnalyser,
   type DocumentAnalyser,
   type DocumentAnalysis,
+  type FindingPart,
   type SpeciesAtOffset,
   type SpeciesOccurrence,
 } from "../../../shared/src/index";
@@ -39,9 +40,10 @@ export interface AnalysedDocument {
   /**
    * The same findings a part at a time, worked out only as far as the caller reads: diagnostics
    * that show a capped number never build the rest of a document full of findings, and a caller
-   * may answer other requests between parts.
+   * may answer other requests between parts. Each part's ranges count from its `offset`: the
+   * caller moves into place only the findings it keeps.
    */
-  findingParts(): Iterable<readonly Finding[]>;
+  findingParts(): Iterable<FindingPart>;
   /** The findings of the part of the document around `start`..`end`. */
   findingsAround(start: number, end: number): readonly Finding[];
 }
@@ -166,12 +168,12 @@ export function analyseDocument(
     },
     *findingParts() {
       if (findings) {
-        yield findings;
+        yield { findings, offset: 0 };
         return;
       }
       const note = truncationNote(truncatedAt);
-      if (note.length > 0) yield note;
-      yield* analysis.findingParts();
+      if (note.length > 0) yield { findings: note, offset: 0 };
+      yield* analysis.findingPartsAt();
     },
     findingsAround: (start, end) => analysis.findingsAround(start, end),
   };

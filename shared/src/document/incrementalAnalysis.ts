@@ -16,6 +16,7 @@
 import { analysedTextOf, MAX_ANALYSED_LENGTH } from "./analysedText";
 import { analyzeDocument } from "./analyzeDocument";
 import { checkDocument } from "./checkDocument";
+import { placedParts, type FindingPart } from "./findingPart";
 import { findingsInParts } from "./findingsInParts";
 import { jsonListReader } from "./jsonParts";
 import { yamlListReader } from "./yamlParts";
@@ -44,6 +45,12 @@ export interface DocumentAnalysis {
    * the text has changed: the segments done are kept for the next version.
    */
   findingParts(): Iterable<readonly Finding[]>;
+  /**
+   * The parts of `findingParts`, each with its findings' ranges counted from `offset` rather than
+   * placed in the document: a caller that keeps few of many findings (diagnostics show a capped
+   * number) moves only those it keeps, with `moved(finding, offset)`.
+   */
+  findingPartsAt(): Iterable<FindingPart>;
   /** The findings of the segments that overlap `start`..`end` (what a request about that stretch needs). */
   findingsAround(start: number, end: number): readonly Finding[];
   /** The whole document's model (for a large table this reads every row: prefer the two below). */
@@ -119,6 +126,9 @@ function wholeAnalysis(
       }
       // Markdown and plain text parts follow one another through the text: sorting each sorts the whole.
       for (const part of findingsInParts(text, kind, { read })) yield sortedFindings([...part]);
+    },
+    *findingPartsAt() {
+      for (const findings of this.findingParts()) yield { findings, offset: 0 };
     },
     findingsAround: () => (findings ??= sortedFindings([...modelOf().problems, ...checkDocument(modelOf())])),
     model: modelOf,
@@ -248,12 +258,15 @@ function tableSegments(kind: "csv" | "tsv", read: SpeciesReader): (text: Chunked
         findings = all;
         return findings;
       },
-      *findingParts() {
+      findingParts() {
+        return placedParts(this.findingPartsAt());
+      },
+      *findingPartsAt() {
         if (findings) {
-          yield findings;
+          yield { findings, offset: 0 };
           return;
         }
-        for (const segment of segments) yield findingsOf(segment).map((finding) => moved(finding, segment.start));
+        for (const segment of segments) yield { findings: findingsOf(segment), offset: segment.start };
       },
       findingsAround: (from, to) =>
         segments
@@ -408,6 +421,9 @@ function listSegments(
       findings: () => version.findings(),
       *findingParts() {
         yield version.findings();
+      },
+      *findingPartsAt() {
+        yield { findings: version.findings(), offset: 0 };
       },
       findingsAround: (start, end) => version.findings().filter((finding) => finding.range.end >= start && finding.range.start <= end),
       model: () => plain().model(),

@@ -9,6 +9,7 @@
 import { distinctReactions } from "./analyzeDocument";
 import { checkDocument } from "./checkDocument";
 import { chunkIndexAt, sliceOf, type ChunkedText } from "./chunkedText";
+import { placedParts } from "./findingPart";
 import type { DocumentAnalysis } from "./incrementalAnalysis";
 import { markdownBlocks, markdownBlockStream, scanMarkdownBlock, type MarkdownBlock } from "./scanMarkdown";
 import { joinedModels, shiftedModel } from "./shiftedModel";
@@ -161,12 +162,15 @@ function analysisOf(list: BlockList, reader: BlockReader, readings: WeakMap<Mark
     kind: "markdown",
     binary: false,
     findings: allFindings,
-    *findingParts() {
+    findingParts() {
+      return placedParts(this.findingPartsAt());
+    },
+    *findingPartsAt() {
       if (findings) {
-        yield findings;
+        yield { findings, offset: 0 };
         return;
       }
-      for (let index = 0; hasBlock(list, index); index++) yield placedFindings(index);
+      for (let index = 0; hasBlock(list, index); index++) yield { findings: readingOf(index).findings, offset: starts[index] };
     },
     findingsAround: (start, end) =>
       farAhead(end) ? localFindings(list.text, start, end, read) : indexesAround(start, end).flatMap(placedFindings),

@@ -11,6 +11,7 @@ import {
   type DocumentDiagnosticReport,
 } from "vscode-languageserver";
 import type { TextDocument } from "vscode-languageserver-textdocument";
+import { moved, type FindingPart } from "../../../../shared/src/index";
 import type { Finding, FindingSeverity } from "../core";
 import { guarded } from "../guardedHandler";
 import type { LongWork } from "../quickRequests";
@@ -109,18 +110,18 @@ const SLICE_MS = 8;
  * of errors), letting other requests in every few milliseconds; undefined once `stop()` says so.
  */
 async function partsInSlices(
-  parts: Iterable<readonly Finding[]>,
+  parts: Iterable<FindingPart>,
   limit: number,
   stop: () => boolean,
   longWork: LongWork,
-): Promise<(readonly Finding[])[] | undefined> {
-  const taken: (readonly Finding[])[] = [];
+): Promise<FindingPart[] | undefined> {
+  const taken: FindingPart[] = [];
   let errors = 0;
   let sliceStart = performance.now();
   for (const part of parts) {
     taken.push(part);
-    if (errors >= limit && part.length > 0) break;
-    for (const finding of part) if (finding.severity === "error") errors++;
+    if (errors >= limit && part.findings.length > 0) break;
+    for (const finding of part.findings) if (finding.severity === "error") errors++;
     if (performance.now() - sliceStart < SLICE_MS) continue;
     await longWork.giveWay();
     if (stop()) return undefined;
@@ -135,33 +136,34 @@ const SEVERITY_RANK: Readonly<Record<FindingSeverity, number>> = { error: 0, war
  * Keeps the `limit` most serious findings (earlier first among equals), in document order, and
  * adds one finding that says how many were left out, at the first of them. A document full of
  * impossible species must not become a message of many megabytes sent on every pause in typing.
- * `parts` are the findings in document order, a part at a time: at most `limit` of each severity
- * are held, and once `limit` errors are in hand nothing later could be shown, so the rest of the
- * document is not worked out and the summary gives the count found so far as a lower bound.
+ * `parts` are the findings in document order, a part at a time, each counted from its offset:
+ * at most `limit` of each severity are held (and only those are moved into place), and once
+ * `limit` errors are in hand nothing later could be shown, so the rest of the document is not
+ * worked out and the summary gives the count found so far as a lower bound.
  */
-export function cappedFindings(parts: Iterable<readonly Finding[]>, limit: number): readonly Finding[] {
+export function cappedFindings(parts: Iterable<FindingPart>, limit: number): readonly Finding[] {
   const keptByRank: { finding: Finding; order: number }[][] = [[], [], [], []];
   const firstDropped: (Finding | undefined)[] = [];
   let dropped = 0;
   let order = 0;
   let stoppedEarly = false;
-  for (const part of parts) {
+  for (const { findings, offset } of parts) {
     if (keptByRank[0].length >= limit) {
       // Errors rank first and the earliest win: whatever comes later is left out whatever it is.
       // One more part says that there is more; the rest of the document is not worked out.
-      if (part.length === 0) continue;
-      dropped += part.length;
-      firstDropped[rankOf(part[0])] ??= part[0];
+      if (findings.length === 0) continue;
+      dropped += findings.length;
+      firstDropped[rankOf(findings[0])] ??= moved(findings[0], offset);
       stoppedEarly = true;
       break;
     }
-    for (const finding of part) {
+    for (const finding of findings) {
       const rank = rankOf(finding);
       const kept = keptByRank[rank];
-      if (kept.length < limit) kept.push({ finding, order: order++ });
+      if (kept.length < limit) kept.push({ finding: offset === 0 ? finding : moved(finding, offset), order: order++ });
       else {
         dropped++;
-        firstDropped[rank] ??= finding;
+        firstDropped[rank] ??= moved(finding, offset);
       }
     }
   }
