@@ -87,8 +87,7 @@ export function createFrameDecoder(): FrameDecoder {
       return { kind: "error", error: new Error("Message header without a usable Content-Length; skipped") };
     }
     drop(end + HEADER_END.length);
-    // Reads UTF-8 as Buffer#toString does (invalid bytes become U+FFFD, a byte-order mark stays),
-    // into one-byte strings when the text is ASCII, which join and parse fastest.
+    // Reads UTF-8 as Buffer#toString does: invalid bytes become U+FFFD, a byte-order mark stays.
     body = { remaining: length, pieces: [], decoder: new StringDecoder("utf8") };
     return "ok";
   };
