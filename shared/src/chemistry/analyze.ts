@@ -105,8 +105,12 @@ export function analyzeReading(reading: SpeciesReading): AnalysisResult {
     }
     return { ok: false, reading, problem: chosen.problem };
   }
-  const isomers = isomerNote(reading);
-  const named = isomers !== undefined || !nameFitsStructure(reading, chosen.structure.graph) ? withoutName(reading) : reading;
+  // Atoms bonded in the order written spell out one isomer, so no other needs mentioning.
+  const isomers = chosen.asWritten ? undefined : isomerNote(reading);
+  const named =
+    isomers !== undefined || !nameFitsStructure(reading, chosen.structure.graph, chosen.asWritten === true)
+      ? withoutName(reading)
+      : reading;
   return { ok: true, value: buildAnalysis(named, chosen.structure, chosen.centre, isomers === undefined ? [] : [isomers]) };
 }
 
@@ -129,10 +133,12 @@ function isomerNote(reading: SpeciesReading): string | undefined {
 
 /**
  * A name given by composition alone (the reader names HCOOCH3 after the one listed species with
- * its atoms, acetic acid) is kept only when the written structure is that species.
+ * its atoms, acetic acid; HNC after hydrogen cyanide) is kept only when the written structure is
+ * that species.
  */
-function nameFitsStructure(reading: SpeciesReading, graph: SpeciesAnalysis["graph"]): boolean {
-  if (reading.name === undefined || reading.notation === "name" || !looksCondensed(reading.writtenSequence)) return true;
+function nameFitsStructure(reading: SpeciesReading, graph: SpeciesAnalysis["graph"], asWritten: boolean): boolean {
+  if (reading.name === undefined || reading.notation === "name") return true;
+  if (!asWritten && !looksCondensed(reading.writtenSequence)) return true;
   const match = matchName(normalizeName(reading.name));
   if (match === undefined || match.formula === reading.formula) return true;
   const listed = match.smiles !== undefined ? analyzeSmiles(match.smiles) : analyzeSpecies(match.formula ?? "");

@@ -3,7 +3,13 @@
  * best formal charges; when none works, say why in the chemist's terms.
  */
 import { elementBySymbol } from "../elements";
-import { type CandidateSkeleton, candidateSkeletons, countChainFormingAtoms, expandComposition } from "../lewis/candidateSkeletons";
+import {
+  type CandidateSkeleton,
+  candidateSkeletons,
+  countChainFormingAtoms,
+  expandComposition,
+  isChainFormingAtom,
+} from "../lewis/candidateSkeletons";
 import {
   chooseLewisStructure,
   compareScores,
@@ -15,7 +21,13 @@ import type { Problem, SpeciesReading } from "../types";
 import { condensedSkeletons, looksCondensed } from "./condensedFormula";
 
 export type ChosenStructure =
-  | { readonly ok: true; readonly structure: LewisStructure; readonly centre: number | undefined }
+  | {
+      readonly ok: true;
+      readonly structure: LewisStructure;
+      readonly centre: number | undefined;
+      /** The atoms are bonded in the order written (HCNO is H-C-N-O), not as formal charges alone would have them. */
+      readonly asWritten?: boolean;
+    }
   | { readonly ok: false; readonly problem: Problem };
 
 /** Species this large are written as molecules, not as one centre and its neighbours. */
@@ -82,6 +94,9 @@ export function chooseSkeletonStructure(reading: SpeciesReading): ChosenStructur
     if (!best || compareSkeletons(ranked, best) < 0) best = ranked;
   }
 
+  const written = writtenChainStructure(reading, symbols, best);
+  if (written) return written;
+
   const chainAtoms = countChainFormingAtoms(symbols);
   if (best) {
     const outerTroubled = best.structure.graph.atoms.some((atom, index) => index !== best!.centre && Math.abs(atom.formalCharge) >= 2);
@@ -125,6 +140,37 @@ function chooseCondensedStructure(reading: SpeciesReading): ChosenStructure | un
     );
   }
   return { ok: true, structure: best.structure, centre: best.centre };
+}
+
+/**
+ * A formula spelled one atom at a time (HCNO, FNO, NSF, HOCl) names its atoms in bonded order,
+ * and a chemist reads it so even where another skeleton has smaller formal charges: HCNO is
+ * fulminic acid, H-C≡N⁺-O⁻, not isocyanic acid. Three readings are left to the formal charges:
+ * the centre written first with its ligands after it (NOCl is O=N-Cl, COS is O=C=S); an H or
+ * halogen in the middle of the chain (HClO is the oxyacid HOCl; CHBrClF is a Hill formula); and
+ * a chain that needs an atom charged beyond ±1, leaves an octet the best skeleton fills short, or
+ * costs more than one pair of opposite formal charges over it.
+ */
+function writtenChainStructure(
+  reading: SpeciesReading,
+  symbols: readonly string[],
+  bestStar: RankedSkeleton | undefined,
+): ChosenStructure | undefined {
+  const sequence = reading.writtenSequence;
+  if (symbols.length < 3 || sequence.length !== symbols.length) return undefined;
+  for (let k = 0; k < sequence.length; k++) if (sequence[k].count !== 1 || sequence[k].symbol !== symbols[k]) return undefined;
+  for (let k = 1; k < symbols.length - 1; k++) if (!isChainFormingAtom(symbols[k])) return undefined;
+  if (bestStar && symbols[bestStar.centre] === symbols[0]) return undefined;
+  const bonds: [number, number][] = [];
+  for (let k = 1; k < symbols.length; k++) bonds.push([k - 1, k]);
+  const outcome = chooseLewisStructure({ symbols, bonds }, reading.charge);
+  if (!outcome.ok) return undefined;
+  const { structure } = outcome;
+  const score = structure.score;
+  if (structure.graph.atoms.some((atom) => Math.abs(atom.formalCharge) > 1)) return undefined;
+  if (score.shellDeficit > (bestStar?.structure.score.shellDeficit ?? 0)) return undefined;
+  if (bestStar && score.sumAbsFormalCharge > bestStar.structure.score.sumAbsFormalCharge + 2) return undefined;
+  return { ok: true, structure, centre: 1, asWritten: true };
 }
 
 function countOxygenOxygenBonds(skeleton: CandidateSkeleton): number {

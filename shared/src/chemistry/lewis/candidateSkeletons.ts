@@ -123,8 +123,11 @@ function isBetterCentreThanHalogen(candidate: string, halogen: string): boolean 
 
 /** Atoms that normally need two or more bonds (C, N, O, S, ...): the ones that make chains. */
 export function countChainFormingAtoms(symbols: readonly string[]): number {
-  return symbols.filter((symbol) => {
-    const traits = atomTraits(symbol);
-    return !traits.isHydrogen && !traits.isHalogen && traits.element.category !== "noble-gas";
-  }).length;
+  return symbols.filter(isChainFormingAtom).length;
+}
+
+/** An atom that normally needs two or more bonds: not hydrogen, a halogen or a noble gas. */
+export function isChainFormingAtom(symbol: string): boolean {
+  const traits = atomTraits(symbol);
+  return !traits.isHydrogen && !traits.isHalogen && traits.element.category !== "noble-gas";
 }
