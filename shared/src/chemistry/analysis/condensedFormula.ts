@@ -71,6 +71,7 @@ export function looksCondensed(sequence: readonly { symbol: string; count?: numb
     if (seen.has(part.symbol)) return true;
     if (seen.has("C") && isOxoGroupAt(sequence, k)) return true;
     if (k + 2 < sequence.length && isCarbonGroupAt(sequence, k)) return true;
+    if (isNitrogenChainAt(sequence, k)) return true;
     seen.add(part.symbol);
   }
   return false;
@@ -86,6 +87,25 @@ function isOxoGroupAt(sequence: readonly { symbol: string; count?: number }[], i
     oxygen?.symbol === "O" &&
     (host.symbol === "N" ? oxygen.count === 2 : (oxygen.count ?? 1) >= 2)
   );
+}
+
+/**
+ * CHn then N2 or N3: the nitrogens are a chain on that carbon, as the hydrogens written after it
+ * are on it (CH2N2 is diazomethane, H2C=N=N; CH3N3 is methyl azide).
+ */
+function isNitrogenChainAt(sequence: readonly { symbol: string; count?: number }[], index: number): boolean {
+  const [carbon, hydrogen, nitrogen] = [sequence[index], sequence[index + 1], sequence[index + 2]];
+  return (
+    carbon.symbol === "C" &&
+    (carbon.count ?? 1) === 1 &&
+    hydrogen?.symbol === "H" &&
+    nitrogen?.symbol === "N" &&
+    isNitrogenChainCount(nitrogen.count ?? 1)
+  );
+}
+
+function isNitrogenChainCount(count: number): boolean {
+  return count === 2 || count === 3;
 }
 
 /** CnH2n+1 (n >= 2) or C6H5: an alkyl or phenyl group written as one block. */
@@ -218,6 +238,16 @@ function parseCondensed(text: string): ParsedSequence | undefined {
           return undefined;
         }
         pushUnit(kind === "phenyl" ? { symbol: "C", hydrogens: 0, branches: [], phenyl: true } : alkylUnit(count));
+        continue;
+      }
+      // N2 or N3 after a carbon group: a chain of nitrogens on it (diazo, azide).
+      if (
+        symbol === "N" &&
+        isNitrogenChainCount(count) &&
+        previous?.symbol === "C" &&
+        (previous.hydrogens > 0 || previous.phenyl === true || previous.branches.length > 0)
+      ) {
+        for (let k = 0; k < count; k++) pushUnit({ symbol, hydrogens: 0, branches: [] });
         continue;
       }
       // Any other count hides its own connectivity; leave such formulas to the molecular-formula path.
