@@ -196,6 +196,16 @@ describe("lonepair analyze (text)", () => {
     expect(run.stdout).not.toContain("\u001b[");
   });
 
+  it.each([
+    // from memory: any general chemistry text (sulfate: S +6, O -2; sulfur tetrafluoride: S +4)
+    ["SO4^2-", "S +6; O -2"],
+    ["SF4", "S +4; F -1"],
+  ])("gives %s its oxidation states, as the hover card words them", (species, states) => {
+    const run = runCli("analyze", species);
+    expect(run.status).toBe(0);
+    expect(run.stdout).toMatch(new RegExp(`\\n  Oxidation states +${states.replace(/\+/g, "\\+")}\\n`));
+  });
+
   it("prints the problem for a species it cannot analyse", () => {
     const run = runCli("analyze", "CH5");
     expect(run.status).toBe(1);

@@ -146,6 +146,10 @@ describe("per-atom splits and resonance", () => {
     // from memory: Housecroft & Sharpe, Inorganic Chemistry, nitrogen chapter (azide is the symmetric
     // [N=N=N]⁻): terminal N -1, central N +1, average -1/3
     ["N3-", "N 1× +1, 2× -1 (average -1/3)"],
+    // from memory: IUPAC Recommendations 2016 on oxidation state (bonds to the more electronegative
+    // atom, lone pairs stay put): diazomethane H2C=N⁺=N⁻ gives C 0 and both N -1, its other form
+    // H2C⁻-N⁺≡N keeps a lone pair on C (C -2, both N 0), so no one average holds for every form
+    ["CH2N2", "C 0 in the drawn resonance form, -2 in another; H +1; N 2× -1 in the drawn resonance form, 2× 0 in another"],
     // from memory: Greenwood & Earnshaw, carbon chapter (thiocyanate S -2, C +4, N -3; cyanate O -2, C +4, N -3):
     // carbon is the least electronegative atom, so every form gives the same split
     ["SCN-", "S -2; C +4; N -3"],

@@ -7,6 +7,7 @@ import type { AngleExpectation, AnalysisResult, CentreAnalysis, MeasuredAngle, S
 import { lewisJson } from "./analysisJson";
 import { NETWORK_SOLID_NOUN, compositeKind, distinctAnalysedParts, innerParts, latticeSiteLabel, partLabel } from "./compositeParts";
 import { isotopeNote, stateNote } from "./notationNotes";
+import { oxidationStatesLine } from "../chemistry/redox/oxidationStates";
 import { measuredFundamentalsOf, realPointGroupOf, vibrationsOf } from "../chemistry/vibrations/speciesVibrations";
 import { bandsLine, coincidenceLine, countedInNote, measuredLine, modesLine, notPredictedLine, stretchingLine } from "./vibrationText";
 
@@ -105,6 +106,8 @@ function successLines(input: string, analysis: SpeciesAnalysis, style: CardStyle
   if (isotopes) lines.push(row(style, "Isotope labels", `${isotopes} (same Lewis structure and shape)`));
   lines.push(row(style, "Valence electrons", String(analysis.valenceElectrons)));
   lines.push(...lewisLines(analysis, style));
+  const states = oxidationStatesLine(reading, { ok: true, value: analysis });
+  if (states) lines.push(row(style, "Oxidation states", states));
   // Measured angles belong to the species; list them once, under the first centre.
   analysis.centres.forEach((centre, position) => lines.push(...centreLines(centre, position === 0 ? analysis.measuredAngles : [], style)));
   if (analysis.centres.length === 0) lines.push(row(style, "Centres", "none (no atom has two or more neighbours)"));

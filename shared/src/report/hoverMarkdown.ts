@@ -3,7 +3,7 @@
  * clients that only show plain text, as the same card without markup or images.
  * Pure: takes the core's plain data, returns a string; no editor or protocol types.
  */
-import { oxidationStatesOf, oxidationStatesText } from "../chemistry/redox/oxidationStates";
+import { oxidationStatesLine } from "../chemistry/redox/oxidationStates";
 import type {
   AnalysisResult,
   AngleExpectation,
@@ -102,8 +102,8 @@ export function hoverMarkdown(analysis: SpeciesAnalysis, options: HoverMarkdownO
   if (pictures) lines.push(pictures, "");
   lines.push(electronLine(analysis));
   lines.push("");
-  const states = oxidationStatesOf(analysis.reading, { ok: true, value: analysis }, { otherForms: true });
-  if (states) lines.push(`Oxidation states: ${markup.text(oxidationStatesText(states))}`, "");
+  const states = oxidationStatesLine(analysis.reading, { ok: true, value: analysis });
+  if (states) lines.push(`Oxidation states: ${markup.text(states)}`, "");
   const measured = measuredLines(analysis.measuredAngles.slice(0, MAX_LISTED), options.angleDecimals, markup);
   const blocks = centreBlocks(analysis.centres, options, markup);
   // With one centre the measured angles belong to its block; with several they get their own.
@@ -162,8 +162,8 @@ function compositeMarkdown(text: string, result: Extract<AnalysisResult, { ok: f
     for (const inner of innerParts(part).slice(0, MAX_LISTED)) lines.push(partBullet(inner, "  - ", markup));
   }
   lines.push("", markup.text(result.problem.message), "");
-  const states = result.reading && oxidationStatesOf(result.reading, result, { otherForms: true });
-  if (states) lines.push(`Oxidation states: ${markup.text(oxidationStatesText(states))}`, "");
+  const states = result.reading && oxidationStatesLine(result.reading, result);
+  if (states) lines.push(`Oxidation states: ${markup.text(states)}`, "");
   for (const analysis of distinctAnalysedParts(parts).slice(0, MAX_LISTED)) {
     const centres = centreBlocks(analysis.centres, { ...options, maxCentreGroups: 2 }, markup);
     if (centres.length === 0) continue;

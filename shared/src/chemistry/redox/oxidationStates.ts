@@ -313,6 +313,15 @@ export function formatOxidationState(numerator: number, denominator = 1): string
  * "S 1× +5, 1× -1 (average +2); O -2"; where resonance forms split an element differently,
  * "N 1× +2, 1× 0 in the drawn resonance form, 1× +3, 1× -1 in another (average +1 in every form)".
  */
+/**
+ * The oxidation states every card shows for a species (the other resonance forms' splits
+ * included), as one line of text; undefined when they are not known.
+ */
+export function oxidationStatesLine(reading: SpeciesReading, analysis: AnalysisResult): string | undefined {
+  const states = oxidationStatesOf(reading, analysis, { otherForms: true });
+  return states ? oxidationStatesText(states) : undefined;
+}
+
 export function oxidationStatesText(states: OxidationStates): string {
   return states.elements
     .map((element) => {
@@ -324,13 +333,22 @@ export function oxidationStatesText(states: OxidationStates): string {
         const more = element.otherForms.length - shown.length;
         const others = shown.join("; ") + (more > 0 ? `; ${more} more` : "");
         const another = element.otherForms.length === 1 ? "another" : "others";
-        return `${element.symbol} ${splitText(element.states)} in the drawn resonance form, ${others} in ${another} (average ${average} in every form)`;
+        const drawn = `${element.symbol} ${splitText(element.states)} in the drawn resonance form, ${others} in ${another}`;
+        // A lone pair that moves between unlike atoms (H2C=N⁺=N⁻, H2C⁻-N⁺≡N) changes the
+        // element's total too: then there is no one average to give.
+        const total = sumOf(element.states);
+        const sameTotal = element.otherForms.every((states) => sumOf(states) === total);
+        return sameTotal ? `${drawn} (average ${average} in every form)` : drawn;
       }
       if (distinct.length === 1) return `${element.symbol} ${formatOxidationState(distinct[0])}`;
       if (!element.split) return `${element.symbol} ${average} (average; no structure to say which atom has which)`;
       return `${element.symbol} ${splitText(element.states)} (average ${average})`;
     })
     .join("; ");
+}
+
+function sumOf(states: readonly number[]): number {
+  return states.reduce((total, state) => total + state, 0);
 }
 
 /** Other forms' splits written out on a card; the rest are counted. */
