@@ -93,6 +93,21 @@ describe("table", () => {
     expect(run.stderr).toMatch(/Model prediction, not measured data/);
   });
 
+  it("says two-atom species are linear, and checking the table it wrote finds nothing", () => {
+    const run = runCli(["table", "--format", "csv", "N2", "HCl", "NO+"]);
+    expect(run.status).toBe(0);
+    // source: csv-parse, an independent CSV reader
+    const rows: string[][] = parseCsv(run.stdout);
+    // common practice: two atoms always lie on a line
+    expect(rows.slice(1).map((row) => row[5])).toEqual(["linear (two atoms)", "linear (two atoms)", "linear (two atoms)"]);
+    const folder = mkdtempSync(join(tmpdir(), "lonepair-two-atoms-"));
+    const file = join(folder, "two-atoms.csv");
+    writeFileSync(file, run.stdout);
+    const check = runCli(["check", file]);
+    expect(check.stdout).toContain("No findings");
+    expect(check.status).toBe(0);
+  });
+
   it.each([
     [["CH5"], 1, "nothing could be analysed"],
     [["--format", "html", "SF4"], 2, "unknown format"],

@@ -3,7 +3,7 @@
  * Pure: the caller decides which species and in which order; duplicates are dropped here.
  */
 import type { AnalysisResult, CentreAnalysis, LatticeSite, SpeciesAnalysis, SpeciesPart, SpeciesReading } from "../chemistry/types";
-import { partShapeText } from "../chemistry/analysis/partShapes";
+import { partShapeText, resultShapeText } from "../chemistry/analysis/partShapes";
 import { analyzeOccurrenceSafely } from "../document/speciesAt";
 import type { SpeciesOccurrence } from "../document/types";
 import { NETWORK_SOLID_NOUN, compositeKind, leafParts } from "./compositeParts";
@@ -147,6 +147,8 @@ function cellText(entry: SummaryEntry, column: SummaryColumn, decimals: number):
     case "electronGeometry":
       return perCentre(analysis.centres, (centre) => centre.electronGeometry);
     case "molecularGeometry":
+      // Two atoms and no centre: the one shape there is, worded as for a salt's two-atom part.
+      if (analysis.centres.length === 0 && analysis.graph.atoms.length === 2) return resultShapeText({ ok: true, value: analysis });
       return perCentre(analysis.centres, (centre) => centre.molecularGeometry);
     case "idealAngles":
       return perCentre(analysis.centres, (centre) => centre.idealAngles.map((angle) => formatAngle(angle, decimals)).join(", "));
