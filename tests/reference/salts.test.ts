@@ -201,6 +201,40 @@ const SALTS: readonly (readonly [salt: string, ions: readonly IonRow[]])[] = [
       ["PO4^3-", 1, "[O-]P(=O)([O-])[O-]", "tetrahedral"],
     ],
   ],
+  // Salts of two anions: basic carbonates, apatites, oxide halides (from memory: Greenwood &
+  // Earnshaw, Chemistry of the Elements; Wells, Structural Inorganic Chemistry).
+  [
+    "Cu2(OH)2CO3",
+    [
+      ["Cu^2+", 2, "[Cu+2]", MONATOMIC],
+      ["OH^-", 2, "[OH-]", "linear"],
+      ["CO3^2-", 1, "[O-]C(=O)[O-]", "trigonal planar"],
+    ],
+  ],
+  [
+    "Ca5(PO4)3OH",
+    [
+      ["Ca^2+", 5, "[Ca+2]", MONATOMIC],
+      ["PO4^3-", 3, "[O-]P(=O)([O-])[O-]", "tetrahedral"],
+      ["OH^-", 1, "[OH-]", "linear"],
+    ],
+  ],
+  [
+    "Ca5(PO4)3F",
+    [
+      ["Ca^2+", 5, "[Ca+2]", MONATOMIC],
+      ["PO4^3-", 3, "[O-]P(=O)([O-])[O-]", "tetrahedral"],
+      ["F^-", 1, "[F-]", MONATOMIC],
+    ],
+  ],
+  [
+    "FeOCl",
+    [
+      ["Fe^3+", 1, "[Fe+3]", MONATOMIC],
+      ["O^2-", 1, "[O-2]", MONATOMIC],
+      ["Cl^-", 1, "[Cl-]", MONATOMIC],
+    ],
+  ],
   [
     "NaCl",
     [
@@ -266,7 +300,7 @@ describe("a salt is its ions", () => {
       // A row naming an atom ("C trigonal planar") is about that centre of a several-centre ion.
       if (shape.startsWith("C ")) expect(shapeOfPart(part).split(", "), `${formula} in ${salt}`).toContain(shape);
       else expect(shapeOfPart(part), `${formula} in ${salt}`).toBe(shape);
-      expect(part.role).toBe(index === ions.length - 1 ? "anion" : "cation");
+      expect(part.role).toBe(formula.endsWith("-") ? "anion" : "cation");
     }
     expect(result.problem.message).toMatch(/ionic compound/);
     const transitionMetalIon = ions.find(([, , , shape]) => shape === TRANSITION_METAL);
@@ -310,6 +344,9 @@ describe("formulas that are not plainly salts are not forced into ions", () => {
     ["TiCl4", "transition-metal-centre", "a molecular transition-metal halide"],
     ["[Fe(CN)6]4-", "transition-metal-centre", "a complex ion, not a salt"],
     ["Mn2O7", "transition-metal-centre", "manganese(VII) oxide is a molecular liquid, O3Mn-O-MnO3"],
+    ["VOCl3", "transition-metal-centre", "vanadium oxytrichloride is a molecular liquid"],
+    ["CrO2Cl2", "transition-metal-centre", "chromyl chloride is a molecular liquid"],
+    ["SOCl2", "ok", "thionyl chloride: sulfur is not a metal cation"],
     ["VCl4", "transition-metal-centre", "vanadium(IV) chloride is a tetrahedral molecular liquid"],
     ["SnCl4", "ok", "tin(IV) chloride is a tetrahedral molecular liquid"],
     ["HgCl2", "ok", "mercury(II) chloride is a linear molecule"],

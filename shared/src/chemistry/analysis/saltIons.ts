@@ -122,6 +122,8 @@ export function saltIons(reading: SpeciesReading): readonly SaltIon[] | undefine
   const found: SaltIon[][] = [];
   // Cation first (NaCl, (NH4)2SO4), or, for carboxylates, last (CH3COONa, HCOONH4).
   for (const cation of leadingCations(units)) collectSplits(cation, units.slice(cation.width), found);
+  // Salts of two anions (basic carbonates, apatites, oxide halides) only where no one anion fits.
+  if (found.length === 0) for (const cation of leadingCations(units)) collectTwoAnions(cation, units.slice(cation.width), found);
   for (const cation of trailingCations(units)) {
     const rest = units.slice(0, units.length - cation.width);
     const anion = wholeAnion(rest);
@@ -145,6 +147,50 @@ function collectSplits(first: CationChoice, rest: readonly WrittenUnit[], found:
   if (onium) seconds.push(onium);
   for (const second of seconds) {
     for (const anion of anionsOf(rest.slice(second.width))) if (!anion.monatomic) collect([first, second], anion, found);
+  }
+}
+
+/**
+ * One cation with two anions, the first a bracketed group or a single element: Cu2(OH)2CO3,
+ * Ca5(PO4)3OH, Pb(OH)Cl, BiOCl. The metal takes only a charge it takes beside both anions, so
+ * molecular oxide halides (VOCl3, CrO2Cl2) are not split.
+ */
+function collectTwoAnions(cation: CationChoice, rest: readonly WrittenUnit[], found: SaltIon[][]): void {
+  if (rest.length < 2) return;
+  const head = rest[0];
+  const key = compositionKey(head.composition, 0);
+  const firsts: AnionChoice[] = [];
+  if (head.bracketed && !head.square) {
+    const charges = ions().anions.get(key);
+    if (charges) firsts.push({ body: head.body, key, count: head.count, charges, monatomic: false });
+  } else if (!head.bracketed) {
+    const charge = MONATOMIC_ANION_CHARGE.get(head.body);
+    if (charge !== undefined) firsts.push({ body: head.body, key: head.body, count: head.count, charges: [charge], monatomic: true });
+  }
+  for (const first of firsts) {
+    for (const second of anionsOf(rest.slice(1))) {
+      if (second.key === first.key) continue;
+      const anions = [first, second];
+      if (!anions.every((anion) => ionicWith(cation, anion))) continue;
+      const charges =
+        cation.metal === undefined
+          ? cation.charges
+          : anions
+              .map((anion) => chargesBeside(cation.metal!, anion.key, anion.monatomic))
+              .reduce((kept, beside) => kept.filter((charge) => beside.includes(charge)));
+      for (const charge of charges) {
+        for (const firstCharge of first.charges) {
+          for (const secondCharge of second.charges) {
+            if (charge * cation.count + firstCharge * first.count + secondCharge * second.count !== 0) continue;
+            found.push([
+              ion("cation", cation.count, cation.body, charge, cation.monatomic),
+              ion("anion", first.count, first.body, firstCharge, first.monatomic),
+              ion("anion", second.count, second.body, secondCharge, second.monatomic),
+            ]);
+          }
+        }
+      }
+    }
   }
 }
 
