@@ -192,6 +192,22 @@ describe("formula-shaped text that is not a species", () => {
   });
 });
 
+describe("plain text read a paragraph at a time", () => {
+  // common practice: a blank line ends a paragraph, and inline markup (code spans, math) with it;
+  // a comment runs until its close, however many paragraphs it hides; run ids are numbered from 1
+  const filler = "Notes on the bench follow here. ".repeat(80);
+  it.each([
+    ["Runs N1, N2 (north drain) and P1.\n\nThe N2 extraction ran late.\n\n⟦SF6⟧ was fine."],
+    [`Runs N1, N2.\n\n${filler}\n\nPurge with ⟦N2⟧.`],
+    ["⟦SF4⟧ first.\n\n<!-- draft, not checked:\n\nCH5 and Sf4 here.\n\n-->\n⟦NF3⟧ after."],
+    ["⟦SF4⟧ first.\r\n\r\n<!-- left open\r\n\r\nCH5 here.\r\n"],
+    ["A stray ` tick here.\n\n⟦XeF4⟧ is square planar; `code` too."],
+    ["An open $ sign costs $5\n\nand ⟦H2O⟧ is $2 a litre."],
+  ])("%s", (marked) => {
+    check(marked, "plaintext");
+  });
+});
+
 describe("data columns", () => {
   // common practice: compound libraries and cabinet lists keep a SMILES column and leave cells
   // empty with a dash or "n/a"

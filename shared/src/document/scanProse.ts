@@ -52,6 +52,21 @@ interface ProseScan {
   readonly seriesMemo: SeriesMemo;
   /** Unmarked code spans already tried as SMILES: the occurrence at offset 0, or null. */
   readonly smilesMemo: Map<string, SpeciesOccurrence | null>;
+  /** What the stretch takes from the text around it and hands on, when the caller keeps it. */
+  readonly carry?: ProseCarry;
+}
+
+/**
+ * The little a stretch of prose reads from the stretches around it, for a caller that reads a
+ * document a paragraph at a time: an HTML comment left open goes on into the next paragraph, and
+ * ids numbered 1 in nearby paragraphs make a lone "N2" a sample id. The scan sets `commentOpen` as
+ * it leaves.
+ */
+export interface ProseCarry {
+  /** An HTML comment opened before the stretch is still open where it starts (and, after the scan, where it ends). */
+  commentOpen: boolean;
+  /** Whether "X1" stands alone in a stretch near this one, for the symbol X: then "X2" here is an id too. */
+  readonly seriesNearby: (symbol: string) => boolean;
 }
 
 /** Scans `text[start, end)` and adds what it finds to `sink`, with offsets into `text`. */
@@ -63,7 +78,15 @@ export function scanProse(text: string, start: number, end: number, sink: ScanSi
  * `scanProse` that pauses whenever `sink` holds at least `pauseAt` items, yielding the offset it
  * goes on from: whatever it adds to `sink` later starts there or after.
  */
-export function* proseSteps(text: string, start: number, end: number, sink: ScanSink, read: SpeciesReader, pauseAt: number): ScanSteps {
+export function* proseSteps(
+  text: string,
+  start: number,
+  end: number,
+  sink: ScanSink,
+  read: SpeciesReader,
+  pauseAt: number,
+  carry?: ProseCarry,
+): ScanSteps {
   const scan: ProseScan = {
     text,
     end,
@@ -74,9 +97,10 @@ export function* proseSteps(text: string, start: number, end: number, sink: Scan
     resumeAt: start,
     seriesMemo: new Map(),
     smilesMemo: new Map(),
+    carry,
   };
   if (sink.reactions) sink.reactions.push(...equationsInProse(text, start, end, read));
-  let index = start;
+  let index = carry?.commentOpen ? commentEnd(scan, start) : start;
   while (index < end) {
     if (sink.occurrences.length + sink.unreadable.length >= pauseAt) yield index;
     const code = text.charCodeAt(index);
@@ -105,9 +129,7 @@ export function* proseSteps(text: string, start: number, end: number, sink: Scan
       }
     }
     if (code === 0x3c && text.startsWith("<!--", index)) {
-      // An unclosed comment hides the rest of the text.
-      const close = text.indexOf("-->", index + 4);
-      index = close < 0 || close >= end ? end : close + 3;
+      index = commentEnd(scan, index + 4);
       continue;
     }
     let chunkEnd = index + 1;
@@ -130,6 +152,17 @@ export function* proseSteps(text: string, start: number, end: number, sink: Scan
     index = chunkEnd;
     if (scan.resumeAt > index) index = scan.resumeAt;
   }
+}
+
+/**
+ * Where scanning goes on after a comment open at `from`: past its "-->", or the stretch's end (an
+ * unclosed comment hides the rest of the stretch, and of the paragraphs after it when carried).
+ */
+function commentEnd(scan: ProseScan, from: number): number {
+  const close = scan.text.indexOf("-->", from);
+  const closed = close >= 0 && close < scan.end;
+  if (scan.carry) scan.carry.commentOpen = !closed;
+  return closed ? close + 3 : scan.end;
 }
 
 function isSpaceCode(code: number): boolean {
@@ -463,7 +496,7 @@ function formulaToken(scan: ProseScan, start: number, end: number, massDigits = 
   }
   if (isPartOfCode(text, bodyStart, tokenEnd)) return next;
   if (isGroupFragment(text, bodyStart, tokenEnd, body) || isAlloyDesignation(shape.symbols)) return next;
-  if (shape.hasCount && !shape.hasCharge && isSeriesId(text, bodyStart, shape.symbols, scan.seriesMemo)) return next;
+  if (shape.hasCount && !shape.hasCharge && isSeriesToken(scan, bodyStart, shape.symbols)) return next;
   if (needsCalmContext(body, shape) && isWordContext(text, bodyStart, tokenEnd)) return next;
   // A state symbol belongs to the mention ("Ag+(aq)"): it is reported whole or not at all.
   const stateLength = stateSymbolAt(text, tokenEnd, end);
@@ -499,6 +532,12 @@ function formulaToken(scan: ProseScan, start: number, end: number, massDigits = 
     if (suggestion && isSafeSpellingFix(token, suggestion)) scan.sink.unreadable.push(unreadableAt(token, bodyStart, result));
   }
   return next;
+}
+
+/** A one-element token with a count in a series of ids nearby: in its own stretch, or in one near it. */
+function isSeriesToken(scan: ProseScan, start: number, symbols: readonly string[]): boolean {
+  if (isSeriesId(scan.text, start, symbols, scan.seriesMemo)) return true;
+  return symbols.length === 1 && scan.carry !== undefined && scan.carry.seriesNearby(symbols[0]);
 }
 
 /** Whether `text[start, end)` reads as one species, with or without the sentence's brackets around it. */
