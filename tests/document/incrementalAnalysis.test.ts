@@ -1,7 +1,7 @@
 // An edited document analysed segment by segment, reusing what each edit left alone, gives the
 // findings and the species of a from-scratch analysis of the same text (the core's own
-// analyzeDocument + checkDocument are the reference), after thousands of random edits to tables
-// and markdown notebooks.
+// analyzeDocument + checkDocument are the reference), after thousands of random edits to tables,
+// markdown notebooks and plain-text logs.
 import { describe, expect, it } from "vitest";
 import {
   analyzeDocument,
@@ -120,6 +120,43 @@ function jsonDocument(lines: readonly string[]): string {
     "",
   ].join("\n");
 }
+
+// Plain text as people keep it: a lab log with timestamps, inventory notes, half-reactions and
+// equations on lines of their own, numbered procedures, runs numbered as ids, pasted Unicode
+// subscripts, CRLF lines, a very long line, comments and reStructuredText blocks, and the
+// markup a writer half types (a backtick, a \ce{ or a comment left open for a while).
+const PLAIN_TEXT_LINES = [
+  "2026-01-05  gas store, shift Priya",
+  "08:12  Cylinder KR-0412: SF6 at 2.1 bar, NF3 line purged with N2.",
+  "09:40  Label on KR-0415 reads CH5, not SF4: sent back.",
+  "Shelf 3: XeF4 (2 ampoules), Sf4 lecture bottle, CLF3 - do not open",
+  "MnO4- + 8H+ + 5e- -> Mn2+ + 4H2O",
+  "Fe3+ + e- -> Fe2+",
+  "2H2 + O2 → 2H2O",
+  "SF4 + F2 -> SF5",
+  "1. Close the NF3 and SF6 valves.",
+  "2. Flush with dry nitrogen; weigh sodium, potassium and zinc granules.",
+  "Runs N1, N2 and P1, P2 (pilot) below.",
+  "The N2 extraction ran late; C2 was repeated.",
+  "H₂O and SO₄²⁻ pasted from a handbook, NH₄⁺ too",
+  "XeF2 is linear, NO2 is a radical\r",
+  "\r",
+  "",
+  "   ",
+  "<!-- reviewer: CH5 is a typo -->",
+  "<!-- left open: BF3",
+  "closed here --> ClF3 stays",
+  "`SF4 in a code span` and \\ce{XeF4 + F2 -> XeF6} and $H_2O$",
+  "a \\ce{SO4^2- + opened and $ opened",
+  "Run it like this::",
+  "    SF4 + CH5 typed as code",
+  ".. math::",
+  "   H_2SO_4 + CH_5",
+  ".. note::",
+  "   NH4+ in a note",
+  "CuSO4 · 5H2O and sulfur tetrafluoride",
+  `${"NF3, SF6 and CH5; ".repeat(120)}end of a long line`,
+];
 
 /** Edits as a writer makes them to a JSON file: mostly whole records, sometimes a keystroke, often undone. */
 function randomJsonEdit(session: Session, random: () => number, undo: { start: number; length: number; removed: string }[]): void {
@@ -328,6 +365,68 @@ describe("incremental analysis after random edits", () => {
       randomJsonEdit(session, random, undo);
       checkAgainstScratch(session, kind, random);
     }
+  });
+
+  it.each([1, 2, 3, 4, 5, 6])("a plain-text lab log keeps the findings of a fresh analysis through 600 edits (seed %i)", (seed) => {
+    const random = seededRandom(seed);
+    const lines = Array.from({ length: 90 }, (_, index) =>
+      index % 9 === 8 ? "" : PLAIN_TEXT_LINES[(index * 7 + seed) % PLAIN_TEXT_LINES.length],
+    );
+    const kind = "plaintext";
+    const session: Session = { text: chunkedTextOf(`${lines.join("\n")}\n`, 256), analyser: createDocumentAnalyser(kind) };
+    for (let edit = 0; edit < 600; edit++) {
+      if (random() < 0.15) {
+        // A paste of several lines, with blank lines between, as often with CRLF as not.
+        const lineEnd = random() < 0.5 ? "\r\n" : "\n";
+        const pasted = Array.from({ length: 2 + Math.floor(random() * 5) }, () =>
+          random() < 0.3 ? "" : PLAIN_TEXT_LINES[Math.floor(random() * PLAIN_TEXT_LINES.length)],
+        );
+        const plain = wholeText(session.text);
+        const lineStarts = [0, ...[...plain.matchAll(/\n/g)].map((match) => match.index + 1)];
+        const at = lineStarts[Math.floor(random() * lineStarts.length)];
+        session.text = editChunkedText(session.text, at, at, pasted.map((line) => `${line}${lineEnd}`).join(""));
+      } else {
+        randomEdit(session, random, PLAIN_TEXT_LINES);
+      }
+      if (random() < 0.2) {
+        // A version only hovered over, read no further than the hover needed.
+        session.analyser.analyse(session.text).speciesAt(Math.floor(random() * session.text.length));
+        continue;
+      }
+      checkAgainstScratch(session, kind, random);
+    }
+  });
+
+  it.each([
+    ["a comment opened in the first paragraph", "<!-- draft", "<!-- draft -->"],
+    ["a comment closed in the middle", "closed here -->", "still open"],
+    ["a run numbered 1 typed far above", "Runs N1, N2 and P1, P2 (pilot) below.", "Runs N3 and P3 below."],
+  ])("a plain-text edit that changes what later paragraphs carry: %s", (_, before, after) => {
+    // common practice: a log whose paragraphs each mention a species, some of them ids.
+    const paragraphs = Array.from({ length: 40 }, (_, index) => `${index}: the N2 purge and SF6 then CH5 <!-- x --> BF3`);
+    const text = `${before}\n\n${paragraphs.join("\n\n")}\n\nclosed here -->\n\nSF4 and NF3\n`;
+    const session: Session = { text: chunkedTextOf(text, 256), analyser: createDocumentAnalyser("plaintext") };
+    checkAgainstScratch(session, "plaintext", seededRandom(1));
+    for (const [find, replace] of [
+      [before, after],
+      [after, before],
+    ]) {
+      const at = wholeText(session.text).indexOf(find);
+      session.text = editChunkedText(session.text, at, at + find.length, replace);
+      checkAgainstScratch(session, "plaintext", seededRandom(2));
+    }
+  });
+
+  it("answers a hover far into a long plain-text log before the whole of it is read", () => {
+    // common practice: one log entry repeated until the file is well past a megabyte.
+    const entry = "08:12  Cylinder KR-0412: SF6 at 2.1 bar, XeF4 weighed; NH4+ stayed in the fridge.\n\n";
+    const text = entry.repeat(20_000);
+    const analysis = createDocumentAnalyser("plaintext").analyse(chunkedTextOf(text));
+    const offset = text.lastIndexOf("XeF4") + 1;
+    const expected = speciesAtOffset(analyzeDocument(text, "plaintext"), offset);
+    expect(expected?.text).toBe("XeF4");
+    expect(analysis.speciesAt(offset)?.range).toEqual(expected?.range);
+    expect(canonical(analysis.findings())).toEqual(canonical(fromScratch(text, "plaintext")));
   });
 
   it("answers a hover far into a long notebook before the whole of it is split", () => {

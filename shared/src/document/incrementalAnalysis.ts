@@ -9,9 +9,11 @@
  * each is read under the document's header, as the command line reads a file in batches, with
  * one row memo for the document. A changed header or delimiter reads every segment again.
  * Markdown: segments are the blocks of `markdownBlocks`, split again only around an edit (see
- * `markdownAnalyser`). JSON: the elements of its list of records (see `jsonListReader`). YAML:
- * the items of its block list of records (see `yamlListReader`). Plain text, and JSON or YAML
- * without such a list (or with a syntax error), are read whole on every version.
+ * `markdownAnalyser`). Plain text: its paragraphs and literal blocks (`plainTextUnits`), each read
+ * with the little it carries from the paragraphs around it (see `plainTextAnalyser`). JSON: the
+ * elements of its list of records (see `jsonListReader`). YAML: the items of its block list of
+ * records (see `yamlListReader`). JSON or YAML without such a list (or with a syntax error) is
+ * read whole on every version.
  */
 import { analysedTextOf, MAX_ANALYSED_LENGTH } from "./analysedText";
 import { analyzeDocument } from "./analyzeDocument";
@@ -22,6 +24,7 @@ import { jsonListReader } from "./jsonParts";
 import { yamlListReader } from "./yamlParts";
 import { sliceOf, wholeText, type ChunkedText, type TextChunk } from "./chunkedText";
 import { markdownAnalyser } from "./markdownAnalysis";
+import { plainTextAnalyser } from "./plainTextAnalysis";
 import { joinedModels, shiftedModel } from "./shiftedModel";
 import { memoisedReader, type SpeciesReader } from "./speciesReader";
 import { speciesAtOffset, type SpeciesAtOffset } from "./speciesAt";
@@ -89,6 +92,7 @@ export function createDocumentAnalyser(kind: DocumentKind, limit = MAX_ANALYSED_
   const table = kind === "csv" || kind === "tsv" ? tableSegments(kind, read) : undefined;
   const markdown = kind === "markdown" ? markdownAnalyser(read, tuning.markdownStretch) : undefined;
   const list = kind === "json" ? jsonSegments(read) : kind === "yaml" ? yamlSegments(read) : undefined;
+  const plain = kind === "plaintext" ? plainTextAnalyser(read) : undefined;
   return {
     analyse(text) {
       if (sliceOf(text, 0, BINARY_PROBE_LENGTH).includes("\u0000")) return wholeAnalysis(kind, "", read, { binary: true });
@@ -99,6 +103,7 @@ export function createDocumentAnalyser(kind: DocumentKind, limit = MAX_ANALYSED_
       if (table) return table(text);
       if (markdown) return markdown(text);
       if (list) return list(text);
+      if (plain) return plain(text);
       return wholeAnalysis(kind, wholeText(text), read, {});
     },
   };

@@ -325,7 +325,7 @@ function editedList(old: BlockList, text: ChunkedText, stretch: number): BlockLi
 }
 
 /** Where two versions differ: from `start` to `oldEnd` in the old one, to `newEnd` in the new. */
-function changedStretch(old: ChunkedText, text: ChunkedText): { start: number; oldEnd: number; newEnd: number } | undefined {
+export function changedStretch(old: ChunkedText, text: ChunkedText): { start: number; oldEnd: number; newEnd: number } | undefined {
   const shorter = Math.min(old.chunks.length, text.chunks.length);
   let same = 0;
   while (same < shorter && old.chunks[same] === text.chunks[same]) same++;
@@ -358,7 +358,7 @@ function opensWithFrontMatterLine(text: ChunkedText): boolean {
 }
 
 /** The index of the last of the ascending `starts` below `limit`, or -1. */
-function lastIndexBefore(starts: readonly number[], limit: number): number {
+export function lastIndexBefore(starts: readonly number[], limit: number): number {
   let low = 0;
   let high = starts.length;
   while (low < high) {
@@ -370,13 +370,13 @@ function lastIndexBefore(starts: readonly number[], limit: number): number {
 }
 
 /** The index of `value` in the ascending `starts`, or -1. */
-function indexOf(starts: readonly number[], value: number): number {
+export function indexOf(starts: readonly number[], value: number): number {
   const index = lastIndexBefore(starts, value + 1);
   return index >= 0 && starts[index] === value ? index : -1;
 }
 
 /** The start of the line holding `offset`. */
-function lineStartAt(text: ChunkedText, offset: number): number {
+export function lineStartAt(text: ChunkedText, offset: number): number {
   if (offset <= 0 || text.chunks.length === 0) return 0;
   const index = chunkIndexAt(text, offset);
   const local = offset - text.starts[index];
@@ -386,7 +386,7 @@ function lineStartAt(text: ChunkedText, offset: number): number {
 }
 
 /** The offset of the line feed at or after `offset`, or the text's length. */
-function lineEndAt(text: ChunkedText, offset: number): number {
+export function lineEndAt(text: ChunkedText, offset: number): number {
   if (offset >= text.length) return text.length;
   const index = chunkIndexAt(text, offset);
   const lineFeed = text.chunks[index].text.indexOf("\n", offset - text.starts[index]);

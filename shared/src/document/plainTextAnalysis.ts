@@ -1,0 +1,346 @@
+/**
+ * Plain text analysed version after version: the text is cut into the units of `plainTextUnits`
+ * (paragraphs and literal blocks), and an edit cuts again only from a paragraph start before it to
+ * the first paragraph start after it where the new cut meets the old one; the units before and
+ * after are the last version's, moved. Each unit is read from its own text, with offsets from its
+ * own start, and with the carry `plainTextSteps` hands it (an HTML comment still open from the
+ * unit before; ids numbered 1 in the paragraphs near it). A reading is kept with the carry it was
+ * read under and is used again while that carry is unchanged: an edit that opens or closes a
+ * comment re-reads onward for as long as the comment state out of a unit changes.
+ */
+import { analyzeDocument, distinctReactions } from "./analyzeDocument";
+import { checkDocument } from "./checkDocument";
+import { sliceOf, type ChunkedText } from "./chunkedText";
+import type { DocumentAnalysis } from "./incrementalAnalysis";
+import { changedStretch, indexOf as indexOfStart, lastIndexBefore, lineEndAt, lineStartAt } from "./markdownAnalysis";
+import {
+  hasSeriesNear,
+  NO_IDS,
+  plainTextUnits,
+  plainTextUnitSteps,
+  SERIES_REACH,
+  seriesFirstIds,
+  type PlainTextUnit,
+  type UnitsNear,
+} from "./scanPlainText";
+import { joinedModels, shiftedModel } from "./shiftedModel";
+import { speciesAtOffset } from "./speciesAt";
+import type { SpeciesReader } from "./speciesReader";
+import { moved } from "./tables/delimitedFindings";
+import type { RecordSink } from "./tables/records";
+import type { DocumentModel, Finding, SpeciesOccurrence } from "./types";
+
+/** A unit with offsets from its own start. The same object in the next version when an edit left it alone. */
+interface Unit {
+  readonly kind: PlainTextUnit["kind"];
+  readonly length: number;
+}
+
+/** What one unit yields, with offsets from the unit's start, and the carry it was read under. */
+interface UnitReading {
+  readonly commentIn: boolean;
+  /** The series lookups the reading made, and their answers. */
+  readonly asked: ReadonlyMap<string, boolean>;
+  readonly commentOut: boolean;
+  readonly model: DocumentModel;
+  readonly findings: readonly Finding[];
+}
+
+/** One version's units and where each starts. */
+interface UnitList {
+  readonly text: ChunkedText;
+  readonly units: Unit[];
+  readonly starts: number[];
+  /** The cut still to be made, from a paragraph start to the end of the text. */
+  rest?: { readonly from: number; stream?: Generator<PlainTextUnit, void, void> };
+  /** Whether a comment is open where each unit ends, as far as worked out (a prefix of the units). */
+  readonly commentOut: boolean[];
+}
+
+/** An edit that changes more text than this is cut afresh. */
+const LARGE_CHANGE = 1024 * 1024;
+/** A request this far past where the reading in order has got to is answered from the lines around it. */
+const FAR_AHEAD = 32 * 1024;
+/** How much text around a position is read when the reading has not got there yet. */
+const LOCAL_READ = 2048;
+/** Placed unit models kept per version, for requests about one place. */
+const PLACED_MODELS_KEPT = 16;
+/** Distinct species texts remembered for preparing hovers. */
+const DISTINCT_SPECIES_KEPT = 4096;
+
+/** What readings are kept across versions. */
+interface UnitCaches {
+  readonly read: SpeciesReader;
+  readonly readings: WeakMap<Unit, UnitReading>;
+  readonly ids: WeakMap<Unit, ReadonlySet<string>>;
+  /** One occurrence of each distinct species text read so far, in any version (bounded). */
+  readonly met: Map<string, SpeciesOccurrence>;
+}
+
+/** Analyses successive versions of one plain-text document, reusing the units an edit left alone. */
+export function plainTextAnalyser(read: SpeciesReader): (text: ChunkedText) => DocumentAnalysis {
+  const caches: UnitCaches = { read, readings: new WeakMap(), ids: new WeakMap(), met: new Map() };
+  let last: UnitList | undefined;
+  return (text) => {
+    const list: UnitList = (last && editedList(last, text)) ?? { text, units: [], starts: [], rest: { from: 0 }, commentOut: [] };
+    last = list;
+    return analysisOf(list, caches);
+  };
+}
+
+function analysisOf(list: UnitList, caches: UnitCaches): DocumentAnalysis {
+  const { units, starts } = list;
+  const near: UnitsNear = {
+    get count() {
+      return units.length;
+    },
+    startOf: (index) => starts[index],
+    endOf: (index) => starts[index] + units[index].length,
+    idsOf: (index) => idsOf(list, index, caches),
+  };
+  /** The reading of unit `index` under the carry it has in this version. */
+  const readingOf = (index: number): UnitReading => {
+    const commentIn = commentBefore(index);
+    const unit = units[index];
+    const known = caches.readings.get(unit);
+    if (known && known.commentIn === commentIn && stillAnswers(known.asked, index)) return known;
+    const reading = unitReading(list, index, commentIn, (symbol) => seriesNear(index, symbol), caches);
+    caches.readings.set(unit, reading);
+    return reading;
+  };
+  const seriesNear = (index: number, symbol: string): boolean => {
+    splitUpTo(list, starts[index] + units[index].length + SERIES_REACH);
+    return hasSeriesNear(near, index, symbol);
+  };
+  const stillAnswers = (asked: ReadonlyMap<string, boolean>, index: number): boolean => {
+    for (const [symbol, answer] of asked) if (seriesNear(index, symbol) !== answer) return false;
+    return true;
+  };
+  /** Whether a comment is open where unit `index` starts: the units before are read in order as far as needed. */
+  const commentBefore = (index: number): boolean => {
+    const outs = list.commentOut;
+    while (outs.length < index) outs.push(readingOf(outs.length).commentOut);
+    return index === 0 ? false : outs[index - 1];
+  };
+  /** Whether the reading in order has got near `offset`, or a request there is best answered from the lines around it. */
+  const farAhead = (offset: number): boolean => {
+    const reached = list.commentOut.length;
+    const from =
+      reached < units.length ? starts[reached] : list.rest ? (units.length > 0 ? starts[units.length - 1] : 0) : list.text.length;
+    return offset - from > FAR_AHEAD && !cheaplyReached(offset);
+  };
+  /** Goes on reading in order while the units are already read under the same carry, up to `offset`. */
+  const cheaplyReached = (offset: number): boolean => {
+    for (;;) {
+      const index = list.commentOut.length;
+      if (!hasUnit(list, index) || starts[index] > offset) return true;
+      const known = caches.readings.get(units[index]);
+      const commentIn = index === 0 ? false : list.commentOut[index - 1];
+      if (!known || known.commentIn !== commentIn) return false;
+      list.commentOut.push(readingOf(index).commentOut);
+    }
+  };
+  const placedFindings = (index: number): readonly Finding[] => {
+    const findings = readingOf(index).findings;
+    const start = starts[index];
+    return start === 0 ? findings : findings.map((finding) => moved(finding, start));
+  };
+  const placed = new Map<number, DocumentModel>();
+  const placedModel = (index: number): DocumentModel => {
+    let model = placed.get(index);
+    if (!model) {
+      model = shiftedModel(readingOf(index).model, starts[index]);
+      placed.set(index, model);
+      if (placed.size > PLACED_MODELS_KEPT) placed.delete(placed.keys().next().value as number);
+    }
+    return model;
+  };
+  /** The indexes of the units that overlap `start`..`end`, ends included (the cut made that far). */
+  const indexesAround = (start: number, end: number): number[] => {
+    splitUpTo(list, end);
+    let low = 0;
+    let high = units.length;
+    while (low < high) {
+      const middle = (low + high) >> 1;
+      if (starts[middle] + units[middle].length < start) low = middle + 1;
+      else high = middle;
+    }
+    const indexes: number[] = [];
+    for (let index = low; index < units.length && starts[index] <= end; index++) indexes.push(index);
+    return indexes;
+  };
+  const modelAround = (start: number, end: number): DocumentModel => {
+    if (farAhead(end)) return localModel(list.text, start, end, caches.read);
+    const indexes = indexesAround(start, end);
+    return indexes.length === 0 ? emptyModel() : joinedModels("plaintext", indexes.map(placedModel));
+  };
+  let findings: readonly Finding[] | undefined;
+  const allFindings = (): readonly Finding[] => {
+    if (findings) return findings;
+    const all: Finding[] = [];
+    for (let index = 0; hasUnit(list, index); index++) for (const finding of placedFindings(index)) all.push(finding);
+    findings = all;
+    return findings;
+  };
+  return {
+    kind: "plaintext",
+    binary: false,
+    findings: allFindings,
+    *findingParts() {
+      if (findings) {
+        yield findings;
+        return;
+      }
+      for (let index = 0; hasUnit(list, index); index++) yield placedFindings(index);
+    },
+    findingsAround: (start, end) =>
+      farAhead(end) ? checkDocument(localModel(list.text, start, end, caches.read)) : indexesAround(start, end).flatMap(placedFindings),
+    model: () => {
+      const models: DocumentModel[] = [];
+      for (let index = 0; hasUnit(list, index); index++) models.push(placedModel(index));
+      return models.length === 0 ? emptyModel() : joinedModels("plaintext", models);
+    },
+    modelAround,
+    speciesAt: (offset) => speciesAtOffset(modelAround(offset, offset), offset),
+    // Gathered as units are read, so a long document is not walked again on every version.
+    distinctSpecies: () => [...caches.met.values()],
+  };
+}
+
+function idsOf(list: UnitList, index: number, caches: UnitCaches): ReadonlySet<string> {
+  const unit = list.units[index];
+  if (unit.kind !== "prose") return NO_IDS;
+  let ids = caches.ids.get(unit);
+  if (!ids) {
+    ids = seriesFirstIds(sliceOf(list.text, list.starts[index], list.starts[index] + unit.length));
+    caches.ids.set(unit, ids);
+  }
+  return ids;
+}
+
+/** Reads unit `index` from its own text under the carry given, with offsets from the unit's start. */
+function unitReading(
+  list: UnitList,
+  index: number,
+  commentIn: boolean,
+  seriesNear: (symbol: string) => boolean,
+  caches: UnitCaches,
+): UnitReading {
+  const start = list.starts[index];
+  const unit = list.units[index];
+  const source = sliceOf(list.text, start, start + unit.length);
+  const asked = new Map<string, boolean>();
+  const carry = {
+    commentOpen: commentIn,
+    seriesNearby: (symbol: string): boolean => {
+      const answer = seriesNear(symbol);
+      asked.set(symbol, answer);
+      return answer;
+    },
+  };
+  const sink: RecordSink = { occurrences: [], unreadable: [], records: [], reactions: [] };
+  for (const _ of plainTextUnitSteps(source, unit.kind, caches.read, sink, Infinity, carry));
+  const model: DocumentModel = {
+    kind: "plaintext",
+    occurrences: [...sink.occurrences].sort((a, b) => a.range.start - b.range.start),
+    records: [],
+    problems: [],
+    unreadable: [...sink.unreadable].sort((a, b) => a.range.start - b.range.start),
+    reactions: distinctReactions(sink.reactions ?? []),
+  };
+  for (const occurrence of model.occurrences) {
+    if (caches.met.size >= DISTINCT_SPECIES_KEPT) break;
+    if (!caches.met.has(occurrence.text)) caches.met.set(occurrence.text, occurrence);
+  }
+  return { commentIn, asked, commentOut: carry.commentOpen, model, findings: checkDocument(model, undefined) };
+}
+
+function emptyModel(): DocumentModel {
+  return { kind: "plaintext", occurrences: [], records: [], problems: [], unreadable: [], reactions: [] };
+}
+
+/**
+ * The model of the lines around `start`..`end`, read as plain text of their own: for a request
+ * about a place the reading in order has not reached yet, the answer the lines there give.
+ */
+function localModel(text: ChunkedText, start: number, end: number, read: SpeciesReader): DocumentModel {
+  const from = lineStartAt(text, Math.max(0, start - LOCAL_READ));
+  const to = lineEndAt(text, Math.min(text.length, end + LOCAL_READ));
+  return shiftedModel(analyzeDocument(sliceOf(text, from, to), "plaintext", read), from);
+}
+
+// ---------------------------------------------------------------------------------------------
+// The cut
+
+/** Whether unit `index` exists, cutting further if needed. */
+function hasUnit(list: UnitList, index: number): boolean {
+  while (index >= list.units.length && list.rest) nextUnit(list);
+  return index < list.units.length;
+}
+
+/** Cuts until every unit starting at or before `offset` is known. */
+function splitUpTo(list: UnitList, offset: number): void {
+  while (list.rest && (list.starts.length === 0 || list.starts[list.starts.length - 1] <= offset)) nextUnit(list);
+}
+
+function nextUnit(list: UnitList): void {
+  const rest = list.rest;
+  if (!rest) return;
+  rest.stream ??= plainTextUnits(sliceOf(list.text, rest.from, list.text.length));
+  const next = rest.stream.next();
+  if (next.done) {
+    list.rest = undefined;
+    return;
+  }
+  list.units.push({ kind: next.value.kind, length: next.value.end - next.value.start });
+  list.starts.push(rest.from + next.value.start);
+}
+
+/**
+ * The next version's units after an edit, or undefined when it is best cut afresh. The cut
+ * restarts at a paragraph start whose first line, line break included, lies before the edit (the
+ * cut of the lines before it looks no further than that line), and stops at the first paragraph
+ * start after the edit where the old version also had one: from a paragraph start the cut depends
+ * only on the text after it, which the edit left alone.
+ */
+function editedList(old: UnitList, text: ChunkedText): UnitList | undefined {
+  const change = changedStretch(old.text, text);
+  if (!change) return old;
+  if (change.oldEnd - change.start > LARGE_CHANGE || change.newEnd - change.start > LARGE_CHANGE) return undefined;
+  let first = lastIndexBefore(old.starts, change.start + 1);
+  while (first >= 0 && (old.units[first].kind !== "prose" || lineEndAt(old.text, old.starts[first]) >= change.start)) first--;
+  const restart = first < 0 ? 0 : old.starts[first];
+  const kept = Math.max(0, first);
+  const units = old.units.slice(0, kept);
+  const starts = old.starts.slice(0, kept);
+  // A unit's comment state out depends on its text and the state in alone: the kept units' stand.
+  const commentOut = old.commentOut.slice(0, kept);
+  if (old.rest) return { text, units, starts, commentOut, rest: { from: restart } };
+  const delta = text.length - old.text.length;
+  for (let span = 8192; ; span *= 2) {
+    const reach = change.newEnd + span;
+    const windowEnd = reach >= text.length ? text.length : Math.min(text.length, lineEndAt(text, reach) + 1);
+    const complete = windowEnd >= text.length;
+    const window = sliceOf(text, restart, windowEnd);
+    const newUnits = [...units];
+    const newStarts = [...starts];
+    for (const unit of plainTextUnits(window)) {
+      const at = restart + unit.start;
+      if (unit.kind === "prose" && unit.start > 0 && at >= change.newEnd) {
+        // The unit's first line is whole in the window: what decided that a paragraph starts here.
+        const decided = complete || window.indexOf("\n", unit.start) >= 0;
+        const match = decided ? indexOfStart(old.starts, at - delta) : -1;
+        if (match >= 0 && old.units[match].kind === "prose") {
+          for (let index = match; index < old.units.length; index++) {
+            newUnits.push(old.units[index]);
+            newStarts.push(old.starts[index] + delta);
+          }
+          return { text, units: newUnits, starts: newStarts, commentOut };
+        }
+      }
+      newUnits.push({ kind: unit.kind, length: unit.end - unit.start });
+      newStarts.push(at);
+    }
+    if (complete) return { text, units: newUnits, starts: newStarts, commentOut };
+  }
+}
