@@ -52,10 +52,22 @@ interface UnitList {
   readonly units: Unit[];
   readonly starts: number[];
   /** The cut still to be made, from a paragraph start to the end of the text. */
-  rest?: { readonly from: number; stream?: Generator<PlainTextUnit, void, void> };
+  rest?: RestToCut;
   /** Whether a comment is open where each unit ends, as far as worked out (a prefix of the units). */
   readonly commentOut: boolean[];
 }
+
+/** The cut still to be made: units cut from a window of the text and not yet taken, and where the next window starts. */
+interface RestToCut {
+  from: number;
+  queue?: PlainTextUnit[];
+}
+
+/**
+ * How many chunks of text the cut reads at a time (64 KB at the usual chunk size), so that a
+ * request near the start does not copy the whole text.
+ */
+const CUT_WINDOW_CHUNKS = 4;
 
 /** An edit that changes more text than this is cut afresh. */
 const LARGE_CHANGE = 1024 * 1024;
@@ -286,14 +298,41 @@ function splitUpTo(list: UnitList, offset: number): void {
 function nextUnit(list: UnitList): void {
   const rest = list.rest;
   if (!rest) return;
-  rest.stream ??= plainTextUnits(sliceOf(list.text, rest.from, list.text.length));
-  const next = rest.stream.next();
-  if (next.done) {
+  if (!rest.queue || rest.queue.length === 0) cutWindow(list.text, rest);
+  const next = rest.queue?.shift();
+  if (!next) {
     list.rest = undefined;
     return;
   }
-  list.units.push({ kind: next.value.kind, length: next.value.end - next.value.start });
-  list.starts.push(rest.from + next.value.start);
+  list.units.push({ kind: next.kind, length: next.end - next.start });
+  list.starts.push(next.start);
+}
+
+/**
+ * Cuts the units from `rest.from` in a window of the text: the units before the last paragraph
+ * that starts in the window with its first line whole (as far as the cut of the lines before it
+ * looks), or all of them when the window reaches the end. A window with no such paragraph grows.
+ */
+function cutWindow(text: ChunkedText, rest: RestToCut): void {
+  for (let span = CUT_WINDOW_CHUNKS * text.chunkTarget; ; span *= 2) {
+    const reach = rest.from + span;
+    const windowEnd = reach >= text.length ? text.length : Math.min(text.length, lineEndAt(text, reach) + 1);
+    const window = sliceOf(text, rest.from, windowEnd);
+    const units = [...plainTextUnits(window)].map((unit) => ({ ...unit, start: unit.start + rest.from, end: unit.end + rest.from }));
+    if (windowEnd >= text.length) {
+      rest.queue = units;
+      rest.from = text.length;
+      return;
+    }
+    for (let index = units.length - 1; index > 0; index--) {
+      const local = units[index].start - rest.from;
+      if (units[index].kind === "prose" && window.indexOf("\n", local) >= 0) {
+        rest.queue = units.slice(0, index);
+        rest.from = units[index].start;
+        return;
+      }
+    }
+  }
 }
 
 /**
@@ -315,9 +354,13 @@ function editedList(old: UnitList, text: ChunkedText): UnitList | undefined {
   const starts = old.starts.slice(0, kept);
   // A unit's comment state out depends on its text and the state in alone: the kept units' stand.
   const commentOut = old.commentOut.slice(0, kept);
-  if (old.rest) return { text, units, starts, commentOut, rest: { from: restart } };
+  // An old version cut only part of the way, and edited past that part: cut on from the restart.
+  const lastKnown = old.starts.length - 1;
+  if (old.rest && (lastKnown < 0 || change.start >= old.starts[lastKnown]))
+    return { text, units, starts, commentOut, rest: { from: restart } };
   const delta = text.length - old.text.length;
-  for (let span = 8192; ; span *= 2) {
+  // Half a chunk past the edit first (8 KB at the usual chunk size), then twice as far, and so on.
+  for (let span = Math.max(64, text.chunkTarget / 2); ; span *= 2) {
     const reach = change.newEnd + span;
     const windowEnd = reach >= text.length ? text.length : Math.min(text.length, lineEndAt(text, reach) + 1);
     const complete = windowEnd >= text.length;
@@ -326,17 +369,23 @@ function editedList(old: UnitList, text: ChunkedText): UnitList | undefined {
     const newStarts = [...starts];
     for (const unit of plainTextUnits(window)) {
       const at = restart + unit.start;
-      if (unit.kind === "prose" && unit.start > 0 && at >= change.newEnd) {
-        // The unit's first line is whole in the window: what decided that a paragraph starts here.
-        const decided = complete || window.indexOf("\n", unit.start) >= 0;
-        const match = decided ? indexOfStart(old.starts, at - delta) : -1;
+      // The unit's first line is whole in the window: what decided that a paragraph starts here.
+      if (unit.kind === "prose" && unit.start > 0 && at >= change.newEnd && (complete || window.indexOf("\n", unit.start) >= 0)) {
+        const match = indexOfStart(old.starts, at - delta);
         if (match >= 0 && old.units[match].kind === "prose") {
-          for (let index = match; index < old.units.length; index++) {
+          // The old units from here on, as far as the old cut had got: the cut goes on from its last paragraph.
+          let end = old.units.length;
+          if (old.rest) while (old.units[--end].kind !== "prose");
+          for (let index = match; index < end; index++) {
             newUnits.push(old.units[index]);
             newStarts.push(old.starts[index] + delta);
           }
-          return { text, units: newUnits, starts: newStarts, commentOut };
+          const rest = old.rest ? { from: old.starts[end] + delta } : undefined;
+          return { text, units: newUnits, starts: newStarts, commentOut, rest };
         }
+        // Past where the old cut had got: nothing more to meet.
+        if (old.rest && at - delta > old.starts[lastKnown])
+          return { text, units: newUnits, starts: newStarts, commentOut, rest: { from: at } };
       }
       newUnits.push({ kind: unit.kind, length: unit.end - unit.start });
       newStarts.push(at);
