@@ -1,9 +1,10 @@
 // Benchmark of the language server on very large files, driven over stdio by a protocol client:
 // a hover sent while a 10 MB notebook is being analysed (after opening it and after an edit),
-// one-line edits to that notebook and its peak memory,
+// one-line edits to that notebook and its peak memory, the same for a 10 MB plain-text lab log,
 // and the server's peak memory while a 50 MB cylinder CSV is opened and edited ten times.
 // Prints the figures beside the aims and the machine's load.
 import { CYLINDER_HEADER, cylinderRow } from "./cylinderRows.mjs";
+import { labLogText } from "./labLogText.mjs";
 import { notebookText } from "./notebookText.mjs";
 import { loadNote, percentile, startServer, verdict } from "./lspBenchClient.mjs";
 
@@ -53,6 +54,33 @@ const sleep = (ms) => new Promise((resolve) => setTimeout(resolve, ms));
   console.log(
     `  hover during analysis         ${hoverMs.toFixed(1)} ms after opening, ${editedHoverMs.toFixed(1)} ms after an edit   aim < ${AIMS.hoverDuringAnalysisMs} ms   ${verdict(Math.max(hoverMs, editedHoverMs) < AIMS.hoverDuringAnalysisMs)}${hover ? "" : " (no hover came back)"}`,
   );
+  await server.stop();
+}
+
+{
+  const { text, lines } = labLogText(180_000);
+  const server = await startServer("pull");
+  const uri = "file:///kestrel-ridge/logs/gas-store-all-shifts.txt";
+  const openStart = performance.now();
+  await server.open(uri, "plaintext", 1, text);
+  await server.diagnostics(uri, 1);
+  const openMs = performance.now() - openStart;
+  // Ten one-line edits spread through the log, each to its diagnostics.
+  const editTimes = [];
+  for (let edit = 0; edit < 10; edit++) {
+    const line = Math.floor(((edit + 1) * lines.length) / 12);
+    const start = performance.now();
+    await server.replaceLine(uri, 2 + edit, line, 0, "Checked: ");
+    await server.diagnostics(uri, 2 + edit);
+    editTimes.push(performance.now() - start);
+  }
+  const peak = server.peakMegabytes();
+  console.log(`editor, ${(text.length / 1e6).toFixed(1)} MB plain-text lab log over stdio (pull diagnostics); ${loadNote()}`);
+  console.log(`  open to diagnostics           ${openMs.toFixed(0)} ms`);
+  console.log(
+    `  one-line edit to diagnostics  median ${percentile(editTimes, 0.5).toFixed(0)} ms, slowest ${Math.max(...editTimes).toFixed(0)} ms over 10 edits`,
+  );
+  console.log(`  server peak memory            ${peak.toFixed(0)} MB   aim < ${AIMS.peakMb} MB   ${verdict(peak < AIMS.peakMb)}`);
   await server.stop();
 }
 
