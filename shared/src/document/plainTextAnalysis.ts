@@ -9,7 +9,8 @@
  * comment re-reads onward for as long as the comment state out of a unit changes.
  */
 import { analyzeDocument, distinctReactions } from "./analyzeDocument";
-import { checkDocument } from "./checkDocument";
+import { checkDocument, documentChecker } from "./checkDocument";
+import type { Reaction } from "./reactions/reactionTypes";
 import { sliceOf, type ChunkedText } from "./chunkedText";
 import type { DocumentAnalysis } from "./incrementalAnalysis";
 import { changedStretch, indexOf as indexOfStart, lastIndexBefore, lineEndAt, lineStartAt } from "./markdownAnalysis";
@@ -28,7 +29,7 @@ import { speciesAtOffset } from "./speciesAt";
 import type { SpeciesReader } from "./speciesReader";
 import { moved } from "./tables/delimitedFindings";
 import type { RecordSink } from "./tables/records";
-import type { DocumentModel, Finding, SpeciesOccurrence } from "./types";
+import type { DocumentModel, Finding, SpeciesOccurrence, UnreadableSpecies } from "./types";
 
 /** A unit with offsets from its own start. The same object in the next version when an edit left it alone. */
 interface Unit {
@@ -77,6 +78,12 @@ const FAR_AHEAD = 32 * 1024;
 const LOCAL_READ = 2048;
 /** Placed unit models kept per version, for requests about one place. */
 const PLACED_MODELS_KEPT = 16;
+/**
+ * A unit longer than this many chunks of text (64 KB at the usual chunk size; a log without blank
+ * lines) hands out its findings a part at a time on its first reading, one part for as many
+ * mentions as a chunk has characters over four (4,096, as `findingsInParts` does).
+ */
+const LONG_UNIT_CHUNKS = 4;
 /** Distinct species texts remembered for preparing hovers. */
 const DISTINCT_SPECIES_KEPT = 4096;
 
@@ -112,13 +119,16 @@ function analysisOf(list: UnitList, caches: UnitCaches): DocumentAnalysis {
   };
   /** The reading of unit `index` under the carry it has in this version. */
   const readingOf = (index: number): UnitReading => {
-    const commentIn = commentBefore(index);
-    const unit = units[index];
-    const known = caches.readings.get(unit);
-    if (known && known.commentIn === commentIn && stillAnswers(known.asked, index)) return known;
-    const reading = unitReading(list, index, commentIn, (symbol) => seriesNear(index, symbol), caches);
-    caches.readings.set(unit, reading);
+    const known = validReading(index);
+    if (known) return known;
+    const reading = unitReading(list, index, commentBefore(index), (symbol) => seriesNear(index, symbol), caches);
+    caches.readings.set(units[index], reading);
     return reading;
+  };
+  /** The reading of unit `index` kept from before, if it was read under the carry it has now. */
+  const validReading = (index: number): UnitReading | undefined => {
+    const known = caches.readings.get(units[index]);
+    return known && known.commentIn === commentBefore(index) && stillAnswers(known.asked, index) ? known : undefined;
   };
   const seriesNear = (index: number, symbol: string): boolean => {
     splitUpTo(list, starts[index] + units[index].length + SERIES_REACH);
@@ -199,11 +209,24 @@ function analysisOf(list: UnitList, caches: UnitCaches): DocumentAnalysis {
     binary: false,
     findings: allFindings,
     *findingParts() {
+      const partSize = Math.max(16, list.text.chunkTarget / 4);
       if (findings) {
         yield findings;
         return;
       }
-      for (let index = 0; hasUnit(list, index); index++) yield placedFindings(index);
+      for (let index = 0; hasUnit(list, index); index++) {
+        if (units[index].length > LONG_UNIT_CHUNKS * list.text.chunkTarget && !validReading(index)) {
+          // A long unit not read yet: its findings a part at a time, so the caller may stop early.
+          const commentIn = commentBefore(index);
+          const parts = unitReadingInParts(list, index, commentIn, (symbol) => seriesNear(index, symbol), caches, partSize);
+          const start = starts[index];
+          let step = parts.next();
+          for (; !step.done; step = parts.next()) yield start === 0 ? step.value : step.value.map((finding) => moved(finding, start));
+          caches.readings.set(units[index], step.value);
+          continue;
+        }
+        yield placedFindings(index);
+      }
     },
     findingsAround: (start, end) =>
       farAhead(end) ? checkDocument(localModel(list.text, start, end, caches.read)) : indexesAround(start, end).flatMap(placedFindings),
@@ -238,6 +261,23 @@ function unitReading(
   seriesNear: (symbol: string) => boolean,
   caches: UnitCaches,
 ): UnitReading {
+  const parts = unitReadingInParts(list, index, commentIn, seriesNear, caches, Infinity);
+  for (let step = parts.next(); ; step = parts.next()) if (step.done) return step.value;
+}
+
+/**
+ * `unitReading` a part at a time: yields the findings of each stretch the scan has moved past
+ * (every `partSize` mentions), and returns the whole reading when the unit is done. A long
+ * paragraph (a log with no blank line) is so read only as far as the caller takes its findings.
+ */
+function* unitReadingInParts(
+  list: UnitList,
+  index: number,
+  commentIn: boolean,
+  seriesNear: (symbol: string) => boolean,
+  caches: UnitCaches,
+  partSize: number,
+): Generator<readonly Finding[], UnitReading, void> {
   const start = list.starts[index];
   const unit = list.units[index];
   const source = sliceOf(list.text, start, start + unit.length);
@@ -251,20 +291,50 @@ function unitReading(
     },
   };
   const sink: RecordSink = { occurrences: [], unreadable: [], records: [], reactions: [] };
-  for (const _ of plainTextUnitSteps(source, unit.kind, caches.read, sink, Infinity, carry));
-  const model: DocumentModel = {
-    kind: "plaintext",
-    occurrences: [...sink.occurrences].sort((a, b) => a.range.start - b.range.start),
-    records: [],
-    problems: [],
-    unreadable: [...sink.unreadable].sort((a, b) => a.range.start - b.range.start),
-    reactions: distinctReactions(sink.reactions ?? []),
+  const occurrences: SpeciesOccurrence[] = [];
+  const unreadable: UnreadableSpecies[] = [];
+  const reactions: Reaction[] = [];
+  const findings: Finding[] = [];
+  const check = documentChecker();
+  /** The findings of what the scan has found before `limit`, moved into the unit's model. */
+  const partBefore = (limit: number): Finding[] => {
+    const part: DocumentModel = {
+      kind: "plaintext",
+      occurrences: takenBefore(sink.occurrences, limit).sort((a, b) => a.range.start - b.range.start),
+      records: [],
+      problems: [],
+      unreadable: takenBefore(sink.unreadable, limit).sort((a, b) => a.range.start - b.range.start),
+      reactions: distinctReactions(takenBefore(sink.reactions!, limit)),
+    };
+    occurrences.push(...part.occurrences);
+    unreadable.push(...(part.unreadable ?? []));
+    reactions.push(...(part.reactions ?? []));
+    for (const occurrence of part.occurrences) {
+      if (caches.met.size >= DISTINCT_SPECIES_KEPT) break;
+      if (!caches.met.has(occurrence.text)) caches.met.set(occurrence.text, occurrence);
+    }
+    const found = check(part);
+    findings.push(...found);
+    return found;
   };
-  for (const occurrence of model.occurrences) {
-    if (caches.met.size >= DISTINCT_SPECIES_KEPT) break;
-    if (!caches.met.has(occurrence.text)) caches.met.set(occurrence.text, occurrence);
+  for (const resumeAt of plainTextUnitSteps(source, unit.kind, caches.read, sink, partSize, carry)) {
+    const part = partBefore(resumeAt);
+    if (part.length > 0) yield part;
   }
-  return { commentIn, asked, commentOut: carry.commentOpen, model, findings: checkDocument(model, undefined) };
+  const rest = partBefore(Infinity);
+  if (rest.length > 0) yield rest;
+  const model: DocumentModel = { kind: "plaintext", occurrences, records: [], problems: [], unreadable, reactions };
+  return { commentIn, asked, commentOut: carry.commentOpen, model, findings };
+}
+
+/** Removes from `items` and returns those that start before `limit` (the scan adds them mostly in order). */
+function takenBefore<T extends { readonly range: { readonly start: number } }>(items: T[], limit: number): T[] {
+  if (items.every((item) => item.range.start < limit)) return items.splice(0, items.length);
+  const taken = items.filter((item) => item.range.start < limit);
+  let kept = 0;
+  for (const item of items) if (item.range.start >= limit) items[kept++] = item;
+  items.length = kept;
+  return taken;
 }
 
 function emptyModel(): DocumentModel {
