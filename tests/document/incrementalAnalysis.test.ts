@@ -154,6 +154,9 @@ const PLAIN_TEXT_LINES = [
   "   H_2SO_4 + CH_5",
   ".. note::",
   "   NH4+ in a note",
+  "\\begin{verbatim}",
+  "CH5 typed in a verbatim block",
+  "\\end{verbatim}",
   "CuSO4 · 5H2O and sulfur tetrafluoride",
   `${"NF3, SF6 and CH5; ".repeat(120)}end of a long line`,
 ];
