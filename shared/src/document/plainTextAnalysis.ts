@@ -10,6 +10,7 @@
  */
 import { analyzeDocument, distinctReactions } from "./analyzeDocument";
 import { checkDocument, documentChecker } from "./checkDocument";
+import { placedParts } from "./findingPart";
 import type { Reaction } from "./reactions/reactionTypes";
 import { sliceOf, type ChunkedText } from "./chunkedText";
 import type { DocumentAnalysis } from "./incrementalAnalysis";
@@ -208,24 +209,27 @@ function analysisOf(list: UnitList, caches: UnitCaches): DocumentAnalysis {
     kind: "plaintext",
     binary: false,
     findings: allFindings,
-    *findingParts() {
+    findingParts() {
+      return placedParts(this.findingPartsAt());
+    },
+    *findingPartsAt() {
       const partSize = Math.max(16, list.text.chunkTarget / 4);
       if (findings) {
-        yield findings;
+        yield { findings, offset: 0 };
         return;
       }
       for (let index = 0; hasUnit(list, index); index++) {
+        const offset = starts[index];
         if (units[index].length > LONG_UNIT_CHUNKS * list.text.chunkTarget && !validReading(index)) {
           // A long unit not read yet: its findings a part at a time, so the caller may stop early.
           const commentIn = commentBefore(index);
           const parts = unitReadingInParts(list, index, commentIn, (symbol) => seriesNear(index, symbol), caches, partSize);
-          const start = starts[index];
           let step = parts.next();
-          for (; !step.done; step = parts.next()) yield start === 0 ? step.value : step.value.map((finding) => moved(finding, start));
+          for (; !step.done; step = parts.next()) yield { findings: step.value, offset };
           caches.readings.set(units[index], step.value);
           continue;
         }
-        yield placedFindings(index);
+        yield { findings: readingOf(index).findings, offset };
       }
     },
     findingsAround: (start, end) =>
