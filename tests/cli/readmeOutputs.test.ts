@@ -62,20 +62,20 @@ describe("the README's shown outputs", () => {
     expect(linesOf(runCli(args).stdout).slice(0, shown.length)).toEqual(shown);
   });
 
-  it("balance, as the transcript shows it", () => {
-    const transcript = [
+  it("balance, as the README shows the session", () => {
+    const shownSession = [
       ...blockAfter("`lonepair balance` balances equations given on the command line"),
       ...blockAfter("`--acidic` or `--basic` completes half-reactions"),
     ];
     const rerun: string[] = [];
-    for (const line of transcript) {
+    for (const line of shownSession) {
       if (!line.startsWith("$ node dist/cli.js ")) continue;
       // The shown commands quote each argument with double quotes and nothing inside them.
       const args = [...line.slice("$ node dist/cli.js ".length).matchAll(/"([^"]*)"|(\S+)/g)].map((match) => match[1] ?? match[2]);
       rerun.push(line, ...linesOf(runCli(args).stdout));
     }
     expect(rerun.length).toBeGreaterThan(4);
-    expect(rerun).toEqual(transcript);
+    expect(rerun).toEqual(shownSession);
   });
 
   it("check --fix in a copy of examples/, the dry run of one file and then the whole fix", () => {

@@ -129,7 +129,7 @@ const PLAIN_TEXT_LINES = [
   "2026-01-05  gas store, shift Priya",
   "08:12  Cylinder KR-0412: SF6 at 2.1 bar, NF3 line purged with N2.",
   "09:40  Label on KR-0415 reads CH5, not SF4: sent back.",
-  "Shelf 3: XeF4 (2 ampoules), Sf4 lecture bottle, CLF3 - do not open",
+  "Shelf 3: XeF4 (2 ampoules), Sf4 small cylinder, CLF3 - do not open",
   "MnO4- + 8H+ + 5e- -> Mn2+ + 4H2O",
   "Fe3+ + e- -> Fe2+",
   "2H2 + O2 → 2H2O",
