@@ -381,10 +381,7 @@ function jsonSegments(read: SpeciesReader): (text: ChunkedText) => DocumentAnaly
   return listSegments(
     "json",
     read,
-    (text) => {
-      const version = list(text);
-      return { findings: () => version.findings(), around: (start, end) => version.elementsAround(start, end) };
-    },
+    list,
     // The elements read as a list of their own, as the list reader reads them.
     (stretch) => shiftedModel(analyzeDocument(`[${stretch}]`, "json", read), -1),
   );
@@ -395,10 +392,7 @@ function yamlSegments(read: SpeciesReader): (text: ChunkedText) => DocumentAnaly
   return listSegments(
     "yaml",
     read,
-    (text) => {
-      const version = list(text);
-      return { findings: () => version.findings(), around: (start, end) => version.itemsAround(start, end) };
-    },
+    list,
     // Whole items read alone read as they do in place (see `yamlListReader`).
     (stretch) => analyzeDocument(stretch, "yaml", read),
   );

@@ -25,44 +25,18 @@ import { isMap, isPair, isScalar, isSeq, type Node, type YAMLSeq } from "yaml";
 import { analyzeDocument, analyzeYamlStream } from "./analyzeDocument";
 import { checkDocument } from "./checkDocument";
 import { sliceOf, wholeText, type ChunkedText } from "./chunkedText";
-import { changedStretch, lastAtOrBefore } from "./jsonParts";
+import { changedStretch, lastAtOrBefore, NO_FINDINGS, rememberingListReader, type ListParts, type ListReader } from "./listParts";
 import type { SpeciesReader } from "./speciesReader";
 import { moved } from "./tables/delimitedFindings";
 import { isEquationHeader } from "./tables/headers";
 import { parseYamlStream, type YamlStream } from "./tables/yaml";
 import type { DocumentModel, Finding } from "./types";
 
-/** One version of a YAML list of records, as far as its findings go. */
-export interface YamlListVersion {
-  /** The findings of the whole document, in document order. */
-  findings(): readonly Finding[];
-  /**
-   * The stretch of whole list items that overlaps `start`..`end` (it reads alone as it reads in
-   * place), for reading the model of a few records; undefined outside the list's items.
-   */
-  itemsAround(start: number, end: number): { readonly start: number; readonly end: number } | undefined;
-}
-
-/** Reads successive versions of one YAML document. */
-export type YamlListReader = (text: ChunkedText) => YamlListVersion;
-
-/** The remembered list of one version: item spans and their findings, relative to each start. */
-interface ListState {
-  readonly text: ChunkedText;
-  /** Item `k` runs from `starts[k]` to `ends[k]`: whole lines, each ending where the next starts. */
-  readonly starts: Int32Array;
-  readonly ends: Int32Array;
-  readonly itemFindings: (readonly Finding[])[];
+/** The remembered list of one version; items are whole lines, each ending where the next starts. */
+interface ListState extends ListParts {
   /** The column of the items' dashes. */
   readonly indent: number;
-  /** Findings before the list's items (absolute) and after them (relative to `tail`). */
-  readonly before: readonly Finding[];
-  readonly after: readonly Finding[];
-  /** Where the text after the last item starts. */
-  readonly tail: number;
 }
-
-const NO_FINDINGS: readonly Finding[] = [];
 
 /** A line that ends a document or holds a directive: never part of a list item. */
 const DOCUMENT_LINE = /(?:^|\n)(?:(?:---|\.\.\.)(?:[ \t\r\n]|$)|%)/;
@@ -75,39 +49,11 @@ const SPACE = 0x20;
 const LINE_FEED = 0x0a;
 
 /** A reader that keeps the last version's list; keep one per open document. */
-export function yamlListReader(read: SpeciesReader): YamlListReader {
-  let last: ListState | undefined;
-  return (text) => {
-    const edited = last && editedState(last, text, read);
-    if (edited) {
-      last = edited;
-      return versionOf(edited);
-    }
-    const whole = wholeState(text, read);
-    last = "starts" in whole ? whole : undefined;
-    return "starts" in whole ? versionOf(whole) : { findings: () => whole.findings, itemsAround: () => undefined };
-  };
-}
-
-function versionOf(state: ListState): YamlListVersion {
-  let findings: Finding[] | undefined;
-  return {
-    findings() {
-      if (findings) return findings;
-      findings = [...state.before];
-      for (let index = 0; index < state.starts.length; index++) {
-        for (const finding of state.itemFindings[index]) findings.push(moved(finding, state.starts[index]));
-      }
-      for (const finding of state.after) findings.push(moved(finding, state.tail));
-      return findings;
-    },
-    itemsAround(start, end) {
-      const first = lastAtOrBefore(state.starts, start);
-      if (first < 0 || start > state.ends[first]) return undefined;
-      const lastIndex = Math.max(first, lastAtOrBefore(state.starts, end));
-      return { start: state.starts[first], end: state.ends[lastIndex] };
-    },
-  };
+export function yamlListReader(read: SpeciesReader): ListReader {
+  return rememberingListReader<ListState>(
+    (last, text) => editedState(last, text, read),
+    (text) => wholeState(text, read),
+  );
 }
 
 /**
@@ -137,7 +83,7 @@ function wholeState(text: ChunkedText, read: SpeciesReader): ListState | { reado
   for (let index = 0; index < starts.length; index++) ends[index] = index + 1 < starts.length ? starts[index + 1] : tail;
   const parts = partition(all, starts, ends);
   if (!parts) return plain;
-  return { text, starts, ends, itemFindings: parts.inside, indent: items.indent, before: parts.before, after: parts.after, tail };
+  return { text, starts, ends, partFindings: parts.inside, indent: items.indent, before: parts.before, after: parts.after, tail };
 }
 
 /**
@@ -291,7 +237,7 @@ function editedState(previous: ListState, text: ChunkedText, read: SpeciesReader
     text,
     starts,
     ends,
-    itemFindings: previous.itemFindings.slice(0, first).concat(items.findings, previous.itemFindings.slice(after)),
+    partFindings: previous.partFindings.slice(0, first).concat(items.findings, previous.partFindings.slice(after)),
     indent: previous.indent,
     before: previous.before,
     after: previous.after,
