@@ -8,22 +8,29 @@
  */
 import { distinctReactions } from "./analyzeDocument";
 import { checkDocument } from "./checkDocument";
-import { chunkIndexAt, sliceOf, type ChunkedText } from "./chunkedText";
-import { placedParts } from "./findingPart";
+import { sliceOf, type ChunkedText } from "./chunkedText";
 import type { DocumentAnalysis } from "./incrementalAnalysis";
 import { markdownBlocks, markdownBlockStream, scanMarkdownBlock, type MarkdownBlock } from "./scanMarkdown";
-import { joinedModels, shiftedModel } from "./shiftedModel";
-import { speciesAtOffset } from "./speciesAt";
+import {
+  changedStretch,
+  indexOf,
+  LARGE_CHANGE,
+  lastIndexBefore,
+  lineEndAt,
+  lineStartAt,
+  remember,
+  segmentedAnalysis,
+  windowEndAt,
+  type SegmentReading,
+} from "./segmentedAnalysis";
+import { shiftedModel } from "./shiftedModel";
 import type { SpeciesReader } from "./speciesReader";
 import { moved } from "./tables/delimitedFindings";
 import type { RecordSink } from "./tables/records";
-import type { DocumentModel, Finding, SpeciesOccurrence } from "./types";
+import type { DocumentModel, SpeciesOccurrence } from "./types";
 
 /** What one block yields, with offsets from the block's start. */
-interface BlockReading {
-  readonly model: DocumentModel;
-  readonly findings: readonly Finding[];
-}
+type BlockReading = SegmentReading;
 
 /** One version's blocks, each with offsets from its own start, and where each starts. */
 interface BlockList {
@@ -59,20 +66,14 @@ interface SplitStretch {
 
 /** How much text the split reads at a time, at first. */
 const SPLIT_STRETCH = 64 * 1024;
-/** An edit that changes more text than this is split afresh. */
-const LARGE_CHANGE = 1024 * 1024;
 /** A request this far past where the first split has got to is answered from the lines around it. */
 const FAR_AHEAD = 256 * 1024;
 /** How much text around a position is read when the split has not got there yet. */
 const LOCAL_READ = 2048;
-/** Placed block models kept per version, for requests about one place. */
-const PLACED_MODELS_KEPT = 16;
 /** Readings remembered by their text, for blocks written again word for word (a repeated table row, a run's template). */
 const READINGS_BY_TEXT_KEPT = 2048;
 /** Only blocks shorter than this (with their lines) are remembered by text. */
 const READING_BY_TEXT_LENGTH = 2048;
-/** Distinct species texts remembered for preparing hovers. */
-const DISTINCT_SPECIES_KEPT = 4096;
 
 /**
  * Analyses successive versions of one markdown document, reusing the blocks an edit left alone;
@@ -107,98 +108,32 @@ interface BlockReader {
 
 function analysisOf(list: BlockList, reader: BlockReader, readings: WeakMap<MarkdownBlock, BlockReading>): DocumentAnalysis {
   const read = reader.read;
-  const { blocks, starts } = list;
-  const readingOf = (index: number): BlockReading => {
-    const block = blocks[index];
-    let reading = readings.get(block);
-    if (!reading) {
-      reading = blockReading(list, index, reader);
-      readings.set(block, reading);
-    }
-    return reading;
-  };
-  const placedFindings = (index: number): readonly Finding[] => {
-    const findings = readingOf(index).findings;
-    const start = starts[index];
-    return start === 0 ? findings : findings.map((finding) => moved(finding, start));
-  };
-  const placed = new Map<number, DocumentModel>();
-  const placedModel = (index: number): DocumentModel => {
-    let model = placed.get(index);
-    if (!model) {
-      model = shiftedModel(readingOf(index).model, starts[index]);
-      placed.set(index, model);
-      if (placed.size > PLACED_MODELS_KEPT) placed.delete(placed.keys().next().value as number);
-    }
-    return model;
-  };
-  /** The indexes of the blocks that overlap `start`..`end`, ends included (the split made that far). */
-  const indexesAround = (start: number, end: number): number[] => {
-    splitUpTo(list, end);
-    let low = 0;
-    let high = blocks.length;
-    while (low < high) {
-      const middle = (low + high) >> 1;
-      if (starts[middle] + blocks[middle].end < start) low = middle + 1;
-      else high = middle;
-    }
-    const indexes: number[] = [];
-    for (let index = low; index < blocks.length && starts[index] <= end; index++) indexes.push(index);
-    return indexes;
-  };
-  /** Whether the split must still go far to reach `offset`: the lines around it are read instead. */
-  const farAhead = (offset: number): boolean => list.rest !== undefined && offset - splitReached(list) > FAR_AHEAD;
-  const modelAround = (start: number, end: number): DocumentModel =>
-    farAhead(end) ? localModel(list.text, start, end, read) : joinedModels("markdown", indexesAround(start, end).map(placedModel));
-  let findings: readonly Finding[] | undefined;
-  const allFindings = (): readonly Finding[] => {
-    if (findings) return findings;
-    const all: Finding[] = [];
-    for (let index = 0; hasBlock(list, index); index++) for (const finding of placedFindings(index)) all.push(finding);
-    findings = all;
-    return findings;
-  };
-  return {
-    kind: "markdown",
-    binary: false,
-    findings: allFindings,
-    findingParts() {
-      return placedParts(this.findingPartsAt());
+  const { blocks } = list;
+  return segmentedAnalysis("markdown", {
+    cut: {
+      starts: list.starts,
+      lengthOf: (index) => blocks[index].end,
+      more: () => list.rest !== undefined,
+      next: () => nextBlock(list),
     },
-    *findingPartsAt() {
-      if (findings) {
-        yield { findings, offset: 0 };
-        return;
+    readingOf: (index) => {
+      const block = blocks[index];
+      let reading = readings.get(block);
+      if (!reading) {
+        reading = blockReading(list, index, reader);
+        readings.set(block, reading);
       }
-      for (let index = 0; hasBlock(list, index); index++) yield { findings: readingOf(index).findings, offset: starts[index] };
+      return reading;
     },
-    findingsAround: (start, end) =>
-      farAhead(end) ? localFindings(list.text, start, end, read) : indexesAround(start, end).flatMap(placedFindings),
-    model: () => {
-      const models: DocumentModel[] = [];
-      for (let index = 0; hasBlock(list, index); index++) models.push(placedModel(index));
-      return models.length === 0 ? emptyModel() : joinedModels("markdown", models);
-    },
-    modelAround,
-    speciesAt: (offset) => speciesAtOffset(modelAround(offset, offset), offset),
-    // Gathered as blocks are read, so a long document is not walked again on every version.
+    // The split must still go far to reach the offset: the lines around it are read instead.
+    farAhead: (offset) => list.rest !== undefined && offset - splitReached(list) > FAR_AHEAD,
+    localModel: (start, end) => localModel(list.text, start, end, read),
     distinctSpecies: () => [...reader.met.values()],
-  };
+  });
 }
 
 // ---------------------------------------------------------------------------------------------
 // The split
-
-/** Whether block `index` exists, splitting further if needed. */
-function hasBlock(list: BlockList, index: number): boolean {
-  while (index >= list.blocks.length && list.rest) nextBlock(list);
-  return index < list.blocks.length;
-}
-
-/** Splits until every block starting at or before `offset` is known. */
-function splitUpTo(list: BlockList, offset: number): void {
-  while (list.rest && (list.starts.length === 0 || list.starts[list.starts.length - 1] <= offset)) nextBlock(list);
-}
 
 /** How far the split has got: every block starting before here is known. */
 function splitReached(list: BlockList): number {
@@ -253,7 +188,7 @@ function splitStretch(text: ChunkedText, rest: SplitRest): SplitStretch {
   // Front matter ends wherever its closing line is: a document that opens with it is split whole.
   const whole = rest.from === 0 && opensWithFrontMatterLine(text);
   const reach = rest.from + rest.size;
-  const end = whole || reach >= text.length ? text.length : Math.min(text.length, lineEndAt(text, reach) + 1);
+  const end = whole ? text.length : windowEndAt(text, reach);
   const source = sliceOf(text, rest.from, end);
   return { source, complete: end >= text.length, stream: markdownBlockStream(source, { atDocumentStart: rest.from === 0 }) };
 }
@@ -293,7 +228,7 @@ function editedList(old: BlockList, text: ChunkedText, stretch: number): BlockLi
   const delta = text.length - old.text.length;
   for (let span = 8192; ; span *= 2) {
     const reach = change.newEnd + span;
-    const windowEnd = reach >= text.length ? text.length : Math.min(text.length, lineEndAt(text, reach) + 1);
+    const windowEnd = windowEndAt(text, reach);
     const complete = windowEnd >= text.length;
     const window = sliceOf(text, restart, windowEnd);
     const blocks = [...kept.blocks];
@@ -324,73 +259,9 @@ function editedList(old: BlockList, text: ChunkedText, stretch: number): BlockLi
   }
 }
 
-/** Where two versions differ: from `start` to `oldEnd` in the old one, to `newEnd` in the new. */
-export function changedStretch(old: ChunkedText, text: ChunkedText): { start: number; oldEnd: number; newEnd: number } | undefined {
-  const shorter = Math.min(old.chunks.length, text.chunks.length);
-  let same = 0;
-  while (same < shorter && old.chunks[same] === text.chunks[same]) same++;
-  if (same === old.chunks.length && same === text.chunks.length) return undefined;
-  let sameAtEnd = 0;
-  while (sameAtEnd < shorter - same && old.chunks[old.chunks.length - 1 - sameAtEnd] === text.chunks[text.chunks.length - 1 - sameAtEnd])
-    sameAtEnd++;
-  const from = old.starts[same];
-  const oldTo = old.starts[old.chunks.length - sameAtEnd];
-  const newTo = text.starts[text.chunks.length - sameAtEnd];
-  if (oldTo - from > LARGE_CHANGE || newTo - from > LARGE_CHANGE) return { start: from, oldEnd: oldTo, newEnd: newTo };
-  // Chunks are a few kilobytes: narrow the change down to the characters that differ.
-  const before = sliceOf(old, from, oldTo);
-  const after = sliceOf(text, from, newTo);
-  let prefix = 0;
-  while (prefix < before.length && prefix < after.length && before.charCodeAt(prefix) === after.charCodeAt(prefix)) prefix++;
-  let suffix = 0;
-  while (
-    suffix < before.length - prefix &&
-    suffix < after.length - prefix &&
-    before.charCodeAt(before.length - 1 - suffix) === after.charCodeAt(after.length - 1 - suffix)
-  )
-    suffix++;
-  return { start: from + prefix, oldEnd: oldTo - suffix, newEnd: newTo - suffix };
-}
-
 /** Whether the first line is "---", which opens front matter if a closing line follows anywhere. */
 function opensWithFrontMatterLine(text: ChunkedText): boolean {
   return /^\uFEFF?---\s*$/.test(sliceOf(text, 0, Math.min(lineEndAt(text, 0), 4096)));
-}
-
-/** The index of the last of the ascending `starts` below `limit`, or -1. */
-export function lastIndexBefore(starts: readonly number[], limit: number): number {
-  let low = 0;
-  let high = starts.length;
-  while (low < high) {
-    const middle = (low + high) >> 1;
-    if (starts[middle] < limit) low = middle + 1;
-    else high = middle;
-  }
-  return low - 1;
-}
-
-/** The index of `value` in the ascending `starts`, or -1. */
-export function indexOf(starts: readonly number[], value: number): number {
-  const index = lastIndexBefore(starts, value + 1);
-  return index >= 0 && starts[index] === value ? index : -1;
-}
-
-/** The start of the line holding `offset`. */
-export function lineStartAt(text: ChunkedText, offset: number): number {
-  if (offset <= 0 || text.chunks.length === 0) return 0;
-  const index = chunkIndexAt(text, offset);
-  const local = offset - text.starts[index];
-  if (local === 0) return text.starts[index];
-  const lineFeed = text.chunks[index].text.lastIndexOf("\n", local - 1);
-  return lineFeed < 0 ? text.starts[index] : text.starts[index] + lineFeed + 1;
-}
-
-/** The offset of the line feed at or after `offset`, or the text's length. */
-export function lineEndAt(text: ChunkedText, offset: number): number {
-  if (offset >= text.length) return text.length;
-  const index = chunkIndexAt(text, offset);
-  const lineFeed = text.chunks[index].text.indexOf("\n", offset - text.starts[index]);
-  return lineFeed < 0 ? text.length : text.starts[index] + lineFeed;
 }
 
 // ---------------------------------------------------------------------------------------------
@@ -436,10 +307,7 @@ function blockReading(list: BlockList, index: number, reader: BlockReader): Bloc
   const findings = checkDocument(model, undefined);
   const by = from - start;
   const reading = { model: shiftedModel(model, by), findings: by === 0 ? findings : findings.map((finding) => moved(finding, by)) };
-  for (const occurrence of model.occurrences) {
-    if (reader.met.size >= DISTINCT_SPECIES_KEPT) break;
-    if (!reader.met.has(occurrence.text)) reader.met.set(occurrence.text, occurrence);
-  }
+  remember(reader.met, model.occurrences);
   if (key !== undefined) {
     reader.byText.set(key, reading);
     if (reader.byText.size > READINGS_BY_TEXT_KEPT) reader.byText.delete(reader.byText.keys().next().value as string);
@@ -458,10 +326,6 @@ function modelOf(sink: RecordSink): DocumentModel {
   };
 }
 
-function emptyModel(): DocumentModel {
-  return { kind: "markdown", occurrences: [], records: [], problems: [], unreadable: [], reactions: [] };
-}
-
 /**
  * The model of the lines around `start`..`end`, read as markdown of their own: for a request
  * about a place the first split has not reached yet, the answer the lines there give.
@@ -475,8 +339,4 @@ function localModel(text: ChunkedText, start: number, end: number, read: Species
     if (block.end >= start - from && block.start <= end - from) scanMarkdownBlock(source, block, read, sink);
   }
   return shiftedModel(modelOf(sink), from);
-}
-
-function localFindings(text: ChunkedText, start: number, end: number, read: SpeciesReader): readonly Finding[] {
-  return checkDocument(localModel(text, start, end, read), undefined);
 }

@@ -9,12 +9,10 @@
  * comment re-reads onward for as long as the comment state out of a unit changes.
  */
 import { analyzeDocument, distinctReactions } from "./analyzeDocument";
-import { checkDocument, documentChecker } from "./checkDocument";
-import { placedParts } from "./findingPart";
+import { documentChecker } from "./checkDocument";
 import type { Reaction } from "./reactions/reactionTypes";
 import { sliceOf, type ChunkedText } from "./chunkedText";
 import type { DocumentAnalysis } from "./incrementalAnalysis";
-import { changedStretch, indexOf as indexOfStart, lastIndexBefore, lineEndAt, lineStartAt } from "./markdownAnalysis";
 import {
   hasSeriesNear,
   NO_IDS,
@@ -25,10 +23,23 @@ import {
   type PlainTextUnit,
   type UnitsNear,
 } from "./scanPlainText";
-import { joinedModels, shiftedModel } from "./shiftedModel";
-import { speciesAtOffset } from "./speciesAt";
+import {
+  changedStretch,
+  cutUpTo,
+  hasSegment,
+  indexOf as indexOfStart,
+  LARGE_CHANGE,
+  lastIndexBefore,
+  lineEndAt,
+  lineStartAt,
+  remember,
+  segmentedAnalysis,
+  windowEndAt,
+  type SegmentCut,
+  type SegmentReading,
+} from "./segmentedAnalysis";
+import { shiftedModel } from "./shiftedModel";
 import type { SpeciesReader } from "./speciesReader";
-import { moved } from "./tables/delimitedFindings";
 import type { RecordSink } from "./tables/records";
 import type { DocumentModel, Finding, SpeciesOccurrence, UnreadableSpecies } from "./types";
 
@@ -39,13 +50,11 @@ interface Unit {
 }
 
 /** What one unit yields, with offsets from the unit's start, and the carry it was read under. */
-interface UnitReading {
+interface UnitReading extends SegmentReading {
   readonly commentIn: boolean;
   /** The series lookups the reading made, and their answers. */
   readonly asked: ReadonlyMap<string, boolean>;
   readonly commentOut: boolean;
-  readonly model: DocumentModel;
-  readonly findings: readonly Finding[];
 }
 
 /** One version's units and where each starts. */
@@ -71,22 +80,16 @@ interface RestToCut {
  */
 const CUT_WINDOW_CHUNKS = 4;
 
-/** An edit that changes more text than this is cut afresh. */
-const LARGE_CHANGE = 1024 * 1024;
 /** A request this far past where the reading in order has got to is answered from the lines around it. */
 const FAR_AHEAD = 32 * 1024;
 /** How much text around a position is read when the reading has not got there yet. */
 const LOCAL_READ = 2048;
-/** Placed unit models kept per version, for requests about one place. */
-const PLACED_MODELS_KEPT = 16;
 /**
  * A unit longer than this many chunks of text (64 KB at the usual chunk size; a log without blank
  * lines) hands out its findings a part at a time on its first reading, one part for as many
  * mentions as a chunk has characters over four (4,096, as `findingsInParts` does).
  */
 const LONG_UNIT_CHUNKS = 4;
-/** Distinct species texts remembered for preparing hovers. */
-const DISTINCT_SPECIES_KEPT = 4096;
 
 /** What readings are kept across versions. */
 interface UnitCaches {
@@ -110,6 +113,12 @@ export function plainTextAnalyser(read: SpeciesReader): (text: ChunkedText) => D
 
 function analysisOf(list: UnitList, caches: UnitCaches): DocumentAnalysis {
   const { units, starts } = list;
+  const cut: SegmentCut = {
+    starts,
+    lengthOf: (index) => units[index].length,
+    more: () => list.rest !== undefined,
+    next: () => nextUnit(list),
+  };
   const near: UnitsNear = {
     get count() {
       return units.length;
@@ -132,7 +141,7 @@ function analysisOf(list: UnitList, caches: UnitCaches): DocumentAnalysis {
     return known && known.commentIn === commentBefore(index) && stillAnswers(known.asked, index) ? known : undefined;
   };
   const seriesNear = (index: number, symbol: string): boolean => {
-    splitUpTo(list, starts[index] + units[index].length + SERIES_REACH);
+    cutUpTo(cut, starts[index] + units[index].length + SERIES_REACH);
     return hasSeriesNear(near, index, symbol);
   };
   const stillAnswers = (asked: ReadonlyMap<string, boolean>, index: number): boolean => {
@@ -156,94 +165,32 @@ function analysisOf(list: UnitList, caches: UnitCaches): DocumentAnalysis {
   const cheaplyReached = (offset: number): boolean => {
     for (;;) {
       const index = list.commentOut.length;
-      if (!hasUnit(list, index) || starts[index] > offset) return true;
+      if (!hasSegment(cut, index) || starts[index] > offset) return true;
       const known = caches.readings.get(units[index]);
       const commentIn = index === 0 ? false : list.commentOut[index - 1];
       if (!known || known.commentIn !== commentIn) return false;
       list.commentOut.push(readingOf(index).commentOut);
     }
   };
-  const placedFindings = (index: number): readonly Finding[] => {
-    const findings = readingOf(index).findings;
-    const start = starts[index];
-    return start === 0 ? findings : findings.map((finding) => moved(finding, start));
-  };
-  const placed = new Map<number, DocumentModel>();
-  const placedModel = (index: number): DocumentModel => {
-    let model = placed.get(index);
-    if (!model) {
-      model = shiftedModel(readingOf(index).model, starts[index]);
-      placed.set(index, model);
-      if (placed.size > PLACED_MODELS_KEPT) placed.delete(placed.keys().next().value as number);
-    }
-    return model;
-  };
-  /** The indexes of the units that overlap `start`..`end`, ends included (the cut made that far). */
-  const indexesAround = (start: number, end: number): number[] => {
-    splitUpTo(list, end);
-    let low = 0;
-    let high = units.length;
-    while (low < high) {
-      const middle = (low + high) >> 1;
-      if (starts[middle] + units[middle].length < start) low = middle + 1;
-      else high = middle;
-    }
-    const indexes: number[] = [];
-    for (let index = low; index < units.length && starts[index] <= end; index++) indexes.push(index);
-    return indexes;
-  };
-  const modelAround = (start: number, end: number): DocumentModel => {
-    if (farAhead(end)) return localModel(list.text, start, end, caches.read);
-    const indexes = indexesAround(start, end);
-    return indexes.length === 0 ? emptyModel() : joinedModels("plaintext", indexes.map(placedModel));
-  };
-  let findings: readonly Finding[] | undefined;
-  const allFindings = (): readonly Finding[] => {
-    if (findings) return findings;
-    const all: Finding[] = [];
-    for (let index = 0; hasUnit(list, index); index++) for (const finding of placedFindings(index)) all.push(finding);
-    findings = all;
-    return findings;
-  };
-  return {
-    kind: "plaintext",
-    binary: false,
-    findings: allFindings,
-    findingParts() {
-      return placedParts(this.findingPartsAt());
-    },
-    *findingPartsAt() {
-      const partSize = Math.max(16, list.text.chunkTarget / 4);
-      if (findings) {
-        yield { findings, offset: 0 };
-        return;
-      }
-      for (let index = 0; hasUnit(list, index); index++) {
-        const offset = starts[index];
-        if (units[index].length > LONG_UNIT_CHUNKS * list.text.chunkTarget && !validReading(index)) {
-          // A long unit not read yet: its findings a part at a time, so the caller may stop early.
-          const commentIn = commentBefore(index);
-          const parts = unitReadingInParts(list, index, commentIn, (symbol) => seriesNear(index, symbol), caches, partSize);
-          let step = parts.next();
-          for (; !step.done; step = parts.next()) yield { findings: step.value, offset };
-          caches.readings.set(units[index], step.value);
-          continue;
-        }
-        yield { findings: readingOf(index).findings, offset };
-      }
-    },
-    findingsAround: (start, end) =>
-      farAhead(end) ? checkDocument(localModel(list.text, start, end, caches.read)) : indexesAround(start, end).flatMap(placedFindings),
-    model: () => {
-      const models: DocumentModel[] = [];
-      for (let index = 0; hasUnit(list, index); index++) models.push(placedModel(index));
-      return models.length === 0 ? emptyModel() : joinedModels("plaintext", models);
-    },
-    modelAround,
-    speciesAt: (offset) => speciesAtOffset(modelAround(offset, offset), offset),
-    // Gathered as units are read, so a long document is not walked again on every version.
+  return segmentedAnalysis("plaintext", {
+    cut,
+    readingOf,
+    farAhead,
+    localModel: (start, end) => localModel(list.text, start, end, caches.read),
     distinctSpecies: () => [...caches.met.values()],
-  };
+    partsOf(index) {
+      // A long unit not read yet: its findings a part at a time, so the caller may stop early.
+      if (units[index].length <= LONG_UNIT_CHUNKS * list.text.chunkTarget || validReading(index)) return undefined;
+      return longUnitParts(index);
+    },
+  });
+  function* longUnitParts(index: number): Generator<readonly Finding[]> {
+    const partSize = Math.max(16, list.text.chunkTarget / 4);
+    const parts = unitReadingInParts(list, index, commentBefore(index), (symbol) => seriesNear(index, symbol), caches, partSize);
+    let step = parts.next();
+    for (; !step.done; step = parts.next()) yield step.value;
+    caches.readings.set(units[index], step.value);
+  }
 }
 
 function idsOf(list: UnitList, index: number, caches: UnitCaches): ReadonlySet<string> {
@@ -313,10 +260,7 @@ function* unitReadingInParts(
     occurrences.push(...part.occurrences);
     unreadable.push(...(part.unreadable ?? []));
     reactions.push(...(part.reactions ?? []));
-    for (const occurrence of part.occurrences) {
-      if (caches.met.size >= DISTINCT_SPECIES_KEPT) break;
-      if (!caches.met.has(occurrence.text)) caches.met.set(occurrence.text, occurrence);
-    }
+    remember(caches.met, part.occurrences);
     const found = check(part);
     findings.push(...found);
     return found;
@@ -341,10 +285,6 @@ function takenBefore<T extends { readonly range: { readonly start: number } }>(i
   return taken;
 }
 
-function emptyModel(): DocumentModel {
-  return { kind: "plaintext", occurrences: [], records: [], problems: [], unreadable: [], reactions: [] };
-}
-
 /**
  * The model of the lines around `start`..`end`, read as plain text of their own: for a request
  * about a place the reading in order has not reached yet, the answer the lines there give.
@@ -357,17 +297,6 @@ function localModel(text: ChunkedText, start: number, end: number, read: Species
 
 // ---------------------------------------------------------------------------------------------
 // The cut
-
-/** Whether unit `index` exists, cutting further if needed. */
-function hasUnit(list: UnitList, index: number): boolean {
-  while (index >= list.units.length && list.rest) nextUnit(list);
-  return index < list.units.length;
-}
-
-/** Cuts until every unit starting at or before `offset` is known. */
-function splitUpTo(list: UnitList, offset: number): void {
-  while (list.rest && (list.starts.length === 0 || list.starts[list.starts.length - 1] <= offset)) nextUnit(list);
-}
 
 function nextUnit(list: UnitList): void {
   const rest = list.rest;
@@ -390,7 +319,7 @@ function nextUnit(list: UnitList): void {
 function cutWindow(text: ChunkedText, rest: RestToCut): void {
   for (let span = CUT_WINDOW_CHUNKS * text.chunkTarget; ; span *= 2) {
     const reach = rest.from + span;
-    const windowEnd = reach >= text.length ? text.length : Math.min(text.length, lineEndAt(text, reach) + 1);
+    const windowEnd = windowEndAt(text, reach);
     const window = sliceOf(text, rest.from, windowEnd);
     const units = [...plainTextUnits(window)].map((unit) => ({ ...unit, start: unit.start + rest.from, end: unit.end + rest.from }));
     if (windowEnd >= text.length) {
@@ -436,7 +365,7 @@ function editedList(old: UnitList, text: ChunkedText): UnitList | undefined {
   // Half a chunk past the edit first (8 KB at the usual chunk size), then twice as far, and so on.
   for (let span = Math.max(64, text.chunkTarget / 2); ; span *= 2) {
     const reach = change.newEnd + span;
-    const windowEnd = reach >= text.length ? text.length : Math.min(text.length, lineEndAt(text, reach) + 1);
+    const windowEnd = windowEndAt(text, reach);
     const complete = windowEnd >= text.length;
     const window = sliceOf(text, restart, windowEnd);
     const newUnits = [...units];
