@@ -2,8 +2,8 @@
  * The stdio frame decoder: LSP base-protocol framing (Content-Length header, blank line, JSON
  * body), whatever the chunking, and recovery from garbage between frames.
  */
-import { describe, expect, it } from "vitest";
-import { createFrameDecoder, type DecodedFrame } from "../../server/src/lsp/frameDecoder";
+import { beforeEach, describe, expect, it } from "vitest";
+import { createFrameDecoder, type DecodedFrame, type FrameDecoder } from "../../server/src/lsp/frameDecoder";
 
 // source: LSP specification, base protocol: header part "Content-Length: N\r\n", then "\r\n", then N bytes
 function frame(message: unknown): Buffer {
@@ -11,8 +11,15 @@ function frame(message: unknown): Buffer {
   return Buffer.concat([Buffer.from(`Content-Length: ${body.length}\r\n\r\n`, "ascii"), body]);
 }
 
+// Every body is read both ways: whole, and while it arrives with tiny slabs, as large bodies are.
+const READINGS: readonly (readonly [string, () => FrameDecoder])[] = [
+  ["bodies read whole", () => createFrameDecoder()],
+  ["bodies read as they arrive", () => createFrameDecoder({ from: 0, sizes: { longString: 4, slab: 8 } })],
+];
+let makeDecoder = READINGS[0][1];
+
 function decodeAll(chunks: readonly Buffer[]): DecodedFrame[] {
-  const decoder = createFrameDecoder();
+  const decoder = makeDecoder();
   const frames: DecodedFrame[] = [];
   for (const chunk of chunks) {
     decoder.push(chunk);
@@ -24,7 +31,11 @@ function decodeAll(chunks: readonly Buffer[]): DecodedFrame[] {
 const hover = { jsonrpc: "2.0", id: 1, method: "textDocument/hover", params: { note: "SF4 in bay C, 🧪 é" } };
 const exit = { jsonrpc: "2.0", method: "exit" };
 
-describe("frame decoder", () => {
+describe.each(READINGS)("frame decoder, %s", (_reading, make) => {
+  beforeEach(() => {
+    makeDecoder = make;
+  });
+
   it("decodes the same messages however the stream is split", () => {
     const stream = Buffer.concat([frame(hover), frame(exit)]);
     for (let cut = 0; cut <= stream.length; cut += 1) {

@@ -5,6 +5,7 @@
  */
 
 import { StringDecoder } from "node:string_decoder";
+import { createLargeBodyReader, type LargeBodySizes } from "./largeBodyReader";
 
 /** What one step of decoding produced. */
 export type DecodedFrame =
@@ -28,14 +29,49 @@ const MAX_HEADER_BYTES = 16 * 1024;
 const HEADER_END = Buffer.from("\r\n\r\n");
 const LENGTH_KEY = Buffer.from("content-length:");
 
-/** A body being read: its text so far, decoded as its bytes arrive. */
+/** A body at least this long is read as it arrives (see largeBodyReader.ts). */
+export const LARGE_BODY_BYTES = 1024 * 1024;
+
+/** A body being read, its bytes handed over as they arrive. */
 interface BodyInProgress {
   remaining: number;
-  readonly pieces: string[];
-  readonly decoder: StringDecoder;
+  write(bytes: Buffer): void;
+  /** The decoded frame, once every byte has been written. */
+  finish(): DecodedFrame;
 }
 
-export function createFrameDecoder(): FrameDecoder {
+/** A body read whole: its text decoded as its bytes arrive, parsed at the end. */
+function smallBody(length: number): BodyInProgress {
+  const pieces: string[] = [];
+  // Reads UTF-8 as Buffer#toString does: invalid bytes become U+FFFD, a byte-order mark stays.
+  const decoder = new StringDecoder("utf8");
+  return {
+    remaining: length,
+    write: (bytes) => void pieces.push(decoder.write(bytes)),
+    finish() {
+      pieces.push(decoder.end());
+      return decodeBody(pieces.length === 1 ? pieces[0] : pieces.join(""));
+    },
+  };
+}
+
+/** A large body, parsed while it arrives. */
+function largeBody(length: number, sizes?: LargeBodySizes): BodyInProgress {
+  const reader = createLargeBodyReader(sizes);
+  return {
+    remaining: length,
+    write: (bytes) => reader.write(bytes),
+    finish() {
+      const result = reader.finish();
+      return result.ok ? asMessage(result.value) : notJson(result.error);
+    },
+  };
+}
+
+/** `largeBodies` sets the reading of large bodies (tests make it read small ones that way too). */
+export function createFrameDecoder(
+  largeBodies: { readonly from: number; readonly sizes?: LargeBodySizes } = { from: LARGE_BODY_BYTES },
+): FrameDecoder {
   // Bytes not yet decoded, in arrival order; the first may be a view into a larger chunk.
   let chunks: Buffer[] = [];
   let pending = 0;
@@ -87,20 +123,19 @@ export function createFrameDecoder(): FrameDecoder {
       return { kind: "error", error: new Error("Message header without a usable Content-Length; skipped") };
     }
     drop(end + HEADER_END.length);
-    // Reads UTF-8 as Buffer#toString does: invalid bytes become U+FFFD, a byte-order mark stays.
-    body = { remaining: length, pieces: [], decoder: new StringDecoder("utf8") };
+    body = length >= largeBodies.from ? largeBody(length, largeBodies.sizes) : smallBody(length);
     return "ok";
   };
 
   /**
-   * Decodes the body's bytes that have arrived, chunk by chunk, so a large message is turned
-   * into text while it streams in rather than copied whole at its end; true once it is complete.
+   * Hands the body's bytes that have arrived over, chunk by chunk, so a large message is read
+   * while it streams in rather than copied whole at its end; true once it is complete.
    */
   const readBody = (reading: BodyInProgress): boolean => {
     while (reading.remaining > 0 && chunks.length > 0) {
       const first = chunks[0];
       const taken = first.length <= reading.remaining ? first : first.subarray(0, reading.remaining);
-      reading.pieces.push(reading.decoder.write(taken));
+      reading.write(taken);
       reading.remaining -= taken.length;
       drop(taken.length);
     }
@@ -117,10 +152,9 @@ export function createFrameDecoder(): FrameDecoder {
       for (;;) {
         if (body) {
           if (!readBody(body)) return undefined;
-          body.pieces.push(body.decoder.end());
-          const text = body.pieces.length === 1 ? body.pieces[0] : body.pieces.join("");
+          const finished = body;
           body = undefined;
-          return decodeBody(text);
+          return finished.finish();
         }
         if (pending === 0) return undefined;
         const header = readHeader();
@@ -149,15 +183,24 @@ function contentLength(block: string): number | undefined {
 }
 
 function decodeBody(body: string): DecodedFrame {
+  let message: unknown;
   try {
-    const message: unknown = JSON.parse(body);
-    if (typeof message === "object" && message !== null && !Array.isArray(message)) {
-      return { kind: "message", message: message as Record<string, unknown> };
-    }
-    return { kind: "error", error: new Error("Message body is not a JSON object; dropped") };
+    message = JSON.parse(body);
   } catch (error) {
-    return { kind: "error", error: new Error(`Message body is not valid JSON; dropped (${String(error)})`) };
+    return notJson(error);
   }
+  return asMessage(message);
+}
+
+function asMessage(message: unknown): DecodedFrame {
+  if (typeof message === "object" && message !== null && !Array.isArray(message)) {
+    return { kind: "message", message: message as Record<string, unknown> };
+  }
+  return { kind: "error", error: new Error("Message body is not a JSON object; dropped") };
+}
+
+function notJson(error: unknown): DecodedFrame {
+  return { kind: "error", error: new Error(`Message body is not valid JSON; dropped (${String(error)})`) };
 }
 
 /** Index of the lower-case `needle` in `haystack` ignoring ASCII case, from `from`; -1 when absent. */
