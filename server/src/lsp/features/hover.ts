@@ -41,8 +41,36 @@ export interface HoverFeature {
   warmUp(): Promise<void>;
 }
 
-// common practice: one small species of each common electron geometry, for the warm-up.
-const WARM_UP_SPECIES = ["H2O", "NH3", "BF3", "SF6", "XeF4"];
+// common practice: small species of every electron geometry, with and without lone pairs,
+// ions, multiple bonds, resonance, an odd electron, several centres and a salt, for the warm-up.
+const WARM_UP_SPECIES = [
+  "CO2",
+  "BF3",
+  "SO2",
+  "CH4",
+  "NH3",
+  "H2O",
+  "PCl5",
+  "SF4",
+  "ClF3",
+  "XeF2",
+  "SF6",
+  "BrF5",
+  "XeF4",
+  "IF7",
+  "NH4+",
+  "PF6-",
+  "SO4^2-",
+  "NO3-",
+  "O3",
+  "NO2",
+  "C2H4",
+  "CH3OH",
+  "NaCl",
+  "CuSO4",
+];
+/** Rounds over the list: the engine compiles a function for speed only after it has run a few times. */
+const WARM_UP_ROUNDS = 3;
 
 /** Distinct species whose cards one pass writes ahead: with cards of 5,000-20,000 characters, they fit the memo. */
 const PREPARED_CARDS_LIMIT = 200;
@@ -122,11 +150,13 @@ export function registerHover(
       }
     },
     async warmUp() {
-      const scratch = createHoverCardMemo();
       const options = { angleDecimals: DEFAULT_SETTINGS.angleDecimals, format: context.clientFeatures().hoverFormat };
-      for (const text of WARM_UP_SPECIES) {
-        await context.longWork.giveWay();
-        scratch.card(text, analyzeSpecies(text), options);
+      for (let round = 0; round < WARM_UP_ROUNDS; round++) {
+        const scratch = createHoverCardMemo();
+        for (const text of WARM_UP_SPECIES) {
+          await context.longWork.giveWay();
+          scratch.card(text, analyzeSpecies(text), options);
+        }
       }
     },
     viewed(uri, start, end) {
