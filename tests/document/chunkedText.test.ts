@@ -4,7 +4,7 @@
 import fc from "fast-check";
 import { describe, expect, it } from "vitest";
 import { TextDocument } from "vscode-languageserver-textdocument";
-import { chunkedTextOf, editChunkedText, offsetOf, positionOf, sliceOf, wholeText } from "../../shared/src/index";
+import { chunkedTextOf, chunkedTextOfPieces, editChunkedText, offsetOf, positionOf, sliceOf, wholeText } from "../../shared/src/index";
 
 // Pieces with every kind of line break, surrogate pairs and long lines.
 const piece = fc.constantFrom("a", "SF4 ", "\n", "\r\n", "\r", "\u00e9", "\ud83e\uddea", "x".repeat(40), "\n\n", "NF3,26\n");
@@ -58,5 +58,27 @@ describe("chunked text", () => {
     expect(before.chunks.length).toBeGreaterThan(3);
     // One chunk (or two, where the edit joins a short one) is new; the others are the same objects.
     expect(shared).toBeGreaterThanOrEqual(before.chunks.length - 2);
+  });
+
+  it("cuts a text given in pieces exactly as the same text given whole", () => {
+    const piecesArbitrary = fc.array(
+      fc.array(piece, { maxLength: 30 }).map((parts) => parts.join("")),
+      { maxLength: 12 },
+    );
+    fc.assert(
+      fc.property(piecesArbitrary, fc.constantFrom(1, 4, 16, 64), (pieces, target) => {
+        const whole = chunkedTextOf(pieces.join(""), target);
+        const pieced = chunkedTextOfPieces(pieces, target);
+        expect(pieced.chunks.map((chunk) => chunk.text)).toEqual(whole.chunks.map((chunk) => chunk.text));
+        expect(pieced.chunks.map((chunk) => chunk.lineBreaks)).toEqual(whole.chunks.map((chunk) => chunk.lineBreaks));
+        expect([pieced.starts, pieced.firstLines, pieced.length, pieced.lineCount]).toEqual([
+          whole.starts,
+          whole.firstLines,
+          whole.length,
+          whole.lineCount,
+        ]);
+      }),
+      { numRuns: 2_000 },
+    );
   });
 });

@@ -48,6 +48,33 @@ export function chunkedTextOf(text: string, chunkTarget = CHUNK_TARGET): Chunked
   return assemble(chunksOf(text, chunkTarget), chunkTarget);
 }
 
+/**
+ * The chunked form of the text made of `pieces` one after another, cut exactly as
+ * `chunkedTextOf` cuts their concatenation, without building that concatenation: a chunk is a
+ * slice of one piece, or joins the end of one piece to the start of the next.
+ */
+export function chunkedTextOfPieces(pieces: Iterable<string>, chunkTarget = CHUNK_TARGET): ChunkedText {
+  const chunks: TextChunk[] = [];
+  // The start of the chunk being cut, taken from earlier pieces; it holds no line feed at or
+  // after index chunkTarget - 1, where a cut would have been made.
+  let carry = "";
+  for (const piece of pieces) {
+    let at = 0;
+    while (at < piece.length) {
+      const lineFeed = piece.indexOf("\n", at + Math.max(0, chunkTarget - 1 - carry.length));
+      if (lineFeed < 0) {
+        carry += piece.slice(at);
+        break;
+      }
+      chunks.push(chunkOf(carry + piece.slice(at, lineFeed + 1)));
+      carry = "";
+      at = lineFeed + 1;
+    }
+  }
+  if (carry.length > 0) chunks.push(chunkOf(carry));
+  return assemble(chunks, chunkTarget);
+}
+
 /** `text` with the characters from `start` to `end` replaced by `insert` (offsets are clamped). */
 export function editChunkedText(text: ChunkedText, start: number, end: number, insert: string): ChunkedText {
   const from = clamp(start, 0, text.length);
