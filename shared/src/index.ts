@@ -158,8 +158,17 @@ export { gitCommandForUntrustedFolder } from "./workspace/gitCommand";
 export type { GitCommand } from "./workspace/gitCommand";
 
 // Documents edited in place: chunked text and analysis that reuses what an edit left alone.
-export { chunkIndexAt, chunkedTextOf, chunkedTextOfPieces, editChunkedText, offsetOf, positionOf, sliceOf, wholeText } from "./document/chunkedText";
-export type { ChunkedText, LineAndCharacter, TextChunk } from "./document/chunkedText";
+export {
+  chunkIndexAt,
+  chunkedTextOf,
+  createChunkedTextBuilder,
+  editChunkedText,
+  offsetOf,
+  positionOf,
+  sliceOf,
+  wholeText,
+} from "./document/chunkedText";
+export type { ChunkedText, ChunkedTextBuilder, LineAndCharacter, TextChunk } from "./document/chunkedText";
 export { createDocumentAnalyser } from "./document/incrementalAnalysis";
 export type { DocumentAnalyser, DocumentAnalysis } from "./document/incrementalAnalysis";
 export type { FindingPart } from "./document/findingPart";

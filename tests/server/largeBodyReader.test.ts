@@ -4,7 +4,9 @@
  * surrogate pairs, non-ASCII and invalid UTF-8 inside long strings, long keys, and broken JSON.
  */
 import { describe, expect, it } from "vitest";
+import { chunkedTextOf } from "../../shared/src/index";
 import { createLargeBodyReader, safeCut, type LargeBodySizes } from "../../server/src/lsp/largeBodyReader";
+import { takeChunked } from "../../server/src/lsp/longStringChunks";
 
 /** A small deterministic generator, so a failure can be replayed. */
 function randomSource(seed: number): () => number {
@@ -125,5 +127,23 @@ describe("large body reader", () => {
     ["a character cut at the end", "ab€", 2],
   ])("cuts %s where both sides decode alone", (_label, text, cut) => {
     expect(safeCut(Buffer.from(text, "utf8"))).toBe(cut);
+  });
+
+  it("hands the document store a long text already cut into the chunks it would cut", () => {
+    const random = randomSource(7);
+    for (let round = 0; round < 5; round++) {
+      const text = randomText(random, 40_000 + Math.floor(random() * 40_000));
+      const body = Buffer.from(JSON.stringify({ jsonrpc: "2.0", method: "textDocument/didOpen", params: { textDocument: { text } } }));
+      const result = readInChunks(body, randomCuts(random, body.length), { longString: 1024, slab: 4096 + Math.floor(random() * 8192) });
+      expect(result.ok).toBe(true);
+      const received = (result as { value: { params: { textDocument: { text: string } } } }).value.params.textDocument.text;
+      expect(received).toBe(text);
+      const chunked = takeChunked(received);
+      const expected = chunkedTextOf(text);
+      expect(chunked?.chunks.map((chunk) => chunk.text)).toEqual(expected.chunks.map((chunk) => chunk.text));
+      expect([chunked?.firstLines, chunked?.starts]).toEqual([expected.firstLines, expected.starts]);
+      // Taken once: the store's next text of the same length is cut afresh.
+      expect(takeChunked(received)).toBeUndefined();
+    }
   });
 });

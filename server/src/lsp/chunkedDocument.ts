@@ -5,6 +5,7 @@
  */
 import type { TextDocumentContentChangeEvent, TextDocumentsConfiguration } from "vscode-languageserver";
 import type { Position, Range, TextDocument } from "vscode-languageserver-textdocument";
+import { takeChunked } from "./longStringChunks";
 import { chunkedTextOf, editChunkedText, offsetOf, positionOf, sliceOf, wholeText, type ChunkedText } from "../../../shared/src/index";
 
 /** A text document whose current text is a `ChunkedText`. */
@@ -59,7 +60,7 @@ export function updateChunkedDocument(
       // Ranges are read against the text as the earlier changes left it, as the protocol says.
       text = editChunkedText(text, offsetOf(text, change.range.start), offsetOf(text, change.range.end), change.text);
     } else {
-      text = chunkedTextOf(change.text);
+      text = takeChunked(change.text) ?? chunkedTextOf(change.text);
     }
   }
   return createChunkedDocument(document.uri, document.languageId, version, text);
@@ -67,6 +68,7 @@ export function updateChunkedDocument(
 
 /** What `TextDocuments` needs to keep chunked documents. */
 export const CHUNKED_DOCUMENTS: TextDocumentsConfiguration<ChunkedTextDocument> = {
-  create: (uri, languageId, version, content) => createChunkedDocument(uri, languageId, version, chunkedTextOf(content)),
+  create: (uri, languageId, version, content) =>
+    createChunkedDocument(uri, languageId, version, takeChunked(content) ?? chunkedTextOf(content)),
   update: (document, changes, version) => updateChunkedDocument(document, changes, version),
 };

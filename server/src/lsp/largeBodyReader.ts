@@ -4,8 +4,13 @@
  * held up by the parse of the whole body. Long JSON strings (the document's text) are decoded
  * slab by slab as they stream in; the rest of the body, a few hundred bytes, is parsed at the
  * end with a marker where each long string goes. The result is what `JSON.parse` of the whole
- * body gives, errors included.
+ * body gives, errors included. Long strings are document texts: each is also cut into the
+ * chunks a document keeps while it arrives, and remembered (longStringChunks.ts) for the
+ * document store, which then neither copies it into one string nor reads it again.
  */
+
+import { createChunkedTextBuilder, type ChunkedTextBuilder } from "../../../shared/src/index";
+import { rememberChunked } from "./longStringChunks";
 
 const QUOTE = 0x22;
 const BACKSLASH = 0x5c;
@@ -42,8 +47,9 @@ export function createLargeBodyReader(sizes: LargeBodySizes = LARGE_BODY_SIZES):
   /** The string being read: its bytes from the opening quote ("string") or after it ("long"). */
   let current: Buffer[] = [];
   let currentBytes = 0;
-  /** Decoded slabs of the long string being read. */
+  /** Decoded slabs of the long string being read, and its chunks so far. */
   let slabs: string[] = [];
+  let chunks: ChunkedTextBuilder = createChunkedTextBuilder();
   /** Backslashes just before the next byte to read: an odd count escapes it. */
   let backslashRun = 0;
   let failure: Error | undefined;
@@ -62,8 +68,15 @@ export function createLargeBodyReader(sizes: LargeBodySizes = LARGE_BODY_SIZES):
     const cut = last ? bytes.length : safeCut(bytes);
     if (cut === 0) return;
     if (!failure) {
+      // One copy with its quotes around it, so the text JSON.parse reads is flat from the start.
+      const quoted = Buffer.allocUnsafe(cut + 2);
+      quoted[0] = QUOTE;
+      bytes.copy(quoted, 1, 0, cut);
+      quoted[cut + 1] = QUOTE;
       try {
-        slabs.push(JSON.parse(`"${bytes.toString("utf8", 0, cut)}"`) as string);
+        const slab = JSON.parse(quoted.toString("utf8")) as string;
+        slabs.push(slab);
+        chunks.add(slab);
       } catch (error) {
         failure = error instanceof Error ? error : new Error(String(error));
       }
@@ -75,8 +88,13 @@ export function createLargeBodyReader(sizes: LargeBodySizes = LARGE_BODY_SIZES):
   const endString = (): void => {
     if (mode === "long") {
       decodeSlab(true);
-      longStrings.push(slabs.length === 1 ? slabs[0] : slabs.join(""));
+      // Joined without a copy (the engine links the slabs); the document store takes the chunks.
+      let value = "";
+      for (const slab of slabs) value += slab;
+      if (!failure) rememberChunked(value, chunks.finish());
+      longStrings.push(value);
       slabs = [];
+      chunks = createChunkedTextBuilder();
       rest.push(Buffer.from(JSON.stringify(`${markerPrefix}${longStrings.length - 1}`)));
     } else {
       rest.push(...current);

@@ -48,31 +48,44 @@ export function chunkedTextOf(text: string, chunkTarget = CHUNK_TARGET): Chunked
   return assemble(chunksOf(text, chunkTarget), chunkTarget);
 }
 
+/** Builds a chunked text from pieces given one at a time, as they arrive. */
+export interface ChunkedTextBuilder {
+  /** The next piece of the text. */
+  add(piece: string): void;
+  /** The text so far, chunked; call once. */
+  finish(): ChunkedText;
+}
+
 /**
- * The chunked form of the text made of `pieces` one after another, cut exactly as
- * `chunkedTextOf` cuts their concatenation, without building that concatenation: a chunk is a
- * slice of one piece, or joins the end of one piece to the start of the next.
+ * A builder that cuts the text made of the pieces it is given exactly as `chunkedTextOf` cuts
+ * their concatenation, without building that concatenation: a chunk is a slice of one piece, or
+ * joins the end of one piece to the start of the next.
  */
-export function chunkedTextOfPieces(pieces: Iterable<string>, chunkTarget = CHUNK_TARGET): ChunkedText {
+export function createChunkedTextBuilder(chunkTarget = CHUNK_TARGET): ChunkedTextBuilder {
   const chunks: TextChunk[] = [];
   // The start of the chunk being cut, taken from earlier pieces; it holds no line feed at or
   // after index chunkTarget - 1, where a cut would have been made.
   let carry = "";
-  for (const piece of pieces) {
-    let at = 0;
-    while (at < piece.length) {
-      const lineFeed = piece.indexOf("\n", at + Math.max(0, chunkTarget - 1 - carry.length));
-      if (lineFeed < 0) {
-        carry += piece.slice(at);
-        break;
+  return {
+    add(piece) {
+      let at = 0;
+      while (at < piece.length) {
+        const lineFeed = piece.indexOf("\n", at + Math.max(0, chunkTarget - 1 - carry.length));
+        if (lineFeed < 0) {
+          carry += piece.slice(at);
+          return;
+        }
+        chunks.push(chunkOf(carry + piece.slice(at, lineFeed + 1)));
+        carry = "";
+        at = lineFeed + 1;
       }
-      chunks.push(chunkOf(carry + piece.slice(at, lineFeed + 1)));
+    },
+    finish() {
+      if (carry.length > 0) chunks.push(chunkOf(carry));
       carry = "";
-      at = lineFeed + 1;
-    }
-  }
-  if (carry.length > 0) chunks.push(chunkOf(carry));
-  return assemble(chunks, chunkTarget);
+      return assemble(chunks, chunkTarget);
+    },
+  };
 }
 
 /** `text` with the characters from `start` to `end` replaced by `insert` (offsets are clamped). */
