@@ -166,6 +166,41 @@ describe("awkward documents", () => {
     await stillAnswers();
   }, 120_000);
 
+  it("drops large broken bodies and reads a large open written with escapes", async () => {
+    const uri = fixtureUri("notebook/escaped.md");
+    // Lines with CRLF, a tab, quotes, a backslash, non-ASCII and a surrogate pair, 3 MB in all,
+    // written as JSON with some characters as \u escapes, as some clients write them.
+    const line = 'Bay C: "SF6" \\ 2.1 bar\t\u00e9 \ud83e\uddea checked\r\n';
+    const text = `${line.repeat(Math.ceil((3 * 1024 * 1024) / line.length))}The last reading names SF4.\n`;
+    const escapedText = JSON.stringify(text).slice(1, -1).replaceAll("\u00e9", "\\u00e9").replaceAll("\ud83e\uddea", "\\ud83e\\uddea");
+    const body = (json: string): Buffer => {
+      const bytes = Buffer.from(json, "utf8");
+      return Buffer.concat([Buffer.from(`Content-Length: ${bytes.length}\r\n\r\n`), bytes]);
+    };
+    const open = (openUri: string, textJson: string): string =>
+      `{"jsonrpc":"2.0","method":"textDocument/didOpen","params":{"textDocument":{"uri":"${openUri}","languageId":"markdown","version":1,"text":"${textJson}"}}}`;
+    // A raw line feed inside the string, and an escape JSON does not have: neither is JSON, so
+    // neither document is opened.
+    const broken = [fixtureUri("notebook/escaped-line-feed.md"), fixtureUri("notebook/escaped-unknown.md")];
+    const cut = escapedText.indexOf("Bay", 2_000_000);
+    session.child.stdin.write(body(open(broken[0], `${escapedText.slice(0, cut)}\n${escapedText.slice(cut)}`)));
+    session.child.stdin.write(body(open(broken[1], `${escapedText.slice(0, cut)}\\q${escapedText.slice(cut)}`)));
+    session.child.stdin.write(body(open(uri, escapedText)));
+    const lastLine = text.split("\r\n").length - 1;
+    const position = { line: lastLine, character: "The last reading names SF4".length - 1 };
+    // On the SF6 of the first line, which any reading of the broken bodies would have.
+    const firstSf6 = { line: 0, character: 'Bay C: "SF6'.length - 1 };
+    for (const brokenUri of broken) {
+      expect(await session.connection.sendRequest(HoverRequest.type, { textDocument: { uri: brokenUri }, position: firstSf6 })).toBeNull();
+    }
+    const hover = await session.connection.sendRequest(HoverRequest.type, { textDocument: { uri }, position });
+    // common practice: SF4 is a seesaw
+    expect((hover?.contents as MarkupContent | undefined)?.value).toContain("seesaw");
+    expect(hover?.range?.start).toEqual({ line: lastLine, character: "The last reading names ".length });
+    session.connection.sendNotification("textDocument/didClose", { textDocument: { uri } });
+    await stillAnswers();
+  }, 120_000);
+
   it("reports malformed JSON and still reads what it can", async () => {
     const uri = fixtureUri("reference/broken.json");
     session.open(uri, "json", '{"species": [ {"formula": "SF4", "molecular geometry": "seesaw" }, ');
