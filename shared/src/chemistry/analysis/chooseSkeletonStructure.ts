@@ -15,6 +15,7 @@ import {
   compareScores,
   countValenceElectrons,
   type LewisFailure,
+  type LewisScore,
   type LewisStructure,
 } from "../lewis/chooseLewisStructure";
 import type { Problem, SpeciesReading } from "../types";
@@ -122,10 +123,11 @@ function chooseCondensedStructure(reading: SpeciesReading): ChosenStructure | un
   for (const skeleton of skeletons) {
     const outcome = chooseLewisStructure(skeleton, reading.charge);
     if (!outcome.ok) continue;
-    // Skeletons arrive with the most recent parent first, so ties keep the chain as written;
-    // but an O-O bond is written on purpose (HOOH), so a tie never invents one: HOOCCOOH is
-    // oxalic acid, not a diperoxide.
-    const order = best ? compareScores(outcome.structure.score, best.structure.score) : -1;
+    // Skeletons arrive with the most recent parent first, so a tie on formal charges keeps the
+    // chain as written, expanded octet or not (OClO is O-Cl-O, not Cl-O-O); but an O-O bond is
+    // written on purpose (HOOH), so a tie never invents one: HOOCCOOH is oxalic acid, not a
+    // diperoxide.
+    const order = best ? compareFormalCharges(outcome.structure.score, best.structure.score) : -1;
     if (order > 0) continue;
     const peroxideBonds = countOxygenOxygenBonds(skeleton);
     if (!best || order < 0 || peroxideBonds < best.peroxideBonds) {
@@ -173,6 +175,13 @@ function writtenChainStructure(
   return { ok: true, structure, centre: 1, asWritten: true };
 }
 
+/** Octets first, then formal charges: the checks that outrank the order a formula is written in. */
+function compareFormalCharges(a: LewisScore, b: LewisScore): number {
+  return (
+    a.shellDeficit - b.shellDeficit || a.sumAbsFormalCharge - b.sumAbsFormalCharge || a.sumSquareFormalCharge - b.sumSquareFormalCharge
+  );
+}
+
 function countOxygenOxygenBonds(skeleton: CandidateSkeleton): number {
   let count = 0;
   for (const [a, b] of skeleton.bonds) if (skeleton.symbols[a] === "O" && skeleton.symbols[b] === "O") count++;
@@ -189,9 +198,10 @@ interface RankedSkeleton {
 }
 
 /**
- * Formal charges first, then (against an X-A-A-X chain) no needless expanded octet; when they tie, the skeleton whose centre is the one atom of its element
- * (Cl2O is Cl-O-Cl, ClO2 is O-Cl-O), then the less electronegative centre (NSF is N≡S-F), then
- * the remaining tie-breaks of the Lewis search.
+ * Formal charges first; when they tie, the skeleton whose centre is the one atom of its element
+ * (Cl2O is Cl-O-Cl, ClO2 is O-Cl-O, FClO2 is F-Cl(=O)=O rather than F-O-O-Cl), then against an
+ * X-A-A-X chain no needless expanded octet, then the less electronegative centre (NSF is N≡S-F),
+ * then the remaining tie-breaks of the Lewis search.
  */
 function compareSkeletons(a: RankedSkeleton, b: RankedSkeleton): number {
   const sa = a.structure.score;
@@ -200,10 +210,10 @@ function compareSkeletons(a: RankedSkeleton, b: RankedSkeleton): number {
     sa.shellDeficit - sb.shellDeficit ||
     sa.sumAbsFormalCharge - sb.sumAbsFormalCharge ||
     sa.sumSquareFormalCharge - sb.sumSquareFormalCharge ||
-    // Against the X-A-A-X chain, no needless expanded octet: Cl-S-S-Cl, not S=SCl2. (Among
-    // stars the expanded octet may win: N≡S-F, O-Cl-O.)
-    (a.isPair !== b.isPair ? sa.expandedAtoms - sb.expandedAtoms : 0) ||
     Number(b.centreIsUnique) - Number(a.centreIsUnique) ||
+    // Against the X-A-A-X chain, no needless expanded octet: Cl-S-S-Cl, not S=SCl2; Cl-O-O-Cl,
+    // not ClClO2. (Among stars the expanded octet may win: N≡S-F, O-Cl-O.)
+    (a.isPair !== b.isPair ? sa.expandedAtoms - sb.expandedAtoms : 0) ||
     a.electronegativity - b.electronegativity ||
     compareScores(sa, sb)
   );

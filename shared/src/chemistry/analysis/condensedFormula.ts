@@ -43,7 +43,9 @@ const OXO_HOSTS: ReadonlySet<string> = new Set(["N", "S", "P", "Se"]);
 /** Most neighbours an atom may have in a condensed formula, hydrogens included. */
 function maxNeighbours(symbol: string): number {
   const traits = atomTraits(symbol);
-  if (traits.isHalogen) return 1;
+  // Fluorine bonds once; the heavier halogens also centre oxides, interhalogens and polyhalides
+  // (OClO, ClICl-, FBrF4), and formal charges keep them terminal elsewhere.
+  if (traits.isHalogen) return symbol === "F" ? 1 : traits.element.period <= 4 ? 5 : 7;
   switch (traits.element.group) {
     case 13:
       return 4;
@@ -127,6 +129,17 @@ function alkylUnit(carbons: number): Unit {
   const rest: Unit[] = [];
   for (let k = 1; k < carbons; k++) rest.push({ symbol: "C", hydrogens: k === carbons - 1 ? 3 : 2, branches: [] });
   return { symbol: "C", hydrogens: 2, branches: [{ units: rest, written: false, copy: 0 }] };
+}
+
+/**
+ * Whether an atom that already has a neighbour may take `child` as another. A halogen's bonds
+ * beyond its first are to atoms at least as electronegative as itself (OClO, ClICl-, III-): a
+ * carbon written after CH2Cl starts the next group (CH2ClCH2Cl, CH3CHClCH3). Flatten offers a
+ * halogen as a parent only to the atom written right after it.
+ */
+function mayBondAgain(parent: string, child: string): boolean {
+  const traits = atomTraits(parent);
+  return !traits.isHalogen || atomTraits(child).electronegativity >= traits.electronegativity;
 }
 
 /** Parse the body of a condensed formula (no charge); undefined when it is not one we read. */
@@ -316,7 +329,8 @@ function flatten(parsed: ParsedSequence): FlatFormula | undefined {
     units.forEach((unit, k) => {
       const index = atoms.length;
       // Later atoms prefer the most recent one written: ties keep the chain as written.
-      const parentChoices = k === 0 ? anchorChoices : [...placed].reverse();
+      const parentChoices =
+        k === 0 ? anchorChoices : [...placed].reverse().filter((atom, back) => back === 0 || !atomTraits(atoms[atom].symbol).isHalogen);
       atoms.push({ symbol: unit.symbol, parentChoices, hydrogens: unit.hydrogens });
       placed.push(index);
       if (unit.phenyl) {
@@ -416,6 +430,7 @@ export function condensedSkeletons(formulaText: string): CandidateSkeleton[] | u
     }
     for (const parent of choices) {
       if (used[parent] >= room[parent] || used[atom] >= room[atom]) continue;
+      if (used[parent] > 0 && !mayBondAgain(symbols[parent], symbols[atom])) continue;
       if (copyOf && !copyMayBondTo(copyOf, atom, parent)) continue;
       used[parent]++;
       used[atom]++;
