@@ -211,6 +211,16 @@ export function createLewisSearch(): LewisSearch {
       }
     }
     if (flexibleCount > MAX_FLEXIBLE_BONDS) return { ok: false, failure: "no-structure" };
+    // Boron with three neighbours may keep six electrons (BF3, B(OH)3): its one empty p orbital
+    // is all it lacks. With two neighbours it would lack more than a spare orbital, and where a
+    // neighbour can share a further pair it does: HBO is H-B≡O, BO2- is O=B=O⁻, as HCN and CO2.
+    for (let position = 0; position < flexibleCount; position++) {
+      const bond = flexibleBonds[position];
+      for (const atom of [bondFrom[bond], bondTo[bond]]) {
+        const t = traits[atom];
+        if (degree[atom] === 2 && t.element.group === 13 && t.element.period === 2) mustCompleteOf[atom] = 1;
+      }
+    }
 
     // Lone pairs fill outer atoms first (most electronegative first), then inner atoms.
     for (let atom = 0; atom < atomCount; atom++) fillOrder[atom] = atom;
