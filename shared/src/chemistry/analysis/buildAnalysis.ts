@@ -78,9 +78,10 @@ export function buildAnalysis(
   }
   if (radical) {
     const holder = atoms.findIndex((atom) => atom.unpairedElectrons > 0);
+    const symbol = atoms[holder]?.symbol ?? "one atom";
     warnings.push(
-      `Odd number of valence electrons (${structure.valenceElectrons}): a radical, with the unpaired electron drawn on ${atoms[holder]?.symbol ?? "one atom"}. ` +
-        "The single electron is a weak domain, so small radicals can be flatter or wider than predicted.",
+      `Odd number of valence electrons (${structure.valenceElectrons}): a radical, with the unpaired electron drawn on ${symbol}. ` +
+        oddElectronNote(symbol, descriptions[indices.indexOf(holder)]),
     );
   }
   if (expandedOctet && allStericFourOrLess) {
@@ -131,6 +132,28 @@ export function buildAnalysis(
   const pending: PendingParts = { descriptions: descriptions.slice(), indices: indices.slice(), mainCentre };
   Object.defineProperty(analysis, PENDING, { value: pending, writable: true, configurable: true });
   return analysis as unknown as SpeciesAnalysis;
+}
+
+/**
+ * How the shape counts the odd electron on a centre without lone pairs, where the count decides
+ * the shape; elsewhere, the general caution.
+ */
+function oddElectronNote(symbol: string, holder: CentreAnalysis | undefined): string {
+  const general = "The single electron is a weak domain, so small radicals can be flatter or wider than predicted.";
+  if (holder === undefined || holder.lonePairs > 0) return general;
+  if (holder.bondingDomains === 2 && holder.stericNumber === 3) {
+    return (
+      `With only two neighbours and no lone pair, ${symbol} keeps it in an orbital of its own, so it is counted as a domain ` +
+      "(steric number 3) and bends the atom; a single electron repels less than a pair, so the real angle opens past the ideal."
+    );
+  }
+  if (holder.bondingDomains === 3 && holder.stericNumber === 3) {
+    return (
+      `The three bonds of ${symbol} leave a p orbital free, and the electron sits there without a position of its own, ` +
+      "so it is not counted as a domain and the atom is drawn flat; the real atom may pucker a little."
+    );
+  }
+  return general;
 }
 
 /** What the first read of `centres` or `polarity` needs that the analysis does not show. */

@@ -57,9 +57,11 @@ export function describeCentre(graph: MolecularGraph, index: number, radical: bo
   // A lone pair shared with a neighbouring pi system (amide N, pyrrole N, furan O) sits in a
   // p orbital, so it takes no site of its own: the atom is sp2 and planar.
   const delocalised = lonePairJoinsPiSystem(graph, index) ? 1 : 0;
-  // An odd electron on an atom with no lone pair sits in a p orbital and takes no site: the
-  // methyl radical is planar. Next to lone pairs it does count as a (weak) domain: NO2, ClO2.
-  const oddElectronDomain = atom.unpairedElectrons > 0 && atom.lonePairs > 0 ? 1 : 0;
+  // An odd electron on an atom with three or more bonded neighbours and no lone pair sits in the
+  // p orbital they leave over and takes no site: the methyl radical is planar. Next to lone pairs
+  // (NO2, ClO2), or on an atom with only two neighbours (HCO, BH2), it sits in an orbital with s
+  // character and counts as a (weak) domain: H-C=O is bent, not linear.
+  const oddElectronDomain = atom.unpairedElectrons > 0 && (atom.lonePairs > 0 || ligands.length < 3) ? 1 : 0;
   const loneDomains = atom.lonePairs - delocalised + oddElectronDomain;
   const stericNumber = ligands.length + loneDomains;
   const electronGeometry = ELECTRON_GEOMETRY_BY_STERIC_NUMBER[stericNumber];
@@ -126,6 +128,7 @@ export function describeCentre(graph: MolecularGraph, index: number, radical: bo
     multipleBondCount,
     bulkyNeighbours,
     radical,
+    loneDomainIsOddElectron: oddElectronDomain === 1 && loneDomains === 1,
     ligandDirections: sites.ligandDirections,
     ligandSiteKinds: sites.ligandSiteKinds,
   };

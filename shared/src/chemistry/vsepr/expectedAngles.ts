@@ -23,6 +23,8 @@ export interface AngleContext {
   /** Some neighbour is from a later period than the centre (Cl on O in Cl2O). */
   readonly bulkyNeighbours: boolean;
   readonly radical: boolean;
+  /** The one non-bonding domain is a single electron, not a pair (HCO, BH2). */
+  readonly loneDomainIsOddElectron: boolean;
   readonly ligandDirections: readonly Vec3[];
   readonly ligandSiteKinds: readonly SiteKind[];
 }
@@ -88,6 +90,7 @@ function expectationKey(context: AngleContext): number {
   key = key * 2 + (context.multipleBondCount >= 2 ? 1 : 0);
   key = key * 2 + (context.bulkyNeighbours ? 1 : 0);
   key = key * 2 + (context.radical ? 1 : 0);
+  key = key * 2 + (context.loneDomainIsOddElectron ? 1 : 0);
   return key;
 }
 
@@ -156,7 +159,8 @@ function rangeFor(context: AngleContext, ideal: number, between: string | undefi
     const squeeze = lonePairSqueeze(context, ideal, between);
     min = ideal - squeeze.down;
     max = Math.min(180, ideal + squeeze.up);
-    lonePairNote = ideal >= 170 ? 1 : 2;
+    // A lone single electron has the radical note below instead.
+    lonePairNote = context.loneDomainIsOddElectron ? 0 : ideal >= 170 ? 1 : 2;
     if (context.bulkyNeighbours && ideal < 170) {
       max += 4;
       bulkyNote = 1;

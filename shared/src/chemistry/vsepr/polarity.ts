@@ -64,7 +64,8 @@ function judgeNeutralShape(graph: MolecularGraph, details: readonly CentreDetail
     };
   }
   if (norm(loneSum) > ZERO) {
-    return { polar: true, reason: `lone pairs make the ${shape} shape asymmetric`, dipoleEstimate };
+    const nonBonding = main.centre.lonePairs > 0 ? "lone pairs make" : "the single electron makes";
+    return { polar: true, reason: `${nonBonding} the ${shape} shape asymmetric`, dipoleEstimate };
   }
   if (norm(bondSum) > ZERO) {
     return { polar: true, reason: `bond dipoles do not cancel in the ${shape} arrangement`, dipoleEstimate };
