@@ -8,7 +8,7 @@ interface RdkitMol {
   delete(): void;
 }
 interface RdkitModule {
-  get_mol(input: string): RdkitMol | null;
+  get_mol(input: string, details?: string): RdkitMol | null;
 }
 
 const require = createRequire(import.meta.url);
@@ -47,9 +47,14 @@ function connectivityKey(
     .join(" ");
 }
 
-/** The connectivity of a reference structure as RDKit reads and sanitises it. */
+/**
+ * The connectivity of a reference structure as RDKit reads and sanitises it. RDKit's valence
+ * table has no three- or five-bonded neutral halogen (ClF3, BrF5), so a hydrogen-free SMILES
+ * written all in brackets may be read as written, without the valence check.
+ */
 function rdkitConnectivity(smiles: string): string {
-  const mol = rdkit.get_mol(smiles);
+  const asWritten = /^(\[[A-Z][a-z]?\]|[()])+$/.test(smiles) && !smiles.includes("[H]");
+  const mol = rdkit.get_mol(smiles) ?? (asWritten ? rdkit.get_mol(smiles, JSON.stringify({ sanitize: false })) : null);
   if (mol === null) throw new Error(`RDKit refused the reference SMILES ${smiles}`);
   try {
     const json = JSON.parse(mol.get_json());
@@ -112,6 +117,9 @@ const WRITTEN: readonly (readonly [written: string, smiles: string, source: stri
   ["HCONH2", "NC=O", "Clayden"],
   ["CH3OH", "CO", "Clayden"],
   ["CHBrClF", "FC(Cl)Br", "Clayden"],
+  ["CH2ClCH2Cl", "ClCCCl", "Clayden"],
+  ["CH3CHClCH3", "CC(C)Cl", "Clayden"],
+  ["CH2BrCHBrCH2Br", "BrCC(Br)CBr", "Clayden"],
   // from memory: Housecroft & Sharpe, Inorganic Chemistry (nitrogen, oxygen, sulfur and
   // halogen compounds: hydrides, oxoacids, oxides, oxohalides, thiazyl halides)
   ["HN3", "N=[N+]=[N-]", "Housecroft & Sharpe"],
@@ -156,12 +164,127 @@ const WRITTEN: readonly (readonly [written: string, smiles: string, source: stri
   ["N2O5", "[O-][N+](=O)O[N+]([O-])=O", "Housecroft & Sharpe"],
   ["P4", "P12P3P1P23", "Housecroft & Sharpe"],
   ["S8", "S1SSSSSSS1", "Housecroft & Sharpe"],
+  // from memory: Greenwood & Earnshaw (halogen oxides, oxohalides, interhalogens and polyhalide
+  // ions: Cl, Br and I central among O and F, F never central; HOCl and the chlorine oxoacids
+  // have H on O; Cl2O2 is mainly the peroxide ClOOCl)
+  ["OClO", "[O]Cl=O", "Greenwood & Earnshaw"],
+  ["O=Cl=O", "[O]Cl=O", "Greenwood & Earnshaw"],
+  ["ClO2", "[O]Cl=O", "Greenwood & Earnshaw"],
+  ["OBrO", "[O]Br=O", "Greenwood & Earnshaw"],
+  ["FClO2", "F[Cl+2]([O-])[O-]", "Greenwood & Earnshaw"],
+  ["ClO2F", "F[Cl+2]([O-])[O-]", "Greenwood & Earnshaw"],
+  ["ClO3F", "F[Cl+3]([O-])([O-])[O-]", "Greenwood & Earnshaw"],
+  ["FClF2", "[F][Cl]([F])[F]", "Greenwood & Earnshaw"],
+  ["ClF3", "[F][Cl]([F])[F]", "Greenwood & Earnshaw"],
+  ["III-", "I[I-]I", "Greenwood & Earnshaw"],
+  ["I3-", "I[I-]I", "Greenwood & Earnshaw"],
+  ["ICl2-", "Cl[I-]Cl", "Greenwood & Earnshaw"],
+  ["ClICl-", "Cl[I-]Cl", "Greenwood & Earnshaw"],
+  ["FBrF4", "[F][Br]([F])([F])([F])[F]", "Greenwood & Earnshaw"],
+  ["BrF5", "[F][Br]([F])([F])([F])[F]", "Greenwood & Earnshaw"],
+  ["HClO2", "O[Cl+][O-]", "Greenwood & Earnshaw"],
+  ["HOClO", "O[Cl+][O-]", "Greenwood & Earnshaw"],
+  ["HClO3", "O[Cl+2]([O-])[O-]", "Greenwood & Earnshaw"],
+  ["HClO4", "O[Cl+3]([O-])([O-])[O-]", "Greenwood & Earnshaw"],
+  ["OCl2", "ClOCl", "Greenwood & Earnshaw"],
+  ["ClOOCl", "ClOOCl", "Greenwood & Earnshaw"],
+  ["Cl2O2", "ClOOCl", "Greenwood & Earnshaw"],
+  // from memory: Herzberg, Electronic Spectra of Polyatomic Molecules (HCO is H-C=O); the
+  // oxoborane HBO is H-B-O, isoelectronic with HCN
+  ["HCO", "[CH]=O", "Herzberg"],
+  ["HBO", "[BH]=O", "Herzberg"],
 ];
 
 describe("the skeleton a written formula stands for", () => {
   it.each(WRITTEN)("%s is %s", (written, smiles, source) => {
     // source: the reference structure (named in the table) read by RDKit (WebAssembly build)
     expect(engineConnectivity(written), `${written} against ${smiles} (${source})`).toBe(rdkitConnectivity(smiles));
+  });
+});
+
+/** Each centre as `atom AXE geometry`, in the order the analysis lists them. */
+function centresOf(written: string): string[] {
+  const result = analyzeSpecies(written);
+  if (!result.ok) throw new Error(`${written} was not analysed: ${result.problem.message}`);
+  return result.value.centres.map((c) => `${c.atom} ${c.axe} ${c.molecularGeometry}`).sort();
+}
+
+// Every centre of the species (heavy atoms with two or more neighbours), whichever way it is written.
+const CENTRES: readonly (readonly [written: string, centres: readonly string[], source: string])[] = [
+  // from memory: Greenwood & Earnshaw, Chemistry of the Elements (chlorine and bromine dioxides
+  // bent, the odd electron beside two lone pairs on the halogen)
+  ["OClO", ["Cl AX2E2 bent"], "Greenwood & Earnshaw"],
+  ["O=Cl=O", ["Cl AX2E2 bent"], "Greenwood & Earnshaw"],
+  ["OBrO", ["Br AX2E2 bent"], "Greenwood & Earnshaw"],
+  // from memory: Greenwood & Earnshaw (chloryl fluoride pyramidal, perchloryl fluoride a C3v tetrahedron)
+  ["FClO2", ["Cl AX3E1 trigonal pyramidal"], "Greenwood & Earnshaw"],
+  ["ClO2F", ["Cl AX3E1 trigonal pyramidal"], "Greenwood & Earnshaw"],
+  ["ClO3F", ["Cl AX4 tetrahedral"], "Greenwood & Earnshaw"],
+  // from memory: Greenwood & Earnshaw (ClF3 T-shaped, BrF5 square pyramidal, I3- and ICl2- linear)
+  ["FClF2", ["Cl AX3E2 T-shaped"], "Greenwood & Earnshaw"],
+  ["III-", ["I AX2E3 linear"], "Greenwood & Earnshaw"],
+  ["ICl2-", ["I AX2E3 linear"], "Greenwood & Earnshaw"],
+  ["ClICl-", ["I AX2E3 linear"], "Greenwood & Earnshaw"],
+  ["FBrF4", ["Br AX5E1 square pyramidal"], "Greenwood & Earnshaw"],
+  // from memory: Housecroft & Sharpe, Inorganic Chemistry (hypochlorous acid H-O-Cl; the chlorine
+  // oxoacids with Cl central and each H on an O; Cl2O bent at O; ClNO and FNO bent at N)
+  ["HOCl", ["O AX2E2 bent"], "Housecroft & Sharpe"],
+  ["HClO", ["O AX2E2 bent"], "Housecroft & Sharpe"],
+  ["HClO2", ["Cl AX2E2 bent", "O AX2E2 bent"], "Housecroft & Sharpe"],
+  ["HClO3", ["Cl AX3E1 trigonal pyramidal", "O AX2E2 bent"], "Housecroft & Sharpe"],
+  ["HClO4", ["Cl AX4 tetrahedral", "O AX2E2 bent"], "Housecroft & Sharpe"],
+  ["OCl2", ["O AX2E2 bent"], "Housecroft & Sharpe"],
+  ["Cl2O", ["O AX2E2 bent"], "Housecroft & Sharpe"],
+  ["ClNO", ["N AX2E1 bent"], "Housecroft & Sharpe"],
+  ["NOCl", ["N AX2E1 bent"], "Housecroft & Sharpe"],
+  ["FNO", ["N AX2E1 bent"], "Housecroft & Sharpe"],
+  // from memory: Herzberg, Electronic Spectra of Polyatomic Molecules (HCO bent near 125°, BH2
+  // bent near 130°, the methyl radical planar; HBO linear)
+  ["HCO", ["C AX2E1 bent"], "Herzberg"],
+  ["BH2", ["B AX2E1 bent"], "Herzberg"],
+  ["CH3", ["C AX3 trigonal planar"], "Herzberg"],
+  ["HBO", ["B AX2 linear"], "Herzberg"],
+];
+
+describe("centres of halogen compounds, oxoacids and small radicals", () => {
+  it.each(CENTRES)("%s has centres %j", (written, centres, source) => {
+    expect(centresOf(written), `${written} (${source})`).toEqual([...centres].sort());
+  });
+
+  // from memory: Herzberg (HBO is H-B≡O, isoelectronic with HCN); Housecroft & Sharpe
+  // (metaborate O=B=O⁻ linear, isoelectronic with CO2)
+  it.each([
+    ["HBO", [1, 3]],
+    ["BO2-", [2, 2]],
+  ] as const)("%s gives boron a full octet (bond orders %j)", (written, orders) => {
+    const result = analyzeSpecies(written);
+    expect(result.ok).toBe(true);
+    if (!result.ok) return;
+    expect(result.value.electronDeficient).toBe(false);
+    const boron = result.value.graph.atoms.findIndex((atom) => atom.symbol === "B");
+    const boronBonds = result.value.graph.bonds.filter((bond) => bond.from === boron || bond.to === boron);
+    expect(boronBonds.map((bond) => bond.order).sort()).toEqual([...orders]);
+  });
+
+  // from memory: Greenwood & Earnshaw (OClO and ClO2 are one molecule, however it is written)
+  it("OClO, O=Cl=O and ClO2 draw the same structure with no formal charges", () => {
+    for (const written of ["OClO", "O=Cl=O", "ClO2"]) {
+      const result = analyzeSpecies(written);
+      expect(result.ok).toBe(true);
+      if (!result.ok) continue;
+      expect(result.value.graph.atoms.map((atom) => atom.formalCharge)).toEqual([0, 0, 0]);
+      expect(result.value.graph.bonds.map((bond) => bond.order).sort()).toEqual([1, 2]);
+    }
+  });
+
+  // common practice: the card says how the odd electron was counted where the count decides the shape
+  it.each([
+    ["HCO", "counted as a domain"],
+    ["CH3", "not counted as a domain"],
+  ])("%s explains its odd electron (%s)", (written, phrase) => {
+    const result = analyzeSpecies(written);
+    expect(result.ok).toBe(true);
+    if (result.ok) expect(result.value.warnings.join(" ")).toContain(phrase);
   });
 });
 
