@@ -35,7 +35,7 @@ export type { SpeciesAtOffset } from "./document/speciesAt";
 export { checkDocument } from "./document/checkDocument";
 export { findingsInParts } from "./document/findingsInParts";
 export type { FindingPartsOptions } from "./document/findingsInParts";
-export { documentKindFor } from "./document/documentKind";
+export { documentKindFor, isTextMarkup } from "./document/documentKind";
 export { memoisedReader } from "./document/speciesReader";
 export type { SpeciesReader } from "./document/speciesReader";
 export { sniffDelimiter } from "./document/tables/csv";

@@ -73,8 +73,8 @@ interface Span {
 const keyOf = (span: { start: number; end: number }): string => `${span.start}:${span.end}`;
 
 /**
- * The document kind the product gives the file; a file it has no kind for (a .rst README) is read
- * as plain text, which is what a user gets by opening it as such.
+ * The document kind the product gives the file; a file it has no kind for is read as plain text,
+ * which is what a user gets by opening it as such.
  */
 function kindOf(engine: SpottingEngine, file: string, text: string): DocumentKind {
   return engine.documentKindFor(file, undefined, text.slice(0, 4096)) ?? "plaintext";

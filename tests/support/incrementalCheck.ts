@@ -6,6 +6,7 @@ import {
   analyzeDocument,
   checkDocument,
   createDocumentAnalyser,
+  isTextMarkup,
   speciesAtOffset,
   wholeText,
   type ChunkedText,
@@ -47,7 +48,7 @@ export function checkAgainstScratch(session: Session, kind: DocumentKind, random
   expect(canonical(analysis.findingsAround(place, place).filter(touching))).toEqual(scratch.filter(touching));
   // The species a hover asks for, at a few random places.
   const model = analyzeDocument(plain, kind);
-  if (kind === "markdown" || kind === "plaintext") {
+  if (kind === "markdown" || isTextMarkup(kind)) {
     // Every mention, table row and equation where a fresh reading finds it.
     const whole = analysis.model();
     const places = (items: readonly { readonly range: { readonly start: number; readonly end: number } }[]): string[] =>

@@ -1,6 +1,6 @@
 /**
  * Turns paths (a command line's, or an editor's workspace folders) into the documents to read:
- * files as given, folders searched for markdown, text, CSV/TSV, JSON and YAML files. Inside a git
+ * files as given, folders searched for markdown, text, LaTeX, AsciiDoc, reStructuredText, CSV/TSV, JSON and YAML files. Inside a git
  * work tree a folder is listed by git, so .gitignore is respected; elsewhere (or without git) a
  * plain walk skips node_modules and dot-folders. Binary files are never documents. Whatever could
  * not be read is reported, never passed over in silence: a named path always, a file in a folder

@@ -10,7 +10,7 @@ export interface ServerSettings {
   /** Document kinds the server analyses. */
   readonly enabledLanguages: readonly DocumentKind[];
   readonly inlayHints: {
-    /** Hints after species in markdown and plain text. */
+    /** Hints after species in markdown, plain text, LaTeX, AsciiDoc and reStructuredText. */
     readonly prose: boolean;
     /** Hints after species in CSV, TSV, JSON and YAML. */
     readonly dataFiles: boolean;
@@ -29,7 +29,7 @@ export interface ServerSettings {
 /** Bounds of `diagnostics.maxPerDocument`: at least one shown, and never a message of tens of megabytes. */
 export const MAX_DIAGNOSTICS_BOUNDS = { minimum: 1, maximum: 100_000 } as const;
 
-const ALL_KINDS: readonly DocumentKind[] = ["markdown", "plaintext", "csv", "tsv", "json", "yaml"];
+const ALL_KINDS: readonly DocumentKind[] = ["markdown", "plaintext", "latex", "asciidoc", "restructuredtext", "csv", "tsv", "json", "yaml"];
 
 export const DEFAULT_SETTINGS: ServerSettings = {
   enabledLanguages: ALL_KINDS,
@@ -65,7 +65,15 @@ export function isRecord(value: unknown): value is Record<string, unknown> {
 }
 
 /** Editor language ids people may write instead of our kind names. */
-const KIND_ALIASES: Readonly<Record<string, DocumentKind>> = { jsonc: "json", yml: "yaml", text: "plaintext", md: "markdown" };
+const KIND_ALIASES: Readonly<Record<string, DocumentKind>> = {
+  jsonc: "json",
+  yml: "yaml",
+  text: "plaintext",
+  md: "markdown",
+  tex: "latex",
+  adoc: "asciidoc",
+  rst: "restructuredtext",
+};
 
 function kindList(value: unknown): DocumentKind[] | undefined {
   if (!Array.isArray(value)) return undefined;

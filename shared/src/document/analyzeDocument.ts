@@ -76,7 +76,7 @@ function readByKind(text: string, kind: DocumentKind, read: SpeciesReader, sink:
       scanMarkdown(text, read, sink);
       return [];
     default:
-      scanPlainText(text, read, sink);
+      scanPlainText(text, read, sink, kind);
       return [];
   }
 }

@@ -4,7 +4,12 @@
  */
 import { sniffDelimiter } from "./tables/csv";
 import { meaningOfHeader, namesSpecies } from "./tables/headers";
-import type { DocumentKind } from "./types";
+import type { DocumentKind, TextMarkup } from "./types";
+
+/** Whether documents of `kind` are read as prose a paragraph at a time (see `TextMarkup`). */
+export function isTextMarkup(kind: DocumentKind): kind is TextMarkup {
+  return kind === "plaintext" || kind === "latex" || kind === "asciidoc" || kind === "restructuredtext";
+}
 
 const BY_EXTENSION: Readonly<Record<string, DocumentKind>> = {
   md: "markdown",
@@ -20,6 +25,13 @@ const BY_EXTENSION: Readonly<Record<string, DocumentKind>> = {
   jsonc: "json",
   yaml: "yaml",
   yml: "yaml",
+  tex: "latex",
+  ltx: "latex",
+  adoc: "asciidoc",
+  asciidoc: "asciidoc",
+  asc: "asciidoc",
+  rst: "restructuredtext",
+  rest: "restructuredtext",
 };
 
 const BY_LANGUAGE: Readonly<Record<string, DocumentKind>> = {
@@ -30,6 +42,10 @@ const BY_LANGUAGE: Readonly<Record<string, DocumentKind>> = {
   json: "json",
   jsonc: "json",
   yaml: "yaml",
+  latex: "latex",
+  tex: "latex",
+  asciidoc: "asciidoc",
+  restructuredtext: "restructuredtext",
 };
 
 /** Extensions whose content may well be a table saved under a vague name. */

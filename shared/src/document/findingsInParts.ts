@@ -9,6 +9,7 @@ import type { Reaction } from "./reactions/reactionTypes";
 import { documentChecker } from "./checkDocument";
 import { markdownSteps } from "./scanMarkdown";
 import { plainTextSteps } from "./scanPlainText";
+import { isTextMarkup } from "./documentKind";
 import { memoisedReader, type ScanSteps, type SpeciesReader } from "./speciesReader";
 import type { RecordSink } from "./tables/records";
 import type { DocumentKind, Finding, SpeciesOccurrence, TableRecord, UnreadableSpecies } from "./types";
@@ -37,7 +38,7 @@ export function* findingsInParts(
 ): Generator<readonly Finding[], void, void> {
   const read = options.read ?? memoisedReader();
   const check = documentChecker();
-  if (kind !== "markdown" && kind !== "plaintext") {
+  if (kind !== "markdown" && !isTextMarkup(kind)) {
     const model = analyzeDocument(text, kind, read, options);
     const found = [...model.problems, ...check(model)];
     if (found.length > 0) yield found;
@@ -45,7 +46,8 @@ export function* findingsInParts(
   }
   const sink: RecordSink = { occurrences: [], unreadable: [], records: [], reactions: [] };
   const partSize = Math.max(1, options.partSize ?? DEFAULT_PART_SIZE);
-  const steps: ScanSteps = kind === "markdown" ? markdownSteps(text, read, sink, partSize) : plainTextSteps(text, read, sink, partSize);
+  const steps: ScanSteps =
+    kind === "markdown" ? markdownSteps(text, read, sink, partSize) : plainTextSteps(text, read, sink, partSize, kind);
   const partBefore = (limit: number): Finding[] =>
     check({
       kind,

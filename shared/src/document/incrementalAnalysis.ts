@@ -23,6 +23,7 @@ import { findingsInParts } from "./findingsInParts";
 import { jsonListReader } from "./jsonParts";
 import { yamlListReader } from "./yamlParts";
 import { sliceOf, wholeText, type ChunkedText, type TextChunk } from "./chunkedText";
+import { isTextMarkup } from "./documentKind";
 import { markdownAnalyser } from "./markdownAnalysis";
 import { plainTextAnalyser } from "./plainTextAnalysis";
 import { joinedModels, shiftedModel } from "./shiftedModel";
@@ -92,7 +93,7 @@ export function createDocumentAnalyser(kind: DocumentKind, limit = MAX_ANALYSED_
   const table = kind === "csv" || kind === "tsv" ? tableSegments(kind, read) : undefined;
   const markdown = kind === "markdown" ? markdownAnalyser(read, tuning.markdownStretch) : undefined;
   const list = kind === "json" ? jsonSegments(read) : kind === "yaml" ? yamlSegments(read) : undefined;
-  const plain = kind === "plaintext" ? plainTextAnalyser(read) : undefined;
+  const plain = isTextMarkup(kind) ? plainTextAnalyser(read, kind) : undefined;
   return {
     analyse(text) {
       if (sliceOf(text, 0, BINARY_PROBE_LENGTH).includes("\u0000")) return wholeAnalysis(kind, "", read, { binary: true });

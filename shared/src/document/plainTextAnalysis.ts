@@ -1,5 +1,5 @@
 /**
- * Plain text analysed version after version: the text is cut into the units of `plainTextUnits`
+ * Plain text (and LaTeX, AsciiDoc, reStructuredText, cut by their own blocks) analysed version after version: the text is cut into the units of `plainTextUnits`
  * (paragraphs and literal blocks), and an edit cuts again only from a paragraph start before it to
  * the first paragraph start after it where the new cut meets the old one; the units before and
  * after are the last version's, moved. Each unit is read from its own text, with offsets from its
@@ -41,7 +41,7 @@ import {
 import { shiftedModel } from "./shiftedModel";
 import type { SpeciesReader } from "./speciesReader";
 import type { RecordSink } from "./tables/records";
-import type { DocumentModel, Finding, SpeciesOccurrence, UnreadableSpecies } from "./types";
+import type { DocumentModel, Finding, SpeciesOccurrence, TextMarkup, UnreadableSpecies } from "./types";
 
 /** A unit with offsets from its own start. The same object in the next version when an edit left it alone. */
 interface Unit {
@@ -93,6 +93,8 @@ const LONG_UNIT_CHUNKS = 4;
 
 /** What readings are kept across versions. */
 interface UnitCaches {
+  /** The document's kind: plain text, or the markup whose blocks the cut knows. */
+  readonly markup: TextMarkup;
   readonly read: SpeciesReader;
   readonly readings: WeakMap<Unit, UnitReading>;
   readonly ids: WeakMap<Unit, ReadonlySet<string>>;
@@ -100,12 +102,18 @@ interface UnitCaches {
   readonly met: Map<string, SpeciesOccurrence>;
 }
 
-/** Analyses successive versions of one plain-text document, reusing the units an edit left alone. */
-export function plainTextAnalyser(read: SpeciesReader): (text: ChunkedText) => DocumentAnalysis {
-  const caches: UnitCaches = { read, readings: new WeakMap(), ids: new WeakMap(), met: new Map() };
+/** Analyses successive versions of one plain-text (or `markup`) document, reusing the units an edit left alone. */
+export function plainTextAnalyser(read: SpeciesReader, markup: TextMarkup = "plaintext"): (text: ChunkedText) => DocumentAnalysis {
+  const caches: UnitCaches = { markup, read, readings: new WeakMap(), ids: new WeakMap(), met: new Map() };
   let last: UnitList | undefined;
   return (text) => {
-    const list: UnitList = (last && editedList(last, text)) ?? { text, units: [], starts: [], rest: { from: 0 }, commentOut: [] };
+    const list: UnitList = (last && editedList(last, text, markup)) ?? {
+      text,
+      units: [],
+      starts: [],
+      rest: { from: 0 },
+      commentOut: [],
+    };
     last = list;
     return analysisOf(list, caches);
   };
@@ -117,7 +125,7 @@ function analysisOf(list: UnitList, caches: UnitCaches): DocumentAnalysis {
     starts,
     lengthOf: (index) => units[index].length,
     more: () => list.rest !== undefined,
-    next: () => nextUnit(list),
+    next: () => nextUnit(list, caches.markup),
   };
   const near: UnitsNear = {
     get count() {
@@ -172,11 +180,11 @@ function analysisOf(list: UnitList, caches: UnitCaches): DocumentAnalysis {
       list.commentOut.push(readingOf(index).commentOut);
     }
   };
-  return segmentedAnalysis("plaintext", {
+  return segmentedAnalysis(caches.markup, {
     cut,
     readingOf,
     farAhead,
-    localModel: (start, end) => localModel(list.text, start, end, caches.read),
+    localModel: (start, end) => localModel(list.text, start, end, caches),
     distinctSpecies: () => [...caches.met.values()],
     partsOf(index) {
       // A long unit not read yet: its findings a part at a time, so the caller may stop early.
@@ -250,7 +258,7 @@ function* unitReadingInParts(
   /** The findings of what the scan has found before `limit`, moved into the unit's model. */
   const partBefore = (limit: number): Finding[] => {
     const part: DocumentModel = {
-      kind: "plaintext",
+      kind: caches.markup,
       occurrences: takenBefore(sink.occurrences, limit).sort((a, b) => a.range.start - b.range.start),
       records: [],
       problems: [],
@@ -265,13 +273,13 @@ function* unitReadingInParts(
     findings.push(...found);
     return found;
   };
-  for (const resumeAt of plainTextUnitSteps(source, unit.kind, caches.read, sink, partSize, carry)) {
+  for (const resumeAt of plainTextUnitSteps(source, unit.kind, caches.markup, caches.read, sink, partSize, carry)) {
     const part = partBefore(resumeAt);
     if (part.length > 0) yield part;
   }
   const rest = partBefore(Infinity);
   if (rest.length > 0) yield rest;
-  const model: DocumentModel = { kind: "plaintext", occurrences, records: [], problems: [], unreadable, reactions };
+  const model: DocumentModel = { kind: caches.markup, occurrences, records: [], problems: [], unreadable, reactions };
   return { commentIn, asked, commentOut: carry.commentOpen, model, findings };
 }
 
@@ -289,19 +297,19 @@ function takenBefore<T extends { readonly range: { readonly start: number } }>(i
  * The model of the lines around `start`..`end`, read as plain text of their own: for a request
  * about a place the reading in order has not reached yet, the answer the lines there give.
  */
-function localModel(text: ChunkedText, start: number, end: number, read: SpeciesReader): DocumentModel {
+function localModel(text: ChunkedText, start: number, end: number, caches: UnitCaches): DocumentModel {
   const from = lineStartAt(text, Math.max(0, start - LOCAL_READ));
   const to = lineEndAt(text, Math.min(text.length, end + LOCAL_READ));
-  return shiftedModel(analyzeDocument(sliceOf(text, from, to), "plaintext", read), from);
+  return shiftedModel(analyzeDocument(sliceOf(text, from, to), caches.markup, caches.read), from);
 }
 
 // ---------------------------------------------------------------------------------------------
 // The cut
 
-function nextUnit(list: UnitList): void {
+function nextUnit(list: UnitList, markup: TextMarkup): void {
   const rest = list.rest;
   if (!rest) return;
-  if (!rest.queue || rest.queue.length === 0) cutWindow(list.text, rest);
+  if (!rest.queue || rest.queue.length === 0) cutWindow(list.text, rest, markup);
   const next = rest.queue?.shift();
   if (!next) {
     list.rest = undefined;
@@ -316,12 +324,16 @@ function nextUnit(list: UnitList): void {
  * that starts in the window with its first line whole (as far as the cut of the lines before it
  * looks), or all of them when the window reaches the end. A window with no such paragraph grows.
  */
-function cutWindow(text: ChunkedText, rest: RestToCut): void {
+function cutWindow(text: ChunkedText, rest: RestToCut, markup: TextMarkup): void {
   for (let span = CUT_WINDOW_CHUNKS * text.chunkTarget; ; span *= 2) {
     const reach = rest.from + span;
     const windowEnd = windowEndAt(text, reach);
     const window = sliceOf(text, rest.from, windowEnd);
-    const units = [...plainTextUnits(window)].map((unit) => ({ ...unit, start: unit.start + rest.from, end: unit.end + rest.from }));
+    const units = [...plainTextUnits(window, markup)].map((unit) => ({
+      ...unit,
+      start: unit.start + rest.from,
+      end: unit.end + rest.from,
+    }));
     if (windowEnd >= text.length) {
       rest.queue = units;
       rest.from = text.length;
@@ -345,7 +357,7 @@ function cutWindow(text: ChunkedText, rest: RestToCut): void {
  * start after the edit where the old version also had one: from a paragraph start the cut depends
  * only on the text after it, which the edit left alone.
  */
-function editedList(old: UnitList, text: ChunkedText): UnitList | undefined {
+function editedList(old: UnitList, text: ChunkedText, markup: TextMarkup): UnitList | undefined {
   const change = changedStretch(old.text, text);
   if (!change) return old;
   if (change.oldEnd - change.start > LARGE_CHANGE || change.newEnd - change.start > LARGE_CHANGE) return undefined;
@@ -370,7 +382,7 @@ function editedList(old: UnitList, text: ChunkedText): UnitList | undefined {
     const window = sliceOf(text, restart, windowEnd);
     const newUnits = [...units];
     const newStarts = [...starts];
-    for (const unit of plainTextUnits(window)) {
+    for (const unit of plainTextUnits(window, markup)) {
       const at = restart + unit.start;
       // The unit's first line is whole in the window: what decided that a paragraph starts here.
       if (unit.kind === "prose" && unit.start > 0 && at >= change.newEnd && (complete || window.indexOf("\n", unit.start) >= 0)) {

@@ -1,9 +1,8 @@
 /**
- * Plain text, with the one structure plain-text markup shares: reStructuredText literal blocks.
- * A code directive (".. code-block:: python") or a line ending in "::" ("Example::") opens an
- * indented block of code, skipped; a ".. math::" block is read as LaTeX math. Everything else,
- * the content of other directives (".. note::") included, is prose. LaTeX source kept as plain
- * text skips its verbatim environments the same way.
+ * Plain text and the markup languages whose paragraphs are plain lines (LaTeX, AsciiDoc,
+ * reStructuredText): prose, with the blocks each marks off as code, comment or math
+ * (`markupBlockAt`) skipped or read as math. Plain text itself knows reStructuredText literal
+ * blocks and LaTeX verbatim environments, as they turn up in notes kept as .txt.
  *
  * Prose is read a paragraph at a time, each paragraph from its own text, so that an editor can
  * re-read only the paragraphs an edit touched. What the scan of a paragraph looks at stays inside
@@ -15,26 +14,12 @@
  * time), and ids numbered 1 in paragraphs within `SERIES_REACH` ("Runs N1, N2" a few paragraphs
  * above "the N2 extraction") make a lone "N2" an id there too.
  */
-import { verbatimBlockEnd } from "./latexCommands";
 import { scanLatexMath } from "./latexMathSpan";
+import { endOfLine, markupBlockAt, readableProse } from "./markupBlocks";
 import { proseSteps, type ProseCarry } from "./scanProse";
 import { shiftedModel } from "./shiftedModel";
 import type { ScanSink, ScanSteps, SpeciesReader } from "./speciesReader";
-
-/** Directives whose indented content is code or math, not prose (a ".. note::" holds prose). */
-const CODE_DIRECTIVES: ReadonlySet<string> = new Set([
-  "code-block",
-  "code",
-  "sourcecode",
-  "literalinclude",
-  "highlight",
-  "doctest",
-  "testcode",
-  "testoutput",
-  "prompt",
-  "ipython",
-  "math",
-]);
+import type { TextMarkup } from "./types";
 
 /**
  * What plain text is cut into: paragraphs of prose (runs of lines between blank lines, or up to a
@@ -48,9 +33,9 @@ export interface PlainTextUnit {
   readonly end: number;
 }
 
-/** Scans a whole plain-text document into `sink`. */
-export function scanPlainText(text: string, read: SpeciesReader, sink: ScanSink): void {
-  for (const _ of plainTextSteps(text, read, sink, Infinity));
+/** Scans a whole plain-text (or `markup`) document into `sink`. */
+export function scanPlainText(text: string, read: SpeciesReader, sink: ScanSink, markup: TextMarkup = "plaintext"): void {
+  for (const _ of plainTextSteps(text, read, sink, Infinity, markup));
 }
 
 /**
@@ -58,8 +43,14 @@ export function scanPlainText(text: string, read: SpeciesReader, sink: ScanSink)
  * Each unit is read from its own text, with only the carry of `plainTextCarry` from the units
  * beside it, exactly as an editor re-reads the units an edit touched.
  */
-export function* plainTextSteps(text: string, read: SpeciesReader, sink: ScanSink, pauseAt: number): ScanSteps {
-  const units = [...plainTextUnits(text)];
+export function* plainTextSteps(
+  text: string,
+  read: SpeciesReader,
+  sink: ScanSink,
+  pauseAt: number,
+  markup: TextMarkup = "plaintext",
+): ScanSteps {
+  const units = [...plainTextUnits(text, markup)];
   const sources = units.map((unit) => text.slice(unit.start, unit.end));
   const ids = sources.map((source, index) => (units[index].kind === "prose" ? seriesFirstIds(source) : NO_IDS));
   const near: UnitsNear = {
@@ -73,7 +64,7 @@ export function* plainTextSteps(text: string, read: SpeciesReader, sink: ScanSin
     const unit = units[index];
     const carry: ProseCarry = { commentOpen, seriesNearby: (symbol) => hasSeriesNear(near, index, symbol) };
     const local: ScanSink = { occurrences: [], unreadable: [], reactions: sink.reactions ? [] : undefined };
-    const steps = plainTextUnitSteps(sources[index], unit.kind, read, local, pauseAt, carry);
+    const steps = plainTextUnitSteps(sources[index], unit.kind, markup, read, local, pauseAt, carry);
     for (const at of steps) {
       moveInto(sink, local, unit.start);
       yield unit.start + at;
@@ -112,20 +103,23 @@ export function hasSeriesNear(units: UnitsNear, index: number, symbol: string): 
 }
 
 /**
- * Reads one unit from its own text `source` into `sink`, offsets from the unit's start; pauses as
+ * Reads one unit of a `markup` document from its own text `source` into `sink`, offsets from the
+ * unit's start (comments inside a paragraph blanked, see `readableProse`); pauses as
  * `proseSteps` does. Leaves in `carry.commentOpen` whether a comment is open where it ends (a
  * literal block closes none: the prose after it starts afresh).
  */
 export function* plainTextUnitSteps(
   source: string,
   kind: PlainTextUnit["kind"],
+  markup: TextMarkup,
   read: SpeciesReader,
   sink: ScanSink,
   pauseAt: number,
   carry: ProseCarry,
 ): ScanSteps {
   if (kind === "prose") {
-    yield* proseSteps(source, 0, source.length, sink, read, pauseAt, carry);
+    const prose = readableProse(source, markup);
+    yield* proseSteps(prose, 0, prose.length, sink, read, pauseAt, carry);
     return;
   }
   if (kind === "math") scanMathLines(source, 0, source.length, read, sink);
@@ -166,7 +160,7 @@ function moveInto(to: ScanSink, from: ScanSink, by: number): void {
  * The units of `text` in order, each yielded as soon as it is decided. From the start of a prose
  * unit the rest depends only on the text after it: what an editor re-reading from there relies on.
  */
-export function* plainTextUnits(text: string): Generator<PlainTextUnit, void, void> {
+export function* plainTextUnits(text: string, markup: TextMarkup = "plaintext"): Generator<PlainTextUnit, void, void> {
   let paragraphStart = -1;
   let position = 0;
   while (position < text.length) {
@@ -179,61 +173,20 @@ export function* plainTextUnits(text: string): Generator<PlainTextUnit, void, vo
       position = next;
       continue;
     }
-    // LaTeX source: "\begin{verbatim}" ... "\end{verbatim}" is code.
-    const verbatimEnd = line.includes("\\begin{") ? verbatimBlockEnd(text, position, lineEnd) : position;
-    if (verbatimEnd > position) {
-      if (paragraphStart >= 0) yield { kind: "prose", start: paragraphStart, end: position };
-      yield { kind: "code", start: position, end: verbatimEnd };
+    const block = markupBlockAt(text, { start: position, end: lineEnd, text: line, inParagraph: paragraphStart >= 0 }, markup);
+    if (block) {
+      // The paragraph up to the block; a block that starts after its opening line leaves that line to the paragraph.
+      const proseStart = paragraphStart >= 0 ? paragraphStart : position;
+      if (block.start > proseStart) yield { kind: "prose", start: proseStart, end: block.start };
+      yield block;
       paragraphStart = -1;
-      position = verbatimEnd;
+      position = block.end;
       continue;
     }
     if (paragraphStart < 0) paragraphStart = position;
-    const directive = /^\s*\.\.\s+([a-z-]+)::/.exec(line);
-    const literal = directive ? CODE_DIRECTIVES.has(directive[1]) : line.endsWith("::") && !/^\s*::$/.test(line);
-    if (literal && line.length < 200) {
-      const blockEnd = indentedBlockEnd(text, next, indentOf(line));
-      if (blockEnd > next) {
-        // The opening line's own text ("Run it like this::") is still prose.
-        yield { kind: "prose", start: paragraphStart, end: next };
-        yield { kind: /^\s*\.\.\s+math::/.test(line) ? "math" : "code", start: next, end: blockEnd };
-        paragraphStart = -1;
-        position = blockEnd;
-        continue;
-      }
-    }
     position = next;
   }
   if (paragraphStart >= 0) yield { kind: "prose", start: paragraphStart, end: text.length };
-}
-
-function endOfLine(text: string, position: number): number {
-  const end = text.indexOf("\n", position);
-  return end < 0 ? text.length : end;
-}
-
-function indentOf(line: string): number {
-  return line.length - line.trimStart().length;
-}
-
-/** Where the block indented deeper than `indent` that starts at `start` (after blank lines) ends. */
-function indentedBlockEnd(text: string, start: number, indent: number): number {
-  let position = start;
-  let end = start;
-  let sawContent = false;
-  while (position < text.length) {
-    const lineEnd = endOfLine(text, position);
-    const line = text.slice(position, lineEnd);
-    if (line.trim().length === 0) {
-      position = lineEnd + 1;
-      continue;
-    }
-    if (indentOf(line) <= indent) break;
-    sawContent = true;
-    end = Math.min(text.length, lineEnd + 1);
-    position = lineEnd + 1;
-  }
-  return sawContent ? end : start;
 }
 
 /** Each line of a math block, read as LaTeX math (directive options such as ":label:" skipped). */

@@ -5,7 +5,14 @@
 import type { Problem, SpeciesReading, TextRange } from "../chemistry/types";
 import type { Reaction } from "./reactions/reactionTypes";
 
-export type DocumentKind = "markdown" | "plaintext" | "csv" | "tsv" | "json" | "yaml";
+export type DocumentKind = "markdown" | TextMarkup | "csv" | "tsv" | "json" | "yaml";
+
+/**
+ * Prose documents read a paragraph at a time: plain text, and the markup languages whose
+ * paragraphs are plain lines (LaTeX, AsciiDoc, reStructuredText); each skips its own code,
+ * listing and comment blocks.
+ */
+export type TextMarkup = "plaintext" | "latex" | "asciidoc" | "restructuredtext";
 
 /** One mention of a species, exactly as written. */
 export interface SpeciesOccurrence {

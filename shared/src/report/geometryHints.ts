@@ -15,7 +15,7 @@ export interface GeometryHint {
   readonly label: string;
 }
 
-const PROSE_KINDS: readonly DocumentKind[] = ["markdown", "plaintext"];
+const PROSE_KINDS: readonly DocumentKind[] = ["markdown", "plaintext", "latex", "asciidoc", "restructuredtext"];
 
 /** True for the kinds of document whose hints the prose setting governs. */
 export function isProseKind(kind: DocumentKind): boolean {

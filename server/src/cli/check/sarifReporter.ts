@@ -65,7 +65,9 @@ export function sarifReporter(write: (text: string) => void, version: string): C
           version,
           semanticVersion: version,
           shortDescription: { text: "Lewis structures and VSEPR shapes for the chemical species in lab notes and data tables." },
-          fullDescription: { text: `Checks species and species tables in markdown, text, CSV/TSV, JSON and YAML. ${MODEL_CAUTION}` },
+          fullDescription: {
+            text: `Checks species and species tables in markdown, text, LaTeX, AsciiDoc, reStructuredText, CSV/TSV, JSON and YAML. ${MODEL_CAUTION}`,
+          },
           rules: rules.map((code) => ({
             id: code,
             name: code,

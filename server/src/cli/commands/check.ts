@@ -18,10 +18,10 @@ import { terminalSafe, terminalSafeLines } from "../terminalText";
 
 const HELP = `Usage: lonepair check [options] <files or folders...>
 
-Finds the markdown, text, CSV/TSV, JSON and YAML files given (folders are searched; inside a
-git work tree, files that git ignores are left out) and reports every finding the editor
-shows: species that cannot be analysed, radicals, and table cells that disagree with the
-VSEPR model.
+Finds the markdown, text, LaTeX, AsciiDoc, reStructuredText, CSV/TSV, JSON and YAML files
+given (folders are searched; inside a git work tree, files that git ignores are left out) and
+reports every finding the editor shows: species that cannot be analysed, radicals, and table
+cells that disagree with the VSEPR model.
 
 Options:
   --format <text|json|sarif>  output format (default text: path:line:column: severity: message [code])
@@ -65,7 +65,9 @@ async function runCheck(args: readonly string[], io: CliIo): Promise<number> {
   for (const unreadable of found.unreadable)
     io.writeError(`lonepair check: ${terminalSafe(unreadable.path)}: ${terminalSafe(unreadable.message)}\n`);
   for (const skipped of found.skipped)
-    io.writeError(`lonepair check: ${terminalSafe(skipped)}: not a markdown, text, CSV/TSV, JSON or YAML file; skipped\n`);
+    io.writeError(
+      `lonepair check: ${terminalSafe(skipped)}: not a markdown, text, LaTeX, AsciiDoc, reStructuredText, CSV/TSV, JSON or YAML file; skipped\n`,
+    );
 
   const fixing = values.fix === true;
   const dryRun = values["dry-run"] === true;

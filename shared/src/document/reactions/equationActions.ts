@@ -11,6 +11,7 @@ import { combinedEquations } from "./combineHalfReactions";
 import { completionsOf, completionTitle } from "./completeEquation";
 import { judgeReaction } from "./judgeReaction";
 import { REACTION_CODES } from "./reactionFindings";
+import { isTextMarkup } from "../documentKind";
 
 /** One action on an equation: a title and the edits it makes, applied together. */
 export interface EquationAction {
@@ -49,7 +50,7 @@ export function equationActions(text: string, model: DocumentModel, range: TextR
       });
   }
   // Tables hold equations one to a cell: no line to add one after.
-  if (model.kind === "markdown" || model.kind === "plaintext") {
+  if (model.kind === "markdown" || isTextMarkup(model.kind)) {
     for (const combined of combinedEquations(text, reactions, range, read)) {
       const touched = [combined.oxidation, combined.reduction].find(
         (reaction) => reaction.arrow.range.start <= range.end && range.start <= reaction.arrow.range.end,

@@ -1,0 +1,272 @@
+/**
+ * The blocks of text markup that are not prose: code and listings, comments, and math, as each
+ * markup language marks them off line by line. The cut into units (`plainTextUnits`) asks at
+ * each line whether a block opens there; whatever it is not told is a block is prose.
+ *
+ * - Plain text: reStructuredText literal blocks and LaTeX verbatim environments, as they turn up
+ *   in notes kept as .txt.
+ * - LaTeX: verbatim-like environments (`verbatim`, `lstlisting`, `minted`, `comment`).
+ * - AsciiDoc: listing (`----`), literal (`....`), comment (`////`) and passthrough (`++++`)
+ *   blocks; a `[source]`, `[listing]` or `[literal]` paragraph; a literal paragraph (its first
+ *   line indented); block macros (`image::...[]`, `include::...[]`).
+ * - reStructuredText: literal blocks (`::` and its indented block), code directives, comments
+ *   (`..` and its indented block), hyperlink targets and substitution definitions, and the
+ *   heading and options of other directives (their content is prose).
+ *
+ * Comments and verbatim spans inside a line (`% ...` and `\verb|...|` in LaTeX, `// ...` in
+ * AsciiDoc) are blanked in a paragraph's text instead (`readableProse`), so that offsets hold.
+ */
+import { verbatimBlockEnd } from "./latexCommands";
+import type { TextMarkup } from "./types";
+
+/** A block that is not prose, with offsets from the text's start; `end` is just past its last line break. */
+export interface MarkupBlock {
+  readonly kind: "code" | "math";
+  readonly start: number;
+  readonly end: number;
+}
+
+/** The line being looked at by the cut: its start, end (at the line feed) and text (trimmed at its end, at most 200 characters). */
+export interface MarkupLine {
+  readonly start: number;
+  readonly end: number;
+  readonly text: string;
+  /** Whether a paragraph is open: the line is not the first after a blank line or a block. */
+  readonly inParagraph: boolean;
+}
+
+/**
+ * The block that opens on `line` of `text`, if any. A block may start after the line (a line
+ * ending in "::" is prose, the block after it is not); the cut ends the paragraph there.
+ */
+export function markupBlockAt(text: string, line: MarkupLine, markup: TextMarkup): MarkupBlock | undefined {
+  switch (markup) {
+    case "plaintext":
+      return verbatimBlock(text, line) ?? literalBlock(text, line, false);
+    case "latex":
+      return verbatimBlock(text, line);
+    case "asciidoc":
+      return asciidocBlock(text, line);
+    case "restructuredtext":
+      return rstExplicitBlock(text, line) ?? literalBlock(text, line, true);
+  }
+}
+
+// ---------------------------------------------------------------------------------------------
+// LaTeX
+
+function verbatimBlock(text: string, line: MarkupLine): MarkupBlock | undefined {
+  if (!line.text.includes("\\begin{")) return undefined;
+  const end = verbatimBlockEnd(text, line.start, line.end);
+  return end > line.start ? { kind: "code", start: line.start, end } : undefined;
+}
+
+// ---------------------------------------------------------------------------------------------
+// reStructuredText
+
+/** Directives whose indented content is code or math, not prose (a ".. note::" holds prose). */
+const CODE_DIRECTIVES: ReadonlySet<string> = new Set([
+  "code-block",
+  "code",
+  "sourcecode",
+  "literalinclude",
+  "highlight",
+  "doctest",
+  "testcode",
+  "testoutput",
+  "prompt",
+  "ipython",
+  "math",
+]);
+
+/** Directives whose content is markup for another program or a list of files, skipped in a reStructuredText document. */
+const RAW_DIRECTIVES: ReadonlySet<string> = new Set(["raw", "graphviz", "digraph", "ifconfig", "toctree"]);
+
+/** Directives whose heading names a file or a key, not words (a figure's caption below is prose). */
+const PATH_DIRECTIVES: ReadonlySet<string> = new Set([
+  "image",
+  "figure",
+  "include",
+  "contents",
+  "sectnum",
+  "index",
+  "bibliography",
+  "only",
+]);
+
+/**
+ * A literal block: a line ending in "::" (or a code directive) and the block indented deeper
+ * after it. The opening line's own text ("Run it like this::") is still prose. A lone "::" opens
+ * one only in reStructuredText itself (in other plain text it is too often something else).
+ */
+function literalBlock(text: string, line: MarkupLine, loneMarker: boolean): MarkupBlock | undefined {
+  if (line.text.length >= 200) return undefined;
+  const directive = /^\s*\.\.\s+([a-z-]+)::/.exec(line.text);
+  const literal = directive ? CODE_DIRECTIVES.has(directive[1]) : line.text.endsWith("::") && (loneMarker || !/^\s*::$/.test(line.text));
+  if (!literal) return undefined;
+  const next = Math.min(text.length, line.end + 1);
+  const blockEnd = indentedBlockEnd(text, next, indentOf(line.text));
+  if (blockEnd <= next) return undefined;
+  return { kind: /^\s*\.\.\s+math::/.test(line.text) ? "math" : "code", start: next, end: blockEnd };
+}
+
+/**
+ * Explicit markup that is not prose, at a paragraph's start: a comment (".." and anything but a
+ * directive, footnote or citation), a hyperlink target (".. _name:") or a substitution
+ * definition, with the block indented under it; a raw directive with its content; the heading and
+ * option lines of a directive that names a file.
+ */
+function rstExplicitBlock(text: string, line: MarkupLine): MarkupBlock | undefined {
+  if (line.inParagraph || line.text.length >= 200) return undefined;
+  const explicit = /^(\s*)\.\.(?:\s+(.*))?$/.exec(line.text);
+  if (!explicit) return undefined;
+  const rest = explicit[2] ?? "";
+  const next = Math.min(text.length, line.end + 1);
+  const indent = explicit[1].length;
+  // A footnote or citation is prose.
+  if (rest.startsWith("[")) return undefined;
+  const directive = /^(?:\|[^|]+\|\s+)?([A-Za-z][\w-]*(?::[\w-]+)?)::(?:\s|$)/.exec(rest);
+  if (directive && !rest.startsWith("|")) {
+    const name = directive[1].toLowerCase();
+    if (PATH_DIRECTIVES.has(name) || name.includes(":") || name.startsWith("auto"))
+      return { kind: "code", start: line.start, end: optionLinesEnd(text, next, indent) };
+    // A code directive's block is `literalBlock`'s; an admonition's heading and content are prose.
+    if (!RAW_DIRECTIVES.has(name)) return undefined;
+  }
+  // An empty comment ("..", then a blank line) holds nothing: an indented block after it is a quotation.
+  if (rest.length === 0 && text.slice(next, endOfLine(text, next)).trim().length === 0)
+    return { kind: "code", start: line.start, end: next };
+  // A comment, a target, a substitution definition or a raw directive: the whole indented block.
+  return { kind: "code", start: line.start, end: Math.max(next, indentedBlockEnd(text, next, indent)) };
+}
+
+/** Past the option lines (":name: value", indented) that follow a directive's heading at `start`. */
+function optionLinesEnd(text: string, start: number, indent: number): number {
+  let position = start;
+  while (position < text.length) {
+    const lineEnd = endOfLine(text, position);
+    const line = text.slice(position, lineEnd);
+    if (indentOf(line) <= indent || !/^\s*:[\w-]+:/.test(line)) break;
+    position = Math.min(text.length, lineEnd + 1);
+  }
+  return position;
+}
+
+// ---------------------------------------------------------------------------------------------
+// AsciiDoc
+
+/** A delimiter line of a block that is not prose: listing, literal, comment, passthrough. */
+const ASCIIDOC_DELIMITER = /^(-{4,}|\.{4,}|\/{4,}|\+{4,})$/;
+/** A block style that makes the next block code. */
+const ASCIIDOC_CODE_STYLE = /^\[\s*(?:source|listing|literal)\s*(?:[,#.%][^\]]*)?\]$/;
+/** A block macro: `image::file.png[]`, `include::part.adoc[]`, `video::...[]`. */
+const ASCIIDOC_BLOCK_MACRO = /^[a-z][a-z0-9_-]*::\S*\[.*\]$/;
+
+function asciidocBlock(text: string, line: MarkupLine): MarkupBlock | undefined {
+  if (line.text.length >= 200) return undefined;
+  const next = Math.min(text.length, line.end + 1);
+  if (ASCIIDOC_DELIMITER.test(line.text)) return { kind: "code", start: line.start, end: delimitedBlockEnd(text, next, line.text) };
+  if (ASCIIDOC_BLOCK_MACRO.test(line.text)) return { kind: "code", start: line.start, end: next };
+  if (ASCIIDOC_CODE_STYLE.test(line.text)) {
+    // The style line with the block after it: a delimited block, or else a paragraph.
+    const following = text.slice(next, Math.min(endOfLine(text, next), next + 200)).trimEnd();
+    if (following.length === 0) return undefined;
+    const end = ASCIIDOC_DELIMITER.test(following)
+      ? delimitedBlockEnd(text, Math.min(text.length, endOfLine(text, next) + 1), following)
+      : paragraphEnd(text, next);
+    return { kind: "code", start: line.start, end };
+  }
+  // A literal paragraph: its first line indented.
+  if (!line.inParagraph && /^[ \t]+\S/.test(line.text)) return { kind: "code", start: line.start, end: paragraphEnd(text, line.start) };
+  return undefined;
+}
+
+/** Past the line that closes the block opened by `delimiter` (the same line again), or the text's end. */
+function delimitedBlockEnd(text: string, start: number, delimiter: string): number {
+  let position = start;
+  while (position < text.length) {
+    const lineEnd = endOfLine(text, position);
+    const next = Math.min(text.length, lineEnd + 1);
+    if (lineEnd - position < 200 + delimiter.length && text.slice(position, lineEnd).trimEnd() === delimiter) return next;
+    position = next;
+  }
+  return text.length;
+}
+
+/** Past the last line of the paragraph holding `start` (up to a blank line or the text's end). */
+function paragraphEnd(text: string, start: number): number {
+  let position = start;
+  while (position < text.length) {
+    const lineEnd = endOfLine(text, position);
+    if (text.slice(position, lineEnd).trim().length === 0) return position;
+    position = Math.min(text.length, lineEnd + 1);
+  }
+  return text.length;
+}
+
+// ---------------------------------------------------------------------------------------------
+// Inside a paragraph
+
+/**
+ * A paragraph's text as the prose reader should see it: comments and verbatim spans of the
+ * markup replaced by spaces (line breaks kept), so that every offset still holds.
+ */
+export function readableProse(source: string, markup: TextMarkup): string {
+  switch (markup) {
+    case "latex":
+      return source.includes("%") || source.includes("\\verb") || source.includes("inline")
+        ? source.replace(LATEX_HIDDEN, (hidden: string, escapes: string | undefined) => {
+            const kept = escapes?.length ?? 0;
+            return hidden.slice(0, kept) + blank(hidden.slice(kept));
+          })
+        : source;
+    case "asciidoc":
+      return source.includes("//") ? source.replace(/^\/\/(?!\/).*$/gm, blank) : source;
+    default:
+      return source;
+  }
+}
+
+/**
+ * A LaTeX comment (a "%" after an even number of backslashes, to the line's end), `\verb|...|`
+ * (any delimiter), `\lstinline|...|` or `\lstinline{...}`, and `\mintinline{lang}{...}`. The
+ * first group keeps the backslashes before a "%" ("\\" is a line break, then the comment).
+ */
+const LATEX_HIDDEN =
+  /(?<!\\)((?:\\\\)*)%.*$|\\(?:verb\*?|lstinline(?:\[[^\]\n]*\])?)(?:\{[^}\n]*\}|([^\sa-zA-Z{*])[^\n]*?\2)|\\mintinline(?:\[[^\]\n]*\])?\{[^}\n]*\}(?:\{[^}\n]*\}|([^\sa-zA-Z{])[^\n]*?\3)/gm;
+
+function blank(hidden: string): string {
+  return hidden.replace(/[^\n]/g, " ");
+}
+
+// ---------------------------------------------------------------------------------------------
+// Lines
+
+export function endOfLine(text: string, position: number): number {
+  const end = text.indexOf("\n", position);
+  return end < 0 ? text.length : end;
+}
+
+export function indentOf(line: string): number {
+  return line.length - line.trimStart().length;
+}
+
+/** Where the block indented deeper than `indent` that starts at `start` (after blank lines) ends. */
+export function indentedBlockEnd(text: string, start: number, indent: number): number {
+  let position = start;
+  let end = start;
+  let sawContent = false;
+  while (position < text.length) {
+    const lineEnd = endOfLine(text, position);
+    const line = text.slice(position, lineEnd);
+    if (line.trim().length === 0) {
+      position = lineEnd + 1;
+      continue;
+    }
+    if (indentOf(line) <= indent) break;
+    sawContent = true;
+    end = Math.min(text.length, lineEnd + 1);
+    position = lineEnd + 1;
+  }
+  return sawContent ? end : start;
+}

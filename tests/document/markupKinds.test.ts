@@ -1,0 +1,81 @@
+// LaTeX, AsciiDoc and reStructuredText documents: prose is read as prose, and the code, listing,
+// comment and verbatim blocks each language marks off are not read at all.
+import { describe, expect, it } from "vitest";
+import { analyzeDocument, documentKindFor, type DocumentKind } from "../../shared/src/index";
+
+/** The species texts found in `text` read as a document of `kind`, in order. */
+function check(kind: DocumentKind, text: string, expected: readonly string[]): void {
+  expect(analyzeDocument(text, kind).occurrences.map((occurrence) => occurrence.text)).toEqual(expected);
+}
+
+describe("document kinds of the markup languages", () => {
+  // common practice: the usual file extensions and editor language ids of these formats
+  it.each([
+    ["thesis/chapter-3.tex", undefined, "latex"],
+    ["handout.ltx", undefined, "latex"],
+    ["wiki/gas-store.adoc", undefined, "asciidoc"],
+    ["wiki/gas-store.asciidoc", undefined, "asciidoc"],
+    ["docs/run-15.rst", undefined, "restructuredtext"],
+    ["untitled-1", "latex", "latex"],
+    ["untitled-2", "asciidoc", "asciidoc"],
+    ["untitled-3", "restructuredtext", "restructuredtext"],
+  ])("%s (language %s) is %s", (fileName, languageId, kind) => {
+    expect(documentKindFor(fileName, languageId)).toBe(kind);
+  });
+});
+
+describe("LaTeX", () => {
+  // from memory: LaTeX manual (% starts a comment, \% is a percent sign, \\ a line break; verbatim environments)
+  it.each([
+    ["prose and \\ce", "The NF3 line and \\ce{SF6} were purged.\n", ["NF3", "SF6"]],
+    ["a whole-line comment", "% CH5 on the old label\nThe NF3 line.\n", ["NF3"]],
+    ["a trailing comment", "The NF3 line % but CH5 here\n", ["NF3"]],
+    ["an escaped percent is text", "50\\% of the NF3 was lost.\n", ["NF3"]],
+    ["a comment after a line break", "The SF6 line\\\\% CH5\n", ["SF6"]],
+    ["\\verb", "Type \\verb|CH5 + N2| here, then SF4.\n", ["SF4"]],
+    ["\\lstinline", "Type \\lstinline{CH5} and \\lstinline!XeF4! then SF4.\n", ["SF4"]],
+    ["\\mintinline", "Type \\mintinline{text}{CH5} then SF4.\n", ["SF4"]],
+    ["verbatim", "SF4 first.\n\\begin{verbatim}\nCH5\n\n  NF3\n\\end{verbatim}\nthen XeF4.\n", ["SF4", "XeF4"]],
+    ["lstlisting", "\\begin{lstlisting}[language=Python]\ngas = 'CH5'\n\\end{lstlisting}\nBF3 after.\n", ["BF3"]],
+    ["minted", "\\begin{minted}{python}\nCH5\n\\end{minted}\nBF3 after.\n", ["BF3"]],
+    ["a line ending in :: is prose", "Run it like this::\n\n    SF4 in an indented line\n", ["SF4"]],
+  ])("%s", (_, text, expected) => check("latex", text, expected));
+});
+
+describe("AsciiDoc", () => {
+  // from memory: AsciiDoc language documentation (delimited blocks, block styles, literal paragraphs, comments)
+  it.each([
+    ["prose with subscripts", "We kept H~2~O away from SO~4~^2-^.\n", ["H~2~O", "SO~4~^2-^"]],
+    ["a listing block", "SF4 first.\n\n----\nCH5\n\nNF3\n----\n\nthen XeF4.\n", ["SF4", "XeF4"]],
+    ["a source block", "[source,python]\n----\ngas = 'CH5'\n----\nBF3 after.\n", ["BF3"]],
+    ["a source paragraph", "[source]\ngas = CH5\n\nBF3 after.\n", ["BF3"]],
+    ["a literal block", "....\nCH5\n....\nBF3 after.\n", ["BF3"]],
+    ["a literal paragraph", "SF4 first.\n\n  CH5 indented\n\nBF3 after.\n", ["SF4", "BF3"]],
+    ["a comment block", "////\nCH5 in a comment\n////\nBF3 after.\n", ["BF3"]],
+    ["a line comment", "// CH5 in a comment\nBF3 after.\n", ["BF3"]],
+    ["a passthrough block", "++++\n<b>CH5</b>\n++++\nBF3 after.\n", ["BF3"]],
+    ["a longer delimiter closes only its own block", "------\nCH5\n----\nNF3\n------\nBF3 after.\n", ["BF3"]],
+    ["a block macro", "image::spectra/CH5-NF3.png[NF3 band]\nBF3 after.\n", ["BF3"]],
+    ["an example block is prose", "====\nSF4 in an example\n====\n", ["SF4"]],
+    ["a table is prose", "|===\n| KR-0412 | SF6\n|===\n", ["SF6"]],
+  ])("%s", (_, text, expected) => check("asciidoc", text, expected));
+});
+
+describe("reStructuredText", () => {
+  // from memory: reStructuredText markup specification (literal blocks, explicit markup, comments, directives)
+  it.each([
+    ["prose with :sub:", "We kept H\\ :sub:`2`\\ O from NF3.\n", ["H\\ :sub:`2`\\ O", "NF3"]],
+    ["a literal block", "Run it like this::\n\n    CH5 typed as code\n\nBF3 after.\n", ["BF3"]],
+    ["a lone :: paragraph", "SF4 first.\n\n::\n\n    CH5 typed as code\n\nBF3 after.\n", ["SF4", "BF3"]],
+    ["a code directive", ".. code-block:: text\n\n   CH5\n\nBF3 after.\n", ["BF3"]],
+    ["a comment", ".. CH5 in a comment\n   and NF3 under it\n\nBF3 after.\n", ["BF3"]],
+    ["an empty comment", "..\n\n   SF4 quoted\n", ["SF4"]],
+    ["a hyperlink target", ".. _CH5-typo: https://example.org/CH5\n\nBF3 after.\n", ["BF3"]],
+    ["a substitution definition", ".. |CH5| replace:: CH5\n\nBF3 after.\n", ["BF3"]],
+    ["an image's file and options", ".. image:: spectra/CH5.png\n   :alt: CH5 band\n\nBF3 after.\n", ["BF3"]],
+    ["a figure's caption is prose", ".. figure:: spectra/NF3.png\n\n   The NF3 band.\n", ["NF3"]],
+    ["a note is prose", ".. note:: SF4 is a seesaw.\n\n   So is TeCl4.\n", ["SF4", "TeCl4"]],
+    ["a footnote is prose", ".. [1] BF3 is trigonal planar.\n", ["BF3"]],
+    ["a raw directive", ".. raw:: html\n\n   <b>CH5</b>\n\nBF3 after.\n", ["BF3"]],
+  ])("%s", (_, text, expected) => check("restructuredtext", text, expected));
+});
