@@ -79,3 +79,19 @@ describe("reStructuredText", () => {
     ["a raw directive", ".. raw:: html\n\n   <b>CH5</b>\n\nBF3 after.\n", ["BF3"]],
   ])("%s", (_, text, expected) => check("restructuredtext", text, expected));
 });
+
+describe("wiki links around element names", () => {
+  // common practice: a wiki page links an element's name to the element's own page; the link is a word
+  it.each([
+    ["a link in running text", "three [[fluorine]] atoms pull on the lone pair", []],
+    ["a link before a substance word", "[[sulfur]] burns with a blue flame", []],
+    ["a piped link's label", "see [[Fluorine (element)|fluorine]] for the gas", []],
+    ["a link to a compound stays a species", "its cousin [[nitrogen trichloride]] is an oil", ["nitrogen trichloride"]],
+    ["a formula as a link's label stays a species", "compare [[sulfur hexafluoride|SF{{sub|6}}]]", ["SF{{sub|6}}"]],
+    ["an element name with no link keeps its context", "sodium metal and [[sodium]] metal", ["sodium"]],
+    ["atoms of an element are not the substance", "the plasma gives fluorine atoms", []],
+  ])("%s", (_, text, expected) => {
+    check("plaintext", text, expected);
+    check("markdown", text, expected);
+  });
+});

@@ -128,6 +128,7 @@ function scanNameAt(
   }
   const before = wordBefore(text, first.start);
   if (kind === "element") {
+    if (isWikiLinkWord(text, first.start, first.end) || (following !== undefined && ATOM_AFTER.has(following))) return;
     if (!isSubstanceContext(text, first, before, following, state)) return;
   } else {
     const ion = following !== undefined && isIonWord(following);
@@ -211,6 +212,23 @@ function report(
 
 function isIonWord(word: string): boolean {
   return word === "ion" || word === "ions" || word === "anion" || word === "anions" || word === "cation" || word === "cations";
+}
+
+// common practice: words after an element name that make it atoms of the element, whatever
+// comes before ("the plasma gives fluorine atoms")
+const ATOM_AFTER: ReadonlySet<string> = new Set(["atom", "atoms", "nucleus", "nuclei", "isotope", "isotopes"]);
+
+/**
+ * Whether the word at `start`..`end` is the whole target or label of a wiki link ("three
+ * [[fluorine]] atoms", "[[Fluorine (element)|fluorine]]"): a link to the element's page, a word.
+ */
+function isWikiLinkWord(text: string, start: number, end: number): boolean {
+  const closes = text.startsWith("]]", end) || text.charCodeAt(end) === 0x7c;
+  if (!closes) return false;
+  if (text.startsWith("[[", start - 2)) return true;
+  if (text.charCodeAt(start - 1) !== 0x7c) return false;
+  const open = text.lastIndexOf("[[", start);
+  return open >= 0 && start - open < 200 && !text.slice(open, start).includes("]]") && !text.slice(open, start).includes("\n");
 }
 
 // common practice: words around an element name that make it the substance, not an atom; the
