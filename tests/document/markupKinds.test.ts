@@ -19,6 +19,8 @@ describe("document kinds of the markup languages", () => {
     ["untitled-1", "latex", "latex"],
     ["untitled-2", "asciidoc", "asciidoc"],
     ["untitled-3", "restructuredtext", "restructuredtext"],
+    ["untitled-4", "rst", "restructuredtext"],
+    ["untitled-5", "tex", "latex"],
   ])("%s (language %s) is %s", (fileName, languageId, kind) => {
     expect(documentKindFor(fileName, languageId)).toBe(kind);
   });

@@ -46,6 +46,7 @@ const BY_LANGUAGE: Readonly<Record<string, DocumentKind>> = {
   tex: "latex",
   asciidoc: "asciidoc",
   restructuredtext: "restructuredtext",
+  rst: "restructuredtext",
 };
 
 /** Extensions whose content may well be a table saved under a vague name. */
