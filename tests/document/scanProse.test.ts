@@ -34,6 +34,8 @@ describe("species in prose", () => {
     ["Plain code `SF6` is skipped, `smiles:⟦C1=CC=CC=C1⟧` is read."],
     ["Not H1N1, P450, B12 or N-methyl; but ⟦H2O2⟧ and ⟦HeH+⟧."],
     ["<!-- SF6 here is hidden --> wait: <!-- SF6 --> ⟦NF3⟧"],
+    ["⟦SF4⟧ + 2 ⟦H2O⟧ -> ⟦SO2⟧ + 4 ⟦HF⟧, and ⟦SO<sub>2</sub>⟧ + ⟦HF⟧; but DO NOT VENT HF."],
+    ["Runs N1, N2 and N3 ran late. Purge with ⟦N<sub>2</sub>⟧ or ⟦N₂⟧ first, not with N2."],
   ])("%s", (marked) => {
     check(marked, "markdown");
   });

@@ -35,16 +35,20 @@ export function isPartOfCode(text: string, start: number, end: number): boolean 
 
 const LOOK_AROUND = 40;
 
-/** The letters-only word just before `start`, skipping spaces and punctuation. */
+/**
+ * The letters-only word just before `start`, skipping spaces and punctuation; none when its
+ * letters run on into a count (the "SO" of "SO2 + 4 HF" or "SO~2~ + 4 HF" is a formula, not a
+ * shouted word).
+ */
 function wordBefore(text: string, start: number): string {
   const from = Math.max(0, start - LOOK_AROUND);
-  const match = /([A-Za-z]+)[^A-Za-z\n]*$/.exec(text.slice(from, start));
-  return match ? match[1] : "";
+  const match = /([A-Za-z]+)([^A-Za-z\n]*)$/.exec(text.slice(from, start));
+  return match && !/^[0-9~_^{<\\]/.test(match[2]) ? match[1] : "";
 }
 
-/** The letters-only word just after `end`, skipping spaces and punctuation. */
+/** The letters-only word just after `end`, skipping spaces and punctuation; none when it runs on into a count. */
 function wordAfter(text: string, end: number): string {
-  const match = /^[^A-Za-z\n]*([A-Za-z]+)/.exec(text.slice(end, end + LOOK_AROUND));
+  const match = /^[^A-Za-z\n]*([A-Za-z]+)(?![A-Za-z0-9~_^{<\\])/.exec(text.slice(end, end + LOOK_AROUND));
   return match ? match[1] : "";
 }
 
