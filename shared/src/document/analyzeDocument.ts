@@ -6,7 +6,7 @@ import { scanMarkdown } from "./scanMarkdown";
 import { scanPlainText } from "./scanPlainText";
 import { memoisedReader, type SpeciesReader } from "./speciesReader";
 import { readDelimitedRecords } from "./tables/delimitedRecords";
-import { readJsonRecords } from "./tables/json";
+import { readJsonRecords, readJsonTree, type JsonTree } from "./tables/json";
 import type { RecordSink } from "./tables/records";
 import { readYamlRecords, readYamlStream, type YamlStream } from "./tables/yaml";
 import type { Reaction } from "./reactions/reactionTypes";
@@ -42,6 +42,14 @@ export function analyzeDocument(
  */
 export function analyzeYamlStream(text: string, documents: YamlStream, read: SpeciesReader): DocumentModel {
   return modelOf("yaml", (sink) => readYamlStream(documents, text, read, sink));
+}
+
+/**
+ * The model of a JSON `text` already parsed into `tree`: what `analyzeDocument` gives for `text`,
+ * without parsing it again (the caller also needs the tree).
+ */
+export function analyzeJsonTree(text: string, tree: JsonTree, read: SpeciesReader): DocumentModel {
+  return modelOf("json", (sink) => readJsonTree(tree, text, read, sink));
 }
 
 function modelOf(kind: DocumentKind, reader: (sink: RecordSink) => readonly Finding[]): DocumentModel {

@@ -12,14 +12,14 @@
  * on their own are all read whole, the ordinary way.
  */
 import { parseTree, type Node, type ParseError } from "jsonc-parser/lib/esm/main.js";
-import { analyzeDocument } from "./analyzeDocument";
+import { analyzeDocument, analyzeJsonTree } from "./analyzeDocument";
 import { checkDocument } from "./checkDocument";
 import { sliceOf, wholeText, type ChunkedText } from "./chunkedText";
 import { changedStretch, lastAtOrBefore, NO_FINDINGS, rememberingListReader, type ListParts, type ListReader } from "./listParts";
 import type { SpeciesReader } from "./speciesReader";
-import { JSON_PARSE_OPTIONS } from "./tables/json";
+import { JSON_PARSE_OPTIONS, parseJsonTree } from "./tables/json";
 import { moved } from "./tables/delimitedFindings";
-import type { Finding } from "./types";
+import type { DocumentModel, Finding } from "./types";
 
 /** A reader that keeps the last version's list; keep one per open document. */
 export function jsonListReader(read: SpeciesReader): ListReader {
@@ -35,17 +35,13 @@ export function jsonListReader(read: SpeciesReader): ListReader {
  */
 function wholeState(text: ChunkedText, read: SpeciesReader): ListParts | { readonly findings: readonly Finding[] } {
   const whole = wholeText(text);
-  const all = documentFindings(whole, read);
+  // Parsed once: the same tree gives the findings and the list's elements.
+  const tree = parseJsonTree(whole);
+  const all = findingsOf(analyzeJsonTree(whole, tree, read));
   const plain = { findings: all };
   if (all.some((finding) => finding.code === "json-syntax" || finding.code === "document-unreadable")) return plain;
-  const errors: ParseError[] = [];
-  let root: Node | undefined;
-  try {
-    root = parseTree(whole, errors, JSON_PARSE_OPTIONS);
-  } catch {
-    return plain;
-  }
-  if (!root || errors.length > 0) return plain;
+  const root = tree.root;
+  if (!root || tree.errors.length > 0) return plain;
   const list = recordList(root);
   if (!list || !list.children || list.children.length === 0) return plain;
   const starts = Int32Array.from(list.children, (child) => child.offset);
@@ -167,6 +163,10 @@ function cleanElements(stretch: string): { start: number; end: number }[] | unde
 
 /** The problems and checks' findings of `text` read as JSON, in document order (the plain path). */
 function documentFindings(text: string, read: SpeciesReader): Finding[] {
-  const model = analyzeDocument(text, "json", read);
+  return findingsOf(analyzeDocument(text, "json", read));
+}
+
+/** The problems and checks' findings of a model, in document order. */
+function findingsOf(model: DocumentModel): Finding[] {
   return [...model.problems, ...checkDocument(model)].sort((a, b) => a.range.start - b.range.start || a.range.end - b.range.end);
 }

@@ -313,6 +313,22 @@ export function isEquationHeader(header: string): boolean {
   return EQUATION_HEADER.test(normalizeHeader(header.replace(/([a-z])([A-Z])/g, "$1 $2")));
 }
 
+/**
+ * `isEquationHeader`, remembered for one document's reading: the keys of JSON and YAML records
+ * repeat in every record. Keeps at most `limit` keys (the rest are worked out each time).
+ */
+export function equationKeyTest(limit = 4096): (key: string) => boolean {
+  const known = new Map<string, boolean>();
+  return (key) => {
+    let equation = known.get(key);
+    if (equation === undefined) {
+      equation = isEquationHeader(key);
+      if (known.size < limit) known.set(key, equation);
+    }
+    return equation;
+  };
+}
+
 /** Words that may stand before "reaction" or "equation" in an equation column's header. */
 const EQUATION_QUALIFIERS =
   "balanced|unbalanced|chemical|overall|net|ionic|full|complete|molecular|skeleton|skeletal|main|side|" +

@@ -10,7 +10,7 @@ import type { SpeciesReader } from "../speciesReader";
 import type { Finding } from "../types";
 import { columnUnder } from "./delimitedRecords";
 import { readEquationCell } from "./equationCells";
-import { isEquationHeader, namesSpecies } from "./headers";
+import { equationKeyTest, namesSpecies } from "./headers";
 import { addRecord, type RecordField, type RecordSink } from "./records";
 
 const MESSAGES: Readonly<Record<string, string>> = {
@@ -31,17 +31,36 @@ const MESSAGES: Readonly<Record<string, string>> = {
 /** How JSON is parsed: with comments and trailing commas, as settings files are written. */
 export const JSON_PARSE_OPTIONS = { allowTrailingComma: true, disallowComments: false } as const;
 
-/** Reads a JSON document into `sink`; returns its syntax problems. */
-export function readJsonRecords(text: string, read: SpeciesReader, sink: RecordSink): readonly Finding[] {
+/** A JSON text parsed once: its syntax tree (undefined when it nests too deeply to read) and errors. */
+export interface JsonTree {
+  readonly root: Node | undefined;
+  readonly errors: readonly ParseError[];
+  /** Set when the parser exhausted the stack: nothing was read. */
+  readonly tooDeep: boolean;
+}
+
+/** Parses `text` once, for callers that need both its records and its tree. */
+export function parseJsonTree(text: string): JsonTree {
   const errors: ParseError[] = [];
-  let root: Node | undefined;
   try {
-    root = parseTree(text, errors, JSON_PARSE_OPTIONS);
+    return { root: parseTree(text, errors, JSON_PARSE_OPTIONS), errors, tooDeep: false };
   } catch {
     // Nesting deep enough to exhaust the stack: say so rather than fail.
+    return { root: undefined, errors: [], tooDeep: true };
+  }
+}
+
+/** Reads a JSON document into `sink`; returns its syntax problems. */
+export function readJsonRecords(text: string, read: SpeciesReader, sink: RecordSink): readonly Finding[] {
+  return readJsonTree(parseJsonTree(text), text, read, sink);
+}
+
+/** Reads the parsed `tree` of `text` into `sink`; returns its syntax problems. */
+export function readJsonTree(tree: JsonTree, text: string, read: SpeciesReader, sink: RecordSink): readonly Finding[] {
+  if (tree.tooDeep) {
     return [{ range: { start: 0, end: 0 }, severity: "error", code: "json-syntax", message: "This JSON is nested too deeply to read." }];
   }
-  const problems = errors.map((error): Finding => {
+  const problems = tree.errors.map((error): Finding => {
     const name = printParseErrorCode(error.error);
     return {
       // At least one character, but never past the end of the text.
@@ -51,16 +70,17 @@ export function readJsonRecords(text: string, read: SpeciesReader, sink: RecordS
       message: MESSAGES[name] ?? `JSON syntax error (${name}).`,
     };
   });
-  if (root) walk(root, text, read, sink);
+  if (tree.root) walk(tree.root, text, read, sink);
   return problems;
 }
 
 /** Visits every object without recursion, so deep documents cannot exhaust the stack. */
 function walk(root: Node, text: string, read: SpeciesReader, sink: RecordSink): void {
   const pending: Node[] = [root];
+  const isEquationKey = equationKeyTest();
   while (pending.length > 0) {
     const node = pending.pop()!;
-    if (node.type === "object") objectRecord(node, text, read, sink);
+    if (node.type === "object") objectRecord(node, text, read, sink, isEquationKey);
     const children = node.children ?? [];
     for (let index = children.length - 1; index >= 0; index--) {
       const child = children[index];
@@ -72,12 +92,12 @@ function walk(root: Node, text: string, read: SpeciesReader, sink: RecordSink): 
   }
 }
 
-function objectRecord(node: Node, text: string, read: SpeciesReader, sink: RecordSink): void {
+function objectRecord(node: Node, text: string, read: SpeciesReader, sink: RecordSink, isEquationKey: (key: string) => boolean): void {
   const fields: RecordField[] = [];
   for (const property of node.children ?? []) {
     const [key, value] = property.children ?? [];
     if (!key || !value || typeof key.value !== "string") continue;
-    if (isEquationHeader(key.value)) equationValues(value, text, read, sink);
+    if (isEquationKey(key.value)) equationValues(value, text, read, sink);
     // Keys repeat in every record: their meaning is worked out once, as a table's headers are.
     const column = columnUnder(key.value);
     const field = column && valueField(value, text);
