@@ -9,8 +9,9 @@ import type { SpeciesReader } from "../speciesReader";
 import type { Finding } from "../types";
 import { columnUnder } from "./delimitedRecords";
 import { readEquationCell } from "./equationCells";
-import { isEquationHeader, namesSpecies } from "./headers";
+import { equationKeyTest, namesSpecies } from "./headers";
 import { addRecord, type RecordField, type RecordSink } from "./records";
+import { parseWithItemLines } from "./yamlItemLines";
 
 /** The documents of a YAML stream, as `parseYamlStream` gives them. */
 export type YamlStream = readonly Document.Parsed[];
@@ -107,6 +108,11 @@ export function parseYamlStream(text: string): YamlStream | undefined {
 }
 
 function parseNested(text: string): YamlStream | undefined {
+  // Long runs of one-line flow mappings are built without the package's full parse (see `parseWithItemLines`).
+  return parseWithItemLines(text, parseWhole);
+}
+
+function parseWhole(text: string): YamlStream | undefined {
   try {
     const documents = parseAllDocuments(text, { prettyErrors: false, keepSourceTokens: false });
     return Array.isArray(documents) ? documents : [];
@@ -146,10 +152,11 @@ interface Pending {
 /** Visits every mapping without recursion, so deep documents cannot exhaust the stack. */
 function walk(root: Node, text: string, read: SpeciesReader, sink: RecordSink): void {
   const pending: Pending[] = [{ node: root }];
+  const isEquationKey = equationKeyTest();
   while (pending.length > 0) {
     const { node, key } = pending.pop()!;
     if (isMap(node)) {
-      mappingRecord(node, key, text, read, sink);
+      mappingRecord(node, key, text, read, sink, isEquationKey);
       for (let index = node.items.length - 1; index >= 0; index--) {
         const pair = node.items[index];
         if (!isPair(pair)) continue;
@@ -165,10 +172,17 @@ function walk(root: Node, text: string, read: SpeciesReader, sink: RecordSink): 
   }
 }
 
-function mappingRecord(node: YAMLMap, key: Scalar | undefined, text: string, read: SpeciesReader, sink: RecordSink): void {
+function mappingRecord(
+  node: YAMLMap,
+  key: Scalar | undefined,
+  text: string,
+  read: SpeciesReader,
+  sink: RecordSink,
+  isEquationKey: (key: string) => boolean,
+): void {
   const fields: RecordField[] = [];
   for (const pair of node.items as Pair[]) {
-    if (isScalar(pair.key) && isEquationHeader(String(pair.key.value))) equationValues(pair.value as Node | null, text, read, sink);
+    if (isScalar(pair.key) && isEquationKey(String(pair.key.value))) equationValues(pair.value as Node | null, text, read, sink);
     if (!isScalar(pair.key) || !isScalar(pair.value)) continue;
     // Keys repeat in every record: their meaning is worked out once, as a table's headers are.
     const column = columnUnder(String(pair.key.value));
