@@ -40,6 +40,7 @@ async function streamed(text: string, kind: "csv" | "tsv", batchCharacters: numb
         ...finding,
         range: move(finding.range),
         ...(finding.fix ? { fix: { ...finding.fix, range: move(finding.fix.range) } } : {}),
+        ...(finding.choices ? { choices: finding.choices.map((choice) => ({ ...choice, range: move(choice.range) })) } : {}),
       });
     for (const occurrence of model.occurrences) {
       species.push([occurrence.range.start + batch.offset, occurrence.text]);

@@ -35,7 +35,7 @@ describe("README's first command in a fresh clone", () => {
     expect(out).toContain("Valence electrons for BrF5 are 42, the table says 40.");
     expect(out).toContain("Valence electrons for XeF4 are 36, the table says 34.");
     expect(out).toContain("Molecular geometry of NO2- is bent (VSEPR model prediction), the table says linear.");
-    expect(out).toContain("3 errors, 5 warnings and 3 notes in 5 of 6 files checked.");
+    expect(out).toContain("3 errors, 6 warnings and 3 notes in 5 of 6 files checked.");
     // Then the summary table of a write-up. common practice: NF3 AX3E1, SF6 AX6
     expect(out).toMatch(/\| NF3 \| nitrogen trifluoride \| 26 \| AX3E1 \| tetrahedral \| trigonal pyramidal \|/);
     expect(out).toMatch(/\| SF6 \| sulfur hexafluoride \| 48 \| AX6 \| octahedral \| octahedral \|/);

@@ -51,6 +51,7 @@ describe("check --format sarif", () => {
       "ionic-solid",
       "octet-exceeded",
       "table-molecular-geometry",
+      "table-name-formula",
       "table-valence-electrons",
       "transition-metal-centre",
     ]);
@@ -64,6 +65,7 @@ describe("check --format sarif", () => {
     expect(levels).toEqual({
       "table-valence-electrons": "warning",
       "table-molecular-geometry": "warning",
+      "table-name-formula": "warning",
       "octet-exceeded": "error",
       "transition-metal-centre": "note",
       "equation-unbalanced": "error",

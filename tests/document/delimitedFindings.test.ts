@@ -6,7 +6,7 @@ import { describe, expect, it } from "vitest";
 import { analyzeDocument } from "../../shared/src/document/analyzeDocument";
 import { checkDocument } from "../../shared/src/document/checkDocument";
 import { checkDelimitedText, delimitedRowMemo, findHeader } from "../../shared/src/document/tables/delimitedFindings";
-import type { Finding } from "../../shared/src/document/types";
+import type { Finding, TextFix } from "../../shared/src/document/types";
 import { tableArbitrary } from "../support/randomTables";
 
 function ordinary(text: string, kind: "csv" | "tsv", delimiter: string): Finding[] {
@@ -88,6 +88,7 @@ describe("CSV findings worked out once per distinct row", () => {
 
 function shifted(finding: Finding, by: number): Finding {
   const range = { start: finding.range.start + by, end: finding.range.end + by };
-  if (!finding.fix) return { ...finding, range };
-  return { ...finding, range, fix: { ...finding.fix, range: { start: finding.fix.range.start + by, end: finding.fix.range.end + by } } };
+  const move = (fix: TextFix): TextFix => ({ ...fix, range: { start: fix.range.start + by, end: fix.range.end + by } });
+  const fixed = finding.fix ? { ...finding, range, fix: move(finding.fix) } : { ...finding, range };
+  return finding.choices ? { ...fixed, choices: finding.choices.map(move) } : fixed;
 }

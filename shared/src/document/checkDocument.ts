@@ -1,18 +1,20 @@
 /**
- * The checks over a document model: species the core rejects, radicals, and table cells that
- * contradict what the core works out. The model's own `problems` (malformed JSON, a stray quote)
- * are not repeated here; callers show both.
+ * The checks over a document model: species the core rejects, radicals, table cells that
+ * contradict what the core works out, and a record's name that names another species than its
+ * formula. The model's own `problems` (malformed JSON, a stray quote) are not repeated here;
+ * callers show both.
  */
 import { analyzeSpecies } from "../chemistry/analyze";
 import { chooseRespelling } from "../chemistry/analysis/respelling";
 import type { AnalysisResult, Problem } from "../chemistry/types";
 import { analyzeOccurrence } from "./analyzeOccurrence";
+import { nameFormulaFinding } from "./checks/nameFormulaAgreement";
 import { checkRecord } from "./checks/recordChecks";
 import { severityOf } from "./findingSeverity";
 import { isSafeSpellingFix, type AnalyzeText } from "./fixPolicy";
 import { groupAbbreviationIn } from "./groupAbbreviations";
 import { reactionFindings } from "./reactions/reactionFindings";
-import type { DocumentModel, Finding, SpeciesOccurrence, UnreadableSpecies } from "./types";
+import type { DocumentModel, Finding, SpeciesOccurrence, TableRecord, UnreadableSpecies } from "./types";
 
 /** Findings for `model`, with `analyze` working out each distinct species once. */
 export function checkDocument(model: DocumentModel, analyze: (text: string) => AnalysisResult = analyzeSpecies): Finding[] {
@@ -85,9 +87,29 @@ function checkModel(
   for (const record of model.records) {
     const result = analysisOf(record.species);
     if (result?.ok) checkRecord(record, result.value, findings);
+    const pair = record.nameBesideFormula;
+    const disagreement = pair && nameFormulaFinding(pair, model.kind, () => nameFitsCells(record, pair.name, analysisOf));
+    if (disagreement) findings.push(disagreement);
   }
   if (model.reactions && model.reactions.length > 0) findings.push(...reactionFindings(model.reactions, analysisOfText));
   return findings.sort((a, b) => a.range.start - b.range.start);
+}
+
+/**
+ * Whether the record's value cells fit the species its name gives at least as well as they fit
+ * the record's species: changing the formula to the name's must not make the rest of the row wrong.
+ */
+function nameFitsCells(
+  record: TableRecord,
+  name: SpeciesOccurrence,
+  analysisOf: (occurrence: SpeciesOccurrence) => AnalysisResult | undefined,
+): boolean {
+  if (record.cells.length === 0) return true;
+  const named = analysisOf(name);
+  if (!named?.ok) return false;
+  const current = analysisOf(record.species);
+  const before = current?.ok ? checkRecord(record, current.value).length : 0;
+  return checkRecord({ species: name, cells: record.cells }, named.value).length <= before;
 }
 
 function sameSpecies(a: SpeciesOccurrence, b: SpeciesOccurrence): boolean {

@@ -37,6 +37,15 @@ export function shiftedModel(model: DocumentModel, by: number): DocumentModel {
     species: occurrence(item.species),
     cells: item.cells.map(cell),
     ...(item.otherNames ? { otherNames: item.otherNames.map(occurrence) } : {}),
+    ...(item.nameBesideFormula
+      ? {
+          nameBesideFormula: {
+            name: occurrence(item.nameBesideFormula.name),
+            nameCell: cell(item.nameBesideFormula.nameCell),
+            formula: occurrence(item.nameBesideFormula.formula),
+          },
+        }
+      : {}),
   });
   const unreadable = (item: UnreadableSpecies): UnreadableSpecies => ({
     ...item,

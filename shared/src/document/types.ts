@@ -65,6 +65,18 @@ export interface TableRecord {
   readonly cells: readonly TableCell[];
   /** Further cells of the record that name a species too (a name beside the formula). */
   readonly otherNames?: readonly SpeciesOccurrence[];
+  /** The record's name read beside its formula, when it has both: the two should name one species. */
+  readonly nameBesideFormula?: NameBesideFormula;
+}
+
+/** A record's name cell and formula cell, each as read. */
+export interface NameBesideFormula {
+  /** The name as read: the whole cell, or the name it opens with ("Hydrochloric acid" of "Hydrochloric acid 2 M"). */
+  readonly name: SpeciesOccurrence;
+  /** The whole name cell (trimmed), so a check can see what follows the name. */
+  readonly nameCell: TableCell;
+  /** The formula cell's reading. */
+  readonly formula: SpeciesOccurrence;
 }
 
 export type FindingSeverity = "error" | "warning" | "information" | "hint";
@@ -99,6 +111,11 @@ export interface Finding {
   readonly code: string;
   readonly message: string;
   readonly fix?: TextFix;
+  /**
+   * Fixes to choose between (change the name, or change the formula): each is offered as a quick
+   * fix of its own, and none is ever applied by fix-all or `check --fix`.
+   */
+  readonly choices?: readonly TextFix[];
 }
 
 /** Everything read from one document version. */

@@ -20,7 +20,7 @@ import { countLineFeeds } from "../documents/lineIndex";
 import type { DelimitedRowMemo } from "../../../../shared/src/index";
 import { countFinding } from "./checkSummary";
 import type { CheckOutputs } from "./checkFile";
-import { locatedFix, type LocatedFinding } from "./locatedFinding";
+import { withLocatedFixes, type LocatedFinding } from "./locatedFinding";
 
 /** Where the ordinary reading takes over: a row start, with what it needs to read on from there. */
 export interface ResumePoint {
@@ -286,9 +286,10 @@ function placed(file: string, line: number, before: number, finding: Finding): L
     code: finding.code,
     message: finding.message,
   };
-  if (!finding.fix) return located;
-  return {
-    ...located,
-    fix: locatedFix(finding.fix, (range) => ({ line: line + 1, column: at(range.start), endLine: line + 1, endColumn: at(range.end) })),
-  };
+  return withLocatedFixes(located, finding, (range) => ({
+    line: line + 1,
+    column: at(range.start),
+    endLine: line + 1,
+    endColumn: at(range.end),
+  }));
 }

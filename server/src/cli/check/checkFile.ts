@@ -152,6 +152,6 @@ function movedLines(batch: DocumentBatch, fixedText: string, lineShift: number):
 
 function movedFinding(finding: Finding, moved: (offset: number) => number): Finding {
   const range = { start: moved(finding.range.start), end: moved(finding.range.end) };
-  if (!finding.fix) return { ...finding, range };
-  return { ...finding, range, fix: movedFix(finding.fix, moved) };
+  const fixed = finding.fix ? { ...finding, range, fix: movedFix(finding.fix, moved) } : { ...finding, range };
+  return finding.choices ? { ...fixed, choices: finding.choices.map((choice) => movedFix(choice, moved)) } : fixed;
 }

@@ -1,8 +1,9 @@
 /**
  * `--format json`: one array of findings, written as they come.
- * Each item: { file, line, column, endLine, endColumn, severity, code, message, fix? }, lines and
- * columns 1-based (columns in UTF-16 code units, end exclusive); a fix is { title, edits }, each
- * edit the same position fields (in the file as read) plus newText.
+ * Each item: { file, line, column, endLine, endColumn, severity, code, message, fix?, choices? },
+ * lines and columns 1-based (columns in UTF-16 code units, end exclusive); a fix is { title, edits },
+ * each edit the same position fields (in the file as read) plus newText. `choices` are fixes to
+ * choose between, which `--fix` never applies.
  */
 import { jsonTerminalSafe } from "../terminalText";
 import type { CheckReporter } from "./checkReporter";

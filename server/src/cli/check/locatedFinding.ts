@@ -34,6 +34,8 @@ export interface LocatedFinding extends LineColumnRange {
   readonly code: string;
   readonly message: string;
   readonly fix?: LocatedFix;
+  /** Fixes to choose between (the name or the formula of a row): offered, never applied by `--fix`. */
+  readonly choices?: readonly LocatedFix[];
 }
 
 /** The line and column range of `range` (offsets into the indexed text). */
@@ -52,8 +54,17 @@ export function locateFinding(file: string, lines: LineIndex, finding: Finding):
     code: finding.code,
     message: finding.message,
   };
-  if (!finding.fix) return located;
-  return { ...located, fix: locatedFix(finding.fix, (range) => lineColumnRange(lines, range)) };
+  return withLocatedFixes(located, finding, (range) => lineColumnRange(lines, range));
+}
+
+/** `located` with the fix and the choices of `finding`, each edit placed by `place`. */
+export function withLocatedFixes(
+  located: LocatedFinding,
+  finding: Finding,
+  place: (range: { start: number; end: number }) => LineColumnRange,
+): LocatedFinding {
+  const fixed = finding.fix ? { ...located, fix: locatedFix(finding.fix, place) } : located;
+  return finding.choices ? { ...fixed, choices: finding.choices.map((choice) => locatedFix(choice, place)) } : fixed;
 }
 
 /** `fix` with each of its edits placed by `place`: every report format carries these edits. */

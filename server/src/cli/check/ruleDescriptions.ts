@@ -46,6 +46,7 @@ const DESCRIPTIONS: Readonly<Record<string, string>> = {
   "equation-unbalanced": "An equation does not conserve every element and the charge; the fix rewrites its coefficients.",
   "equation-balance-not-unique": "An unbalanced equation that balances in more than one independent way: no single fix.",
   "equation-cannot-balance": "An equation that no positive coefficients balance: an element or the charge cannot match.",
+  "table-name-formula": "A record's name and its formula name different species; change one or the other.",
   "table-vibrational-modes": "A table's count of vibrational modes is not 3N - 6 (3N - 5 if linear).",
 };
 

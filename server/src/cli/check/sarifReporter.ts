@@ -98,19 +98,19 @@ function sarifResult(finding: LocatedFinding, level: string, index: number): obj
     message: { text: finding.message },
     locations: [{ physicalLocation: { artifactLocation, region: region(finding) } }],
   };
-  if (finding.fix) {
-    result.fixes = [
-      {
-        description: { text: finding.fix.title },
-        // One replacement per edit (an equation's coefficients one by one), regions as the file was read.
-        artifactChanges: [
-          {
-            artifactLocation,
-            replacements: finding.fix.edits.map((edit) => ({ deletedRegion: region(edit), insertedContent: { text: edit.newText } })),
-          },
-        ],
-      },
-    ];
+  // SARIF fixes are proposals: the one `--fix` applies, then those left for the reader to choose.
+  const fixes = [...(finding.fix ? [finding.fix] : []), ...(finding.choices ?? [])];
+  if (fixes.length > 0) {
+    result.fixes = fixes.map((fix) => ({
+      description: { text: fix.title },
+      // One replacement per edit (an equation's coefficients one by one), regions as the file was read.
+      artifactChanges: [
+        {
+          artifactLocation,
+          replacements: fix.edits.map((edit) => ({ deletedRegion: region(edit), insertedContent: { text: edit.newText } })),
+        },
+      ],
+    }));
   }
   return result;
 }

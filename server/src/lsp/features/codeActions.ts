@@ -1,7 +1,7 @@
 /**
- * Quick fixes: one per finding that carries a fix (replacing only that range), and one
- * action that fixes every table value (equation cells' coefficients included) in the file as a
- * single workspace edit.
+ * Quick fixes: one per finding that carries a fix (replacing only that range), one per choice
+ * a finding offers (a row's name or its formula; never in fix-all), and one action that fixes
+ * every table value (equation cells' coefficients included) in the file as a single workspace edit.
  */
 import {
   CodeActionKind,
@@ -51,8 +51,12 @@ export function registerCodeActions(context: ServerContext): void {
         const requested = offsetRange(document, params.range);
         for (const finding of findings) {
           if (token.isCancellationRequested) return [];
-          if (!finding.fix || !rangesTouch(finding.range, requested)) continue;
-          actions.push(quickFix(context, document, finding, finding.fix, params.context.diagnostics));
+          if (!rangesTouch(finding.range, requested)) continue;
+          if (finding.fix) actions.push(quickFix(context, document, finding, finding.fix, params.context.diagnostics));
+          // Fixes to choose between: each its own action, none preferred, so no shortcut picks one.
+          for (const choice of finding.choices ?? []) {
+            actions.push({ ...quickFix(context, document, finding, choice, params.context.diagnostics), isPreferred: false });
+          }
         }
       }
       if (wants(CodeActionKind.QuickFix) || wants(CodeActionKind.RefactorRewrite)) {

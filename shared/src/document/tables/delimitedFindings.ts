@@ -258,9 +258,9 @@ function documentFindings(text: string, kind: "csv" | "tsv", delimiter: string, 
   return findings.sort((a, b) => a.range.start - b.range.start || a.range.end - b.range.end);
 }
 
-/** `finding` with its range (and its fix's) moved `by` characters. */
+/** `finding` with its range (and its fixes') moved `by` characters. */
 export function moved(finding: Finding, by: number): Finding {
   const range = { start: finding.range.start + by, end: finding.range.end + by };
-  if (!finding.fix) return { ...finding, range };
-  return { ...finding, range, fix: shiftedFix(finding.fix, by) };
+  const shifted: Finding = finding.fix ? { ...finding, range, fix: shiftedFix(finding.fix, by) } : { ...finding, range };
+  return finding.choices ? { ...shifted, choices: finding.choices.map((choice) => shiftedFix(choice, by)) } : shifted;
 }

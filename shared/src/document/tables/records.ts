@@ -79,6 +79,9 @@ export function addRecord(fields: readonly RecordField[], read: SpeciesReader, s
   if (naming.length > 1) inRankOrder(naming);
   const found: SpeciesOccurrence[] = [];
   let failed: UnreadableSpecies[] | undefined;
+  // The first formula cell and the first name cell, for the check that they agree.
+  let formula: SpeciesOccurrence | undefined;
+  let name: { occurrence: SpeciesOccurrence; field: RecordField } | undefined;
   for (const field of naming) {
     if (field.meaning === "smiles") {
       const smiles = smilesAt(field.text, 0, field.text.length);
@@ -88,12 +91,17 @@ export function addRecord(fields: readonly RecordField[], read: SpeciesReader, s
     }
     const result = read(field.text);
     if (result.ok) {
-      found.push(occurrenceAt(result.value, field.text, field.range.start));
+      const occurrence = occurrenceAt(result.value, field.text, field.range.start);
+      found.push(occurrence);
+      if (result.value.notation === "name") name ??= { occurrence, field };
+      else if (field.meaning === "species") formula ??= occurrence;
       continue;
     }
-    const named = field.meaning === "name" ? namesOpeningCell(field, read) : undefined;
-    if (named) for (const occurrence of named) found.push(occurrence);
-    else if (field.meaning === "species") (failed ??= []).push(unreadableAt(field.text, field.range.start, result));
+    const named = namesOpeningCellOf(field, read);
+    if (named) {
+      for (const occurrence of named) found.push(occurrence);
+      if (named[0].reading.notation === "name") name ??= { occurrence: named[0], field };
+    } else if (field.meaning === "species") (failed ??= []).push(unreadableAt(field.text, field.range.start, result));
   }
   for (const occurrence of found) sink.occurrences.push(occurrence);
   // A name the reader does not know is no mistake when another column names the species; a
@@ -104,7 +112,18 @@ export function addRecord(fields: readonly RecordField[], read: SpeciesReader, s
     }
   }
   if (found.length === 0) return;
-  sink.records.push(found.length === 1 ? { species: found[0], cells } : { species: found[0], cells, otherNames: found.slice(1) });
+  if (found.length === 1) {
+    sink.records.push({ species: found[0], cells });
+    return;
+  }
+  const record: TableRecord = { species: found[0], cells, otherNames: found.slice(1) };
+  if (!formula || !name) {
+    sink.records.push(record);
+    return;
+  }
+  const { occurrence, field } = name;
+  const nameCell: TableCell = { meaning: field.meaning, range: field.range, text: field.text };
+  sink.records.push({ ...record, nameBesideFormula: { name: occurrence, nameCell, formula } });
 }
 
 /**
@@ -116,6 +135,19 @@ function constituentOf(field: RecordField, read: SpeciesReader, sink: RecordSink
   const cell = unwrapped(field);
   const result = read(cell.text);
   if (result.ok) sink.occurrences.push(occurrenceAt(result.value, cell.text, cell.range.start));
+}
+
+/**
+ * What a name cell, or a species column that is not headed as a formula ("Substance",
+ * "Chemical"), opens with when the whole cell is more than a name: such columns hold names with a
+ * strength or form after them ("Hydrochloric acid, dilute"). A species column's cell counts only
+ * when it opens with a name, so a formula with a word after it is still reported.
+ */
+function namesOpeningCellOf(field: RecordField, read: SpeciesReader): readonly SpeciesOccurrence[] | undefined {
+  if (field.meaning === "name") return namesOpeningCell(field, read);
+  if (field.meaning !== "species" || field.formulaHeader) return undefined;
+  const named = namesOpeningCell(field, read);
+  return named && named[0].reading.notation === "name" ? named : undefined;
 }
 
 /**
