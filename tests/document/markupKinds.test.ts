@@ -53,6 +53,7 @@ describe("AsciiDoc", () => {
     ["a source paragraph", "[source]\ngas = CH5\n\nBF3 after.\n", ["BF3"]],
     ["a literal block", "....\nCH5\n....\nBF3 after.\n", ["BF3"]],
     ["a literal paragraph", "SF4 first.\n\n  CH5 indented\n\nBF3 after.\n", ["SF4", "BF3"]],
+    ["an indented list item is prose", "Shelf 3:\n\n  * NF3 cylinder\n  * SF6 cylinder\n", ["NF3", "SF6"]],
     ["a comment block", "////\nCH5 in a comment\n////\nBF3 after.\n", ["BF3"]],
     ["a line comment", "// CH5 in a comment\nBF3 after.\n", ["BF3"]],
     ["a passthrough block", "++++\n<b>CH5</b>\n++++\nBF3 after.\n", ["BF3"]],

@@ -159,6 +159,8 @@ function optionLinesEnd(text: string, start: number, indent: number): number {
 const ASCIIDOC_DELIMITER = /^(-{4,}|\.{4,}|\/{4,}|\+{4,})$/;
 /** A block style that makes the next block code. */
 const ASCIIDOC_CODE_STYLE = /^\[\s*(?:source|listing|literal)\s*(?:[,#.%][^\]]*)?\]$/;
+/** A list item, which may be indented: `* NF3`, `. purge`, `1. purge`, `a. purge`, `- NF3`. */
+const ASCIIDOC_LIST_ITEM = /^[ \t]*(?:\*{1,5}|\.{1,5}|-|\d+\.|[a-zA-Z]\.)[ \t]+\S/;
 /** A block macro: `image::file.png[]`, `include::part.adoc[]`, `video::...[]`. */
 const ASCIIDOC_BLOCK_MACRO = /^[a-z][a-z0-9_-]*::\S*\[.*\]$/;
 
@@ -176,8 +178,9 @@ function asciidocBlock(text: string, line: MarkupLine): MarkupBlock | undefined 
       : paragraphEnd(text, next);
     return { kind: "code", start: line.start, end };
   }
-  // A literal paragraph: its first line indented.
-  if (!line.inParagraph && /^[ \t]+\S/.test(line.text)) return { kind: "code", start: line.start, end: paragraphEnd(text, line.start) };
+  // A literal paragraph: its first line indented (an indented list item is still a list item).
+  if (!line.inParagraph && /^[ \t]+\S/.test(line.text) && !ASCIIDOC_LIST_ITEM.test(line.text))
+    return { kind: "code", start: line.start, end: paragraphEnd(text, line.start) };
   return undefined;
 }
 
