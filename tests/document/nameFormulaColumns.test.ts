@@ -12,6 +12,7 @@ import { describe, expect, it } from "vitest";
 import { parse as parseYaml } from "yaml";
 import { analyzeDocument, checkDocument, editsOfFix, tableValueFixes } from "../../shared/src/index";
 import type { DocumentKind, DocumentModel, Finding, TextFix } from "../../shared/src/index";
+import { nameFormulaChecker, nameFormulaFinding } from "../../shared/src/document/checks/nameFormulaAgreement";
 
 const FOLDER = join(__dirname, "..", "fixtures", "name-formula");
 const CODE = "table-name-formula";
@@ -226,6 +227,17 @@ describe("a table's name column against its formula column", () => {
         }
       }
     }
+  });
+
+  it("gives the same answer from remembered verdicts as worked out afresh, in any order", () => {
+    const pairs = corpus.flatMap((document) =>
+      document.model.records.flatMap((record) => (record.nameBesideFormula ? [[record.nameBesideFormula, document.kind] as const] : [])),
+    );
+    const remembering = nameFormulaChecker();
+    for (const [pair, kind] of [...pairs, ...[...pairs].reverse(), ...pairs]) {
+      expect(remembering(pair, kind)).toEqual(nameFormulaFinding(pair, kind));
+    }
+    expect(pairs.filter(([pair, kind]) => nameFormulaFinding(pair, kind) !== undefined)).toHaveLength(SEEDED.length);
   });
 
   it("never lets fix-all choose between the name and the formula", () => {

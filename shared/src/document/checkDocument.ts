@@ -8,7 +8,7 @@ import { analyzeSpecies } from "../chemistry/analyze";
 import { chooseRespelling } from "../chemistry/analysis/respelling";
 import type { AnalysisResult, Problem } from "../chemistry/types";
 import { analyzeOccurrence } from "./analyzeOccurrence";
-import { nameFormulaFinding } from "./checks/nameFormulaAgreement";
+import { nameFormulaChecker, type NameFormulaCheck } from "./checks/nameFormulaAgreement";
 import { checkRecord } from "./checks/recordChecks";
 import { severityOf } from "./findingSeverity";
 import { isSafeSpellingFix, type AnalyzeText } from "./fixPolicy";
@@ -58,7 +58,8 @@ export function documentChecker(analyze: (text: string) => AnalysisResult = anal
     }
     return result;
   };
-  return (model) => checkModel(model, analysisOf, analyze, analysisOfText);
+  const nameFormula = nameFormulaChecker();
+  return (model) => checkModel(model, analysisOf, analyze, analysisOfText, nameFormula);
 }
 
 function checkModel(
@@ -66,6 +67,7 @@ function checkModel(
   analysisOf: (occurrence: SpeciesOccurrence) => AnalysisResult | undefined,
   analyze: AnalyzeText,
   analysisOfText: (text: string) => AnalysisResult,
+  nameFormula: NameFormulaCheck,
 ): Finding[] {
   // A name beside a formula for the same species would repeat the formula's note: say it once, on the formula.
   const echoes = new Set<SpeciesOccurrence>();
@@ -88,7 +90,7 @@ function checkModel(
     const result = analysisOf(record.species);
     if (result?.ok) checkRecord(record, result.value, findings);
     const pair = record.nameBesideFormula;
-    const disagreement = pair && nameFormulaFinding(pair, model.kind, () => nameFitsCells(record, pair.name, analysisOf));
+    const disagreement = pair && nameFormula(pair, model.kind, () => nameFitsCells(record, pair.name, analysisOf));
     if (disagreement) findings.push(disagreement);
   }
   if (model.reactions && model.reactions.length > 0) findings.push(...reactionFindings(model.reactions, analysisOfText));

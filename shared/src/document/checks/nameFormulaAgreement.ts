@@ -29,13 +29,46 @@ export function nameFormulaFinding(
   kind: DocumentKind,
   formulaFitsRow: () => boolean = () => true,
 ): Finding | undefined {
+  return disagree(pair) ? disagreement(pair, kind, formulaFitsRow) : undefined;
+}
+
+/** A checked (name, name cell, formula) remembered: tables repeat the same pairs row after row. */
+export type NameFormulaCheck = typeof nameFormulaFinding;
+
+/** Verdicts remembered by one checker; past this many it starts afresh. */
+const VERDICT_LIMIT = 20_000;
+
+/**
+ * `nameFormulaFinding` remembering whether each distinct pair disagrees, so a table of 100,000
+ * rows of the same few species works each pair out once. The verdict depends only on the texts.
+ */
+export function nameFormulaChecker(): NameFormulaCheck {
+  const verdicts = new Map<string, boolean>();
+  return (pair, kind, formulaFitsRow) => {
+    const key = `${pair.name.text}\u0001${pair.nameCell.text}\u0001${pair.formula.text}`;
+    let disagrees = verdicts.get(key);
+    if (disagrees === undefined) {
+      disagrees = disagree(pair);
+      if (verdicts.size >= VERDICT_LIMIT) verdicts.clear();
+      verdicts.set(key, disagrees);
+    }
+    return disagrees ? disagreement(pair, kind, formulaFitsRow) : undefined;
+  };
+}
+
+/** The name is read with confidence and names another species than the formula. */
+function disagree(pair: NameBesideFormula): boolean {
   const { name, formula } = pair;
-  if (name.reading.notation !== "name" || formula.reading.notation === "name") return undefined;
-  if (!isConfidentName(pair)) return undefined;
+  if (name.reading.notation !== "name" || formula.reading.notation === "name") return false;
+  if (!isConfidentName(pair)) return false;
   const chargeOpen = leavesChargeOpen(name.text);
-  if (agree(name.reading, formula.reading, chargeOpen)) return undefined;
+  if (agree(name.reading, formula.reading, chargeOpen)) return false;
   const other = chargeReadingOf(formula.text);
-  if (other && agree(name.reading, other, chargeOpen)) return undefined;
+  return !(other && agree(name.reading, other, chargeOpen));
+}
+
+function disagreement(pair: NameBesideFormula, kind: DocumentKind, formulaFitsRow: () => boolean = () => true): Finding {
+  const { name, formula } = pair;
   const named = name.reading.name ? ` (${name.reading.name})` : "";
   const formulaNamed = formula.reading.name ? ` (${formula.reading.name})` : "";
   const column = kind === "json" || kind === "yaml" ? "field" : "column";

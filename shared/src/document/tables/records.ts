@@ -81,7 +81,8 @@ export function addRecord(fields: readonly RecordField[], read: SpeciesReader, s
   let failed: UnreadableSpecies[] | undefined;
   // The first formula cell and the first name cell, for the check that they agree.
   let formula: SpeciesOccurrence | undefined;
-  let name: { occurrence: SpeciesOccurrence; field: RecordField } | undefined;
+  let name: SpeciesOccurrence | undefined;
+  let nameCell: RecordField | undefined;
   for (const field of naming) {
     if (field.meaning === "smiles") {
       const smiles = smilesAt(field.text, 0, field.text.length);
@@ -93,14 +94,21 @@ export function addRecord(fields: readonly RecordField[], read: SpeciesReader, s
     if (result.ok) {
       const occurrence = occurrenceAt(result.value, field.text, field.range.start);
       found.push(occurrence);
-      if (result.value.notation === "name") name ??= { occurrence, field };
-      else if (field.meaning === "species") formula ??= occurrence;
+      if (result.value.notation !== "name") {
+        if (field.meaning === "species") formula ??= occurrence;
+      } else if (!name) {
+        name = occurrence;
+        nameCell = field;
+      }
       continue;
     }
     const named = namesOpeningCellOf(field, read);
     if (named) {
       for (const occurrence of named) found.push(occurrence);
-      if (named[0].reading.notation === "name") name ??= { occurrence: named[0], field };
+      if (!name && named[0].reading.notation === "name") {
+        name = named[0];
+        nameCell = field;
+      }
     } else if (field.meaning === "species") (failed ??= []).push(unreadableAt(field.text, field.range.start, result));
   }
   for (const occurrence of found) sink.occurrences.push(occurrence);
@@ -112,18 +120,10 @@ export function addRecord(fields: readonly RecordField[], read: SpeciesReader, s
     }
   }
   if (found.length === 0) return;
-  if (found.length === 1) {
-    sink.records.push({ species: found[0], cells });
-    return;
-  }
-  const record: TableRecord = { species: found[0], cells, otherNames: found.slice(1) };
-  if (!formula || !name) {
-    sink.records.push(record);
-    return;
-  }
-  const { occurrence, field } = name;
-  const nameCell: TableCell = { meaning: field.meaning, range: field.range, text: field.text };
-  sink.records.push({ ...record, nameBesideFormula: { name: occurrence, nameCell, formula } });
+  if (found.length === 1) sink.records.push({ species: found[0], cells });
+  else if (!formula || !name || !nameCell) sink.records.push({ species: found[0], cells, otherNames: found.slice(1) });
+  // A record field is a table cell with one more property: it serves as the name cell as it is.
+  else sink.records.push({ species: found[0], cells, otherNames: found.slice(1), nameBesideFormula: { name, nameCell, formula } });
 }
 
 /**
