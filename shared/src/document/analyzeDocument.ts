@@ -6,7 +6,8 @@ import { scanMarkdown } from "./scanMarkdown";
 import { scanPlainText } from "./scanPlainText";
 import { memoisedReader, type SpeciesReader } from "./speciesReader";
 import { readDelimitedRecords } from "./tables/delimitedRecords";
-import { readJsonRecords, readJsonTree, type JsonTree } from "./tables/json";
+import { readJsonOutline, readJsonRecords, readJsonTree, type JsonTree } from "./tables/json";
+import type { JsonOutline } from "./tables/jsonOutline";
 import type { RecordSink } from "./tables/records";
 import { readYamlRecords, readYamlStream, type YamlStream } from "./tables/yaml";
 import type { Reaction } from "./reactions/reactionTypes";
@@ -50,6 +51,17 @@ export function analyzeYamlStream(text: string, documents: YamlStream, read: Spe
  */
 export function analyzeJsonTree(text: string, tree: JsonTree, read: SpeciesReader): DocumentModel {
   return modelOf("json", (sink) => readJsonTree(tree, text, read, sink));
+}
+
+/**
+ * The model of a clean JSON `text` already read into `outline`: what `analyzeDocument` gives for
+ * `text`, without reading it again (the caller also needs the outline's list).
+ */
+export function analyzeJsonOutline(text: string, outline: JsonOutline, read: SpeciesReader): DocumentModel {
+  return modelOf("json", (sink) => {
+    readJsonOutline(outline, text, read, sink);
+    return [];
+  });
 }
 
 function modelOf(kind: DocumentKind, reader: (sink: RecordSink) => readonly Finding[]): DocumentModel {

@@ -12,12 +12,14 @@
  * on their own are all read whole, the ordinary way.
  */
 import { parseTree, type Node, type ParseError } from "jsonc-parser/lib/esm/main.js";
-import { analyzeDocument, analyzeJsonTree } from "./analyzeDocument";
+import { analyzeDocument, analyzeJsonOutline, analyzeJsonTree } from "./analyzeDocument";
 import { checkDocument } from "./checkDocument";
 import { sliceOf, wholeText, type ChunkedText } from "./chunkedText";
 import { changedStretch, lastAtOrBefore, NO_FINDINGS, rememberingListReader, type ListParts, type ListReader } from "./listParts";
 import type { SpeciesReader } from "./speciesReader";
 import { JSON_PARSE_OPTIONS, parseJsonTree } from "./tables/json";
+import { jsonOutline } from "./tables/jsonOutline";
+import { equationKeyTest } from "./tables/headers";
 import { moved } from "./tables/delimitedFindings";
 import type { DocumentModel, Finding } from "./types";
 
@@ -35,18 +37,13 @@ export function jsonListReader(read: SpeciesReader): ListReader {
  */
 function wholeState(text: ChunkedText, read: SpeciesReader): ListParts | { readonly findings: readonly Finding[] } {
   const whole = wholeText(text);
-  // Parsed once: the same tree gives the findings and the list's elements.
-  const tree = parseJsonTree(whole);
-  const all = findingsOf(analyzeJsonTree(whole, tree, read));
+  const reading = readOnce(whole, read);
+  const all = reading.findings;
   const plain = { findings: all };
   if (all.some((finding) => finding.code === "json-syntax" || finding.code === "document-unreadable")) return plain;
-  const root = tree.root;
-  if (!root || tree.errors.length > 0) return plain;
-  const list = recordList(root);
-  if (!list || !list.children || list.children.length === 0) return plain;
-  const starts = Int32Array.from(list.children, (child) => child.offset);
-  const ends = Int32Array.from(list.children, (child) => child.offset + child.length);
-  const partFindings: Finding[][] = list.children.map(() => []);
+  if (!reading.list || reading.list.starts.length === 0) return plain;
+  const { starts, ends } = reading.list;
+  const partFindings: Finding[][] = Array.from(starts, () => []);
   const before: Finding[] = [];
   const after: Finding[] = [];
   const tail = ends[ends.length - 1];
@@ -69,6 +66,27 @@ function wholeState(text: ChunkedText, read: SpeciesReader): ListParts | { reado
     before,
     after,
     tail,
+  };
+}
+
+/**
+ * The findings of `whole` and its list's element bounds (only when it is clean JSON), read once:
+ * clean JSON through its outline, anything else through its syntax tree.
+ */
+function readOnce(whole: string, read: SpeciesReader): { findings: Finding[]; list?: { starts: Int32Array; ends: Int32Array } } {
+  const outline = jsonOutline(whole, equationKeyTest());
+  if (outline) return { findings: findingsOf(analyzeJsonOutline(whole, outline, read)), list: outline.list };
+  const tree = parseJsonTree(whole);
+  const findings = findingsOf(analyzeJsonTree(whole, tree, read));
+  if (!tree.root || tree.errors.length > 0) return { findings };
+  const list = recordList(tree.root);
+  if (!list?.children) return { findings };
+  return {
+    findings,
+    list: {
+      starts: Int32Array.from(list.children, (child) => child.offset),
+      ends: Int32Array.from(list.children, (child) => child.offset + child.length),
+    },
   };
 }
 

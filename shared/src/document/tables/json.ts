@@ -11,6 +11,7 @@ import type { Finding } from "../types";
 import { columnUnder } from "./delimitedRecords";
 import { readEquationCell } from "./equationCells";
 import { equationKeyTest, namesSpecies } from "./headers";
+import { jsonOutline, type JsonOutline, type OutlineObject, type OutlineProperty, type ValueKind } from "./jsonOutline";
 import { addRecord, type RecordField, type RecordSink } from "./records";
 
 const MESSAGES: Readonly<Record<string, string>> = {
@@ -52,7 +53,25 @@ export function parseJsonTree(text: string): JsonTree {
 
 /** Reads a JSON document into `sink`; returns its syntax problems. */
 export function readJsonRecords(text: string, read: SpeciesReader, sink: RecordSink): readonly Finding[] {
+  const isEquationKey = equationKeyTest();
+  // Clean JSON is read without a syntax tree; the tree gives the problems of the rest.
+  const outline = jsonOutline(text, isEquationKey);
+  if (outline) {
+    readJsonOutline(outline, text, read, sink, isEquationKey);
+    return [];
+  }
   return readJsonTree(parseJsonTree(text), text, read, sink);
+}
+
+/** Reads the outline of a clean JSON `text` into `sink` (it has no syntax problems). */
+export function readJsonOutline(
+  outline: JsonOutline,
+  text: string,
+  read: SpeciesReader,
+  sink: RecordSink,
+  isEquationKey: (key: string) => boolean = equationKeyTest(),
+): void {
+  for (const object of outline.objects) objectRecord(object, text, read, sink, isEquationKey);
 }
 
 /** Reads the parsed `tree` of `text` into `sink`; returns its syntax problems. */
@@ -80,7 +99,7 @@ function walk(root: Node, text: string, read: SpeciesReader, sink: RecordSink): 
   const isEquationKey = equationKeyTest();
   while (pending.length > 0) {
     const node = pending.pop()!;
-    if (node.type === "object") objectRecord(node, text, read, sink, isEquationKey);
+    if (node.type === "object") objectRecord(outlineOf(node, isEquationKey), text, read, sink, isEquationKey);
     const children = node.children ?? [];
     for (let index = children.length - 1; index >= 0; index--) {
       const child = children[index];
@@ -92,49 +111,93 @@ function walk(root: Node, text: string, read: SpeciesReader, sink: RecordSink): 
   }
 }
 
-function objectRecord(node: Node, text: string, read: SpeciesReader, sink: RecordSink, isEquationKey: (key: string) => boolean): void {
-  const fields: RecordField[] = [];
+/** An object of the syntax tree as the record reader sees it (what `jsonOutline` gives for clean JSON). */
+function outlineOf(node: Node, isEquationKey: (key: string) => boolean): OutlineObject {
+  const properties: OutlineProperty[] = [];
   for (const property of node.children ?? []) {
     const [key, value] = property.children ?? [];
     if (!key || !value || typeof key.value !== "string") continue;
-    if (isEquationKey(key.value)) equationValues(value, text, read, sink);
+    const kind: ValueKind =
+      value.type === "string"
+        ? "string"
+        : value.type === "number" || value.type === "boolean"
+          ? "written"
+          : value.type === "array"
+            ? "list"
+            : "other";
+    const strings =
+      kind === "list" && isEquationKey(key.value)
+        ? (value.children ?? [])
+            .filter((item) => item.type === "string")
+            .map((item) => [String(item.value), item.offset, item.length] as const)
+        : undefined;
+    properties.push({
+      key: key.value,
+      kind,
+      offset: value.offset,
+      length: value.length,
+      value: kind === "string" ? String(value.value) : undefined,
+      strings,
+    });
+  }
+  const key = node.parent?.type === "property" ? node.parent.children?.[0] : undefined;
+  return {
+    properties,
+    under: key && typeof key.value === "string" ? { key: key.value, offset: key.offset, length: key.length } : undefined,
+  };
+}
+
+function objectRecord(
+  object: OutlineObject,
+  text: string,
+  read: SpeciesReader,
+  sink: RecordSink,
+  isEquationKey: (key: string) => boolean,
+): void {
+  const fields: RecordField[] = [];
+  for (const property of object.properties) {
+    if (isEquationKey(property.key)) equationValues(property, text, read, sink);
     // Keys repeat in every record: their meaning is worked out once, as a table's headers are.
-    const column = columnUnder(key.value);
-    const field = column && valueField(value, text);
+    const column = columnUnder(property.key);
+    const field = column && valueField(property, text);
     if (column && field) fields.push({ meaning: column.meaning, formulaHeader: column.formulaHeader, ...field });
   }
   if (fields.length === 0) return;
   if (!fields.some((field) => namesSpecies(field.meaning))) {
     // {"SF4": {"lone pairs": 1}}: the key the object sits under names the species.
-    const key = node.parent?.type === "property" ? node.parent.children?.[0] : undefined;
-    if (!key || typeof key.value !== "string" || !read(key.value).ok) return;
-    fields.unshift({ meaning: "species", formulaHeader: true, ...stringField(key) });
+    const under = object.under;
+    if (!under || !read(under.key).ok) return;
+    fields.unshift({ meaning: "species", formulaHeader: true, ...stringField(under.key, under.offset, under.length) });
   }
   addRecord(fields, read, sink);
 }
 
 /** A string under an equation key, or each string of a list there, read as an equation. */
-function equationValues(value: Node, text: string, read: SpeciesReader, sink: RecordSink): void {
-  const strings = value.type === "array" ? (value.children ?? []) : [value];
-  for (const item of strings) {
-    if (item.type !== "string") continue;
-    const field = stringField(item);
+function equationValues(property: OutlineProperty, text: string, read: SpeciesReader, sink: RecordSink): void {
+  const strings =
+    property.kind === "list"
+      ? (property.strings ?? [])
+      : property.kind === "string"
+        ? [[property.value!, property.offset, property.length] as const]
+        : [];
+  for (const [value, offset, length] of strings) {
+    const field = stringField(value, offset, length);
     readEquationCell(text, field.range, field.text, read, sink);
   }
 }
 
-function valueField(value: Node, text: string): { text: string; range: { start: number; end: number } } | undefined {
-  if (value.type === "string") return stringField(value);
-  if (value.type === "number" || value.type === "boolean") {
+function valueField(property: OutlineProperty, text: string): { text: string; range: { start: number; end: number } } | undefined {
+  if (property.kind === "string") return stringField(property.value!, property.offset, property.length);
+  if (property.kind === "written") {
     return {
-      text: text.slice(value.offset, value.offset + value.length),
-      range: { start: value.offset, end: value.offset + value.length },
+      text: text.slice(property.offset, property.offset + property.length),
+      range: { start: property.offset, end: property.offset + property.length },
     };
   }
   return undefined;
 }
 
 /** A string's value and the range inside its quotes. */
-function stringField(node: Node): { text: string; range: { start: number; end: number } } {
-  return { text: String(node.value), range: { start: node.offset + 1, end: node.offset + node.length - 1 } };
+function stringField(value: string, offset: number, length: number): { text: string; range: { start: number; end: number } } {
+  return { text: value, range: { start: offset + 1, end: offset + length - 1 } };
 }
