@@ -76,6 +76,10 @@ describe("names in prose", () => {
     ["A fluoride, the oxide layer, an amide and the ether extract are classes, not species."],
     ["Hexagonal cells, general methods, a chemical signal and alone are words, not names."],
     ["**⟦Ethanol⟧** and _⟦methanol⟧_, then ⟦anhydrous copper(II) sulfate⟧ as a drying test."],
+    // from memory: CRC Handbook (double salts, counted cations and mixed-valence oxides by name)
+    ["Weigh ⟦ammonium iron(II) sulfate hexahydrate⟧ and ⟦ferrous ammonium sulfate⟧ for the titration."],
+    ["Buffer: ⟦disodium hydrogen phosphate⟧ with ⟦sodium dihydrogen phosphate⟧; ⟦trisodium phosphate⟧ to degrease."],
+    ["⟦Magnetite⟧ is ⟦iron(II,III) oxide⟧; ⟦potassium aluminium sulfate dodecahydrate⟧ grows as octahedra."],
   ])("%s", (marked) => {
     check(marked, "markdown");
   });

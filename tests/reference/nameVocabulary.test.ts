@@ -94,6 +94,14 @@ const TRADE_NAMES: readonly Row[] = [
   ["silica", "SiO2"],
   ["alumina", "Al2O3"],
   ["laughing gas", "N2O"],
+  ["mohr's salt", "N2H20FeS2O14"],
+  ["ferrous ammonium sulfate", "N2H8FeS2O8"],
+  ["disodium phosphate", "Na2HPO4"],
+  ["dipotassium phosphate", "K2HPO4"],
+  ["monosodium phosphate", "NaH2PO4"],
+  ["monopotassium phosphate", "KH2PO4"],
+  ["red lead", "Pb3O4"],
+  ["magnetite", "Fe3O4"],
   ["alum", "KAlS2O20H24"],
   ["potassium alum", "KAlS2O20H24"],
   ["chrome alum", "KCrS2O20H24"],
@@ -303,6 +311,10 @@ const IONS: readonly Row[] = [
   ["arsenate", "AsO4", -3],
   ["selenate", "SeO4", -2],
   ["silicate", "SiO3", -2],
+  // from memory: Greenwood & Earnshaw, Chemistry of the Elements (meta- and orthosilicate, metaborate)
+  ["metasilicate", "SiO3", -2],
+  ["orthosilicate", "SiO4", -4],
+  ["metaborate", "BO2", -1],
   ["permanganate", "MnO4", -1],
   ["manganate", "MnO4", -2],
   ["chromate", "CrO4", -2],
@@ -437,6 +449,26 @@ describe("salt names built from cation and anion vocabularies", () => {
     ["potassium ferrocyanide", "K4FeC6N6", "potassium ferrocyanide"],
     ["iron(III)", "Fe", "iron(III) ion"],
     ["hydrogen ion", "H", "hydrogen ion"],
+    // from memory: CRC Handbook of Chemistry and Physics, physical constants of inorganic compounds
+    // (double salts, counted cations, mixed-valence oxides, waters of alums)
+    ["ammonium iron(II) sulfate", "N2H8FeS2O8", "ammonium iron(II) sulfate"],
+    ["ammonium iron(II) sulfate hexahydrate", "N2H20FeS2O14", "ammonium iron(II) sulfate hexahydrate"],
+    ["ferrous ammonium sulfate", "N2H8FeS2O8", "ammonium iron(II) sulfate"],
+    ["iron(II) ammonium sulfate", "N2H8FeS2O8", "iron(II) ammonium sulfate"],
+    ["ammonium iron(III) sulfate", "NH4FeS2O8", "ammonium iron(III) sulfate"],
+    ["potassium aluminium sulfate dodecahydrate", "KAlS2O20H24", "potassium alum"],
+    ["potassium chromium(III) sulfate", "KCrS2O8", "potassium chromium(III) sulfate"],
+    ["magnesium ammonium phosphate", "MgNH4PO4", "magnesium ammonium phosphate"],
+    ["sodium ammonium hydrogen phosphate", "NaNH5PO4", "sodium ammonium hydrogen phosphate"],
+    ["aluminium sulfate octadecahydrate", "Al2S3O30H36", "aluminium sulfate octadecahydrate"],
+    ["disodium hydrogen phosphate", "Na2HPO4", "disodium hydrogen phosphate"],
+    ["trisodium phosphate", "Na3PO4", "trisodium phosphate"],
+    ["diammonium hydrogen phosphate", "N2H9PO4", "diammonium hydrogen phosphate"],
+    ["tetrasodium pyrophosphate", "Na4P2O7", "tetrasodium pyrophosphate"],
+    ["iron(II,III) oxide", "Fe3O4", "iron(II,III) oxide"],
+    ["lead(II,IV) oxide", "Pb3O4", "lead(II,IV) oxide"],
+    ["manganese(II,III) oxide", "Mn3O4", "manganese(II,III) oxide"],
+    ["sodium metasilicate", "Na2SiO3", "sodium metasilicate"],
   ])("%s is %s, shown as %s", (written, formula, shown) => {
     const reading = read(written);
     expect(sorted(compositionOf(reading))).toEqual(sorted(parseFormula(formula)));
@@ -455,7 +487,17 @@ describe("salt names built from cation and anion vocabularies", () => {
   });
 
   // common practice: iron and tin salts are named with their charge; without it the name is open
-  it.each([["iron chloride"], ["tin fluoride"], ["ferric"], ["mercury(IX) chloride"]])("%s is no name", (written) => {
+  it.each([
+    ["iron chloride"],
+    ["tin fluoride"],
+    ["ferric"],
+    ["mercury(IX) chloride"],
+    // common practice: a double salt names two different cations, and a count must balance
+    ["sodium sodium sulfate"],
+    ["copper iron sulfate"],
+    ["monosodium sulfate"],
+    ["sodium(II,III) oxide"],
+  ])("%s is no name", (written) => {
     const result = readSpecies(written);
     expect(result.ok ? result.value.formula : result.problem.code).toBe("unknown-name");
   });

@@ -39,18 +39,87 @@ export interface CompoundNameReading {
 /** Formula text for a compound name split into lower-case words, or undefined. */
 export function formulaForCompoundName(words: readonly string[]): CompoundNameReading | undefined {
   if (words.length < 2) return undefined;
+  const mixed = mixedValenceOxide(words);
+  if (mixed !== undefined) return mixed;
   const cation = readCationWord(words[0]);
-  if (cation === undefined) return undefined;
-  // "disulfide" is an ion (S2^2-) in "iron(ii) disulfide" and two sulfides in "carbon disulfide"
-  for (const anion of readAnionWords(words.slice(1))) {
-    const reading = compoundOf(cation, anion, words);
-    if (reading !== undefined) return reading;
+  if (cation !== undefined) {
+    // "disulfide" is an ion (S2^2-) in "iron(ii) disulfide" and two sulfides in "carbon disulfide"
+    for (const anion of readAnionWords(words.slice(1))) {
+      const reading = compoundOf(cation, anion, words);
+      if (reading !== undefined) return reading;
+    }
+  }
+  return doubleSalt(words);
+}
+
+/**
+ * "iron(ii,iii) oxide", "lead(ii,iv) oxide": the mixed-valence oxides M3O4, one M2+ with two M3+
+ * or two M2+ with one M4+, for a metal that takes both charges.
+ */
+function mixedValenceOxide(words: readonly string[]): CompoundNameReading | undefined {
+  if (words.length !== 2 || words[1] !== "oxide") return undefined;
+  const match = /^([a-z]+)\((ii,iii|ii,iv)\)$/.exec(words[0]);
+  const element = match ? elementByName(match[1]) : undefined;
+  if (!match || element === undefined) return undefined;
+  const charges = match[2] === "ii,iii" ? [2, 3] : [2, 4];
+  if (!charges.every((charge) => metalIonCharges(element.symbol).includes(charge))) return undefined;
+  return { formula: `${element.symbol}3O4` };
+}
+
+/**
+ * Double salts named cation, cation, anion: "ammonium iron(ii) sulfate" (NH4)2Fe(SO4)2,
+ * "potassium aluminium sulfate" KAl(SO4)2. One of the ion with the larger charge; of the other
+ * as few as make the cations' charge a whole number of anions. Written in the name's order.
+ */
+function doubleSalt(words: readonly string[]): CompoundNameReading | undefined {
+  if (words.length < 3) return undefined;
+  const first = readCationWord(words[0]);
+  const second = readCationWord(words[1]);
+  const anion = readAnionWords(words.slice(2)).find((reading) => !reading.prefixed);
+  if (first === undefined || second === undefined || anion === undefined || first.body === second.body) return undefined;
+  const firstCharge = saltCationCharge(first);
+  const secondCharge = saltCationCharge(second);
+  const anionCharge = -(anion.charge as number);
+  if (firstCharge === undefined || secondCharge === undefined || Math.min(firstCharge, secondCharge) > 1) return undefined;
+  // The singly charged ion is the one whose count grows (the first, when both are).
+  const growsFirst = firstCharge === 1 && secondCharge > 1;
+  const [grown, fixed] = growsFirst ? [firstCharge, secondCharge] : [secondCharge, firstCharge];
+  for (let count = 1; count <= anionCharge; count++) {
+    const total = count * grown + fixed;
+    if (total % anionCharge !== 0) continue;
+    const [firstCount, secondCount] = growsFirst ? [count, 1] : [1, count];
+    const formula = group(first, firstCount) + group(second, secondCount) + group(anion, total / anionCharge);
+    const stockWords = [first.stockWord ?? words[0], second.stockWord ?? words[1], ...words.slice(2)];
+    return first.stockWord === undefined && second.stockWord === undefined
+      ? { formula }
+      : { formula, systematicName: stockWords.join(" ") };
   }
   return undefined;
 }
 
+/** The charge a named cation has in a salt: its own, or the metal's one usual charge. */
+function saltCationCharge(cation: NamedPart): number | undefined {
+  if (cation.prefixed) return undefined;
+  if (cation.charge !== undefined) return cation.charge;
+  return cation.element === undefined ? undefined : usualCationCharge(cation.element);
+}
+
+/**
+ * "disodium hydrogen phosphate" Na2HPO4, "trisodium phosphate" Na3PO4, "diammonium hydrogen
+ * phosphate" (NH4)2HPO4: a count prefix on an ionic cation states how many balance one anion.
+ */
+function countedSalt(cation: NamedPart, anion: NamedPart): CompoundNameReading | undefined {
+  const charge = cation.charge ?? (cation.element === undefined ? undefined : usualCationCharge(cation.element));
+  if (charge === undefined || anion.prefixed || cation.count * charge !== -(anion.charge as number)) return undefined;
+  return { formula: group(cation, cation.count) + group(anion, 1) };
+}
+
 function compoundOf(cation: NamedPart, anion: NamedPart, words: readonly string[]): CompoundNameReading | undefined {
   const anionCharge = anion.charge as number;
+  if (cation.prefixed && !anion.prefixed) {
+    const counted = countedSalt(cation, anion);
+    if (counted !== undefined) return counted;
+  }
   const systematic = (formula: string | undefined, stockWord = cation.stockWord): CompoundNameReading | undefined => {
     if (formula === undefined) return undefined;
     return stockWord === undefined ? { formula } : { formula, systematicName: [stockWord, ...words.slice(1)].join(" ") };
@@ -140,6 +209,11 @@ function readCationWord(word: string): NamedPart | undefined {
     const element = elementByName(reading.rest);
     if (element !== undefined) {
       return { body: element.symbol, singleElement: true, count: reading.count, prefixed: reading.prefixed, element };
+    }
+    // "diammonium": a counted polyatomic cation
+    const counted = reading.prefixed ? ionByName(reading.rest) : undefined;
+    if (counted !== undefined && counted.charge > 0) {
+      return { body: counted.body, singleElement: false, count: reading.count, prefixed: true, charge: counted.charge };
     }
   }
   return undefined;

@@ -95,8 +95,13 @@ function listedOrRuleName(name: string): NameMatch | undefined {
   return smiles === undefined ? undefined : { smiles, name, listed: true };
 }
 
-/** "monohydrate" 1 ... "decahydrate" 10. */
-const HYDRATE_COUNTS = new Map(GREEK_PREFIXES.map((prefix, index) => [`${prefix}hydrate`, index + 1]));
+/** "monohydrate" 1 ... "decahydrate" 10, "dodecahydrate" 12, "octadecahydrate" 18. */
+const HYDRATE_COUNTS = new Map([
+  ...GREEK_PREFIXES.map((prefix, index): [string, number] => [`${prefix}hydrate`, index + 1]),
+  // common practice: alums and aluminium sulfate carry 12 and 18 waters
+  ["dodecahydrate", 12],
+  ["octadecahydrate", 18],
+]);
 
 /** "copper(ii) sulfate pentahydrate" -> CuSO4·5H2O. */
 function hydrateName(name: string): NameMatch | undefined {
