@@ -94,12 +94,10 @@ const UNKNOWN_NAMES: readonly string[] = [
   "Chloroform-d",
 ];
 
-/** Names that are read but never compared: a family of salts, and a rule-built reading that cannot be right. */
+/** Names that are read but never compared: a family of salts. */
 const NEVER_COMPARED: readonly string[] = [
   // from memory: an alum is any M(I)M(III)(SO4)2·12H2O
   "alum",
-  // from memory: phosphorus pentoxide is P4O10 (P2O5), not the PO5 its words spell
-  "Phosphorus pentoxide",
 ];
 
 interface Checked {

@@ -469,6 +469,16 @@ describe("salt names built from cation and anion vocabularies", () => {
     ["lead(II,IV) oxide", "Pb3O4", "lead(II,IV) oxide"],
     ["manganese(II,III) oxide", "Mn3O4", "manganese(II,III) oxide"],
     ["sodium metasilicate", "Na2SiO3", "sodium metasilicate"],
+    // from memory: CRC Handbook (older oxide names count the oxygens of E2On, not of one atom)
+    ["phosphorus pentoxide", "P2O5", "diphosphorus pentoxide"],
+    ["arsenic trioxide", "As2O3", "diarsenic trioxide"],
+    ["vanadium pentoxide", "V2O5", "vanadium pentoxide"],
+    ["manganese heptoxide", "Mn2O7", "manganese heptoxide"],
+    ["phosphorus pentasulfide", "P2S5", "diphosphorus pentasulfide"],
+    ["sulfur trioxide", "SO3", "sulfur trioxide"],
+    ["chromium trioxide", "CrO3", "chromium trioxide"],
+    ["osmium tetroxide", "OsO4", "osmium tetroxide"],
+    ["nitrogen trioxide", "NO3", "nitrogen trioxide"],
   ])("%s is %s, shown as %s", (written, formula, shown) => {
     const reading = read(written);
     expect(sorted(compositionOf(reading))).toEqual(sorted(parseFormula(formula)));

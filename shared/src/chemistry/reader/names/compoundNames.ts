@@ -127,7 +127,8 @@ function compoundOf(cation: NamedPart, anion: NamedPart, words: readonly string[
 
   if (cation.prefixed || anion.prefixed) {
     if (!cation.singleElement || !anion.singleElement || cation.charge !== undefined) return undefined;
-    return { formula: part(cation.body, cation.count) + part(anion.body, anion.count) };
+    const count = cation.prefixed ? cation.count : firstElementCount(cation, anion);
+    return count === undefined ? undefined : { formula: part(cation.body, count) + part(anion.body, anion.count) };
   }
   if (cation.charge !== undefined) return systematic(balanced(cation, cation.charge, anion, anionCharge));
   const element = cation.element as ElementData;
@@ -140,6 +141,28 @@ function compoundOf(cation: NamedPart, anion: NamedPart, words: readonly string[
     return systematic(balanced(cation, assumed, anion, anionCharge), `${words[0]}(${ROMAN_NUMERALS[assumed - 1]})`);
   }
   return undefined;
+}
+
+/**
+ * How many atoms of the first element a name without a prefix on it means: one ("sulfur
+ * trioxide" SO3), unless one atom would need an oxidation state beyond its group's highest;
+ * then two, as in the older names "phosphorus pentoxide" P2O5, "arsenic trioxide" As2O3 and
+ * "vanadium pentoxide" V2O5. Undefined when neither fits.
+ */
+function firstElementCount(cation: NamedPart, anion: NamedPart): number | undefined {
+  const element = cation.element as ElementData;
+  const electrons = -(anion.charge as number) * anion.count;
+  // Nitrogen's oxides are written with both prefixes, and NO3 is a radical in its own right.
+  if (element.symbol === "N") return 1;
+  const highest = highestOxidationState(element);
+  if (electrons <= highest) return 1;
+  return electrons % 2 === 0 && electrons / 2 <= highest ? 2 : undefined;
+}
+
+/** The highest oxidation state an element's group allows (common practice: the group's valence electrons, at most 8). */
+function highestOxidationState(element: ElementData): number {
+  if (element.group >= 13) return element.group - 10;
+  return Math.min(element.group, 8);
 }
 
 /** "sulfur tetrafluoride" for SF4: the prefixed name of a neutral binary covalent compound. */
