@@ -33,6 +33,10 @@ describe("hover card", () => {
     ["SF4", "34 valence electrons", "(1 on S)"],
     // from memory: Xe 8 + 4 F x 7 = 36 valence electrons, two lone pairs on Xe
     ["XeF4", "36 valence electrons", "(2 on Xe)"],
+    // from memory: H-B≡O has four bonding pairs and one lone pair, on O
+    ["HBO", "4 bonding pairs · 1 lone pair (0 on B)", "(0 on B)"],
+    // from memory: H-F has one bonding pair and three lone pairs on F
+    ["HF", "1 bonding pair · 3 lone pairs", "3 lone pairs"],
   ])("%s counts electrons and the centre's lone pairs", (formula, electrons, lonePairs) => {
     const card = hoverMarkdown(analysis(formula), { angleDecimals: 1 });
     expect(card).toContain(electrons);

@@ -243,6 +243,7 @@ function signed(value: number): string {
   return value > 0 ? `+${value}` : String(value);
 }
 
-function plural(count: number, noun: string): string {
+/** "1 lone pair", "2 lone pairs", "0 lone pairs". */
+export function plural(count: number, noun: string): string {
   return `${count} ${noun}${count === 1 ? "" : "s"}`;
 }

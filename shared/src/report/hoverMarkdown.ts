@@ -16,6 +16,7 @@ import type {
 import { isotopeNote, stateNote } from "./notationNotes";
 import { shapeSketchSvg, svgDataUri } from "./shapeSketch";
 import { lewisDiagram } from "./lewisDiagram";
+import { plural } from "./analysisCard";
 import { NETWORK_SOLID_NOUN, compositeKind, distinctAnalysedParts, innerParts, latticeSiteLabel, roleWords } from "./compositeParts";
 import { partShapeText } from "../chemistry/analysis/partShapes";
 import { measuredFundamentalsOf, vibrationsOf } from "../chemistry/vibrations/speciesVibrations";
@@ -251,8 +252,8 @@ function sketchLine(analysis: SpeciesAnalysis): string | undefined {
 function electronLine(analysis: SpeciesAnalysis): string {
   const parts = [
     `${analysis.valenceElectrons} valence electrons`,
-    `${bondingPairs(analysis.graph)} bonding pairs`,
-    `${lonePairTotal(analysis.graph)} lone pairs${centreLonePairs(analysis.centres)}`,
+    plural(bondingPairs(analysis.graph), "bonding pair"),
+    `${plural(lonePairTotal(analysis.graph), "lone pair")}${centreLonePairs(analysis.centres)}`,
   ];
   const charges = formalChargeText(analysis.graph);
   if (charges) parts.push(`formal charges ${charges}`);
