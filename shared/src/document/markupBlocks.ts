@@ -161,7 +161,7 @@ const ASCIIDOC_DELIMITER = /^(-{4,}|\.{4,}|\/{4,}|\+{4,})$/;
 const ASCIIDOC_CODE_STYLE = /^\[\s*(?:source|listing|literal)\s*(?:[,#.%][^\]]*)?\]$/;
 /** A list item, which may be indented: `* NF3`, `. purge`, `1. purge`, `a. purge`, `- NF3`. */
 const ASCIIDOC_LIST_ITEM = /^[ \t]*(?:\*{1,5}|\.{1,5}|-|\d+\.|[a-zA-Z]\.)[ \t]+\S/;
-/** A block macro: `image::file.png[]`, `include::part.adoc[]`, `video::...[]`. */
+/** A block macro such as `image::diagram.png[]` or `include::chapter.adoc[]`. */
 const ASCIIDOC_BLOCK_MACRO = /^[a-z][a-z0-9_-]*::\S*\[.*\]$/;
 
 function asciidocBlock(text: string, line: MarkupLine): MarkupBlock | undefined {

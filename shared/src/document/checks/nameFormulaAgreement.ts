@@ -108,7 +108,7 @@ const QUALIFIER_WORDS: ReadonlySet<string> = new Set(
     "reagent grade acs ar lr gr tech technical analytical laboratory lab pure puriss purified extra hplc " +
     "crystals crystal crystalline powder powdered granules granular pellets pellet flakes flake beads turnings " +
     "filings shot wire foil ribbon chips lumps pieces sticks rod rods sheet dust mossy metal gas liquid solid " +
-    "compressed liquefied cylinder lecture bottle standard standardised standardized volumetric stock hydrate " +
+    "compressed liquefied cylinder bottle standard standardised standardized volumetric stock hydrate " +
     "hydrated in water approx approximately ca min max for analysis under oil stabilised stabilized dry dried " +
     "saturated sat satd fine coarse mesh approx. tablets"
   ).split(" "),
