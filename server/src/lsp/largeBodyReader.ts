@@ -47,8 +47,11 @@ export function createLargeBodyReader(sizes: LargeBodySizes = LARGE_BODY_SIZES):
   /** The string being read: its bytes from the opening quote ("string") or after it ("long"). */
   let current: Buffer[] = [];
   let currentBytes = 0;
-  /** Decoded slabs of the long string being read, and its chunks so far. */
-  let slabs: string[] = [];
+  /**
+   * The long string being read, so far: slabs joined without a copy (the engine links them),
+   * and its chunks for the document store.
+   */
+  let longValue = "";
   let chunks: ChunkedTextBuilder = createChunkedTextBuilder();
   /** Backslashes just before the next byte to read: an odd count escapes it. */
   let backslashRun = 0;
@@ -75,7 +78,7 @@ export function createLargeBodyReader(sizes: LargeBodySizes = LARGE_BODY_SIZES):
       quoted[cut + 1] = QUOTE;
       try {
         const slab = JSON.parse(quoted.toString("utf8")) as string;
-        slabs.push(slab);
+        longValue += slab;
         chunks.add(slab);
       } catch (error) {
         failure = error instanceof Error ? error : new Error(String(error));
@@ -88,12 +91,9 @@ export function createLargeBodyReader(sizes: LargeBodySizes = LARGE_BODY_SIZES):
   const endString = (): void => {
     if (mode === "long") {
       decodeSlab(true);
-      // Joined without a copy (the engine links the slabs); the document store takes the chunks.
-      let value = "";
-      for (const slab of slabs) value += slab;
-      if (!failure) rememberChunked(value, chunks.finish());
-      longStrings.push(value);
-      slabs = [];
+      if (!failure) rememberChunked(longValue, chunks.finish());
+      longStrings.push(longValue);
+      longValue = "";
       chunks = createChunkedTextBuilder();
       rest.push(Buffer.from(JSON.stringify(`${markerPrefix}${longStrings.length - 1}`)));
     } else {
@@ -115,10 +115,9 @@ export function createLargeBodyReader(sizes: LargeBodySizes = LARGE_BODY_SIZES):
           return;
         }
         keep(bytes.subarray(at, quote));
+        // `current` is empty here: the last string's end emptied it.
         mode = "string";
         backslashRun = 0;
-        current = [];
-        currentBytes = 0;
         keep(bytes.subarray(quote, quote + 1));
         at = quote + 1;
         continue;
