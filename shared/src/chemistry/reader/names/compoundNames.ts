@@ -100,6 +100,11 @@ function doubleSalt(words: readonly string[]): CompoundNameReading | undefined {
 /** The charge a named cation has in a salt: its own, or the metal's one usual charge. */
 function saltCationCharge(cation: NamedPart): number | undefined {
   if (cation.prefixed) return undefined;
+  return ionCharge(cation);
+}
+
+/** The charge of a named cation's ion, counted or not: its own, or the metal's one usual charge. */
+function ionCharge(cation: NamedPart): number | undefined {
   if (cation.charge !== undefined) return cation.charge;
   return cation.element === undefined ? undefined : usualCationCharge(cation.element);
 }
@@ -109,7 +114,7 @@ function saltCationCharge(cation: NamedPart): number | undefined {
  * phosphate" (NH4)2HPO4: a count prefix on an ionic cation states how many balance one anion.
  */
 function countedSalt(cation: NamedPart, anion: NamedPart): CompoundNameReading | undefined {
-  const charge = cation.charge ?? (cation.element === undefined ? undefined : usualCationCharge(cation.element));
+  const charge = ionCharge(cation);
   if (charge === undefined || anion.prefixed || cation.count * charge !== -(anion.charge as number)) return undefined;
   return { formula: group(cation, cation.count) + group(anion, 1) };
 }
