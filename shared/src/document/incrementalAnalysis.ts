@@ -21,6 +21,7 @@ import { checkDocument } from "./checkDocument";
 import { placedParts, type FindingPart } from "./findingPart";
 import { findingsInParts } from "./findingsInParts";
 import { jsonListReader } from "./jsonParts";
+import type { ListVersion } from "./listParts";
 import { yamlListReader } from "./yamlParts";
 import { sliceOf, wholeText, type ChunkedText, type TextChunk } from "./chunkedText";
 import { isTextMarkup } from "./documentKind";
@@ -85,6 +86,8 @@ const BINARY_PROBE_LENGTH = 8 * 1024;
 export interface AnalyserTuning {
   /** How many characters of markdown the split into blocks reads at a time. */
   readonly markdownStretch?: number;
+  /** About how many characters of a JSON or YAML list a file just opened is read in at a time. */
+  readonly listStep?: number;
 }
 
 /** An analyser for a document of `kind`; keep one per open document, across its edits. */
@@ -92,7 +95,7 @@ export function createDocumentAnalyser(kind: DocumentKind, limit = MAX_ANALYSED_
   const read = memoisedReader();
   const table = kind === "csv" || kind === "tsv" ? tableSegments(kind, read) : undefined;
   const markdown = kind === "markdown" ? markdownAnalyser(read, tuning.markdownStretch) : undefined;
-  const list = kind === "json" ? jsonSegments(read) : kind === "yaml" ? yamlSegments(read) : undefined;
+  const list = kind === "json" ? jsonSegments(read, tuning.listStep) : kind === "yaml" ? yamlSegments(read, tuning.listStep) : undefined;
   const plain = isTextMarkup(kind) ? plainTextAnalyser(read, kind) : undefined;
   return {
     analyse(text) {
@@ -370,15 +373,8 @@ function sameChunks(a: readonly TextChunk[], b: readonly TextChunk[]): boolean {
 /** Below this length a JSON or YAML document's species are all listed for preparing hovers. */
 const LIST_SPECIES_LISTED_UP_TO = 256 * 1024;
 
-/** What a list reader says about one version. */
-interface ListVersion {
-  findings(): readonly Finding[];
-  /** The stretch of whole list elements around `start`..`end`; undefined outside them. */
-  around(start: number, end: number): { readonly start: number; readonly end: number } | undefined;
-}
-
-function jsonSegments(read: SpeciesReader): (text: ChunkedText) => DocumentAnalysis {
-  const list = jsonListReader(read);
+function jsonSegments(read: SpeciesReader, step?: number): (text: ChunkedText) => DocumentAnalysis {
+  const list = jsonListReader(read, step);
   return listSegments(
     "json",
     read,
@@ -388,8 +384,8 @@ function jsonSegments(read: SpeciesReader): (text: ChunkedText) => DocumentAnaly
   );
 }
 
-function yamlSegments(read: SpeciesReader): (text: ChunkedText) => DocumentAnalysis {
-  const list = yamlListReader(read);
+function yamlSegments(read: SpeciesReader, step?: number): (text: ChunkedText) => DocumentAnalysis {
+  const list = yamlListReader(read, step);
   return listSegments(
     "yaml",
     read,
@@ -419,13 +415,12 @@ function listSegments(
       kind,
       binary: false,
       findings: () => version.findings(),
-      *findingParts() {
-        yield version.findings();
-      },
+      // A file just opened is read a few records at a time: empty parts until the last.
+      findingParts: () => version.findingSteps(),
       *findingPartsAt() {
-        yield { findings: version.findings(), offset: 0 };
+        for (const findings of version.findingSteps()) yield { findings, offset: 0 };
       },
-      findingsAround: (start, end) => version.findings().filter((finding) => finding.range.end >= start && finding.range.start <= end),
+      findingsAround: (start, end) => version.findingsAround(start, end),
       model: () => plain().model(),
       modelAround: around,
       speciesAt: (offset) => speciesAtOffset(around(offset, offset), offset),

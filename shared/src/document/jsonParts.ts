@@ -10,32 +10,125 @@
  * the same inside the document. A version with a syntax error anywhere, an edit outside the list
  * (or to its brackets and the commas at its ends), or re-read elements that are not clean JSON
  * on their own are all read whole, the ordinary way.
+ *
+ * A text read afresh is read the same way, a few elements at a time: a quick pass finds the list
+ * and its elements (`scanJsonList`), the text around the list is read with the list left empty,
+ * and the elements are read in runs as their findings are asked for, so that a large file just
+ * opened does not hold up other requests. Should any of them not read cleanly, the text is read
+ * whole after all.
  */
-import { parseTree, type Node, type ParseError } from "jsonc-parser/lib/esm/main.js";
-import { analyzeDocument, analyzeJsonOutline, analyzeJsonTree } from "./analyzeDocument";
-import { checkDocument } from "./checkDocument";
+import type { Node } from "jsonc-parser/lib/esm/main.js";
+import { analyzeJsonOutline, analyzeJsonTree } from "./analyzeDocument";
+import { checkDocument, documentChecker } from "./checkDocument";
 import { sliceOf, wholeText, type ChunkedText } from "./chunkedText";
-import { changedStretch, lastAtOrBefore, NO_FINDINGS, rememberingListReader, type ListParts, type ListReader } from "./listParts";
+import {
+  changedStretch,
+  lastAtOrBefore,
+  NO_FINDINGS,
+  rememberingListReader,
+  type ListFrame,
+  type ListParts,
+  type ListReader,
+  type WholeReading,
+} from "./listParts";
 import type { SpeciesReader } from "./speciesReader";
-import { JSON_PARSE_OPTIONS, parseJsonTree } from "./tables/json";
+import { parseJsonTree } from "./tables/json";
+import { scanJsonList } from "./tables/jsonListScan";
 import { jsonOutline } from "./tables/jsonOutline";
 import { equationKeyTest } from "./tables/headers";
 import { moved } from "./tables/delimitedFindings";
 import type { DocumentModel, Finding } from "./types";
 
 /** A reader that keeps the last version's list; keep one per open document. */
-export function jsonListReader(read: SpeciesReader): ListReader {
-  return rememberingListReader<ListParts>(
-    (last, text) => editedState(last, text, read),
-    (text) => wholeState(text, read),
+export function jsonListReader(read: SpeciesReader, step?: number): ListReader {
+  const check = documentChecker();
+  const isEquationKey = equationKeyTest();
+  return rememberingListReader<JsonListState>(
+    {
+      edited: (last, text) => editedState(last, text, read, check),
+      opened: (text) => openedState(text, read, isEquationKey) ?? wholeState(text, read),
+      readParts: (state, first, last) => partsInPlace(state, first, last, read, check),
+      readFrame: (state) => frameOf(state, read, isEquationKey, check),
+      readWhole: (text) => readOnce(wholeText(text), read).findings,
+    },
+    step,
   );
+}
+
+/** The remembered list of one version; `open` and `close` are its brackets (-1 when not known). */
+interface JsonListState extends ListParts {
+  readonly open: number;
+  readonly close: number;
+}
+
+/** A text's list found by the quick pass, none of it read yet; undefined when the pass finds none. */
+function openedState(text: ChunkedText, read: SpeciesReader, isEquationKey: (key: string) => boolean): JsonListState | undefined {
+  const list = scanJsonList(text, isEquationKey);
+  if (!list) return undefined;
+  return {
+    text,
+    starts: list.starts,
+    ends: list.ends,
+    partFindings: new Array<readonly Finding[] | undefined>(list.starts.length),
+    frame: undefined,
+    tail: list.ends[list.ends.length - 1],
+    open: list.open,
+    close: list.close,
+  };
+}
+
+/**
+ * The text around the list, read with the list left empty: its findings before the list and
+ * after it. Undefined unless it is clean JSON in which the emptied list is still the record list.
+ */
+function frameOf(
+  state: JsonListState,
+  read: SpeciesReader,
+  isEquationKey: (key: string) => boolean,
+  check: (model: DocumentModel) => Finding[],
+): ListFrame | undefined {
+  if (state.open < 0) return undefined;
+  const head = sliceOf(state.text, 0, state.open + 1);
+  const frame = head + sliceOf(state.text, state.close, state.text.length);
+  const outline = jsonOutline(frame, isEquationKey);
+  if (!outline) return undefined;
+  const before: Finding[] = [];
+  const after: Finding[] = [];
+  for (const finding of findingsOf(analyzeJsonOutline(frame, outline, read), check)) {
+    if (finding.range.end <= head.length) before.push(finding);
+    else if (finding.range.start >= head.length) after.push(moved(finding, state.close - head.length - state.tail));
+    else return undefined;
+  }
+  return { before, after };
+}
+
+/** Elements `first`..`last` of `state` read as a list of their own: each one's findings; undefined unless they read cleanly where they lie. */
+function partsInPlace(
+  state: JsonListState,
+  first: number,
+  last: number,
+  read: SpeciesReader,
+  check: (model: DocumentModel) => Finding[],
+): (readonly Finding[])[] | undefined {
+  const stretchStart = state.starts[first];
+  const elements = elementsAlone(sliceOf(state.text, stretchStart, state.ends[last]), read, check);
+  if (!elements || elements.starts.length !== last - first + 1) return undefined;
+  for (let index = 0; index < elements.starts.length; index++) {
+    if (
+      elements.starts[index] + stretchStart !== state.starts[first + index] ||
+      elements.ends[index] + stretchStart !== state.ends[first + index]
+    ) {
+      return undefined;
+    }
+  }
+  return elements.findings;
 }
 
 /**
  * The whole text read the ordinary way, and cut into its list's elements when it is clean JSON;
  * otherwise only its findings.
  */
-function wholeState(text: ChunkedText, read: SpeciesReader): ListParts | { readonly findings: readonly Finding[] } {
+function wholeState(text: ChunkedText, read: SpeciesReader): JsonListState | WholeReading {
   const whole = wholeText(text);
   const reading = readOnce(whole, read);
   const all = reading.findings;
@@ -63,9 +156,10 @@ function wholeState(text: ChunkedText, read: SpeciesReader): ListParts | { reado
     starts,
     ends,
     partFindings: partFindings.map((found) => (found.length === 0 ? NO_FINDINGS : found)),
-    before,
-    after,
+    frame: { before, after },
     tail,
+    open: -1,
+    close: -1,
   };
 }
 
@@ -90,13 +184,18 @@ function readOnce(whole: string, read: SpeciesReader): { findings: Finding[]; li
   };
 }
 
-/** The list of records: the root array, or the longest array held directly under the root object. */
+/**
+ * The list of records: the root array, or the longest array held directly under the root object
+ * (not under an equation key, whose strings are read as equations only there).
+ */
 function recordList(root: Node): Node | undefined {
   if (root.type === "array") return root;
   if (root.type !== "object") return undefined;
+  const isEquationKey = equationKeyTest();
   let longest: Node | undefined;
   for (const property of root.children ?? []) {
-    const value = property.children?.[1];
+    const [key, value] = property.children ?? [];
+    if (typeof key?.value === "string" && isEquationKey(key.value)) continue;
     if (value?.type === "array" && (value.children?.length ?? 0) > (longest?.children?.length ?? 0)) longest = value;
   }
   return longest;
@@ -106,7 +205,12 @@ function recordList(root: Node): Node | undefined {
  * The state of `text` from the state of the version before, re-reading only the elements the
  * change touches; undefined when that cannot be done soundly (the caller reads the text whole).
  */
-function editedState(previous: ListParts, text: ChunkedText, read: SpeciesReader): ListParts | undefined {
+function editedState(
+  previous: JsonListState,
+  text: ChunkedText,
+  read: SpeciesReader,
+  check: (model: DocumentModel) => Finding[],
+): JsonListState | undefined {
   const change = changedStretch(previous.text, text);
   if (!change) return { ...previous, text };
   const { start, oldEnd, newEnd } = change;
@@ -117,30 +221,21 @@ function editedState(previous: ListParts, text: ChunkedText, read: SpeciesReader
   while (lastIndex < previous.ends.length && previous.ends[lastIndex] < oldEnd) lastIndex++;
   if (first < 0 || lastIndex >= previous.ends.length) return undefined;
   const stretchStart = previous.starts[first];
-  const stretch = sliceOf(text, stretchStart, previous.ends[lastIndex] + by);
-  const elements = cleanElements(stretch);
+  const elements = elementsAlone(sliceOf(text, stretchStart, previous.ends[lastIndex] + by), read, check);
   if (!elements) return undefined;
-  // Read as a list of its own: `[` in front, so offsets in it are one past the stretch's.
-  const found = documentFindings(`[${stretch}]`, read);
-  const newStarts = Int32Array.from(elements, (element) => element.start + stretchStart);
-  const newEnds = Int32Array.from(elements, (element) => element.end + stretchStart);
-  const newFindings: Finding[][] = elements.map(() => []);
-  for (const finding of found) {
-    const index = lastAtOrBefore(newStarts, finding.range.start + stretchStart - 1);
-    if (index < 0 || finding.range.end + stretchStart - 1 > newEnds[index]) return undefined;
-    newFindings[index].push(moved(finding, stretchStart - 1 - newStarts[index]));
-  }
   const after = lastIndex + 1;
   // Typed arrays, copied whole: an edit costs a copy of a few hundred kilobytes at most, and the
   // version before keeps its own (a request about it may still be answered).
-  const count = first + elements.length + previous.starts.length - after;
+  const count = first + elements.starts.length + previous.starts.length - after;
   const starts = new Int32Array(count);
   const ends = new Int32Array(count);
   starts.set(previous.starts.subarray(0, first));
   ends.set(previous.ends.subarray(0, first));
-  starts.set(newStarts, first);
-  ends.set(newEnds, first);
-  for (let index = after, to = first + elements.length; index < previous.starts.length; index++, to++) {
+  for (let index = 0; index < elements.starts.length; index++) {
+    starts[first + index] = elements.starts[index] + stretchStart;
+    ends[first + index] = elements.ends[index] + stretchStart;
+  }
+  for (let index = after, to = first + elements.starts.length; index < previous.starts.length; index++, to++) {
     starts[to] = previous.starts[index] + by;
     ends[to] = previous.ends[index] + by;
   }
@@ -148,43 +243,44 @@ function editedState(previous: ListParts, text: ChunkedText, read: SpeciesReader
     text,
     starts,
     ends,
-    partFindings: previous.partFindings.slice(0, first).concat(
-      newFindings.map((list) => (list.length === 0 ? NO_FINDINGS : list)),
-      previous.partFindings.slice(after),
-    ),
-    before: previous.before,
-    after: previous.after,
+    partFindings: previous.partFindings.slice(0, first).concat(elements.findings, previous.partFindings.slice(after)),
+    frame: previous.frame,
     tail: previous.tail + by,
+    open: previous.open,
+    close: previous.close < 0 ? previous.close : previous.close + by,
   };
 }
 
 /**
- * The elements of `stretch` read as the inside of a list, relative to its start: undefined unless
- * it is clean JSON, one or more values that begin at its first character and end at its last
- * (so the separators around it in the document are unchanged).
+ * The elements of `stretch` read as the inside of a list of their own, relative to its start,
+ * with each one's findings relative to its own start: undefined unless it is clean JSON, one or
+ * more values that begin at its first character and end at its last (so the separators around it
+ * in the document are unchanged), each of whose findings lies inside its element.
  */
-function cleanElements(stretch: string): { start: number; end: number }[] | undefined {
-  const errors: ParseError[] = [];
-  let root: Node | undefined;
-  try {
-    root = parseTree(`[${stretch}]`, errors, JSON_PARSE_OPTIONS);
-  } catch {
-    return undefined;
+function elementsAlone(
+  stretch: string,
+  read: SpeciesReader,
+  check: (model: DocumentModel) => Finding[],
+): { starts: Int32Array; ends: Int32Array; findings: (readonly Finding[])[] } | undefined {
+  const listed = `[${stretch}]`;
+  const outline = jsonOutline(listed, equationKeyTest());
+  const list = outline?.list;
+  if (!outline || !list || list.starts.length === 0) return undefined;
+  if (list.starts[0] !== 1 || list.ends[list.ends.length - 1] !== stretch.length + 1) return undefined;
+  const findings: Finding[][] = Array.from(list.starts, () => []);
+  for (const finding of findingsOf(analyzeJsonOutline(listed, outline, read), check)) {
+    const index = lastAtOrBefore(list.starts, finding.range.start);
+    if (index < 0 || finding.range.end > list.ends[index]) return undefined;
+    findings[index].push(moved(finding, -list.starts[index]));
   }
-  const children = root?.children;
-  if (!root || errors.length > 0 || root.type !== "array" || !children || children.length === 0) return undefined;
-  const first = children[0];
-  const last = children[children.length - 1];
-  if (first.offset !== 1 || last.offset + last.length !== stretch.length + 1) return undefined;
-  return children.map((child) => ({ start: child.offset - 1, end: child.offset - 1 + child.length }));
-}
-
-/** The problems and checks' findings of `text` read as JSON, in document order (the plain path). */
-function documentFindings(text: string, read: SpeciesReader): Finding[] {
-  return findingsOf(analyzeDocument(text, "json", read));
+  return {
+    starts: list.starts.map((offset) => offset - 1),
+    ends: list.ends.map((offset) => offset - 1),
+    findings: findings.map((found) => (found.length === 0 ? NO_FINDINGS : found)),
+  };
 }
 
 /** The problems and checks' findings of a model, in document order. */
-function findingsOf(model: DocumentModel): Finding[] {
-  return [...model.problems, ...checkDocument(model)].sort((a, b) => a.range.start - b.range.start || a.range.end - b.range.end);
+function findingsOf(model: DocumentModel, check: (model: DocumentModel) => Finding[] = checkDocument): Finding[] {
+  return [...model.problems, ...check(model)].sort((a, b) => a.range.start - b.range.start || a.range.end - b.range.end);
 }

@@ -12,6 +12,13 @@ export interface ListVersion {
   /** The findings of the whole document, in document order. */
   findings(): readonly Finding[];
   /**
+   * The same findings, worked out a few parts at a time: empty steps while parts are read, then
+   * one step with them all. A caller that must stay responsive lets other work in between.
+   */
+  findingSteps(): Iterable<readonly Finding[]>;
+  /** The findings that overlap `start`..`end`, reading only the parts there that are not read yet. */
+  findingsAround(start: number, end: number): readonly Finding[];
+  /**
    * The stretch of whole parts that overlaps `start`..`end` (it reads alone as it reads in
    * place), for reading the model of a few records; undefined outside the list's parts.
    */
@@ -21,61 +28,194 @@ export interface ListVersion {
 /** Reads successive versions of one document. */
 export type ListReader = (text: ChunkedText) => ListVersion;
 
+/** What lies around the parts: findings before them (absolute) and after them (relative to `tail`). */
+export interface ListFrame {
+  readonly before: readonly Finding[];
+  readonly after: readonly Finding[];
+}
+
 /** The remembered list of one version: part spans and their findings, relative to each start. */
 export interface ListParts {
   readonly text: ChunkedText;
   /** Part `k` runs from `starts[k]` to `ends[k]` (its first and just past its last character). */
   readonly starts: Int32Array;
   readonly ends: Int32Array;
-  readonly partFindings: (readonly Finding[])[];
-  /** Findings before the list's parts (absolute) and after them (relative to `tail`). */
-  readonly before: readonly Finding[];
-  readonly after: readonly Finding[];
+  /**
+   * Each part's findings; undefined until the part is read. A file just opened is found out a
+   * few parts at a time, and an edit meanwhile keeps what was read.
+   */
+  readonly partFindings: (readonly Finding[] | undefined)[];
+  /** The findings around the parts; undefined until read. */
+  frame: ListFrame | undefined;
   /** Where the text after the last part starts. */
   readonly tail: number;
+}
+
+/** The plain reading of a text without a list of parts. */
+export interface WholeReading {
+  readonly findings: readonly Finding[];
+}
+
+/** How one kind of document is read as a list of parts. */
+export interface ListKind<State extends ListParts> {
+  /** The state of an edited text from the last version's; undefined when it must be read afresh. */
+  edited(last: State, text: ChunkedText): State | undefined;
+  /** A text read afresh: its parts found (none read yet), or its findings when it has no such list. */
+  opened(text: ChunkedText): State | WholeReading;
+  /** Parts `first`..`last` read in place, findings relative to each part's start; undefined when they do not read cleanly. */
+  readParts(state: State, first: number, last: number): (readonly Finding[])[] | undefined;
+  /** The text around the parts read; undefined when it does not read cleanly. */
+  readFrame(state: State): ListFrame | undefined;
+  /** The text read whole, the ordinary way: what a text whose parts do not read cleanly gives. */
+  readWhole(text: ChunkedText): readonly Finding[];
 }
 
 /** Shared by every part without findings. */
 export const NO_FINDINGS: readonly Finding[] = [];
 
+/** About this many characters of parts are read between two steps of an opening read. */
+const STEP_CHARACTERS = 48 * 1024;
+
 /**
- * A reader that keeps the last version's list: `edited` re-reads what an edit touched (undefined
- * when it cannot), `whole` reads the text the ordinary way, cut into parts when it can be.
+ * A reader that keeps the last version's list: an edit re-reads what it touched, and a text read
+ * afresh is read a few parts at a time as its findings are asked for.
  */
-export function rememberingListReader<State extends ListParts>(
-  edited: (last: State, text: ChunkedText) => State | undefined,
-  whole: (text: ChunkedText) => State | { readonly findings: readonly Finding[] },
-): ListReader {
+export function rememberingListReader<State extends ListParts>(kind: ListKind<State>, step = STEP_CHARACTERS): ListReader {
   let last: State | undefined;
+  const forget = (state: State): void => {
+    if (last === state) last = undefined;
+  };
   return (text) => {
-    const next = last && edited(last, text);
+    const next = last && kind.edited(last, text);
     if (next) {
       last = next;
-      return versionOf(next);
+      return versionOf(next, kind, forget, step);
     }
-    const read = whole(text);
-    last = "starts" in read ? read : undefined;
-    return "starts" in read ? versionOf(read) : { findings: () => read.findings, around: () => undefined };
+    const opened = kind.opened(text);
+    if (!("starts" in opened)) {
+      last = undefined;
+      return wholeVersion(opened.findings);
+    }
+    last = opened;
+    return versionOf(opened, kind, forget, step);
   };
 }
 
-function versionOf(state: ListParts): ListVersion {
-  let findings: Finding[] | undefined;
+function wholeVersion(findings: readonly Finding[]): ListVersion {
   return {
-    findings() {
-      if (findings) return findings;
-      findings = [...state.before];
-      for (let index = 0; index < state.starts.length; index++) {
-        for (const finding of state.partFindings[index]) findings.push(moved(finding, state.starts[index]));
+    findings: () => findings,
+    *findingSteps() {
+      yield findings;
+    },
+    findingsAround: (start, end) => overlapping(findings, start, end),
+    around: () => undefined,
+  };
+}
+
+function overlapping(findings: readonly Finding[], start: number, end: number): Finding[] {
+  return findings.filter((finding) => finding.range.end >= start && finding.range.start <= end);
+}
+
+/**
+ * A version of `state`, whose unread parts are read as they are needed. Should a part not read
+ * cleanly, the text is read whole and the state is forgotten (the next edit reads afresh too).
+ */
+function versionOf<State extends ListParts>(
+  state: State,
+  kind: ListKind<State>,
+  forget: (state: State) => void,
+  step: number,
+): ListVersion {
+  const count = state.starts.length;
+  let all: readonly Finding[] | undefined;
+  /** The plain reading, once a part did not read cleanly. */
+  let whole: readonly Finding[] | undefined;
+  const fail = (): false => {
+    forget(state);
+    whole = kind.readWhole(state.text);
+    return false;
+  };
+  const frameRead = (): boolean => {
+    if (whole) return false;
+    if (state.frame) return true;
+    const frame = kind.readFrame(state);
+    if (!frame) return fail();
+    state.frame = frame;
+    return true;
+  };
+  /** Reads the unread parts from `first` to `last`; false once the text is read whole. */
+  const partsRead = (first: number, last: number): boolean => {
+    let from = first;
+    while (from <= last) {
+      if (whole) return false;
+      if (state.partFindings[from] !== undefined) {
+        from++;
+        continue;
       }
-      for (const finding of state.after) findings.push(moved(finding, state.tail));
-      return findings;
+      let to = from;
+      while (to < last && state.partFindings[to + 1] === undefined) to++;
+      const found = kind.readParts(state, from, to);
+      if (!found || found.length !== to - from + 1) return fail();
+      for (let index = 0; index < found.length; index++)
+        state.partFindings[from + index] = found[index].length === 0 ? NO_FINDINGS : found[index];
+      from = to + 1;
+    }
+    return !whole;
+  };
+  /** Reads everything a step at a time. */
+  function* steps(): Generator<void> {
+    if (!frameRead()) return;
+    let first = 0;
+    while (first < count) {
+      let last = first;
+      while (last + 1 < count && state.ends[last + 1] - state.starts[first] <= step) last++;
+      if (!partsRead(first, last)) return;
+      first = last + 1;
+      if (first < count) yield;
+    }
+  }
+  const findings = (): readonly Finding[] => {
+    if (all) return all;
+    for (const _ of steps());
+    if (whole) return whole;
+    const placed: Finding[] = [...state.frame!.before];
+    for (let index = 0; index < count; index++) {
+      for (const finding of state.partFindings[index]!) placed.push(moved(finding, state.starts[index]));
+    }
+    for (const finding of state.frame!.after) placed.push(moved(finding, state.tail));
+    all = placed;
+    return all;
+  };
+  const around = (start: number, end: number): { first: number; last: number } | undefined => {
+    const first = lastAtOrBefore(state.starts, start);
+    if (first < 0 || start > state.ends[first]) return undefined;
+    return { first, last: Math.max(first, lastAtOrBefore(state.starts, end)) };
+  };
+  return {
+    findings,
+    *findingSteps() {
+      if (!all && !whole) {
+        for (const _ of steps()) yield NO_FINDINGS;
+      }
+      yield findings();
+    },
+    findingsAround(start, end) {
+      if (all || whole) return overlapping(all ?? whole!, start, end);
+      if (!frameRead()) return overlapping(whole!, start, end);
+      const from = Math.max(0, lastAtOrBefore(state.starts, start));
+      const to = Math.max(from, lastAtOrBefore(state.starts, end));
+      if (!partsRead(from, to)) return overlapping(whole!, start, end);
+      const found: Finding[] = overlapping(state.frame!.before, start, end);
+      for (let index = from; index <= to; index++) {
+        for (const finding of state.partFindings[index]!) found.push(moved(finding, state.starts[index]));
+      }
+      for (const finding of state.frame!.after) found.push(moved(finding, state.tail));
+      return overlapping(found, start, end);
     },
     around(start, end) {
-      const first = lastAtOrBefore(state.starts, start);
-      if (first < 0 || start > state.ends[first]) return undefined;
-      const lastIndex = Math.max(first, lastAtOrBefore(state.starts, end));
-      return { start: state.starts[first], end: state.ends[lastIndex] };
+      if (whole) return undefined;
+      const parts = around(start, end);
+      return parts && { start: state.starts[parts.first], end: state.ends[parts.last] };
     },
   };
 }

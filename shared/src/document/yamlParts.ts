@@ -25,7 +25,15 @@ import { isMap, isPair, isScalar, isSeq, type Node, type YAMLSeq } from "yaml";
 import { analyzeDocument, analyzeYamlStream } from "./analyzeDocument";
 import { checkDocument } from "./checkDocument";
 import { sliceOf, wholeText, type ChunkedText } from "./chunkedText";
-import { changedStretch, lastAtOrBefore, NO_FINDINGS, rememberingListReader, type ListParts, type ListReader } from "./listParts";
+import {
+  changedStretch,
+  lastAtOrBefore,
+  NO_FINDINGS,
+  rememberingListReader,
+  type ListParts,
+  type ListReader,
+  type WholeReading,
+} from "./listParts";
 import type { SpeciesReader } from "./speciesReader";
 import { moved } from "./tables/delimitedFindings";
 import { isEquationHeader } from "./tables/headers";
@@ -49,18 +57,35 @@ const SPACE = 0x20;
 const LINE_FEED = 0x0a;
 
 /** A reader that keeps the last version's list; keep one per open document. */
-export function yamlListReader(read: SpeciesReader): ListReader {
+export function yamlListReader(read: SpeciesReader, step?: number): ListReader {
   return rememberingListReader<ListState>(
-    (last, text) => editedState(last, text, read),
-    (text) => wholeState(text, read),
+    {
+      edited: (last, text) => editedState(last, text, read),
+      opened: (text) => wholeState(text, read),
+      readParts: (state, first, last) => itemsInPlace(state, first, last, read),
+      readFrame: () => undefined,
+      readWhole: (text) => findingsOf(analyzeDocument(wholeText(text), "yaml", read)),
+    },
+    step,
   );
+}
+
+/** Items `first`..`last` of `state` read alone: each one's findings; undefined unless they read cleanly where they lie. */
+function itemsInPlace(state: ListState, first: number, last: number, read: SpeciesReader): (readonly Finding[])[] | undefined {
+  const stretchStart = state.starts[first];
+  const items = itemsAlone(sliceOf(state.text, stretchStart, state.ends[last]), state.indent, read);
+  if (!items || items.starts.length !== last - first + 1) return undefined;
+  for (let index = 0; index < items.starts.length; index++) {
+    if (items.starts[index] + stretchStart !== state.starts[first + index]) return undefined;
+  }
+  return items.findings;
 }
 
 /**
  * The whole text read the ordinary way (parsed once), and cut into its list's items when it reads
  * without errors and has such a list; otherwise only its findings.
  */
-function wholeState(text: ChunkedText, read: SpeciesReader): ListState | { readonly findings: readonly Finding[] } {
+function wholeState(text: ChunkedText, read: SpeciesReader): ListState | WholeReading {
   const whole = wholeText(text);
   const documents = parseYamlStream(whole);
   if (!documents) return { findings: findingsOf(analyzeDocument(whole, "yaml", read)) };
@@ -83,7 +108,15 @@ function wholeState(text: ChunkedText, read: SpeciesReader): ListState | { reado
   for (let index = 0; index < starts.length; index++) ends[index] = index + 1 < starts.length ? starts[index + 1] : tail;
   const parts = partition(all, starts, ends);
   if (!parts) return plain;
-  return { text, starts, ends, partFindings: parts.inside, indent: items.indent, before: parts.before, after: parts.after, tail };
+  return {
+    text,
+    starts,
+    ends,
+    partFindings: parts.inside,
+    indent: items.indent,
+    frame: { before: parts.before, after: parts.after },
+    tail,
+  };
 }
 
 /**
@@ -239,8 +272,7 @@ function editedState(previous: ListState, text: ChunkedText, read: SpeciesReader
     ends,
     partFindings: previous.partFindings.slice(0, first).concat(items.findings, previous.partFindings.slice(after)),
     indent: previous.indent,
-    before: previous.before,
-    after: previous.after,
+    frame: previous.frame,
     tail: previous.tail + by,
   };
 }

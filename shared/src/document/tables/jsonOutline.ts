@@ -172,10 +172,14 @@ export function jsonOutline(text: string, isEquationKey: (key: string) => boolea
   return { objects, list: recordList(candidates, rootIsObject) };
 }
 
-/** The root list, or the list under the root object with the most elements (the first of equals). */
+/**
+ * The root list, or the list under the root object with the most elements (the first of equals);
+ * never a list under an equation key, whose strings are read as equations only there.
+ */
 function recordList(candidates: readonly Frame[], rootIsObject: boolean): JsonOutline["list"] {
   let longest: Frame | undefined;
   for (const candidate of candidates) {
+    if (candidate.strings) continue;
     if (!rootIsObject) return bounds(candidate);
     if (candidate.starts!.length > (longest?.starts!.length ?? 0)) longest = candidate;
   }
