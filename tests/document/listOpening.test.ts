@@ -3,23 +3,10 @@
 // read is done, gives what a from-scratch analysis of the same text gives (the core's own
 // analyzeDocument + checkDocument are the reference).
 import { describe, expect, it } from "vitest";
-import { analyzeDocument, chunkedTextOf, createDocumentAnalyser, speciesAtOffset, wholeText, type Finding } from "../../shared/src/index";
-import type { DocumentAnalysis } from "../../shared/src/document/incrementalAnalysis";
-import { canonical, checkAgainstScratch, fromScratch, type Session } from "../support/incrementalCheck";
+import { chunkedTextOf, createDocumentAnalyser, wholeText } from "../../shared/src/index";
+import { canonical, checkAgainstScratch, fromScratch, placesAgree, type Session } from "../support/incrementalCheck";
 import { JSON_RECORD_LINES, jsonDocument, randomJsonEdit } from "../support/jsonEdits";
 import { seededRandom } from "../support/seededRandom";
-
-/** Requests about random places of `analysis` agree with a fresh reading of `plain`. */
-function requestsAgree(analysis: DocumentAnalysis, plain: string, kind: "json" | "yaml", random: () => number): void {
-  const scratch = canonical(fromScratch(plain, kind));
-  const model = analyzeDocument(plain, kind);
-  for (let probe = 0; probe < 3; probe++) {
-    const place = Math.floor(random() * (plain.length + 1));
-    const touching = (finding: Finding): boolean => finding.range.start <= place && place <= finding.range.end;
-    expect(canonical(analysis.findingsAround(place, place).filter(touching))).toEqual(scratch.filter(touching));
-    expect(analysis.speciesAt(place)?.range).toEqual(speciesAtOffset(model, place)?.range);
-  }
-}
 
 describe("a JSON list of records read a few records at a time", () => {
   it.each([1, 2, 3, 4])("agrees with a fresh analysis whatever is asked while it is read (seed %i)", (seed) => {
@@ -32,7 +19,7 @@ describe("a JSON list of records read a few records at a time", () => {
       // Opened afresh, read in steps of a few characters to a few records.
       const analyser = createDocumentAnalyser("json", undefined, { listStep: 1 + Math.floor(random() * 400) });
       const opened = analyser.analyse(session.text);
-      requestsAgree(opened, wholeText(session.text), "json", random);
+      placesAgree(opened, wholeText(session.text), "json", random);
       let steps = 0;
       for (const part of opened.findingParts()) {
         steps++;

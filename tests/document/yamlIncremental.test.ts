@@ -5,7 +5,7 @@
 import { describe, expect, it } from "vitest";
 import { parseAllDocuments } from "yaml";
 import { chunkedTextOf, createDocumentAnalyser, editChunkedText, wholeText } from "../../shared/src/index";
-import { canonical, checkAgainstScratch, fromScratch, type Session } from "../support/incrementalCheck";
+import { canonical, checkAgainstScratch, fromScratch, placesAgree, type Session } from "../support/incrementalCheck";
 import { seededRandom } from "../support/seededRandom";
 
 // common practice: valence electron counts, lone pairs and shapes of the lab's reference gases,
@@ -230,14 +230,20 @@ function randomYamlEdit(session: Session, random: () => number, indent: number, 
 function runEdits(style: Style, seed: number, edits: number): void {
   const random = seededRandom(seed);
   const items = Array.from({ length: 20 }, (_, index) => ITEMS[(index * 7 + seed) % ITEMS.length]);
-  const session: Session = { text: chunkedTextOf(style.document(items), 256), analyser: createDocumentAnalyser("yaml") };
+  // Half the sessions read a file opened afresh an item or two at a time.
+  const tuning = seed % 2 === 0 ? { listStep: 64 } : {};
+  const session: Session = { text: chunkedTextOf(style.document(items), 256), analyser: createDocumentAnalyser("yaml", undefined, tuning) };
   const undo: Undo[] = [];
   for (let edit = 0; edit < edits; edit++) {
     randomYamlEdit(session, random, style.indent, undo);
     checkAgainstScratch(session, "yaml", random);
-    if (random() < 0.03) {
-      // The same text opened afresh: the first reading cuts the list as an edit's reading does.
-      const fresh: Session = { text: session.text, analyser: createDocumentAnalyser("yaml") };
+    if (random() < 0.1) {
+      // The same text opened afresh and read a few items at a time: requests about places first.
+      const fresh: Session = {
+        text: session.text,
+        analyser: createDocumentAnalyser("yaml", undefined, { listStep: 1 + Math.floor(random() * 300) }),
+      };
+      placesAgree(fresh.analyser.analyse(fresh.text), wholeText(fresh.text), "yaml", random);
       checkAgainstScratch(fresh, "yaml", random);
     }
   }

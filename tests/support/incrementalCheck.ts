@@ -62,3 +62,23 @@ export function checkAgainstScratch(session: Session, kind: DocumentKind, random
     expect(analysis.speciesAt(offset)?.range).toEqual(speciesAtOffset(model, offset)?.range);
   }
 }
+
+/**
+ * Requests about a few random places of `analysis` (the findings there, the species under a
+ * hover) agree with a fresh reading of `plain`: asked first, before anything else is read.
+ */
+export function placesAgree(
+  analysis: ReturnType<ReturnType<typeof createDocumentAnalyser>["analyse"]>,
+  plain: string,
+  kind: DocumentKind,
+  random: () => number,
+): void {
+  const scratch = canonical(fromScratch(plain, kind));
+  const model = analyzeDocument(plain, kind);
+  for (let probe = 0; probe < 3; probe++) {
+    const place = Math.floor(random() * (plain.length + 1));
+    const touching = (finding: Finding): boolean => finding.range.start <= place && place <= finding.range.end;
+    expect(canonical(analysis.findingsAround(place, place).filter(touching))).toEqual(scratch.filter(touching));
+    expect(analysis.speciesAt(place)?.range).toEqual(speciesAtOffset(model, place)?.range);
+  }
+}

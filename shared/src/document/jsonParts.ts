@@ -39,8 +39,11 @@ import { equationKeyTest } from "./tables/headers";
 import { moved } from "./tables/delimitedFindings";
 import type { DocumentModel, Finding } from "./types";
 
+/** How many characters of a file just opened are read at a time: a few milliseconds' work. */
+const STEP_CHARACTERS = 48 * 1024;
+
 /** A reader that keeps the last version's list; keep one per open document. */
-export function jsonListReader(read: SpeciesReader, step?: number): ListReader {
+export function jsonListReader(read: SpeciesReader, step = STEP_CHARACTERS): ListReader {
   const check = documentChecker();
   const isEquationKey = equationKeyTest();
   return rememberingListReader<JsonListState>(
@@ -95,8 +98,8 @@ function frameOf(
   const before: Finding[] = [];
   const after: Finding[] = [];
   for (const finding of findingsOf(analyzeJsonOutline(frame, outline, read), check)) {
-    if (finding.range.end <= head.length) before.push(finding);
-    else if (finding.range.start >= head.length) after.push(moved(finding, state.close - head.length - state.tail));
+    if (finding.range.start >= head.length) after.push(moved(finding, state.close - head.length - state.tail));
+    else if (finding.range.end <= head.length) before.push(finding);
     else return undefined;
   }
   return { before, after };

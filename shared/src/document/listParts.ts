@@ -73,14 +73,12 @@ export interface ListKind<State extends ListParts> {
 /** Shared by every part without findings. */
 export const NO_FINDINGS: readonly Finding[] = [];
 
-/** About this many characters of parts are read between two steps of an opening read. */
-const STEP_CHARACTERS = 48 * 1024;
-
 /**
  * A reader that keeps the last version's list: an edit re-reads what it touched, and a text read
- * afresh is read a few parts at a time as its findings are asked for.
+ * afresh is read a few parts at a time as its findings are asked for, about `step` characters of
+ * parts at a time.
  */
-export function rememberingListReader<State extends ListParts>(kind: ListKind<State>, step = STEP_CHARACTERS): ListReader {
+export function rememberingListReader<State extends ListParts>(kind: ListKind<State>, step: number): ListReader {
   let last: State | undefined;
   const forget = (state: State): void => {
     if (last === state) last = undefined;

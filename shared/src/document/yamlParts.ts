@@ -30,12 +30,15 @@ import {
   lastAtOrBefore,
   NO_FINDINGS,
   rememberingListReader,
+  type ListFrame,
   type ListParts,
   type ListReader,
   type WholeReading,
 } from "./listParts";
 import type { SpeciesReader } from "./speciesReader";
 import { moved } from "./tables/delimitedFindings";
+import { columnUnder } from "./tables/delimitedRecords";
+import { scanYamlList } from "./tables/yamlListScan";
 import { isEquationHeader } from "./tables/headers";
 import { parseYamlStream, type YamlStream } from "./tables/yaml";
 import type { DocumentModel, Finding } from "./types";
@@ -56,18 +59,62 @@ const DASH = 0x2d;
 const SPACE = 0x20;
 const LINE_FEED = 0x0a;
 
+/** How many characters of a file just opened are read at a time: a few milliseconds' work. */
+const STEP_CHARACTERS = 16 * 1024;
+
 /** A reader that keeps the last version's list; keep one per open document. */
-export function yamlListReader(read: SpeciesReader, step?: number): ListReader {
+export function yamlListReader(read: SpeciesReader, step = STEP_CHARACTERS): ListReader {
   return rememberingListReader<ListState>(
     {
       edited: (last, text) => editedState(last, text, read),
-      opened: (text) => wholeState(text, read),
+      opened: (text) => openedState(text) ?? wholeState(text, read),
       readParts: (state, first, last) => itemsInPlace(state, first, last, read),
-      readFrame: () => undefined,
+      readFrame: (state) => frameOf(state, read),
       readWhole: (text) => findingsOf(analyzeDocument(wholeText(text), "yaml", read)),
     },
     step,
   );
+}
+
+/**
+ * A text's list found by the quick pass, none of it read yet; undefined when the pass finds none.
+ * A list under an equation key is left to the whole reading (its strings are equations only
+ * there), and so is one under a key that names a column (emptied, the key would read otherwise).
+ */
+function openedState(text: ChunkedText): ListState | undefined {
+  const list = scanYamlList(text, (key) => !isEquationHeader(key) && columnUnder(key) === undefined);
+  if (!list) return undefined;
+  const { starts, tail } = list;
+  const ends = Int32Array.from(starts, (_, index) => (index + 1 < starts.length ? starts[index + 1] : tail));
+  return {
+    text,
+    starts,
+    ends,
+    partFindings: new Array<readonly Finding[] | undefined>(starts.length),
+    indent: list.indent,
+    frame: undefined,
+    tail,
+  };
+}
+
+/**
+ * The text around the list, read with the list's lines left out: its findings before the list
+ * and after it. Undefined unless it reads without errors.
+ */
+function frameOf(state: ListState, read: SpeciesReader): ListFrame | undefined {
+  const head = state.starts[0];
+  const frame = sliceOf(state.text, 0, head) + sliceOf(state.text, state.tail, state.text.length);
+  const documents = parseYamlStream(frame);
+  if (!documents || documents.some((document) => document.errors.length > 0)) return undefined;
+  const before: Finding[] = [];
+  const after: Finding[] = [];
+  for (const finding of findingsOf(analyzeYamlStream(frame, documents, read))) {
+    if (finding.code === "yaml-syntax" || finding.code === "document-unreadable") return undefined;
+    if (finding.range.start >= head) after.push(moved(finding, -head));
+    else if (finding.range.end <= head) before.push(finding);
+    else return undefined;
+  }
+  return { before, after };
 }
 
 /** Items `first`..`last` of `state` read alone: each one's findings; undefined unless they read cleanly where they lie. */
@@ -287,7 +334,7 @@ function itemsAlone(
   indent: number,
   read: SpeciesReader,
 ): { starts: number[]; findings: (readonly Finding[])[] } | undefined {
-  if (!isDashLine(stretch, 0, indent) || DOCUMENT_LINE.test(stretch) || nestingBound(stretch) > MAX_NESTING) return undefined;
+  if (!isDashLine(stretch, 0, indent) || DOCUMENT_LINE.test(stretch) || nestingBound(stretch, indent) > MAX_NESTING) return undefined;
   const documents = parseYamlStream(stretch);
   if (!documents || documents.length !== 1 || documents[0].errors.length > 0) return undefined;
   const list = documents[0].contents as Node | null;
@@ -303,11 +350,14 @@ function itemsAlone(
 }
 
 /**
- * A bound on how deep nodes nest in `text`: each level opens with a bracket, or on its line with
- * more indentation or an indicator (`-`, `?`, `:`). The reader stops at a depth the stack allows;
- * a stretch that could come near it is read whole, where that limit decides as it always does.
+ * A bound on how deep nodes nest in `text`, a run of items whose dashes are in column `indent`:
+ * in an item, each level opens with a bracket, or on its line with more indentation or an
+ * indicator (`-`, `?`, `:`); an item that reads cleanly closes what it opens, so the deepest item
+ * decides. The reader stops at a depth the stack allows; a stretch that could come near it is
+ * read whole, where that limit decides as it always does.
  */
-function nestingBound(text: string): number {
+function nestingBound(text: string, indent: number): number {
+  let deepest = 0;
   let opens = 0;
   let deepestLine = 0;
   let line = 0;
@@ -318,13 +368,19 @@ function nestingBound(text: string): number {
       deepestLine = Math.max(deepestLine, line);
       line = 0;
       atIndent = true;
+      // The next line opens an item: what this one opened is closed by now.
+      if (isDashLine(text, index + 1, indent)) {
+        deepest = Math.max(deepest, opens + deepestLine);
+        opens = 0;
+        deepestLine = 0;
+      }
       continue;
     }
     if (code !== SPACE) atIndent = false;
     if (atIndent || code === DASH || code === 0x3f || code === 0x3a) line++;
     else if (code === 0x5b || code === 0x7b) opens++;
   }
-  return opens + Math.max(deepestLine, line);
+  return Math.max(deepest, opens + Math.max(deepestLine, line));
 }
 
 /** The problems and checks' findings of a model, in document order (the plain path's order). */
