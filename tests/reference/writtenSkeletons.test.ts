@@ -244,6 +244,20 @@ const CENTRES: readonly (readonly [written: string, centres: readonly string[], 
   ["BH2", ["B AX2E1 bent"], "Herzberg"],
   ["CH3", ["C AX3 trigonal planar"], "Herzberg"],
   ["HBO", ["B AX2 linear"], "Herzberg"],
+  // from memory: Anslyn & Dougherty, Modern Physical Organic Chemistry (radical geometry: the
+  // methyl radical is planar; fluorine and chlorine on the radical carbon make it pyramidal,
+  // CF3 most; CH2F stays close to planar; the silyl radical is pyramidal)
+  ["CF3", ["C AX3E1 trigonal pyramidal"], "Anslyn & Dougherty"],
+  ["CCl3", ["C AX3E1 trigonal pyramidal"], "Anslyn & Dougherty"],
+  ["CHF2", ["C AX3E1 trigonal pyramidal"], "Anslyn & Dougherty"],
+  ["CH2F", ["C AX3 trigonal planar"], "Anslyn & Dougherty"],
+  ["SiH3", ["Si AX3E1 trigonal pyramidal"], "Anslyn & Dougherty"],
+  // from memory: Anslyn & Dougherty (the tert-butyl radical is close to planar; beside a C=C the
+  // odd electron spreads over the allyl pi system, which is planar)
+  ["C(CH3)3", ["C AX3 trigonal planar", "C AX4 tetrahedral", "C AX4 tetrahedral", "C AX4 tetrahedral"], "Anslyn & Dougherty"],
+  ["CF2CF=CF2", ["C AX3 trigonal planar", "C AX3 trigonal planar", "C AX3 trigonal planar"], "Anslyn & Dougherty"],
+  // from memory: Herzberg (the ammonia radical cation NH3+ is planar, like the methyl radical)
+  ["NH3+", ["N AX3 trigonal planar"], "Herzberg"],
 ];
 
 describe("centres of halogen compounds, oxoacids and small radicals", () => {
@@ -281,6 +295,8 @@ describe("centres of halogen compounds, oxoacids and small radicals", () => {
   it.each([
     ["HCO", "counted as a domain"],
     ["CH3", "not counted as a domain"],
+    ["CF3", "more electronegative than it"],
+    ["CCl3", "the atom is pyramidal"],
   ])("%s explains its odd electron (%s)", (written, phrase) => {
     const result = analyzeSpecies(written);
     expect(result.ok).toBe(true);

@@ -8,6 +8,7 @@ import type { LewisStructure } from "../lewis/chooseLewisStructure";
 import type { CentreAnalysis, PolarityVerdict, SpeciesAnalysis, SpeciesReading } from "../types";
 import { describeCentre, type CentreDetail, type SharedCentreDetail } from "../vsepr/analyzeCentre";
 import { measuredAnglesFor } from "../vsepr/measuredAngles";
+import { oddElectronSite, type OddElectronSite } from "../vsepr/oddElectron";
 import { judgePolarity } from "../vsepr/polarity";
 import { polarityFromShape, shapeOf } from "./shape3d";
 
@@ -81,7 +82,7 @@ export function buildAnalysis(
     const symbol = atoms[holder]?.symbol ?? "one atom";
     warnings.push(
       `Odd number of valence electrons (${structure.valenceElectrons}): a radical, with the unpaired electron drawn on ${symbol}. ` +
-        oddElectronNote(symbol, descriptions[indices.indexOf(holder)]),
+        oddElectronNote(symbol, descriptions[indices.indexOf(holder)], holder < 0 ? undefined : oddElectronSite(graph, holder)),
     );
   }
   if (expandedOctet && allStericFourOrLess) {
@@ -138,16 +139,23 @@ export function buildAnalysis(
  * How the shape counts the odd electron on a centre without lone pairs, where the count decides
  * the shape; elsewhere, the general caution.
  */
-function oddElectronNote(symbol: string, holder: CentreAnalysis | undefined): string {
+function oddElectronNote(symbol: string, holder: CentreAnalysis | undefined, site: OddElectronSite | undefined): string {
   const general = "The single electron is a weak domain, so small radicals can be flatter or wider than predicted.";
   if (holder === undefined || holder.lonePairs > 0) return general;
-  if (holder.bondingDomains === 2 && holder.stericNumber === 3) {
+  if (site === "two-neighbours" && holder.stericNumber === 3) {
     return (
       `With only two neighbours and no lone pair, ${symbol} keeps it in an orbital of its own, so it is counted as a domain ` +
       "(steric number 3) and bends the atom; a single electron repels less than a pair, so the real angle opens past the ideal."
     );
   }
-  if (holder.bondingDomains === 3 && holder.stericNumber === 3) {
+  if (site === "electronegative-neighbours" && holder.stericNumber === 4) {
+    return (
+      `The neighbours of ${symbol} are more electronegative than it and draw p character into their bonds, leaving the electron ` +
+      "an orbital with s character of its own: it is counted as a domain (steric number 4) and the atom is pyramidal, " +
+      "flatter than with a lone pair."
+    );
+  }
+  if (site === "p-orbital" && holder.bondingDomains === 3 && holder.stericNumber === 3) {
     return (
       `The three bonds of ${symbol} leave a p orbital free, and the electron sits there without a position of its own, ` +
       "so it is not counted as a domain and the atom is drawn flat; the real atom may pucker a little."

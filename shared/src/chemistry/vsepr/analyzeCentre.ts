@@ -5,6 +5,7 @@ import { graphIndex, ringAtoms } from "../graphIndex";
 import { atomTraits } from "../lewis/electronBookkeeping";
 import type { AngleExpectation, CentreAnalysis, MolecularGraph } from "../types";
 import { lonePairJoinsPiSystem } from "./piSystems";
+import { oddElectronSite, oddElectronTakesSite } from "./oddElectron";
 import { assignSites, type Ligand, type SiteAssignment } from "./assignSites";
 import { expectedAngles, idealAnglesFor, type AngleContext } from "./expectedAngles";
 import { axeNotation, ELECTRON_GEOMETRY_BY_STERIC_NUMBER, HYBRIDIZATION_BY_STERIC_NUMBER, molecularGeometryFor } from "./shapeTables";
@@ -57,11 +58,10 @@ export function describeCentre(graph: MolecularGraph, index: number, radical: bo
   // A lone pair shared with a neighbouring pi system (amide N, pyrrole N, furan O) sits in a
   // p orbital, so it takes no site of its own: the atom is sp2 and planar.
   const delocalised = lonePairJoinsPiSystem(graph, index) ? 1 : 0;
-  // An odd electron on an atom with three or more bonded neighbours and no lone pair sits in the
-  // p orbital they leave over and takes no site: the methyl radical is planar. Next to lone pairs
-  // (NO2, ClO2), or on an atom with only two neighbours (HCO, BH2), it sits in an orbital with s
-  // character and counts as a (weak) domain: H-C=O is bent, not linear.
-  const oddElectronDomain = atom.unpairedElectrons > 0 && (atom.lonePairs > 0 || ligands.length < 3) ? 1 : 0;
+  // An odd electron takes a (weak) site of its own beside lone pairs (NO2), on a two-neighbour
+  // atom (HCO is bent) or among electronegative neighbours (CF3 is pyramidal); the methyl
+  // radical keeps it in a p orbital and stays planar.
+  const oddElectronDomain = oddElectronTakesSite(oddElectronSite(graph, index)) ? 1 : 0;
   const loneDomains = atom.lonePairs - delocalised + oddElectronDomain;
   const stericNumber = ligands.length + loneDomains;
   const electronGeometry = ELECTRON_GEOMETRY_BY_STERIC_NUMBER[stericNumber];
@@ -91,6 +91,7 @@ export function describeCentre(graph: MolecularGraph, index: number, radical: bo
       traits.element.atomicNumber,
       atom.lonePairs,
       atom.unpairedElectrons,
+      oddElectronDomain,
       delocalised,
       radical,
       multipleBondCount,
@@ -186,6 +187,7 @@ function centreKey(
   atomicNumber: number,
   lonePairs: number,
   unpairedElectrons: number,
+  oddElectronDomain: number,
   delocalised: number,
   radical: boolean,
   multipleBondCount: number,
@@ -200,6 +202,8 @@ function centreKey(
   let facts = atomicNumber;
   facts = facts * 8 + lonePairs;
   facts = facts * 2 + unpairedElectrons;
+  // Whether the odd electron takes a site can turn on the neighbours' neighbours (a pi system).
+  facts = facts * 2 + oddElectronDomain;
   facts = facts * 2 + delocalised;
   facts = facts * 2 + (radical ? 1 : 0);
   facts = facts * 8 + multipleBondCount;
