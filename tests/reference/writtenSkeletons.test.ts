@@ -193,6 +193,9 @@ const WRITTEN: readonly (readonly [written: string, smiles: string, source: stri
   // oxoborane HBO is H-B-O, isoelectronic with HCN
   ["HCO", "[CH]=O", "Herzberg"],
   ["HBO", "[BH]=O", "Herzberg"],
+  // from memory: Greenwood & Earnshaw (metaboric acid monomer H-O-B=O)
+  ["HBO2", "OB=O", "Greenwood & Earnshaw"],
+  ["HOBO", "OB=O", "Greenwood & Earnshaw"],
 ];
 
 describe("the skeleton a written formula stands for", () => {
@@ -244,6 +247,8 @@ const CENTRES: readonly (readonly [written: string, centres: readonly string[], 
   ["BH2", ["B AX2E1 bent"], "Herzberg"],
   ["CH3", ["C AX3 trigonal planar"], "Herzberg"],
   ["HBO", ["B AX2 linear"], "Herzberg"],
+  // from memory: Greenwood & Earnshaw (HOBO: O-B-O linear, B-O-H bent)
+  ["HBO2", ["B AX2 linear", "O AX2E2 bent"], "Greenwood & Earnshaw"],
   // from memory: Anslyn & Dougherty, Modern Physical Organic Chemistry (radical geometry: the
   // methyl radical is planar; fluorine and chlorine on the radical carbon make it pyramidal,
   // CF3 most; CH2F stays close to planar; the silyl radical is pyramidal)

@@ -40,4 +40,9 @@ export const REFERENCE_LEWIS: readonly ReferenceLewisCase[] = [
   { species: "NH2OH", smiles: "NO" },
   { species: "HCOOH", smiles: "OC=O" },
   { species: "CH2Cl2", smiles: "ClCCl" },
+  // from memory: Greenwood & Earnshaw (gaseous metaboric acid is H-O-B=O, boron three-bonded like
+  // boric acid's, no charges); the SMILES is checked by RDKit like the others
+  { species: "HBO2", smiles: "OB=O" },
+  { species: "HOBO", smiles: "OB=O" },
+  { species: "CH3OBO", smiles: "COB=O" },
 ];

@@ -214,11 +214,15 @@ export function createLewisSearch(): LewisSearch {
     // Boron with three neighbours may keep six electrons (BF3, B(OH)3): its one empty p orbital
     // is all it lacks. With two neighbours it would lack more than a spare orbital, and where a
     // neighbour can share a further pair it does: HBO is H-B≡O, BO2- is O=B=O⁻, as HCN and CO2.
+    // An OH, OR or NR2 group on it feeds the empty orbital as in boric acid, drawn without a
+    // charged double bond: metaboric acid is H-O-B=O with no formal charges.
     for (let position = 0; position < flexibleCount; position++) {
       const bond = flexibleBonds[position];
       for (const atom of [bondFrom[bond], bondTo[bond]]) {
         const t = traits[atom];
-        if (degree[atom] === 2 && t.element.group === 13 && t.element.period === 2) mustCompleteOf[atom] = 1;
+        if (degree[atom] === 2 && t.element.group === 13 && t.element.period === 2 && !hasDonorGroup(atom, symbols)) {
+          mustCompleteOf[atom] = 1;
+        }
       }
     }
 
@@ -304,6 +308,15 @@ export function createLewisSearch(): LewisSearch {
       );
     }
     return { atoms, bonds: graphBonds };
+  }
+
+  /** Whether an O or N bonded to `atom` has a neighbour of its own (B-OH, B-OR, B-NR2). */
+  function hasDonorGroup(atom: number, symbols: readonly string[]): boolean {
+    for (let bond = 0; bond < bondCount; bond++) {
+      const other = bondFrom[bond] === atom ? bondTo[bond] : bondTo[bond] === atom ? bondFrom[bond] : -1;
+      if (other >= 0 && (symbols[other] === "O" || symbols[other] === "N") && degree[other] >= 2) return true;
+    }
+    return false;
   }
 
   function blocksMultipleBond(traits: readonly AtomTraits[], atom: number): boolean {
