@@ -283,9 +283,12 @@ const IONS: readonly Row[] = [
   ["hypochlorite", "ClO", -1],
   ["perbromate", "BrO4", -1],
   ["bromate", "BrO3", -1],
+  // from memory: Greenwood & Earnshaw, Chemistry of the Elements (halogen oxoanions)
+  ["bromite", "BrO2", -1],
   ["hypobromite", "BrO", -1],
   ["periodate", "IO4", -1],
   ["iodate", "IO3", -1],
+  ["hypoiodite", "IO", -1],
   ["phosphate", "PO4", -3],
   ["hydrogen phosphate", "HPO4", -2],
   ["dihydrogen phosphate", "H2PO4", -1],
@@ -414,6 +417,76 @@ describe("the name vocabulary", () => {
     ["propan-2-ol", "isopropanol"],
   ])("%j reads with the name %s", (written, name) => {
     expect(read(written).name).toBe(name);
+  });
+});
+
+describe("acids named after their anions", () => {
+  // from memory: Greenwood & Earnshaw, Chemistry of the Elements (the halogen oxoacids HOX, HXO2,
+  // HXO3, HXO4 and the other oxoacids of the main groups); each also analyses with H on O
+  it.each([
+    ["chlorous acid", "HClO2", "chlorous acid"],
+    ["hypochlorous acid", "HClO", "hypochlorous acid"],
+    ["chloric acid", "HClO3", "chloric acid"],
+    ["perchloric acid", "HClO4", "perchloric acid"],
+    ["hypobromous acid", "HBrO", "hypobromous acid"],
+    ["bromous acid", "HBrO2", "bromous acid"],
+    ["bromic acid", "HBrO3", "bromic acid"],
+    ["perbromic acid", "HBrO4", "perbromic acid"],
+    ["hypoiodous acid", "HIO", "hypoiodous acid"],
+    ["iodic acid", "HIO3", "iodic acid"],
+    ["periodic acid", "HIO4", "periodic acid"],
+    ["metaboric acid", "HBO2", "metaboric acid"],
+    ["selenic acid", "H2SeO4", "selenic acid"],
+    ["arsenic acid", "H3AsO4", "arsenic acid"],
+    ["Chlorous Acid", "HClO2", "chlorous acid"],
+  ])("%s is %s, shown as %s, with each H on O", (written, formula, shown) => {
+    const reading = read(written);
+    expect(sorted(compositionOf(reading))).toEqual(sorted(parseFormula(formula)));
+    expect(reading.charge).toBe(0);
+    expect(reading.name).toBe(shown);
+    const analysis = analyzeSpecies(written);
+    expect(analysis.ok, analysis.ok ? "" : analysis.problem.message).toBe(true);
+    if (!analysis.ok) return;
+    const { atoms, bonds } = analysis.value.graph;
+    for (const bond of bonds) {
+      const ends = [atoms[bond.from].symbol, atoms[bond.to].symbol];
+      if (ends.includes("H")) expect(ends, `${written}: every H on O`).toContain("O");
+    }
+  });
+
+  // from memory: Greenwood & Earnshaw (acids of the condensed and thio oxoanions)
+  it.each([
+    ["thiosulfuric acid", "H2S2O3"],
+    ["disulfurous acid", "H2S2O5"],
+    ["pyrophosphoric acid", "H4P2O7"],
+    ["dichromic acid", "H2Cr2O7"],
+  ])("%s reads as %s", (written, formula) => {
+    const reading = read(written);
+    expect(sorted(compositionOf(reading))).toEqual(sorted(parseFormula(formula)));
+    expect(reading.name).toBe(written);
+  });
+
+  // from memory: Greenwood & Earnshaw (the acid formula written H first is named like the name reads)
+  it.each([
+    ["HClO2", "chlorous acid"],
+    ["HBrO3", "bromic acid"],
+    ["HIO", "hypoiodous acid"],
+    ["HBO2", "metaboric acid"],
+  ])("the formula %s is named %s", (written, name) => {
+    expect(read(written).name).toBe(name);
+  });
+
+  // common practice: a fluoro- or chloro-complex anion's "acid" is a solution of the ion, and an
+  // acid of a trade name or a two-word anion is no name
+  it.each([
+    ["tetrafluoroboric acid"],
+    ["hexafluorophosphoric acid"],
+    ["metabisulfurous acid"],
+    ["hydrogen carbonic acid"],
+    ["ammonic acid"],
+  ])("%s is not read by the acid rule", (written) => {
+    const result = readSpecies(written);
+    expect(result.ok ? result.value.formula : result.problem.code).toBe("unknown-name");
   });
 });
 

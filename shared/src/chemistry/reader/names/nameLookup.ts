@@ -7,6 +7,7 @@ import { elementByName } from "../../elements";
 import type { FormulaPart } from "../../types";
 import { chargeText } from "../chargeText";
 import { readFormulaSpan } from "../readFormula";
+import { acidByName, acidNames } from "./acidNames";
 import { anionRootByName } from "./anionRoots";
 import { COMMON_NAMES } from "./commonNames";
 import { binaryCovalentName, formulaForCompoundName, usualCationCharge } from "./compoundNames";
@@ -89,6 +90,8 @@ function listedOrRuleName(name: string): NameMatch | undefined {
   // an element named as a substance ("zinc" granules, "sulfur" in an inventory)
   const element = elementByName(name);
   if (element !== undefined && !name.includes(" ")) return { formula: element.symbol, name: element.name.toLowerCase(), listed: true };
+  const acid = acidByName(name);
+  if (acid !== undefined) return { formula: acid.formula, name, listed: false };
   const compound = formulaForCompoundName(name.split(" "));
   if (compound !== undefined) return { formula: compound.formula, name: compound.systematicName ?? name, listed: false };
   const smiles = smilesForOrganicName(name);
@@ -166,6 +169,8 @@ function nameIndex(): NameIndex {
     ...NAMED_STRUCTURES.flatMap((entry): [string, string, boolean][] =>
       entry.formula === undefined ? [] : [[entry.name, entry.formula, false]],
     ),
+    // an acid named after its anion names its own written formula: HOCN is cyanic acid, HNCO is not
+    ...acidNames().map((acid): [string, string, boolean] => [acid.name, acid.formula, false]),
   ];
   for (const [name, formulaText, byParts] of entries) {
     const reading = readFormulaSpan(formulaText, 0, formulaText.length, "formula");

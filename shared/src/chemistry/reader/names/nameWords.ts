@@ -4,6 +4,7 @@
  * a phrase is a name, and which phrases hold a name but name no species ("lime water").
  */
 import { ELEMENTS, elementByName } from "../../elements";
+import { acidNames } from "./acidNames";
 import { ANION_ROOTS, anionRootByName } from "./anionRoots";
 import { GREEK_PREFIXES, joinPrefix } from "./greekPrefixes";
 import { oldCationNames } from "./metalCations";
@@ -65,6 +66,7 @@ function nameStartWords(): ReadonlySet<string> {
     words.add(space < 0 ? name : name.slice(0, space));
   };
   for (const name of listedNames()) addFirstWord(name);
+  for (const acid of acidNames()) addFirstWord(acid.name);
   for (const root of ANION_ROOTS) words.add(root.root);
   words.add("anhydrous");
   for (const phrase of NOT_SPECIES_PHRASES) addFirstWord(phrase);

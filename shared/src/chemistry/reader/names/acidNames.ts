@@ -1,0 +1,62 @@
+/**
+ * Acids named after their anions: an "-ate" anion gives the "-ic acid" and an "-ite" anion the
+ * "-ous acid", with one hydrogen for each negative charge (chlorite ClO2- -> chlorous acid HClO2,
+ * sulfate SO4 2- -> sulfuric acid H2SO4). The anions are the ones the ion vocabulary lists.
+ */
+import { ION_NAMES } from "./ionNames";
+
+export interface AcidName {
+  readonly name: string;
+  /** Formula with the hydrogens written first, as the acid is usually written (HClO2). */
+  readonly formula: string;
+}
+
+/** "chlorate" -> "chloric acid", "sulfite" -> "sulfurous acid"; undefined for other ion names. */
+function acidNameOf(ionName: string): string | undefined {
+  // Two-word ions (hydrogen sulfate), the "sulph" spelling (read as "sulf") and trade names
+  // (metabisulfite) name no acid of their own.
+  if (ionName.includes(" ") || ionName.includes("sulph") || ionName.includes("bisulf")) return undefined;
+  const ending = ionName.endsWith("ate") ? "ic" : ionName.endsWith("ite") ? "ous" : undefined;
+  if (ending === undefined) return undefined;
+  let stem = ionName.slice(0, -3);
+  // sulfate, phosphate: the acid takes the element's whole name (sulfuric, phosphoric)
+  if (stem.endsWith("sulf")) stem += "ur";
+  else if (stem.endsWith("phosph")) stem += "or";
+  return `${stem}${ending} acid`;
+}
+
+/**
+ * A halogen-bearing anion without oxygen (BF4-, PF6-, AlCl4-): its "acid" is the anion in an
+ * acidic solution, not a molecule with a shape of its own.
+ */
+function isHalideComplex(body: string): boolean {
+  return !/O(?![a-z])/.test(body) && /(?:F|Cl|Br|I)(?![a-z])/.test(body);
+}
+
+let acids: ReadonlyMap<string, AcidName> | undefined;
+
+function acidsByName(): ReadonlyMap<string, AcidName> {
+  if (acids !== undefined) return acids;
+  const byName = new Map<string, AcidName>();
+  for (const ion of ION_NAMES) {
+    // An anion that already holds hydrogen (acetate, dihydrogen phosphate) is written with its
+    // acid's own name and formula elsewhere; a cation names no acid.
+    if (ion.charge >= 0 || ion.body.includes("H") || isHalideComplex(ion.body)) continue;
+    const name = acidNameOf(ion.name);
+    if (name === undefined || byName.has(name)) continue;
+    const hydrogens = -ion.charge;
+    byName.set(name, { name, formula: `H${hydrogens > 1 ? hydrogens : ""}${ion.body}` });
+  }
+  acids = byName;
+  return byName;
+}
+
+/** The acid with this lower-case, single-spaced name ("chlorous acid"), or undefined. */
+export function acidByName(name: string): AcidName | undefined {
+  return name.endsWith(" acid") ? acidsByName().get(name) : undefined;
+}
+
+/** Every acid name the rule gives, for naming formulas and for spotting names in prose. */
+export function acidNames(): readonly AcidName[] {
+  return [...acidsByName().values()];
+}
