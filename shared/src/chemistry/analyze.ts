@@ -27,6 +27,7 @@ import { dottedAnalysis, metalIonComplexAnalysis, saltAnalysis } from "./analysi
 import { networkSolidFinding } from "./analysis/networkSolids";
 import { connectivitySignature } from "./analysis/connectivitySignature";
 import { matchName, normalizeName } from "./reader/names/nameLookup";
+import { splitReagentQualifiers } from "./reader/reagentQualifiers";
 
 // Bound: 20,000 analyses, the oldest generation forgotten first (see boundedMemo).
 const MEMO_LIMIT = 20_000;
@@ -282,5 +283,18 @@ export function analyzeTyped(text: string): AnalysisResult {
   const trimmed = text.trim();
   if (trimmed.slice(0, SMILES_MARKER.length).toLowerCase() === SMILES_MARKER)
     return analyzeSmiles(trimmed.slice(SMILES_MARKER.length).trim());
-  return analyzeSpecies(text);
+  const whole = analyzeSpecies(text);
+  // Text that reads as a species is that species; only unreadable text is tried without the
+  // grade, form or strength a reagent's label writes around its name.
+  if (whole.ok || whole.reading !== undefined) return whole;
+  const qualified = splitReagentQualifiers(text);
+  if (qualified === undefined) return whole;
+  const inner = analyzeSpecies(qualified.species);
+  if (!inner.ok) return inner.reading === undefined ? whole : inner;
+  const shown = inner.value.reading.name ?? inner.value.reading.formula;
+  const note = `Read as ${shown}: "${qualified.qualifiers}" says the reagent's grade, form or strength, not which species it is.`;
+  // Copy the property descriptors, not the values: centres and polarity stay worked out on first read.
+  const value = Object.defineProperties({}, Object.getOwnPropertyDescriptors(inner.value)) as SpeciesAnalysis;
+  Object.defineProperty(value, "warnings", { value: [...inner.value.warnings, note], enumerable: true });
+  return { ok: true, value };
 }

@@ -14,6 +14,7 @@ import { anionRootBySymbol } from "../../chemistry/reader/names/anionRoots";
 import { assumedCationCharge } from "../../chemistry/reader/names/metalCations";
 import { normalizeName } from "../../chemistry/reader/names/nameLookup";
 import { readSpecies } from "../../chemistry/reader/readSpecies";
+import { isQualifierTail } from "../../chemistry/reader/reagentQualifiers";
 import type { DocumentKind, Finding, NameBesideFormula, TextFix } from "../types";
 
 export const NAME_FORMULA_CODE = "table-name-formula";
@@ -99,42 +100,6 @@ function isConfidentName(pair: NameBesideFormula): boolean {
     if (!isQualifierTail(nameCell.text.slice(name.range.end - nameCell.range.start))) return false;
   }
   return !hasImpossibleCount(name.reading);
-}
-
-// common practice: words inventories and handouts write after a name for grade, form and strength
-const QUALIFIER_WORDS: ReadonlySet<string> = new Set(
-  (
-    "solution soln aqueous aq anhydrous anhyd dilute dil concentrated conc fuming glacial absolute abs " +
-    "reagent grade acs ar lr gr tech technical analytical laboratory lab pure puriss purified extra hplc " +
-    "crystals crystal crystalline powder powdered granules granular pellets pellet flakes flake beads turnings " +
-    "filings shot wire foil ribbon chips lumps pieces sticks rod rods sheet dust mossy metal gas liquid solid " +
-    "compressed liquefied cylinder bottle standard standardised standardized volumetric stock hydrate " +
-    "hydrated in water approx approximately ca min max for analysis under oil stabilised stabilized dry dried " +
-    "saturated sat satd fine coarse mesh approx. tablets"
-  ).split(" "),
-);
-
-// common practice: strengths as labels write them ("2 M", "37%", "0.1 mol/L", "30% w/w")
-const UNIT_WORDS: ReadonlySet<string> = new Set(
-  "% m mm n mol l g kg mg ml ppm w/w w/v v/v wt wt% vol% mol/l mol/dm3 mol/dm-3 dm-3 dm3 l-1 g/l mg/l".split(" "),
-);
-const STRENGTH = /^[~≈≥≤<>]?\d+(?:[.,]\d+)?(?:%|m|mm|n|ppm)?$/;
-/** A bracket that is part of a name or charge: "(III)", "(2+)". */
-const NAMING_BRACKET = /^\s*(?:[ivx]+|\d*[+\-\u2212]|[+\-\u2212]\d*)\s*$/i;
-
-function isQualifierTail(tail: string): boolean {
-  let naming = false;
-  const unbracketed = tail.replace(/[([]([^)\]]*)[)\]]/g, (_, inner: string) => {
-    if (NAMING_BRACKET.test(inner)) naming = true;
-    return " ";
-  });
-  if (naming || /[()[\]]/.test(unbracketed)) return false;
-  for (const token of unbracketed.toLowerCase().split(/[\s,;:]+/)) {
-    if (token.length === 0 || /^[-\u2013\u2014/&+]+$/.test(token)) continue;
-    const word = token.endsWith(".") ? token.slice(0, -1) : token;
-    if (!QUALIFIER_WORDS.has(word) && !UNIT_WORDS.has(word) && !STRENGTH.test(word)) return false;
-  }
-  return true;
 }
 
 /**
