@@ -180,6 +180,43 @@ describe("molecular species stay molecules", () => {
   });
 });
 
+describe("a metal halide drawn as its gas molecule says what its solid is", () => {
+  const SOLID_NOTE = "not made of separate molecules";
+  function warningsOf(written: string): string {
+    const result = analyzeSpecies(written);
+    expect(result.ok, written).toBe(true);
+    return result.ok ? result.value.warnings.join(" ") : "";
+  }
+
+  // from memory: Greenwood & Earnshaw, Chemistry of the Elements (solid BeCl2 is chains of
+  // edge-sharing BeCl4 tetrahedra, ZnCl2 a network of ZnCl4 tetrahedra, PbCl2 and PbF2 ionic
+  // lattices of high coordination, SnCl2 chains, AlCl3 and InCl3 layer lattices, GaCl3 Ga2Cl6
+  // pairs, TlCl the CsCl lattice)
+  it.each([
+    ["BeCl2"],
+    ["ZnCl2"],
+    ["ZnI2"],
+    ["PbCl2"],
+    ["PbF2"],
+    ["SnCl2"],
+    ["AlCl3"],
+    ["InCl3"],
+    ["GaCl3"],
+    ["TlCl"],
+    ["lead(II) chloride"],
+  ])("%s says its solid is not made of these molecules", (written) => {
+    expect(warningsOf(written)).toContain(SOLID_NOTE);
+    expect(warningsOf(written)).toContain("molecule in the gas");
+  });
+
+  // from memory: Greenwood & Earnshaw (HgCl2 crystals are linear molecules; SnCl4 and TiCl4 are
+  // molecular liquids; BiCl3 and SbCl3 crystals are pyramidal molecules; BF3 is a gas); a gas
+  // written as one is the gas; common practice: AlCl is no room-temperature solid
+  it.each([["HgCl2"], ["SnCl4"], ["BiCl3"], ["SbCl3"], ["BF3"], ["PbCl2(g)"], ["AlCl"]])("%s has no solid note", (written) => {
+    expect(warningsOf(written)).not.toContain(SOLID_NOTE);
+  });
+});
+
 describe("the command line says the same", () => {
   beforeAll(ensureBuilt);
 

@@ -20,6 +20,7 @@ import {
   type KnownStructure,
 } from "./analysis/structuresByFormula";
 import { metalCentreProblem } from "./analysis/metalCentre";
+import { gasMoleculeOfSolidNote } from "./analysis/metalHalideSolids";
 import { metallicElementProblem } from "./analysis/metallicElement";
 import { chooseRespelling } from "./analysis/respelling";
 import { oversaturationProblem } from "./analysis/saturation";
@@ -112,7 +113,10 @@ export function analyzeReading(reading: SpeciesReading): AnalysisResult {
     isomers !== undefined || !nameFitsStructure(reading, chosen.structure.graph, chosen.asWritten === true)
       ? withoutName(reading)
       : reading;
-  return { ok: true, value: buildAnalysis(named, chosen.structure, chosen.centre, isomers === undefined ? [] : [isomers]) };
+  const notes: string[] = isomers === undefined ? [] : [isomers];
+  const solid = gasMoleculeOfSolidNote(reading, chosen.structure.graph);
+  if (solid !== undefined) notes.push(solid);
+  return { ok: true, value: buildAnalysis(named, chosen.structure, chosen.centre, notes) };
 }
 
 /**
