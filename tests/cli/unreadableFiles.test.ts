@@ -92,6 +92,21 @@ describe("check reports what it cannot read", () => {
     expect(run.stdout).toBe("No findings in 0 files checked. 1 file or folder could not be read or fixed: see the messages above.\n");
   });
 
+  it.each([
+    ["run-14.md", Buffer.from("Run 14\nSF6 and NF3\u0000 on the line\n"), "it holds NUL bytes, so it looks like a binary file; skipped"],
+    [
+      "cylinders.ods",
+      Buffer.from("cylinder list"),
+      "not a markdown, text, LaTeX, AsciiDoc, reStructuredText, CSV/TSV, JSON or YAML file; skipped",
+    ],
+  ])("a file named on the command line and passed over says why (%s)", (name, bytes, why) => {
+    const folder = scratchFolder();
+    writeFileSync(join(folder, name), bytes);
+    const run = runCli(["check", name, "cylinders.csv"], folder);
+    expect(run.stderr).toBe(`lonepair check: ${name}: ${why}\n`);
+    expect(run.stdout).toContain("cylinders.csv:2:");
+  });
+
   it("files that are not documents (a binary, an image) are still passed over quietly", () => {
     const folder = scratchFolder();
     writeFileSync(join(folder, "spectrum.png"), Buffer.from([0x89, 0x50, 0x4e, 0x47, 0, 0, 0]));

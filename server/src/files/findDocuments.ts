@@ -47,9 +47,18 @@ export interface FoundDocuments {
    * In `path`, bytes that are not UTF-8 are written `\xHH`.
    */
   readonly unreadable: readonly UnreadablePath[];
-  /** Files named on the command line that are not documents lonepair reads. */
-  readonly skipped: readonly string[];
+  /** Files named on the command line that are not documents lonepair reads, and why. */
+  readonly skipped: readonly SkippedPath[];
 }
+
+/** A file named on the command line and passed over: `why` ends the line that says so. */
+export interface SkippedPath {
+  readonly path: string;
+  readonly why: string;
+}
+
+const NOT_A_DOCUMENT = "not a markdown, text, LaTeX, AsciiDoc, reStructuredText, CSV/TSV, JSON or YAML file; skipped";
+const LOOKS_BINARY = "it holds NUL bytes, so it looks like a binary file; skipped";
 
 /** A path that could not be read, and why, in plain words. */
 export interface UnreadablePath {
@@ -68,7 +77,7 @@ type ListedPath = string | Buffer;
 export type FoundItem =
   | { readonly kind: "document"; readonly file: DocumentFile }
   | { readonly kind: "unreadable"; readonly unreadable: UnreadablePath }
-  | { readonly kind: "skipped"; readonly path: string };
+  | { readonly kind: "skipped"; readonly skipped: SkippedPath };
 
 /**
  * Finds the documents under `paths`, in the order given, folders sorted, each file once. Never
@@ -77,11 +86,11 @@ export type FoundItem =
 export function findDocuments(paths: readonly string[], workingDirectory = process.cwd()): FoundDocuments {
   const files: DocumentFile[] = [];
   const unreadable: UnreadablePath[] = [];
-  const skipped: string[] = [];
+  const skipped: SkippedPath[] = [];
   for (const item of searchDocuments(paths, workingDirectory)) {
     if (item.kind === "document") files.push(item.file);
     else if (item.kind === "unreadable") unreadable.push(item.unreadable);
-    else skipped.push(item.path);
+    else skipped.push(item.skipped);
   }
   return { files, unreadable, skipped };
 }
@@ -111,7 +120,11 @@ export function* searchDocuments(paths: readonly string[], workingDirectory = pr
         return { kind: "unreadable", unreadable: { path: displayPathOf(absolute, workingDirectory), message: ioMessage(file.error) } };
       return undefined;
     }
-    return named ? { kind: "skipped", path: displayPathOf(absolute, workingDirectory) } : undefined;
+    if (!named) return undefined;
+    return {
+      kind: "skipped",
+      skipped: { path: displayPathOf(absolute, workingDirectory), why: file.kind === "binary" ? LOOKS_BINARY : NOT_A_DOCUMENT },
+    };
   };
   for (const path of paths) {
     const absolute = resolve(workingDirectory, path);
@@ -173,9 +186,11 @@ function comparePaths(a: ListedPath, b: ListedPath): number {
 type FileVerdict =
   | { readonly kind: "document"; readonly document: DocumentFile }
   | { readonly kind: "unreadable"; readonly error: unknown }
+  | { readonly kind: "binary" }
   | { readonly kind: "other" };
 
 const OTHER: FileVerdict = { kind: "other" };
+const BINARY: FileVerdict = { kind: "binary" };
 
 function documentFile(absolute: string, workingDirectory: string): FileVerdict {
   let size: number;
@@ -194,7 +209,7 @@ function documentFile(absolute: string, workingDirectory: string): FileVerdict {
   }
   const encoding = encodingOf(start);
   // NUL bytes mark a binary file, except in UTF-16, where every ASCII character has one.
-  if (encoding === "utf-8" && start.includes(0)) return OTHER;
+  if (encoding === "utf-8" && start.includes(0)) return BINARY;
   const text = encoding === "utf-8" ? start.toString("utf8") : new TextDecoder(encoding).decode(start);
   const kind = documentKindFor(absolute, undefined, text.slice(0, SNIFF_CHARACTERS));
   if (!kind) return OTHER;

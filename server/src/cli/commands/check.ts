@@ -64,10 +64,7 @@ async function runCheck(args: readonly string[], io: CliIo): Promise<number> {
   const found = findDocuments(positionals);
   for (const unreadable of found.unreadable)
     io.writeError(`lonepair check: ${terminalSafe(unreadable.path)}: ${terminalSafe(unreadable.message)}\n`);
-  for (const skipped of found.skipped)
-    io.writeError(
-      `lonepair check: ${terminalSafe(skipped)}: not a markdown, text, LaTeX, AsciiDoc, reStructuredText, CSV/TSV, JSON or YAML file; skipped\n`,
-    );
+  for (const skipped of found.skipped) io.writeError(`lonepair check: ${terminalSafe(skipped.path)}: ${skipped.why}\n`);
 
   const fixing = values.fix === true;
   const dryRun = values["dry-run"] === true;

@@ -35,10 +35,7 @@ async function runList(args: readonly string[], io: CliIo): Promise<number> {
   const found = findDocuments(parsed.positionals);
   for (const unreadable of found.unreadable)
     io.writeError(`lonepair list: ${terminalSafe(unreadable.path)}: ${terminalSafe(unreadable.message)}\n`);
-  for (const skipped of found.skipped)
-    io.writeError(
-      `lonepair list: ${terminalSafe(skipped)}: not a markdown, text, LaTeX, AsciiDoc, reStructuredText, CSV/TSV, JSON or YAML file; skipped\n`,
-    );
+  for (const skipped of found.skipped) io.writeError(`lonepair list: ${terminalSafe(skipped.path)}: ${skipped.why}\n`);
   let failed = found.unreadable.length > 0;
   const json = parsed.values.json === true;
   let written = 0;
