@@ -40,7 +40,7 @@ import { moved } from "./tables/delimitedFindings";
 import type { DocumentModel, Finding } from "./types";
 
 /** How many characters of a file just opened are read at a time: a few milliseconds' work. */
-const STEP_CHARACTERS = 48 * 1024;
+const STEP_CHARACTERS = 8 * 1024;
 
 /** A reader that keeps the last version's list; keep one per open document. */
 export function jsonListReader(read: SpeciesReader, step = STEP_CHARACTERS): ListReader {

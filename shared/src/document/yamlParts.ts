@@ -60,7 +60,7 @@ const SPACE = 0x20;
 const LINE_FEED = 0x0a;
 
 /** How many characters of a file just opened are read at a time: a few milliseconds' work. */
-const STEP_CHARACTERS = 16 * 1024;
+const STEP_CHARACTERS = 4 * 1024;
 
 /** A reader that keeps the last version's list; keep one per open document. */
 export function yamlListReader(read: SpeciesReader, step = STEP_CHARACTERS): ListReader {
