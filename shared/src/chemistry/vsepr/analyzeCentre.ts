@@ -81,6 +81,7 @@ export function describeCentre(graph: MolecularGraph, index: number, radical: bo
   }
   const bulkyNeighbours = heavierNeighbour || substitutedGroups >= 2;
   const ringSize = smallestRingThrough(graph, index, ligands);
+  const equalByResonance = bondsEqualByResonance(graph, ligands, neighbours);
 
   // Everything below depends only on these facts, so centres alike in them (the many CH2 and
   // aromatic CH of a large molecule) share one worked-out description.
@@ -97,6 +98,7 @@ export function describeCentre(graph: MolecularGraph, index: number, radical: bo
       multipleBondCount,
       bulkyNeighbours,
       ringSize,
+      equalByResonance,
       ligands,
     );
     if (memoKey !== undefined) {
@@ -107,7 +109,9 @@ export function describeCentre(graph: MolecularGraph, index: number, radical: bo
 
   const sites = assignSites(electronGeometry, loneDomains, ligands);
   const first = ligands[0];
-  const identicalNeighbours = ligands.every((l) => l.symbol === first.symbol && l.bondOrder === first.bondOrder);
+  // Bonds resonance makes equal count as identical: NO3- has three equal N-O bonds, not one
+  // double bond pushing two single ones together.
+  const identicalNeighbours = equalByResonance || ligands.every((l) => l.symbol === first.symbol && l.bondOrder === first.bondOrder);
   let loneX = 0;
   let loneY = 0;
   let loneZ = 0;
@@ -125,7 +129,7 @@ export function describeCentre(graph: MolecularGraph, index: number, radical: bo
     lonePairsBalanced: loneDomains > 0 && Math.hypot(loneX, loneY, loneZ) < 1e-9 && atom.unpairedElectrons === 0,
     centrePeriod: traits.element.period,
     identicalNeighbours,
-    hasMultipleBond: ligands.some((l) => l.bondOrder > 1),
+    hasMultipleBond: !equalByResonance && ligands.some((l) => l.bondOrder > 1),
     multipleBondCount,
     bulkyNeighbours,
     radical,
@@ -193,6 +197,7 @@ function centreKey(
   multipleBondCount: number,
   bulkyNeighbours: boolean,
   ringSize: number | undefined,
+  equalByResonance: boolean,
   ligands: readonly Ligand[],
 ): CentreKey | undefined {
   if (ligands.length > MAX_KEYED_LIGANDS || lonePairs > 7 || unpairedElectrons > 1 || multipleBondCount > 7) return undefined;
@@ -209,6 +214,7 @@ function centreKey(
   facts = facts * 8 + multipleBondCount;
   facts = facts * 2 + (bulkyNeighbours ? 1 : 0);
   facts = facts * 4 + ring;
+  facts = facts * 2 + (equalByResonance ? 1 : 0);
   let packed = 0;
   for (let k = 0; k < ligands.length; k++) {
     const ligand = ligands[k];
@@ -262,6 +268,29 @@ function countMultipleBondsWithResonance(graph: MolecularGraph, ligands: readonl
     else if (graph.atoms[ligand.atom].formalCharge < 0 && multiplyBondedElement(ligands, ligand.symbol)) count++;
   }
   return count;
+}
+
+/**
+ * Whether resonance makes every bond of a centre alike: its neighbours are all one element, each
+ * bonded to nothing else, and each is multiply bonded or a single-bonded anion beside a multiply
+ * bonded one (the O atoms of NO3-, CO3^2-, SO4^2-, O3), so the structures shift the multiple bond
+ * among them. Not when the bonds are already alike.
+ */
+function bondsEqualByResonance(graph: MolecularGraph, ligands: readonly Ligand[], neighbours: readonly (readonly Ligand[])[]): boolean {
+  const first = ligands[0];
+  let multiple = false;
+  let single = false;
+  for (let k = 0; k < ligands.length; k++) {
+    const ligand = ligands[k];
+    if (ligand.symbol !== first.symbol || neighbours[ligand.atom].length !== 1) return false;
+    if (ligand.bondOrder > 1) multiple = true;
+    else if (graph.atoms[ligand.atom].formalCharge < 0) single = true;
+    else return false;
+  }
+  if (!multiple || !single) return false;
+  // The multiple bonds must all be of one order (a double bond that moves, not a triple beside a double).
+  const order = ligands.find((ligand) => ligand.bondOrder > 1)!.bondOrder;
+  return ligands.every((ligand) => ligand.bondOrder === 1 || ligand.bondOrder === order);
 }
 
 function multiplyBondedElement(ligands: readonly Ligand[], symbol: string): boolean {
