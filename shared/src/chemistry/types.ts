@@ -109,6 +109,7 @@ export type ProblemCode =
   | "f-block-centre"
   | "superheavy-element"
   | "ionic-solid"
+  | "ions-in-solution"
   | "metallic-element"
   | "hydrate"
   | "adduct"

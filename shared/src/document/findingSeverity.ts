@@ -11,6 +11,7 @@ const OUTSIDE_THE_MODEL: ReadonlySet<ProblemCode> = new Set([
   "f-block-centre",
   "superheavy-element",
   "ionic-solid",
+  "ions-in-solution",
   "metallic-element",
   "hydrate",
   "adduct",

@@ -16,6 +16,8 @@ export function compositeKind(code: ProblemCode): CompositeKind {
   switch (code) {
     case "ionic-solid":
       return { noun: "ionic compound", partsLabel: "Ions" };
+    case "ions-in-solution":
+      return { noun: "ions in solution", partsLabel: "Ions" };
     case "hydrate":
       return { noun: "hydrate", partsLabel: "Parts" };
     case "adduct":

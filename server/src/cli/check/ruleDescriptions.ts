@@ -15,6 +15,7 @@ const DESCRIPTIONS: Readonly<Record<string, string>> = {
   "hydrogen-overbonded": "A hydrogen atom would need more than one bond.",
   "transition-metal-centre": "A transition-metal centre: VSEPR does not predict its shape.",
   "ionic-solid": "An ionic solid: it has no molecular shape; its polyatomic ions are analysed one by one.",
+  "ions-in-solution": "Ions in solution, such as an acid of a complex anion: no molecular shape; its polyatomic ions are analysed.",
   "metallic-element": "A lone metal symbol: the element as a metallic solid, with no molecular shape.",
   hydrate: "A hydrate: a salt or molecule with water of crystallisation; each part is analysed on its own.",
   adduct: "An adduct written with a dot: each part is analysed as a free species.",

@@ -17,6 +17,7 @@ import { ANION_ROOTS } from "../reader/names/anionRoots";
 import { ION_NAMES } from "../reader/names/ionNames";
 import { compositionKey } from "../vsepr/measuredAngles";
 import { prefixFor } from "../reader/names/greekPrefixes";
+import { acidNameOf } from "../reader/names/acidNames";
 
 /** How a part's formula is analysed: the memoised analysis of the whole core. */
 export type AnalyzeText = (text: string) => AnalysisResult;
@@ -31,13 +32,26 @@ export function saltAnalysis(reading: SpeciesReading, analyze: AnalyzeText): Ana
     shaped.length === 0
       ? "Monatomic ions have no shape of their own."
       : `${shaped.map((p) => `${p.formula}: ${partShapeText(p)}`).join("; ")}.`;
+  const name = reading.name ?? saltName(ions);
+  const named = name ? { ...reading, name } : reading;
+  if (ions.some(isHydrogenIon)) {
+    const anions = partsListText(parts.filter((p) => p.role === "anion"));
+    const message =
+      `${reading.formula} is not a molecule: the acid exists as solvated H^+ (H3O^+ in water and in its solid hydrates) ` +
+      `beside ${anions} ions, so it has no VSEPR shape as a whole. ${shapes}`;
+    return { ok: false, reading: named, problem: { code: "ions-in-solution", message }, parts };
+  }
   const covalent = covalentCharacterNote(reading.formula, reading.composition);
   const message =
     `${reading.formula} is an ionic compound of ${partsListText(parts)} ions: it forms a lattice of ions, ` +
     `not discrete molecules, so the compound as a whole has no VSEPR shape. ${shapes}` +
     (covalent ? ` ${covalent}` : metalSurroundingsNote(ions));
-  const name = reading.name ?? saltName(ions);
-  return { ok: false, reading: name ? { ...reading, name } : reading, problem: { code: "ionic-solid", message }, parts };
+  return { ok: false, reading: named, problem: { code: "ionic-solid", message }, parts };
+}
+
+/** The H+ of an acid whose anion is a halo complex (HBF4, H2PtCl6). */
+function isHydrogenIon(ion: SaltIon): boolean {
+  return ion.role === "cation" && ion.formula === "H^+";
 }
 
 /**
@@ -59,6 +73,11 @@ function metalSurroundingsNote(ions: readonly SaltIon[]): string {
  * two); undefined when a name is not known.
  */
 function saltName(ions: readonly SaltIon[]): string | undefined {
+  // "tetrachloroauric(III) acid" for H+ and tetrachloroaurate(III)
+  if (ions.length === 2 && isHydrogenIon(ions[0])) {
+    const anion = ionNameFor(ions[1].formula) ?? complexNameFor(ions[1]);
+    return anion === undefined ? undefined : acidNameOf(anion);
+  }
   const words: string[] = [];
   for (let k = 0; k < ions.length; k++) {
     const ion = ions[k];

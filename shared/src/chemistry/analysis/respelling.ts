@@ -10,6 +10,7 @@ const REAL_BUT_UNSHAPED: ReadonlySet<ProblemCode> = new Set([
   "transition-metal-centre",
   "f-block-centre",
   "ionic-solid",
+  "ions-in-solution",
   "metallic-element",
   "three-centre-bonding",
   "ambiguous-connectivity",

@@ -22,6 +22,7 @@ import type { FormulaPart, SpeciesReading } from "../types";
 import { compositionKey } from "../vsepr/measuredAngles";
 import { complexCharges, complexIon } from "./complexIons";
 import { chargesBeside, formsIonicBinarySalts, formsIonicLattice, metalIonCharges } from "./metalIonCharges";
+import { bareHaloComplexCharges, haloComplexParts } from "./haloComplexAnions";
 
 /** One ion of a salt with its count in one formula unit. */
 export interface SaltIon {
@@ -52,6 +53,8 @@ interface CationChoice {
   readonly monatomic: boolean;
   /** The metal's symbol; undefined for an onium ion, which forms ionic salts with every anion. */
   readonly metal?: string;
+  /** The acid's hydrogen, an ion only beside a halo-complex anion (HBF4, H2PtCl6). */
+  readonly hydrogen?: boolean;
   /** Units used. */
   readonly width: number;
 }
@@ -63,6 +66,8 @@ interface AnionChoice {
   readonly count: number;
   readonly charges: readonly number[];
   readonly monatomic: boolean;
+  /** A central atom holding only halides: BF4, PF6, AuCl4. */
+  readonly haloComplex: boolean;
 }
 
 /**
@@ -162,10 +167,11 @@ function collectTwoAnions(cation: CationChoice, rest: readonly WrittenUnit[], fo
   const firsts: AnionChoice[] = [];
   if (head.bracketed && !head.square) {
     const charges = ions().anions.get(key);
-    if (charges) firsts.push({ body: head.body, key, count: head.count, charges, monatomic: false });
+    if (charges) firsts.push({ body: head.body, key, count: head.count, charges, monatomic: false, haloComplex: isHaloComplex(head) });
   } else if (!head.bracketed) {
     const charge = MONATOMIC_ANION_CHARGE.get(head.body);
-    if (charge !== undefined) firsts.push({ body: head.body, key: head.body, count: head.count, charges: [charge], monatomic: true });
+    if (charge !== undefined)
+      firsts.push({ body: head.body, key: head.body, count: head.count, charges: [charge], monatomic: true, haloComplex: false });
   }
   for (const first of firsts) {
     for (const second of anionsOf(rest.slice(1))) {
@@ -222,6 +228,7 @@ function collect(written: readonly CationChoice[], anion: AnionChoice, found: Sa
 
 /** Whether the cation and the anion make an ionic lattice rather than covalent bonds. */
 function ionicWith(cation: CationChoice, anion: AnionChoice): boolean {
+  if (cation.hydrogen === true) return anion.haloComplex;
   if (cation.metal === undefined) return true;
   if (anion.monatomic) return formsIonicLattice(cation.metal, anion.key);
   if (COVALENT_WITH_D_METALS.has(anion.key) || S_BLOCK_ANIONS.has(anion.key)) return formsIonicBinarySalts(cation.metal);
@@ -269,6 +276,8 @@ function leadingCations(units: readonly WrittenUnit[]): CationChoice[] {
   if (onium) choices.push(onium);
   const complex = first.square ? complexIon(first.body) : undefined;
   if (complex) choices.push({ body: first.body, count: first.count, charges: complexCharges(complex, 1), monatomic: false, width: 1 });
+  if (!first.bracketed && first.body === "H")
+    choices.push({ body: "H", count: first.count, charges: [1], monatomic: true, hydrogen: true, width: 1 });
   return choices;
 }
 
@@ -323,30 +332,40 @@ function anionsOf(rest: readonly WrittenUnit[]): AnionChoice[] {
   if (rest.length === 1 && rest[0].bracketed) {
     const key = compositionKey(rest[0].composition, 0);
     const charges = ions().anions.get(key);
-    if (charges) choices.push({ body: rest[0].body, key, count: rest[0].count, charges, monatomic: false });
+    const haloComplex = isHaloComplex(rest[0]);
+    if (charges) choices.push({ body: rest[0].body, key, count: rest[0].count, charges, monatomic: false, haloComplex });
     const complex = rest[0].square ? complexIon(rest[0].body) : undefined;
-    if (complex) choices.push({ body: rest[0].body, key, count: rest[0].count, charges: complexCharges(complex, -1), monatomic: false });
+    if (complex)
+      choices.push({ body: rest[0].body, key, count: rest[0].count, charges: complexCharges(complex, -1), monatomic: false, haloComplex });
   }
   if (rest.length === 1 && !rest[0].bracketed) {
     const charge = MONATOMIC_ANION_CHARGE.get(rest[0].body);
     if (charge !== undefined)
-      choices.push({ body: rest[0].body, key: rest[0].body, count: rest[0].count, charges: [charge], monatomic: true });
+      choices.push({ body: rest[0].body, key: rest[0].body, count: rest[0].count, charges: [charge], monatomic: true, haloComplex: false });
   }
   const whole = wholeAnion(rest);
   if (whole) choices.push(whole);
   return choices;
 }
 
-/** The units together, unbracketed, as one polyatomic anion: SO4, HCO3, Cr2O7, OCl, CH3COO. */
+/**
+ * The units together, unbracketed, as one polyatomic anion: SO4, HCO3, Cr2O7, OCl, CH3COO, and
+ * a halo complex of four to six halides (PtCl6 of K2PtCl6, AlF6 of Na3AlF6).
+ */
 function wholeAnion(rest: readonly WrittenUnit[]): AnionChoice | undefined {
   if (rest.length === 0 || rest.some((unit) => unit.bracketed)) return undefined;
   if (rest.length === 1 && rest[0].composition.length === 1 && rest[0].count === 1) return undefined;
   const composition = rest.flatMap((unit) => unit.composition.map((part) => ({ symbol: part.symbol, count: part.count * unit.count })));
   const key = compositionKey(composition, 0);
-  const charges = ions().anions.get(key);
-  if (!charges) return undefined;
+  const listed = ions().anions.get(key);
+  const charges = listed ?? bareHaloComplexCharges(composition);
+  if (charges.length === 0) return undefined;
   const body = rest.map((unit) => (unit.count === 1 ? unit.body : `${unit.body}${unit.count}`)).join("");
-  return { body, key, count: 1, charges, monatomic: false };
+  return { body, key, count: 1, charges, monatomic: false, haloComplex: haloComplexParts(composition) !== undefined };
+}
+
+function isHaloComplex(unit: WrittenUnit): boolean {
+  return haloComplexParts(unit.composition) !== undefined;
 }
 
 /**

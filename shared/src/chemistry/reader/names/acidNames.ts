@@ -11,26 +11,24 @@ export interface AcidName {
   readonly formula: string;
 }
 
-/** "chlorate" -> "chloric acid", "sulfite" -> "sulfurous acid"; undefined for other ion names. */
-function acidNameOf(ionName: string): string | undefined {
+/**
+ * "chlorate" -> "chloric acid", "sulfite" -> "sulfurous acid", "tetrachloroaurate(III)" ->
+ * "tetrachloroauric(III) acid"; undefined for other ion names.
+ */
+export function acidNameOf(ionName: string): string | undefined {
   // Two-word ions (hydrogen sulfate), the "sulph" spelling (read as "sulf") and trade names
   // (metabisulfite) name no acid of their own.
   if (ionName.includes(" ") || ionName.includes("sulph") || ionName.includes("bisulf")) return undefined;
-  const ending = ionName.endsWith("ate") ? "ic" : ionName.endsWith("ite") ? "ous" : undefined;
+  const open = ionName.endsWith(")") ? ionName.lastIndexOf("(") : -1;
+  const word = open > 0 ? ionName.slice(0, open) : ionName;
+  const numeral = open > 0 ? ionName.slice(open) : "";
+  const ending = word.endsWith("ate") ? "ic" : word.endsWith("ite") ? "ous" : undefined;
   if (ending === undefined) return undefined;
-  let stem = ionName.slice(0, -3);
+  let stem = word.slice(0, -3);
   // sulfate, phosphate: the acid takes the element's whole name (sulfuric, phosphoric)
   if (stem.endsWith("sulf")) stem += "ur";
   else if (stem.endsWith("phosph")) stem += "or";
-  return `${stem}${ending} acid`;
-}
-
-/**
- * A halogen-bearing anion without oxygen (BF4-, PF6-, AlCl4-): its "acid" is the anion in an
- * acidic solution, not a molecule with a shape of its own.
- */
-function isHalideComplex(body: string): boolean {
-  return !/O(?![a-z])/.test(body) && /(?:F|Cl|Br|I)(?![a-z])/.test(body);
+  return `${stem}${ending}${numeral} acid`;
 }
 
 let acids: ReadonlyMap<string, AcidName> | undefined;
@@ -41,7 +39,8 @@ function acidsByName(): ReadonlyMap<string, AcidName> {
   for (const ion of ION_NAMES) {
     // An anion that already holds hydrogen (acetate, dihydrogen phosphate) is written with its
     // acid's own name and formula elsewhere; a cation names no acid.
-    if (ion.charge >= 0 || ion.body.includes("H") || isHalideComplex(ion.body)) continue;
+    // A complex named with a Stock numeral (hexacyanoferrate(iii)) is listed for its salts only.
+    if (ion.charge >= 0 || ion.body.includes("H") || ion.name.includes("(")) continue;
     const name = acidNameOf(ion.name);
     if (name === undefined || byName.has(name)) continue;
     const hydrogens = -ion.charge;
