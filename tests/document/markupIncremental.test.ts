@@ -27,6 +27,17 @@ const LATEX_LINES = [
   "\\end{minted}",
   "Runs N1, N2 and P1, P2 below; the N2 extraction ran late.",
   "<!-- not a comment in LaTeX: CH5",
+  "\\iffalse",
+  "\\iffalse % draft: CH5",
+  "\\fi",
+  "\\fi NF3 after the fi",
+  "\\else",
+  "\\ifx\\draft\\relax CH5",
+  "inline \\iffalse CH5 \\else SF4 \\fi too",
+  "\\let\\ifdraft\\iffalse",
+  "\\begin{comment}",
+  "\\end{comment}",
+  "See \\url{https://example.org/a%20b} and SF6 % CH5",
   "",
 ];
 
@@ -122,6 +133,7 @@ describe("LaTeX, AsciiDoc and reStructuredText after random edits", () => {
   it.each([
     ["latex", 1],
     ["latex", 2],
+    ["latex", 3],
     ["asciidoc", 1],
     ["asciidoc", 2],
     ["restructuredtext", 1],

@@ -41,6 +41,31 @@ describe("LaTeX", () => {
     ["lstlisting", "\\begin{lstlisting}[language=Python]\ngas = 'CH5'\n\\end{lstlisting}\nBF3 after.\n", ["BF3"]],
     ["minted", "\\begin{minted}{python}\nCH5\n\\end{minted}\nBF3 after.\n", ["BF3"]],
     ["a line ending in :: is prose", "Run it like this::\n\n    SF4 in an indented line\n", ["SF4"]],
+    ["a comment environment", "SF4 first.\n\\begin{comment}\nCH5\n\n NF3\n\\end{comment}\nthen XeF4.\n", ["SF4", "XeF4"]],
+  ])("%s", (_, text, expected) => check("latex", text, expected));
+});
+
+describe("LaTeX conditionals that are never true", () => {
+  // from memory: The TeXbook, ch. 20 (\iffalse skips to its \fi or \else, counting the \if... nested
+  // in it; \iff is a relation, not a conditional); ifthen and etoolbox manuals (\ifthenelse{..}
+  // and \ifdefempty{..} take arguments and no \fi)
+  it.each([
+    ["a hidden paragraph", "SF4 first.\n\\iffalse\nOld draft: CH5.\n\\fi\nthen XeF4.\n", ["SF4", "XeF4"]],
+    ["across blank lines", "\\iffalse\nCH5\n\nstill CH5\n\n\\fi\n\nBF3 after.\n", ["BF3"]],
+    ["a nested conditional", "\\iffalse\n\\ifx\\a\\b CH5 \\fi\nstill CH5\n\\fi\nBF3 after.\n", ["BF3"]],
+    ["a nested \\ifnum with its own \\else", "\\iffalse\n\\ifnum1=1 CH5\\else CH5\\fi CH5\n\\fi\nBF3.\n", ["BF3"]],
+    ["\\iff is no conditional", "\\iffalse\n$a \\iff b$ CH5\n\\fi\nBF3 after.\n", ["BF3"]],
+    ["\\ifthenelse is no conditional", "\\iffalse\n\\ifthenelse{1=1}{CH5}{} CH5\n\\fi\nBF3 after.\n", ["BF3"]],
+    ["the \\else branch is typeset", "\\iffalse\nCH5\n\\else\nNF3 instead.\n\\fi\nBF3.\n", ["NF3", "BF3"]],
+    ["a \\fi in a comment does not close", "\\iffalse\n% \\fi\nCH5\n\\fi\nBF3 after.\n", ["BF3"]],
+    ["\\\\fi is a line break and text", "\\iffalse\nCH5\\\\fi CH5\n\\fi\nBF3 after.\n", ["BF3"]],
+    ["text after the \\fi on its line", "\\iffalse\nCH5\n\\fi NF3 is then read.\n", ["NF3"]],
+    ["never closed hides the rest", "SF4 first.\n\\iffalse\nCH5\n\nCH5\n", ["SF4"]],
+    ["a commented \\iffalse is nothing", "% \\iffalse\nSF4 stays.\n\\fi\n", ["SF4"]],
+    ["setting a switch is not a conditional", "\\let\\ifdraft\\iffalse\nSF4 stays. \\fi\n", ["SF4"]],
+    ["within one line", "SF4 and \\iffalse CH5 \\fi NF3.\n", ["SF4", "NF3"]],
+    ["within one line, with \\else", "\\iffalse CH5 \\else NF3 \\fi and BF3.\n", ["NF3", "BF3"]],
+    ["inside a paragraph", "The SF4 line.\n\\iffalse\nCH5\n\\fi\nThe NF3 line.\n", ["SF4", "NF3"]],
   ])("%s", (_, text, expected) => check("latex", text, expected));
 });
 

@@ -37,3 +37,49 @@ export function verbatimBlockEnd(text: string, lineStart: number, lineEnd: numbe
   const closeLineEnd = text.indexOf("\n", close);
   return closeLineEnd < 0 ? text.length : closeLineEnd + 1;
 }
+
+/** A line that opens a conditional that is never true: `\iffalse`, the usual way to hide a draft paragraph. */
+const FALSE_CONDITIONAL = /^[ \t]*\\iffalse(?![a-zA-Z@])/;
+
+/**
+ * A comment to the line's end, or a control sequence: a word (letters, and "@" as package code
+ * writes them) or one other character ("\\", "\%"). Read in order, so that an escaped "%" or a
+ * "\fi" in a comment is not taken for what it is not.
+ */
+const TEX_TOKEN = /%[^\n]*|\\(?:([a-zA-Z@]+)|[^a-zA-Z@])/g;
+
+/**
+ * When the line at `lineStart` opens `\iffalse`, where the text TeX skips ends: just past the
+ * `\fi` or `\else` that closes it (a `\else` branch is typeset), counting the conditionals nested
+ * inside; the text's end when it is never closed. Otherwise `lineStart`.
+ */
+export function falseConditionalEnd(text: string, lineStart: number, lineEnd: number): number {
+  const opening = FALSE_CONDITIONAL.exec(text.slice(lineStart, Math.min(lineEnd, lineStart + 200)));
+  if (!opening) return lineStart;
+  TEX_TOKEN.lastIndex = lineStart + opening[0].length;
+  let depth = 0;
+  for (let token = TEX_TOKEN.exec(text); token; token = TEX_TOKEN.exec(text)) {
+    const word = token[1];
+    if (word === undefined) continue;
+    if (word === "fi") {
+      if (depth === 0) return TEX_TOKEN.lastIndex;
+      depth--;
+    } else if (word === "else") {
+      if (depth === 0) return TEX_TOKEN.lastIndex;
+    } else if (isConditional(word, text, TEX_TOKEN.lastIndex)) depth++;
+  }
+  return text.length;
+}
+
+/**
+ * Whether `\word` opens a conditional that its own `\fi` closes (`\ifx`, `\ifnum`, `\ifdefined`,
+ * a `\newif` switch such as `\ifdraft`). `\iff` is the "if and only if" arrow, and a macro whose
+ * name starts with "if" and takes braced arguments (`\ifthenelse{...}`, `\ifdefempty{...}`)
+ * chooses between its arguments with no `\fi` (common practice).
+ */
+function isConditional(word: string, text: string, after: number): boolean {
+  if (!word.startsWith("if") || word === "iff") return false;
+  let position = after;
+  while (position < text.length && (text.charCodeAt(position) === 0x20 || text.charCodeAt(position) === 0x09)) position++;
+  return text.charCodeAt(position) !== 0x7b;
+}

@@ -5,7 +5,8 @@
  *
  * - Plain text: reStructuredText literal blocks and LaTeX verbatim environments, as they turn up
  *   in notes kept as .txt.
- * - LaTeX: verbatim-like environments (`verbatim`, `lstlisting`, `minted`, `comment`).
+ * - LaTeX: verbatim-like environments (`verbatim`, `lstlisting`, `minted`, `comment`), and text
+ *   hidden by `\iffalse ... \fi` (a line that opens it, to its `\fi` or `\else`).
  * - AsciiDoc: listing (`----`), literal (`....`), comment (`////`) and passthrough (`++++`)
  *   blocks; a `[source]`, `[listing]` or `[literal]` paragraph; a literal paragraph (its first
  *   line indented); block macros (`image::...[]`, `include::...[]`).
@@ -16,7 +17,7 @@
  * Comments and verbatim spans inside a line (`% ...` and `\verb|...|` in LaTeX, `// ...` in
  * AsciiDoc) are blanked in a paragraph's text instead (`readableProse`), so that offsets hold.
  */
-import { verbatimBlockEnd } from "./latexCommands";
+import { falseConditionalEnd, verbatimBlockEnd } from "./latexCommands";
 import type { TextMarkup } from "./types";
 
 /** A block that is not prose, with offsets from the text's start; `end` is just past its last line break. */
@@ -44,7 +45,7 @@ export function markupBlockAt(text: string, line: MarkupLine, markup: TextMarkup
     case "plaintext":
       return verbatimBlock(text, line) ?? literalBlock(text, line, false);
     case "latex":
-      return verbatimBlock(text, line);
+      return verbatimBlock(text, line) ?? falseConditionalBlock(text, line);
     case "asciidoc":
       return asciidocBlock(text, line);
     case "restructuredtext":
@@ -59,6 +60,20 @@ function verbatimBlock(text: string, line: MarkupLine): MarkupBlock | undefined 
   if (!line.text.includes("\\begin{")) return undefined;
   const end = verbatimBlockEnd(text, line.start, line.end);
   return end > line.start ? { kind: "code", start: line.start, end } : undefined;
+}
+
+/**
+ * `\iffalse` to its `\fi`: TeX skips it, so it is a comment. The block ends with the line of its
+ * `\fi` (or `\else`), or just after it when the line goes on ("\fi\ SF6 is then ...").
+ */
+function falseConditionalBlock(text: string, line: MarkupLine): MarkupBlock | undefined {
+  if (!line.text.includes("\\iffalse")) return undefined;
+  const close = falseConditionalEnd(text, line.start, line.end);
+  if (close <= line.start) return undefined;
+  const closeLineEnd = endOfLine(text, close);
+  const restOfLine = text.slice(close, Math.min(closeLineEnd, close + 200));
+  const end = restOfLine.trim().length === 0 && closeLineEnd - close <= 200 ? Math.min(text.length, closeLineEnd + 1) : close;
+  return { kind: "code", start: line.start, end };
 }
 
 // ---------------------------------------------------------------------------------------------
@@ -217,7 +232,7 @@ function paragraphEnd(text: string, start: number): number {
 export function readableProse(source: string, markup: TextMarkup): string {
   switch (markup) {
     case "latex":
-      return source.includes("%") || source.includes("\\verb") || source.includes("inline")
+      return source.includes("%") || source.includes("\\verb") || source.includes("inline") || source.includes("\\iffalse")
         ? source.replace(LATEX_HIDDEN, (hidden: string, escapes: string | undefined) => {
             const kept = escapes?.length ?? 0;
             return hidden.slice(0, kept) + blank(hidden.slice(kept));
@@ -234,9 +249,11 @@ export function readableProse(source: string, markup: TextMarkup): string {
  * A LaTeX comment (a "%" after an even number of backslashes, to the line's end), `\verb|...|`
  * (any delimiter), `\lstinline|...|` or `\lstinline{...}`, and `\mintinline{lang}{...}`. The
  * first group keeps the backslashes before a "%" ("\\" is a line break, then the comment).
+ * `\iffalse ... \fi` (or `\else`) within one line is hidden too (a block of them is `falseConditionalBlock`'s),
+ * unless it is what a switch is set to (`\let\ifdraft\iffalse`).
  */
 const LATEX_HIDDEN =
-  /(?<!\\)((?:\\\\)*)%.*$|\\(?:verb\*?|lstinline(?:\[[^\]\n]*\])?)(?:\{[^}\n]*\}|([^\sa-zA-Z{*])[^\n]*?\2)|\\mintinline(?:\[[^\]\n]*\])?\{[^}\n]*\}(?:\{[^}\n]*\}|([^\sa-zA-Z{])[^\n]*?\3)/gm;
+  /(?<!\\)((?:\\\\)*)%.*$|(?<!\\let\s*\\[a-zA-Z@]+\s*=?\s*)\\iffalse(?![a-zA-Z@])[^\n]*?\\(?:fi|else)(?![a-zA-Z@])|\\(?:verb\*?|lstinline(?:\[[^\]\n]*\])?)(?:\{[^}\n]*\}|([^\sa-zA-Z{*])[^\n]*?\2)|\\mintinline(?:\[[^\]\n]*\])?\{[^}\n]*\}(?:\{[^}\n]*\}|([^\sa-zA-Z{])[^\n]*?\3)/gm;
 
 function blank(hidden: string): string {
   return hidden.replace(/[^\n]/g, " ");
