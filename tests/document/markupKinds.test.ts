@@ -69,6 +69,17 @@ describe("LaTeX conditionals that are never true", () => {
   ])("%s", (_, text, expected) => check("latex", text, expected));
 });
 
+describe("LaTeX addresses", () => {
+  // from memory: hyperref manual (\url and \href take "%" and "#" in the address as typed)
+  it.each([
+    ["a %20 in \\url", "See \\url{https://example.org/a%20b} and SF6.\n", ["SF6"]],
+    ["a % in \\href", "See \\href{https://example.org/%7Ekr}{the NF3 page} and BF3.\n", ["NF3", "BF3"]],
+    ["\\href with options", "See \\href[pdfnewwindow]{https://x.org/a%20b}{notes}, XeF2.\n", ["XeF2"]],
+    ["a comment after an address", "See \\url{https://x.org/a%20b} % CH5\nSF6.\n", ["SF6"]],
+    ["a formula in the address is no mention", "See \\url{https://x.org/CH5%20data} and SF6.\n", ["SF6"]],
+  ])("%s", (_, text, expected) => check("latex", text, expected));
+});
+
 describe("AsciiDoc", () => {
   // from memory: AsciiDoc language documentation (delimited blocks, block styles, literal paragraphs, comments)
   it.each([

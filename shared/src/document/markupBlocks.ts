@@ -234,6 +234,7 @@ export function readableProse(source: string, markup: TextMarkup): string {
     case "latex":
       return source.includes("%") || source.includes("\\verb") || source.includes("inline") || source.includes("\\iffalse")
         ? source.replace(LATEX_HIDDEN, (hidden: string, escapes: string | undefined) => {
+            if (ADDRESS.test(hidden)) return hidden;
             const kept = escapes?.length ?? 0;
             return hidden.slice(0, kept) + blank(hidden.slice(kept));
           })
@@ -250,10 +251,15 @@ export function readableProse(source: string, markup: TextMarkup): string {
  * (any delimiter), `\lstinline|...|` or `\lstinline{...}`, and `\mintinline{lang}{...}`. The
  * first group keeps the backslashes before a "%" ("\\" is a line break, then the comment).
  * `\iffalse ... \fi` (or `\else`) within one line is hidden too (a block of them is `falseConditionalBlock`'s),
- * unless it is what a switch is set to (`\let\ifdraft\iffalse`).
+ * unless it is what a switch is set to (`\let\ifdraft\iffalse`). An address in `\url{...}` or
+ * `\href{...}` is matched only to be kept: a "%" in it ("a%20b") is part of the address, not a
+ * comment (common practice: the URL commands read their argument as typed).
  */
 const LATEX_HIDDEN =
-  /(?<!\\)((?:\\\\)*)%.*$|(?<!\\let\s*\\[a-zA-Z@]+\s*=?\s*)\\iffalse(?![a-zA-Z@])[^\n]*?\\(?:fi|else)(?![a-zA-Z@])|\\(?:verb\*?|lstinline(?:\[[^\]\n]*\])?)(?:\{[^}\n]*\}|([^\sa-zA-Z{*])[^\n]*?\2)|\\mintinline(?:\[[^\]\n]*\])?\{[^}\n]*\}(?:\{[^}\n]*\}|([^\sa-zA-Z{])[^\n]*?\3)/gm;
+  /(?<!\\)((?:\\\\)*)%.*$|(?<!\\let\s*\\[a-zA-Z@]+\s*=?\s*)\\iffalse(?![a-zA-Z@])[^\n]*?\\(?:fi|else)(?![a-zA-Z@])|\\(?:url|nolinkurl|href(?:\[[^\]\n]*\])?)\{[^}\n]*\}|\\(?:verb\*?|lstinline(?:\[[^\]\n]*\])?)(?:\{[^}\n]*\}|([^\sa-zA-Z{*])[^\n]*?\2)|\\mintinline(?:\[[^\]\n]*\])?\{[^}\n]*\}(?:\{[^}\n]*\}|([^\sa-zA-Z{])[^\n]*?\3)/gm;
+
+/** The start of an address command, kept whole by `readableProse`. */
+const ADDRESS = /^\\(?:url|nolinkurl|href)(?![a-zA-Z])/;
 
 function blank(hidden: string): string {
   return hidden.replace(/[^\n]/g, " ");
