@@ -29,7 +29,7 @@ export type { MolfileResult } from "./chemistry/formats/molfile";
 
 // Documents: finding species in text and tables, and checking what they claim.
 export { analyzeDocument } from "./document/analyzeDocument";
-export { analyzeOccurrence } from "./document/analyzeOccurrence";
+export { analyzeOccurrence, speciesTextOf } from "./document/analyzeOccurrence";
 export { analyzeOccurrenceSafely, internalErrorProblem, occurrenceAt, speciesAtOffset } from "./document/speciesAt";
 export type { SpeciesAtOffset } from "./document/speciesAt";
 export { checkDocument } from "./document/checkDocument";

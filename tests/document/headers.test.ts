@@ -50,14 +50,27 @@ describe("meaningOfHeader", () => {
     ["polar?", "polarity"],
     ["Polarity", "polarity"],
     ["polar (y/n)", "polarity"],
+    ["Charge", "charge"],
+    ["net charge", "charge"],
+    ["Ionic charge (e)", "charge"],
+    ["ion_charge", "charge"],
   ])("%j means %s", (header, meaning) => {
     expect(meaningOfHeader(header)).toBe(meaning);
   });
 
-  it.each(["id", "cylinder", "supplier lot", "notes", "pressure / kPa", "room", "date", "dipole moment (D)"])(
-    "%j means nothing to the checks",
-    (header) => {
-      expect(meaningOfHeader(header)).toBeUndefined();
-    },
-  );
+  // A formal charge belongs to one atom and an oxidation state to one element: neither is the species' charge.
+  it.each([
+    "id",
+    "cylinder",
+    "supplier lot",
+    "notes",
+    "pressure / kPa",
+    "room",
+    "date",
+    "dipole moment (D)",
+    "formal charge",
+    "oxidation state",
+  ])("%j means nothing to the checks", (header) => {
+    expect(meaningOfHeader(header)).toBeUndefined();
+  });
 });

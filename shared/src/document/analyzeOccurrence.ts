@@ -11,5 +11,14 @@ export function analyzeOccurrence(
   occurrence: SpeciesOccurrence,
   analyze: (text: string) => AnalysisResult = analyzeSpecies,
 ): AnalysisResult {
-  return occurrence.reading.notation === "smiles" ? analyzeSmiles(occurrence.reading.text) : analyze(occurrence.text);
+  return occurrence.reading.notation === "smiles" ? analyzeSmiles(occurrence.reading.text) : analyze(speciesTextOf(occurrence));
+}
+
+/**
+ * The text that stands for the occurrence's species: what it is analysed from and what memos of
+ * analyses and cards are keyed by. The same written text may be two species ("NH4" beside a
+ * charge column, "NH4" in prose), so the written text alone is no key.
+ */
+export function speciesTextOf(occurrence: SpeciesOccurrence): string {
+  return occurrence.speciesText ?? occurrence.text;
 }

@@ -7,7 +7,7 @@
 import { analyzeSpecies } from "../chemistry/analyze";
 import { chooseRespelling } from "../chemistry/analysis/respelling";
 import type { AnalysisResult, Problem } from "../chemistry/types";
-import { analyzeOccurrence } from "./analyzeOccurrence";
+import { analyzeOccurrence, speciesTextOf } from "./analyzeOccurrence";
 import { nameFormulaChecker, type NameFormulaCheck } from "./checks/nameFormulaAgreement";
 import { checkRecord } from "./checks/recordChecks";
 import { severityOf } from "./findingSeverity";
@@ -31,7 +31,8 @@ const CHECKER_MEMO_LIMIT = 20_000;
 export function documentChecker(analyze: (text: string) => AnalysisResult = analyzeSpecies): (model: DocumentModel) => Finding[] {
   const memo = new Map<string, AnalysisResult>();
   const analysisOf = (occurrence: SpeciesOccurrence): AnalysisResult | undefined => {
-    let result = memo.get(occurrence.text);
+    const key = speciesTextOf(occurrence);
+    let result = memo.get(key);
     if (!result) {
       try {
         result = analyzeOccurrence(occurrence, analyze);
@@ -39,7 +40,7 @@ export function documentChecker(analyze: (text: string) => AnalysisResult = anal
         result = { ok: false, problem: { code: "no-valid-structure", message: String(error) } };
       }
       if (memo.size >= CHECKER_MEMO_LIMIT) memo.clear();
-      memo.set(occurrence.text, result);
+      memo.set(key, result);
     }
     return result;
   };
@@ -134,12 +135,10 @@ function problemFinding(occurrence: SpeciesOccurrence, problem: Problem, analyze
     problem.message.includes(occurrence.reading.formula) || problem.message.includes(occurrence.text)
       ? problem.message
       : `${occurrence.text}: ${problem.message}`;
-  return withSafeFix(
-    { range: occurrence.range, severity: severityOf(problem.code), code: problem.code, message },
-    occurrence.text,
-    problem,
-    analyze,
-  );
+  const finding: Finding = { range: occurrence.range, severity: severityOf(problem.code), code: problem.code, message };
+  // A respelling is worked out for the species text; the cell holds only part of it (the charge is in its own column).
+  if (occurrence.speciesText !== undefined) return finding;
+  return withSafeFix(finding, occurrence.text, problem, analyze);
 }
 
 /**

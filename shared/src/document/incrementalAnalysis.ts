@@ -17,6 +17,7 @@
  */
 import { analysedTextOf, MAX_ANALYSED_LENGTH } from "./analysedText";
 import { analyzeDocument } from "./analyzeDocument";
+import { speciesTextOf } from "./analyzeOccurrence";
 import { checkDocument } from "./checkDocument";
 import { placedParts, type FindingPart } from "./findingPart";
 import { findingsInParts } from "./findingsInParts";
@@ -149,7 +150,10 @@ function wholeAnalysis(
 
 function distinct(occurrences: Iterable<SpeciesOccurrence>): SpeciesOccurrence[] {
   const byText = new Map<string, SpeciesOccurrence>();
-  for (const occurrence of occurrences) if (!byText.has(occurrence.text)) byText.set(occurrence.text, occurrence);
+  for (const occurrence of occurrences) {
+    const key = speciesTextOf(occurrence);
+    if (!byText.has(key)) byText.set(key, occurrence);
+  }
   return [...byText.values()];
 }
 

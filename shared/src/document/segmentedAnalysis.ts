@@ -4,6 +4,7 @@
  * start and placed where it now lies; the cut made only as far as a request needs; and where two
  * versions of a chunked text differ.
  */
+import { speciesTextOf } from "./analyzeOccurrence";
 import { checkDocument } from "./checkDocument";
 import { chunkIndexAt, sliceOf, type ChunkedText } from "./chunkedText";
 import { placedParts, type FindingPart } from "./findingPart";
@@ -152,7 +153,8 @@ const DISTINCT_SPECIES_KEPT = 4096;
 export function remember(met: Map<string, SpeciesOccurrence>, occurrences: readonly SpeciesOccurrence[]): void {
   for (const occurrence of occurrences) {
     if (met.size >= DISTINCT_SPECIES_KEPT) break;
-    if (!met.has(occurrence.text)) met.set(occurrence.text, occurrence);
+    const key = speciesTextOf(occurrence);
+    if (!met.has(key)) met.set(key, occurrence);
   }
 }
 

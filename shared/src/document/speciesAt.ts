@@ -5,7 +5,7 @@
  * the reader refused.
  */
 import type { AnalysisResult, Problem, TextRange } from "../chemistry/types";
-import { analyzeOccurrence } from "./analyzeOccurrence";
+import { analyzeOccurrence, speciesTextOf } from "./analyzeOccurrence";
 import type { DocumentModel, SpeciesOccurrence } from "./types";
 
 /** The narrowest occurrence containing `offset` (occurrences are in document order). */
@@ -19,8 +19,9 @@ export function occurrenceAt(occurrences: readonly SpeciesOccurrence[], offset: 
   return best;
 }
 
-/** A species mention at a position: its text as written, where it is, and what the core makes of it. */
+/** A species mention at a position: its species text, where it is, and what the core makes of it. */
 export interface SpeciesAtOffset {
+  /** The text as written, or the species it stands for in its row (`speciesTextOf`). */
   readonly text: string;
   readonly range: TextRange;
   /** Set for a readable mention; absent for text the reader refused. */
@@ -31,7 +32,9 @@ export interface SpeciesAtOffset {
 /** The species at `offset` in `model`, readable or refused, or undefined where there is none. */
 export function speciesAtOffset(model: DocumentModel, offset: number): SpeciesAtOffset | undefined {
   const occurrence = occurrenceAt(model.occurrences, offset);
-  if (occurrence) return { text: occurrence.text, range: occurrence.range, occurrence, analysis: analyzeOccurrenceSafely(occurrence) };
+  if (occurrence) {
+    return { text: speciesTextOf(occurrence), range: occurrence.range, occurrence, analysis: analyzeOccurrenceSafely(occurrence) };
+  }
   const unreadable = model.unreadable?.find((item) => item.range.start <= offset && offset <= item.range.end);
   if (!unreadable) return undefined;
   return { text: unreadable.text, range: unreadable.range, analysis: { ok: false, problem: unreadable.problem } };

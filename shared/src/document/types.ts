@@ -24,6 +24,12 @@ export interface SpeciesOccurrence {
    * shown in hovers and tables, never the subject of a finding.
    */
   readonly inferred?: true;
+  /**
+   * The species text analysed, when the row says more than the cell: a formula cell "NH4" in a
+   * row whose charge column says +1 is the species "NH4^+". Absent when the text as written is
+   * the species. Analyses, hover cards and memos go by `speciesTextOf`, never by `text` alone.
+   */
+  readonly speciesText?: string;
 }
 
 /** What a table column (or a record key) holds, recognised from its header. */
@@ -33,6 +39,8 @@ export type ColumnMeaning =
   | "smiles"
   /** Another species the row's species is made of: its cation or anion. Spotted, never checked against the row. */
   | "constituent"
+  /** The row species' net charge, written apart from its formula ("+1", "2-", "−2", "0"). */
+  | "charge"
   | "valenceElectrons"
   | "lonePairs"
   | "axe"

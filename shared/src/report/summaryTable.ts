@@ -4,6 +4,7 @@
  */
 import type { AnalysisResult, CentreAnalysis, LatticeSite, SpeciesAnalysis, SpeciesPart, SpeciesReading } from "../chemistry/types";
 import { partShapeText, resultShapeText } from "../chemistry/analysis/partShapes";
+import { speciesTextOf } from "../document/analyzeOccurrence";
 import { analyzeOccurrenceSafely } from "../document/speciesAt";
 import type { SpeciesOccurrence } from "../document/types";
 import { NETWORK_SOLID_NOUN, compositeKind, leafParts } from "./compositeParts";
@@ -313,7 +314,7 @@ export function createSummaryCollector(): SummaryCollector {
     }
   };
   return {
-    addOccurrence: (occurrence) => addResult(occurrence.text, analyzeOccurrenceSafely(occurrence)),
+    addOccurrence: (occurrence) => addResult(speciesTextOf(occurrence), analyzeOccurrenceSafely(occurrence)),
     addResult,
     analyses,
     unanalysed,

@@ -11,6 +11,7 @@ import {
   createHoverCardMemo,
   reactionAtOffset,
   reactionCard,
+  speciesTextOf,
   type HoverCardMemo,
   type SpeciesOccurrence,
 } from "../../../../shared/src/index";
@@ -136,14 +137,15 @@ export function registerHover(
       const seen = new Set<string>();
       for (const occurrence of occurrencesInViewFirst(analysed, inView.get(uri))) {
         if (seen.size >= PREPARED_CARDS_LIMIT) break;
-        if (seen.has(occurrence.text)) continue;
-        seen.add(occurrence.text);
+        const text = speciesTextOf(occurrence);
+        if (seen.has(text)) continue;
+        seen.add(text);
         const result = analyzeOccurrenceSafely(occurrence);
         // Large SMILES species get their cards on the worker thread when hovered; a plain
         // refusal's card is a sentence, quick to write when asked.
         if (result.ok ? isLargeSmiles(result.value) : !result.parts) continue;
-        if (cards.known(occurrence.text, result, options) !== undefined) continue;
-        cards.card(occurrence.text, result, options);
+        if (cards.known(text, result, options) !== undefined) continue;
+        cards.card(text, result, options);
         // One card at a time: a request or an edit that came meanwhile goes first.
         await context.longWork.giveWay();
         if (superseded()) return;

@@ -15,6 +15,7 @@ import { assumedCationCharge } from "../../chemistry/reader/names/metalCations";
 import { normalizeName } from "../../chemistry/reader/names/nameLookup";
 import { readSpecies } from "../../chemistry/reader/readSpecies";
 import { isQualifierTail } from "../../chemistry/reader/reagentQualifiers";
+import { speciesTextOf } from "../analyzeOccurrence";
 import type { DocumentKind, Finding, NameBesideFormula, TextFix } from "../types";
 
 export const NAME_FORMULA_CODE = "table-name-formula";
@@ -46,7 +47,7 @@ const VERDICT_LIMIT = 20_000;
 export function nameFormulaChecker(): NameFormulaCheck {
   const verdicts = new Map<string, boolean>();
   return (pair, kind, formulaFitsRow) => {
-    const key = `${pair.name.text}\u0001${pair.nameCell.text}\u0001${pair.formula.text}`;
+    const key = `${speciesTextOf(pair.name)}\u0001${pair.nameCell.text}\u0001${speciesTextOf(pair.formula)}`;
     let disagrees = verdicts.get(key);
     if (disagrees === undefined) {
       disagrees = disagree(pair);
@@ -241,6 +242,14 @@ function formulaChoice(pair: NameBesideFormula, kind: DocumentKind): TextFix | u
   const body = caret < 0 ? target.formula : target.formula.slice(0, caret);
   const state = STATE_SUFFIX.exec(written)?.[0] ?? "";
   const unstated = written.slice(0, written.length - state.length);
+  if (pair.formula.speciesText !== undefined) {
+    // The row's charge is in a column of its own: the cell gets the formula alone, and only
+    // when the name's charge is the column's.
+    const newText = body + state;
+    if (target.charge !== pair.formula.reading.charge || newText === written || !isSafeText(newText, kind)) return undefined;
+    if (!readsAs(body + chargeText(target.charge) + state, target)) return undefined;
+    return { range: pair.formula.range, newText, title: `Change the formula to ${newText}` };
+  }
   const candidates: string[] = [];
   if (target.charge !== 0 && pair.formula.reading.charge === target.charge) {
     for (const suffix of CHARGE_SUFFIXES) {

@@ -3,6 +3,8 @@
  * proposes the computed value, written in the cell's own style, where they disagree.
  */
 import type { CentreAnalysis, SpeciesAnalysis, TextRange } from "../../chemistry/types";
+import { speciesTextOf } from "../analyzeOccurrence";
+import { chargeInStyleOf, chargeOfCell } from "../tables/chargeColumn";
 import type { Finding, TableCell, TableRecord } from "../types";
 import { angleInStyleOf, parseAngles } from "./angleText";
 import { axeInStyleOf, parseAxe } from "./axeText";
@@ -17,7 +19,7 @@ const MODEL = "(VSEPR model prediction)";
 
 /** Every disagreement between `record`'s cells and `analysis`, added to `into` (returned). */
 export function checkRecord(record: TableRecord, analysis: SpeciesAnalysis, into: Finding[] = []): Finding[] {
-  const species = record.species.text;
+  const species = speciesTextOf(record.species);
   const centre = analysis.centres[0];
   let past: PastChecks | undefined;
   for (const cell of record.cells) {
@@ -80,7 +82,8 @@ function knownCheck(
 /** A remembered finding moved to another cell: the finding and its fix cover the whole cell. */
 function placedAt(finding: Finding, range: TextRange): Finding {
   if (finding.range === range) return finding;
-  return finding.fix ? { ...finding, range, fix: { ...finding.fix, range } } : { ...finding, range };
+  const placed: Finding = finding.fix ? { ...finding, range, fix: { ...finding.fix, range } } : { ...finding, range };
+  return finding.choices ? { ...placed, choices: finding.choices.map((choice) => ({ ...choice, range })) } : placed;
 }
 
 function checkCell(cell: TableCell, species: string, analysis: SpeciesAnalysis, centre: CentreAnalysis | undefined): Finding | undefined {
@@ -134,6 +137,8 @@ function checkCell(cell: TableCell, species: string, analysis: SpeciesAnalysis, 
       return checkPolarity(cell, species, analysis);
     case "bondAngle":
       return centre && checkAngle(cell, species, analysis, centre);
+    case "charge":
+      return checkCharge(cell, species, analysis.reading.charge);
     case "irBands":
     case "ramanBands":
     case "irActiveModes":
@@ -155,6 +160,24 @@ function mismatch(cell: TableCell, code: string, message: string, newText: strin
     code,
     message,
     fix: { range: cell.range, newText, title: `Change to ${newText}` },
+  };
+}
+
+/**
+ * A charge column that contradicts the charge written in the formula ("NH4+" beside -1). Either
+ * may be the slip, so the new charge is offered as a choice, never applied by fix-all.
+ */
+function checkCharge(cell: TableCell, species: string, computed: number): Finding | undefined {
+  const written = chargeOfCell(cell.text);
+  if (written === undefined || written === computed) return undefined;
+  const newText = chargeInStyleOf(computed, cell.text);
+  const charge = computed === 0 ? "no charge" : `a charge of ${computed > 0 ? "+" : ""}${computed}`;
+  return {
+    range: cell.range,
+    severity: "warning",
+    code: "table-charge",
+    message: `${species} has ${charge} as written, the table says ${cell.text.trim()}.`,
+    choices: [{ range: cell.range, newText, title: `Change the charge to ${newText}` }],
   };
 }
 

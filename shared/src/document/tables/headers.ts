@@ -40,6 +40,19 @@ const HEADERS: ReadonlyMap<string, ColumnMeaning> = new Map<string, ColumnMeanin
     "positive ion",
     "negative ion",
   ]),
+  // A species' net charge only: a formal charge belongs to one atom, an oxidation state to one element.
+  ...words("charge", [
+    "charge",
+    "charges",
+    "net charge",
+    "ionic charge",
+    "ion charge",
+    "overall charge",
+    "total charge",
+    "charge number",
+    "charge e",
+    "species charge",
+  ]),
   ...words("smiles", [
     "smiles",
     "canonical smiles",

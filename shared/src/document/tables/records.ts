@@ -6,6 +6,7 @@ import type { TextRange } from "../../chemistry/types";
 import { scanProse } from "../scanProse";
 import { isOccurrence, smilesAt } from "../smilesSpan";
 import { emptySink, occurrenceAt, unreadableAt, type ScanSink, type SpeciesReader } from "../speciesReader";
+import { chargeOfCell, withRowCharge } from "./chargeColumn";
 import { namesSpecies } from "./headers";
 import type { ColumnMeaning, SpeciesOccurrence, TableCell, TableRecord, UnreadableSpecies } from "../types";
 
@@ -64,7 +65,8 @@ function unwrapped(field: RecordField): RecordField {
 export function addRecord(fields: readonly RecordField[], read: SpeciesReader, sink: RecordSink): void {
   // One pass over the fields, without intermediate lists: tables call this once a row.
   const naming: RecordField[] = [];
-  const cells: TableCell[] = [];
+  let cells: TableCell[] = [];
+  let chargeCell: TableCell | undefined;
   for (const written of fields) {
     const field = trimmedField(written);
     if (field.text.length === 0 || isPlaceholder(field.text)) continue;
@@ -73,9 +75,23 @@ export function addRecord(fields: readonly RecordField[], read: SpeciesReader, s
       continue;
     }
     if (namesSpecies(field.meaning)) naming.push(unwrapped(field));
-    else cells.push({ meaning: field.meaning, range: field.range, text: field.text });
+    else {
+      const cell: TableCell = { meaning: field.meaning, range: field.range, text: field.text };
+      cells.push(cell);
+      if (field.meaning === "charge") chargeCell ??= cell;
+    }
   }
   if (naming.length === 0) return;
+  // Every species the row names carries the row's charge; one that cannot is read as written.
+  const rowCharge = chargeCell && chargeOfCell(chargeCell.text);
+  let uncharged: Set<SpeciesOccurrence> | undefined;
+  const charged = (occurrence: SpeciesOccurrence): SpeciesOccurrence => {
+    if (!rowCharge) return occurrence;
+    const species = withRowCharge(occurrence, rowCharge, read);
+    if (species) return species;
+    (uncharged ??= new Set()).add(occurrence);
+    return occurrence;
+  };
   if (naming.length > 1) inRankOrder(naming);
   const found: SpeciesOccurrence[] = [];
   let failed: UnreadableSpecies[] | undefined;
@@ -92,7 +108,7 @@ export function addRecord(fields: readonly RecordField[], read: SpeciesReader, s
     }
     const result = read(field.text);
     if (result.ok) {
-      const occurrence = occurrenceAt(result.value, field.text, field.range.start);
+      const occurrence = charged(occurrenceAt(result.value, field.text, field.range.start));
       found.push(occurrence);
       if (result.value.notation !== "name") {
         if (field.meaning === "species") formula ??= occurrence;
@@ -102,7 +118,7 @@ export function addRecord(fields: readonly RecordField[], read: SpeciesReader, s
       }
       continue;
     }
-    const named = namesOpeningCellOf(field, read);
+    const named = namesOpeningCellOf(field, read)?.map(charged);
     if (named) {
       for (const occurrence of named) found.push(occurrence);
       if (!name && named[0].reading.notation === "name") {
@@ -120,6 +136,8 @@ export function addRecord(fields: readonly RecordField[], read: SpeciesReader, s
     }
   }
   if (found.length === 0) return;
+  // The charge column is compared with the species only when the two were read together.
+  if (chargeCell && uncharged?.has(found[0])) cells = cells.filter((cell) => cell !== chargeCell);
   if (found.length === 1) sink.records.push({ species: found[0], cells });
   else if (!formula || !name || !nameCell) sink.records.push({ species: found[0], cells, otherNames: found.slice(1) });
   // A record field is a table cell with one more property: it serves as the name cell as it is.
