@@ -156,3 +156,22 @@ describe("the fast reading of repeated rows agrees with the ordinary one", () =>
     expect(finding.choices?.map((choice) => choice.newText)).toContain("SO3");
   });
 });
+
+describe("a cell that reads as a placeholder", () => {
+  // from memory: Na is sodium's symbol (IUPAC periodic table)
+  it.each([
+    ["Na", "Na"],
+    ["NA", undefined],
+    ["na", undefined],
+    ["N/A", undefined],
+    ["n/a", undefined],
+  ])("%j in a formula column is %s", (cell, expected) => {
+    const text = `Formula,Lot\n${cell},KR-0412\n`;
+    expect(analyzeDocument(text, "csv").occurrences.map((occurrence) => occurrence.reading.formula)[0]).toBe(expected);
+    expect(findingsOf(text, "csv")).toEqual([]);
+  });
+
+  it("Na beside a charge column is the sodium ion", () => {
+    expect(speciesAt("Name,Formula,Charge\nSodium,Na,+1\n", "csv", "Na,")).toBe("Na^+");
+  });
+});

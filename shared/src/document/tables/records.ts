@@ -208,8 +208,11 @@ function rank(field: RecordField): number {
 const PLACEHOLDER = /^(?:[-\u2010-\u2015\u2212]+|n\/?a\.?|none|nil|\?+|tbd|\.{2,3}|\u2026|\u2205)$/i;
 
 function isPlaceholder(text: string): boolean {
-  return text.length <= 5 && PLACEHOLDER.test(text);
+  // "Na" with a capital N and a small a is sodium's symbol; "NA", "na" and "N/A" say not available.
+  return text.length <= 5 && text !== SODIUM && PLACEHOLDER.test(text);
 }
+
+const SODIUM = "Na";
 
 /** An occurrence read from a cell's own text, moved to the cell's place in the document. */
 function moved(occurrence: SpeciesOccurrence, start: number): SpeciesOccurrence {
