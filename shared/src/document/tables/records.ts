@@ -8,6 +8,7 @@ import { isOccurrence, smilesAt } from "../smilesSpan";
 import { emptySink, occurrenceAt, unreadableAt, type ScanSink, type SpeciesReader } from "../speciesReader";
 import { chargeOfCell, withRowCharge } from "./chargeColumn";
 import { namesSpecies } from "./headers";
+import { mixtureComponents } from "./mixtureCells";
 import type { ColumnMeaning, SpeciesOccurrence, TableCell, TableRecord, UnreadableSpecies } from "../types";
 
 /** A value in a row or object, with the header or key it sits under. */
@@ -99,6 +100,8 @@ export function addRecord(fields: readonly RecordField[], read: SpeciesReader, s
   let formula: SpeciesOccurrence | undefined;
   let name: SpeciesOccurrence | undefined;
   let nameCell: RecordField | undefined;
+  // A row about a mixture ("5% H2 in N2") names no single species for its other cells to describe.
+  let ofMixture = false;
   for (const field of naming) {
     if (field.meaning === "smiles") {
       const smiles = smilesAt(field.text, 0, field.text.length);
@@ -118,13 +121,22 @@ export function addRecord(fields: readonly RecordField[], read: SpeciesReader, s
       }
       continue;
     }
-    const named = namesOpeningCellOf(field, read)?.map(charged);
+    // A species cell is read as a mixture before names; a name cell's synonyms ("Acetone /
+    // propanone") come before a mixture.
+    const mixture = field.meaning === "species" ? mixtureComponents(field, read) : undefined;
+    const named = mixture ? undefined : namesOpeningCellOf(field, read)?.map(charged);
     if (named) {
       for (const occurrence of named) found.push(occurrence);
       if (!name && named[0].reading.notation === "name") {
         name = named[0];
         nameCell = field;
       }
+      continue;
+    }
+    const components = mixture ?? (field.meaning === "name" ? mixtureComponents(field, read) : undefined);
+    if (components) {
+      for (const occurrence of components) found.push(occurrence);
+      ofMixture = true;
     } else if (field.meaning === "species") (failed ??= []).push(unreadableAt(field.text, field.range.start, result));
   }
   for (const occurrence of found) sink.occurrences.push(occurrence);
@@ -135,7 +147,7 @@ export function addRecord(fields: readonly RecordField[], read: SpeciesReader, s
       if (unreadable.problem.code !== "unknown-name" || found.length === 0) sink.unreadable.push(unreadable);
     }
   }
-  if (found.length === 0) return;
+  if (found.length === 0 || ofMixture) return;
   // The charge column is compared with the species only when the two were read together.
   if (chargeCell && uncharged?.has(found[0])) cells = cells.filter((cell) => cell !== chargeCell);
   if (found.length === 1) sink.records.push({ species: found[0], cells });
