@@ -2,6 +2,7 @@
  * Turns the recognised fields of one row or object into a TableRecord: which field names the
  * species (a formula, or failing that a name) and which cells the checks can compare.
  */
+import { elementByName } from "../../chemistry/elements";
 import type { TextRange } from "../../chemistry/types";
 import { scanProse } from "../scanProse";
 import { isOccurrence, smilesAt } from "../smilesSpan";
@@ -137,6 +138,16 @@ export function addRecord(fields: readonly RecordField[], read: SpeciesReader, s
     if (components) {
       for (const occurrence of components) found.push(occurrence);
       ofMixture = true;
+      continue;
+    }
+    const element = elementOpeningCellOf(field, read);
+    if (element) {
+      const occurrence = charged(element);
+      found.push(occurrence);
+      if (!name) {
+        name = occurrence;
+        nameCell = field;
+      }
     } else if (field.meaning === "species") (failed ??= []).push(unreadableAt(field.text, field.range.start, result));
   }
   for (const occurrence of found) sink.occurrences.push(occurrence);
@@ -179,6 +190,27 @@ function namesOpeningCellOf(field: RecordField, read: SpeciesReader): readonly S
   const named = namesOpeningCell(field, read);
   return named && named[0].reading.notation === "name" ? named : undefined;
 }
+
+/**
+ * An element's name opening a name cell, or a species column's cell that is not headed as a
+ * formula, with a grade or a remark after it: "Argon (UHP)", "Nitrogen, 99.999%", "Helium -
+ * balloon grade". Prose reads an element's name as a plain word unless the words around it say
+ * "substance"; in a column of names it names the element.
+ */
+function elementOpeningCellOf(field: RecordField, read: SpeciesReader): SpeciesOccurrence | undefined {
+  if (field.meaning !== "name" && (field.meaning !== "species" || field.formulaHeader)) return undefined;
+  const word = ELEMENT_WORD.exec(field.text)?.[0];
+  if (!word || !elementByName(word)) return undefined;
+  const result = read(word);
+  return result.ok ? occurrenceAt(result.value, word, field.range.start) : undefined;
+}
+
+/**
+ * A word that is the whole cell, or is followed by punctuation, a dash or a bracket after a
+ * space: not by another word ("Calcium monohydroxide ion", "Carbon black") nor by a bracket
+ * against it ("Copper(II) carbonate"), which make it part of a longer name.
+ */
+const ELEMENT_WORD = /^[A-Za-z]+(?=$|\s*[,;:]|\s+[-\u2013\u2014(])/;
 
 /**
  * The species a name cell opens with when the whole cell is more than a name, then any synonym
