@@ -50,6 +50,9 @@ describe("meaningOfHeader", () => {
     ["polar?", "polarity"],
     ["Polarity", "polarity"],
     ["polar (y/n)", "polarity"],
+    ["Reagent", "name"],
+    ["Reagents", "name"],
+    ["Analyte", "name"],
     ["Charge", "charge"],
     ["net charge", "charge"],
     ["Ionic charge (e)", "charge"],
@@ -70,6 +73,9 @@ describe("meaningOfHeader", () => {
     "dipole moment (D)",
     "formal charge",
     "oxidation state",
+    // Free text: read by no check.
+    "Description",
+    "Comments",
   ])("%j means nothing to the checks", (header) => {
     expect(meaningOfHeader(header)).toBeUndefined();
   });

@@ -62,8 +62,15 @@ const HEADERS: ReadonlyMap<string, ColumnMeaning> = new Map<string, ColumnMeanin
     "structure smiles",
     "smiles structure",
   ]),
-  // A compound id mostly holds names (or catalogue ids, which then name nothing).
+  // A compound id mostly holds names (or catalogue ids, which then name nothing). A reagent or
+  // analyte column holds names with strengths and forms after them; a cell it cannot read is no
+  // mistake there. A description, notes or comment column is free text and is not read.
   ...words("name", [
+    "reagent",
+    "reagents",
+    "reagent name",
+    "analyte",
+    "analyte name",
     "compound id",
     "compound identifier",
     "name",
