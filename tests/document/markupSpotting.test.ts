@@ -192,6 +192,23 @@ describe("formula-shaped text that is not a species", () => {
   });
 });
 
+describe("a formula before a noun", () => {
+  // common practice: how lab notes name a gas by what it is kept in or measured as, and how organic
+  // and mass-spectrum notes call a piece of a molecule a fragment or residue. A group cut at one
+  // bond is a radical as written, with an odd electron count (from memory: atomic numbers, IUPAC
+  // periodic table: CH3 has 9 electrons, OCH3 17, C6H5 41, COOH 23; SF4 has 50, CO2 22).
+  it.each([
+    ["⟦SF4⟧ fragments were seen.", "plaintext"],
+    ["The ⟦SF₅⁺⟧ fragments and the ⟦CO2⟧ fragment peak.", "markdown"],
+    ["⟦NF3⟧ lines, ⟦SF6⟧ cylinders, ⟦CO2⟧ levels, ⟦NH3⟧ readings and ⟦H2O⟧ droplets.", "plaintext"],
+    ["Loss of the OCH₃ fragment, then CH3 fragments and a C6H5 residue.", "markdown"],
+    ["The COOH residues and NH residues of the peptide; the fragment (OCH3) too.", "plaintext"],
+    ["The CH3 groups and the C(CH3)3 group; ⟦SF4⟧ residue in the trap.", "plaintext"],
+  ])("%s", (marked, kind) => {
+    check(marked, kind as DocumentKind);
+  });
+});
+
 describe("plain text read a paragraph at a time", () => {
   // common practice: a blank line ends a paragraph, and inline markup (code spans, math) with it;
   // a comment runs until its close, however many paragraphs it hides; run ids are numbered from 1

@@ -3,6 +3,7 @@
  * (R–OH, Ar–NH₂, –COOCH₃, "the NO₂ group", "2H, OCH₂" in an NMR list), sample and run ids in a
  * series (N1, N2), and alloy designations (Ti6Al4V).
  */
+import { elementBySymbol } from "../chemistry/elements";
 import { NONMETALS } from "../chemistry/reader/nonmetals";
 
 /** Dashes that write a bond to a substituent: hyphen, en dash, em dash, figure dash, minus. */
@@ -19,10 +20,17 @@ function isSpace(code: number): boolean {
 }
 
 /** Words after a formula that make it a group of a larger molecule. */
-const GROUP_WORDS = /^[\s)]*(?:groups?|substituents?|moiety|moieties|fragments?|residues?|side[- ]chains?)\b/i;
+const GROUP_WORDS = /^[\s)]*(?:groups?|substituents?|moiety|moieties|side[- ]chains?)\b/i;
 
 /** Words before a formula, in "a nitro group (NO₂)" or "group NO₂". */
-const GROUP_BEFORE = /\b(?:groups?|substituents?|moiety|fragments?)\s*\(\s*$|\b(?:group|substituent)\s+$/i;
+const GROUP_BEFORE = /\b(?:groups?|substituents?|moiety)\s*\(\s*$|\b(?:group|substituent)\s+$/i;
+
+/**
+ * Words that name a piece of a larger molecule only sometimes: "the OCH₃ fragment" is a group, but
+ * "SF₄ fragments" from a discharge or a mass spectrum are molecules of their own.
+ */
+const PIECE_WORDS = /^[\s)]*(?:fragments?|residues?)\b/i;
+const PIECE_BEFORE = /\b(?:fragments?|residues?)\s*\(\s*$/i;
 
 /** The "nH, " of an NMR assignment list: "(q, 2H, OCH₂)". */
 const NMR_PROTONS = /\b\d{1,2}H,\s*$/;
@@ -33,18 +41,59 @@ const PLACEHOLDER_BEFORE = /(?:^|[^A-Za-z])(?:R[\u2032'\u2081\u2082\d]?|Ar)$/;
 /**
  * True when the formula at `[start, end)` is written as part of a larger molecule: after a bond
  * dash that opens a word or follows R or Ar ("–COOCH₃", "R–OH", "Ar–NH₂"), as Ar before a bond
- * dash to another group ("Ar–OH"), named a group, or listed in an NMR assignment.
+ * dash to another group ("Ar–OH"), named a group, listed in an NMR assignment, or called a
+ * fragment or residue when it is a radical as written (`charged`: the token carries a charge).
  */
-export function isGroupFragment(text: string, start: number, end: number, body: string): boolean {
+export function isGroupFragment(text: string, start: number, end: number, body: string, charged: boolean): boolean {
   const before = text.charCodeAt(start - 1);
   if (isBondDash(before)) {
     const beforeDash = text.slice(Math.max(0, start - 6), start - 1);
     if (isSpace(text.charCodeAt(start - 2)) || text.charCodeAt(start - 2) === 0x28 || PLACEHOLDER_BEFORE.test(beforeDash)) return true;
   }
   if (body === "Ar" && isBondDash(text.charCodeAt(end)) && isUpper(text.charCodeAt(end + 1))) return true;
-  if (GROUP_WORDS.test(text.slice(end, end + 16))) return true;
+  const after = text.slice(end, end + 16);
+  if (GROUP_WORDS.test(after)) return true;
   const lookBack = text.slice(Math.max(0, start - 30), start);
-  return GROUP_BEFORE.test(lookBack) || NMR_PROTONS.test(lookBack);
+  if (GROUP_BEFORE.test(lookBack) || NMR_PROTONS.test(lookBack)) return true;
+  return (PIECE_WORDS.test(after) || PIECE_BEFORE.test(lookBack)) && !charged && isCutFromBond(body);
+}
+
+/**
+ * Whether an uncharged formula has an odd number of electrons, as a group cut from a molecule at
+ * one bond has (CH₃, OCH₃, C₆H₅, COOH, NO₂), while a molecule that holds together on its own
+ * mostly has an even number (SF₄, CO₂, H₂O). A formula that cannot be counted is taken for a
+ * group, as before.
+ */
+function isCutFromBond(body: string): boolean {
+  const electrons = electronCount(body);
+  return electrons === undefined || electrons % 2 === 1;
+}
+
+/** The electrons of the neutral formula `body` (symbols, counts, brackets), or undefined when it does not read so. */
+function electronCount(body: string): number | undefined {
+  const counts = [0];
+  const parts =
+    body.replace(/[\u2080-\u2089]/g, (digit) => String(digit.charCodeAt(0) - 0x2080)).match(/[A-Z][a-z]?|\d+|[([]|[)\]]|./g) ?? [];
+  let last = 0;
+  for (const part of parts) {
+    if (/^\d+$/.test(part)) {
+      counts[counts.length - 1] += last * (Number(part) - 1);
+      last = 0;
+    } else if (part === "(" || part === "[") {
+      counts.push(0);
+      last = 0;
+    } else if (part === ")" || part === "]") {
+      if (counts.length < 2) return undefined;
+      last = counts.pop()!;
+      counts[counts.length - 1] += last;
+    } else {
+      const element = elementBySymbol(part);
+      if (!element) return undefined;
+      last = element.atomicNumber;
+      counts[counts.length - 1] += last;
+    }
+  }
+  return counts.length === 1 ? counts[0] : undefined;
 }
 
 /** A series of ids is looked for in blocks of this many characters around a token. */

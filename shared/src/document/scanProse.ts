@@ -495,7 +495,7 @@ function formulaToken(scan: ProseScan, start: number, end: number, massDigits = 
     if (!reactant && !chemical) return next;
   }
   if (isPartOfCode(text, bodyStart, tokenEnd)) return next;
-  if (isGroupFragment(text, bodyStart, tokenEnd, body) || isAlloyDesignation(shape.symbols)) return next;
+  if (isGroupFragment(text, bodyStart, tokenEnd, body, shape.hasCharge) || isAlloyDesignation(shape.symbols)) return next;
   // An id is typed on the line ("N2"); a count written as a subscript ("N~2~", "N₂", "N_2") is chemistry.
   const scriptedCount = markup || tex || /[\u2080-\u2089]/.test(written);
   if (shape.hasCount && !shape.hasCharge && !scriptedCount && isSeriesToken(scan, bodyStart, shape.symbols)) return next;
