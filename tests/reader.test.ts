@@ -38,6 +38,9 @@ describe("plain and condensed formulas", () => {
     ["H2NNH2", "H4 N2", "H2NNH2"],
     ["HOOH", "H2 O2", "HOOH"],
     ["CH3-CH3", "C2 H6", "CH3CH3"],
+    // Word processors turn a typed dash into an en dash; between groups it is still a bond.
+    ["CH3–CH3", "C2 H6", "CH3CH3"],
+    ["H–C≡N", "H1 C1 N1", "HC≡N"],
     ["H₂SO₄", "H2 S1 O4", "H2SO4"],
     ["Al2(SO4)3", "Al2 S3 O12", "Al2(SO4)3"],
     ["K4[Fe(CN)6]", "K4 Fe1 C6 N6", "K4[Fe(CN)6]"],

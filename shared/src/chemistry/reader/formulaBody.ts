@@ -144,8 +144,9 @@ function scan(text: string, start: number, end: number): FormulaBody {
       i++;
       continue;
     }
-    if (code === 0x2d) {
-      // A dash between groups ("CH3-CH3") is a single bond: adjacency already says so.
+    if (code === 0x2d || code === 0x2013) {
+      // A dash between groups ("CH3-CH3", or "CH3–CH3" with the en dash word processors put in)
+      // is a single bond: adjacency already says so. A trailing one was read as the charge.
       requireBetweenGroups(text, i, end, frame, "A dash inside a formula must join two groups.");
       i++;
       continue;
