@@ -36,6 +36,12 @@ describe("species in prose", () => {
     ["<!-- SF6 here is hidden --> wait: <!-- SF6 --> ⟦NF3⟧"],
     ["⟦SF4⟧ + 2 ⟦H2O⟧ -> ⟦SO2⟧ + 4 ⟦HF⟧, and ⟦SO<sub>2</sub>⟧ + ⟦HF⟧; but DO NOT VENT HF."],
     ["Runs N1, N2 and N3 ran late. Purge with ⟦N<sub>2</sub>⟧ or ⟦N₂⟧ first, not with N2."],
+    // Structural formulas with bond marks are one species; two lone atoms and a mark are a bond.
+    ["Lines: ⟦CH2=CH2⟧, ⟦HC≡CH⟧, ⟦O=C=O⟧, ⟦H2C=O⟧, ⟦CH3-CH=CH2⟧ and ⟦H–C≡N⟧."],
+    ["The C=O bonds are polar, N≡N is strong, C=C=C is a fragment; S=O too."],
+    ["Unspaced equations keep their parts: ⟦SO2⟧+⟦O2⟧=⟦SO3⟧ and ⟦CaCO3⟧=⟦CaO⟧+⟦CO2⟧."],
+    // Charges in brackets, as handbook tables write them.
+    ["Ions: ⟦SO4(2-)⟧, ⟦NH4(+)⟧, ⟦PO4(3-)⟧, ⟦Fe(3+)⟧ and ⟦HPO4(2-)⟧; not in (2-) alone."],
   ])("%s", (marked) => {
     check(marked, "markdown");
   });

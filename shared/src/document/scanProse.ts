@@ -306,9 +306,45 @@ function scanFormulas(scan: ProseScan, start: number, end: number): void {
       index = massStart < index ? formulaToken(scan, massStart, end, index - massStart) : index + 1;
       continue;
     }
-    index = formulaToken(scan, index, end);
+    const bonded = bondedRunEnd(scan, index, end, start);
+    index = bonded > index ? bonded : formulaToken(scan, index, end);
   }
 }
+
+/** Groups joined by bond marks with no space: "CH2=CH2", "HC≡CH", "O=C=O", "CH3-CH=CH2", "C=O". */
+const BONDED_RUN = /[A-Z([][A-Za-z0-9()[\]]*(?:[-\u2013=\u2261][A-Z([][A-Za-z0-9()[\]]*)+/y;
+
+/**
+ * A structural formula written with a double or triple bond mark, read whole rather than as the
+ * groups between the marks (CH2=CH2 is ethene, not two CH2). Two lone atoms joined by one mark
+ * ("C=O", "N≡N") name a bond, not a species, and so do only carbons ("C=C=C"): nothing is
+ * reported. A run with no double or triple mark ("F-S-F", "NF3-SF6") is left to the word rules. Returns where scanning goes on, or `index` when there is no such run here.
+ */
+function bondedRunEnd(scan: ProseScan, index: number, end: number, chunkStart: number): number {
+  const { text } = scan;
+  if (!BOND_MARK.test(text.slice(index, end))) return index;
+  // "SO2+O2=SO3": an equation typed without spaces uses "=" as its arrow.
+  if (EQUATION_SIGN.test(text.slice(chunkStart, end))) return index;
+  BONDED_RUN.lastIndex = index;
+  const match = BONDED_RUN.exec(text);
+  if (!match) return index;
+  let runEnd = index + match[0].length;
+  // The run ends the word: "CH2=CH2," but not "C=Ox" or "X=Y1a".
+  while (runEnd > index && runEnd <= end && isClose(text.charCodeAt(runEnd - 1)) && depthOf(text, index, runEnd) < 0) runEnd--;
+  if (runEnd > end || (runEnd < end && isWordCharacter(text.charCodeAt(runEnd)))) return index;
+  const run = text.slice(index, runEnd);
+  const groups = run.split(/[-\u2013=\u2261]/);
+  const loneAtoms = groups.every((group) => /^[A-Z][a-z]?$/.test(group));
+  if (loneAtoms && (groups.length < 3 || groups.every((group) => group === "C"))) return runEnd;
+  const result = scan.read(run);
+  if (!result.ok) return index;
+  scan.sink.occurrences.push(occurrenceAt(result.value, run, index, "formula"));
+  return runEnd;
+}
+
+const BOND_MARK = /[=\u2261]/;
+/** A plus or an arrow in a word: an equation, not a structural formula. */
+const EQUATION_SIGN = /\+|->|<-|[\u2192\u27f6\u21cc]/;
 
 /**
  * "13CO2", "15N2" outside an equation: digits glued before a formula at the start of a word are a
@@ -430,6 +466,15 @@ function formulaToken(scan: ProseScan, start: number, end: number, massDigits = 
     if (texEnd === bodyEnd) break;
     bodyEnd = texEnd;
     tex = true;
+  }
+  // "SO4(2-)", "NH4(+)": a charge in brackets after the formula, as handbook tables write it.
+  const bracketedCharge = bracketedChargeAt(text, start, bodyEnd, end);
+  if (bracketedCharge) {
+    const read = scan.read(text.slice(start, bracketedCharge.end));
+    if (read.ok && !isPartOfCode(text, start, bracketedCharge.end)) {
+      scan.sink.occurrences.push(occurrenceAt(read.value, text.slice(start, bracketedCharge.end), start, "formula"));
+      return bracketedCharge.end;
+    }
   }
   // "NaCl(aq)": the state symbol follows the formula; the shape rules look at the formula alone.
   const state = stateSymbolBefore(text, start, bodyEnd);
@@ -650,6 +695,27 @@ function spacedChargeEnd(text: string, start: number, bodyEnd: number, limit: nu
   if (bodyEnd + 3 < limit && (isWordCharacter(after) || isSign(after))) return bodyEnd;
   if (!/[A-Z][a-z]?\d/.test(text.slice(start, bodyEnd))) return bodyEnd;
   return bodyEnd + 3;
+}
+
+/**
+ * A charge in brackets that ends the formula whose body ends at `bodyEnd` ("SO4(2-)", "NH4(+)",
+ * "Fe(3+)"): the body scan stops inside the bracket, at its digits or before its sign. Undefined
+ * unless the bracket holds only a charge and closes before the end of the word.
+ */
+function bracketedChargeAt(text: string, start: number, bodyEnd: number, end: number): { end: number } | undefined {
+  let open = bodyEnd - 1;
+  while (open > start && isDigitCode(text.charCodeAt(open))) open--;
+  if (open <= start || text.charCodeAt(open) !== 0x28 || !isUpperOrCount(text.charCodeAt(open - 1))) return undefined;
+  const match = /^\((?:[1-9][+\-\u2212\u2013]|[+\-\u2212\u2013][1-9]?)\)/.exec(text.slice(open, Math.min(end, open + 6)));
+  if (!match) return undefined;
+  const after = open + match[0].length;
+  if (after < end && (isWordCharacter(text.charCodeAt(after)) || isSign(text.charCodeAt(after)))) return undefined;
+  return { end: after };
+}
+
+/** A letter or digit a formula body may end with before a bracketed charge. */
+function isUpperOrCount(code: number): boolean {
+  return isWordCharacter(code) || code === 0x29;
 }
 
 /** The end of a charge such as "+", "2-", "^2-", "^{2-}" right after a formula body. */
