@@ -80,14 +80,23 @@ export const NO_FINDINGS: readonly Finding[] = [];
  */
 export function rememberingListReader<State extends ListParts>(kind: ListKind<State>, step: number): ListReader {
   let last: State | undefined;
-  const forget = (state: State): void => {
-    if (last === state) last = undefined;
+  // The last state whose parts all read cleanly: a text broken by a keystroke and mended by the
+  // next is read from it, as an edit of the text before the break, not afresh.
+  let trusted: State | undefined;
+  const reading: StateReading<State> = {
+    forget(state) {
+      if (last === state) last = undefined;
+      if (trusted === state) trusted = undefined;
+    },
+    verified(state) {
+      trusted = state;
+    },
   };
   return (text) => {
-    const next = last && kind.edited(last, text);
+    const next = (last && kind.edited(last, text)) || (trusted && trusted !== last ? kind.edited(trusted, text) : undefined);
     if (next) {
       last = next;
-      return versionOf(next, kind, forget, step);
+      return versionOf(next, kind, reading, step);
     }
     const opened = kind.opened(text);
     if (!("starts" in opened)) {
@@ -95,8 +104,16 @@ export function rememberingListReader<State extends ListParts>(kind: ListKind<St
       return wholeVersion(opened.findings);
     }
     last = opened;
-    return versionOf(opened, kind, forget, step);
+    return versionOf(opened, kind, reading, step);
   };
+}
+
+/** What a version tells its reader about its state once read. */
+interface StateReading<State> {
+  /** A part did not read cleanly: the state must not be edited further. */
+  forget(state: State): void;
+  /** Every part read cleanly. */
+  verified(state: State): void;
 }
 
 function wholeVersion(findings: readonly Finding[]): ListVersion {
@@ -121,7 +138,7 @@ function overlapping(findings: readonly Finding[], start: number, end: number): 
 function versionOf<State extends ListParts>(
   state: State,
   kind: ListKind<State>,
-  forget: (state: State) => void,
+  reading: StateReading<State>,
   step: number,
 ): ListVersion {
   const count = state.starts.length;
@@ -129,7 +146,7 @@ function versionOf<State extends ListParts>(
   /** The plain reading, once a part did not read cleanly. */
   let whole: readonly Finding[] | undefined;
   const fail = (): false => {
-    forget(state);
+    reading.forget(state);
     whole = kind.readWhole(state.text);
     return false;
   };
@@ -182,6 +199,7 @@ function versionOf<State extends ListParts>(
     }
     for (const finding of state.frame!.after) placed.push(moved(finding, state.tail));
     all = placed;
+    reading.verified(state);
     return all;
   };
   const around = (start: number, end: number): { first: number; last: number } | undefined => {
