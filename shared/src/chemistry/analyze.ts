@@ -293,12 +293,22 @@ export function analyzeTyped(text: string): AnalysisResult {
   if (whole.ok || whole.reading !== undefined) return whole;
   const qualified = splitReagentQualifiers(text);
   if (qualified === undefined) return whole;
-  const inner = analyzeSpecies(qualified.species);
-  if (!inner.ok) return inner.reading === undefined ? whole : inner;
-  const shown = inner.value.reading.name ?? inner.value.reading.formula;
+  const inner = qualified.dissolved ? analyzeDissolved(qualified.species) : analyzeSpecies(qualified.species);
+  const reading = inner.ok ? inner.value.reading : inner.reading;
+  if (reading === undefined) return whole;
+  const shown = reading.name ?? reading.formula;
   const note = `Read as ${shown}: "${qualified.qualifiers}" says the reagent's grade, form or strength, not which species it is.`;
+  // A salt, hydrate or solid has no warnings to add to: its card says it in the note on the whole.
+  if (!inner.ok) return { ...inner, problem: { ...inner.problem, message: `${inner.problem.message} ${note}` } };
   // Copy the property descriptors, not the values: centres and polarity stay worked out on first read.
   const value = Object.defineProperties({}, Object.getOwnPropertyDescriptors(inner.value)) as SpeciesAnalysis;
   Object.defineProperty(value, "warnings", { value: [...inner.value.warnings, note], enumerable: true });
   return { ok: true, value };
+}
+
+/** A species from a label that says it is a solution: read as written in water, "(aq)", unless a state is written. */
+function analyzeDissolved(text: string): AnalysisResult {
+  const read = readSpecies(text);
+  if (!read.ok || read.value.state !== undefined) return analyzeSpecies(text);
+  return analyzeReading({ ...read.value, state: "aq" });
 }

@@ -41,6 +41,13 @@ export function saltAnalysis(reading: SpeciesReading, analyze: AnalyzeText): Ana
       `beside ${anions} ions, so it has no VSEPR shape as a whole. ${shapes}`;
     return { ok: false, reading: named, problem: { code: "ions-in-solution", message }, parts };
   }
+  if (reading.state === "aq") {
+    const message =
+      `${reading.formula} in water is ${partsListText(parts)} ions, each held among water molecules (hydrated): ` +
+      `not a lattice and not discrete molecules, so it has no VSEPR shape as a whole. ${shapes}` +
+      hydratedMetalNote(ions);
+    return { ok: false, reading: named, problem: { code: "ions-in-solution", message }, parts };
+  }
   const covalent = covalentCharacterNote(reading.formula, reading.composition);
   const message =
     `${reading.formula} is an ionic compound of ${partsListText(parts)} ions: it forms a lattice of ions, ` +
@@ -59,12 +66,23 @@ function isHydrogenIon(ion: SaltIon): boolean {
  * (the octahedral Cr3+ of Cr2O3 is no steric number); empty for other salts.
  */
 function metalSurroundingsNote(ions: readonly SaltIon[]): string {
-  const metals = ions
-    .filter((ion) => ion.role === "cation" && ion.monatomic && elementBySymbol(symbolOf(ion))?.category === "transition-metal")
-    .map((ion) => ion.formula);
+  const metals = dBlockCations(ions);
   if (metals.length === 0) return "";
   const subject = metals.length === 1 ? `each ${metals[0]} ion` : `the ${metals.join(" and ")} ions`;
   return ` How the neighbouring ions are arranged around ${subject} is set by ion sizes and ligand-field effects, not by VSEPR, so no geometry is given for the metal.`;
+}
+
+/** For a d-block metal ion in water, that VSEPR does not arrange the water around it; empty otherwise. */
+function hydratedMetalNote(ions: readonly SaltIon[]): string {
+  const metals = dBlockCations(ions);
+  if (metals.length === 0) return "";
+  return ` The water molecules around ${metals.length === 1 ? `each ${metals[0]} ion` : `the ${metals.join(" and ")} ions`} are arranged by ligand-field effects, not by VSEPR.`;
+}
+
+function dBlockCations(ions: readonly SaltIon[]): string[] {
+  return ions
+    .filter((ion) => ion.role === "cation" && ion.monatomic && elementBySymbol(symbolOf(ion))?.category === "transition-metal")
+    .map((ion) => ion.formula);
 }
 
 /**

@@ -28,6 +28,26 @@ const UNIT_WORDS: ReadonlySet<string> = new Set(
   "% m mm n mol l g kg mg ml ppm w/w w/v v/v wt wt% vol% mol/l mol/dm3 mol/dm-3 dm-3 dm3 l-1 g/l mg/l".split(" "),
 );
 const STRENGTH = /^[~≈≥≤<>]?\d+(?:[.,]\d+)?(?:%|m|mm|n|ppm)?$/;
+
+// common practice: label words and strengths that say the bottle holds a solution ("sodium chloride
+// solution", "aqueous ammonia", "0.1 M", "saturated"); a purity ("99%") or a form ("crystals") does not
+const DISSOLVED_WORDS: ReadonlySet<string> = new Set(
+  "solution soln aqueous aq water dilute dil saturated sat satd standard standardised standardized volumetric m mm n mol/l mol/dm3 mol/dm-3 w/v g/l mg/l".split(
+    " ",
+  ),
+);
+const MOLAR_STRENGTH = /^\d+(?:[.,]\d+)?(?:m|mm|n)$/;
+
+/** Whether qualifiers say the reagent is a solution: a word such as "solution" or a molar strength. */
+function saysDissolved(qualifiers: string): boolean {
+  return qualifiers
+    .toLowerCase()
+    .split(/[\s,;:()[\]]+/)
+    .some((token) => {
+      const word = token.endsWith(".") ? token.slice(0, -1) : token;
+      return DISSOLVED_WORDS.has(word) || MOLAR_STRENGTH.test(word);
+    });
+}
 /** A bracket that is part of a name or charge: "(III)", "(2+)". */
 const NAMING_BRACKET = /^\s*(?:[ivx]+|\d*[+\-\u2212]|[+\-\u2212]\d*)\s*$/i;
 
@@ -75,6 +95,8 @@ export interface QualifiedSpecies {
   readonly species: string;
   /** The qualifiers as written, before and after the species, joined by a space. */
   readonly qualifiers: string;
+  /** The qualifiers say the reagent is a solution ("solution", "aq", "0.1 M"). */
+  readonly dissolved: boolean;
 }
 
 /**
@@ -109,5 +131,6 @@ export function splitReagentQualifiers(text: string): QualifiedSpecies | undefin
   while (speciesEnd > start && /[\s,;]/.test(text[speciesEnd - 1])) speciesEnd--;
   const trailing = text.slice(cut, end).replace(/^[\s,;]+/, "");
   if (speciesEnd <= start || (leading.length === 0 && trailing === "")) return undefined;
-  return { species: text.slice(start, speciesEnd), qualifiers: [...leading, trailing].filter((part) => part !== "").join(" ") };
+  const qualifiers = [...leading, trailing].filter((part) => part !== "").join(" ");
+  return { species: text.slice(start, speciesEnd), qualifiers, dissolved: saysDissolved(qualifiers) };
 }
