@@ -61,6 +61,10 @@ const ASCIIDOC_LINES = [
   "Runs N1, N2 and P1, P2 below; the N2 extraction ran late.",
   "|===",
   "| KR-0412 | SF6 | octahedral",
+  "[stem]",
+  "[latexmath]",
+  "[asciimath]",
+  "\\ce{XeF4 + F2 -> XeF6} and CH_5",
   "",
 ];
 

@@ -100,6 +100,22 @@ describe("AsciiDoc", () => {
   ])("%s", (_, text, expected) => check("asciidoc", text, expected));
 });
 
+describe("AsciiDoc math", () => {
+  // from memory: AsciiDoc language documentation (STEM blocks and macros: [stem], [latexmath],
+  // [asciimath], stem:[...]); mhchem manual (\ce works in math mode as in text)
+  it.each([
+    ["mhchem in a latexmath block", "[latexmath]\n++++\n\\ce{XeF4 + F2 -> XeF6}\n++++\nBF3 after.\n", ["XeF4", "F2", "XeF6", "BF3"]],
+    ["mhchem in a stem block", "[stem]\n++++\n\\ce{SF4}\n++++\n", ["SF4"]],
+    ["math in a stem block", "[stem]\n++++\nH_2O + x_2 = K_a\n++++\n", ["H_2O"]],
+    ["a stem paragraph", "[stem]\n\\ce{NF3} and y_2\n\nBF3 after.\n", ["NF3", "BF3"]],
+    ["a stem block with an id", "[latexmath,id=eq-nf3]\n++++\n\\ce{NF3}\n++++\n", ["NF3"]],
+    ["an asciimath block is not read", '[asciimath]\n++++\n"SO"_4^(2-) + CH_5\n++++\nBF3 after.\n', ["BF3"]],
+    ["an asciimath paragraph is not read", "[asciimath]\nsum_(i=1)^n CH_5\n\nBF3 after.\n", ["BF3"]],
+    ["a passthrough block is still not read", "[pass]\n++++\n\\ce{CH5}\n++++\nBF3 after.\n", ["BF3"]],
+    ["inline stem and latexmath", "Both stem:[\\ce{SF6}] and latexmath:[\\ce{NF3}] then BF3.\n", ["SF6", "NF3", "BF3"]],
+  ])("%s", (_, text, expected) => check("asciidoc", text, expected));
+});
+
 describe("reStructuredText", () => {
   // from memory: reStructuredText markup specification (literal blocks, explicit markup, comments, directives)
   it.each([
@@ -116,6 +132,10 @@ describe("reStructuredText", () => {
     ["a note is prose", ".. note:: SF4 is a seesaw.\n\n   So is TeCl4.\n", ["SF4", "TeCl4"]],
     ["a footnote is prose", ".. [1] BF3 is trigonal planar.\n", ["BF3"]],
     ["a raw directive", ".. raw:: html\n\n   <b>CH5</b>\n\nBF3 after.\n", ["BF3"]],
+    ["mhchem in a math directive", ".. math::\n   :label: eq-xe\n\n   \\ce{XeF4 + F2 -> XeF6}\n\nBF3.\n", ["XeF4", "F2", "XeF6", "BF3"]],
+    ["mhchem in a :math: role", "Then :math:`\\ce{SF4 + 2 H2O -> SO2 + 4 HF}` ran.\n", ["SF4", "H2O", "SO2", "HF"]],
+    ["an unclosed \\ce in math reads nothing", ".. math::\n\n   \\ce{CH5 + x\n\nBF3.\n", ["BF3"]],
+    ["only's content is prose for some builds", ".. only:: html\n\n   The NF3 band.\n", ["NF3"]],
   ])("%s", (_, text, expected) => check("restructuredtext", text, expected));
 });
 

@@ -4,6 +4,7 @@
  * $K_a$), so a piece counts only when its plain spelling passes the same rules as a prose token.
  */
 import { latexToPlain } from "../chemistry/reader/latexFormula";
+import { mhchemSpanEnd, scanMhchemBody } from "./mhchemSpan";
 import { isConfidentToken, shapeOf } from "./proseTokenRules";
 import { occurrenceAt, type ScanSink, type SpeciesReader } from "./speciesReader";
 
@@ -55,6 +56,7 @@ const OPERATORS =
 /** Reads each species of the math content `text[start, end)` into `sink`. */
 export function scanLatexMath(text: string, start: number, end: number, read: SpeciesReader, sink: ScanSink): void {
   for (const word of mathWords(text, start, end)) {
+    if (readMhchemSpans(text, word.start, word.end, read, sink)) continue;
     let wordStart = word.start;
     let wordEnd = word.end;
     while (wordEnd > wordStart && /[,;.]/.test(text[wordEnd - 1])) wordEnd--;
@@ -78,6 +80,22 @@ export function scanLatexMath(text: string, start: number, end: number, read: Sp
     if (quantities.length > 0) for (const [from, to] of quantities) readMathPiece(text, ...withoutFace(text, from, to), read, sink);
     else readFaceGroups(text, wordStart, wordEnd, read, sink);
   }
+}
+
+/**
+ * The `\ce{...}` spans in the math word `text[start, end)`, read as mhchem; false when it has none.
+ * mhchem works in math as in text (a `.. math::` block, a `:math:` role, an AsciiDoc stem block).
+ */
+function readMhchemSpans(text: string, start: number, end: number, read: SpeciesReader, sink: ScanSink): boolean {
+  let found = false;
+  for (let open = text.indexOf("\\ce{", start); open >= 0 && open < end; open = text.indexOf("\\ce{", open + 1)) {
+    const spanEnd = mhchemSpanEnd(text, open, end);
+    if (spanEnd < 0) continue;
+    scanMhchemBody(text, open + 4, spanEnd - 1, read, sink);
+    found = true;
+    open = spanEnd - 1;
+  }
+  return found;
 }
 
 /**

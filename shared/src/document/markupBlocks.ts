@@ -8,7 +8,8 @@
  * - LaTeX: verbatim-like environments (`verbatim`, `lstlisting`, `minted`, `comment`), and text
  *   hidden by `\iffalse ... \fi` (a line that opens it, to its `\fi` or `\else`).
  * - AsciiDoc: listing (`----`), literal (`....`), comment (`////`) and passthrough (`++++`)
- *   blocks; a `[source]`, `[listing]` or `[literal]` paragraph; a literal paragraph (its first
+ *   blocks; a `[source]`, `[listing]`, `[literal]` or `[asciimath]` paragraph; a `[stem]` or
+ *   `[latexmath]` block or paragraph, read as math; a literal paragraph (its first
  *   line indented); block macros (`image::...[]`, `include::...[]`).
  * - reStructuredText: literal blocks (`::` and its indented block), code directives, comments
  *   (`..` and its indented block), hyperlink targets and substitution definitions, and the
@@ -172,8 +173,10 @@ function optionLinesEnd(text: string, start: number, indent: number): number {
 
 /** A delimiter line of a block that is not prose: listing, literal, comment, passthrough. */
 const ASCIIDOC_DELIMITER = /^(-{4,}|\.{4,}|\/{4,}|\+{4,})$/;
-/** A block style that makes the next block code. */
-const ASCIIDOC_CODE_STYLE = /^\[\s*(?:source|listing|literal)\s*(?:[,#.%][^\]]*)?\]$/;
+/** A block style that makes the next block code (AsciiMath is a notation we do not read). */
+const ASCIIDOC_CODE_STYLE = /^\[\s*(?:source|listing|literal|asciimath)\s*(?:[,#.%][^\]]*)?\]$/;
+/** A block style that makes the next block LaTeX math, where mhchem's `\ce{...}` works as in text. */
+const ASCIIDOC_MATH_STYLE = /^\[\s*(?:stem|latexmath)\s*(?:[,#.%][^\]]*)?\]$/;
 /** A list item, which may be indented: `* NF3`, `. purge`, `1. purge`, `a. purge`, `- NF3`. */
 const ASCIIDOC_LIST_ITEM = /^[ \t]*(?:\*{1,5}|\.{1,5}|-|\d+\.|[a-zA-Z]\.)[ \t]+\S/;
 /** A block macro such as `image::diagram.png[]` or `include::chapter.adoc[]`. */
@@ -184,14 +187,15 @@ function asciidocBlock(text: string, line: MarkupLine): MarkupBlock | undefined 
   const next = Math.min(text.length, line.end + 1);
   if (ASCIIDOC_DELIMITER.test(line.text)) return { kind: "code", start: line.start, end: delimitedBlockEnd(text, next, line.text) };
   if (ASCIIDOC_BLOCK_MACRO.test(line.text)) return { kind: "code", start: line.start, end: next };
-  if (ASCIIDOC_CODE_STYLE.test(line.text)) {
+  const math = ASCIIDOC_MATH_STYLE.test(line.text);
+  if (math || ASCIIDOC_CODE_STYLE.test(line.text)) {
     // The style line with the block after it: a delimited block, or else a paragraph.
     const following = text.slice(next, Math.min(endOfLine(text, next), next + 200)).trimEnd();
     if (following.length === 0) return undefined;
     const end = ASCIIDOC_DELIMITER.test(following)
       ? delimitedBlockEnd(text, Math.min(text.length, endOfLine(text, next) + 1), following)
       : paragraphEnd(text, next);
-    return { kind: "code", start: line.start, end };
+    return { kind: math ? "math" : "code", start: line.start, end };
   }
   // A literal paragraph: its first line indented (an indented list item is still a list item).
   if (!line.inParagraph && /^[ \t]+\S/.test(line.text) && !ASCIIDOC_LIST_ITEM.test(line.text))

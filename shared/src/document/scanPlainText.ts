@@ -189,12 +189,17 @@ export function* plainTextUnits(text: string, markup: TextMarkup = "plaintext"):
   if (paragraphStart >= 0) yield { kind: "prose", start: paragraphStart, end: text.length };
 }
 
-/** Each line of a math block, read as LaTeX math (directive options such as ":label:" skipped). */
+/**
+ * Each line of a math block, read as LaTeX math: not a directive's options (":label:") nor the
+ * block style and delimiters of an AsciiDoc stem block ("[latexmath]", "++++").
+ */
 function scanMathLines(text: string, start: number, end: number, read: SpeciesReader, sink: ScanSink): void {
   let position = start;
   while (position < end) {
     const lineEnd = Math.min(endOfLine(text, position), end);
-    if (!/^\s*:[a-z-]+:/.test(text.slice(position, lineEnd))) scanLatexMath(text, position, lineEnd, read, sink);
+    if (!MATH_BLOCK_MARKUP.test(text.slice(position, lineEnd))) scanLatexMath(text, position, lineEnd, read, sink);
     position = lineEnd + 1;
   }
 }
+
+const MATH_BLOCK_MARKUP = /^\s*:[a-z-]+:|^\[[a-z][^\]]*\]\s*$|^(?:\+{4,}|\.{4,}|-{4,})\s*$/;
