@@ -109,6 +109,26 @@ describe("a charge column gives the row's species its charge", () => {
   });
 });
 
+describe("minus signs alone in a charge column", () => {
+  // A lone "-" is a placeholder in any other column; here a name of the row with that charge says it is the charge.
+  // from memory: hydroxide OH-, chloride Cl-, sulfate SO4 2-; water is neutral
+  it.each([
+    ["hydroxide,OH,-,8", "OH", "OH^-"],
+    ["chloride,Cl,\u2212,8", "Cl", "Cl^-"],
+    ["sulfate,SO4,--,32", "SO4", "SO4^2-"],
+    ["water,H2O,-,8", "H2O", "H2O"],
+    ["sulfate,SO4,-,32", "SO4", "ambiguous-connectivity"],
+  ])("%j: %s is %s", (row, formula, expected) => {
+    const text = `Name,Formula,Charge,Valence electrons\n${row}\n`;
+    expect(speciesAt(text, "csv", `,${formula},`)).toBe(expected);
+    expect(findingsOf(text, "csv").filter((finding) => finding.severity === "warning" || finding.severity === "error")).toEqual([]);
+  });
+
+  it("without a name, a lone minus says nothing", () => {
+    expect(speciesAt("Formula,Charge\nOH,-\n", "csv", "OH")).toBe("OH");
+  });
+});
+
 describe("a charge column that contradicts the formula", () => {
   it.each([
     ["NH4+", "-1", "+1"],

@@ -69,9 +69,16 @@ export function addRecord(fields: readonly RecordField[], read: SpeciesReader, s
   const naming: RecordField[] = [];
   let cells: TableCell[] = [];
   let chargeCell: TableCell | undefined;
+  // A charge cell of minus signs alone: a placeholder, or the charge itself ("hydroxide, OH, -").
+  let dashes: TableCell | undefined;
   for (const written of fields) {
     const field = trimmedField(written);
-    if (field.text.length === 0 || isPlaceholder(field.text)) continue;
+    if (field.text.length === 0) continue;
+    if (isPlaceholder(field.text)) {
+      if (field.meaning === "charge" && MINUS_SIGNS.test(field.text))
+        dashes ??= { meaning: "charge", range: field.range, text: field.text };
+      continue;
+    }
     if (field.meaning === "constituent") {
       constituentOf(field, read, sink);
       continue;
@@ -84,6 +91,10 @@ export function addRecord(fields: readonly RecordField[], read: SpeciesReader, s
     }
   }
   if (naming.length === 0) return;
+  if (!chargeCell && dashes && namedWithCharge(naming, chargeOfCell(dashes.text), read)) {
+    chargeCell = dashes;
+    cells.push(dashes);
+  }
   // Every species the row names carries the row's charge; one that cannot is read as written.
   const rowCharge = chargeCell && chargeOfCell(chargeCell.text);
   let uncharged: Set<SpeciesOccurrence> | undefined;
@@ -189,6 +200,20 @@ function namesOpeningCellOf(field: RecordField, read: SpeciesReader): readonly S
   if (field.meaning !== "species" || field.formulaHeader) return undefined;
   const named = namesOpeningCell(field, read);
   return named && named[0].reading.notation === "name" ? named : undefined;
+}
+
+const MINUS_SIGNS = /^[-\u2212\u2013]{1,3}$/;
+
+/**
+ * Whether a name in the row reads as a species of charge `charge`: "hydroxide" beside "-" says
+ * the dash is the charge −1, where "water" beside "-" says the cell is empty.
+ */
+function namedWithCharge(naming: readonly RecordField[], charge: number | undefined, read: SpeciesReader): boolean {
+  if (charge === undefined) return false;
+  return naming.some((field) => {
+    const result = field.meaning === "smiles" ? undefined : read(field.text);
+    return result?.ok === true && result.value.notation === "name" && result.value.charge === charge;
+  });
 }
 
 /**
