@@ -135,12 +135,7 @@ function overlapping(findings: readonly Finding[], start: number, end: number): 
  * A version of `state`, whose unread parts are read as they are needed. Should a part not read
  * cleanly, the text is read whole and the state is forgotten (the next edit reads afresh too).
  */
-function versionOf<State extends ListParts>(
-  state: State,
-  kind: ListKind<State>,
-  reading: StateReading<State>,
-  step: number,
-): ListVersion {
+function versionOf<State extends ListParts>(state: State, kind: ListKind<State>, reading: StateReading<State>, step: number): ListVersion {
   const count = state.starts.length;
   let all: readonly Finding[] | undefined;
   /** The plain reading, once a part did not read cleanly. */
