@@ -18,7 +18,7 @@ const FLOORS: Readonly<Record<string, { readonly precision: number; readonly rec
   "handbook-tsv": { precision: 0.98, recall: 0.96 },
   "html-markdown": { precision: 0.98, recall: 0.97 },
   "inventory-csv": { precision: 0.98, recall: 0.94 },
-  "latex-notes": { precision: 0.97, recall: 0.95 },
+  "latex-notes": { precision: 0.97, recall: 0.96 },
   "plain-text": { precision: 0.98, recall: 0.97 },
   restructuredtext: { precision: 0.98, recall: 0.96 },
   "wiki-markup": { precision: 0.98, recall: 0.98 },
