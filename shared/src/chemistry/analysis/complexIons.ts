@@ -7,6 +7,7 @@
  */
 import { elementBySymbol } from "../elements";
 import { metalIonCharges } from "./metalIonCharges";
+import { ateNameOf } from "../reader/names/ateNames";
 
 // common practice: the charges of the common ligands as counted when working out a metal's
 // oxidation state in a complex (nitrosyl counted as NO+, as in nitroprusside).
@@ -94,22 +95,6 @@ const LIGAND_NAMES: ReadonlyMap<string, string> = new Map([
 
 const COUNT_PREFIXES: readonly string[] = ["", "", "di", "tri", "tetra", "penta", "hexa"];
 
-/** Anion names of metals whose Latin root is used: ferrate, cuprate, argentate. */
-const ANION_ROOTS: ReadonlyMap<string, string> = new Map([
-  ["Fe", "ferrate"],
-  ["Cu", "cuprate"],
-  ["Ag", "argentate"],
-  ["Au", "aurate"],
-  ["Pt", "platinate"],
-  ["Co", "cobaltate"],
-  ["Ni", "nickelate"],
-  ["Cr", "chromate"],
-  ["Mn", "manganate"],
-  ["Zn", "zincate"],
-  ["Hg", "mercurate"],
-  ["Pd", "palladate"],
-]);
-
 const ROMAN: readonly string[] = ["0", "I", "II", "III", "IV", "V", "VI"];
 
 /**
@@ -132,6 +117,6 @@ export function complexName(complex: ComplexIon, charge: number): string | undef
   const oxidationState = charge - complex.ligandCharge;
   const numeral = ROMAN[oxidationState];
   if (numeral === undefined || oxidationState < 1) return undefined;
-  const metalName = charge < 0 ? ANION_ROOTS.get(complex.metal) : elementBySymbol(complex.metal)?.name.toLowerCase();
+  const metalName = charge < 0 ? ateNameOf(complex.metal) : elementBySymbol(complex.metal)?.name.toLowerCase();
   return metalName === undefined ? undefined : `${ligandText}${metalName}(${numeral})`;
 }

@@ -18,6 +18,8 @@ import { ION_NAMES } from "../reader/names/ionNames";
 import { compositionKey } from "../vsepr/measuredAngles";
 import { prefixFor } from "../reader/names/greekPrefixes";
 import { acidNameOf } from "../reader/names/acidNames";
+import { haloComplexAnionName } from "../reader/names/haloComplexNames";
+import { haloComplexParts } from "./haloComplexAnions";
 
 /** How a part's formula is analysed: the memoised analysis of the whole core. */
 export type AnalyzeText = (text: string) => AnalysisResult;
@@ -93,7 +95,7 @@ function dBlockCations(ions: readonly SaltIon[]): string[] {
 function saltName(ions: readonly SaltIon[]): string | undefined {
   // "tetrachloroauric(III) acid" for H+ and tetrachloroaurate(III)
   if (ions.length === 2 && isHydrogenIon(ions[0])) {
-    const anion = ionNameFor(ions[1].formula) ?? complexNameFor(ions[1]);
+    const anion = anionOrComplexName(ions[1]);
     return anion === undefined ? undefined : acidNameOf(anion);
   }
   const words: string[] = [];
@@ -107,11 +109,20 @@ function saltName(ions: readonly SaltIon[]): string | undefined {
       k++;
       continue;
     }
-    const word = ion.monatomic ? monatomicIonName(ion) : (ionNameFor(ion.formula) ?? complexNameFor(ion));
+    const word = ion.monatomic ? monatomicIonName(ion) : anionOrComplexName(ion);
     if (word === undefined) return undefined;
     words.push(word);
   }
   return words.join(" ");
+}
+
+/** A polyatomic ion's listed name, or its name as a complex ("hexachloroplatinate(IV)", "hexafluoroaluminate"). */
+function anionOrComplexName(ion: SaltIon): string | undefined {
+  const listed = ionNameFor(ion.formula) ?? complexNameFor(ion);
+  if (listed !== undefined) return listed;
+  const read = readFormulaSpan(ion.formula, 0, ion.formula.length, "formula");
+  const halo = read.ok ? haloComplexParts(read.value.composition) : undefined;
+  return halo === undefined ? undefined : haloComplexAnionName(halo, ion.charge);
 }
 
 /** "tetraamminecopper(II)" for the complex ion Cu(NH3)4^2+. */

@@ -20,7 +20,8 @@ const NOT_CENTRES = new Set(["C", "N", "O", "F", "He", "Ne", "Ar", "Kr", "Rn"]);
 
 /**
  * The oxidation states the central atom may have in a halo complex, highest first: a p-block
- * element's group state and those two, four... below it (iodine +7, +5, +3, +1); a d-block
+ * element's group state and, from group 15 on or below period 3, those two, four... below it
+ * (iodine +7, +5, +3, +1; tin +4, +2; boron, aluminium and silicon only +3, +3 and +4); a d-block
  * metal's usual ion charges. Empty for an element that is no such centre.
  */
 export function haloCentreOxidationStates(symbol: string): readonly number[] {
@@ -31,8 +32,10 @@ export function haloCentreOxidationStates(symbol: string): readonly number[] {
   // common practice: p-block oxidation states step by two from the group's highest
   if (element.category !== "main-group" && element.category !== "noble-gas") return [];
   if (element.group < 13) return [];
+  const highest = element.group - 10;
+  if (element.group < 15 && element.period <= 3) return [highest];
   const states: number[] = [];
-  for (let state = element.group - 10; state >= 1; state -= 2) states.push(state);
+  for (let state = highest; state >= 1; state -= 2) states.push(state);
   return states;
 }
 
@@ -61,10 +64,12 @@ export function haloComplexParts(composition: readonly FormulaPart[]): HaloCompl
 
 /**
  * The charges of a halo complex written as a bare formula in a salt (PtCl6 of K2PtCl6), where it
- * holds four to six halides; empty otherwise.
+ * holds four to six halides, or two or more about a halogen (the polyhalide ICl2 of KICl2); empty
+ * otherwise.
  */
 export function bareHaloComplexCharges(composition: readonly FormulaPart[]): readonly number[] {
   const parts = haloComplexParts(composition);
-  if (parts === undefined || parts.halides < FEWEST_HALIDES || parts.halides > MOST_HALIDES) return [];
+  if (parts === undefined || parts.halides > MOST_HALIDES) return [];
+  if (parts.halides < (HALIDES.has(parts.centre) ? 2 : FEWEST_HALIDES)) return [];
   return haloComplexCharges(parts.centre, parts.halides);
 }

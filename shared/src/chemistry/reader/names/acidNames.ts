@@ -4,6 +4,7 @@
  * sulfate SO4 2- -> sulfuric acid H2SO4). The anions are the ones the ion vocabulary lists.
  */
 import { ION_NAMES } from "./ionNames";
+import { haloComplexAnionByName } from "./haloComplexNames";
 
 export interface AcidName {
   readonly name: string;
@@ -52,7 +53,19 @@ function acidsByName(): ReadonlyMap<string, AcidName> {
 
 /** The acid with this lower-case, single-spaced name ("chlorous acid"), or undefined. */
 export function acidByName(name: string): AcidName | undefined {
-  return name.endsWith(" acid") ? acidsByName().get(name) : undefined;
+  if (!name.endsWith(" acid")) return undefined;
+  return acidsByName().get(name) ?? haloComplexAcid(name);
+}
+
+/** "hexachloroplatinic acid", "tetrachloroauric(iii) acid": the acid of a halo-complex anion named by rule. */
+function haloComplexAcid(name: string): AcidName | undefined {
+  const match = /^(\S+)ic(\([ivx]+\))? acid$/.exec(name);
+  if (match === null) return undefined;
+  const stem = match[1].endsWith("phosphor") ? match[1].slice(0, -2) : match[1];
+  const anion = haloComplexAnionByName(`${stem}ate${match[2] ?? ""}`);
+  if (anion === undefined) return undefined;
+  const hydrogens = -anion.charge;
+  return { name, formula: `H${hydrogens > 1 ? hydrogens : ""}${anion.body}` };
 }
 
 /** Every acid name the rule gives, for naming formulas and for spotting names in prose. */

@@ -12,6 +12,7 @@ import { NONMETALS } from "../nonmetals";
 import { anionRootByName, anionRootBySymbol } from "./anionRoots";
 import { joinPrefix, prefixFor, prefixReadings } from "./greekPrefixes";
 import { ionByName } from "./ionNames";
+import { haloComplexAnionByName } from "./haloComplexNames";
 import { assumedCationCharge, cationByOldName, metalCation, type MetalCation } from "./metalCations";
 
 const ROMAN_NUMERALS: readonly string[] = ["i", "ii", "iii", "iv", "v", "vi", "vii", "viii"];
@@ -255,7 +256,7 @@ function cationPart(cation: MetalCation | undefined): NamedPart | undefined {
 /** Every reading of the anion words: a listed ion first, then a prefixed "-ide" root. */
 function readAnionWords(words: readonly string[]): NamedPart[] {
   const readings: NamedPart[] = [];
-  const ion = ionByName(words.join(" "));
+  const ion = ionByName(words.join(" ")) ?? (words.length === 1 ? haloComplexAnionByName(words[0]) : undefined);
   if (ion !== undefined && ion.charge < 0) {
     readings.push({ body: ion.body, singleElement: false, count: 1, prefixed: false, charge: ion.charge });
   }

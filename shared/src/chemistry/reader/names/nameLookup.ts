@@ -17,6 +17,7 @@ import { smilesForOrganicName } from "./organicNames";
 import { NETWORK_SOLID_NAMES } from "./networkSolidNames";
 import { NAME_SYNONYMS } from "./synonyms";
 import { GREEK_PREFIXES } from "./greekPrefixes";
+import { haloComplexAnionByName } from "./haloComplexNames";
 import { compareCodeUnits, sortSmall } from "../../sortSmall";
 
 /**
@@ -85,6 +86,8 @@ function listedOrRuleName(name: string): NameMatch | undefined {
   }
   const ion = ionByName(name);
   if (ion !== undefined) return { formula: ion.body + chargeText(ion.charge), name, listed: true };
+  const complex = haloComplexAnionByName(name);
+  if (complex !== undefined) return { formula: complex.body + chargeText(complex.charge), name: complex.name, listed: false };
   const root = anionRootByName(name);
   if (root !== undefined) return { formula: root.symbol + chargeText(root.charge), name, listed: true };
   // an element named as a substance ("zinc" granules, "sulfur" in an inventory)
