@@ -86,7 +86,59 @@ function placedAt(finding: Finding, range: TextRange): Finding {
   return finding.choices ? { ...placed, choices: finding.choices.map((choice) => ({ ...choice, range })) } : placed;
 }
 
+/** What a one-value cell about "the" centre says of each centre, for species with several. */
+const CENTRE_VALUES: Partial<Record<TableCell["meaning"], (centre: CentreAnalysis) => string>> = {
+  lonePairs: (centre) => `${centre.lonePairs} lone pair${centre.lonePairs === 1 ? "" : "s"}`,
+  axe: (centre) => centre.axe,
+  electronGeometry: (centre) => centre.electronGeometry,
+  molecularGeometry: (centre) => centre.molecularGeometry,
+  hybridization: (centre) => centre.hybridization,
+  bondAngle: (centre) => `${centre.idealAngles.map((angle) => `${angle}°`).join("/")} ideal`,
+};
+
 function checkCell(cell: TableCell, species: string, analysis: SpeciesAnalysis, centre: CentreAnalysis | undefined): Finding | undefined {
+  const valueOf = CENTRE_VALUES[cell.meaning];
+  if (valueOf && analysis.centres.length > 1 && !isPerCentre(cell.text)) return checkAnyCentre(cell, species, analysis, valueOf);
+  return checkOneCentre(cell, species, analysis, centre);
+}
+
+/**
+ * One value for a species with several centres ("trigonal planar" for CH3COCH3, "bent" for
+ * CH3CH2OH): the writer describes one of them, so the value is right when some centre has it.
+ * Otherwise the finding lists the centres, with no fix: which one was meant is not for lonepair
+ * to guess.
+ */
+function checkAnyCentre(
+  cell: TableCell,
+  species: string,
+  analysis: SpeciesAnalysis,
+  valueOf: (centre: CentreAnalysis) => string,
+): Finding | undefined {
+  const centres = analysis.centres.filter(
+    (centre, index) => analysis.centres.findIndex((other) => other.atom === centre.atom && valueOf(other) === valueOf(centre)) === index,
+  );
+  let first: Finding | undefined;
+  for (const centre of centres) {
+    const finding = checkOneCentre(cell, species, analysis, centre);
+    if (!finding) return undefined;
+    first ??= finding;
+  }
+  if (!first) return undefined;
+  const listed = centres.map((centre) => `${centre.atom} ${valueOf(centre)}`).join(", ");
+  return {
+    range: first.range,
+    severity: first.severity,
+    code: first.code,
+    message: `No centre of ${species} fits "${cell.text.trim()}" ${MODEL}: ${listed}.`,
+  };
+}
+
+function checkOneCentre(
+  cell: TableCell,
+  species: string,
+  analysis: SpeciesAnalysis,
+  centre: CentreAnalysis | undefined,
+): Finding | undefined {
   switch (cell.meaning) {
     case "valenceElectrons":
       return checkCount(
