@@ -108,6 +108,46 @@ describe("checkDocument on data tables", () => {
     expect(findings(`formula,${column}\n${species},${cell}\n`, "csv")).toEqual([]);
   });
 
+  it.each([
+    // [column, species, cell] — one value for a species with several centres names one of them
+    ["molecular geometry", "CH3COCH3", "trigonal planar"],
+    ["molecular geometry", "CH3COCH3", "tetrahedral"],
+    ["molecular geometry", "CH3CH2OH", "bent"],
+    ["molecular geometry", "CH3OCH3", "bent"],
+    ["molecular geometry", "CH3COOH", "trigonal planar"],
+    ["hybridization", "CH3COCH3", "sp2"],
+    ["hybridization", "CH3CN", "sp"],
+    ["lone pairs", "CH3OH", "2"],
+    ["axe", "CH3OH", "AX2E2"],
+  ])("accepts %s %j for %s, a species with several centres", (column, species, cell) => {
+    // from memory: carbonyl carbons are trigonal planar and sp2, ether and alcohol oxygens bent
+    // with two lone pairs, nitrile carbons sp; any general chemistry text
+    expect(findings(`formula,${column}\n${species},${cell}\n`, "csv")).toEqual([]);
+  });
+
+  it("lists the centres, with no fix, when no centre of such a species fits", () => {
+    // from memory: acetone has a tetrahedral methyl carbon and a trigonal planar carbonyl carbon
+    const found = checkDocument(analyzeDocument("formula,molecular geometry\nCH3COCH3,square planar\n", "csv"));
+    expect(found.map((finding) => [finding.code, finding.message, finding.fix])).toEqual([
+      [
+        "table-molecular-geometry",
+        'No centre of CH3COCH3 fits "square planar" (VSEPR model prediction): C tetrahedral, C trigonal planar.',
+        undefined,
+      ],
+    ]);
+  });
+
+  it.each([
+    // [name, formula, valence electrons cell, findings]
+    ["Acetone", "C3H6O", "24", []],
+    ["Propanal", "C3H6O", "22", [["table-valence-electrons", "22", "24"]]],
+    ["Dimethyl ether", "C2H6O", "20", []],
+    ["", "C3H6O", "24", [["ambiguous-connectivity", "C3H6O", "-"]]],
+  ])("a name (%j) beside an ambiguous molecular formula %s says which structure is meant", (name, formula, electrons, expected) => {
+    // from memory: C3H6O has 3 x 4 + 6 x 1 + 6 = 24 valence electrons, C2H6O 2 x 4 + 6 + 6 = 20
+    expect(findings(`name,formula,valence electrons\n${name},${formula},${electrons}\n`, "csv")).toEqual(expected);
+  });
+
   it("reports rejected prose species at the token and leaves look-alike words alone", () => {
     const text = "Run 14 found CH5 in the log. He said In and As were fine; pH 7, 5 mL, lot KR-0412.";
     // common practice: carbon holds at most four electron pairs

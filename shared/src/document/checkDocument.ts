@@ -76,19 +76,32 @@ function checkModel(
     for (const other of record.otherNames ?? []) if (sameSpecies(other, record.species)) echoes.add(other);
   }
 
+  // "Acetone, C3H6O": a name with the formula's composition says which of the structures the
+  // formula allows is meant, so the formula's request for a structure would be noise, and the
+  // row's cells are checked against the named species.
+  const settledBy = new Map<string, SpeciesOccurrence>();
+  for (const record of model.records) {
+    const pair = record.nameBesideFormula;
+    if (pair && sameComposition(pair.name, pair.formula)) settledBy.set(rangeKey(pair.formula), pair.name);
+  }
+  const settles = (occurrence: SpeciesOccurrence, result: AnalysisResult | undefined): SpeciesOccurrence | undefined =>
+    result && !result.ok && result.problem.code === "ambiguous-connectivity" ? settledBy.get(rangeKey(occurrence)) : undefined;
+
   const findings: Finding[] = [];
   for (const unreadable of model.unreadable ?? []) findings.push(unreadableFinding(unreadable, analyze));
   for (const occurrence of model.occurrences) {
     if (echoes.has(occurrence) || occurrence.inferred) continue;
     const result = analysisOf(occurrence);
-    if (!result) continue;
+    if (!result || settles(occurrence, result)) continue;
     if (!result.ok) {
       // "4 Al + 3 O2": the metal itself, right as written; its hover says what it is.
       if (result.problem.code !== "metallic-element") findings.push(problemFinding(occurrence, result.problem, analyze));
     } else if (result.value.radical) findings.push(radicalFinding(occurrence, result.value.valenceElectrons));
   }
   for (const record of model.records) {
-    const result = analysisOf(record.species);
+    let result = analysisOf(record.species);
+    const name = settles(record.species, result);
+    if (name) result = analysisOf(name);
     if (result?.ok) checkRecord(record, result.value, findings);
     const pair = record.nameBesideFormula;
     const disagreement = pair && nameFormula(pair, model.kind, () => nameFitsCells(record, pair.name, analysisOf));
@@ -113,6 +126,20 @@ function nameFitsCells(
   const current = analysisOf(record.species);
   const before = current?.ok ? checkRecord(record, current.value).length : 0;
   return checkRecord({ species: name, cells: record.cells }, named.value).length <= before;
+}
+
+/** The same elements in the same numbers, and the same charge. */
+function sameComposition(a: SpeciesOccurrence, b: SpeciesOccurrence): boolean {
+  if (a.reading.charge !== b.reading.charge) return false;
+  const counts = new Map<string, number>();
+  for (const part of a.reading.composition) counts.set(part.symbol, (counts.get(part.symbol) ?? 0) + part.count);
+  for (const part of b.reading.composition) counts.set(part.symbol, (counts.get(part.symbol) ?? 0) - part.count);
+  for (const count of counts.values()) if (count !== 0) return false;
+  return true;
+}
+
+function rangeKey(occurrence: SpeciesOccurrence): string {
+  return `${occurrence.range.start}:${occurrence.range.end}`;
 }
 
 function sameSpecies(a: SpeciesOccurrence, b: SpeciesOccurrence): boolean {
