@@ -1,8 +1,9 @@
 /**
  * Whether one lone pair of an atom joins a pi system and so takes no site of its own: lone-pair
  * atoms inside aromatic rings (pyrrole N, furan O, thiophene S), and three-bonded N next to a
- * carbon with a multiple bond or an aromatic carbon (amides, anilines). The O of an ester or
- * acid keeps its bent, sp3-like angle.
+ * carbon with a multiple bond or an aromatic carbon (amides, anilines), or next to a boron with
+ * only six electrons, whose empty p orbital takes the pair into a B-N pi bond (aminoboranes,
+ * H2N-BH2 planar like ethene). The O of an ester or acid keeps its bent, sp3-like angle.
  */
 import { graphIndex } from "../graphIndex";
 import type { MolecularGraph } from "../types";
@@ -18,6 +19,8 @@ export function lonePairJoinsPiSystem(graph: MolecularGraph, index: number): boo
   if (atom.symbol !== "N" || own.length !== 3) return false;
   return own.some(({ atom: other }) => {
     const neighbour = graph.atoms[other];
+    // three bonds' worth and no lone pair: a sextet with an empty p orbital
+    if (neighbour.symbol === "B") return neighbour.lonePairs === 0 && bondOrderSums[other] === 3;
     if (neighbour.symbol !== "C") return false;
     return neighbour.aromatic === true || bondOrderSums[other] > neighbours[other].length;
   });
