@@ -296,6 +296,8 @@ function isLeadingPunctuation(code: number): boolean {
 
 /** Formula tokens inside one chunk, e.g. "(SF4)," or "NF3/SF6" or "NH4+". */
 function scanFormulas(scan: ProseScan, start: number, end: number): void {
+  // Most words hold no bond mark: looked for once per word, not at every capital.
+  const bondMarks = BOND_MARK.test(scan.text.slice(start, end));
   const { text } = scan;
   let index = start;
   while (index < end) {
@@ -306,7 +308,7 @@ function scanFormulas(scan: ProseScan, start: number, end: number): void {
       index = massStart < index ? formulaToken(scan, massStart, end, index - massStart) : index + 1;
       continue;
     }
-    const bonded = bondedRunEnd(scan, index, end, start);
+    const bonded = bondMarks ? bondedRunEnd(scan, index, end, start) : index;
     index = bonded > index ? bonded : formulaToken(scan, index, end);
   }
 }
@@ -322,7 +324,6 @@ const BONDED_RUN = /[A-Z([][A-Za-z0-9()[\]]*(?:[-\u2013=\u2261][A-Z([][A-Za-z0-9
  */
 function bondedRunEnd(scan: ProseScan, index: number, end: number, chunkStart: number): number {
   const { text } = scan;
-  if (!BOND_MARK.test(text.slice(index, end))) return index;
   // "SO2+O2=SO3": an equation typed without spaces uses "=" as its arrow.
   if (EQUATION_SIGN.test(text.slice(chunkStart, end))) return index;
   BONDED_RUN.lastIndex = index;
@@ -333,6 +334,7 @@ function bondedRunEnd(scan: ProseScan, index: number, end: number, chunkStart: n
   while (runEnd > index && runEnd <= end && isClose(text.charCodeAt(runEnd - 1)) && depthOf(text, index, runEnd) < 0) runEnd--;
   if (runEnd > end || (runEnd < end && isWordCharacter(text.charCodeAt(runEnd)))) return index;
   const run = text.slice(index, runEnd);
+  if (!BOND_MARK.test(run)) return index;
   const groups = run.split(/[-\u2013=\u2261]/);
   const loneAtoms = groups.every((group) => /^[A-Z][a-z]?$/.test(group));
   if (loneAtoms && (groups.length < 3 || groups.every((group) => group === "C"))) return runEnd;
