@@ -8,7 +8,7 @@ import { analyzeSpecies } from "../chemistry/analyze";
 import { chooseRespelling } from "../chemistry/analysis/respelling";
 import type { AnalysisResult, Problem } from "../chemistry/types";
 import { analyzeOccurrence, speciesTextOf } from "./analyzeOccurrence";
-import { nameFormulaChecker, type NameFormulaCheck } from "./checks/nameFormulaAgreement";
+import { nameFormulaChecker, sameComposition, type NameFormulaCheck } from "./checks/nameFormulaAgreement";
 import { checkRecord } from "./checks/recordChecks";
 import { severityOf } from "./findingSeverity";
 import { isSafeSpellingFix, type AnalyzeText } from "./fixPolicy";
@@ -82,7 +82,7 @@ function checkModel(
   const settledBy = new Map<string, SpeciesOccurrence>();
   for (const record of model.records) {
     const pair = record.nameBesideFormula;
-    if (pair && sameComposition(pair.name, pair.formula)) settledBy.set(rangeKey(pair.formula), pair.name);
+    if (pair && sameComposition(pair.name.reading, pair.formula.reading)) settledBy.set(rangeKey(pair.formula), pair.name);
   }
   const settles = (occurrence: SpeciesOccurrence, result: AnalysisResult | undefined): SpeciesOccurrence | undefined =>
     result && !result.ok && result.problem.code === "ambiguous-connectivity" ? settledBy.get(rangeKey(occurrence)) : undefined;
@@ -126,16 +126,6 @@ function nameFitsCells(
   const current = analysisOf(record.species);
   const before = current?.ok ? checkRecord(record, current.value).length : 0;
   return checkRecord({ species: name, cells: record.cells }, named.value).length <= before;
-}
-
-/** The same elements in the same numbers, and the same charge. */
-function sameComposition(a: SpeciesOccurrence, b: SpeciesOccurrence): boolean {
-  if (a.reading.charge !== b.reading.charge) return false;
-  const counts = new Map<string, number>();
-  for (const part of a.reading.composition) counts.set(part.symbol, (counts.get(part.symbol) ?? 0) + part.count);
-  for (const part of b.reading.composition) counts.set(part.symbol, (counts.get(part.symbol) ?? 0) - part.count);
-  for (const count of counts.values()) if (count !== 0) return false;
-  return true;
 }
 
 function rangeKey(occurrence: SpeciesOccurrence): string {

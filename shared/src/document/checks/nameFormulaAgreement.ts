@@ -166,6 +166,11 @@ function agree(name: SpeciesReading, formula: SpeciesReading, chargeOpen: boolea
   return chargeOpen && formula.charge === name.charge && sameElements(named, written);
 }
 
+/** The same elements in the same numbers, and the same charge: one molecular formula. */
+export function sameComposition(a: SpeciesReading, b: SpeciesReading): boolean {
+  return a.charge === b.charge && sameCounts(countsOf(a), countsOf(b));
+}
+
 function sameCounts(a: Counts, b: Counts): boolean {
   if (a.size !== b.size) return false;
   for (const [symbol, count] of a) if (b.get(symbol) !== count) return false;
