@@ -216,7 +216,7 @@ function versionOf<State extends ListParts>(state: State, kind: ListKind<State>,
       const from = Math.max(0, lastAtOrBefore(state.starts, start));
       const to = Math.max(from, lastAtOrBefore(state.starts, end));
       if (!partsRead(from, to)) return overlapping(whole!, start, end);
-      const found: Finding[] = overlapping(state.frame!.before, start, end);
+      const found: Finding[] = [...state.frame!.before];
       for (let index = from; index <= to; index++) {
         for (const finding of state.partFindings[index]!) found.push(moved(finding, state.starts[index]));
       }
