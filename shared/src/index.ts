@@ -172,3 +172,5 @@ export type { ChunkedText, ChunkedTextBuilder, LineAndCharacter, TextChunk } fro
 export { createDocumentAnalyser } from "./document/incrementalAnalysis";
 export type { DocumentAnalyser, DocumentAnalysis } from "./document/incrementalAnalysis";
 export type { FindingPart } from "./document/findingPart";
+export { NOTES_SHOWN_AS, isNotesShownAs, shownFindings, shownParts, shownSeverity } from "./document/notesShownAs";
+export type { NotesShownAs } from "./document/notesShownAs";

@@ -90,6 +90,39 @@ describe("check over examples/", () => {
   });
 });
 
+describe("check --notes", () => {
+  // The three notes of examples/: WF6 (a transition-metal centre, in the CSV read as bytes),
+  // ZnSe and CaF2 (ionic solids, in markdown read in batches).
+  const NOTE_CODES = ["transition-metal-centre", "ionic-solid", "ionic-solid"];
+
+  it.each([
+    // [--notes, severity of each note, or none when left out]
+    ["information", "information"],
+    ["hint", "hint"],
+    ["off", undefined],
+  ])("--notes %s shows the notes as %s and leaves errors and warnings as they are", (notesAs, noteSeverity) => {
+    const all = checkJson("examples").findings;
+    const { status, findings } = checkJson("--notes", notesAs, "examples");
+    expect(status).toBe(1);
+    const isNote = (finding: JsonFinding) => NOTE_CODES.includes(finding.code);
+    expect(all.filter(isNote).map((finding) => finding.code)).toEqual(NOTE_CODES);
+    expect(findings.filter((finding) => !isNote(finding))).toEqual(all.filter((finding) => !isNote(finding)));
+    const expected = noteSeverity === undefined ? [] : all.filter(isNote).map((finding) => ({ ...finding, severity: noteSeverity }));
+    expect(findings.filter(isNote)).toEqual(expected);
+  });
+
+  it("counts only what it shows", () => {
+    const lines = runCli(["check", "--notes", "off", "examples"]).stdout.trim().split("\n");
+    expect(lines.at(-2)).toBe("3 errors and 6 warnings in 5 of 6 files checked.");
+  });
+
+  it("refuses a value it does not know", () => {
+    const run = runCli(["check", "--notes", "quiet", "examples"]);
+    expect(run.status).toBe(2);
+    expect(run.stderr).toContain("unknown --notes 'quiet' (use information, hint, off)");
+  });
+});
+
 describe("check exit codes", () => {
   it.each([
     // [arguments, expected status, why]

@@ -2,7 +2,15 @@
  * The `lonepair.*` settings the server reads, their defaults, and how a raw value from the
  * client becomes a checked settings object (anything malformed falls back to the default).
  */
-import { DEFAULT_FIGURES_FOLDER, SUMMARY_COLUMNS, figuresFolderFrom, isSummaryColumn, type SummaryColumn } from "../../../shared/src/index";
+import {
+  DEFAULT_FIGURES_FOLDER,
+  SUMMARY_COLUMNS,
+  figuresFolderFrom,
+  isNotesShownAs,
+  isSummaryColumn,
+  type NotesShownAs,
+  type SummaryColumn,
+} from "../../../shared/src/index";
 import type { DocumentKind } from "./core";
 
 /** Settings that apply to one document. */
@@ -21,6 +29,8 @@ export interface ServerSettings {
   readonly diagnostics: {
     /** At most this many diagnostics per document; one more says how many were left out. */
     readonly maxPerDocument: number;
+    /** Notes (findings of severity information) shown as information, as faint hints, or not at all. */
+    readonly notesAs: NotesShownAs;
   };
   /** Folder, relative to the document, where inserted figures are written ("" for the document's own). */
   readonly figuresFolder: string;
@@ -36,7 +46,7 @@ export const DEFAULT_SETTINGS: ServerSettings = {
   inlayHints: { prose: true, dataFiles: false },
   angleDecimals: 1,
   summaryTable: { columns: SUMMARY_COLUMNS },
-  diagnostics: { maxPerDocument: 1000 },
+  diagnostics: { maxPerDocument: 1000, notesAs: "information" },
   figuresFolder: DEFAULT_FIGURES_FOLDER,
 };
 
@@ -54,7 +64,10 @@ export function settingsFrom(raw: unknown): ServerSettings {
     },
     angleDecimals: decimals(section.angleDecimals),
     summaryTable: { columns: columnList(table.columns) ?? DEFAULT_SETTINGS.summaryTable.columns },
-    diagnostics: { maxPerDocument: diagnosticLimit(diagnostics.maxPerDocument) },
+    diagnostics: {
+      maxPerDocument: diagnosticLimit(diagnostics.maxPerDocument),
+      notesAs: isNotesShownAs(diagnostics.notesAs) ? diagnostics.notesAs : DEFAULT_SETTINGS.diagnostics.notesAs,
+    },
     figuresFolder: figuresFolderFrom(section.figuresFolder),
   };
 }

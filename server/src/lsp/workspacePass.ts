@@ -9,7 +9,7 @@
 import { fileURLToPath, pathToFileURL } from "node:url";
 import type { CancellationToken, Diagnostic } from "vscode-languageserver";
 import { TextDocument } from "vscode-languageserver-textdocument";
-import { MAX_ANALYSED_LENGTH, type WorkspaceCheckResult } from "../../../shared/src/index";
+import { MAX_ANALYSED_LENGTH, shownParts, type WorkspaceCheckResult } from "../../../shared/src/index";
 import { searchDocuments, type DocumentFile } from "../files/findDocuments";
 import { readDocumentText } from "../files/readDocumentText";
 import { analyseDocument } from "./documentCache";
@@ -146,7 +146,8 @@ async function checkOne(
     const enabled = await enabledDocument(context, openUri);
     if (enabled) {
       const { document, analysed } = enabled;
-      const diagnostics = diagnosticsOf(document, cappedFindings(analysed.findingParts(), enabled.settings.diagnostics.maxPerDocument));
+      const { maxPerDocument, notesAs } = enabled.settings.diagnostics;
+      const diagnostics = diagnosticsOf(document, cappedFindings(shownParts(analysed.findingParts(), notesAs), maxPerDocument));
       return {
         uri: openUri,
         path: file.path,
@@ -163,6 +164,9 @@ async function checkOne(
   const read = await readDocumentText(file, MAX_ANALYSED_LENGTH);
   const document = TextDocument.create(uri, "", 0, read.text);
   const findings = analyseDocument(document, file.kind, 0, undefined, read.cutAt).findingParts();
-  const diagnostics = diagnosticsOf(document, cappedFindings(findings, settings.diagnostics.maxPerDocument));
+  const diagnostics = diagnosticsOf(
+    document,
+    cappedFindings(shownParts(findings, settings.diagnostics.notesAs), settings.diagnostics.maxPerDocument),
+  );
   return { uri, path: file.path, version: null, resultId, diagnostics, open: openUri !== undefined };
 }

@@ -13,7 +13,7 @@ import { open } from "node:fs/promises";
 import { sniffDelimiter } from "../../../../shared/src/index";
 import { findHeader, recognisedColumns, workOutRow } from "../../../../shared/src/index";
 import type { SpeciesReader } from "../../../../shared/src/index";
-import type { Finding, FindingSeverity } from "../../../../shared/src/index";
+import { shownFindings, type Finding, type FindingSeverity, type NotesShownAs } from "../../../../shared/src/index";
 import { SNIFF_CHARACTERS } from "../documents/documentBatches";
 import type { DocumentFile } from "../../files/findDocuments";
 import { countLineFeeds } from "../documents/lineIndex";
@@ -63,6 +63,8 @@ export interface ByteCheckContext {
   readonly rows: DelimitedRowMemo;
   /** Bytes of rows held at a time (tests make it small to cut rows across reads). */
   readonly bufferBytes?: number;
+  /** What notes are shown as (default: as they are). */
+  readonly notesAs?: NotesShownAs;
 }
 
 /** Checks `file` (CSV or TSV) as far as the byte reading goes; reports through `outputs`. */
@@ -103,6 +105,7 @@ export async function checkDelimitedBytes(file: DocumentFile, outputs: CheckOutp
       last,
       header: header.text,
       file: file.displayPath,
+      notesAs: context.notesAs ?? "information",
     };
     // The rows are read from just past the header's line, in a buffer of their own.
     const buffer = Buffer.allocUnsafe(context.bufferBytes ?? BUFFER_BYTES);
@@ -173,6 +176,7 @@ interface TableShape {
   readonly last: number;
   readonly header: string;
   readonly file: string;
+  readonly notesAs: NotesShownAs;
 }
 
 /** Where the quick reading is, and what it found since the last report. */
@@ -251,8 +255,9 @@ function scanRows(
         if (stretchEnd < 0) stretchEnd = lineEnd;
         const key = latin1(buffer, stretchStart, stretchEnd);
         counter.looked++;
-        const known = rows.get(key) ?? workOut(key, stretchStart, stretchEnd);
-        if (known === undefined) return Stop.NotRepeating;
+        const worked = rows.get(key) ?? workOut(key, stretchStart, stretchEnd);
+        if (worked === undefined) return Stop.NotRepeating;
+        const known = shownFindings(worked, table.notesAs);
         if (known.length > 0) {
           // Columns count UTF-16 code units: decode what precedes the stretch unless it is ASCII.
           const before = seen < 0x80 ? stretchStart - rowStart : decodedLength(rowStart, stretchStart);

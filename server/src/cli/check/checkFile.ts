@@ -5,7 +5,7 @@
  */
 import { editsOfFix, memoisedReader, movedFix } from "../../../../shared/src/index";
 import { delimitedRowMemo } from "../../../../shared/src/index";
-import type { Finding } from "../../../../shared/src/index";
+import { shownFindings, type Finding, type NotesShownAs } from "../../../../shared/src/index";
 import { batchModel } from "../documents/batchModel";
 import { readDocument, type DocumentBatch, type ResumeAt } from "../documents/documentBatches";
 import type { DocumentFile } from "../../files/findDocuments";
@@ -31,6 +31,8 @@ export interface CheckOptions {
   readonly rowBufferBytes?: number;
   /** Where fixing lists its temporary files, so that a signal can remove them. */
   readonly temporaries?: TemporaryFiles;
+  /** What notes are shown as (default: as they are); fixes are applied whatever it says, as the editor offers them. */
+  readonly notesAs?: NotesShownAs;
 }
 
 /** Findings handed to the reporter at a time: a document with millions never makes one huge string. */
@@ -58,7 +60,7 @@ export async function checkFile(file: DocumentFile, options: CheckOptions, outpu
   const utf8 = (file.encoding ?? "utf-8") === "utf-8";
   if (!options.fix && !options.ordinaryReading && utf8 && (file.kind === "csv" || file.kind === "tsv")) {
     // Without fixing, a table is read as bytes as far as that goes; the batches read on from there.
-    const quick = await checkDelimitedBytes(file, outputs, { ...context, bufferBytes: options.rowBufferBytes });
+    const quick = await checkDelimitedBytes(file, outputs, { ...context, bufferBytes: options.rowBufferBytes, notesAs: options.notesAs });
     foundHere = quick.found;
     if (!quick.resume) {
       finishFile(outputs, foundHere, false, 0);
@@ -68,6 +70,7 @@ export async function checkFile(file: DocumentFile, options: CheckOptions, outpu
   }
   const reading = readDocument(file.path, file.kind, options.batchCharacters, resume, file.encoding);
   const writer = options.fix && !options.dryRun ? await fixedFileWriter(file.path, options.temporaries ?? temporaryFiles()) : undefined;
+  const notesAs = options.notesAs ?? "information";
   let fixing = options.fix;
   let fixedHere = 0;
   let lineShift = 0;
@@ -87,7 +90,8 @@ export async function checkFile(file: DocumentFile, options: CheckOptions, outpu
       const model = batchModel(batch, file.kind, context);
       if (!fixing) {
         // Findings go out as the core hands them over: millions of them are never held at once.
-        for (const part of model.findingParts()) foundHere += await report(outputs, file.displayPath, batch.lines, part);
+        for (const part of model.findingParts())
+          foundHere += await report(outputs, file.displayPath, batch.lines, shownFindings(part, notesAs));
       } else {
         const findings = model.findings();
         const { fixed, remaining } = chooseFixes(batch.text, findings);
@@ -110,7 +114,7 @@ export async function checkFile(file: DocumentFile, options: CheckOptions, outpu
           const moveOffset = fixedOffsets(fixes);
           reported = remaining.map((finding) => movedFinding(finding, moveOffset));
         }
-        foundHere += await report(outputs, file.displayPath, lines, reported);
+        foundHere += await report(outputs, file.displayPath, lines, shownFindings(reported, notesAs));
       }
       outputs.progress(batch.byteOffset + (utf8 ? Buffer.byteLength(batch.text) : 2 * batch.text.length));
       await outputs.drain?.();

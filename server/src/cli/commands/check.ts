@@ -3,6 +3,7 @@
  * Exit 0 clean, 1 errors found (or warnings with --strict), 2 usage or I/O error.
  */
 import { version } from "../../../../package.json";
+import { NOTES_SHOWN_AS, isNotesShownAs } from "../../../../shared/src/index";
 import { checkFile } from "../check/checkFile";
 import type { CheckReporter } from "../check/checkReporter";
 import { emptySummary, fixedLine, summaryLine } from "../check/checkSummary";
@@ -26,6 +27,10 @@ cells that disagree with the VSEPR model.
 Options:
   --format <text|json|sarif>  output format (default text: path:line:column: severity: message [code])
   --strict                    warnings fail the check too (exit status 1)
+  --notes <information|hint|off>
+                              report notes (species outside what VSEPR is meant for, radicals,
+                              names not known) as they are (default), as hints, or not at all;
+                              the editor's setting lonepair.diagnostics.notesAs does the same
   --fix                       apply the fixes the editor offers, writing each changed file atomically
                               (through symbolic links to their targets; mode, owner, group and
                               hard links kept; a file changed meanwhile is left alone)
@@ -51,6 +56,7 @@ async function runCheck(args: readonly string[], io: CliIo): Promise<number> {
   const parsed = parseCommandLine(checkCommand, args, io, {
     format: { type: "string" },
     strict: { type: "boolean" },
+    notes: { type: "string" },
     fix: { type: "boolean" },
     "dry-run": { type: "boolean" },
   });
@@ -58,6 +64,9 @@ async function runCheck(args: readonly string[], io: CliIo): Promise<number> {
   const { values, positionals } = parsed;
   const format = (values.format ?? "text") as Format;
   if (!FORMATS.includes(format)) return usageError(checkCommand, io, `unknown format '${values.format}' (use text, json or sarif)`);
+  const notesAs = values.notes ?? "information";
+  if (!isNotesShownAs(notesAs))
+    return usageError(checkCommand, io, `unknown --notes '${terminalSafe(values.notes ?? "")}' (use ${NOTES_SHOWN_AS.join(", ")})`);
   if (values["dry-run"] && !values.fix) return usageError(checkCommand, io, "--dry-run goes with --fix");
   if (positionals.length === 0) return usageError(checkCommand, io, "give at least one file or folder");
 
@@ -85,7 +94,7 @@ async function runCheck(args: readonly string[], io: CliIo): Promise<number> {
       try {
         await checkFile(
           file,
-          { fix: fixing, dryRun, temporaries },
+          { fix: fixing, dryRun, temporaries, notesAs },
           {
             reporter,
             summary,

@@ -11,7 +11,7 @@ import {
   type DocumentDiagnosticReport,
 } from "vscode-languageserver";
 import type { TextDocument } from "vscode-languageserver-textdocument";
-import { moved, type FindingPart } from "../../../../shared/src/index";
+import { moved, shownParts, type FindingPart } from "../../../../shared/src/index";
 import type { Finding, FindingSeverity } from "../core";
 import { guarded } from "../guardedHandler";
 import type { LongWork } from "../quickRequests";
@@ -94,7 +94,7 @@ async function currentDiagnostics(
     const { document, analysed, settings } = enabled;
     const limit = settings.diagnostics.maxPerDocument;
     const stop = (): boolean => cancelled() || context.cache.revisionOf(uri) !== analysed.revision;
-    const parts = await partsInSlices(analysed.findingParts(), limit, stop, context.longWork);
+    const parts = await partsInSlices(shownParts(analysed.findingParts(), settings.diagnostics.notesAs), limit, stop, context.longWork);
     if (!parts) continue;
     const items = diagnosticsOf(document, cappedFindings(parts, limit));
     return { version: document.version, revision: analysed.revision, items };

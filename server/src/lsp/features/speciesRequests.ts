@@ -22,6 +22,7 @@ import {
   type SpeciesAtOffset,
   type SpeciesAtParams,
   type SpeciesAtResult,
+  shownFindings,
 } from "../../../../shared/src/index";
 import { analyseDocument, fileNameOf, SNIFF_LENGTH } from "../documentCache";
 import { guarded } from "../guardedHandler";
@@ -127,7 +128,7 @@ async function checkText(context: ServerContext, params: unknown): Promise<Check
   const settings = await context.settings.forUri(candidate.uri);
   if (!settings.enabledLanguages.includes(kind)) return { diagnostics: [] };
   const document = TextDocument.create(candidate.uri, languageId, 0, candidate.text);
-  const diagnostics = diagnosticsOf(document, analyseDocument(document, kind, 0).findings());
+  const diagnostics = diagnosticsOf(document, shownFindings(analyseDocument(document, kind, 0).findings(), settings.diagnostics.notesAs));
   return { diagnostics: diagnostics.map((diagnostic) => ({ ...diagnostic, message: String(diagnostic.message) })) };
 }
 
