@@ -136,6 +136,19 @@ describe("reStructuredText", () => {
     ["mhchem in a :math: role", "Then :math:`\\ce{SF4 + 2 H2O -> SO2 + 4 HF}` ran.\n", ["SF4", "H2O", "SO2", "HF"]],
     ["an unclosed \\ce in math reads nothing", ".. math::\n\n   \\ce{CH5 + x\n\nBF3.\n", ["BF3"]],
     ["only's content is prose for some builds", ".. only:: html\n\n   The NF3 band.\n", ["NF3"]],
+    // Conditional text is still text the writer wrote; its condition and options are not.
+    ["only's tag expression and options", ".. only:: CH5 and not NH5\n   :class: CH5-box\n\n   The NF3 band.\n", ["NF3"]],
+    ["ifconfig's content is prose", ".. ifconfig:: kr_site == 'CH5'\n\n   Bay C keeps SO2.\n", ["SO2"]],
+    ["an admonition's options", ".. note::\n   :class: CH5-tip\n   :name: note-NO2\n\n   Keep HF from glass.\n", ["HF"]],
+    ["an admonition's title and options", ".. admonition:: Why NF3?\n   :class: SO3-box\n\n   A lone pair.\n", ["NF3"]],
+    ["a table's options", ".. table:: Bay C gases\n   :name: tbl-CH5\n   :widths: 20 30\n\n   SF6 only.\n", ["SF6"]],
+    ["a csv-table's file", '.. csv-table:: Cylinders\n   :file: data/NO2-lots.csv\n   :header: "Lot", "Gas"\n\nBF3 after.\n', ["BF3"]],
+    ["a comment written as a directive", ".. comment:: CH5 in an old draft\n\nBF3 after.\n", ["BF3"]],
+    ["a comment directive's block", ".. comment::\n\n   CH5 and NH5 in an old note.\n\nBF3 after.\n", ["BF3"]],
+    ["a comment with no text on its line", "..\n   CH5 under it\n\nBF3 after.\n", ["BF3"]],
+    ["a substitution reference is a name", "See |SO4| and |kr-NF3|_ and |CH5|.\n", []],
+    ["a grid table row is not a substitution", "| NF3 | SF6 |\n", ["NF3", "SF6"]],
+    ["a substitution inside a word is not one", "SF6|NF3|BF3\n", ["SF6", "NF3", "BF3"]],
   ])("%s", (_, text, expected) => check("restructuredtext", text, expected));
 });
 

@@ -12,8 +12,11 @@
  *   `[latexmath]` block or paragraph, read as math; a literal paragraph (its first
  *   line indented); block macros (`image::...[]`, `include::...[]`).
  * - reStructuredText: literal blocks (`::` and its indented block), code directives, comments
- *   (`..` and its indented block), hyperlink targets and substitution definitions, and the
- *   heading and options of other directives (their content is prose).
+ *   (`..` and its indented block, and a `.. comment::` "directive"), hyperlink targets and
+ *   substitution definitions, and the option lines of every directive (`:class:`, `:name:`,
+ *   `:file:`: keys and paths, not words); the heading of a directive that names a file, a key or
+ *   a condition. The content of other directives is prose: a `.. note::`, and the conditional
+ *   text of `.. only::` and `.. ifconfig::`, which is still text the writer wrote.
  *
  * Comments and verbatim spans inside a line (`% ...` and `\verb|...|` in LaTeX, `// ...` in
  * AsciiDoc) are blanked in a paragraph's text instead (`readableProse`), so that offsets hold.
@@ -95,10 +98,17 @@ const CODE_DIRECTIVES: ReadonlySet<string> = new Set([
   "math",
 ]);
 
-/** Directives whose content is markup for another program or a list of files, skipped in a reStructuredText document. */
-const RAW_DIRECTIVES: ReadonlySet<string> = new Set(["raw", "graphviz", "digraph", "ifconfig", "toctree"]);
+/**
+ * Directives whose content is markup for another program or a list of files, skipped in a
+ * reStructuredText document; and "comment", which is no directive at all (docutils reports it as
+ * unknown and prints nothing of it), but what writers type when they mean a comment.
+ */
+const RAW_DIRECTIVES: ReadonlySet<string> = new Set(["raw", "graphviz", "digraph", "toctree", "comment"]);
 
-/** Directives whose heading names a file or a key, not words (a figure's caption below is prose). */
+/**
+ * Directives whose heading names a file, a key or a condition, not words (a figure's caption
+ * below is prose, and so is the conditional text of `only` and `ifconfig`).
+ */
 const PATH_DIRECTIVES: ReadonlySet<string> = new Set([
   "image",
   "figure",
@@ -108,6 +118,7 @@ const PATH_DIRECTIVES: ReadonlySet<string> = new Set([
   "index",
   "bibliography",
   "only",
+  "ifconfig",
 ]);
 
 /**
@@ -130,7 +141,8 @@ function literalBlock(text: string, line: MarkupLine, loneMarker: boolean): Mark
  * Explicit markup that is not prose, at a paragraph's start: a comment (".." and anything but a
  * directive, footnote or citation), a hyperlink target (".. _name:") or a substitution
  * definition, with the block indented under it; a raw directive with its content; the heading and
- * option lines of a directive that names a file.
+ * option lines of a directive that names a file; the option lines of any other directive (its
+ * heading, a title, is prose).
  */
 function rstExplicitBlock(text: string, line: MarkupLine): MarkupBlock | undefined {
   if (line.inParagraph || line.text.length >= 200) return undefined;
@@ -146,8 +158,13 @@ function rstExplicitBlock(text: string, line: MarkupLine): MarkupBlock | undefin
     const name = directive[1].toLowerCase();
     if (PATH_DIRECTIVES.has(name) || name.includes(":") || name.startsWith("auto"))
       return { kind: "code", start: line.start, end: optionLinesEnd(text, next, indent) };
-    // A code directive's block is `literalBlock`'s; an admonition's heading and content are prose.
-    if (!RAW_DIRECTIVES.has(name)) return undefined;
+    // A code directive's block is `literalBlock`'s (its options are read there).
+    if (CODE_DIRECTIVES.has(name)) return undefined;
+    // An admonition's heading and content are prose; its options (":class: CH5-banner") are not.
+    if (!RAW_DIRECTIVES.has(name)) {
+      const optionsEnd = optionLinesEnd(text, next, indent);
+      return optionsEnd > next ? { kind: "code", start: next, end: optionsEnd } : undefined;
+    }
   }
   // An empty comment ("..", then a blank line) holds nothing: an indented block after it is a quotation.
   if (rest.length === 0 && text.slice(next, endOfLine(text, next)).trim().length === 0)
@@ -245,6 +262,8 @@ export function readableProse(source: string, markup: TextMarkup): string {
         : source;
     case "asciidoc":
       return source.includes("//") ? source.replace(/^\/\/(?!\/).*$/gm, blank) : source;
+    case "restructuredtext":
+      return source.includes("|") ? source.replace(RST_SUBSTITUTION_REFERENCE, blank) : source;
     default:
       return source;
   }
@@ -261,6 +280,13 @@ export function readableProse(source: string, markup: TextMarkup): string {
  */
 const LATEX_HIDDEN =
   /(?<!\\)((?:\\\\)*)%.*$|(?<!\\let\s*\\[a-zA-Z@]+\s*=?\s*)\\iffalse(?![a-zA-Z@])[^\n]*?\\(?:fi|else)(?![a-zA-Z@])|\\(?:url|nolinkurl|href(?:\[[^\]\n]*\])?)\{[^}\n]*\}|\\(?:verb\*?|lstinline(?:\[[^\]\n]*\])?)(?:\{[^}\n]*\}|([^\sa-zA-Z{*])[^\n]*?\2)|\\mintinline(?:\[[^\]\n]*\])?\{[^}\n]*\}(?:\{[^}\n]*\}|([^\sa-zA-Z{])[^\n]*?\3)/gm;
+
+/**
+ * A reStructuredText substitution reference (`|SO2|`, `|kr-logo|_`): a name that a definition
+ * elsewhere replaces, not the text itself. Bars
+ * with a space inside (`| NF3 |`, a grid table's cell or a line block) are not one.
+ */
+const RST_SUBSTITUTION_REFERENCE = /(?<![^\s'"([{<\-/:])\|(?=\S)[^|\n]{0,100}?(?<=\S)\|(?:__?)?(?![^\s'")\]}>\-/:.,;!?\\])/g;
 
 /** The start of an address command, kept whole by `readableProse`. */
 const ADDRESS = /^\\(?:url|nolinkurl|href)(?![a-zA-Z])/;
