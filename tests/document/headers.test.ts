@@ -2,7 +2,7 @@
  * Column meanings from headers as people write them.
  */
 import { describe, expect, it } from "vitest";
-import { meaningOfHeader } from "../../shared/src/document/tables/headers";
+import { languageOfHeader, meaningOfHeader } from "../../shared/src/document/tables/headers";
 
 describe("meaningOfHeader", () => {
   // common practice: the column names chemists use in VSEPR summary tables
@@ -77,6 +77,49 @@ describe("meaningOfHeader", () => {
     "Description",
     "Comments",
   ])("%j means nothing to the checks", (header) => {
+    expect(meaningOfHeader(header)).toBeUndefined();
+  });
+
+  // from memory: the column names of German, French and Spanish chemistry tables and lab exports
+  it.each([
+    ["Summenformel", "species", "de"],
+    ["Formel", "species", "de"],
+    ["Bezeichnung", "name", "de"],
+    ["Verbindung", "name", "de"],
+    ["Valenzelektronen", "valenceElectrons", "de"],
+    ["Anzahl der Valenzelektronen", "valenceElectrons", "de"],
+    ["freie Elektronenpaare", "lonePairs", "de"],
+    ["freie Elektronenpaare (Zentralatom)", "lonePairs", "de"],
+    ["Freie Elektronenpaare am Zentralatom", "lonePairs", "de"],
+    ["freie EP am Zentralatom", "lonePairs", "de"],
+    ["Molekülgeometrie", "molecularGeometry", "de"],
+    ["Molekuelgeometrie", "molecularGeometry", "de"],
+    ["Geometrie", "molecularGeometry", "de"],
+    ["Elektronenpaargeometrie", "electronGeometry", "de"],
+    ["Hybridisierung", "hybridization", "de"],
+    ["Polarität", "polarity", "de"],
+    ["Polaritaet", "polarity", "de"],
+    ["Bindungswinkel (°)", "bondAngle", "de"],
+    ["Ladung", "charge", "de"],
+    ["Formule", "species", "fr"],
+    ["Molécule", "name", "fr"],
+    ["Doublets non liants", "lonePairs", "fr"],
+    ["Géométrie", "molecularGeometry", "fr"],
+    ["Polarité", "polarity", "fr"],
+    ["Fórmula", "species", "es"],
+    ["Nombre", "name", "es"],
+    ["Electrones de valencia", "valenceElectrons", "es"],
+    ["Geometría molecular", "molecularGeometry", "es"],
+    ["Polaridad", "polarity", "es"],
+  ])("%j means %s, in language %s", (header, meaning, language) => {
+    expect([meaningOfHeader(header), languageOfHeader(header)]).toEqual([meaning, language]);
+  });
+
+  it.each(["Name", "formula", "Charge", "polar?", "Molecule"])("%j is English, or shared with English", (header) => {
+    expect(languageOfHeader(header)).toBeUndefined();
+  });
+
+  it.each(["Lagerort", "Flasche", "Bemerkung", "Lieferant"])("German %j means nothing to the checks", (header) => {
     expect(meaningOfHeader(header)).toBeUndefined();
   });
 });

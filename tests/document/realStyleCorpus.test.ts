@@ -19,6 +19,7 @@ const FLOORS: Readonly<Record<string, { readonly precision: number; readonly rec
   "html-markdown": { precision: 0.98, recall: 0.97 },
   "inventory-csv": { precision: 0.98, recall: 0.94 },
   "latex-notes": { precision: 0.97, recall: 0.96 },
+  "non-english": { precision: 0.98, recall: 0.98 },
   "plain-text": { precision: 0.98, recall: 0.97 },
   restructuredtext: { precision: 0.98, recall: 0.96 },
   "wiki-markup": { precision: 0.98, recall: 0.98 },

@@ -6,7 +6,8 @@ import type { TextRange } from "../chemistry/types";
 import { scanProse } from "./scanProse";
 import type { ScanSteps, SpeciesReader } from "./speciesReader";
 import { readWholeEquation } from "./reactions/readEquation";
-import { isEquationHeader, isFormulaHeader, meaningOfHeader, namesSpecies } from "./tables/headers";
+import { tableColumns } from "./tables/delimitedRecords";
+import { isEquationHeader, namesSpecies } from "./tables/headers";
 import { addRecord, type RecordField, type RecordSink } from "./tables/records";
 
 const DELIMITER_ROW = /^ {0,3}\|?\s*:?-+:?\s*(?:\|\s*:?-+:?\s*)*\|?\s*$/;
@@ -59,11 +60,7 @@ export function* markdownTableSteps(
   pauseAt: number,
 ): ScanSteps {
   const header = tableCells(text, lines[0].start, lines[0].end);
-  const columns = header.map((cell) => {
-    const title = text.slice(cell.start, cell.end);
-    const meaning = meaningOfHeader(title);
-    return meaning ? { meaning, formulaHeader: isFormulaHeader(title) } : undefined;
-  });
+  const columns = tableColumns(header.map((cell) => text.slice(cell.start, cell.end)));
   const hasSpeciesColumn = columns.some((column) => namesSpecies(column?.meaning));
   const equationColumns = header.map((cell) => isEquationHeader(text.slice(cell.start, cell.end)));
   for (const cell of header) if (!columns[header.indexOf(cell)]) scanProse(text, cell.start, cell.end, sink, read);

@@ -58,11 +58,16 @@ export type ColumnMeaning =
   /** Normal modes: 3N − 6, or 3N − 5 for a linear molecule. */
   | "vibrationalModes";
 
+/** A language other than English that a table's headers, and so its value cells, are written in. */
+export type TableLanguage = "de" | "fr" | "es";
+
 /** One value cell of a record, with the exact range of the value (without quotes). */
 export interface TableCell {
   readonly meaning: ColumnMeaning;
   readonly range: TextRange;
   readonly text: string;
+  /** The language of the cell's header, when not English: its words are read, and fixes written, in it. */
+  readonly language?: TableLanguage;
 }
 
 /** A row of a CSV/TSV or markdown table, or an object in JSON/YAML, that names a species. */

@@ -10,9 +10,24 @@ export interface WrittenAngles {
   readonly relation: AngleRelation;
 }
 
-/** The angles in a cell and how they are stated, or undefined when it holds no angle. */
-export function parseAngles(cell: string): WrittenAngles | undefined {
-  const plain = cell.trim().toLowerCase();
+/**
+ * A comma between digits with one or two digits after it: a decimal comma ("104,5°") in a table
+ * from a country that writes them, or a list without spaces ("120,90"). Both readings are tried.
+ */
+const DECIMAL_COMMA = /(\d),(\d{1,2})(?!\d)/g;
+
+/** True when the cell may be written with decimal commas. */
+export function mayHaveDecimalComma(cell: string): boolean {
+  return /\d,\d{1,2}(?!\d)/.test(cell);
+}
+
+/**
+ * The angles in a cell and how they are stated, or undefined when it holds no angle. With
+ * `decimalComma`, "104,5" is one angle, 104.5; without, it is two, 104 and 5.
+ */
+export function parseAngles(cell: string, decimalComma = false): WrittenAngles | undefined {
+  const written = cell.trim().toLowerCase();
+  const plain = decimalComma ? written.replace(DECIMAL_COMMA, "$1.$2") : written;
   const numbers = [...plain.matchAll(/\d+(?:\.\d+)?/g)].map((match) => Number(match[0]));
   if (numbers.length === 0 || numbers.some((value) => value > 360)) return undefined;
   // Anything but numbers, separators, degree marks and relation words: not a plain angle.
@@ -24,9 +39,10 @@ export function parseAngles(cell: string): WrittenAngles | undefined {
   return { degrees: numbers, relation };
 }
 
-/** A computed angle written like `cell`: with its degree sign and "~" when the cell has them. */
+/** A computed angle written like `cell`: with its degree sign, "~" and decimal comma when the cell has them. */
 export function angleInStyleOf(degrees: number, cell: string): string {
   const prefix = /^\s*[~≈]/.test(cell) ? cell.trim()[0] : "";
   const suffix = cell.includes("\u00b0") ? "\u00b0" : /deg/i.test(cell) ? " deg" : "";
-  return `${prefix}${degrees}${suffix}`;
+  const number = mayHaveDecimalComma(cell) && !cell.includes(".") ? String(degrees).replace(".", ",") : String(degrees);
+  return `${prefix}${number}${suffix}`;
 }

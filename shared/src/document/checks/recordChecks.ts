@@ -6,12 +6,11 @@ import type { CentreAnalysis, SpeciesAnalysis, TextRange } from "../../chemistry
 import { speciesTextOf } from "../analyzeOccurrence";
 import { chargeInStyleOf, chargeOfCell } from "../tables/chargeColumn";
 import type { Finding, TableCell, TableRecord } from "../types";
-import { angleInStyleOf, parseAngles } from "./angleText";
+import { angleInStyleOf, mayHaveDecimalComma, parseAngles, type WrittenAngles } from "./angleText";
 import { axeInStyleOf, parseAxe } from "./axeText";
-import { computedGeometry, normalizeGeometry } from "./geometryText";
+import { computedGeometry, geometryInStyleOf, normalizeGeometry, readGeometry } from "./geometryText";
 import { hybridizationInStyleOf, normalizeHybridization } from "./hybridizationText";
 import { parsePolarity, polarityInStyleOf } from "./polarityText";
-import { inStyleOf } from "./textStyle";
 import { vibrationsOf } from "../../chemistry/vibrations/speciesVibrations";
 import { modeSum } from "../../chemistry/vibrations/normalModes";
 
@@ -65,10 +64,12 @@ function knownCheck(
   analysis: SpeciesAnalysis,
   centre: CentreAnalysis | undefined,
 ): Finding | undefined {
-  let column = past.get(cell.meaning);
+  // A word reads, and a fix is written, in the column's language: "polar" is checked alike, fixed apart.
+  const key = cell.language ? `${cell.meaning} ${cell.language}` : cell.meaning;
+  let column = past.get(key);
   if (!column) {
     column = new Map();
-    past.set(cell.meaning, column);
+    past.set(key, column);
   }
   const known = column.get(cell.text);
   if (known === null) return undefined;
@@ -269,7 +270,7 @@ function checkPerCentreGeometry(
     const match = /^\s*([A-Z][a-z]?)\s*:\s*(.*?)\s*$/.exec(part);
     if (!match) return undefined;
     const [, atom, value] = match;
-    const written = normalizeGeometry(value);
+    const written = normalizeGeometry(value, cell.language);
     if (written === undefined) continue;
     const computed = [
       ...new Set(analysis.centres.filter((centre) => centre.atom === atom).map((centre) => computedGeometry(geometryOf(centre)))),
@@ -287,9 +288,10 @@ function checkPerCentreGeometry(
 }
 
 function checkGeometry(cell: TableCell, computed: string, code: string, subject: string): Finding | undefined {
-  const written = normalizeGeometry(cell.text);
-  if (written === undefined || !/[a-z]/.test(written) || written === computedGeometry(computed)) return undefined;
-  return mismatch(cell, code, `${subject} is ${computed} ${MODEL}, the table says ${cell.text}.`, inStyleOf(computed, cell.text));
+  const written = readGeometry(cell.text, cell.language);
+  if (written === undefined || written.geometry === computedGeometry(computed)) return undefined;
+  const newText = geometryInStyleOf(computed, cell.text, written.language);
+  return mismatch(cell, code, `${subject} is ${computed} ${MODEL}, the table says ${cell.text}.`, newText);
 }
 
 function checkHybridization(cell: TableCell, species: string, centre: CentreAnalysis): Finding | undefined {
@@ -304,7 +306,7 @@ function checkHybridization(cell: TableCell, species: string, centre: CentreAnal
 }
 
 function checkPolarity(cell: TableCell, species: string, analysis: SpeciesAnalysis): Finding | undefined {
-  const written = parsePolarity(cell.text);
+  const written = parsePolarity(cell.text, cell.language);
   // A verdict the model could not reach never contradicts the table.
   if (analysis.polarity.undetermined) return undefined;
   const polar = analysis.polarity.polar;
@@ -313,7 +315,7 @@ function checkPolarity(cell: TableCell, species: string, analysis: SpeciesAnalys
     cell,
     "table-polarity",
     `${species} is ${polar ? "polar" : "nonpolar"} by the model (${analysis.polarity.reason}), the table says ${cell.text}.`,
-    polarityInStyleOf(polar, cell.text),
+    polarityInStyleOf(polar, cell.text, cell.language),
   );
 }
 
@@ -361,9 +363,17 @@ function checkVibrationCount(cell: TableCell, species: string, analysis: Species
 const TOLERANCE = 1;
 
 function checkAngle(cell: TableCell, species: string, analysis: SpeciesAnalysis, centre: CentreAnalysis): Finding | undefined {
-  const written = parseAngles(cell.text);
   const expected = centre.expectedAngles;
-  if (!written || expected.length === 0) return undefined;
+  if (expected.length === 0) return undefined;
+  // "104,5" is 104.5 with a decimal comma, or 104 and 5 listed: right when either reading fits.
+  const readings = mayHaveDecimalComma(cell.text) ? [parseAngles(cell.text, true), parseAngles(cell.text)] : [parseAngles(cell.text)];
+  if (readings.some((written) => !written || anglesFit(written, analysis, centre))) return undefined;
+  return angleMismatch(cell, species, analysis, centre);
+}
+
+/** Whether every angle the cell states fits what the model expects at `centre`. */
+function anglesFit(written: WrittenAngles, analysis: SpeciesAnalysis, centre: CentreAnalysis): boolean {
+  const expected = centre.expectedAngles;
   const slack = written.relation === "about" ? TOLERANCE * 2 : TOLERANCE;
   const fits = (degrees: number): boolean => {
     switch (written.relation) {
@@ -379,7 +389,11 @@ function checkAngle(cell: TableCell, species: string, analysis: SpeciesAnalysis,
         );
     }
   };
-  if (written.degrees.every(fits)) return undefined;
+  return written.degrees.every(fits);
+}
+
+function angleMismatch(cell: TableCell, species: string, analysis: SpeciesAnalysis, centre: CentreAnalysis): Finding {
+  const expected = centre.expectedAngles;
   const description = expected
     .map((range) => {
       const span = range.min === range.max ? `${range.ideal}°` : `${range.min}–${range.max}°`;

@@ -17,7 +17,7 @@ export function letterCaseOf(text: string): LetterCase {
 
 /**
  * `words` (a computed value such as "trigonal pyramidal" or "T-shaped") in the style of `cell`.
- * A one-letter word that names a shape ("T") keeps its capital.
+ * A one-letter word that names a shape ("T", in "T-shaped", "T-förmig" or "en T") keeps its capital.
  */
 export function inStyleOf(words: string, cell: string): string {
   const hyphenated = /[A-Za-z]-[A-Za-z]/.test(cell) && !/\s/.test(cell.trim());
@@ -30,6 +30,6 @@ export function inStyleOf(words: string, cell: string): string {
     case "sentence":
       return joined.charAt(0).toUpperCase() + joined.slice(1);
     default:
-      return joined.toLowerCase().replace(/^t-shaped/, "T-shaped");
+      return joined.toLowerCase().replace(/(^|[\s-])t(?=$|[\s-])/, (_, gap: string) => `${gap}T`);
   }
 }

@@ -4,13 +4,16 @@
 import type { SpeciesReader } from "../speciesReader";
 import { sniffDelimiter, visitDelimitedRows } from "./csv";
 import { readEquationCell } from "./equationCells";
-import { isEquationHeader, isFormulaHeader, meaningOfHeader, namesSpecies } from "./headers";
+import { isEquationHeader, isFormulaHeader, languageOfHeader, meaningOfHeader, namesSpecies } from "./headers";
 import { addRecord, type RecordField, type RecordSink } from "./records";
-import type { ColumnMeaning, Finding } from "../types";
+import type { ColumnMeaning, Finding, TableLanguage } from "../types";
 
-interface Column {
+/** What a table's column holds, worked out from its header once for every kind of table. */
+export interface Column {
   readonly meaning: ColumnMeaning;
   readonly formulaHeader: boolean;
+  /** The header's language when not English ("Molekülgeometrie"). */
+  readonly language?: TableLanguage;
 }
 
 /** Header text -> column, so a file read in batches works out its header once. */
@@ -22,10 +25,30 @@ export function columnUnder(header: string): Column | undefined {
   const known = knownHeaders.get(header);
   if (known !== undefined) return known ?? undefined;
   const meaning = meaningOfHeader(header);
-  const column = meaning ? { meaning, formulaHeader: isFormulaHeader(header) } : undefined;
+  const language = meaning && languageOfHeader(header);
+  const column = meaning ? { meaning, formulaHeader: isFormulaHeader(header), ...(language ? { language } : {}) } : undefined;
   if (knownHeaders.size >= KNOWN_HEADERS_LIMIT) knownHeaders.clear();
   knownHeaders.set(header, column ?? null);
   return column;
+}
+
+/**
+ * The columns under a table's header row. A table headed in one other language is read in it
+ * throughout: a header both languages share ("Name", "polar?", "Gas") takes the table's language
+ * for its cells' words; a subject column that is not a formula ("Gas", "Ion") holds names in that
+ * language, which lonepair mostly does not know, so it is read as a name column; and in German,
+ * "Charge" is the batch (lot) number, not a charge.
+ */
+export function tableColumns(headers: readonly string[]): (Column | undefined)[] {
+  const columns = headers.map(columnUnder);
+  const languages = new Set(columns.map((column) => column?.language).filter((language) => language !== undefined));
+  if (languages.size !== 1) return columns;
+  const [language] = languages;
+  return columns.map((column, index) => {
+    if (!column || column.language) return column;
+    if (column.meaning === "charge" && language === "de" && /^\s*charge\s*$/i.test(headers[index])) return undefined;
+    return { ...column, meaning: column.meaning === "species" && !column.formulaHeader ? "name" : column.meaning, language };
+  });
 }
 
 /**
@@ -51,7 +74,7 @@ export function readDelimitedRecords(
     if (noSpecies) return;
     if (columns === undefined) {
       if (cells.every((cell) => cell.text.trim() === "")) return;
-      columns = cells.map((cell) => columnUnder(cell.text));
+      columns = tableColumns(cells.map((cell) => cell.text));
       equationColumns = equationColumnsOf(cells.map((cell) => cell.text));
       noSpecies = !columns.some((column) => namesSpecies(column?.meaning)) && !equationColumns;
       return;
@@ -69,7 +92,13 @@ export function readDelimitedRecords(
       const column = columns[index];
       if (!column) continue;
       const cell = cells[index];
-      fields.push({ meaning: column.meaning, formulaHeader: column.formulaHeader, text: cell.text, range: cell.range });
+      fields.push({
+        meaning: column.meaning,
+        formulaHeader: column.formulaHeader,
+        language: column.language,
+        text: cell.text,
+        range: cell.range,
+      });
     }
     addRecord(fields, read, sink);
   });

@@ -3,7 +3,8 @@
  * hyphens, units in brackets or after a slash ("angle (deg)", "bond angle / °"), and the short
  * forms of the trade (VE, LP, AXE).
  */
-import type { ColumnMeaning } from "../types";
+import type { ColumnMeaning, TableLanguage } from "../types";
+import { FOREIGN_HEADERS, germanHeaderByPrefix } from "./foreignHeaders";
 
 /** Normalised header words -> meaning. Keys are lower case, single-spaced, without units. */
 const HEADERS: ReadonlyMap<string, ColumnMeaning> = new Map<string, ColumnMeaning>([
@@ -269,10 +270,14 @@ const TRAILING_UNITS = /\s+(?:deg|degs|degree|degrees|in degrees|count|no|number
 /** Units of band positions: a column with them holds wavenumbers or frequencies, never counts. */
 const WAVENUMBER_UNITS = /cm\s*(?:-|\u2212|\u207b|\^-?)\s*1|cm\u207b\u00b9|wavenumber|frequenc|\bhz\b|position/i;
 
+/** German letters spelt out, so "Polarität" and an export's "Polaritaet" read alike. */
+const UMLAUTS: Readonly<Record<string, string>> = { "\u00e4": "ae", "\u00f6": "oe", "\u00fc": "ue", "\u00df": "ss" };
+
 /** The header reduced to plain lower-case words. */
 export function normalizeHeader(header: string): string {
   return header
     .toLowerCase()
+    .replace(/[\u00e4\u00f6\u00fc\u00df]/g, (letter) => UMLAUTS[letter])
     .replace(/\u00b0/g, " deg ")
     .replace(/[([{][^)\]}]*[)\]}]/g, " ") // "(deg)", "[°]", "(y/n)"
     .replace(/\s\/\s.*$/, " ") // "bond angle / °"
@@ -308,7 +313,21 @@ function plainMeaningOfHeader(header: string): ColumnMeaning | undefined {
   if (/^electron (?:domain |pair |group )?geometry\b/.test(normalized)) return "electronGeometry";
   if (/^molecular (?:geometry|shape)\b/.test(normalized)) return "molecularGeometry";
   if (/^bond angles?\b/.test(normalized)) return "bondAngle";
-  return undefined;
+  return foreignHeader(normalized)?.meaning;
+}
+
+function foreignHeader(normalized: string) {
+  return FOREIGN_HEADERS.get(normalized) ?? germanHeaderByPrefix(normalized);
+}
+
+/**
+ * The language of a header that is not English ("Molekülgeometrie", "géométrie"), so its cells'
+ * words are read, and fixes written, in that language; undefined for English and for any other.
+ */
+export function languageOfHeader(header: string): TableLanguage | undefined {
+  if (header.length > MAX_HEADER) return undefined;
+  const normalized = normalizeHeader(header);
+  return HEADERS.has(normalized) ? undefined : foreignHeader(normalized)?.language;
 }
 
 /** True for a column whose cells name the species of their row: a formula, a name or a SMILES. */
@@ -318,7 +337,7 @@ export function namesSpecies(meaning: ColumnMeaning | undefined): boolean {
 
 /** Headers that name a formula column, preferred over a "species" column that may hold names. */
 export function isFormulaHeader(header: string): boolean {
-  return header.length <= MAX_HEADER && /formula/.test(normalizeHeader(header));
+  return header.length <= MAX_HEADER && /formula|formel|formule|fórmula/.test(normalizeHeader(header));
 }
 
 /**

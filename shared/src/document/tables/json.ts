@@ -160,7 +160,7 @@ function objectRecord(
     // Keys repeat in every record: their meaning is worked out once, as a table's headers are.
     const column = columnUnder(property.key);
     const field = column && valueField(property, text);
-    if (column && field) fields.push({ meaning: column.meaning, formulaHeader: column.formulaHeader, ...field });
+    if (column && field) fields.push({ meaning: column.meaning, formulaHeader: column.formulaHeader, language: column.language, ...field });
   }
   if (fields.length === 0) return;
   if (!fields.some((field) => namesSpecies(field.meaning))) {

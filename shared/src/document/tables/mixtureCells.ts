@@ -24,12 +24,14 @@ const TRAILING_RATIO = /\s*\(?\s*\d+(?:[.,]\d+)?(?:\s*[:/]\s*\d+(?:[.,]\d+)?)+\s
 // common practice: how gas and reagent labels write an amount (percent, ppm, molarity, mol%, v/v).
 // The unit is required: a bare number before a formula is a coefficient ("2 H2 + O2").
 const AMOUNT = String.raw`[<>~\u2248\u2264\u2265]?\s*\d+(?:[.,]\d+)?\s*(?:%|ppm|ppb|mol\s*%|vol\s*%|wt\s*%|mol/l|mm|m|n)(?:\s*(?:v/v|w/w|w/v|mol|vol))?`;
-/** What may stand before a component's species: an amount, "bal.", or "balance". */
-const LEADING = new RegExp(String.raw`^(?:(?:${AMOUNT}|bal\.?|balance)\s+)`, "i");
-/** What may follow it: an amount or "balance", or a remark in brackets after a space ("(5%)", "(synthetic air)"). */
-const TRAILING = new RegExp(String.raw`(?:\s*\(\s*(?:${AMOUNT}|bal\.?|balance)\s*\)|\s+\([^()]*\)|\s+(?:${AMOUNT}|bal\.?|balance))$`, "i");
+/** The balance gas's mark: "bal.", "balance", and German exports' "Rest". */
+const BALANCE = String.raw`bal\.?|balance|rest`;
+/** What may stand before a component's species: an amount or the balance mark. */
+const LEADING = new RegExp(String.raw`^(?:(?:${AMOUNT}|${BALANCE})\s+)`, "i");
+/** What may follow it: an amount or the balance mark, or a remark in brackets after a space ("(5%)", "(synthetic air)"). */
+const TRAILING = new RegExp(String.raw`(?:\s*\(\s*(?:${AMOUNT}|${BALANCE})\s*\)|\s+\([^()]*\)|\s+(?:${AMOUNT}|${BALANCE}))$`, "i");
 /** A balance that is a mixture itself: no species to find there, but no typo either. */
-const AIR = /^(?:air|synthetic air|zero air|dry air)$/i;
+const AIR = /^(?:air|synthetic air|zero air|dry air|luft|synthetische luft)$/i;
 
 const MAX_CELL = 120;
 

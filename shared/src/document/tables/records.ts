@@ -10,13 +10,15 @@ import { emptySink, occurrenceAt, unreadableAt, type ScanSink, type SpeciesReade
 import { chargeOfCell, withRowCharge } from "./chargeColumn";
 import { namesSpecies } from "./headers";
 import { mixtureComponents } from "./mixtureCells";
-import type { ColumnMeaning, SpeciesOccurrence, TableCell, TableRecord, UnreadableSpecies } from "../types";
+import type { ColumnMeaning, SpeciesOccurrence, TableCell, TableLanguage, TableRecord, UnreadableSpecies } from "../types";
 
 /** A value in a row or object, with the header or key it sits under. */
 export interface RecordField {
   readonly meaning: ColumnMeaning;
   /** Written under a header that says "formula": preferred as the record's species. */
   readonly formulaHeader: boolean;
+  /** The header's language when not English: the checks read the cell's words in it. */
+  readonly language?: TableLanguage;
   readonly text: string;
   readonly range: TextRange;
 }
@@ -85,7 +87,9 @@ export function addRecord(fields: readonly RecordField[], read: SpeciesReader, s
     }
     if (namesSpecies(field.meaning)) naming.push(unwrapped(field));
     else {
-      const cell: TableCell = { meaning: field.meaning, range: field.range, text: field.text };
+      const cell: TableCell = field.language
+        ? { meaning: field.meaning, range: field.range, text: field.text, language: field.language }
+        : { meaning: field.meaning, range: field.range, text: field.text };
       cells.push(cell);
       if (field.meaning === "charge") chargeCell ??= cell;
     }

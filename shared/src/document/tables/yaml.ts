@@ -187,7 +187,7 @@ function mappingRecord(
     // Keys repeat in every record: their meaning is worked out once, as a table's headers are.
     const column = columnUnder(String(pair.key.value));
     const field = column && scalarField(pair.value, text);
-    if (column && field) fields.push({ meaning: column.meaning, formulaHeader: column.formulaHeader, ...field });
+    if (column && field) fields.push({ meaning: column.meaning, formulaHeader: column.formulaHeader, language: column.language, ...field });
   }
   if (fields.length === 0) return;
   if (!fields.some((field) => namesSpecies(field.meaning))) {
