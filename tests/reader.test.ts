@@ -239,6 +239,52 @@ describe("names", () => {
   });
 });
 
+describe("an element symbol with a Stock numeral", () => {
+  // common practice: lab reports name an element in an oxidation state as "Fe(III)"; alone, a
+  // metal's is its cation (from memory: IUPAC Red Book, Stock numbers; mercury(I) is Hg2^2+ as in
+  // Greenwood and Earnshaw), never iodine or vanadium in brackets
+  it.each([
+    ["Fe(III)", "Fe^3+", 3, "Fe1"],
+    ["Cu(II)", "Cu^2+", 2, "Cu1"],
+    ["Cr(VI)", "Cr^6+", 6, "Cr1"],
+    ["Mn(VII)", "Mn^7+", 7, "Mn1"],
+    ["Os(VIII)", "Os^8+", 8, "Os1"],
+    ["Sn(IV)", "Sn^4+", 4, "Sn1"],
+    ["Al(III)", "Al^3+", 3, "Al1"],
+    ["Tl(I)", "Tl^+", 1, "Tl1"],
+    ["Fe(iii)", "Fe^3+", 3, "Fe1"],
+    ["Hg(I)", "Hg2^2+", 2, "Hg2"],
+    ["Fe(III)(aq)", "Fe^3+", 3, "Fe1"],
+  ])("%s reads as %s", (input, formula, charge, composition) => {
+    const reading = read(input);
+    expect(reading.formula).toBe(formula);
+    expect(reading.charge).toBe(charge);
+    expect(partsText(reading.composition)).toBe(composition);
+    expect(reading.text).toBe(input);
+    expect(reading.range).toEqual({ start: 0, end: input.length });
+  });
+
+  // from memory: IUPAC Red Book; a nonmetal's oxidation state is shared by many species (S(VI) in SO3, SF6, H2SO4)
+  it.each(["S(VI)", "As(V)", "Xe(II)", "I(III)"])("%s is an oxidation state, not one species", (input) => {
+    const result = readSpecies(input);
+    expect(result.ok).toBe(false);
+    if (!result.ok) expect(result.problem.code).toBe("oxidation-state");
+  });
+
+  // common practice: names of an element with a numeral alone go the same way
+  it.each([
+    ["iron(III)", "Fe^3+"],
+    ["mercury(I)", "Hg2^2+"],
+    ["mercury(I) ion", "Hg2^2+"],
+  ])("the name %s reads as %s", (input, formula) => {
+    expect(read(input).formula).toBe(formula);
+  });
+
+  it.each(["sulfur(VI)", "Fe(Iii)"])("%s does not read", (input) => {
+    expect(readSpecies(input).ok).toBe(false);
+  });
+});
+
 describe("problems", () => {
   const longInput = "H".repeat(1001);
   it.each<[string, ProblemCode, number, number, string | undefined]>([

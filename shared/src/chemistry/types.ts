@@ -101,6 +101,8 @@ export type ProblemCode =
   | "malformed-formula"
   | "unknown-name"
   | "input-too-long"
+  /** An element with an oxidation state and nothing else ("S(VI)"): many species share it. */
+  | "oxidation-state"
   // analysis
   | "too-few-electrons"
   | "octet-exceeded"

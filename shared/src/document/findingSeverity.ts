@@ -20,6 +20,8 @@ const OUTSIDE_THE_MODEL: ReadonlySet<ProblemCode> = new Set([
   "three-centre-bonding",
   "ambiguous-connectivity",
   "no-central-atom",
+  // "As(V)" in a speciation table is a correct way to write an oxidation state, just not a species.
+  "oxidation-state",
   // An unknown name says more about lonepair's vocabulary than about the writer's text.
   "unknown-name",
 ]);

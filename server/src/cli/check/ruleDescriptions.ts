@@ -10,6 +10,7 @@ const DESCRIPTIONS: Readonly<Record<string, string>> = {
   "malformed-formula": "Text in a species position cannot be read as a formula.",
   "unknown-name": "A species name is not one lonepair knows.",
   "input-too-long": "A species is too long to analyse.",
+  "oxidation-state": "An element in an oxidation state, such as S(VI): shared by many species, so no one shape.",
   "too-few-electrons": "A species has too few valence electrons for any Lewis structure.",
   "octet-exceeded": "A period-2 atom would need more than an octet.",
   "hydrogen-overbonded": "A hydrogen atom would need more than one bond.",

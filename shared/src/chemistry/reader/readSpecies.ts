@@ -13,9 +13,11 @@
  * "(CH3)2CO", "Ca(OH)2").
  */
 import { parseSmiles, smilesNetCharge } from "../smiles";
-import type { FormulaPart, ReadResult, SpeciesReading, TextRange } from "../types";
+import { elementBySymbol } from "../elements";
+import type { FormulaPart, PhysicalState, ReadResult, SpeciesReading, TextRange } from "../types";
 import { isAsciiLetter, isInvisibleFormatting, isLowerLetter, isSpace } from "./characters";
 import { chargeText } from "./chargeText";
+import { stockCation, stockNumeralValue } from "./names/metalCations";
 import { matchName, nameForFormula, normalizeName, type NameMatch } from "./names/nameLookup";
 import { suggestName } from "./names/nameSuggestion";
 import { hasLatexMarkup, latexToPlain } from "./latexFormula";
@@ -92,10 +94,12 @@ function readVisible(text: string): ReadResult {
   }
   const stated = text.charCodeAt(end - 1) === 0x29 ? readStateSuffix(text, start, end) : undefined;
   const nameEnd = stated ? stated.bodyEnd : end;
+  const stock = readStockNumeral(text, start, nameEnd);
+  if (stock !== undefined) return stock.ok && stated ? withState(stock.value, text, start, end, stated.state) : stock;
   if (looksLikeName(text, start, nameEnd)) {
     const named = readName(text, start, nameEnd);
     if (!named.ok || stated === undefined) return named;
-    return { ok: true, value: { ...named.value, text: text.slice(start, end), range: { start, end }, state: stated.state } };
+    return withState(named.value, text, start, end, stated.state);
   }
   const dot = radicalDotAt(text, start, end);
   if (dot >= 0) return readRadical(text, start, end, dot);
@@ -106,6 +110,36 @@ function readVisible(text: string): ReadResult {
     if (named.ok) return named;
   }
   return formula;
+}
+
+/**
+ * "Fe(III)", "Cu(II)", "Cr(VI)": an element symbol with a Stock numeral, as lab reports name an
+ * element in an oxidation state, never iodine or vanadium in brackets. A metal's is its cation
+ * (Fe^3+); a nonmetal's names no one species. Undefined for any other text.
+ */
+function readStockNumeral(text: string, start: number, end: number): ReadResult | undefined {
+  const match = STOCK_NUMERAL.exec(text.slice(start, end));
+  const element = match ? elementBySymbol(match[1]) : undefined;
+  const oxidationState = match ? stockNumeralValue(match[2]) : 0;
+  if (!match || element === undefined || oxidationState === 0) return undefined;
+  const cation = stockCation(element.symbol, oxidationState);
+  if (cation === undefined) {
+    const message =
+      `${match[0]} is ${element.name.toLowerCase()} in the +${oxidationState} oxidation state, which many species share: ` +
+      "write the molecule or ion meant to see its shape.";
+    return { ok: false, problem: problemAt("oxidation-state", message, start, end) };
+  }
+  const formula = cation.body + chargeText(cation.charge);
+  const cationReading = withName(readFormulaSpan(formula, 0, formula.length, "formula"));
+  if (!cationReading.ok) return undefined;
+  return { ok: true, value: { ...cationReading.value, text: match[0], range: { start, end } } };
+}
+
+const STOCK_NUMERAL = /^([A-Z][a-z]?)\(([IViv]{1,4})\)$/;
+
+/** `reading` placed over the whole of `text[start, end)`, whose state symbol it leaves out. */
+function withState(reading: SpeciesReading, text: string, start: number, end: number, state: PhysicalState): ReadResult {
+  return { ok: true, value: { ...reading, text: text.slice(start, end), range: { start, end }, state } };
 }
 
 /** "Cl•", "•OH", "O2•-": the species without its radical dot, placed over the whole written text. */

@@ -4,6 +4,7 @@
  * sulfate" is copper(II) sulfate), and mercury(I), which is the pair Hg2^2+.
  */
 import { elementBySymbol } from "../../elements";
+import { NONMETALS } from "../nonmetals";
 import type { ElementData } from "../../types";
 
 /** A metal cation a salt name can begin with. */
@@ -64,6 +65,25 @@ export function metalCation(symbol: string, charge: number): MetalCation | undef
   if (element === undefined) return undefined;
   if (symbol === "Hg" && charge === 1) return { body: "Hg2", charge: 2, element, singleAtom: false };
   return { body: symbol, charge, element, singleAtom: true };
+}
+
+const STOCK_NUMERALS: readonly string[] = ["i", "ii", "iii", "iv", "v", "vi", "vii", "viii"];
+
+/** The oxidation state a Stock numeral stands for ("III" or "iii" is 3), or 0 when it is none. */
+export function stockNumeralValue(numeral: string): number {
+  const lower = numeral.toLowerCase();
+  // "Iii" is no numeral: one case throughout
+  if (numeral !== lower && numeral !== numeral.toUpperCase()) return 0;
+  return STOCK_NUMERALS.indexOf(lower) + 1;
+}
+
+/**
+ * What an element with a Stock numeral and nothing else stands for ("iron(III)", "Fe(III)"): a
+ * metal's cation in that oxidation state. Undefined for a nonmetal: sulfur(VI) is the sulfur of
+ * SO3, H2SO4 and SF6 alike, no one species.
+ */
+export function stockCation(symbol: string, charge: number): MetalCation | undefined {
+  return NONMETALS.has(symbol) ? undefined : metalCation(symbol, charge);
 }
 
 /** The charge assumed for a salt of this metal named without a numeral, where chemists assume one. */

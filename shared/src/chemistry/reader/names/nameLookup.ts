@@ -18,6 +18,7 @@ import { NETWORK_SOLID_NAMES } from "./networkSolidNames";
 import { NAME_SYNONYMS } from "./synonyms";
 import { GREEK_PREFIXES } from "./greekPrefixes";
 import { haloComplexAnionByName } from "./haloComplexNames";
+import { stockCation, stockNumeralValue } from "./metalCations";
 import { compareCodeUnits, sortSmall } from "../../sortSmall";
 
 /**
@@ -131,9 +132,10 @@ function monatomicCation(name: string): NameMatch | undefined {
   const open = name.indexOf("(");
   if (open > 0 && name.endsWith(")")) {
     const element = elementByName(name.slice(0, open));
-    const charge = ["i", "ii", "iii", "iv", "v", "vi", "vii", "viii"].indexOf(name.slice(open + 1, -1)) + 1;
-    if (element === undefined || charge === 0) return undefined;
-    return { formula: element.symbol + chargeText(charge), name: `${name} ion`, listed: false };
+    const charge = stockNumeralValue(name.slice(open + 1, -1));
+    const cation = element === undefined || charge === 0 ? undefined : stockCation(element.symbol, charge);
+    if (cation === undefined) return undefined;
+    return { formula: cation.body + chargeText(cation.charge), name: `${name} ion`, listed: false };
   }
   const element = elementByName(name);
   const charge = element?.symbol === "H" ? 1 : element === undefined ? undefined : usualCationCharge(element);

@@ -1,0 +1,50 @@
+/**
+ * Everyday notation in running prose, read through the core's facade: what is found, what it is
+ * read as, and what the checks say about it.
+ */
+import { describe, expect, it } from "vitest";
+import { analyzeDocument, analyzeOccurrence, analyzeSpecies, checkDocument, type DocumentKind } from "../../shared/src/index";
+import { stripLabels } from "./labelledText";
+
+/** The labelled spans are what is found, each read as the formula given after it, in order. */
+function check(marked: string, formulas: readonly string[], kind: DocumentKind = "markdown"): void {
+  const { text, labels } = stripLabels(marked);
+  const found = analyzeDocument(text, kind).occurrences;
+  expect(found.map((occurrence) => [occurrence.range.start, occurrence.text])).toEqual(labels.map((label) => [label.start, label.text]));
+  expect(found.map((occurrence) => occurrence.reading.formula)).toEqual(formulas);
+}
+
+describe("an element with a Stock numeral in prose", () => {
+  // common practice: lab reports write "the Fe(III) solution" for iron in the +3 state; alone, a
+  // metal's numeral names its cation (from memory: IUPAC Red Book, Stock numbers)
+  it.each([
+    ["The ⟦Fe(III)⟧ solution turned orange.", ["Fe^3+"]],
+    ["We added ⟦Cu(II)⟧ to the flask; ⟦Cr(VI)⟧ is toxic.", ["Cu^2+", "Cr^6+"]],
+    ["The ⟦Fe(II)⟧/⟦Fe(III)⟧ couple and ⟦Sn(IV)⟧ in acid.", ["Fe^2+", "Fe^3+", "Sn^4+"]],
+    ["⟦Fe(III)(aq)⟧ was titrated.", ["Fe^3+"]],
+    ["⟦iron(III) chloride⟧ and ⟦FeCl3⟧ are one salt.", ["FeCl3", "FeCl3"]],
+    // from memory: IUPAC Red Book; a nonmetal's oxidation state is shared by many species
+    ["Hypervalent I(III) reagents and S(VI) species; ⟦SO4^2-⟧ is one.", ["SO4^2-"]],
+  ])("%s", (marked, formulas) => {
+    check(marked, formulas);
+  });
+
+  // common practice: what the core says of the cation is what it says of the numeral
+  it.each([
+    ["The Fe(III) solution.", "Fe3+"],
+    ["An Al(III) salt.", "Al3+"],
+  ])("%s is analysed as %s is", (text, cation) => {
+    const [occurrence] = analyzeDocument(text, "markdown").occurrences;
+    const asWritten = analyzeOccurrence(occurrence);
+    const expected = analyzeSpecies(cation);
+    expect(asWritten.ok).toBe(expected.ok);
+    if (!asWritten.ok && !expected.ok) expect(asWritten.problem).toEqual(expected.problem);
+    if (asWritten.ok && expected.ok) expect(asWritten.value.warnings).toEqual(expected.value.warnings);
+  });
+
+  it("raises no error for a Stock numeral in prose", () => {
+    const text = "The Fe(III) solution, Cu(II), Hg(I), Al(III), As(V) and S(VI) were logged.";
+    const findings = checkDocument(analyzeDocument(text, "markdown"));
+    expect(findings.filter((finding) => finding.severity === "error")).toEqual([]);
+  });
+});
