@@ -154,6 +154,32 @@ describe("mhchem details", () => {
   });
 });
 
+describe("chemformula's \\ch, read as mhchem's \\ce", () => {
+  // common practice: chemformula writes formulas, charges, coefficients and arrows as mhchem does
+  it.each([
+    ["Inlet: \\ch{⟦SO2⟧} in \\ch{⟦N2⟧}.", "latex"],
+    ["\\ch{⟦SO2⟧ + 2 ⟦NaOH⟧ -> ⟦Na2SO3⟧ + ⟦H2O⟧} \\label{eq:sulfite} \\\\", "latex"],
+    ["mostly \\ch{⟦HSO3-⟧}, and \\ch{⟦SO3^2-⟧} at pH 12", "latex"],
+    ["$\\ch{⟦NF3⟧}$ in math too", "latex"],
+    ["In markdown notes: \\ch{⟦SF4⟧ + 2 ⟦H2O⟧ -> ⟦SO2⟧ + 4 ⟦HF⟧}", "markdown"],
+  ])("%s", (marked, kind) => {
+    check(marked, kind as DocumentKind);
+  });
+
+  // from memory: SO2 + 2 NaOH -> Na2SO3 + H2O and Na2SO3 + SO2 + H2O -> 2 NaHSO3 (sulfite scrubbing)
+  it.each([
+    ["a balanced equation", "\\ch{SO2 + 2 NaOH -> Na2SO3 + H2O} \\label{eq:a} \\\\\n\\ch{Na2SO3 + SO2 + H2O -> 2 NaHSO3}\n", []],
+    ["an unbalanced one", "\\ch{SO2 + NaOH -> Na2SO3 + H2O}\n", ["equation-unbalanced"]],
+  ])("%s gets the equation findings of a \\ce", (_, text, expected) => {
+    const equationCodes = (source: string) =>
+      checkDocument(analyzeDocument(source, "latex"))
+        .map((finding) => finding.code)
+        .filter((code) => code.startsWith("equation-"));
+    expect(equationCodes(text)).toEqual(expected);
+    expect(equationCodes(text.replaceAll("\\ch{", "\\ce{"))).toEqual(expected);
+  });
+});
+
 describe("plain-text equations", () => {
   // common practice: equations typed in plain text and student reports
   it.each([

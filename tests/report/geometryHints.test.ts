@@ -33,6 +33,9 @@ describe("geometry hints", () => {
     ["The cylinder held \\ce{SF4}⟦seesaw⟧ at 2 bar."],
     // Diatomics have no centre and so no geometry of their own to show.
     ["The burn: \\ce{2 NO + O2 -> 2 NO2}⟦NO2 bent⟧."],
+    // chemformula's \ch is read as \ce: the hint goes after its closing brace, not inside it.
+    ["The scrubber took \\ch{SO2}⟦bent⟧ at pH 12."],
+    ["The scrubber: \\ch{SO2 + 2 NaOH -> Na2SO3 + H2O}⟦SO2 bent; H2O bent⟧."],
     // A name and a different species beside it keep a hint each.
     ["Ammonia⟦trigonal pyramidal⟧ (and NF3⟦trigonal pyramidal⟧) were compared."],
   ])("%s", (marked) => check(marked));

@@ -4,7 +4,7 @@
  * $K_a$), so a piece counts only when its plain spelling passes the same rules as a prose token.
  */
 import { latexToPlain } from "../chemistry/reader/latexFormula";
-import { mhchemSpanEnd, scanMhchemBody } from "./mhchemSpan";
+import { mhchemSpanEnd, nextMhchemOpening, scanMhchemBody } from "./mhchemSpan";
 import { isConfidentToken, shapeOf } from "./proseTokenRules";
 import { occurrenceAt, type ScanSink, type SpeciesReader } from "./speciesReader";
 
@@ -88,7 +88,7 @@ export function scanLatexMath(text: string, start: number, end: number, read: Sp
  */
 function readMhchemSpans(text: string, start: number, end: number, read: SpeciesReader, sink: ScanSink): boolean {
   let found = false;
-  for (let open = text.indexOf("\\ce{", start); open >= 0 && open < end; open = text.indexOf("\\ce{", open + 1)) {
+  for (let open = nextMhchemOpening(text, start); open >= 0 && open < end; open = nextMhchemOpening(text, open + 1)) {
     const spanEnd = mhchemSpanEnd(text, open, end);
     if (spanEnd < 0) continue;
     scanMhchemBody(text, open + 4, spanEnd - 1, read, sink);

@@ -6,6 +6,34 @@ import type { TextRange } from "../chemistry/types";
 import { readWholeEquation } from "./reactions/readEquation";
 import { occurrenceAt, unreadableAt, type ScanSink, type SpeciesReader } from "./speciesReader";
 
+/**
+ * Whether an mhchem `\ce{` or a chemformula `\ch{` opens at `index` (both four characters long):
+ * for formulas, charges, coefficients, "+" and arrows the two packages take the same notation,
+ * so a `\ch{...}` is read as a `\ce{...}`.
+ */
+export function mhchemOpensAt(text: string, index: number): boolean {
+  if (text.charCodeAt(index) !== 0x5c || text.charCodeAt(index + 1) !== 0x63 || text.charCodeAt(index + 3) !== 0x7b) return false;
+  const letter = text.charCodeAt(index + 2);
+  return letter === 0x65 || letter === 0x68;
+}
+
+/** Where the next `\ce{` or `\ch{` at or after `from` opens, or -1. */
+export function nextMhchemOpening(text: string, from: number): number {
+  const ce = text.indexOf("\\ce{", from);
+  const ch = text.indexOf("\\ch{", from);
+  return ce < 0 ? ch : ch < 0 ? ce : Math.min(ce, ch);
+}
+
+/** Where the last `\ce{` or `\ch{` that opens before `before` opens, or -1. */
+export function lastMhchemOpening(text: string, before: number): number {
+  return Math.max(text.lastIndexOf("\\ce{", before), text.lastIndexOf("\\ch{", before));
+}
+
+/** Whether `text` holds a `\ce{` or `\ch{` anywhere. */
+export function holdsMhchem(text: string): boolean {
+  return text.includes("\\ce{") || text.includes("\\ch{");
+}
+
 /** Longest `\ce{...}` body looked at; longer spans are not notes but pasted data. */
 const MAX_SPAN = 400;
 

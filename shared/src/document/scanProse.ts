@@ -10,7 +10,7 @@ import { isSafeSpellingFix } from "./fixPolicy";
 import { isAlloyDesignation, isGroupFragment, isSeriesId, type SeriesMemo } from "./nonSpeciesContext";
 import { latexKeyCommandEnd } from "./latexCommands";
 import { latexMathSpan, scanLatexMath, type MathSpan } from "./latexMathSpan";
-import { mhchemSpanEnd, scanMhchemBody } from "./mhchemSpan";
+import { holdsMhchem, mhchemOpensAt, mhchemSpanEnd, scanMhchemBody } from "./mhchemSpan";
 import { equationsInProse } from "./reactions/proseEquations";
 import { isChemicalContext, isPartOfCode, isWordContext } from "./proseContext";
 import { isConfidentToken, isWordlikeCompound, needsCalmContext, shapeOf } from "./proseTokenRules";
@@ -112,7 +112,7 @@ export function* proseSteps(
       index = codeSpan(scan, index);
       continue;
     }
-    if (code === 0x5c && text.startsWith("\\ce{", index)) {
+    if (code === 0x5c && mhchemOpensAt(text, index)) {
       index = mhchemSpan(scan, index);
       continue;
     }
@@ -141,7 +141,7 @@ export function* proseSteps(
         chunkEnd = role.end;
         continue;
       }
-      if (isSpaceCode(next) || next === 0x60 || (next === 0x5c && text.startsWith("\\ce{", chunkEnd))) break;
+      if (isSpaceCode(next) || next === 0x60 || (next === 0x5c && mhchemOpensAt(text, chunkEnd))) break;
       // "Eq.~\ref{eq:NO2}": a key is no prose.
       if (next === 0x5c && latexKeyCommandEnd(text, chunkEnd, end) > chunkEnd) break;
       // Math may open right after a bracket or quote: "($H_2O$)".
@@ -245,7 +245,7 @@ function mhchemSpan(scan: ProseScan, open: number): number {
 
 /** A LaTeX math span: species typed in math, or prose around a nested `\ce{...}`. */
 function mathSpan(scan: ProseScan, math: MathSpan): number {
-  if (scan.text.slice(math.contentStart, math.contentEnd).includes("\\ce{")) {
+  if (holdsMhchem(scan.text.slice(math.contentStart, math.contentEnd))) {
     scanProse(scan.text, math.contentStart, math.contentEnd, scan.sink, scan.read);
   } else {
     scanLatexMath(scan.text, math.contentStart, math.contentEnd, scan.read, scan.sink);

@@ -6,6 +6,7 @@
  * files only each record's own species cell does.
  */
 import type { SpeciesAnalysis, TextRange } from "../chemistry/types";
+import { lastMhchemOpening } from "../document/mhchemSpan";
 import { analyzeOccurrenceSafely } from "../document/speciesAt";
 import type { DocumentKind, DocumentModel, SpeciesOccurrence } from "../document/types";
 
@@ -44,7 +45,7 @@ export function geometryHints(
     const formula = result.value.reading.formula;
     const mhchemEnd = occurrence.reading.notation === "mhchem" ? mhchemSpanEnd(text, occurrence.range) : undefined;
     const aloneInSpan =
-      mhchemEnd !== undefined && text.slice(text.lastIndexOf("\\ce{", occurrence.range.start), mhchemEnd) === `\\ce{${occurrence.text}}`;
+      mhchemEnd !== undefined && text.slice(lastMhchemOpening(text, occurrence.range.start) + 4, mhchemEnd - 1) === occurrence.text;
     const previous = pending[pending.length - 1];
     const pairsWithPrevious =
       previous !== undefined &&
@@ -95,9 +96,9 @@ function uniqueLabels(labels: readonly string[]): string[] {
   return labels.filter((label, index) => labels.indexOf(label) === index);
 }
 
-/** The offset just after the closing brace of the `\ce{...}` span holding `range`, if there is one. */
+/** The offset just after the closing brace of the `\ce{...}` (or `\ch{...}`) span holding `range`, if there is one. */
 function mhchemSpanEnd(text: string, range: TextRange): number | undefined {
-  const opening = text.lastIndexOf("\\ce{", range.start);
+  const opening = lastMhchemOpening(text, range.start);
   if (opening < 0) return undefined;
   let depth = 0;
   for (let index = opening + 3; index < text.length; index++) {

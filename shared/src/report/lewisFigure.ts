@@ -5,6 +5,7 @@
  * the same whichever editor wrote them.
  */
 import type { SpeciesAnalysis } from "../chemistry/types";
+import { lastMhchemOpening } from "../document/mhchemSpan";
 import { lewisDiagram, type DiagramTheme } from "./lewisDiagram";
 
 /** The figures folder when the setting says nothing usable. */
@@ -95,7 +96,8 @@ export function lewisFigureOf(analysis: SpeciesAnalysis, options: LewisFigureOpt
 /**
  * Where a figure's link goes after a species mention at [start, end) of `text`: right after the
  * mention, or after the markup that encloses it on its line (an inline code span, an mhchem
- * `\ce{...}` and the `$` around it), so the link never lands inside the chemistry's own text.
+ * `\ce{...}` or chemformula `\ch{...}` and the `$` around it), so the link never lands inside the
+ * chemistry's own text.
  */
 export function figureLinkOffset(text: string, start: number, end: number): number {
   const lineStart = text.lastIndexOf("\n", start - 1) + 1;
@@ -108,7 +110,7 @@ export function figureLinkOffset(text: string, start: number, end: number): numb
     return found >= 0 && found < lineEnd ? found + 1 : offset;
   };
   if ((before.match(/`/g)?.length ?? 0) % 2 === 1) offset = after("`");
-  const opened = before.lastIndexOf("\\ce{");
+  const opened = lastMhchemOpening(before, before.length);
   if (opened >= 0 && before.indexOf("}", opened) < 0) offset = after("}");
   if ((before.match(/\$/g)?.length ?? 0) % 2 === 1) offset = after("$");
   return offset;

@@ -2,6 +2,7 @@
  * Equations written in prose lines ("2H2 + O2 → 2H2O", "CaCO3 = CaO + CO2"). Code spans, mhchem
  * spans, math and comments on the line are masked first: an arrow inside them is not the line's.
  */
+import { mhchemOpensAt } from "../mhchemSpan";
 import type { SpeciesReader } from "../speciesReader";
 import { equationsInLine } from "./readEquation";
 import type { Reaction, ReactionTerm } from "./reactionTypes";
@@ -68,7 +69,7 @@ function maskedEnd(line: string, index: number): number {
     const close = line.indexOf(double ? "$$" : "$", index + (double ? 2 : 1));
     return close < 0 ? line.length : close + (double ? 2 : 1);
   }
-  if (code === 0x5c && line.startsWith("\\ce{", index)) {
+  if (code === 0x5c && mhchemOpensAt(line, index)) {
     let depth = 0;
     for (let at = index + 3; at < line.length; at++) {
       if (line[at] === "{") depth++;
