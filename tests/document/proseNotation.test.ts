@@ -48,3 +48,30 @@ describe("an element with a Stock numeral in prose", () => {
     expect(findings.filter((finding) => finding.severity === "error")).toEqual([]);
   });
 });
+
+describe("structural formulas with single-bond dashes in prose", () => {
+  // from memory: CRC Handbook, structural formulas of ethane, 1,2-dichloroethane, methanol,
+  // ethanol, dimethyl ether, hydrogen peroxide, hydrazine, acetone, acetic acid, nitric acid and
+  // hexane; each group between the dashes is open on exactly the bonds the dashes draw (common practice)
+  it.each([
+    ["The fuel, ⟦CH3-CH3⟧, burns; so does ⟦CH3–CH3⟧.", ["CH3CH3", "CH3CH3"]],
+    ["Degreaser ⟦Cl-CH2-CH2-Cl⟧ and wood spirit ⟦CH3-OH⟧.", ["ClCH2CH2Cl", "CH3OH"]],
+    ["Grain spirit is ⟦H3C-CH2-OH⟧, its ether ⟦H3C–O–CH3⟧.", ["H3CCH2OH", "H3COCH3"]],
+    ["⟦HO-OH⟧ and ⟦H2N-NH2⟧ are both kept cold.", ["HOOH", "H2NNH2"]],
+    ["⟦CH3-CO-CH3⟧ rinse, then ⟦CH3-COOH⟧ and ⟦HO-NO2⟧.", ["CH3COCH3", "CH3COOH", "HONO2"]],
+    ["The C6 solvent ⟦(CH3-(CH2)4-CH3)⟧ is dry.", ["CH3(CH2)4CH3"]],
+  ])("%s", (marked, formulas) => {
+    check(marked, formulas);
+  });
+
+  // common practice: a dash also joins the atoms of an angle or a bond, and two species of a
+  // mixture; from memory: NO and NO2 are molecules of their own, though their valences look open
+  it.each([
+    "The F-S-F angle, the H–O–H angle, the C-H bond and the Si-O-Si link.",
+    "An NF3-SF6 mixture, an N2-O2 blend, H2O-CO2 ices and an SF6–N2 feed.",
+    "The NO-NO2 pair in smog; CH2-CH2 and CH-CH are not drawn closed.",
+  ])("%s is not read as one molecule", (text) => {
+    const found = analyzeDocument(text, "markdown").occurrences.map((occurrence) => occurrence.text);
+    expect(found.filter((written) => /[-\u2013]/.test(written))).toEqual([]);
+  });
+});

@@ -14,6 +14,7 @@ import { holdsMhchem, mhchemOpensAt, mhchemSpanEnd, scanMhchemBody } from "./mhc
 import { equationsInProse } from "./reactions/proseEquations";
 import { isChemicalContext, isPartOfCode, isWordContext } from "./proseContext";
 import { isConfidentToken, isWordlikeCompound, needsCalmContext, shapeOf } from "./proseTokenRules";
+import { isSingleBondedMolecule } from "./singleBondRuns";
 import { isOccurrence, smilesAt, smilesOccurrence } from "./smilesSpan";
 import { newNameScanState, scanNamesInChunk, type NameScanState } from "./proseNames";
 import { emptySink, memoisedReader, occurrenceAt, unreadableAt, type ScanSink, type ScanSteps, type SpeciesReader } from "./speciesReader";
@@ -297,7 +298,8 @@ function isLeadingPunctuation(code: number): boolean {
 /** Formula tokens inside one chunk, e.g. "(SF4)," or "NF3/SF6" or "NH4+". */
 function scanFormulas(scan: ProseScan, start: number, end: number): void {
   // Most words hold no bond mark: looked for once per word, not at every capital.
-  const bondMarks = BOND_MARK.test(scan.text.slice(start, end));
+  const word = scan.text.slice(start, end);
+  const bondMarks = BOND_MARK.test(word) || SINGLE_BOND_MARK.test(word);
   const { text } = scan;
   let index = start;
   while (index < end) {
@@ -317,10 +319,12 @@ function scanFormulas(scan: ProseScan, start: number, end: number): void {
 const BONDED_RUN = /[A-Z([][A-Za-z0-9()[\]]*(?:[-\u2013=\u2261][A-Z([][A-Za-z0-9()[\]]*)+/y;
 
 /**
- * A structural formula written with a double or triple bond mark, read whole rather than as the
- * groups between the marks (CH2=CH2 is ethene, not two CH2). Two lone atoms joined by one mark
- * ("C=O", "N≡N") name a bond, not a species, and so do only carbons ("C=C=C"): nothing is
- * reported. A run with no double or triple mark ("F-S-F", "NF3-SF6") is left to the word rules. Returns where scanning goes on, or `index` when there is no such run here.
+ * A structural formula written with bond marks, read whole rather than as the groups between the
+ * marks (CH2=CH2 is ethene, not two CH2). Two lone atoms joined by one mark ("C=O", "N≡N") name a
+ * bond, not a species, and so do only carbons ("C=C=C"): nothing is reported. A run of single
+ * bonds is read whole only when its groups make one molecule ("CH3-CH3"), and otherwise ("F-S-F",
+ * "NF3-SF6") left to the word rules. Returns where scanning goes on, or `index` when there is no
+ * such run here.
  */
 function bondedRunEnd(scan: ProseScan, index: number, end: number, chunkStart: number): number {
   const { text } = scan;
@@ -334,10 +338,16 @@ function bondedRunEnd(scan: ProseScan, index: number, end: number, chunkStart: n
   while (runEnd > index && runEnd <= end && isClose(text.charCodeAt(runEnd - 1)) && depthOf(text, index, runEnd) < 0) runEnd--;
   if (runEnd > end || (runEnd < end && isWordCharacter(text.charCodeAt(runEnd)))) return index;
   const run = text.slice(index, runEnd);
-  if (!BOND_MARK.test(run)) return index;
   const groups = run.split(/[-\u2013=\u2261]/);
-  const loneAtoms = groups.every((group) => /^[A-Z][a-z]?$/.test(group));
-  if (loneAtoms && (groups.length < 3 || groups.every((group) => group === "C"))) return runEnd;
+  if (!BOND_MARK.test(run)) {
+    // "(CH3-CH3)": the brackets of the sentence hold the run, not its first and last groups.
+    const enclosed = isOpen(run.charCodeAt(0)) && closingOf(run, 0, run.length) === run.length - 1;
+    const pieces = enclosed ? run.slice(1, -1).split(/[-\u2013]/) : groups;
+    if (!isSingleBondedMolecule(pieces, scan.read)) return index;
+  } else {
+    const loneAtoms = groups.every((group) => /^[A-Z][a-z]?$/.test(group));
+    if (loneAtoms && (groups.length < 3 || groups.every((group) => group === "C"))) return runEnd;
+  }
   const result = scan.read(run);
   if (!result.ok) return index;
   scan.sink.occurrences.push(occurrenceAt(result.value, run, index, "formula"));
@@ -345,6 +355,8 @@ function bondedRunEnd(scan: ProseScan, index: number, end: number, chunkStart: n
 }
 
 const BOND_MARK = /[=\u2261]/;
+/** A hyphen or en dash between a group and a capital: perhaps "CH3-CH3", perhaps "NF3-SF6". */
+const SINGLE_BOND_MARK = /[A-Za-z0-9)\]][-\u2013][A-Z([]/;
 /** A plus or an arrow in a word: an equation, not a structural formula. */
 const EQUATION_SIGN = /\+|->|<-|[\u2192\u27f6\u21cc]/;
 

@@ -1,6 +1,7 @@
 /**
- * Formulas with more hydrogens than their atoms can hold (C2H7, C3H10). Asking for a structural
- * formula would be asking for something that cannot exist, so they are refused as impossible.
+ * What the usual valences of neutral molecules allow: formulas with more hydrogens than their atoms
+ * can hold (C2H7, C3H10), refused as impossible, and the groups a structural formula joins with
+ * single bonds (CH3 on one bond, CH2 on two).
  */
 import type { FormulaPart, Problem } from "../types";
 
@@ -28,4 +29,30 @@ export function oversaturationProblem(formula: string, composition: readonly For
       `${formula} cannot exist: its atoms can hold at most ${capacity} hydrogen or halogen atoms between them ` +
       `(carbon forms four bonds, nitrogen three, oxygen two), and it has ${terminal}. Too many hydrogens; check the counts.`,
   };
+}
+
+/**
+ * Whether a neutral group of these atoms hangs on exactly `bonds` single bonds to the rest of a
+ * molecule with every atom at its usual valence: CH3, OH and Cl on one, CH2 and O on two, CO (a
+ * carbonyl) on two, but CH2 never on one and CH4 on none. False when an element has no usual
+ * valence here.
+ */
+export function fitsOpenBonds(composition: readonly FormulaPart[], bonds: number): boolean {
+  let terminal = 0;
+  let inner = 0;
+  let innerValence = 0;
+  for (const { symbol, count } of composition) {
+    const valence = USUAL_VALENCE[symbol];
+    if (valence === undefined) return false;
+    if (valence === 1) terminal += count;
+    else {
+      inner += count;
+      innerValence += valence * count;
+    }
+  }
+  if (inner === 0) return terminal === 1 && bonds === 1;
+  // The inner atoms hold each other by a chain of single bonds, the terminal atoms and the bonds
+  // out; what valence is left over pairs up into double bonds between inner atoms.
+  const spare = innerValence - terminal - 2 * (inner - 1) - bonds;
+  return spare >= 0 && spare % 2 === 0 && (spare === 0 || inner >= 2);
 }
