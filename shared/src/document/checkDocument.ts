@@ -10,6 +10,7 @@ import type { AnalysisResult, Problem } from "../chemistry/types";
 import { analyzeOccurrence, speciesTextOf } from "./analyzeOccurrence";
 import { nameFormulaChecker, sameComposition, type NameFormulaCheck } from "./checks/nameFormulaAgreement";
 import { checkRecord } from "./checks/recordChecks";
+import { sameSpecies } from "./tables/records";
 import { severityOf } from "./findingSeverity";
 import { isSafeSpellingFix, type AnalyzeText } from "./fixPolicy";
 import { groupAbbreviationIn } from "./groupAbbreviations";
@@ -130,10 +131,6 @@ function nameFitsCells(
 
 function rangeKey(occurrence: SpeciesOccurrence): string {
   return `${occurrence.range.start}:${occurrence.range.end}`;
-}
-
-function sameSpecies(a: SpeciesOccurrence, b: SpeciesOccurrence): boolean {
-  return a.reading.formula === b.reading.formula && a.reading.charge === b.reading.charge;
 }
 
 function unreadableFinding(unreadable: UnreadableSpecies, analyze: AnalyzeText): Finding {

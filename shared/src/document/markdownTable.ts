@@ -8,7 +8,7 @@ import type { ScanSteps, SpeciesReader } from "./speciesReader";
 import { readWholeEquation } from "./reactions/readEquation";
 import { tableColumns } from "./tables/delimitedRecords";
 import { isEquationHeader, namesSpecies } from "./tables/headers";
-import { addRecord, type RecordField, type RecordSink } from "./tables/records";
+import { addRecord, namingCellReads, type RecordField, type RecordSink } from "./tables/records";
 
 const DELIMITER_ROW = /^ {0,3}\|?\s*:?-+:?\s*(?:\|\s*:?-+:?\s*)*\|?\s*$/;
 
@@ -75,13 +75,14 @@ export function* markdownTableSteps(
       }
       const column = hasSpeciesColumn ? columns[index] : undefined;
       const cellText = text.slice(cell.start, cell.end);
-      const naming = column && namesSpecies(column.meaning);
-      // A species cell with words around the formula ("SF4 (reference)") is prose, not a value.
-      if (!column || (naming && /\s/.test(cellText) && !read(cellText).ok)) {
+      const field: RecordField | undefined = column && { ...column, text: cellText, range: cell };
+      // A species cell with words around the formula ("SF4 (reference)") is prose, not a value; a
+      // name with a qualifier after it ("ammonia (anhydrous)") is the row's name, read as CSV reads it.
+      if (!field || (namesSpecies(field.meaning) && /\s/.test(cellText) && !namingCellReads(field, read))) {
         scanProse(text, cell.start, cell.end, sink, read);
         return;
       }
-      fields.push({ ...column, text: cellText, range: cell });
+      fields.push(field);
     });
     if (fields.length > 0) addRecord(fields, read, sink);
   }

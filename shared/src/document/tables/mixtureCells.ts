@@ -17,8 +17,11 @@ interface Cell {
   readonly range: { readonly start: number; readonly end: number };
 }
 
-/** Between components: a slash, a plus with spaces around it, the word "in", a comma before a space. */
-const SEPARATOR = /\s*\/\s*|\s+\+\s+|\s+in\s+|\s*[,;]\s+/gi;
+/**
+ * Between components: a slash (not the one closing an HTML tag, "N<sub>2</sub>"), a plus with
+ * spaces around it, the word "in", a comma before a space.
+ */
+const SEPARATOR = /\s*(?<!<)\/\s*|\s+\+\s+|\s+in\s+|\s*[,;]\s+/gi;
 /** A mixing ratio closing the cell: "80/20", "(5/95)", "(80:20)", "79/21 %". */
 const TRAILING_RATIO = /\s*\(?\s*\d+(?:[.,]\d+)?(?:\s*[:/]\s*\d+(?:[.,]\d+)?)+\s*%?\s*\)?$/;
 // common practice: how gas and reagent labels write an amount (percent, ppm, molarity, mol%, v/v).
@@ -32,6 +35,10 @@ const LEADING = new RegExp(String.raw`^(?:(?:${AMOUNT}|${BALANCE})\s+)`, "i");
 const TRAILING = new RegExp(String.raw`(?:\s*\(\s*(?:${AMOUNT}|${BALANCE})\s*\)|\s+\([^()]*\)|\s+(?:${AMOUNT}|${BALANCE}))$`, "i");
 /** A balance that is a mixture itself: no species to find there, but no typo either. */
 const AIR = /^(?:air|synthetic air|zero air|dry air|luft|synthetische luft)$/i;
+
+/** Grade marks of gases and reagents, as suppliers write them: never a mixture's component. */
+// common practice: ultra high purity, high purity, chemically pure, analytical reagent, and so on.
+const GRADE = /^(?:UHP|HP|CP|ACS|USP|AR|GR|LR|EP|BP|tech\.?|technical|research|reagent)$/;
 
 const MAX_CELL = 120;
 
@@ -58,6 +65,8 @@ export function mixtureComponents(cell: Cell, read: SpeciesReader): readonly Spe
     if (!component) return undefined;
     const written = body.slice(component.start, component.end);
     if (AIR.test(written)) continue;
+    // "Argon, UHP": a grade after a comma, not a second gas (UHP would read as U, H and P).
+    if (GRADE.test(written)) return undefined;
     const result = read(written);
     if (!result.ok) return undefined;
     components.push(occurrenceAt(result.value, written, cell.range.start + component.start));

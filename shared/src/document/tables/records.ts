@@ -117,7 +117,7 @@ export function addRecord(fields: readonly RecordField[], read: SpeciesReader, s
   let name: SpeciesOccurrence | undefined;
   let nameCell: RecordField | undefined;
   // A row about a mixture ("5% H2 in N2") names no single species for its other cells to describe.
-  let ofMixture = false;
+  let mixtureParts: readonly SpeciesOccurrence[] | undefined;
   for (const field of naming) {
     if (field.meaning === "smiles") {
       const smiles = smilesAt(field.text, 0, field.text.length);
@@ -152,7 +152,7 @@ export function addRecord(fields: readonly RecordField[], read: SpeciesReader, s
     const components = mixture ?? (field.meaning === "name" ? mixtureComponents(field, read) : undefined);
     if (components) {
       for (const occurrence of components) found.push(occurrence);
-      ofMixture = true;
+      mixtureParts = components;
       continue;
     }
     const element = elementOpeningCellOf(field, read);
@@ -173,13 +173,40 @@ export function addRecord(fields: readonly RecordField[], read: SpeciesReader, s
       if (unreadable.problem.code !== "unknown-name" || found.length === 0) sink.unreadable.push(unreadable);
     }
   }
-  if (found.length === 0 || ofMixture) return;
+  if (found.length === 0) return;
+  if (mixtureParts) {
+    // "Nitric oxide std" beside "NO 10 ppm, N2 bal": the name is one of the mixture's parts. A
+    // record with no cells to check says the two are one species, so its note is said once.
+    const named = name && mixtureParts.find((part) => sameSpecies(part, name));
+    if (named && name) sink.records.push({ species: named, cells: [], otherNames: [name] });
+    return;
+  }
   // The charge column is compared with the species only when the two were read together.
   if (chargeCell && uncharged?.has(found[0])) cells = cells.filter((cell) => cell !== chargeCell);
   if (found.length === 1) sink.records.push({ species: found[0], cells });
   else if (!formula || !name || !nameCell) sink.records.push({ species: found[0], cells, otherNames: found.slice(1) });
   // A record field is a table cell with one more property: it serves as the name cell as it is.
   else sink.records.push({ species: found[0], cells, otherNames: found.slice(1), nameBesideFormula: { name, nameCell, formula } });
+}
+
+/** Whether two occurrences name one species: the same formula and charge, however written. */
+export function sameSpecies(a: SpeciesOccurrence, b: SpeciesOccurrence): boolean {
+  return a.reading.formula === b.reading.formula && a.reading.charge === b.reading.charge;
+}
+
+/**
+ * Whether a cell of a column that names species reads as the row's species as `addRecord` reads
+ * it: a formula, name or SMILES, a mixture, or a name with a qualifier after it ("ammonia
+ * (anhydrous, lecture bottle)", "Argon, UHP"). A markdown table scans any other such cell with
+ * words in it as prose ("SF4 (reference)").
+ */
+export function namingCellReads(written: RecordField, read: SpeciesReader): boolean {
+  const field = unwrapped(trimmedField(written));
+  if (field.meaning === "smiles" || read(field.text).ok) return true;
+  if (field.meaning === "species" && mixtureComponents(field, read)) return true;
+  if (namesOpeningCellOf(field, read)) return true;
+  if (field.meaning === "name" && mixtureComponents(field, read)) return true;
+  return elementOpeningCellOf(field, read) !== undefined;
 }
 
 /**
