@@ -77,6 +77,9 @@ describe("LaTeX addresses", () => {
     ["\\href with options", "See \\href[pdfnewwindow]{https://x.org/a%20b}{notes}, XeF2.\n", ["XeF2"]],
     ["a comment after an address", "See \\url{https://x.org/a%20b} % CH5\nSF6.\n", ["SF6"]],
     ["a formula in the address is no mention", "See \\url{https://x.org/CH5%20data} and SF6.\n", ["SF6"]],
+    ["\\hyperref's key, then its text", "See \\hyperref[sec:CH5]{the SO\\textsubscript{2} part}.\n", ["SO\\textsubscript{2}"]],
+    ["typewriter text is a key or code", "The \\texttt{SO2\\_flow} column and \\texttt{CH5} for NF3.\n", ["NF3"]],
+    ["other file commands", "\\addbibresource{NO2.bib}\n\\subfile{CH5-draft}\nSF6.\n", ["SF6"]],
   ])("%s", (_, text, expected) => check("latex", text, expected));
 });
 
@@ -97,6 +100,16 @@ describe("AsciiDoc", () => {
     ["a block macro", "image::spectra/CH5-NF3.png[NF3 band]\nBF3 after.\n", ["BF3"]],
     ["an example block is prose", "====\nSF4 in an example\n====\n", ["SF4"]],
     ["a table is prose", "|===\n| KR-0412 | SF6\n|===\n", ["SF6"]],
+    // Ids, attribute names and link targets are typed among the words but are not shown as words.
+    ["a block anchor", "[[SO2-table]]\nSF6 in bay C.\n", ["SF6"]],
+    ["a block attribute line", "[role=CH5-warning]\nSF6 in bay C.\n", ["SF6"]],
+    ["an inline anchor", "The [[NF3-row]]NF~3~ row.\n", ["NF~3~"]],
+    ["a cross reference keeps its text", "See <<SO2-table,the SO~2~ table>> and <<CH5-typo>>.\n", ["SO~2~"]],
+    ["an attribute reference", "Lot {SO2-lot} and {CH5} for NF~3~.\n", ["NF~3~"]],
+    ["an attribute entry keeps its value", ":hf-note: see the HF kit\n:CH5-note: x\n\nBF3.\n", ["HF", "BF3"]],
+    ["a link target", "Read link:logs/NO2-2026.pdf[the NF~3~ log] and xref:sop.adoc#CH5[SF6 rules].\n", ["NF~3~", "SF6"]],
+    ["keyboard and passthrough macros", "Press kbd:[CH5] or pass:[CH5] for BF3.\n", ["BF3"]],
+    ["\\ce braces are no attribute reference", "stem:[\\ce{NF3}] and H~2~O.\n", ["NF3", "H~2~O"]],
   ])("%s", (_, text, expected) => check("asciidoc", text, expected));
 });
 

@@ -2,10 +2,15 @@
  * LaTeX commands in running text whose arguments are keys, file names or addresses, not words:
  * `\label{eq:NO2}`, `\ref{tab:KNO3}`, `\cite{KR2025NO2}`, `\usepackage{mhchem}`. A key often
  * spells a formula on purpose, and reporting it would put a species where the reader sees none.
+ * `\texttt{...}` is there too: typewriter text is how a report sets file names, log keys and code
+ * (`\texttt{SO2\_flow}`), as a code span does in markdown.
  */
 
 const KEY_COMMAND =
-  /^\\(?:label|ref|eqref|pageref|autoref|nameref|[cC]ref|cite[a-zA-Z]*|input|include|includegraphics|usepackage|RequirePackage|documentclass|bibliography|bibliographystyle|url|href|hypersetup)\*?(?:\[[^\]\n]{0,80}\])?\{/;
+  /^\\(?:label|ref|eqref|pageref|autoref|nameref|[cC]ref|cite[a-zA-Z]*|input|include|includegraphics|usepackage|RequirePackage|documentclass|bibliography|bibliographystyle|url|href|hypersetup|texttt|addbibresource|includeonly|subfile|externaldocument)\*?(?:\[[^\]\n]{0,80}\])?\{/;
+
+/** `\hyperref[key]{text}`: the key in brackets, then words. */
+const KEY_IN_BRACKETS = /^\\hyperref\[[^\]\n]{0,80}\]/;
 
 /** The longest key looked at: a longer group is not a key, and scanning goes on inside it. */
 const MAX_KEY = 200;
@@ -13,7 +18,10 @@ const MAX_KEY = 200;
 /** Where the key command at `at` ends (past its braced argument), or `at` when there is none. */
 export function latexKeyCommandEnd(text: string, at: number, limit: number): number {
   if (text.charCodeAt(at) !== 0x5c) return at;
-  const command = KEY_COMMAND.exec(text.slice(at, at + 120));
+  const start = text.slice(at, at + 120);
+  const bracketed = KEY_IN_BRACKETS.exec(start);
+  if (bracketed) return Math.min(limit, at + bracketed[0].length);
+  const command = KEY_COMMAND.exec(start);
   if (!command) return at;
   const open = at + command[0].length;
   const found = text.slice(open, open + MAX_KEY + 1).indexOf("}");

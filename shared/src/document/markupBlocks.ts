@@ -19,7 +19,9 @@
  *   text of `.. only::` and `.. ifconfig::`, which is still text the writer wrote.
  *
  * Comments and verbatim spans inside a line (`% ...` and `\verb|...|` in LaTeX, `// ...` in
- * AsciiDoc) are blanked in a paragraph's text instead (`readableProse`), so that offsets hold.
+ * AsciiDoc) are blanked in a paragraph's text instead (`readableProse`), so that offsets hold;
+ * so are AsciiDoc's ids, attribute names and link targets, and reStructuredText's substitution
+ * references.
  */
 import { falseConditionalEnd, verbatimBlockEnd } from "./latexCommands";
 import type { TextMarkup } from "./types";
@@ -261,7 +263,7 @@ export function readableProse(source: string, markup: TextMarkup): string {
           })
         : source;
     case "asciidoc":
-      return source.includes("//") ? source.replace(/^\/\/(?!\/).*$/gm, blank) : source;
+      return /\/\/|\[|\{|<<|:/.test(source) ? source.replace(ASCIIDOC_NOT_WORDS, asciidocNotWords) : source;
     case "restructuredtext":
       return source.includes("|") ? source.replace(RST_SUBSTITUTION_REFERENCE, blank) : source;
     default:
@@ -280,6 +282,23 @@ export function readableProse(source: string, markup: TextMarkup): string {
  */
 const LATEX_HIDDEN =
   /(?<!\\)((?:\\\\)*)%.*$|(?<!\\let\s*\\[a-zA-Z@]+\s*=?\s*)\\iffalse(?![a-zA-Z@])[^\n]*?\\(?:fi|else)(?![a-zA-Z@])|\\(?:url|nolinkurl|href(?:\[[^\]\n]*\])?)\{[^}\n]*\}|\\(?:verb\*?|lstinline(?:\[[^\]\n]*\])?)(?:\{[^}\n]*\}|([^\sa-zA-Z{*])[^\n]*?\2)|\\mintinline(?:\[[^\]\n]*\])?\{[^}\n]*\}(?:\{[^}\n]*\}|([^\sa-zA-Z{])[^\n]*?\3)/gm;
+
+/**
+ * What an AsciiDoc paragraph holds that is not words, though it is typed among them (from memory:
+ * AsciiDoc language documentation): a `//` comment line; a block attribute line (`[role=CH5]`,
+ * `[[SO2-table]]`, `[#NF3-row]`), which styles the block and is not shown; an inline anchor
+ * (`[[SO2-table]]`); a cross reference's target (`<<SO2-table,the SO2 table>>`: the text after the
+ * comma is shown, so it stays); an attribute reference (`{hf-note}`: its value is read where it is
+ * set) and an attribute entry's name (`:hf-note: see the HF kit`: the value is words); the target of
+ * a link, cross reference or image macro (`link:logs/NO2.pdf[the log]`); keyboard, button and
+ * passthrough macros (`kbd:[Ctrl+S]`, `pass:[...]`).
+ */
+const ASCIIDOC_NOT_WORDS =
+  /^\/\/(?!\/).*$|^\[\[[^\]\n]{1,200}\]\]$|^\[[^[\]\n]{1,200}\]$|\[\[[\w:.-]{1,100}(?:,[^\]\n]{0,100})?\]\]|<<[^>,\n]{1,100}(?:,|>>)|(?<=<<[^>,\n]{1,100},[^>\n]{0,200})>>|(?<![\w\\}^_])\{[A-Za-z0-9_][\w-]{0,60}\}|^:!?[\w-]{1,60}!?:|\b(?:link|xref|image|mailto):[^\s[]{1,300}(?=\[)|\b(?:kbd|btn|pass)(?::[a-z,]{0,20})?:\[[^\]\n]{0,200}\]/gm;
+
+function asciidocNotWords(hidden: string): string {
+  return blank(hidden);
+}
 
 /**
  * A reStructuredText substitution reference (`|SO2|`, `|kr-logo|_`): a name that a definition
