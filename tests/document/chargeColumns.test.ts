@@ -149,6 +149,37 @@ describe("a charge column that contradicts the formula", () => {
     expect(findingsOf(fixed, "csv")).toEqual([]);
   });
 
+  it.each([
+    // [header, cell, charge cell, charge offered] — species the model gives no shape: the
+    // contradiction is still one, as it needs the formula's charge only
+    // from memory: iron(III) Fe3+, copper(II) Cu2+, hexacyanoferrate(III) Fe(CN)6 3-, uranyl UO2 2+
+    ["Formula", "Fe3+", "+2", "+3"],
+    ["Formula", "Cu2+", "+1", "+2"],
+    ["Formula", "Fe(CN)6-3", "-4", "-3"],
+    ["Formula", "UO2^2+", "1+", "2+"],
+    ["Name", "iron(III)", "+2", "+3"],
+  ])("%s %s beside %j, a species not analysed: a warning, offering %j as a choice", (header, species, charge, offered) => {
+    const text = `${header},Charge\n${species},${charge}\n`;
+    const findings = findingsOf(text, "csv").filter((finding) => finding.code === "table-charge");
+    expect(findings.map((finding) => [text.slice(finding.range.start, finding.range.end), finding.severity, finding.fix])).toEqual([
+      [charge, "warning", undefined],
+    ]);
+    expect(findings[0].choices?.map((choice) => choice.newText)).toEqual([offered]);
+    const fixed = text.slice(0, findings[0].range.start) + offered + text.slice(findings[0].range.end);
+    expect(findingsOf(fixed, "csv").filter((finding) => finding.code === "table-charge")).toEqual([]);
+  });
+
+  it.each([
+    // the charge column gives an uncharged formula or name its charge: nothing to contradict
+    ["Formula", "Fe", "+3"],
+    ["Formula", "Fe3+", "+3"],
+    ["Name", "iron", "+2"],
+    ["Formula", "Cr2O7^2-", "2-"],
+  ])("%s %s beside %j, a species not analysed, agrees", (header, species, charge) => {
+    const text = `${header},Charge\n${species},${charge}\n`;
+    expect(findingsOf(text, "csv").filter((finding) => finding.code === "table-charge")).toEqual([]);
+  });
+
   it("is reported alike on every repeated row (remembered checks move with the cell)", () => {
     const text = `Formula,Charge\n${"NH4+,-1\n".repeat(3)}`;
     const findings = findingsOf(text, "csv");

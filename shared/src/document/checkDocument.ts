@@ -9,7 +9,7 @@ import { chooseRespelling } from "../chemistry/analysis/respelling";
 import type { AnalysisResult, Problem } from "../chemistry/types";
 import { analyzeOccurrence, speciesTextOf } from "./analyzeOccurrence";
 import { nameFormulaChecker, sameComposition, type NameFormulaCheck } from "./checks/nameFormulaAgreement";
-import { checkRecord } from "./checks/recordChecks";
+import { checkRecord, checkRecordReading } from "./checks/recordChecks";
 import { sameSpecies } from "./tables/records";
 import { severityOf } from "./findingSeverity";
 import { isSafeSpellingFix, type AnalyzeText } from "./fixPolicy";
@@ -104,6 +104,7 @@ function checkModel(
     const name = settles(record.species, result);
     if (name) result = analysisOf(name);
     if (result?.ok) checkRecord(record, result.value, findings);
+    else checkRecordReading(record, findings);
     const pair = record.nameBesideFormula;
     const disagreement = pair && nameFormula(pair, model.kind, () => nameFitsCells(record, pair.name, analysisOf));
     if (disagreement) findings.push(disagreement);

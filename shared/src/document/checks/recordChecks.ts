@@ -29,6 +29,19 @@ export function checkRecord(record: TableRecord, analysis: SpeciesAnalysis, into
   return into;
 }
 
+/**
+ * The checks of `record` that need its reading only, for a species the model does not analyse
+ * (Fe3+, Fe(CN)6^3-, UO2^2+): a charge column that contradicts the charge written in the formula.
+ */
+export function checkRecordReading(record: TableRecord, into: Finding[] = []): Finding[] {
+  for (const cell of record.cells) {
+    if (cell.meaning !== "charge") continue;
+    const finding = checkCharge(cell, speciesTextOf(record.species), record.species.reading.charge);
+    if (finding) into.push(finding);
+  }
+  return into;
+}
+
 /** Past results by column meaning, then cell text; `null` when the cell was found right. */
 type PastChecks = Map<string, Map<string, Finding | null>>;
 
