@@ -108,6 +108,8 @@ describe("worked examples balance to the textbook coefficients", () => {
     ["permanganate and hydrochloric acid", "KMnO4 + HCl -> KCl + MnCl2 + Cl2 + H2O", [2, 16, 2, 2, 5, 8]],
     // from memory: Zumdahl, ch. 3 (mhchem notation of the same propane equation)
     ["an mhchem span", "\\ce{C3H8 + O2 -> CO2 + H2O}", [1, 5, 3, 4]],
+    // common practice: chemformula's \ch takes the same notation
+    ["a chemformula span", "\\ch{C3H8 + O2 -> CO2 + H2O}", [1, 5, 3, 4]],
     // from memory: Atkins, Physical Chemistry (equilibrium arrow, Unicode)
     ["an equilibrium in Unicode", "N₂O₄ ⇌ NO₂", [1, 2]],
   ])("%s: %s", (_, equation, expected) => {

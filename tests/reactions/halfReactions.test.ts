@@ -244,6 +244,16 @@ describe("combining two half-reactions", () => {
     }
   });
 
+  it("keeps chemformula's \\ch wrapping on the line it writes", () => {
+    const text = TEXT.replaceAll("\\ce{", "\\ch{");
+    const actions = actionsAt(text, "-> Mn^2+").filter((action) => action.kind === "combine");
+    expect(actions).toHaveLength(1);
+    // from memory: Zumdahl, ch. 18 (the same titration as above)
+    expect(applied(text, actions[0])).toBe(
+      text.replace("4 H2O}$\n", "4 H2O}$\n$\\ch{5 Fe^2+ + MnO4- + 8 H+ -> 5 Fe^3+ + Mn^2+ + 4 H2O}$\n"),
+    );
+  });
+
   it.each<[string, string, string, string]>([
     // from memory: Brown, LeMay & Bursten, ch. 20 (oxalate and permanganate)
     [

@@ -52,9 +52,9 @@ export function balanceText(input: string, read: SpeciesReader = memoisedReader(
   }
 }
 
-/** The one equation typed as `input` (plain, or wrapped in `\\ce{...}`), if it is one. */
+/** The one equation typed as `input` (plain, or wrapped in `\\ce{...}` or `\\ch{...}`), if it is one. */
 export function readTypedEquation(input: string, read: SpeciesReader): Reaction | undefined {
-  const wrapped = /^\s*\\ce\{([\s\S]*)\}\s*$/.exec(input);
+  const wrapped = /^\s*\\c[eh]\{([\s\S]*)\}\s*$/.exec(input);
   const bodyStart = wrapped ? input.indexOf("{") + 1 : 0;
   const bodyEnd = wrapped ? input.lastIndexOf("}") : input.length;
   return readWholeEquation(input, bodyStart, bodyEnd, "mhchem", read);
@@ -72,7 +72,7 @@ function notAnEquationMessage(input: string, read: SpeciesReader): string {
   if (arrows.length === 0) return `"${input}" has no arrow (->, →, <=>, ⇌) between reactants and products`;
   if (arrows.length > 1) return `"${input}" has ${arrows.length} arrows; give one step at a time`;
   for (const piece of input
-    .replace(/\\ce\{|\}$/g, " ")
+    .replace(/\\c[eh]\{|\}$/g, " ")
     .split(/\s+\+\s+|\s*(?:<=>|<->|-+>|<-|[\u2192\u27f6\u2190\u27f5\u21cc\u21c4\u21c6\u2194\u27f7]|\s=\s)\s*/)) {
     const species = piece.trim().replace(/^(?:\d+\/\d+|\d*\.\d+|\d+)\s*(?=[A-Z([e])/, "");
     if (species.length === 0 || /^e(?:[-\u2212\u207b]|\^-)$/.test(species)) continue;

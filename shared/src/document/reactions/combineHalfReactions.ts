@@ -191,7 +191,8 @@ function partnerOf(text: string, half: HalfReaction, halves: readonly HalfReacti
 
 /**
  * The edit that puts `equation` on a new line after `after`'s line, with that line's indent,
- * bullet and mhchem wrapping (`$\ce{...}$`); undefined when the line's wrapping cannot be told.
+ * bullet and mhchem wrapping (`$\ce{...}$`, or chemformula's `\ch{...}`); undefined when the
+ * line's wrapping cannot be told.
  */
 function insertionAfter(text: string, after: Reaction, equation: string): TextFix | undefined {
   const lineStart = text.lastIndexOf("\n", after.range.start - 1) + 1;
@@ -204,7 +205,7 @@ function insertionAfter(text: string, after: Reaction, equation: string): TextFi
   let opener = "";
   let closer = "";
   if (after.notation === "mhchem") {
-    const wrap = /(\$\$|\$|\\\(|\\\[)?\\ce\{\s*$/.exec(before);
+    const wrap = /(\$\$|\$|\\\(|\\\[)?\\c[eh]\{\s*$/.exec(before);
     if (!wrap) return undefined;
     opener = wrap[0].trimEnd();
     closer = "}" + ({ $$: "$$", $: "$", "\\(": "\\)", "\\[": "\\]" }[wrap[1] ?? ""] ?? "");
