@@ -6,7 +6,7 @@
 import { readdirSync, readFileSync } from "node:fs";
 import { join } from "node:path";
 import { describe, expect, it } from "vitest";
-import { analyzeDocument, checkDocument, documentKindFor, type DocumentKind } from "../../shared/src/index";
+import { analyzeDocument, checkDelimitedText, checkDocument, documentKindFor, type DocumentKind } from "../../shared/src/index";
 import { stripLabels } from "./labelledText";
 
 const NON_ENGLISH = join(__dirname, "..", "fixtures", "real-style", "non-english");
@@ -127,6 +127,29 @@ describe("tables headed in other languages", () => {
   it("still reads Charge as a charge in an English table", () => {
     // from memory: the ammonium ion carries +1
     expect(findings("Formula,Charge\nNH4+,-1\n").map((finding) => finding[0])).toEqual(["table-charge"]);
+  });
+
+  it("gets the same findings from the fast reading of repeated rows", () => {
+    const rows = ["NH3;8;trigonal-planar;107,3;unpolar;3", "H2O;8;gewinkelt;120,5°;polar;240817", "CO2;16;linear;180;polar;2"];
+    const header = "Summenformel;Valenzelektronen;Molekülgeometrie;Bindungswinkel;Polarität;Charge";
+    const text = `${header}\n${Array.from({ length: 30 }, (_, index) => rows[index % rows.length]).join("\n")}\n`;
+    const model = analyzeDocument(text, "csv");
+    const ordinary = [...model.problems, ...checkDocument(model)].sort(
+      (a, b) => a.range.start - b.range.start || a.range.end - b.range.end,
+    );
+    expect(checkDelimitedText(text, "csv")).toEqual(ordinary);
+    // from memory: NH3 trigonal pyramidal and polar; H-O-H 104.5°; CO2 nonpolar
+    expect(new Set(ordinary.map((finding) => text.slice(finding.range.start, finding.range.end)))).toEqual(
+      new Set(["trigonal-planar", "unpolar", "120,5°", "polar"]),
+    );
+  });
+
+  it.each([
+    ["json", '[{"Formel": "H2O", "Molekülgeometrie": "linear", "Polarität": "polar"}, {"Formel": "CH4", "Polarität": "unpolar"}]'],
+    ["yaml", "- Formel: H2O\n  Molekülgeometrie: linear\n  Polarität: polar\n- Formel: CH4\n  Polarität: unpolar\n"],
+  ] as const)("reads German keys in %s", (kind, text) => {
+    // from memory: water is bent and polar, methane nonpolar
+    expect(findings(text, kind)).toEqual([["table-molecular-geometry", "linear", "gewinkelt"]]);
   });
 
   it("reads a balance gas marked Rest as a mixture", () => {
