@@ -11,7 +11,8 @@
  *   blocks; a `[source]`, `[listing]`, `[literal]` or `[asciimath]` paragraph; a `[stem]` or
  *   `[latexmath]` block or paragraph, read as math; a literal paragraph (its first
  *   line indented); block macros (`image::...[]`, `include::...[]`).
- * - reStructuredText: literal blocks (`::` and its indented block), code directives, comments
+ * - reStructuredText: literal blocks (`::` and its indented block), doctest blocks (a paragraph
+ *   that starts with ">>> "), code directives, comments
  *   (`..` and its indented block, and a `.. comment::` "directive"), hyperlink targets and
  *   substitution definitions, and the option lines of every directive (`:class:`, `:name:`,
  *   `:file:`: keys and paths, not words); the heading of a directive that names a file, a key or
@@ -55,7 +56,7 @@ export function markupBlockAt(text: string, line: MarkupLine, markup: TextMarkup
     case "asciidoc":
       return asciidocBlock(text, line);
     case "restructuredtext":
-      return rstExplicitBlock(text, line) ?? literalBlock(text, line, true);
+      return rstExplicitBlock(text, line) ?? literalBlock(text, line, true) ?? doctestBlock(text, line);
   }
 }
 
@@ -173,6 +174,12 @@ function rstExplicitBlock(text: string, line: MarkupLine): MarkupBlock | undefin
     return { kind: "code", start: line.start, end: next };
   // A comment, a target, a substitution definition or a raw directive: the whole indented block.
   return { kind: "code", start: line.start, end: Math.max(next, indentedBlockEnd(text, next, indent)) };
+}
+
+/** A doctest block: a paragraph whose first line starts with ">>> ", a Python session, to its blank line. */
+function doctestBlock(text: string, line: MarkupLine): MarkupBlock | undefined {
+  if (line.inParagraph || !/^\s*>>>(?:\s|$)/.test(line.text)) return undefined;
+  return { kind: "code", start: line.start, end: paragraphEnd(text, line.start) };
 }
 
 /** Past the option lines (":name: value", indented) that follow a directive's heading at `start`. */
