@@ -101,6 +101,12 @@ describe("checkDocument on data tables", () => {
     ["bond angle", "NH3", "<109.5"],
     ["bond angle", "H2O", "~104.5"],
     ["bond angle", "SF4", "90, 120, 180"],
+    // source: CRC Handbook of Chemistry and Physics, H-O-H 104.5° and H-N-H 107.3° (gas phase);
+    // the uncertainty qualifies the value and is no second angle
+    ["bond angle", "H2O", "104.5 ± 0.3"],
+    ["bond angle", "H2O", "104.5(3)°"],
+    ["bond angle", "NH3", "107.3 +/- 0.2"],
+    ["bond angle", "H2O", "104.5°±0.5°"],
     ["valence electrons", "SO4^2-", "32"],
     ["lone pairs on central atom", "XeF2", "3"],
   ])("accepts %s %j for %s", (column, species, cell) => {
@@ -123,6 +129,12 @@ describe("checkDocument on data tables", () => {
     // from memory: carbonyl carbons are trigonal planar and sp2, ether and alcohol oxygens bent
     // with two lone pairs, nitrile carbons sp; any general chemistry text
     expect(findings(`formula,${column}\n${species},${cell}\n`, "csv")).toEqual([]);
+  });
+
+  it("finds a wrong angle stated with an uncertainty, and offers no fix that would drop it", () => {
+    // from memory: H-O-H is about 104.5°, far from 120°
+    const found = checkDocument(analyzeDocument("formula,bond angle\nH2O,120.5 ± 0.3\n", "csv"));
+    expect(found.map((finding) => [finding.code, finding.fix])).toEqual([["table-bond-angle", undefined]]);
   });
 
   it("lists the centres, with no fix, when no centre of such a species fits", () => {

@@ -1,6 +1,6 @@
 /**
  * Bond angles as tables write them: "104.5", "104.5°", "~107", "≈ 107 deg", "<109.5", "90, 120",
- * "90/180", "102-104".
+ * "90/180", "102-104", "104,5°" with a decimal comma, "104.5 ± 0.3" and "104.5(3)" with an uncertainty.
  */
 
 export type AngleRelation = "equal" | "about" | "below" | "above";
@@ -16,6 +16,17 @@ export interface WrittenAngles {
  */
 const DECIMAL_COMMA = /(\d),(\d{1,2})(?!\d)/g;
 
+/**
+ * A measurement's uncertainty: "± 0.3", "+/- 0.2", "±0.5°", or digits in brackets against the
+ * value ("104.5(3)"). The angle is the value it qualifies, not a second angle.
+ */
+const UNCERTAINTY = /\s*(?:\u00b1|\+\/-|\+-)\s*\d+(?:[.,]\d+)?\s*\u00b0?|(?<=\d)\(\d{1,3}\)/g;
+
+/** True when the cell states an uncertainty: a fix would drop it, so none is offered. */
+export function hasUncertainty(cell: string): boolean {
+  return cell.search(UNCERTAINTY) >= 0;
+}
+
 /** True when the cell may be written with decimal commas. */
 export function mayHaveDecimalComma(cell: string): boolean {
   return /\d,\d{1,2}(?!\d)/.test(cell);
@@ -26,7 +37,7 @@ export function mayHaveDecimalComma(cell: string): boolean {
  * `decimalComma`, "104,5" is one angle, 104.5; without, it is two, 104 and 5.
  */
 export function parseAngles(cell: string, decimalComma = false): WrittenAngles | undefined {
-  const written = cell.trim().toLowerCase();
+  const written = cell.trim().toLowerCase().replace(UNCERTAINTY, "");
   const plain = decimalComma ? written.replace(DECIMAL_COMMA, "$1.$2") : written;
   const numbers = [...plain.matchAll(/\d+(?:\.\d+)?/g)].map((match) => Number(match[0]));
   if (numbers.length === 0 || numbers.some((value) => value > 360)) return undefined;

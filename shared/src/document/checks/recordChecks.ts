@@ -6,7 +6,7 @@ import type { CentreAnalysis, SpeciesAnalysis, TextRange } from "../../chemistry
 import { speciesTextOf } from "../analyzeOccurrence";
 import { chargeInStyleOf, chargeOfCell } from "../tables/chargeColumn";
 import type { Finding, TableCell, TableRecord } from "../types";
-import { angleInStyleOf, mayHaveDecimalComma, parseAngles, type WrittenAngles } from "./angleText";
+import { angleInStyleOf, hasUncertainty, mayHaveDecimalComma, parseAngles, type WrittenAngles } from "./angleText";
 import { axeInStyleOf, parseAxe } from "./axeText";
 import { computedGeometry, geometryInStyleOf, normalizeGeometry, readGeometry } from "./geometryText";
 import { hybridizationInStyleOf, normalizeHybridization } from "./hybridizationText";
@@ -414,7 +414,8 @@ function angleMismatch(cell: TableCell, species: string, analysis: SpeciesAnalys
     })
     .join(", ");
   const message = `Bond angle for ${species}: expected ${description} ${MODEL}, the table says ${cell.text}.`;
-  if (expected.length !== 1) return { range: cell.range, severity: "warning", code: "table-bond-angle", message };
+  if (expected.length !== 1 || hasUncertainty(cell.text))
+    return { range: cell.range, severity: "warning", code: "table-bond-angle", message };
   const measured = analysis.measuredAngles.length === 1 ? analysis.measuredAngles[0].degrees : undefined;
   return mismatch(cell, "table-bond-angle", message, angleInStyleOf(measured ?? expected[0].ideal, cell.text));
 }
