@@ -175,6 +175,9 @@ describe("a charge column that contradicts the formula", () => {
     ["Formula", "Fe3+", "+3"],
     ["Name", "iron", "+2"],
     ["Formula", "Cr2O7^2-", "2-"],
+    // a salt the model gives no shape, beside its cation's charge: no contradiction claimed
+    ["Name", "iron(III) chloride", "+3"],
+    ["Formula", "NaCl", "+1"],
   ])("%s %s beside %j, a species not analysed, agrees", (header, species, charge) => {
     const text = `${header},Charge\n${species},${charge}\n`;
     expect(findingsOf(text, "csv").filter((finding) => finding.code === "table-charge")).toEqual([]);

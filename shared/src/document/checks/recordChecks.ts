@@ -32,8 +32,11 @@ export function checkRecord(record: TableRecord, analysis: SpeciesAnalysis, into
 /**
  * The checks of `record` that need its reading only, for a species the model does not analyse
  * (Fe3+, Fe(CN)6^3-, UO2^2+): a charge column that contradicts the charge written in the formula.
+ * A salt or metal compound written without a charge ("iron(III) chloride" beside "+3") is left
+ * alone: there the column most likely gives its cation's charge.
  */
 export function checkRecordReading(record: TableRecord, into: Finding[] = []): Finding[] {
+  if (record.species.reading.charge === 0) return into;
   for (const cell of record.cells) {
     if (cell.meaning !== "charge") continue;
     const finding = checkCharge(cell, speciesTextOf(record.species), record.species.reading.charge);
