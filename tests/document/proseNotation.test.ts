@@ -75,3 +75,26 @@ describe("structural formulas with single-bond dashes in prose", () => {
     expect(found.filter((written) => /[-\u2013]/.test(written))).toEqual([]);
   });
 });
+
+describe("a group called a fragment, residue or unit", () => {
+  // common practice: mass-spectrum and polymer notes call a piece of a molecule a fragment or a
+  // repeat unit; from memory (atomic numbers and usual valences, IUPAC periodic table): CH2 has 8
+  // electrons but its carbon has two bonds free, NH and CF2 likewise, while SF4 (50 electrons),
+  // CO2 and CH2O hold together on their own
+  it.each([
+    ["The CH2 fragments, NH fragments and CF2 fragments; ⟦SF4⟧ fragments too.", ["SF4"]],
+    ["Polyethylene is CH2 units; the ⟦CO2⟧ fragment and the ⟦CH2O⟧ fragments.", ["CO2", "CH2O"]],
+    ["Loss of the CH3 fragment and a fragment (CH2) of the chain.", []],
+    ["The scrubber unit (⟦MnO2⟧ bed) and the ⟦NF3⟧ abatement unit.", ["MnO2", "NF3"]],
+  ])("%s", (marked, formulas) => {
+    check(marked, formulas);
+  });
+
+  // common practice: the writer's word says the open valence or odd electron is meant
+  it.each([
+    ["The CH2 fragments, CH2 units, the CH2 moiety, CH2 groups and the C(CH3)2 units of the chain.", []],
+    ["CH3 radicals and the C(CH3)2 radical; the C(CH3)2 was weighed.", ["no-valid-structure"]],
+  ])("%s gives findings %j", (text, codes) => {
+    expect(checkDocument(analyzeDocument(text, "markdown")).map((finding) => finding.code)).toEqual(codes);
+  });
+});

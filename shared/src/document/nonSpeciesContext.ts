@@ -3,7 +3,9 @@
  * (R–OH, Ar–NH₂, –COOCH₃, "the NO₂ group", "2H, OCH₂" in an NMR list), sample and run ids in a
  * series (N1, N2), and alloy designations (Ti6Al4V).
  */
+import { fitsOpenBonds } from "../chemistry/analysis/saturation";
 import { elementBySymbol } from "../chemistry/elements";
+import type { FormulaPart } from "../chemistry/types";
 import { NONMETALS } from "../chemistry/reader/nonmetals";
 
 /** Dashes that write a bond to a substituent: hyphen, en dash, em dash, figure dash, minus. */
@@ -26,11 +28,23 @@ const GROUP_WORDS = /^[\s)]*(?:groups?|substituents?|moiety|moieties|side[- ]cha
 const GROUP_BEFORE = /\b(?:groups?|substituents?|moiety)\s*\(\s*$|\b(?:group|substituent)\s+$/i;
 
 /**
- * Words that name a piece of a larger molecule only sometimes: "the OCH₃ fragment" is a group, but
- * "SF₄ fragments" from a discharge or a mass spectrum are molecules of their own.
+ * Words that name a piece of a larger molecule only sometimes: "the OCH₃ fragment" and "CH₂ units"
+ * are groups, but "SF₄ fragments" from a discharge or a mass spectrum are molecules of their own.
  */
-const PIECE_WORDS = /^[\s)]*(?:fragments?|residues?)\b/i;
+const PIECE_WORDS = /^[\s)]*(?:fragments?|residues?|units?)\b/i;
+// Not "unit (": "the destruct unit (MnO2 catalyst)" names a part of an apparatus.
 const PIECE_BEFORE = /\b(?:fragments?|residues?)\s*\(\s*$/i;
+
+/** Words after a formula that say the writer knows it is a piece or a radical: "CH₃ radicals". */
+const OPEN_SHELL_WORDS = /^[\s)]*(?:fragments?|residues?|units?|radicals?)\b/i;
+
+/**
+ * True when the writer calls the formula at `[start, end)` a fragment, residue, unit or radical:
+ * an open valence or an odd electron there is what they mean, no mistake to report.
+ */
+export function isCalledAPiece(text: string, start: number, end: number): boolean {
+  return OPEN_SHELL_WORDS.test(text.slice(end, end + 16)) || PIECE_BEFORE.test(text.slice(Math.max(0, start - 30), start));
+}
 
 /** The "nH, " of an NMR assignment list: "(q, 2H, OCH₂)". */
 const NMR_PROTONS = /\b\d{1,2}H,\s*$/;
@@ -42,7 +56,7 @@ const PLACEHOLDER_BEFORE = /(?:^|[^A-Za-z])(?:R[\u2032'\u2081\u2082\d]?|Ar)$/;
  * True when the formula at `[start, end)` is written as part of a larger molecule: after a bond
  * dash that opens a word or follows R or Ar ("–COOCH₃", "R–OH", "Ar–NH₂"), as Ar before a bond
  * dash to another group ("Ar–OH"), named a group, listed in an NMR assignment, or called a
- * fragment or residue when it is a radical as written (`charged`: the token carries a charge).
+ * fragment, residue or unit when it is open as written (`charged`: the token carries a charge).
  */
 export function isGroupFragment(text: string, start: number, end: number, body: string, charged: boolean): boolean {
   const before = text.charCodeAt(start - 1);
@@ -59,41 +73,46 @@ export function isGroupFragment(text: string, start: number, end: number, body: 
 }
 
 /**
- * Whether an uncharged formula has an odd number of electrons, as a group cut from a molecule at
- * one bond has (CH₃, OCH₃, C₆H₅, COOH, NO₂), while a molecule that holds together on its own
- * mostly has an even number (SF₄, CO₂, H₂O). A formula that cannot be counted is taken for a
- * group, as before.
+ * Whether an uncharged formula is open where it was cut from a molecule, as a group is: an odd
+ * number of electrons (CH₃, OCH₃, C₆H₅, COOH, NO₂), or atoms that cannot all reach their usual
+ * valence on their own (CH₂, NH, CF₂), while a molecule that holds together on its own is closed
+ * (SF₄, CO₂, H₂O). A formula that cannot be counted is taken for a group, as before.
  */
 function isCutFromBond(body: string): boolean {
-  const electrons = electronCount(body);
-  return electrons === undefined || electrons % 2 === 1;
+  const composition = compositionOf(body);
+  if (composition === undefined) return true;
+  let electrons = 0;
+  for (const part of composition) electrons += elementBySymbol(part.symbol)!.atomicNumber * part.count;
+  return electrons % 2 === 1 || fitsOpenBonds(composition, 0) === false;
 }
 
-/** The electrons of the neutral formula `body` (symbols, counts, brackets), or undefined when it does not read so. */
-function electronCount(body: string): number | undefined {
-  const counts = [0];
+/** The atoms of the neutral formula `body` (symbols, counts, brackets), or undefined when it does not read so. */
+function compositionOf(body: string): FormulaPart[] | undefined {
+  const counts: Map<string, number>[] = [new Map()];
   const parts =
     body.replace(/[\u2080-\u2089]/g, (digit) => String(digit.charCodeAt(0) - 0x2080)).match(/[A-Z][a-z]?|\d+|[([]|[)\]]|./g) ?? [];
-  let last = 0;
+  let last = new Map<string, number>();
   for (const part of parts) {
+    const current = counts[counts.length - 1];
     if (/^\d+$/.test(part)) {
-      counts[counts.length - 1] += last * (Number(part) - 1);
-      last = 0;
+      for (const [symbol, count] of last) current.set(symbol, (current.get(symbol) ?? 0) + count * (Number(part) - 1));
+      last = new Map();
     } else if (part === "(" || part === "[") {
-      counts.push(0);
-      last = 0;
+      counts.push(new Map());
+      last = new Map();
     } else if (part === ")" || part === "]") {
       if (counts.length < 2) return undefined;
       last = counts.pop()!;
-      counts[counts.length - 1] += last;
+      const outer = counts[counts.length - 1];
+      for (const [symbol, count] of last) outer.set(symbol, (outer.get(symbol) ?? 0) + count);
     } else {
-      const element = elementBySymbol(part);
-      if (!element) return undefined;
-      last = element.atomicNumber;
-      counts[counts.length - 1] += last;
+      if (!elementBySymbol(part)) return undefined;
+      current.set(part, (current.get(part) ?? 0) + 1);
+      last = new Map([[part, 1]]);
     }
   }
-  return counts.length === 1 ? counts[0] : undefined;
+  if (counts.length !== 1) return undefined;
+  return [...counts[0]].map(([symbol, count]) => ({ symbol, count }));
 }
 
 /** A series of ids is looked for in blocks of this many characters around a token. */

@@ -7,7 +7,7 @@
 import { scriptMarkupAt, withUnicodeScripts } from "../chemistry/reader/markupScripts";
 import { isGluedCoefficient, isLoneReactant } from "./equationContext";
 import { isSafeSpellingFix } from "./fixPolicy";
-import { isAlloyDesignation, isGroupFragment, isSeriesId, type SeriesMemo } from "./nonSpeciesContext";
+import { isAlloyDesignation, isCalledAPiece, isGroupFragment, isSeriesId, type SeriesMemo } from "./nonSpeciesContext";
 import { latexKeyCommandEnd } from "./latexCommands";
 import { latexMathSpan, scanLatexMath, type MathSpan } from "./latexMathSpan";
 import { holdsMhchem, mhchemOpensAt, mhchemSpanEnd, scanMhchemBody } from "./mhchemSpan";
@@ -18,6 +18,7 @@ import { isSingleBondedMolecule } from "./singleBondRuns";
 import { isOccurrence, smilesAt, smilesOccurrence } from "./smilesSpan";
 import { newNameScanState, scanNamesInChunk, type NameScanState } from "./proseNames";
 import { emptySink, memoisedReader, occurrenceAt, unreadableAt, type ScanSink, type ScanSteps, type SpeciesReader } from "./speciesReader";
+import type { SpeciesReading } from "../chemistry/types";
 import type { SpeciesOccurrence } from "./types";
 
 /** Chunks longer than this are pasted data (base64, hashes, minified text), not words. */
@@ -486,7 +487,7 @@ function formulaToken(scan: ProseScan, start: number, end: number, massDigits = 
   if (bracketedCharge) {
     const read = scan.read(text.slice(start, bracketedCharge.end));
     if (read.ok && !isPartOfCode(text, start, bracketedCharge.end)) {
-      scan.sink.occurrences.push(occurrenceAt(read.value, text.slice(start, bracketedCharge.end), start, "formula"));
+      pushFormula(scan, read.value, text.slice(start, bracketedCharge.end), start);
       return bracketedCharge.end;
     }
   }
@@ -564,8 +565,7 @@ function formulaToken(scan: ProseScan, start: number, end: number, massDigits = 
   if (stateLength > 0) {
     const withState = text.slice(bodyStart, tokenEnd + stateLength);
     const stateResult = scan.read(withState);
-    if (stateResult.ok && (massDigits === 0 || stateResult.value.isotopes))
-      scan.sink.occurrences.push(occurrenceAt(stateResult.value, withState, bodyStart, "formula"));
+    if (stateResult.ok && (massDigits === 0 || stateResult.value.isotopes)) pushFormula(scan, stateResult.value, withState, bodyStart);
     return tokenEnd + stateLength;
   }
   // "NaCl (s)", "H₂SO₄ (aq)": a state symbol after one space belongs to the mention too, when the whole reads.
@@ -574,7 +574,7 @@ function formulaToken(scan: ProseScan, start: number, end: number, massDigits = 
     const withState = text.slice(bodyStart, spacedStateEnd);
     const stateResult = scan.read(withState);
     if (stateResult.ok && (massDigits === 0 || stateResult.value.isotopes)) {
-      scan.sink.occurrences.push(occurrenceAt(stateResult.value, withState, bodyStart, "formula"));
+      pushFormula(scan, stateResult.value, withState, bodyStart);
       if (spacedStateEnd > end) scan.resumeAt = Math.max(scan.resumeAt, spacedStateEnd);
       return spacedStateEnd;
     }
@@ -582,17 +582,26 @@ function formulaToken(scan: ProseScan, start: number, end: number, massDigits = 
   const result = scan.read(token);
   // Digits read as a mass number only when the reader agrees they label an isotope.
   if (massDigits > 0) {
-    if (result.ok && result.value.isotopes) scan.sink.occurrences.push(occurrenceAt(result.value, token, bodyStart, "formula"));
+    if (result.ok && result.value.isotopes) pushFormula(scan, result.value, token, bodyStart);
     return next;
   }
   if (result.ok) {
-    scan.sink.occurrences.push(occurrenceAt(result.value, token, bodyStart, "formula"));
+    pushFormula(scan, result.value, token, bodyStart);
   } else if ((shape.hasCount || shape.hasCharge) && new Set(shape.symbols).size > 1) {
     // Report only what comes with a safe better spelling: "CLF3" -> "ClF3", never "CDCl3" -> "CdCl3".
     const suggestion = result.problem.suggestion;
     if (suggestion && isSafeSpellingFix(token, suggestion)) scan.sink.unreadable.push(unreadableAt(token, bodyStart, result));
   }
   return next;
+}
+
+/**
+ * Adds the formula `written` at `start` to what the scan found. One the writer calls a fragment,
+ * unit or radical ("CH2 fragments", "CH3 radicals") is shown but never the subject of a finding.
+ */
+function pushFormula(scan: ProseScan, reading: SpeciesReading, written: string, start: number): void {
+  const occurrence = occurrenceAt(reading, written, start, "formula");
+  scan.sink.occurrences.push(isCalledAPiece(scan.text, start, start + written.length) ? { ...occurrence, inferred: true } : occurrence);
 }
 
 /** A one-element token with a count in a series of ids nearby: in its own stretch, or in one near it. */

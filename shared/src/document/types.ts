@@ -20,8 +20,9 @@ export interface SpeciesOccurrence {
   readonly text: string;
   readonly reading: SpeciesReading;
   /**
-   * Set for a mention the writer did not mark as chemistry (a code span that parses as SMILES):
-   * shown in hovers and tables, never the subject of a finding.
+   * Set for a mention shown in hovers and tables but never the subject of a finding: one the
+   * writer did not mark as chemistry (a code span that parses as SMILES), or one they call a
+   * fragment, unit or radical ("CH3 radicals"), whose open valence is what they mean.
    */
   readonly inferred?: true;
   /**

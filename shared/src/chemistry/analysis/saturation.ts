@@ -34,16 +34,16 @@ export function oversaturationProblem(formula: string, composition: readonly For
 /**
  * Whether a neutral group of these atoms hangs on exactly `bonds` single bonds to the rest of a
  * molecule with every atom at its usual valence: CH3, OH and Cl on one, CH2 and O on two, CO (a
- * carbonyl) on two, but CH2 never on one and CH4 on none. False when an element has no usual
- * valence here.
+ * carbonyl) on two, CH4 and CO2 on none, but CH2 never on one or none. Undefined when an element
+ * has no usual valence here.
  */
-export function fitsOpenBonds(composition: readonly FormulaPart[], bonds: number): boolean {
+export function fitsOpenBonds(composition: readonly FormulaPart[], bonds: number): boolean | undefined {
   let terminal = 0;
   let inner = 0;
   let innerValence = 0;
   for (const { symbol, count } of composition) {
     const valence = USUAL_VALENCE[symbol];
-    if (valence === undefined) return false;
+    if (valence === undefined) return undefined;
     if (valence === 1) terminal += count;
     else {
       inner += count;
