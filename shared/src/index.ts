@@ -50,7 +50,7 @@ export {
 export type { DelimitedRowMemo } from "./document/tables/delimitedFindings";
 export type * from "./document/types";
 export { editsOfFix, movedFix, shiftedFix } from "./document/fixEdits";
-export { tableValueFixes } from "./document/tableFixes";
+export { tableValueFixes, tableValueFixesInParts } from "./document/tableFixes";
 
 // Equations: reading them, balancing them, and what the checks say about them.
 export type * from "./document/reactions/reactionTypes";

@@ -5,6 +5,7 @@ import { existsSync, readFileSync } from "node:fs";
 import { loadavg } from "node:os";
 import { fileURLToPath } from "node:url";
 import {
+  CodeActionRequest,
   DidChangeTextDocumentNotification,
   DidCloseTextDocumentNotification,
   DidOpenTextDocumentNotification,
@@ -12,6 +13,7 @@ import {
   HoverRequest,
   InitializeRequest,
   InitializedNotification,
+  InlayHintRequest,
   PublishDiagnosticsNotification,
   StreamMessageReader,
   StreamMessageWriter,
@@ -63,7 +65,19 @@ export async function startServer(mode) {
   await connection.sendRequest(InitializeRequest.type, {
     processId: process.pid,
     rootUri: null,
-    capabilities: { textDocument: { ...textDocument, hover: { contentFormat: ["markdown"] } } },
+    capabilities: {
+      textDocument: {
+        ...textDocument,
+        hover: { contentFormat: ["markdown"] },
+        // As an editor with a lightbulb asks: on every cursor move, with literal actions.
+        codeAction: {
+          codeActionLiteralSupport: { codeActionKind: { valueSet: ["quickfix", "refactor", "source"] } },
+          dataSupport: true,
+          resolveSupport: { properties: ["edit"] },
+        },
+        inlayHint: {},
+      },
+    },
     workspaceFolders: null,
   });
   await connection.sendNotification(InitializedNotification.type, {});
@@ -102,6 +116,21 @@ export async function startServer(mode) {
     },
     hover(uri, position) {
       return connection.sendRequest(HoverRequest.type, { textDocument: { uri }, position });
+    },
+    /** The code actions at `position`, as the lightbulb asks for them after a cursor move. */
+    codeActions(uri, position) {
+      return connection.sendRequest(CodeActionRequest.type, {
+        textDocument: { uri },
+        range: { start: position, end: position },
+        context: { diagnostics: [], triggerKind: 2 },
+      });
+    },
+    /** The inlay hints of lines `from` to `to`, as an editor asks for the lines in view. */
+    inlayHints(uri, from, to) {
+      return connection.sendRequest(InlayHintRequest.type, {
+        textDocument: { uri },
+        range: { start: { line: from, character: 0 }, end: { line: to, character: 0 } },
+      });
     },
     /** The server's peak resident memory so far, in MB. */
     peakMegabytes() {

@@ -6,6 +6,8 @@
  * fix's; its edits are digits and spaces inside the cell, so a CSV field stays one valid field.
  */
 import type { TextRange } from "../chemistry/types";
+import { shiftedFix } from "./fixEdits";
+import type { FindingPart } from "./findingPart";
 import type { Reaction } from "./reactions/reactionTypes";
 import type { DocumentKind, DocumentModel, Finding, TextFix } from "./types";
 
@@ -14,6 +16,43 @@ import type { DocumentKind, DocumentModel, Finding, TextFix } from "./types";
  * without overlaps (two findings may want to rewrite the same cell; the first wins).
  */
 export function tableValueFixes(model: DocumentModel, findings: readonly Finding[]): TextFix[] {
+  const inTable = tableValuePlaces(model);
+  const fixes = findings
+    .map((finding) => finding.fix)
+    .filter((fix): fix is TextFix => fix !== undefined && inTable(fix.range))
+    .sort((a, b) => a.range.start - b.range.start);
+  return [...withoutOverlaps(fixes)];
+}
+
+/**
+ * The same fixes, for a document read a part at a time (`findingParts`, in document order): each
+ * fix is placed against the model of the stretch around it, so a large table's rows are read only
+ * where fixes are, and a caller that wants to know whether there is any stops at the first.
+ */
+export function* tableValueFixesInParts(
+  parts: Iterable<FindingPart>,
+  modelAround: (start: number, end: number) => DocumentModel,
+): Generator<TextFix> {
+  // Fixes fall in runs within a few rows: one stretch's model serves the fixes inside its cells.
+  let inLastModel: ((range: TextRange) => boolean) | undefined;
+  const inTable = (range: TextRange): boolean => {
+    if (inLastModel?.(range)) return true;
+    inLastModel = tableValuePlaces(modelAround(range.start, range.end));
+    return inLastModel(range);
+  };
+  function* partFixes(): Generator<TextFix> {
+    for (const { findings, offset } of parts) {
+      const fixes: TextFix[] = [];
+      for (const finding of findings) if (finding.fix) fixes.push(offset === 0 ? finding.fix : shiftedFix(finding.fix, offset));
+      fixes.sort((a, b) => a.range.start - b.range.start);
+      for (const fix of fixes) if (inTable(fix.range)) yield fix;
+    }
+  }
+  yield* withoutOverlaps(partFixes());
+}
+
+/** Whether a range lies inside a recognised table cell or a table's equation of `model`. */
+function tableValuePlaces(model: DocumentModel): (range: TextRange) => boolean {
   const cells: TextRange[] = [];
   for (const record of model.records) {
     cells.push(record.species.range);
@@ -23,16 +62,17 @@ export function tableValueFixes(model: DocumentModel, findings: readonly Finding
   // Kept apart from the cells: each list alone holds ranges that do not overlap.
   const equations = (model.reactions ?? []).filter((reaction) => readFromTableCell(model.kind, reaction)).map((reaction) => reaction.range);
   equations.sort(byStart);
-  const fixes = findings
-    .map((finding) => finding.fix)
-    .filter((fix): fix is TextFix => fix !== undefined && (insideSome(fix.range, cells) || insideSome(fix.range, equations)))
-    .sort((a, b) => a.range.start - b.range.start);
-  const chosen: TextFix[] = [];
+  return (range) => insideSome(range, cells) || insideSome(range, equations);
+}
+
+/** Fixes in order of their start, each dropped when it overlaps the last one kept: two findings may want to rewrite the same cell, and the first wins. */
+function* withoutOverlaps(fixes: Iterable<TextFix>): Generator<TextFix> {
+  let previous: TextFix | undefined;
   for (const fix of fixes) {
-    const previous = chosen[chosen.length - 1];
-    if (!previous || previous.range.end <= fix.range.start) chosen.push(fix);
+    if (previous && previous.range.end > fix.range.start) continue;
+    previous = fix;
+    yield fix;
   }
-  return chosen;
 }
 
 /**

@@ -13,7 +13,7 @@ import {
 } from "vscode-languageserver";
 import type { TextDocument } from "vscode-languageserver-textdocument";
 import { editsOfFix, type Finding, type FixEdit, type TextFix, type TextRange } from "../core";
-import { equationActions, tableValueFixes, type EquationAction } from "../../../../shared/src/index";
+import { equationActions, isTextMarkup, tableValueFixesInParts, type EquationAction } from "../../../../shared/src/index";
 import type { AnalysedDocument } from "../documentCache";
 import { guarded } from "../guardedHandler";
 import { lspRange, offsetRange, rangesTouch } from "../ranges";
@@ -43,13 +43,13 @@ export function registerCodeActions(context: ServerContext): void {
       const enabled = await enabledDocument(context, params.textDocument.uri);
       if (!enabled) return [];
       const { document, analysed } = enabled;
-      const findings = analysed.findings();
       const only = params.context.only;
       const wants = (kind: string): boolean => !only || only.some((requested) => kind === requested || kind.startsWith(`${requested}.`));
       const actions: CodeAction[] = [];
       if (wants(CodeActionKind.QuickFix)) {
         const requested = offsetRange(document, params.range);
-        for (const finding of findings) {
+        // The lightbulb asks on every cursor move: only the part of the document around the cursor is read.
+        for (const finding of analysed.findingsAround(requested.start, requested.end)) {
           if (token.isCancellationRequested) return [];
           if (!rangesTouch(finding.range, requested)) continue;
           if (finding.fix) actions.push(quickFix(context, document, finding, finding.fix, params.context.diagnostics));
@@ -67,7 +67,7 @@ export function registerCodeActions(context: ServerContext): void {
         }
       }
       const kind = wants(CodeActionKind.QuickFix) ? CodeActionKind.QuickFix : wants(FIX_ALL_KIND) ? FIX_ALL_KIND : undefined;
-      if (kind && tableFixesOf(analysed).length > 0) {
+      if (kind && hasTableFixes(analysed)) {
         const action: CodeAction = { title: FIX_ALL_TITLE, kind };
         // A big table's fix-all edit is large: where the client resolves edits, it is built only when chosen.
         if (context.clientFeatures().codeActionResolveEdit)
@@ -95,20 +95,28 @@ function fixAllEdit(context: ServerContext, document: TextDocument, analysed: An
   return workspaceEdit(
     context,
     document,
-    tableFixesOf(analysed).flatMap((fix) => editsOfFix(fix).map((edit) => textEdit(document, edit))),
+    [...tableFixesOf(analysed)].flatMap((fix) => editsOfFix(fix).map((edit) => textEdit(document, edit))),
   );
 }
 
-/** Table fixes per analysed version: the lightbulb asks on every cursor move. */
-const tableFixMemo = new WeakMap<AnalysedDocument, readonly TextFix[]>();
+/** The fixes of the table values, found a part of the document at a time (see `tableValueFixesInParts`). */
+function tableFixesOf(analysed: AnalysedDocument): Iterable<TextFix> {
+  return tableValueFixesInParts(analysed.findingParts(), (start, end) => analysed.modelAround(start, end));
+}
 
-function tableFixesOf(analysed: AnalysedDocument): readonly TextFix[] {
-  let fixes = tableFixMemo.get(analysed);
-  if (!fixes) {
-    fixes = tableValueFixes(analysed.model, analysed.findings());
-    tableFixMemo.set(analysed, fixes);
+/**
+ * Whether fix-all has anything to do, per analysed version: the lightbulb asks on every cursor
+ * move, and only the first fix is looked for (its edit is built when the action is chosen).
+ */
+const hasTableFixesMemo = new WeakMap<AnalysedDocument, boolean>();
+
+function hasTableFixes(analysed: AnalysedDocument): boolean {
+  let has = hasTableFixesMemo.get(analysed);
+  if (has === undefined) {
+    has = !tableFixesOf(analysed)[Symbol.iterator]().next().done;
+    hasTableFixesMemo.set(analysed, has);
   }
-  return fixes;
+  return has;
 }
 
 function quickFix(
@@ -136,11 +144,18 @@ function quickFix(
   };
 }
 
-/** Completing or combining half-reactions on the arrows in `range`; tables are read only around it. */
+/**
+ * Completing or combining half-reactions on the arrows in `range`. Only the part of the document
+ * around `range` is read, unless an arrow is there in prose: a half-reaction is combined with its
+ * partner, which may be anywhere in the document.
+ */
 function equationActionsOf(document: TextDocument, analysed: AnalysedDocument, range: TextRange): EquationAction[] {
-  const model =
-    analysed.model.kind === "csv" || analysed.model.kind === "tsv" ? analysed.modelAround(range.start, range.end) : analysed.model;
-  if (!model.reactions || model.reactions.length === 0) return [];
+  const around = analysed.modelAround(range.start, range.end);
+  const touched = (around.reactions ?? []).some(
+    (reaction) => reaction.arrow.range.start <= range.end && range.start <= reaction.arrow.range.end,
+  );
+  if (!touched) return [];
+  const model = around.kind === "markdown" || isTextMarkup(around.kind) ? analysed.model : around;
   return equationActions(document.getText(), model, range);
 }
 
