@@ -6,7 +6,7 @@ const entries = [
   { in: "server/src/cli/main.ts", out: "cli" },
   { in: "server/src/lsp/main.ts", out: "server" },
   // The language server's worker thread for the hover cards of large species.
-  { in: "server/src/lsp/speciesWorker.ts", out: "speciesWorker" },
+  { in: "server/src/lsp/workerThread.ts", out: "workerThread" },
   { in: "client/src/extension.ts", out: "client" },
   // The bundled core, for the benchmark (tests/bench/run.mjs) and other plain Node scripts.
   { in: "shared/src/index.ts", out: "core" },

@@ -22,7 +22,7 @@ import { createSettingsStore } from "./settingsStore";
 import { registerCodeActions } from "./features/codeActions";
 import { registerDiagnostics, type DiagnosticsFeature } from "./features/diagnostics";
 import { registerHover, type HoverFeature } from "./features/hover";
-import { createOffThreadSpecies } from "./offThreadSpecies";
+import { createOffThreadWork } from "./offThreadWork";
 import { registerInlayHints } from "./features/inlayHints";
 import { registerSpeciesRequests } from "./features/speciesRequests";
 import { registerLewisFigure } from "./features/lewisFigure";
@@ -66,7 +66,7 @@ export function startServer(connection: Connection, longWork: LongWork = { giveW
     const initialSettings = (params.initializationOptions as { settings?: unknown } | null | undefined)?.settings;
     if (initialSettings !== undefined) settings.changed(initialSettings);
     // One worker for every request about a large species: hovers, 3D models, coordinate files.
-    const offThread = createOffThreadSpecies(log);
+    const offThread = createOffThreadWork(log);
     hover = registerHover(context, offThread);
     registerCodeActions(context);
     registerSummaryTable(context);

@@ -18,7 +18,7 @@ import {
 import type { Finding, TextRange } from "../core";
 import type { AnalysedDocument } from "../documentCache";
 import { guarded } from "../guardedHandler";
-import { isLargeSmiles, type OffThreadSpecies } from "../offThreadSpecies";
+import { isLargeSmiles, type OffThreadWork } from "../offThreadWork";
 import { lspRange } from "../ranges";
 import { DEFAULT_SETTINGS } from "../settings";
 import { enabledDocument, type ServerContext } from "../serverContext";
@@ -81,7 +81,7 @@ const HOVER_VIEW_CHARACTERS = 2_000;
 /** Registers the hover handler; `cards` defaults to a memo of its own. */
 export function registerHover(
   context: ServerContext,
-  offThread: OffThreadSpecies,
+  offThread: OffThreadWork,
   cards: HoverCardMemo = createHoverCardMemo(),
 ): HoverFeature {
   const inView = new Map<string, TextRange>();

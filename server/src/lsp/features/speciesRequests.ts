@@ -29,11 +29,11 @@ import { guarded } from "../guardedHandler";
 import { lspRange } from "../ranges";
 import { enabledDocument, type ServerContext } from "../serverContext";
 import { diagnosticsOf } from "./diagnostics";
-import { isLargeSmiles, type OffThreadSpecies } from "../offThreadSpecies";
+import { isLargeSmiles, type OffThreadWork } from "../offThreadWork";
 import { coordinatesAnswer, shapeModelAnswer } from "../speciesModelAnswers";
 
 /** Registers the five requests. */
-export function registerSpeciesRequests(context: ServerContext, offThread: OffThreadSpecies): void {
+export function registerSpeciesRequests(context: ServerContext, offThread: OffThreadWork): void {
   const { connection, log } = context;
   connection.onRequest(
     SPECIES_AT_METHOD,

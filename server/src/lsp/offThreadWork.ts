@@ -1,6 +1,6 @@
 /**
  * Work on one large SMILES species (its hover card, 3D view model or coordinate file, each of
- * which needs the 3D model) done on a worker thread (see `speciesWorker.ts`), so one species never
+ * which needs the 3D model) done on a worker thread (see `workerThread.ts`), so one species never
  * holds up other requests. One worker, started on first use, runs one job at a time; a cancelled
  * job waiting its turn is dropped, and a cancelled job that is running stops the worker (a new one
  * starts for the next job). Should the worker be missing or fail, the answer says so and the
@@ -23,20 +23,20 @@ export function isLargeSmiles(analysis: SpeciesAnalysis): boolean {
 }
 
 /** One job for the worker, by what it asks for. */
-export type SpeciesJob =
+export type OffThreadJob =
   | { readonly kind: "card"; readonly smiles: string; readonly options: HoverMarkdownOptions }
   | { readonly kind: "shapeModel"; readonly smiles: string }
   | { readonly kind: "coordinates"; readonly smiles: string; readonly format: CoordinateFormat };
 
 /** What each kind of job answers; undefined when the worker could not work it out. */
-export interface SpeciesJobValue {
+export interface OffThreadJobValue {
   readonly card: string | undefined;
   readonly shapeModel: ShapeModelAnswer | undefined;
   readonly coordinates: CoordinatesAnswer | undefined;
 }
 
 /** A job as posted to the worker. */
-export type WorkerRequest = SpeciesJob & { readonly id: number };
+export type WorkerRequest = OffThreadJob & { readonly id: number };
 
 /** The worker's reply to job `id`. */
 export interface WorkerReply {
@@ -48,11 +48,11 @@ export interface WorkerReply {
 export type OffThreadAnswer<T> =
   { readonly kind: "done"; readonly value: T } | { readonly kind: "cancelled" } | { readonly kind: "unavailable" };
 
-export interface OffThreadSpecies {
-  run<K extends SpeciesJob["kind"]>(
-    job: Extract<SpeciesJob, { kind: K }>,
+export interface OffThreadWork {
+  run<K extends OffThreadJob["kind"]>(
+    job: Extract<OffThreadJob, { kind: K }>,
     token?: CancellationToken,
-  ): Promise<OffThreadAnswer<SpeciesJobValue[K]>>;
+  ): Promise<OffThreadAnswer<OffThreadJobValue[K]>>;
 }
 
 interface QueuedJob {
@@ -61,8 +61,8 @@ interface QueuedJob {
   stopListening?: () => void;
 }
 
-/** `workerPath` defaults to the bundle beside the running server (dist/speciesWorker.js). */
-export function createOffThreadSpecies(log: ServerLog, workerPath = join(__dirname, "speciesWorker.js")): OffThreadSpecies {
+/** `workerPath` defaults to the bundle beside the running server (dist/workerThread.js). */
+export function createOffThreadWork(log: ServerLog, workerPath = join(__dirname, "workerThread.js")): OffThreadWork {
   let worker: Worker | undefined;
   let running: QueuedJob | undefined;
   const queue: QueuedJob[] = [];

@@ -1,11 +1,11 @@
 /**
- * Worker thread (bundled to dist/speciesWorker.js) for the work on one large SMILES species that
+ * Worker thread (bundled to dist/workerThread.js) for the work on one large SMILES species that
  * needs its 3D model: the hover card (for the polarity), the 3D view model and the coordinate
  * file. The server's own thread meanwhile goes on answering every other request.
  */
 import { parentPort } from "node:worker_threads";
 import { analyzeSmiles, hoverMarkdown } from "../../../shared/src/index";
-import type { WorkerReply, WorkerRequest } from "./offThreadSpecies";
+import type { WorkerReply, WorkerRequest } from "./offThreadWork";
 import { coordinatesAnswer, shapeModelAnswer } from "./speciesModelAnswers";
 
 function answer(job: WorkerRequest): unknown {
