@@ -169,7 +169,8 @@ export {
   wholeText,
 } from "./document/chunkedText";
 export type { ChunkedText, ChunkedTextBuilder, LineAndCharacter, TextChunk } from "./document/chunkedText";
-export { createDocumentAnalyser } from "./document/incrementalAnalysis";
+export { createDocumentAnalyser, wholeReadingOf } from "./document/incrementalAnalysis";
+export type { WholeReading } from "./document/listParts";
 export type { DocumentAnalyser, DocumentAnalysis } from "./document/incrementalAnalysis";
 export type { FindingPart } from "./document/findingPart";
 export { NOTES_SHOWN_AS, isNotesShownAs, shownFindings, shownParts, shownSeverity } from "./document/notesShownAs";

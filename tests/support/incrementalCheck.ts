@@ -61,6 +61,17 @@ export function checkAgainstScratch(session: Session, kind: DocumentKind, random
     const offset = Math.floor(random() * (plain.length + 1));
     expect(analysis.speciesAt(offset)?.range).toEqual(speciesAtOffset(model, offset)?.range);
   }
+  // The status bar's count of mentions, a part at a time, is the fresh model's.
+  expect(speciesCountOf(session.analyser.analyse(session.text))).toBe(model.occurrences.length);
+}
+
+/** `analysis.speciesCount()` run to its end. */
+export function speciesCountOf(analysis: ReturnType<ReturnType<typeof createDocumentAnalyser>["analyse"]>): number {
+  const steps = analysis.speciesCount();
+  for (;;) {
+    const step = steps.next();
+    if (step.done) return step.value;
+  }
 }
 
 /**

@@ -21,9 +21,9 @@ import { speciesTextOf } from "./analyzeOccurrence";
 import { checkDocument } from "./checkDocument";
 import { placedParts, type FindingPart } from "./findingPart";
 import { findingsInParts } from "./findingsInParts";
-import { jsonListReader } from "./jsonParts";
-import type { ListVersion } from "./listParts";
-import { yamlListReader } from "./yamlParts";
+import { jsonListReader, wholeJsonReading } from "./jsonParts";
+import type { ListVersion, WholeReading } from "./listParts";
+import { wholeYamlReading, yamlListReader } from "./yamlParts";
 import { sliceOf, wholeText, type ChunkedText, type TextChunk } from "./chunkedText";
 import { isTextMarkup } from "./documentKind";
 import { markdownAnalyser } from "./markdownAnalysis";
@@ -70,6 +70,18 @@ export interface DocumentAnalysis {
    * read only where asked); ranges may be those of an earlier version. For preparing hovers.
    */
   distinctSpecies(): readonly SpeciesOccurrence[];
+  /**
+   * How many species mentions the document holds (its model's occurrences), worked out a part
+   * at a time without building the whole model: the generator yields between parts, so a caller
+   * can answer other requests, and returns the count. Parts an edit left alone are not counted again.
+   */
+  speciesCount(): Generator<void, number, undefined>;
+  /**
+   * Set while this version's findings wait on reading a large text whole (a JSON or YAML list
+   * with a syntax error): a caller may do that reading elsewhere, with `wholeReadingOf`, and hand
+   * it to `settle`; otherwise it is done here when the findings are asked for.
+   */
+  wholeReadWanted(): { readonly text: ChunkedText; settle(reading: WholeReading): void } | undefined;
 }
 
 /** Analyses successive versions of one document, reusing what an edit left alone. */
@@ -89,6 +101,8 @@ export interface AnalyserTuning {
   readonly markdownStretch?: number;
   /** About how many characters of a JSON or YAML list a file just opened is read in at a time. */
   readonly listStep?: number;
+  /** From how many characters a broken JSON or YAML list is offered to be read whole elsewhere. */
+  readonly readWholeElsewhereFrom?: number;
 }
 
 /** An analyser for a document of `kind`; keep one per open document, across its edits. */
@@ -96,7 +110,12 @@ export function createDocumentAnalyser(kind: DocumentKind, limit = MAX_ANALYSED_
   const read = memoisedReader();
   const table = kind === "csv" || kind === "tsv" ? tableSegments(kind, read) : undefined;
   const markdown = kind === "markdown" ? markdownAnalyser(read, tuning.markdownStretch) : undefined;
-  const list = kind === "json" ? jsonSegments(read, tuning.listStep) : kind === "yaml" ? yamlSegments(read, tuning.listStep) : undefined;
+  const list =
+    kind === "json"
+      ? jsonSegments(read, tuning.listStep, tuning.readWholeElsewhereFrom)
+      : kind === "yaml"
+        ? yamlSegments(read, tuning.listStep, tuning.readWholeElsewhereFrom)
+        : undefined;
   const plain = isTextMarkup(kind) ? plainTextAnalyser(read, kind) : undefined;
   return {
     analyse(text) {
@@ -145,7 +164,20 @@ function wholeAnalysis(
     modelAround: modelOf,
     speciesAt: (offset) => speciesAtOffset(modelOf(), offset),
     distinctSpecies: () => distinct(modelOf().occurrences),
+    // eslint-disable-next-line require-yield -- one step: the plain path is read at once
+    *speciesCount() {
+      return modelOf().occurrences.length;
+    },
+    wholeReadWanted: () => undefined,
   };
+}
+
+/**
+ * A JSON or YAML text read whole, the ordinary way: what a list version that did not read cleanly
+ * gives, worked out wherever the caller likes (see `DocumentAnalysis.wholeReadWanted`).
+ */
+export function wholeReadingOf(kind: "json" | "yaml", text: string): WholeReading {
+  return kind === "json" ? wholeJsonReading(text, memoisedReader()) : wholeYamlReading(text, memoisedReader());
 }
 
 function distinct(occurrences: Iterable<SpeciesOccurrence>): SpeciesOccurrence[] {
@@ -182,6 +214,7 @@ function tableSegments(kind: "csv" | "tsv", read: SpeciesReader): (text: Chunked
   let tableKey: string | undefined;
   // Keyed by a segment's first chunk: chunks an edit left alone are the same objects in the new version.
   let remembered = new WeakMap<TextChunk, SegmentFindings>();
+  let counted = new WeakMap<TextChunk, { readonly chunks: readonly TextChunk[]; readonly species: number }>();
   const models = new Map<TextChunk, { readonly chunks: readonly TextChunk[]; readonly model: DocumentModel }>();
   // Whether a chunk read from a record's start ends on a record's end, worked out once per chunk
   // (and delimiter) rather than once per version: a table full of quoted cells is not re-read per edit.
@@ -207,6 +240,7 @@ function tableSegments(kind: "csv" | "tsv", read: SpeciesReader): (text: Chunked
     if (key !== tableKey) {
       tableKey = key;
       remembered = new WeakMap();
+      counted = new WeakMap();
       models.clear();
     }
     if (boundaries.delimiter !== delimiter) {
@@ -257,6 +291,18 @@ function tableSegments(kind: "csv" | "tsv", read: SpeciesReader): (text: Chunked
       return shiftedModel(local, segment.start);
     };
 
+    /** The species mentions of a segment's rows, read as `modelOf` reads them, without keeping the model. */
+    const speciesOf = (segment: TableSegment): number => {
+      const known = counted.get(segment.chunks[0]) ?? models.get(segment.chunks[0]);
+      if (known && sameChunks(known.chunks, segment.chunks)) return "species" in known ? known.species : known.model.occurrences.length;
+      const source = readAfterHeader(segment);
+      let species = 0;
+      for (const occurrence of analyzeDocument(source.text, kind, read, { delimiter }).occurrences)
+        if (occurrence.range.start >= source.from) species++;
+      counted.set(segment.chunks[0], { chunks: segment.chunks, species });
+      return species;
+    };
+
     let findings: readonly Finding[] | undefined;
     let model: DocumentModel | undefined;
     const around = (from: number, to: number): DocumentModel =>
@@ -292,6 +338,16 @@ function tableSegments(kind: "csv" | "tsv", read: SpeciesReader): (text: Chunked
         const segment = segments.find((candidate) => offset < candidate.end) ?? segments[segments.length - 1];
         return segment ? speciesAtOffset(modelOf(segment), offset) : undefined;
       },
+      *speciesCount() {
+        if (model) return model.occurrences.length;
+        let species = 0;
+        for (const segment of segments) {
+          species += speciesOf(segment);
+          yield;
+        }
+        return species;
+      },
+      wholeReadWanted: () => undefined,
     };
   };
 }
@@ -377,8 +433,8 @@ function sameChunks(a: readonly TextChunk[], b: readonly TextChunk[]): boolean {
 /** Below this length a JSON or YAML document's species are all listed for preparing hovers. */
 const LIST_SPECIES_LISTED_UP_TO = 256 * 1024;
 
-function jsonSegments(read: SpeciesReader, step?: number): (text: ChunkedText) => DocumentAnalysis {
-  const list = jsonListReader(read, step);
+function jsonSegments(read: SpeciesReader, step?: number, elsewhereFrom?: number): (text: ChunkedText) => DocumentAnalysis {
+  const list = jsonListReader(read, step, elsewhereFrom);
   return listSegments(
     "json",
     read,
@@ -388,8 +444,8 @@ function jsonSegments(read: SpeciesReader, step?: number): (text: ChunkedText) =
   );
 }
 
-function yamlSegments(read: SpeciesReader, step?: number): (text: ChunkedText) => DocumentAnalysis {
-  const list = yamlListReader(read, step);
+function yamlSegments(read: SpeciesReader, step?: number, elsewhereFrom?: number): (text: ChunkedText) => DocumentAnalysis {
+  const list = yamlListReader(read, step, elsewhereFrom);
   return listSegments(
     "yaml",
     read,
@@ -429,6 +485,11 @@ function listSegments(
       modelAround: around,
       speciesAt: (offset) => speciesAtOffset(around(offset, offset), offset),
       distinctSpecies: () => (text.length <= LIST_SPECIES_LISTED_UP_TO ? plain().distinctSpecies() : []),
+      *speciesCount() {
+        for (const _ of version.findingSteps()) yield;
+        return version.speciesCount();
+      },
+      wholeReadWanted: () => version.wholeReadWanted(),
     };
   };
 }

@@ -26,9 +26,11 @@ import {
   lastAtOrBefore,
   NO_FINDINGS,
   rememberingListReader,
+  speciesPerPart,
   type ListFrame,
   type ListParts,
   type ListReader,
+  type PartsReading,
   type WholeReading,
 } from "./listParts";
 import type { SpeciesReader } from "./speciesReader";
@@ -37,13 +39,13 @@ import { scanJsonList } from "./tables/jsonListScan";
 import { jsonOutline } from "./tables/jsonOutline";
 import { equationKeyTest } from "./tables/headers";
 import { moved } from "./tables/delimitedFindings";
-import type { DocumentModel, Finding } from "./types";
+import type { DocumentModel, Finding, SpeciesOccurrence } from "./types";
 
 /** How many characters of a file just opened are read at a time: a few milliseconds' work. */
 const STEP_CHARACTERS = 8 * 1024;
 
 /** A reader that keeps the last version's list; keep one per open document. */
-export function jsonListReader(read: SpeciesReader, step = STEP_CHARACTERS): ListReader {
+export function jsonListReader(read: SpeciesReader, step = STEP_CHARACTERS, elsewhereFrom?: number): ListReader {
   const check = documentChecker();
   const isEquationKey = equationKeyTest();
   return rememberingListReader<JsonListState>(
@@ -52,10 +54,17 @@ export function jsonListReader(read: SpeciesReader, step = STEP_CHARACTERS): Lis
       opened: (text) => openedState(text, read, isEquationKey) ?? wholeState(text, read),
       readParts: (state, first, last) => partsInPlace(state, first, last, read, check),
       readFrame: (state) => frameOf(state, read, isEquationKey, check),
-      readWhole: (text) => readOnce(wholeText(text), read).findings,
+      readWhole: (text) => readOnce(wholeText(text), read),
     },
     step,
+    elsewhereFrom,
   );
+}
+
+/** A JSON text read whole, the ordinary way: what a list version whose parts do not read cleanly gives. */
+export function wholeJsonReading(text: string, read: SpeciesReader): WholeReading {
+  const { findings, species } = readOnce(text, read);
+  return { findings, species };
 }
 
 /** The remembered list of one version; `open` and `close` are its brackets (-1 when not known). */
@@ -73,6 +82,7 @@ function openedState(text: ChunkedText, read: SpeciesReader, isEquationKey: (key
     starts: list.starts,
     ends: list.ends,
     partFindings: new Array<readonly Finding[] | undefined>(list.starts.length),
+    partSpecies: new Array<number | undefined>(list.starts.length),
     frame: undefined,
     tail: list.ends[list.ends.length - 1],
     open: list.open,
@@ -97,12 +107,13 @@ function frameOf(
   if (!outline) return undefined;
   const before: Finding[] = [];
   const after: Finding[] = [];
-  for (const finding of findingsOf(analyzeJsonOutline(frame, outline, read), check)) {
+  const model = analyzeJsonOutline(frame, outline, read);
+  for (const finding of findingsOf(model, check)) {
     if (finding.range.start >= head.length) after.push(moved(finding, state.close - head.length - state.tail));
     else if (finding.range.end <= head.length) before.push(finding);
     else return undefined;
   }
-  return { before, after };
+  return { before, after, species: model.occurrences.length };
 }
 
 /** Elements `first`..`last` of `state` read as a list of their own: each one's findings; undefined unless they read cleanly where they lie. */
@@ -112,7 +123,7 @@ function partsInPlace(
   last: number,
   read: SpeciesReader,
   check: (model: DocumentModel) => Finding[],
-): (readonly Finding[])[] | undefined {
+): PartsReading | undefined {
   const stretchStart = state.starts[first];
   const elements = elementsAlone(sliceOf(state.text, stretchStart, state.ends[last]), read, check);
   if (!elements || elements.starts.length !== last - first + 1) return undefined;
@@ -124,7 +135,7 @@ function partsInPlace(
       return undefined;
     }
   }
-  return elements.findings;
+  return elements;
 }
 
 /**
@@ -135,7 +146,7 @@ function wholeState(text: ChunkedText, read: SpeciesReader): JsonListState | Who
   const whole = wholeText(text);
   const reading = readOnce(whole, read);
   const all = reading.findings;
-  const plain = { findings: all };
+  const plain = { findings: all, species: reading.species };
   if (all.some((finding) => finding.code === "json-syntax" || finding.code === "document-unreadable")) return plain;
   if (!reading.list || reading.list.starts.length === 0) return plain;
   const { starts, ends } = reading.list;
@@ -154,32 +165,46 @@ function wholeState(text: ChunkedText, read: SpeciesReader): JsonListState | Who
       partFindings[index].push(moved(finding, -starts[index]));
     }
   }
+  const species = speciesPerPart(reading.mentions, starts, ends);
   return {
     text,
     starts,
     ends,
     partFindings: partFindings.map((found) => (found.length === 0 ? NO_FINDINGS : found)),
-    frame: { before, after },
+    partSpecies: species.inside,
+    frame: { before, after, species: species.around },
     tail,
     open: -1,
     close: -1,
   };
 }
 
+/** The reading of a whole JSON text: its findings, species mentions, and its list's element bounds when it is clean JSON. */
+interface WholeJson {
+  readonly findings: Finding[];
+  readonly species: number;
+  readonly mentions: readonly SpeciesOccurrence[];
+  readonly list?: { readonly starts: Int32Array; readonly ends: Int32Array };
+}
+
 /**
  * The findings of `whole` and its list's element bounds (only when it is clean JSON), read once:
  * clean JSON through its outline, anything else through its syntax tree.
  */
-function readOnce(whole: string, read: SpeciesReader): { findings: Finding[]; list?: { starts: Int32Array; ends: Int32Array } } {
+function readOnce(whole: string, read: SpeciesReader): WholeJson {
   const outline = jsonOutline(whole, equationKeyTest());
-  if (outline) return { findings: findingsOf(analyzeJsonOutline(whole, outline, read)), list: outline.list };
+  if (outline) {
+    const model = analyzeJsonOutline(whole, outline, read);
+    return { findings: findingsOf(model), species: model.occurrences.length, mentions: model.occurrences, list: outline.list };
+  }
   const tree = parseJsonTree(whole);
-  const findings = findingsOf(analyzeJsonTree(whole, tree, read));
-  if (!tree.root || tree.errors.length > 0) return { findings };
+  const model = analyzeJsonTree(whole, tree, read);
+  const reading = { findings: findingsOf(model), species: model.occurrences.length, mentions: model.occurrences };
+  if (!tree.root || tree.errors.length > 0) return reading;
   const list = recordList(tree.root);
-  if (!list?.children) return { findings };
+  if (!list?.children) return reading;
   return {
-    findings,
+    ...reading,
     list: {
       starts: Int32Array.from(list.children, (child) => child.offset),
       ends: Int32Array.from(list.children, (child) => child.offset + child.length),
@@ -224,8 +249,12 @@ function editedState(
   while (lastIndex < previous.ends.length && previous.ends[lastIndex] < oldEnd) lastIndex++;
   if (first < 0 || lastIndex >= previous.ends.length) return undefined;
   const stretchStart = previous.starts[first];
-  const elements = elementsAlone(sliceOf(text, stretchStart, previous.ends[lastIndex] + by), read, check);
-  if (!elements) return undefined;
+  const stretchEnd = previous.ends[lastIndex] + by;
+  if (stretchEnd <= stretchStart) return undefined;
+  // A stretch that does not read cleanly (a keystroke that broke a record) is kept as one part,
+  // not read yet: reading it fails, and the version is read whole, without losing where the
+  // records around it are.
+  const elements = elementsAlone(sliceOf(text, stretchStart, stretchEnd), read, check) ?? unreadStretch(stretchEnd - stretchStart);
   const after = lastIndex + 1;
   // Typed arrays, copied whole: an edit costs a copy of a few hundred kilobytes at most, and the
   // version before keeps its own (a request about it may still be answered).
@@ -247,11 +276,17 @@ function editedState(
     starts,
     ends,
     partFindings: previous.partFindings.slice(0, first).concat(elements.findings, previous.partFindings.slice(after)),
+    partSpecies: previous.partSpecies.slice(0, first).concat(elements.species, previous.partSpecies.slice(after)),
     frame: previous.frame,
     tail: previous.tail + by,
     open: previous.open,
     close: previous.close < 0 ? previous.close : previous.close + by,
   };
+}
+
+/** A stretch of `length` characters taken as one element, not read yet. */
+function unreadStretch(length: number): { starts: Int32Array; ends: Int32Array; findings: undefined[]; species: undefined[] } {
+  return { starts: Int32Array.of(0), ends: Int32Array.of(length), findings: [undefined], species: [undefined] };
 }
 
 /**
@@ -264,14 +299,15 @@ function elementsAlone(
   stretch: string,
   read: SpeciesReader,
   check: (model: DocumentModel) => Finding[],
-): { starts: Int32Array; ends: Int32Array; findings: (readonly Finding[])[] } | undefined {
+): { starts: Int32Array; ends: Int32Array; findings: (readonly Finding[])[]; species: number[] } | undefined {
   const listed = `[${stretch}]`;
   const outline = jsonOutline(listed, equationKeyTest());
   const list = outline?.list;
   if (!outline || !list || list.starts.length === 0) return undefined;
   if (list.starts[0] !== 1 || list.ends[list.ends.length - 1] !== stretch.length + 1) return undefined;
   const findings: Finding[][] = Array.from(list.starts, () => []);
-  for (const finding of findingsOf(analyzeJsonOutline(listed, outline, read), check)) {
+  const model = analyzeJsonOutline(listed, outline, read);
+  for (const finding of findingsOf(model, check)) {
     const index = lastAtOrBefore(list.starts, finding.range.start);
     if (index < 0 || finding.range.end > list.ends[index]) return undefined;
     findings[index].push(moved(finding, -list.starts[index]));
@@ -280,6 +316,7 @@ function elementsAlone(
     starts: list.starts.map((offset) => offset - 1),
     ends: list.ends.map((offset) => offset - 1),
     findings: findings.map((found) => (found.length === 0 ? NO_FINDINGS : found)),
+    species: speciesPerPart(model.occurrences, list.starts, list.ends).inside,
   };
 }
 

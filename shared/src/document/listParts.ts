@@ -23,6 +23,15 @@ export interface ListVersion {
    * place), for reading the model of a few records; undefined outside the list's parts.
    */
   around(start: number, end: number): { readonly start: number; readonly end: number } | undefined;
+  /** How many species mentions the document holds, once `findingSteps` has been read to the end. */
+  speciesCount(): number;
+  /**
+   * Set while the findings wait on reading a large text whole (a part did not read cleanly: a
+   * syntax error, mostly). The caller may do that reading elsewhere (see `wholeListReading`) and
+   * hand it in; otherwise it is done here when the findings are asked for. Meanwhile the findings
+   * and models around a place come from the parts there.
+   */
+  wholeReadWanted(): { readonly text: ChunkedText; settle(reading: WholeReading): void } | undefined;
 }
 
 /** Reads successive versions of one document. */
@@ -32,6 +41,14 @@ export type ListReader = (text: ChunkedText) => ListVersion;
 export interface ListFrame {
   readonly before: readonly Finding[];
   readonly after: readonly Finding[];
+  /** How many species mentions lie around the parts. */
+  readonly species: number;
+}
+
+/** What a run of parts reads as: each part's findings (relative to its start) and species count. */
+export interface PartsReading {
+  readonly findings: (readonly Finding[])[];
+  readonly species: number[];
 }
 
 /** The remembered list of one version: part spans and their findings, relative to each start. */
@@ -45,6 +62,8 @@ export interface ListParts {
    * few parts at a time, and an edit meanwhile keeps what was read.
    */
   readonly partFindings: (readonly Finding[] | undefined)[];
+  /** Each part's species mentions, set when its findings are. */
+  readonly partSpecies: (number | undefined)[];
   /** The findings around the parts; undefined until read. */
   frame: ListFrame | undefined;
   /** Where the text after the last part starts. */
@@ -54,6 +73,8 @@ export interface ListParts {
 /** The plain reading of a text without a list of parts. */
 export interface WholeReading {
   readonly findings: readonly Finding[];
+  /** How many species mentions the text holds. */
+  readonly species: number;
 }
 
 /** How one kind of document is read as a list of parts. */
@@ -63,22 +84,33 @@ export interface ListKind<State extends ListParts> {
   /** A text read afresh: its parts found (none read yet), or its findings when it has no such list. */
   opened(text: ChunkedText): State | WholeReading;
   /** Parts `first`..`last` read in place, findings relative to each part's start; undefined when they do not read cleanly. */
-  readParts(state: State, first: number, last: number): (readonly Finding[])[] | undefined;
+  readParts(state: State, first: number, last: number): PartsReading | undefined;
   /** The text around the parts read; undefined when it does not read cleanly. */
   readFrame(state: State): ListFrame | undefined;
   /** The text read whole, the ordinary way: what a text whose parts do not read cleanly gives. */
-  readWhole(text: ChunkedText): readonly Finding[];
+  readWhole(text: ChunkedText): WholeReading;
 }
 
 /** Shared by every part without findings. */
 export const NO_FINDINGS: readonly Finding[] = [];
 
 /**
+ * A broken text (one whose parts do not read cleanly) longer than this is not read whole on the
+ * spot: that reading cannot be cut into steps, and a caller may do it elsewhere.
+ */
+export const READ_WHOLE_ELSEWHERE_FROM = 256 * 1024;
+
+/**
  * A reader that keeps the last version's list: an edit re-reads what it touched, and a text read
  * afresh is read a few parts at a time as its findings are asked for, about `step` characters of
- * parts at a time.
+ * parts at a time. A broken text from `elsewhereFrom` characters is read whole only when its
+ * findings are asked for (see `ListVersion.wholeReadWanted`).
  */
-export function rememberingListReader<State extends ListParts>(kind: ListKind<State>, step: number): ListReader {
+export function rememberingListReader<State extends ListParts>(
+  kind: ListKind<State>,
+  step: number,
+  elsewhereFrom = READ_WHOLE_ELSEWHERE_FROM,
+): ListReader {
   let last: State | undefined;
   // The last state whose parts all read cleanly: a text broken by a keystroke and mended by the
   // next is read from it, as an edit of the text before the break, not afresh.
@@ -96,15 +128,15 @@ export function rememberingListReader<State extends ListParts>(kind: ListKind<St
     const next = (last && kind.edited(last, text)) || (trusted && trusted !== last ? kind.edited(trusted, text) : undefined);
     if (next) {
       last = next;
-      return versionOf(next, kind, reading, step);
+      return versionOf(next, kind, reading, step, elsewhereFrom);
     }
     const opened = kind.opened(text);
     if (!("starts" in opened)) {
       last = undefined;
-      return wholeVersion(opened.findings);
+      return wholeVersion(opened);
     }
     last = opened;
-    return versionOf(opened, kind, reading, step);
+    return versionOf(opened, kind, reading, step, elsewhereFrom);
   };
 }
 
@@ -116,7 +148,8 @@ interface StateReading<State> {
   verified(state: State): void;
 }
 
-function wholeVersion(findings: readonly Finding[]): ListVersion {
+function wholeVersion(reading: WholeReading): ListVersion {
+  const { findings } = reading;
   return {
     findings: () => findings,
     *findingSteps() {
@@ -124,6 +157,8 @@ function wholeVersion(findings: readonly Finding[]): ListVersion {
     },
     findingsAround: (start, end) => overlapping(findings, start, end),
     around: () => undefined,
+    speciesCount: () => reading.species,
+    wholeReadWanted: () => undefined,
   };
 }
 
@@ -133,44 +168,66 @@ function overlapping(findings: readonly Finding[], start: number, end: number): 
 
 /**
  * A version of `state`, whose unread parts are read as they are needed. Should a part not read
- * cleanly, the text is read whole and the state is forgotten (the next edit reads afresh too).
+ * cleanly, the state is forgotten (the next edit reads afresh too) and the text is read whole:
+ * at once when it is short, otherwise when its findings are asked for, unless a caller did it
+ * elsewhere first.
  */
-function versionOf<State extends ListParts>(state: State, kind: ListKind<State>, reading: StateReading<State>, step: number): ListVersion {
+function versionOf<State extends ListParts>(
+  state: State,
+  kind: ListKind<State>,
+  reading: StateReading<State>,
+  step: number,
+  elsewhereFrom: number,
+): ListVersion {
   const count = state.starts.length;
+  // A short text is read whole before any request about a place is answered: only a clean text
+  // (which a large one must be read through to know) answers from the parts there as it would whole.
+  const large = state.text.length >= elsewhereFrom;
   let all: readonly Finding[] | undefined;
-  /** The plain reading, once a part did not read cleanly. */
-  let whole: readonly Finding[] | undefined;
+  /** Set once a part did not read cleanly. */
+  let broken = false;
+  /** The plain reading, once the text is broken and has been read whole. */
+  let whole: WholeReading | undefined;
+  const setAside = (): boolean => broken && !whole && large;
+  const wholeReading = (): WholeReading => (whole ??= kind.readWhole(state.text));
   const fail = (): false => {
     reading.forget(state);
-    whole = kind.readWhole(state.text);
+    broken = true;
+    if (!setAside()) wholeReading();
     return false;
   };
   const frameRead = (): boolean => {
-    if (whole) return false;
+    if (broken) return false;
     if (state.frame) return true;
     const frame = kind.readFrame(state);
     if (!frame) return fail();
     state.frame = frame;
     return true;
   };
-  /** Reads the unread parts from `first` to `last`; false once the text is read whole. */
+  /** Reads the unread parts from `first` to `last`, in runs; false once one did not read cleanly. */
   const partsRead = (first: number, last: number): boolean => {
     let from = first;
     while (from <= last) {
-      if (whole) return false;
+      if (broken) return false;
       if (state.partFindings[from] !== undefined) {
         from++;
         continue;
       }
       let to = from;
       while (to < last && state.partFindings[to + 1] === undefined) to++;
-      const found = kind.readParts(state, from, to);
-      if (!found || found.length !== to - from + 1) return fail();
-      for (let index = 0; index < found.length; index++)
-        state.partFindings[from + index] = found[index].length === 0 ? NO_FINDINGS : found[index];
+      if (!keep(from, to, kind.readParts(state, from, to))) return fail();
       from = to + 1;
     }
-    return !whole;
+    return !broken;
+  };
+  /** Keeps what parts `first`..`last` read as; false when they did not read cleanly. */
+  const keep = (first: number, last: number, found: PartsReading | undefined): boolean => {
+    if (!found || found.findings.length !== last - first + 1) return false;
+    for (let index = 0; index < found.findings.length; index++) {
+      state.partFindings[first + index] = found.findings[index].length === 0 ? NO_FINDINGS : found.findings[index];
+      state.partSpecies[first + index] = found.species[index];
+    }
+    return true;
   };
   /** Reads everything a step at a time. */
   function* steps(): Generator<void> {
@@ -187,7 +244,7 @@ function versionOf<State extends ListParts>(state: State, kind: ListKind<State>,
   const findings = (): readonly Finding[] => {
     if (all) return all;
     for (const _ of steps());
-    if (whole) return whole;
+    if (broken) return wholeReading().findings;
     const placed: Finding[] = [...state.frame!.before];
     for (let index = 0; index < count; index++) {
       for (const finding of state.partFindings[index]!) placed.push(moved(finding, state.starts[index]));
@@ -197,36 +254,59 @@ function versionOf<State extends ListParts>(state: State, kind: ListKind<State>,
     reading.verified(state);
     return all;
   };
-  const around = (start: number, end: number): { first: number; last: number } | undefined => {
-    const first = lastAtOrBefore(state.starts, start);
-    if (first < 0 || start > state.ends[first]) return undefined;
-    return { first, last: Math.max(first, lastAtOrBefore(state.starts, end)) };
+  /** The findings of the parts `from`..`to` that read cleanly alone, and of the frame when it did: a broken text's, meanwhile. */
+  const cleanFindingsOf = (from: number, to: number): Finding[] => {
+    const found: Finding[] = state.frame ? [...state.frame.before] : [];
+    for (let index = from; index <= to; index++) {
+      if (state.partFindings[index] === undefined && !keep(index, index, kind.readParts(state, index, index))) continue;
+      for (const finding of state.partFindings[index]!) found.push(moved(finding, state.starts[index]));
+    }
+    if (state.frame) for (const finding of state.frame.after) found.push(moved(finding, state.tail));
+    return found;
   };
   return {
     findings,
     *findingSteps() {
-      if (!all && !whole) {
+      if (!all && !broken) {
         for (const _ of steps()) yield NO_FINDINGS;
       }
+      // A step in which the caller may read the broken text elsewhere.
+      if (setAside()) yield NO_FINDINGS;
       yield findings();
     },
     findingsAround(start, end) {
-      if (all || whole) return overlapping(all ?? whole!, start, end);
-      if (!frameRead()) return overlapping(whole!, start, end);
+      if (!large) findings();
+      if (all || whole) return overlapping(all ?? whole!.findings, start, end);
       const from = Math.max(0, lastAtOrBefore(state.starts, start));
       const to = Math.max(from, lastAtOrBefore(state.starts, end));
-      if (!partsRead(from, to)) return overlapping(whole!, start, end);
-      const found: Finding[] = [...state.frame!.before];
-      for (let index = from; index <= to; index++) {
-        for (const finding of state.partFindings[index]!) found.push(moved(finding, state.starts[index]));
-      }
-      for (const finding of state.frame!.after) found.push(moved(finding, state.tail));
-      return overlapping(found, start, end);
+      if (!broken && frameRead() && partsRead(from, to)) return overlapping(cleanFindingsOf(from, to), start, end);
+      if (!setAside()) return overlapping(wholeReading().findings, start, end);
+      // Set aside: the records there that read cleanly alone answer meanwhile.
+      return overlapping(cleanFindingsOf(from, to), start, end);
     },
     around(start, end) {
+      if (!large) findings();
       if (whole) return undefined;
-      const parts = around(start, end);
-      return parts && { start: state.starts[parts.first], end: state.ends[parts.last] };
+      const first = lastAtOrBefore(state.starts, start);
+      if (first < 0 || start > state.ends[first]) return undefined;
+      const last = Math.max(first, lastAtOrBefore(state.starts, end));
+      return { start: state.starts[first], end: state.ends[last] };
+    },
+    speciesCount() {
+      if (!all) findings();
+      if (broken) return wholeReading().species;
+      let species = state.frame!.species;
+      for (let index = 0; index < count; index++) species += state.partSpecies[index]!;
+      return species;
+    },
+    wholeReadWanted() {
+      if (!setAside()) return undefined;
+      return {
+        text: state.text,
+        settle(reading) {
+          whole ??= reading;
+        },
+      };
     },
   };
 }
@@ -272,4 +352,20 @@ export function lastAtOrBefore(values: ArrayLike<number>, at: number): number {
     else high = middle;
   }
   return low - 1;
+}
+
+/** How many of `mentions` fall in each part (by where they start), and how many around the parts. */
+export function speciesPerPart(
+  mentions: Iterable<{ readonly range: { readonly start: number } }>,
+  starts: ArrayLike<number>,
+  ends: ArrayLike<number>,
+): { readonly inside: number[]; readonly around: number } {
+  const inside = new Array<number>(starts.length).fill(0);
+  let around = 0;
+  for (const mention of mentions) {
+    const index = lastAtOrBefore(starts, mention.range.start);
+    if (index >= 0 && mention.range.start < ends[index]) inside[index]++;
+    else around++;
+  }
+  return { inside, around };
 }

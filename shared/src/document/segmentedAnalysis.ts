@@ -138,6 +138,15 @@ export function segmentedAnalysis(kind: DocumentKind, source: SegmentSource): Do
     speciesAt: (offset) => speciesAtOffset(modelAround(offset, offset), offset),
     // Gathered as segments are read, so a long document is not walked again on every version.
     distinctSpecies: source.distinctSpecies,
+    *speciesCount() {
+      let species = 0;
+      for (let index = 0; hasSegment(cut, index); index++) {
+        species += source.readingOf(index).model.occurrences.length;
+        yield;
+      }
+      return species;
+    },
+    wholeReadWanted: () => undefined,
   };
 }
 

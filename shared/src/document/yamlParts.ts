@@ -30,9 +30,11 @@ import {
   lastAtOrBefore,
   NO_FINDINGS,
   rememberingListReader,
+  speciesPerPart,
   type ListFrame,
   type ListParts,
   type ListReader,
+  type PartsReading,
   type WholeReading,
 } from "./listParts";
 import type { SpeciesReader } from "./speciesReader";
@@ -63,17 +65,24 @@ const LINE_FEED = 0x0a;
 const STEP_CHARACTERS = 4 * 1024;
 
 /** A reader that keeps the last version's list; keep one per open document. */
-export function yamlListReader(read: SpeciesReader, step = STEP_CHARACTERS): ListReader {
+export function yamlListReader(read: SpeciesReader, step = STEP_CHARACTERS, elsewhereFrom?: number): ListReader {
   return rememberingListReader<ListState>(
     {
       edited: (last, text) => editedState(last, text, read),
       opened: (text) => openedState(text) ?? wholeState(text, read),
       readParts: (state, first, last) => itemsInPlace(state, first, last, read),
       readFrame: (state) => frameOf(state, read),
-      readWhole: (text) => findingsOf(analyzeDocument(wholeText(text), "yaml", read)),
+      readWhole: (text) => wholeYamlReading(wholeText(text), read),
     },
     step,
+    elsewhereFrom,
   );
+}
+
+/** A YAML text read whole, the ordinary way: what a list version whose items do not read cleanly gives. */
+export function wholeYamlReading(text: string, read: SpeciesReader): WholeReading {
+  const model = analyzeDocument(text, "yaml", read);
+  return { findings: findingsOf(model), species: model.occurrences.length };
 }
 
 /**
@@ -91,6 +100,7 @@ function openedState(text: ChunkedText): ListState | undefined {
     starts,
     ends,
     partFindings: new Array<readonly Finding[] | undefined>(starts.length),
+    partSpecies: new Array<number | undefined>(starts.length),
     indent: list.indent,
     frame: undefined,
     tail,
@@ -108,24 +118,25 @@ function frameOf(state: ListState, read: SpeciesReader): ListFrame | undefined {
   if (!documents || documents.some((document) => document.errors.length > 0)) return undefined;
   const before: Finding[] = [];
   const after: Finding[] = [];
-  for (const finding of findingsOf(analyzeYamlStream(frame, documents, read))) {
+  const model = analyzeYamlStream(frame, documents, read);
+  for (const finding of findingsOf(model)) {
     if (finding.code === "yaml-syntax" || finding.code === "document-unreadable") return undefined;
     if (finding.range.start >= head) after.push(moved(finding, -head));
     else if (finding.range.end <= head) before.push(finding);
     else return undefined;
   }
-  return { before, after };
+  return { before, after, species: model.occurrences.length };
 }
 
 /** Items `first`..`last` of `state` read alone: each one's findings; undefined unless they read cleanly where they lie. */
-function itemsInPlace(state: ListState, first: number, last: number, read: SpeciesReader): (readonly Finding[])[] | undefined {
+function itemsInPlace(state: ListState, first: number, last: number, read: SpeciesReader): PartsReading | undefined {
   const stretchStart = state.starts[first];
   const items = itemsAlone(sliceOf(state.text, stretchStart, state.ends[last]), state.indent, read);
   if (!items || items.starts.length !== last - first + 1) return undefined;
   for (let index = 0; index < items.starts.length; index++) {
     if (items.starts[index] + stretchStart !== state.starts[first + index]) return undefined;
   }
-  return items.findings;
+  return items;
 }
 
 /**
@@ -135,9 +146,10 @@ function itemsInPlace(state: ListState, first: number, last: number, read: Speci
 function wholeState(text: ChunkedText, read: SpeciesReader): ListState | WholeReading {
   const whole = wholeText(text);
   const documents = parseYamlStream(whole);
-  if (!documents) return { findings: findingsOf(analyzeDocument(whole, "yaml", read)) };
-  const all = findingsOf(analyzeYamlStream(whole, documents, read));
-  const plain = { findings: all };
+  if (!documents) return wholeYamlReading(whole, read);
+  const model = analyzeYamlStream(whole, documents, read);
+  const all = findingsOf(model);
+  const plain = { findings: all, species: model.occurrences.length };
   if (all.some((finding) => finding.code === "yaml-syntax" || finding.code === "document-unreadable")) return plain;
   // Directives change how every node reads: such a stream is always read whole.
   if (/(?:^|\n)%/.test(whole)) return plain;
@@ -155,13 +167,15 @@ function wholeState(text: ChunkedText, read: SpeciesReader): ListState | WholeRe
   for (let index = 0; index < starts.length; index++) ends[index] = index + 1 < starts.length ? starts[index + 1] : tail;
   const parts = partition(all, starts, ends);
   if (!parts) return plain;
+  const species = speciesPerPart(model.occurrences, starts, ends);
   return {
     text,
     starts,
     ends,
     partFindings: parts.inside,
+    partSpecies: species.inside,
     indent: items.indent,
-    frame: { before: parts.before, after: parts.after },
+    frame: { before: parts.before, after: parts.after, species: species.around },
     tail,
   };
 }
@@ -296,7 +310,14 @@ function editedState(previous: ListState, text: ChunkedText, read: SpeciesReader
   const stretchEnd = previous.ends[lastIndex] + by;
   if (!endsOnLine(stretchEnd) || stretchEnd < stretchStart) return undefined;
   const stretch = sliceOf(text, stretchStart, stretchEnd);
-  const items = stretch.length === 0 ? { starts: [], findings: [] } : itemsAlone(stretch, previous.indent, read);
+  // A stretch that does not read cleanly (a keystroke that broke an item) is kept as one item, not
+  // read yet: reading it fails, and the version is read whole, without losing where the items
+  // around it are. It must still open with a dash in the list's column to be taken for one.
+  const items =
+    stretch.length === 0
+      ? { starts: [], findings: [], species: [] }
+      : (itemsAlone(stretch, previous.indent, read) ??
+        (isDashLine(stretch, 0, previous.indent) ? { starts: [0], findings: [undefined], species: [undefined] } : undefined));
   if (!items) return undefined;
   const after = lastIndex + 1;
   const total = first + items.starts.length + count - after;
@@ -318,6 +339,7 @@ function editedState(previous: ListState, text: ChunkedText, read: SpeciesReader
     starts,
     ends,
     partFindings: previous.partFindings.slice(0, first).concat(items.findings, previous.partFindings.slice(after)),
+    partSpecies: previous.partSpecies.slice(0, first).concat(items.species, previous.partSpecies.slice(after)),
     indent: previous.indent,
     frame: previous.frame,
     tail: previous.tail + by,
@@ -333,7 +355,7 @@ function itemsAlone(
   stretch: string,
   indent: number,
   read: SpeciesReader,
-): { starts: number[]; findings: (readonly Finding[])[] } | undefined {
+): { starts: number[]; findings: (readonly Finding[])[]; species: number[] } | undefined {
   if (!isDashLine(stretch, 0, indent) || DOCUMENT_LINE.test(stretch) || nestingBound(stretch, indent) > MAX_NESTING) return undefined;
   const documents = parseYamlStream(stretch);
   if (!documents || documents.length !== 1 || documents[0].errors.length > 0) return undefined;
@@ -341,12 +363,13 @@ function itemsAlone(
   if (!isSeq(list) || list.flow || list.range?.[0] !== indent) return undefined;
   const items = itemStarts(stretch, list);
   if (!items || items.indent !== indent) return undefined;
-  const found = findingsOf(analyzeYamlStream(stretch, documents, read));
+  const model = analyzeYamlStream(stretch, documents, read);
+  const found = findingsOf(model);
   const starts = Int32Array.from(items.starts);
   const ends = Int32Array.from(items.starts, (_, index) => (index + 1 < items.starts.length ? items.starts[index + 1] : stretch.length));
   const parts = partition(found, starts, ends);
   if (!parts || parts.before.length > 0 || parts.after.length > 0) return undefined;
-  return { starts: items.starts, findings: parts.inside };
+  return { starts: items.starts, findings: parts.inside, species: speciesPerPart(model.occurrences, starts, ends).inside };
 }
 
 /**
