@@ -46,6 +46,10 @@ export interface AnalysedDocument {
   findingParts(): Iterable<FindingPart>;
   /** The findings of the part of the document around `start`..`end`. */
   findingsAround(start: number, end: number): readonly Finding[];
+  /** How many species mentions the document holds, a part at a time (see `DocumentAnalysis.speciesCount`). */
+  speciesCount(): Generator<void, number, undefined>;
+  /** Set while the findings wait on a whole reading that may be done elsewhere (see `DocumentAnalysis.wholeReadWanted`). */
+  wholeReadWanted(): ReturnType<DocumentAnalysis["wholeReadWanted"]>;
 }
 
 export interface DocumentCache {
@@ -176,6 +180,8 @@ export function analyseDocument(
       yield* analysis.findingPartsAt();
     },
     findingsAround: (start, end) => analysis.findingsAround(start, end),
+    speciesCount: () => analysis.speciesCount(),
+    wholeReadWanted: () => analysis.wholeReadWanted(),
   };
 }
 

@@ -24,8 +24,9 @@ import {
   type SpeciesAtResult,
   shownFindings,
 } from "../../../../shared/src/index";
-import { analyseDocument, fileNameOf, SNIFF_LENGTH } from "../documentCache";
+import { analyseDocument, fileNameOf, SNIFF_LENGTH, type AnalysedDocument } from "../documentCache";
 import { guarded } from "../guardedHandler";
+import type { LongWork } from "../quickRequests";
 import { lspRange } from "../ranges";
 import { enabledDocument, type ServerContext } from "../serverContext";
 import { diagnosticsOf } from "./diagnostics";
@@ -77,24 +78,63 @@ export function registerSpeciesRequests(context: ServerContext, offThread: OffTh
   );
   connection.onRequest(
     DOCUMENT_SUMMARY_METHOD,
-    guarded<unknown, DocumentSummaryResult | null>(log, "document summary", null, async (params) => {
+    guarded<unknown, DocumentSummaryResult | null>(log, "document summary", null, async (params, token) => {
       const uri = documentUri(params);
       if (uri === undefined) return null;
-      const enabled = await enabledDocument(context, uri);
-      if (!enabled) return null;
-      const { analysed } = enabled;
-      return {
-        version: analysed.version,
-        species: analysed.model.occurrences.length,
-        problems: analysed.findings().length,
-        ...(analysed.truncatedAt !== undefined ? { checkedLength: analysed.truncatedAt } : {}),
-      };
+      // Counted a part at a time, letting other requests in; a newer text starts the count again.
+      for (;;) {
+        const enabled = await enabledDocument(context, uri);
+        if (!enabled) return null;
+        const { analysed } = enabled;
+        const stale = (): boolean => token.isCancellationRequested || context.cache.revisionOf(uri) !== analysed.revision;
+        const counts = await countsInSlices(analysed, stale, context.longWork);
+        if (token.isCancellationRequested) return null;
+        if (!counts) continue;
+        return {
+          version: analysed.version,
+          ...counts,
+          ...(analysed.truncatedAt !== undefined ? { checkedLength: analysed.truncatedAt } : {}),
+        };
+      }
     }),
   );
   connection.onRequest(
     CHECK_TEXT_METHOD,
     guarded<unknown, CheckTextResult>(log, "check text", { diagnostics: [] }, async (params) => checkText(context, params)),
   );
+}
+
+/** How long the counts are worked out before other requests are let in. */
+const COUNT_SLICE_MS = 8;
+
+/**
+ * A document's species mentions and findings, counted a part at a time (a large table is never
+ * read whole into one model), letting other requests in every few milliseconds; undefined once
+ * `stale()` says the text changed or the request was cancelled.
+ */
+async function countsInSlices(
+  analysed: AnalysedDocument,
+  stale: () => boolean,
+  longWork: LongWork,
+): Promise<{ species: number; problems: number } | undefined> {
+  let sliceStart = performance.now();
+  const giveWay = async (): Promise<boolean> => {
+    if (performance.now() - sliceStart < COUNT_SLICE_MS) return true;
+    await longWork.giveWay();
+    sliceStart = performance.now();
+    return !stale();
+  };
+  let problems = 0;
+  for (const part of analysed.findingParts()) {
+    problems += part.findings.length;
+    if (!(await giveWay())) return undefined;
+  }
+  const steps = analysed.speciesCount();
+  for (;;) {
+    const step = steps.next();
+    if (step.done) return { species: step.value, problems };
+    if (!(await giveWay())) return undefined;
+  }
 }
 
 /** The open document and the species at the asked position, or undefined. */
