@@ -132,6 +132,10 @@ export async function startServer(mode) {
         range: { start: { line: from, character: 0 }, end: { line: to, character: 0 } },
       });
     },
+    /** The species and problem counts the status bar asks for after a pause in typing. */
+    summary(uri) {
+      return connection.sendRequest("lonepair/documentSummary", { uri });
+    },
     /** The server's peak resident memory so far, in MB. */
     peakMegabytes() {
       try {

@@ -1,7 +1,8 @@
 /**
- * Work on one large SMILES species (its hover card, 3D view model or coordinate file, each of
- * which needs the 3D model) done on a worker thread (see `workerThread.ts`), so one species never
- * holds up other requests. One worker, started on first use, runs one job at a time; a cancelled
+ * Work that cannot be cut into slices, done on a worker thread (see `workerThread.ts`) so that it
+ * never holds up other requests: on one large SMILES species (its hover card, 3D view model or
+ * coordinate file, each of which needs the 3D model), and the whole reading of a large JSON or
+ * YAML list that a keystroke broke. One worker, started on first use, runs one job at a time; a cancelled
  * job waiting its turn is dropped, and a cancelled job that is running stops the worker (a new one
  * starts for the next job). Should the worker be missing or fail, the answer says so and the
  * caller does the work itself.
@@ -10,7 +11,7 @@ import { existsSync } from "node:fs";
 import { join } from "node:path";
 import { Worker } from "node:worker_threads";
 import type { CancellationToken } from "vscode-languageserver";
-import type { CoordinateFormat, HoverMarkdownOptions, SpeciesAnalysis } from "../../../shared/src/index";
+import type { CoordinateFormat, HoverMarkdownOptions, SpeciesAnalysis, WholeReading } from "../../../shared/src/index";
 import type { ServerLog } from "./guardedHandler";
 import type { CoordinatesAnswer, ShapeModelAnswer } from "./speciesModelAnswers";
 
@@ -26,13 +27,15 @@ export function isLargeSmiles(analysis: SpeciesAnalysis): boolean {
 export type OffThreadJob =
   | { readonly kind: "card"; readonly smiles: string; readonly options: HoverMarkdownOptions }
   | { readonly kind: "shapeModel"; readonly smiles: string }
-  | { readonly kind: "coordinates"; readonly smiles: string; readonly format: CoordinateFormat };
+  | { readonly kind: "coordinates"; readonly smiles: string; readonly format: CoordinateFormat }
+  | { readonly kind: "wholeReading"; readonly documentKind: "json" | "yaml"; readonly text: string };
 
 /** What each kind of job answers; undefined when the worker could not work it out. */
 export interface OffThreadJobValue {
   readonly card: string | undefined;
   readonly shapeModel: ShapeModelAnswer | undefined;
   readonly coordinates: CoordinatesAnswer | undefined;
+  readonly wholeReading: WholeReading | undefined;
 }
 
 /** A job as posted to the worker. */

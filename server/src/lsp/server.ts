@@ -74,7 +74,8 @@ export function startServer(connection: Connection, longWork: LongWork = { giveW
     registerLewisFigure(context);
     if (features.inlayHints) registerInlayHints(context, hover);
     // Once a document's diagnostics are out, its hover cards are written ahead.
-    diagnostics = registerDiagnostics(context, hover.prepare);
+    // A second worker for the whole reading of a large broken document: it never waits behind a species.
+    diagnostics = registerDiagnostics(context, hover.prepare, createOffThreadWork(log));
     workspaceCheck = registerWorkspaceCheck(context);
     if (features.workspaceFolders) {
       connection.workspace.onDidChangeWorkspaceFolders(

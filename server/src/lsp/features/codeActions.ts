@@ -13,7 +13,7 @@ import {
 } from "vscode-languageserver";
 import type { TextDocument } from "vscode-languageserver-textdocument";
 import { editsOfFix, type Finding, type FixEdit, type TextFix, type TextRange } from "../core";
-import { equationActions, isTextMarkup, tableValueFixesInParts, type EquationAction } from "../../../../shared/src/index";
+import { equationActions, isTextMarkup, tableValueFixesInParts, type EquationAction, type FindingPart } from "../../../../shared/src/index";
 import type { AnalysedDocument } from "../documentCache";
 import { guarded } from "../guardedHandler";
 import { lspRange, offsetRange, rangesTouch } from "../ranges";
@@ -111,11 +111,23 @@ function tableFixesOf(analysed: AnalysedDocument): Iterable<TextFix> {
 const hasTableFixesMemo = new WeakMap<AnalysedDocument, boolean>();
 
 function hasTableFixes(analysed: AnalysedDocument): boolean {
-  let has = hasTableFixesMemo.get(analysed);
-  if (has === undefined) {
-    has = !tableFixesOf(analysed)[Symbol.iterator]().next().done;
-    hasTableFixesMemo.set(analysed, has);
+  const known = hasTableFixesMemo.get(analysed);
+  if (known !== undefined) return known;
+  // A broken text waiting to be read whole (on the worker thread) is not read whole here: it
+  // offers no fix-all until its diagnostics are in.
+  let waiting = false;
+  function* partsUntilWaiting(): Generator<FindingPart> {
+    for (const part of analysed.findingParts()) {
+      if (analysed.wholeReadWanted()) {
+        waiting = true;
+        return;
+      }
+      yield part;
+    }
   }
+  const fixes = tableValueFixesInParts(partsUntilWaiting(), (start, end) => analysed.modelAround(start, end));
+  const has = !fixes.next().done;
+  if (!waiting) hasTableFixesMemo.set(analysed, has);
   return has;
 }
 

@@ -4,6 +4,7 @@
  * version they were computed from.
  */
 import {
+  CancellationTokenSource,
   DiagnosticSeverity,
   DocumentDiagnosticReportKind,
   type Diagnostic,
@@ -11,9 +12,11 @@ import {
   type DocumentDiagnosticReport,
 } from "vscode-languageserver";
 import type { TextDocument } from "vscode-languageserver-textdocument";
-import { moved, shownParts, type FindingPart } from "../../../../shared/src/index";
+import { moved, shownParts, wholeText, type FindingPart } from "../../../../shared/src/index";
 import type { Finding, FindingSeverity } from "../core";
+import type { AnalysedDocument } from "../documentCache";
 import { guarded } from "../guardedHandler";
+import type { OffThreadWork } from "../offThreadWork";
 import type { LongWork } from "../quickRequests";
 import { lspRange } from "../ranges";
 import { enabledDocument, type ServerContext } from "../serverContext";
@@ -73,9 +76,23 @@ function afterQuiet(after: AfterDiagnostics, uri: string, stale: () => boolean):
   }, QUIET_MS);
 }
 
-/** Registers pull diagnostics or sets up pushing, depending on the client. */
-export function registerDiagnostics(context: ServerContext, after: AfterDiagnostics = () => Promise.resolve()): DiagnosticsFeature {
-  return context.clientFeatures().pullDiagnostics ? registerPull(context, after) : registerPush(context, after);
+/**
+ * Registers pull diagnostics or sets up pushing, depending on the client. Work that cannot be cut
+ * into slices (the whole reading of a large broken JSON or YAML list) goes to `offThread`.
+ */
+export function registerDiagnostics(
+  context: ServerContext,
+  after: AfterDiagnostics = () => Promise.resolve(),
+  offThread?: OffThreadWork,
+): DiagnosticsFeature {
+  const slices: Slices = { longWork: context.longWork, offThread };
+  return context.clientFeatures().pullDiagnostics ? registerPull(context, after, slices) : registerPush(context, after, slices);
+}
+
+/** How diagnostics are worked out without holding up other requests. */
+interface Slices {
+  readonly longWork: LongWork;
+  readonly offThread?: OffThreadWork;
 }
 
 /**
@@ -86,6 +103,7 @@ export function registerDiagnostics(context: ServerContext, after: AfterDiagnost
 async function currentDiagnostics(
   context: ServerContext,
   uri: string,
+  slices: Slices,
   cancelled: () => boolean = () => false,
 ): Promise<{ version: number; revision: number; items: Diagnostic[] } | undefined> {
   while (!cancelled()) {
@@ -94,7 +112,8 @@ async function currentDiagnostics(
     const { document, analysed, settings } = enabled;
     const limit = settings.diagnostics.maxPerDocument;
     const stop = (): boolean => cancelled() || context.cache.revisionOf(uri) !== analysed.revision;
-    const parts = await partsInSlices(shownParts(analysed.findingParts(), settings.diagnostics.notesAs), limit, stop, context.longWork);
+    const shown = shownParts(analysed.findingParts(), settings.diagnostics.notesAs);
+    const parts = await partsInSlices(analysed, shown, limit, stop, slices);
     if (!parts) continue;
     const items = diagnosticsOf(document, cappedFindings(parts, limit));
     return { version: document.version, revision: analysed.revision, items };
@@ -106,19 +125,23 @@ async function currentDiagnostics(
 const SLICE_MS = 8;
 
 /**
- * Reads `parts` as far as `cappedFindings` will (up to one non-empty part after the cap's worth
- * of errors), letting other requests in every few milliseconds; undefined once `stop()` says so.
+ * Reads `parts` (of `analysed`'s findings) as far as `cappedFindings` will (up to one non-empty
+ * part after the cap's worth of errors), letting other requests in every few milliseconds, and
+ * reading a broken text whole on the worker thread when `analysed` asks for that; undefined once
+ * `stop()` says so.
  */
 async function partsInSlices(
+  analysed: AnalysedDocument,
   parts: Iterable<FindingPart>,
   limit: number,
   stop: () => boolean,
-  longWork: LongWork,
+  { longWork, offThread }: Slices,
 ): Promise<FindingPart[] | undefined> {
   const taken: FindingPart[] = [];
   let errors = 0;
   let sliceStart = performance.now();
   for (const part of parts) {
+    if (offThread && !(await readWholeElsewhere(analysed, offThread, stop))) return undefined;
     taken.push(part);
     if (errors >= limit && part.findings.length > 0) break;
     for (const finding of part.findings) if (finding.severity === "error") errors++;
@@ -128,6 +151,31 @@ async function partsInSlices(
     sliceStart = performance.now();
   }
   return taken;
+}
+
+/** How often a whole reading on the worker checks whether its text is still current. */
+const STALE_CHECK_MS = 20;
+
+/**
+ * When `analysed` waits on reading its text whole (a large JSON or YAML list a keystroke broke),
+ * does that reading on the worker thread and hands it in; false when `stop()` said to give up
+ * meanwhile (the worker is stopped). Should the worker be missing, the reading is done here.
+ */
+async function readWholeElsewhere(analysed: AnalysedDocument, offThread: OffThreadWork, stop: () => boolean): Promise<boolean> {
+  const wanted = analysed.wholeReadWanted();
+  if (!wanted || (analysed.kind !== "json" && analysed.kind !== "yaml")) return true;
+  const giveUp = new CancellationTokenSource();
+  const watch = setInterval(() => {
+    if (stop()) giveUp.cancel();
+  }, STALE_CHECK_MS);
+  try {
+    const answer = await offThread.run({ kind: "wholeReading", documentKind: analysed.kind, text: wholeText(wanted.text) }, giveUp.token);
+    if (answer.kind === "done" && answer.value) wanted.settle(answer.value);
+    return answer.kind !== "cancelled" && !stop();
+  } finally {
+    clearInterval(watch);
+    giveUp.dispose();
+  }
 }
 
 const SEVERITY_RANK: Readonly<Record<FindingSeverity, number>> = { error: 0, warning: 1, information: 2, hint: 3 };
@@ -192,7 +240,7 @@ function rankOf(finding: Finding): number {
   return SEVERITY_RANK[finding.severity] ?? SEVERITY_RANK.information;
 }
 
-function registerPull(context: ServerContext, after: AfterDiagnostics): DiagnosticsFeature {
+function registerPull(context: ServerContext, after: AfterDiagnostics, slices: Slices): DiagnosticsFeature {
   const empty: DocumentDiagnosticReport = { kind: DocumentDiagnosticReportKind.Full, items: [] };
   // The result depends only on the text (its revision) and the settings; both are in the id.
   const resultIdOf = (revision: number): string => `${revision}:${context.settings.generation}`;
@@ -202,7 +250,7 @@ function registerPull(context: ServerContext, after: AfterDiagnostics): Diagnost
       if (!context.documents.get(uri)) return empty;
       const resultId = resultIdOf(context.cache.revisionOf(uri));
       if (params.previousResultId === resultId) return { kind: DocumentDiagnosticReportKind.Unchanged, resultId };
-      const current = await currentDiagnostics(context, uri, () => token.isCancellationRequested);
+      const current = await currentDiagnostics(context, uri, slices, () => token.isCancellationRequested);
       if (!current) return empty;
       // Once the answer has gone out, hover cards are written while the editor is quiet.
       afterQuiet(after, uri, () => context.cache.revisionOf(uri) !== current.revision);
@@ -220,7 +268,7 @@ function registerPull(context: ServerContext, after: AfterDiagnostics): Diagnost
   };
 }
 
-function registerPush(context: ServerContext, after: AfterDiagnostics): DiagnosticsFeature {
+function registerPush(context: ServerContext, after: AfterDiagnostics, slices: Slices): DiagnosticsFeature {
   const timers = new Map<string, NodeJS.Timeout>();
 
   const publish = async (uri: string): Promise<void> => {
@@ -229,7 +277,7 @@ function registerPush(context: ServerContext, after: AfterDiagnostics): Diagnost
     const requestedRevision = context.cache.revisionOf(uri);
     try {
       // A newer text has its own publication scheduled: give this one up.
-      const current = await currentDiagnostics(context, uri, () => context.cache.revisionOf(uri) !== requestedRevision);
+      const current = await currentDiagnostics(context, uri, slices, () => context.cache.revisionOf(uri) !== requestedRevision);
       // A newer text or a close wins over this result: it is stale, drop it.
       const now = context.documents.get(uri);
       if (!now || context.cache.revisionOf(uri) !== requestedRevision) return;
