@@ -98,3 +98,19 @@ describe("a group called a fragment, residue or unit", () => {
     expect(checkDocument(analyzeDocument(text, "markdown")).map((finding) => finding.code)).toEqual(codes);
   });
 });
+
+describe("halo-complex anions named by rule in prose", () => {
+  // from memory: IUPAC Red Book, additive names of halo-complex anions (ICl2- dichloroiodate(I),
+  // AuCl4- tetrachloroaurate(III), PtCl6 2- hexachloroplatinate(IV), AlF6 3- hexafluoroaluminate)
+  // and their acids (HAuCl4 tetrachloroauric acid, H2PtCl6 hexachloroplatinic acid)
+  it.each([
+    ["⟦Potassium dichloroiodate(I)⟧ was used; then ⟦dichloroiodate(I)⟧ formed.", ["KICl2", "ICl2^-"]],
+    ["The ⟦tetrachloroaurate⟧ ion and ⟦tetrachloroaurate(III)⟧ in the bath.", ["AuCl4^-", "AuCl4^-"]],
+    ["⟦hexachloroplatinate(IV)⟧ and ⟦hexafluoroaluminate⟧ in the melt.", ["PtCl6^2-", "AlF6^3-"]],
+    ["Add ⟦tetrachloroauric acid⟧ and ⟦hexachloroplatinic acid⟧ dropwise.", ["HAuCl4", "H2PtCl6"]],
+    // common practice: an ion name before "salt" names a class of salts, as "a nitrate salt" does
+    ["Dissolve the tetrachloroiodate(III) salt; tetrachloric and dichloroiodic are no names.", []],
+  ])("%s", (marked, formulas) => {
+    check(marked, formulas);
+  });
+});

@@ -7,6 +7,7 @@ import { ELEMENTS, elementByName } from "../../elements";
 import { acidNames } from "./acidNames";
 import { ANION_ROOTS, anionRootByName } from "./anionRoots";
 import { GREEK_PREFIXES, joinPrefix } from "./greekPrefixes";
+import { haloComplexAnionByName } from "./haloComplexNames";
 import { oldCationNames } from "./metalCations";
 import { listedNames, matchName } from "./nameLookup";
 import { alkylGroupNames } from "./organicNames";
@@ -58,6 +59,15 @@ export function mayContinueName(word: string): boolean {
   return mayStartName(word);
 }
 
+/**
+ * "dichloroiodate(i)", "tetrachloroaurate": a halo-complex anion, named by rule rather than
+ * listed, or the first word of its acid ("tetrachloroauric acid").
+ */
+function isHaloComplexWord(word: string): boolean {
+  const stem = /^(.{8,})(ate|ic)(\([iv]+\))?$/.exec(word);
+  return stem !== null && haloComplexAnionByName(`${stem[1]}ate${stem[3] ?? ""}`) !== undefined;
+}
+
 function nameStartWords(): ReadonlySet<string> {
   if (startWords !== undefined) return startWords;
   const words = new Set<string>();
@@ -91,7 +101,7 @@ const ORGANIC_ENDING = /(?:ane|ene|yne|ol|al|one|amine|amide|nitrile|oic)$/;
 export function mayStartName(written: string): boolean {
   const word = written.includes("sulph") ? written.replaceAll("sulph", "sulf") : written;
   const words = nameStartWords();
-  if (words.has(word)) return true;
+  if (words.has(word) || isHaloComplexWord(word)) return true;
   // "iron(iii)": an element with a Stock numeral
   const open = word.indexOf("(");
   if (open > 0 && word.endsWith(")")) return words.has(word.slice(0, open));
