@@ -5,7 +5,7 @@
 // open-to-diagnostics time, edit-to-diagnostics p50/p95, how many seeded errors were reported,
 // and the server's peak memory, beside the aims and the machine's load.
 import { CYLINDER_HEADER, cylinderRow, isSeededMistake } from "./cylinderRows.mjs";
-import { loadNote, percentile, startServer, verdict } from "./lspBenchClient.mjs";
+import { afterEdit, afterEditLine, loadNote, percentile, startServer, verdict } from "./lspBenchClient.mjs";
 
 const ROWS = 100_000;
 const EDITS = 40;
@@ -32,6 +32,7 @@ for (const mode of ["pull", "push"]) {
   const reportedOnOpen = errorsIn(opened);
 
   const editTimes = [];
+  const afterTimes = [];
   let last = opened;
   for (let edit = 0; edit < EDITS; edit++) {
     // Make a correct row far into the file wrong: its electron count drops by two.
@@ -42,6 +43,7 @@ for (const mode of ["pull", "push"]) {
     await server.replaceLine(uri, version, index + 1, before.length, cylinderRow(index, true));
     last = await server.diagnostics(uri, version);
     editTimes.push(performance.now() - start);
+    afterTimes.push(await afterEdit(server, uri, { line: index + 1, character: 4 }));
   }
   const p95 = percentile(editTimes, 0.95);
   const peak = server.peakMegabytes();
@@ -51,6 +53,7 @@ for (const mode of ["pull", "push"]) {
   console.log(
     `  one-line edit to diagnostics  p50 ${percentile(editTimes, 0.5).toFixed(0)} ms  p95 ${p95.toFixed(0)} ms   aim p95 < ${AIMS.editP95Ms} ms   ${verdict(p95 < AIMS.editP95Ms)}`,
   );
+  console.log(afterEditLine(afterTimes));
   console.log(`  cells made wrong by edits  ${errorsIn(last) - reportedOnOpen} of ${EDITS} reported after the edits`);
   console.log(`  server peak memory         ${peak.toFixed(0)} MB   aim < ${AIMS.peakMb} MB   ${verdict(peak < AIMS.peakMb)}`);
   await server.stop();

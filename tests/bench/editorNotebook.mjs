@@ -5,7 +5,7 @@
 // Prints the figures beside the aims and the machine's load.
 import { labLogText } from "./labLogText.mjs";
 import { notebookText } from "./notebookText.mjs";
-import { loadNote, percentile, startServer, verdict } from "./lspBenchClient.mjs";
+import { afterEdit, afterEditLine, loadNote, percentile, startServer, verdict } from "./lspBenchClient.mjs";
 
 const LINES = 2000;
 const EDITS = 40;
@@ -35,6 +35,7 @@ for (const mode of ["pull", "push"]) {
   await server.diagnostics(uri, version);
   const current = [...lines];
   const editTimes = [];
+  const afterTimes = [];
   for (let edit = 0; edit < EDITS; edit++) {
     // Rewrite one prose line: a species swapped for another, sometimes for an impossible one.
     const { index } = proseLines[Math.floor(random() * proseLines.length)];
@@ -44,6 +45,7 @@ for (const mode of ["pull", "push"]) {
     await server.replaceLine(uri, version, index, current[index].length, replacement);
     await server.diagnostics(uri, version);
     editTimes.push(performance.now() - start);
+    afterTimes.push(await afterEdit(server, uri, { line: index, character: 4 }));
     current[index] = replacement;
   }
   const p95 = percentile(editTimes, 0.95);
@@ -51,6 +53,7 @@ for (const mode of ["pull", "push"]) {
   console.log(
     `  one-line edit to diagnostics  p50 ${percentile(editTimes, 0.5).toFixed(1)} ms  p95 ${p95.toFixed(1)} ms   aim p95 < ${AIMS.editP95Ms} ms   ${verdict(p95 < AIMS.editP95Ms)}`,
   );
+  console.log(afterEditLine(afterTimes));
   if (mode === "pull") {
     // Hovers on the text as the edits left it: mentions on edited lines are skipped.
     const edited = new Set(current.map((line, index) => (line !== lines[index] ? index : -1)));

@@ -6,7 +6,7 @@
 // the machine's load. Both re-read only the records an edit touches. Then a keystroke that breaks
 // a record: a hover and the code actions asked for while that text is read whole (on the worker
 // thread), and the keystroke that mends it.
-import { loadNote, percentile, startServer, verdict } from "./lspBenchClient.mjs";
+import { afterEdit, afterEditLine, loadNote, percentile, startServer, verdict } from "./lspBenchClient.mjs";
 
 const EDITS = 20;
 const AIMS = { openMs: 1000, editP95Ms: 50, peakMb: 300, hoverDuringReadMs: 50 };
@@ -98,6 +98,7 @@ for (const document of documents.filter((candidate) => !only || candidate.langua
   const opened = await pending;
   const openMs = performance.now() - openStart;
   const editTimes = [];
+  const afterTimes = [];
   let last = opened;
   for (let edit = 0; edit < EDITS; edit++) {
     // Make a correct record far into the file wrong: its electron count drops by two.
@@ -109,6 +110,7 @@ for (const document of documents.filter((candidate) => !only || candidate.langua
     await server.replaceLine(uri, version, document.head + index, before.length, document.record(index, true));
     last = await server.diagnostics(uri, version);
     editTimes.push(performance.now() - start);
+    afterTimes.push(await afterEdit(server, uri, { line: document.head + index, character: 4 }));
   }
   // A keystroke that breaks one record (a quote or brace left open), then the one that mends it:
   // the broken text is read whole on the worker thread, the mended one from the text before the
@@ -150,6 +152,7 @@ for (const document of documents.filter((candidate) => !only || candidate.langua
   console.log(
     `  one-line edit to diagnostics  p50 ${percentile(editTimes, 0.5).toFixed(0)} ms  p95 ${p95.toFixed(0)} ms   aim p95 < ${AIMS.editP95Ms} ms   ${verdict(p95 < AIMS.editP95Ms)}`,
   );
+  console.log(afterEditLine(afterTimes));
   console.log(
     `  a keystroke that breaks a record  ${breakMs.toFixed(0)} ms to diagnostics (read whole on the worker thread); the one that mends it  ${mendMs.toFixed(0)} ms`,
   );

@@ -36,6 +36,25 @@ export function percentile(values, fraction) {
 
 export const verdict = (met) => (met ? "meets aim" : "MISSES aim");
 
+/** What an editor asks after each edit besides diagnostics: the lightbulb's code actions where the cursor is, and the status bar's counts. */
+export const AFTER_EDIT_AIM_MS = 50;
+
+/** Times those two requests at `position` of `uri`; returns the slower. */
+export async function afterEdit(server, uri, position) {
+  const start = performance.now();
+  await server.codeActions(uri, position);
+  const actionsMs = performance.now() - start;
+  const summaryStart = performance.now();
+  await server.summary(uri);
+  return Math.max(actionsMs, performance.now() - summaryStart);
+}
+
+/** The line that reports `afterEdit` times. */
+export function afterEditLine(times) {
+  const p95 = percentile(times, 0.95);
+  return `  code actions and status-bar counts after each edit  p50 ${percentile(times, 0.5).toFixed(1)} ms  p95 ${p95.toFixed(1)} ms   aim p95 < ${AFTER_EDIT_AIM_MS} ms   ${verdict(p95 < AFTER_EDIT_AIM_MS)}`;
+}
+
 /**
  * Starts the server; `mode` is "pull" (the client asks for diagnostics) or "push" (the server
  * publishes them after a pause in typing).
