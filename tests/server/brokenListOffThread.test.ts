@@ -8,6 +8,7 @@
 import { afterAll, beforeAll, describe, expect, it } from "vitest";
 import { TextDocument } from "vscode-languageserver-textdocument";
 import {
+  CodeActionRequest,
   DocumentDiagnosticRequest,
   HoverRequest,
   type Diagnostic,
@@ -15,6 +16,7 @@ import {
   type MarkupContent,
 } from "vscode-languageserver-protocol/node";
 import { fromScratch } from "../support/incrementalCheck";
+import { FIX_ALL_TITLE } from "../../server/src/lsp/features/codeActions";
 import { FULL_CAPABILITIES, fixtureUri, startSession, type LspSession } from "./lspSession";
 
 const PULLING_CLIENT = {
@@ -105,5 +107,16 @@ describe("a large JSON list broken by a keystroke", () => {
       { range: { start: { line: brokenLine, character: at }, end: { line: brokenLine, character: at + 1 } }, text: "" },
     ]);
     expect(comparable(await pull())).toEqual(freshDiagnostics(text));
+    // With the findings in, the lightbulb on a wrong count offers its fix and fix-all.
+    const wrongLine = 1 + 211 * 3 + 7;
+    const character = lines[wrongLine].indexOf('electrons": ') + 12;
+    const actions = await session.connection.sendRequest(CodeActionRequest.type, {
+      textDocument: { uri },
+      range: { start: { line: wrongLine, character }, end: { line: wrongLine, character } },
+      context: { diagnostics: [] },
+    });
+    const titles = (actions ?? []).map((action) => action.title);
+    expect(titles).toContain(FIX_ALL_TITLE);
+    expect(titles.some((title) => /Change to (48|8)\b/.test(title))).toBe(true);
   });
 });

@@ -67,7 +67,7 @@ export function registerCodeActions(context: ServerContext): void {
         }
       }
       const kind = wants(CodeActionKind.QuickFix) ? CodeActionKind.QuickFix : wants(FIX_ALL_KIND) ? FIX_ALL_KIND : undefined;
-      if (kind && hasTableFixes(analysed)) {
+      if (kind && hasTableFixes(analysed, document.chunked.length >= LARGE_DOCUMENT)) {
         const action: CodeAction = { title: FIX_ALL_TITLE, kind };
         // A big table's fix-all edit is large: where the client resolves edits, it is built only when chosen.
         if (context.clientFeatures().codeActionResolveEdit)
@@ -110,15 +110,24 @@ function tableFixesOf(analysed: AnalysedDocument): Iterable<TextFix> {
  */
 const hasTableFixesMemo = new WeakMap<AnalysedDocument, boolean>();
 
-function hasTableFixes(analysed: AnalysedDocument): boolean {
+/** How long the lightbulb looks for a first table fix in a large document before answering without fix-all. */
+const FIX_ALL_LOOK_MS = 10;
+
+/** From this many characters a document is large enough for that bound. */
+const LARGE_DOCUMENT = 256 * 1024;
+
+function hasTableFixes(analysed: AnalysedDocument, large: boolean): boolean {
   const known = hasTableFixesMemo.get(analysed);
   if (known !== undefined) return known;
-  // A broken text waiting to be read whole (on the worker thread) is not read whole here: it
-  // offers no fix-all until its diagnostics are in.
+  // The lightbulb must not wait on reading a large document: one whose findings are not worked
+  // out within a few milliseconds (just opened), or a broken one waiting to be read whole on the
+  // worker thread, offers no fix-all yet. What was read is kept, and the editor asks again once
+  // the diagnostics change.
   let waiting = false;
+  const start = performance.now();
   function* partsUntilWaiting(): Generator<FindingPart> {
     for (const part of analysed.findingParts()) {
-      if (analysed.wholeReadWanted()) {
+      if (analysed.wholeReadWanted() || (large && performance.now() - start > FIX_ALL_LOOK_MS)) {
         waiting = true;
         return;
       }
