@@ -180,6 +180,27 @@ describe("chemformula's \\ch, read as mhchem's \\ce", () => {
   });
 });
 
+describe("LaTeX math around the script only", () => {
+  // common practice: older LaTeX reports write SO$_2$, H$_2$O and Ca$^{2+}$ in text mode
+  it.each([
+    ["Inlet ⟦SO$_2$⟧ in ⟦N$_2$⟧, product ⟦H$_{2}$O⟧.", "latex"],
+    ["Liquor ⟦H$_2$SO$_4$⟧ and ⟦K$_2$Cr$_2$O$_7$⟧.", "latex"],
+    ["Ions ⟦Ca$^{2+}$⟧, ⟦Cl$^-$⟧ and ⟦Na$^+$⟧.", "latex"],
+    // Read whole, or the formula would be CO.
+    ["The ⟦CO$_{2}$⟧ doublet.", "latex"],
+    ["In markdown too: ⟦H$_2$O⟧.", "markdown"],
+    // A count and a charge in one span is not one script: left unread rather than read as SO4.
+    ["The SO$_4^{2-}$ band.", "latex"],
+    ["It costs $5 and $_x$ is math.", "latex"],
+  ])("%s", (marked, kind) => {
+    check(marked, kind as DocumentKind);
+  });
+
+  it("reads CO$_{2}$ as carbon dioxide", () => {
+    expect(formulas("The CO$_{2}$ doublet.", "latex")).toEqual(["CO2"]);
+  });
+});
+
 describe("plain-text equations", () => {
   // common practice: equations typed in plain text and student reports
   it.each([

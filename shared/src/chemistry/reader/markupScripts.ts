@@ -6,7 +6,9 @@
  * - wiki templates: `H{{sub|2}}O`, `SO{{sub|4}}{{sup|2−}}`;
  * - AsciiDoc: `H~2~O`, `SO~4~^2-^`, `^13^CO~2~`;
  * - reStructuredText roles: `H\ :sub:`2`\ O`, `NH\ :sub:`4`\ :sup:`+``;
- * - LaTeX text mode: `H\textsubscript{2}O`, `SO\textsubscript{4}\textsuperscript{2--}`.
+ * - LaTeX text mode: `H\textsubscript{2}O`, `SO\textsubscript{4}\textsuperscript{2--}`;
+ * - LaTeX math around the script only: `SO$_2$`, `H$_{2}$O`, `Ca$^{2+}$` (a count and a charge in
+ *   one span, `SO$_4^{2-}$`, is not one script and is left unread).
  *
  * Each becomes the Unicode subscript or superscript characters the formula reader already knows.
  * A subscript holds a count; a superscript holds a charge ("2-", "+") or, right before an element
@@ -39,6 +41,8 @@ export function hasScriptMarkup(text: string): boolean {
     text.includes(":sub:`") ||
     text.includes(":sup:`") ||
     text.includes("\\textsu") ||
+    text.includes("$_") ||
+    text.includes("$^") ||
     /~[0-9]{1,3}~|\^[0-9+\-\u2212\u2013]{1,4}\^/.test(text)
   );
 }
@@ -53,7 +57,15 @@ export function scriptMarkupAt(text: string, at: number, limit: number = text.le
   if (code === 0x7b) return templated(text, at, limit);
   if (code === 0x7e || code === 0x5e) return delimited(text, at, limit);
   if (code === 0x5c || code === 0x3a) return role(text, at, limit);
+  if (code === 0x24) return mathScript(text, at, limit);
   return undefined;
+}
+
+/** `$_2$`, `$_{2}$`, `$^{2-}$`, `$^+$`: math mode for the script alone. */
+function mathScript(text: string, at: number, limit: number): ScriptMarkup | undefined {
+  const script = /^\$([_^])(?:\{([^{}$\n]{1,24})\}|([0-9]|[+-]))\$/.exec(text.slice(at, at + 30));
+  if (!script || at + script[0].length > limit) return undefined;
+  return scriptOf(script[2] ?? script[3], script[1] === "^", at + script[0].length);
 }
 
 /** `<sub>2</sub>`, `<sup>2&minus;</sup>`. */
@@ -174,11 +186,11 @@ export function withUnicodeScripts(text: string): string | undefined {
   let copied = 0;
   for (let index = 0; index < text.length; index++) {
     const code = text.charCodeAt(index);
-    if (code !== 0x3c && code !== 0x7b && code !== 0x7e && code !== 0x5e && code !== 0x5c && code !== 0x3a) continue;
+    if (code !== 0x3c && code !== 0x7b && code !== 0x7e && code !== 0x5e && code !== 0x5c && code !== 0x3a && code !== 0x24) continue;
     const markup = scriptMarkupAt(text, index);
     if (markup === undefined) {
       // A mark that opens no script is no formula character either.
-      if (code === 0x3c || code === 0x7b || code === 0x7e || code === 0x5c) return undefined;
+      if (code === 0x3c || code === 0x7b || code === 0x7e || code === 0x5c || code === 0x24) return undefined;
       continue;
     }
     result += text.slice(copied, index) + unicodeScript(markup);
