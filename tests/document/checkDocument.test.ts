@@ -109,6 +109,11 @@ describe("checkDocument on data tables", () => {
     ["bond angle", "H2O", "104.5°±0.5°"],
     ["valence electrons", "SO4^2-", "32"],
     ["lone pairs on central atom", "XeF2", "3"],
+    // from memory: every lone pair of the species, the way some tables count them: two on each O
+    // of CO2, three on each F of NF3 plus one on N
+    ["lone pairs", "CO2", "4"],
+    ["lone pairs", "NF3", "10"],
+    ["lone pairs (total)", "SF6", "18"],
   ])("accepts %s %j for %s", (column, species, cell) => {
     // from memory: VSEPR shapes and counts of common species, any general chemistry text
     expect(findings(`formula,${column}\n${species},${cell}\n`, "csv")).toEqual([]);

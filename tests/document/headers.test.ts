@@ -73,6 +73,10 @@ describe("meaningOfHeader", () => {
     "dipole moment (D)",
     "formal charge",
     "oxidation state",
+    // Every lone pair of the species, not the centre's.
+    "Lone pairs (total)",
+    "Total lone pairs",
+    "lone pairs in molecule",
     // Free text: read by no check.
     "Description",
     "Comments",

@@ -295,10 +295,14 @@ export function meaningOfHeader(header: string): ColumnMeaning | undefined {
   // Headers are a few words; anything longer is data, and not worth a regular expression's time.
   if (header.length > MAX_HEADER) return undefined;
   const meaning = plainMeaningOfHeader(header);
+  // "Lone pairs (total)", "lone pairs in molecule": every lone pair of the species, not the centre's.
+  if (meaning === "lonePairs" && TOTAL_LONE_PAIRS.test(header)) return undefined;
   // "IR bands (cm-1)" lists band positions, not a count of bands.
   if (meaning && VIBRATION_COUNTS.has(meaning) && WAVENUMBER_UNITS.test(header)) return undefined;
   return meaning;
 }
+
+const TOTAL_LONE_PAIRS = /\b(?:total|sum|all|molecule|in molecule|whole)\b|\binsgesamt\b|\bgesamt/i;
 
 const VIBRATION_COUNTS: ReadonlySet<ColumnMeaning> = new Set(["irBands", "ramanBands", "irActiveModes", "vibrationalModes"]);
 
