@@ -158,6 +158,8 @@ describe("reStructuredText", () => {
     ["a csv-table's file", '.. csv-table:: Cylinders\n   :file: data/NO2-lots.csv\n   :header: "Lot", "Gas"\n\nBF3 after.\n', ["BF3"]],
     ["a doctest block", "SF4 first.\n\n>>> gas('CH5')\nCH5\n\nBF3 after.\n", ["SF4", "BF3"]],
     ["a >>> inside a paragraph is prose", "SF4 first\n>>> NF3 then.\n", ["SF4", "NF3"]],
+    ["a note that opens with a role", ".. note::\n   :math:`\\ce{SF4}` is a seesaw.\n", ["SF4"]],
+    ["an option with no value", ".. figure:: NF3.png\n   :CH5-flag:\n\n   The NF3 band.\n", ["NF3"]],
     ["a comment written as a directive", ".. comment:: CH5 in an old draft\n\nBF3 after.\n", ["BF3"]],
     ["a comment directive's block", ".. comment::\n\n   CH5 and NH5 in an old note.\n\nBF3 after.\n", ["BF3"]],
     ["a comment with no text on its line", "..\n   CH5 under it\n\nBF3 after.\n", ["BF3"]],

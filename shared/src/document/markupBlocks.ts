@@ -182,13 +182,16 @@ function doctestBlock(text: string, line: MarkupLine): MarkupBlock | undefined {
   return { kind: "code", start: line.start, end: paragraphEnd(text, line.start) };
 }
 
-/** Past the option lines (":name: value", indented) that follow a directive's heading at `start`. */
+/**
+ * Past the option lines (":name: value", indented) that follow a directive's heading at `start`.
+ * A name is followed by white space: content that opens with a role (":math:`...`") is no option.
+ */
 function optionLinesEnd(text: string, start: number, indent: number): number {
   let position = start;
   while (position < text.length) {
     const lineEnd = endOfLine(text, position);
     const line = text.slice(position, lineEnd);
-    if (indentOf(line) <= indent || !/^\s*:[\w-]+:/.test(line)) break;
+    if (indentOf(line) <= indent || !/^\s*:[\w-]+:(?:\s|$)/.test(line)) break;
     position = Math.min(text.length, lineEnd + 1);
   }
   return position;
