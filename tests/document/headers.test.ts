@@ -77,6 +77,10 @@ describe("meaningOfHeader", () => {
     "Lone pairs (total)",
     "Total lone pairs",
     "lone pairs in molecule",
+    // The central atom's own valence electrons, not the species' count.
+    "Valence electrons (central atom)",
+    "valence electrons of central atom",
+    "Valenzelektronen am Zentralatom",
     // Free text: read by no check.
     "Description",
     "Comments",

@@ -297,12 +297,16 @@ export function meaningOfHeader(header: string): ColumnMeaning | undefined {
   const meaning = plainMeaningOfHeader(header);
   // "Lone pairs (total)", "lone pairs in molecule": every lone pair of the species, not the centre's.
   if (meaning === "lonePairs" && TOTAL_LONE_PAIRS.test(header)) return undefined;
+  // "Valence electrons (central atom)": the centre's own electrons, not the species' count.
+  if (meaning === "valenceElectrons" && CENTRAL_ATOM.test(header)) return undefined;
   // "IR bands (cm-1)" lists band positions, not a count of bands.
   if (meaning && VIBRATION_COUNTS.has(meaning) && WAVENUMBER_UNITS.test(header)) return undefined;
   return meaning;
 }
 
 const TOTAL_LONE_PAIRS = /\b(?:total|sum|all|molecule|in molecule|whole)\b|\binsgesamt\b|\bgesamt/i;
+
+const CENTRAL_ATOM = /\bcent(?:ral|re|er)\b|zentralatom|atome central|[aá]tomo central/i;
 
 const VIBRATION_COUNTS: ReadonlySet<ColumnMeaning> = new Set(["irBands", "ramanBands", "irActiveModes", "vibrationalModes"]);
 
