@@ -170,6 +170,7 @@ export {
 } from "./document/chunkedText";
 export type { ChunkedText, ChunkedTextBuilder, LineAndCharacter, TextChunk } from "./document/chunkedText";
 export { createDocumentAnalyser, wholeReadingOf } from "./document/incrementalAnalysis";
+export { READ_WHOLE_ELSEWHERE_FROM } from "./document/listParts";
 export type { WholeReading } from "./document/listParts";
 export type { DocumentAnalyser, DocumentAnalysis } from "./document/incrementalAnalysis";
 export type { FindingPart } from "./document/findingPart";

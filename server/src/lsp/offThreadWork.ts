@@ -56,6 +56,8 @@ export interface OffThreadWork {
     job: Extract<OffThreadJob, { kind: K }>,
     token?: CancellationToken,
   ): Promise<OffThreadAnswer<OffThreadJobValue[K]>>;
+  /** Starts the worker ahead of a job that may come (it takes a few hundred milliseconds to load). */
+  warm(): void;
 }
 
 interface QueuedJob {
@@ -133,6 +135,9 @@ export function createOffThreadWork(log: ServerLog, workerPath = join(__dirname,
   };
 
   return {
+    warm() {
+      worker ??= start();
+    },
     run(job, token) {
       if (token?.isCancellationRequested) return Promise.resolve({ kind: "cancelled" });
       return new Promise((settle) => {

@@ -12,7 +12,7 @@ import {
   type DocumentDiagnosticReport,
 } from "vscode-languageserver";
 import type { TextDocument } from "vscode-languageserver-textdocument";
-import { moved, shownParts, wholeText, type FindingPart } from "../../../../shared/src/index";
+import { moved, READ_WHOLE_ELSEWHERE_FROM, shownParts, wholeText, type FindingPart } from "../../../../shared/src/index";
 import type { Finding, FindingSeverity } from "../core";
 import type { AnalysedDocument } from "../documentCache";
 import { guarded } from "../guardedHandler";
@@ -115,6 +115,9 @@ async function currentDiagnostics(
     const shown = shownParts(analysed.findingParts(), settings.diagnostics.notesAs);
     const parts = await partsInSlices(analysed, shown, limit, stop, slices);
     if (!parts) continue;
+    // A large list may be broken by the next keystroke: its reader is loaded ahead, while the editor is quiet.
+    if ((analysed.kind === "json" || analysed.kind === "yaml") && document.chunked.length >= READ_WHOLE_ELSEWHERE_FROM)
+      slices.offThread?.warm();
     const items = diagnosticsOf(document, cappedFindings(parts, limit));
     return { version: document.version, revision: analysed.revision, items };
   }
