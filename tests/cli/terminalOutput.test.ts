@@ -12,14 +12,21 @@ beforeAll(ensureBuilt);
 
 const ESC = "\u001b";
 const CSI_C1 = "\u009b";
-// Window title, screen clear, and the C1 form of CSI, all of which a terminal would obey.
-const PLANTED = `${ESC}]0;owned${"\u0007"}bent${ESC}[2J${CSI_C1}31m`;
 
-/** A folder with one table whose geometry cell holds control sequences, under `fileName`. */
+/** The three controls a finding quotes back from the formula cells of `plantedFolder`, one per row. */
+const QUOTED_CONTROLS = [ESC, CSI_C1, "\u0007"];
+
+/**
+ * A folder with one table under `fileName` whose formula cells hold control sequences (a title
+ * change, the C1 form of CSI, a bell): the finding on each quotes the character it stops at.
+ */
 function plantedFolder(fileName: string): string {
   const folder = mkdtempSync(join(tmpdir(), "lonepair-terminal-"));
   // common practice: NF3 has 26 valence electrons and is trigonal pyramidal (AX3E1)
-  writeFileSync(join(folder, fileName), `cylinder,formula,valence electrons,molecular geometry\nKR-H-501,NF3,24,${PLANTED}\n`);
+  const rows = [`NF3${ESC}]0;owned`, `NF3${CSI_C1}31m`, `NF3${"\u0007"}`].map(
+    (cell, index) => `KR-H-50${index + 1},${cell},26,trigonal pyramidal`,
+  );
+  writeFileSync(join(folder, fileName), `cylinder,formula,valence electrons,molecular geometry\n${rows.join("\n")}\n`);
   return folder;
 }
 
@@ -36,14 +43,14 @@ describe("check output on a terminal", () => {
     const run = runCli(["check", "."], plantedFolder(fileName));
     expect(run.stdout).not.toMatch(CONTROL);
     const findings = run.stdout.split("\n").filter((line) => / (error|warning|note): /.test(line));
-    // The valence count and the geometry: two findings, two lines, each naming the file.
-    expect(findings).toHaveLength(2);
+    // One finding per planted cell, one line each, each naming the file and its row.
+    expect(findings).toHaveLength(3);
     const shownName = fileName.replace("\n", "\\n").replace("\r", "\\r").replace(ESC, "\\x1b").replace(CSI_C1, "\\x9b");
-    for (const line of findings) expect(line.startsWith(`${shownName}:2:`)).toBe(true);
-    expect(run.stdout).toContain("\\x1b]0;owned\\x07bent\\x1b[2J\\x9b31m");
+    findings.forEach((line, index) => expect(line.startsWith(`${shownName}:${index + 2}:`)).toBe(true));
+    for (const shown of ["\\x1b", "\\x9b", "\\x07"]) expect(run.stdout).toContain(`"${shown}"`);
   });
 
-  it.each([["json"], ["sarif"]])("%s: no raw control character, and the cell comes back exactly when parsed", (format) => {
+  it.each([["json"], ["sarif"]])("%s: no raw control character, and each planted character comes back exactly when parsed", (format) => {
     const fileName = `bay\nH${ESC}[1m.csv`;
     const run = runCli(["check", "--format", format, "."], plantedFolder(fileName));
     expect(run.stdout).not.toMatch(CONTROL);
@@ -52,7 +59,8 @@ describe("check output on a terminal", () => {
       format === "json"
         ? parsed.map((finding: { message: string }) => finding.message)
         : parsed.runs[0].results.map((result: { message: { text: string } }) => result.message.text);
-    expect(messages.some((message) => message.includes(PLANTED))).toBe(true);
+    // Each planted character comes back as itself once the output is parsed.
+    for (const control of QUOTED_CONTROLS) expect(messages.some((message) => message.includes(`"${control}"`))).toBe(true);
     const files: string[] = format === "json" ? parsed.map((finding: { file: string }) => finding.file) : [];
     for (const file of files) expect(file).toBe(fileName);
   });
