@@ -9,7 +9,7 @@
  */
 import { existsSync } from "node:fs";
 import { join } from "node:path";
-import { Worker } from "node:worker_threads";
+import { Worker, type ResourceLimits } from "node:worker_threads";
 import type { CancellationToken } from "vscode-languageserver";
 import type { CoordinateFormat, HoverMarkdownOptions, SpeciesAnalysis, WholeReading } from "../../../shared/src/index";
 import type { ServerLog } from "./guardedHandler";
@@ -66,8 +66,12 @@ interface QueuedJob {
   stopListening?: () => void;
 }
 
-/** `workerPath` defaults to the bundle beside the running server (dist/workerThread.js). */
-export function createOffThreadWork(log: ServerLog, workerPath = join(__dirname, "workerThread.js")): OffThreadWork {
+/** `workerPath` defaults to the bundle beside the running server (dist/workerThread.js); `limits` bound the worker's heap. */
+export function createOffThreadWork(
+  log: ServerLog,
+  workerPath = join(__dirname, "workerThread.js"),
+  limits?: ResourceLimits,
+): OffThreadWork {
   let worker: Worker | undefined;
   let running: QueuedJob | undefined;
   const queue: QueuedJob[] = [];
@@ -80,7 +84,7 @@ export function createOffThreadWork(log: ServerLog, workerPath = join(__dirname,
 
   const start = (): Worker | undefined => {
     if (!existsSync(workerPath)) return undefined;
-    const started = new Worker(workerPath);
+    const started = new Worker(workerPath, limits ? { resourceLimits: limits } : {});
     // The worker never keeps the server alive once the editor has gone.
     started.unref();
     started.on("message", (reply: WorkerReply) => {
