@@ -98,6 +98,27 @@ describe("a broken list read whole elsewhere", () => {
     expect(speciesCountOf(analyse(session))).toBe(analyzeDocument(text, "yaml").occurrences.length);
   });
 
+  it("waits for the whole reading of a text whose list the quick pass cannot find, finding nothing meanwhile", () => {
+    const lines = Array.from({ length: 20 }, (_, index) => JSON_RECORD_LINES[index % 4]);
+    const text = jsonDocument(lines);
+    const session: Session = { text: chunkedTextOf(text, 128), analyser: createDocumentAnalyser("json", undefined, EVERY_TEXT_IS_LARGE) };
+    for (const _ of analyse(session).findingParts());
+    // The quote that opens the key before the list taken away: the list is no longer found.
+    const key = text.indexOf('"records"');
+    session.text = editChunkedText(session.text, key, key + 1, "");
+    const analysis = analyse(session);
+    const offer = analysis.wholeReadWanted();
+    expect(offer).toBeDefined();
+    const edited = wholeText(session.text);
+    expect(analysis.speciesAt(edited.indexOf('"NF3"') + 2)).toBeUndefined();
+    expect(analysis.findingsAround(0, edited.length)).toEqual([]);
+    expect(analysis.wholeReadWanted()).toBeDefined();
+    offer!.settle(wholeReadingOf("json", edited));
+    expect(analysis.wholeReadWanted()).toBeUndefined();
+    expect(canonical([...analysis.findingParts()].flat())).toEqual(canonical(fromScratch(edited, "json")));
+    expect(speciesCountOf(analysis)).toBe(analyzeDocument(edited, "json").occurrences.length);
+  });
+
   it("answers the species under a hover from the records there while the broken text waits", () => {
     const lines = Array.from({ length: 30 }, (_, index) => JSON_RECORD_LINES[index % 4]);
     const text = jsonDocument(lines);

@@ -28,6 +28,7 @@ import { sliceOf, wholeText, type ChunkedText, type TextChunk } from "./chunkedT
 import { isTextMarkup } from "./documentKind";
 import { markdownAnalyser } from "./markdownAnalysis";
 import { plainTextAnalyser } from "./plainTextAnalysis";
+import { emptyModel } from "./segmentedAnalysis";
 import { joinedModels, shiftedModel } from "./shiftedModel";
 import { memoisedReader, type SpeciesReader } from "./speciesReader";
 import { speciesAtOffset, type SpeciesAtOffset } from "./speciesAt";
@@ -468,7 +469,8 @@ function listSegments(
     const plain = (): DocumentAnalysis => (whole ??= wholeAnalysis(kind, wholeText(text), read, {}));
     const around = (start: number, end: number): DocumentModel => {
       const stretch = version.around(start, end);
-      if (!stretch) return plain().model();
+      // While the text waits to be read whole (elsewhere, perhaps), a request about a place is not the one to read it.
+      if (!stretch) return version.wholeReadWanted() ? emptyModel(kind) : plain().model();
       return shiftedModel(readStretch(sliceOf(text, stretch.start, stretch.end)), stretch.start);
     };
     return {

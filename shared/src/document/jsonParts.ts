@@ -51,7 +51,8 @@ export function jsonListReader(read: SpeciesReader, step = STEP_CHARACTERS, else
   return rememberingListReader<JsonListState>(
     {
       edited: (last, text) => editedState(last, text, read, check),
-      opened: (text) => openedState(text, read, isEquationKey) ?? wholeState(text, read),
+      opened: (text) => openedState(text, read, isEquationKey),
+      openedWhole: (text) => wholeState(text, read),
       readParts: (state, first, last) => partsInPlace(state, first, last, read, check),
       readFrame: (state) => frameOf(state, read, isEquationKey, check),
       readWhole: (text) => readOnce(wholeText(text), read),

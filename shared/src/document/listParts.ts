@@ -81,8 +81,10 @@ export interface WholeReading {
 export interface ListKind<State extends ListParts> {
   /** The state of an edited text from the last version's; undefined when it must be read afresh. */
   edited(last: State, text: ChunkedText): State | undefined;
-  /** A text read afresh: its parts found (none read yet), or its findings when it has no such list. */
-  opened(text: ChunkedText): State | WholeReading;
+  /** A text read afresh: its parts found by a quick pass (none read yet); undefined when the pass finds none. */
+  opened(text: ChunkedText): State | undefined;
+  /** A text its quick pass finds no list in, read whole: cut into its list's parts (all read) when it has one, or its findings. */
+  openedWhole(text: ChunkedText): State | WholeReading;
   /** Parts `first`..`last` read in place, findings relative to each part's start; undefined when they do not read cleanly. */
   readParts(state: State, first: number, last: number): PartsReading | undefined;
   /** The text around the parts read; undefined when it does not read cleanly. */
@@ -131,12 +133,20 @@ export function rememberingListReader<State extends ListParts>(
       return versionOf(next, kind, reading, step, elsewhereFrom);
     }
     const opened = kind.opened(text);
-    if (!("starts" in opened)) {
-      last = undefined;
-      return wholeVersion(opened);
+    if (opened) {
+      last = opened;
+      return versionOf(opened, kind, reading, step, elsewhereFrom);
     }
-    last = opened;
-    return versionOf(opened, kind, reading, step, elsewhereFrom);
+    last = undefined;
+    const readWhole = (): ListVersion => {
+      const whole = kind.openedWhole(text);
+      if (!("starts" in whole)) return wholeVersion(whole);
+      last = whole;
+      return versionOf(whole, kind, reading, step, elsewhereFrom);
+    };
+    // A large text with no list the quick pass can find (mostly one a keystroke broke) waits for
+    // its whole reading, which may be done elsewhere, as a broken list's does.
+    return text.length >= elsewhereFrom ? waitingVersion(text, readWhole) : readWhole();
   };
 }
 
@@ -159,6 +169,35 @@ function wholeVersion(reading: WholeReading): ListVersion {
     around: () => undefined,
     speciesCount: () => reading.species,
     wholeReadWanted: () => undefined,
+  };
+}
+
+/**
+ * A version read whole only when its findings are asked for, unless a caller hands in that
+ * reading first (see `ListVersion.wholeReadWanted`); meanwhile requests about a place find nothing.
+ */
+function waitingVersion(text: ChunkedText, readWhole: () => ListVersion): ListVersion {
+  let settled: WholeReading | undefined;
+  let read: ListVersion | undefined;
+  const done = (): ListVersion => (read ??= settled ? wholeVersion(settled) : readWhole());
+  return {
+    findings: () => done().findings(),
+    *findingSteps() {
+      if (!settled && !read) yield NO_FINDINGS;
+      yield* done().findingSteps();
+    },
+    findingsAround: (start, end) => (read || settled ? done().findingsAround(start, end) : []),
+    around: (start, end) => read?.around(start, end),
+    speciesCount: () => done().speciesCount(),
+    wholeReadWanted() {
+      if (settled || read) return undefined;
+      return {
+        text,
+        settle(reading) {
+          settled ??= reading;
+        },
+      };
+    },
   };
 }
 

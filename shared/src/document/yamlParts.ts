@@ -69,7 +69,8 @@ export function yamlListReader(read: SpeciesReader, step = STEP_CHARACTERS, else
   return rememberingListReader<ListState>(
     {
       edited: (last, text) => editedState(last, text, read),
-      opened: (text) => openedState(text) ?? wholeState(text, read),
+      opened: (text) => openedState(text),
+      openedWhole: (text) => wholeState(text, read),
       readParts: (state, first, last) => itemsInPlace(state, first, last, read),
       readFrame: (state) => frameOf(state, read),
       readWhole: (text) => wholeYamlReading(wholeText(text), read),
