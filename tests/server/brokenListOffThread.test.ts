@@ -15,6 +15,7 @@ import {
   type DocumentDiagnosticReport,
   type MarkupContent,
 } from "vscode-languageserver-protocol/node";
+import { analyzeDocument } from "../../shared/src/index";
 import { fromScratch } from "../support/incrementalCheck";
 import { FIX_ALL_TITLE } from "../../server/src/lsp/features/codeActions";
 import { FULL_CAPABILITIES, fixtureUri, startSession, type LspSession } from "./lspSession";
@@ -96,7 +97,10 @@ describe("a large JSON list broken by a keystroke", () => {
     const hover = session.connection
       .sendRequest(HoverRequest.type, { textDocument: { uri }, position: { line: farLine, character: lines[farLine].indexOf("SF6") + 1 } })
       .then((answer) => (order.push("hover"), answer));
-    const [items, card] = await Promise.all([diagnostics, hover]);
+    // The status bar's counts, asked for meanwhile, wait for the same reading.
+    const summary = session.connection.sendRequest("lonepair/documentSummary", { uri }) as Promise<{ species: number } | null>;
+    const [items, card, counts] = await Promise.all([diagnostics, hover, summary]);
+    expect(counts?.species).toBe(analyzeDocument(broken.getText(), "json").occurrences.length);
     expect(order).toEqual(["hover", "diagnostics"]);
     expect((card?.contents as MarkupContent).value).toContain("octahedral");
     expect(items.some((item) => item.code === "json-syntax")).toBe(true);

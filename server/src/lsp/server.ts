@@ -23,6 +23,7 @@ import { registerCodeActions } from "./features/codeActions";
 import { registerDiagnostics, type DiagnosticsFeature } from "./features/diagnostics";
 import { registerHover, type HoverFeature } from "./features/hover";
 import { createOffThreadWork } from "./offThreadWork";
+import { createWholeReadings } from "./wholeReadings";
 import { registerInlayHints } from "./features/inlayHints";
 import { registerSpeciesRequests } from "./features/speciesRequests";
 import { registerLewisFigure } from "./features/lewisFigure";
@@ -48,6 +49,9 @@ export function startServer(connection: Connection, longWork: LongWork = { giveW
   let workspaceCheck: WorkspaceCheckFeature | undefined;
   let folders: WorkspaceFolders | undefined;
   const settings = createSettingsStore(connection, () => features?.configuration ?? false, log);
+  // A second worker for the whole reading of a large broken document: it never waits behind a
+  // species. A small young generation keeps its peak lower (a 5 MB list: 237 MB, not 261).
+  const wholeReadings = createWholeReadings(createOffThreadWork(log, undefined, { maxYoungGenerationSizeMb: 8 }));
   const context: ServerContext = {
     connection,
     documents,
@@ -55,6 +59,7 @@ export function startServer(connection: Connection, longWork: LongWork = { giveW
     settings,
     log,
     longWork,
+    wholeReadings,
     clientFeatures: () => features ?? clientFeaturesFrom({}),
     workspaceFolders: () => folders?.current() ?? [],
   };
@@ -74,9 +79,7 @@ export function startServer(connection: Connection, longWork: LongWork = { giveW
     registerLewisFigure(context);
     if (features.inlayHints) registerInlayHints(context, hover);
     // Once a document's diagnostics are out, its hover cards are written ahead.
-    // A second worker for the whole reading of a large broken document: it never waits behind a
-    // species. A small young generation keeps its peak lower (a 5 MB list: 237 MB, not 261).
-    diagnostics = registerDiagnostics(context, hover.prepare, createOffThreadWork(log, undefined, { maxYoungGenerationSizeMb: 8 }));
+    diagnostics = registerDiagnostics(context, hover.prepare, wholeReadings);
     workspaceCheck = registerWorkspaceCheck(context);
     if (features.workspaceFolders) {
       connection.workspace.onDidChangeWorkspaceFolders(

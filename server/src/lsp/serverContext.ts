@@ -10,6 +10,7 @@ import type { ServerLog } from "./guardedHandler";
 import type { LongWork } from "./quickRequests";
 import type { ServerSettings } from "./settings";
 import type { SettingsStore } from "./settingsStore";
+import type { WholeReadings } from "./wholeReadings";
 import type { WorkspaceFolderPath } from "./workspaceFolders";
 
 export interface ServerContext {
@@ -20,6 +21,8 @@ export interface ServerContext {
   readonly log: ServerLog;
   /** Long work calls `giveWay()` between slices, so quick requests are answered meanwhile. */
   readonly longWork: LongWork;
+  /** The whole reading of a large broken JSON or YAML list, on a worker thread. */
+  readonly wholeReadings: WholeReadings;
   /** Known once `initialize` has been answered. */
   clientFeatures(): ClientFeatures;
   /** The editor's open folders on disk (empty before `initialize`). */

@@ -4,7 +4,6 @@
  * version they were computed from.
  */
 import {
-  CancellationTokenSource,
   DiagnosticSeverity,
   DocumentDiagnosticReportKind,
   type Diagnostic,
@@ -12,11 +11,11 @@ import {
   type DocumentDiagnosticReport,
 } from "vscode-languageserver";
 import type { TextDocument } from "vscode-languageserver-textdocument";
-import { moved, READ_WHOLE_ELSEWHERE_FROM, shownParts, wholeText, type FindingPart } from "../../../../shared/src/index";
+import { moved, READ_WHOLE_ELSEWHERE_FROM, shownParts, type FindingPart } from "../../../../shared/src/index";
 import type { Finding, FindingSeverity } from "../core";
 import type { AnalysedDocument } from "../documentCache";
 import { guarded } from "../guardedHandler";
-import type { OffThreadWork } from "../offThreadWork";
+import type { WholeReadings } from "../wholeReadings";
 import type { LongWork } from "../quickRequests";
 import { lspRange } from "../ranges";
 import { enabledDocument, type ServerContext } from "../serverContext";
@@ -78,21 +77,21 @@ function afterQuiet(after: AfterDiagnostics, uri: string, stale: () => boolean):
 
 /**
  * Registers pull diagnostics or sets up pushing, depending on the client. Work that cannot be cut
- * into slices (the whole reading of a large broken JSON or YAML list) goes to `offThread`.
+ * into slices (the whole reading of a large broken JSON or YAML list) goes to `wholeReadings`.
  */
 export function registerDiagnostics(
   context: ServerContext,
   after: AfterDiagnostics = () => Promise.resolve(),
-  offThread?: OffThreadWork,
+  wholeReadings?: WholeReadings,
 ): DiagnosticsFeature {
-  const slices: Slices = { longWork: context.longWork, offThread };
+  const slices: Slices = { longWork: context.longWork, wholeReadings };
   return context.clientFeatures().pullDiagnostics ? registerPull(context, after, slices) : registerPush(context, after, slices);
 }
 
 /** How diagnostics are worked out without holding up other requests. */
 interface Slices {
   readonly longWork: LongWork;
-  readonly offThread?: OffThreadWork;
+  readonly wholeReadings?: WholeReadings;
 }
 
 /**
@@ -117,7 +116,7 @@ async function currentDiagnostics(
     if (!parts) continue;
     // A large list may be broken by the next keystroke: its reader is loaded ahead, while the editor is quiet.
     if ((analysed.kind === "json" || analysed.kind === "yaml") && document.chunked.length >= READ_WHOLE_ELSEWHERE_FROM)
-      slices.offThread?.warm();
+      slices.wholeReadings?.warm();
     const items = diagnosticsOf(document, cappedFindings(parts, limit));
     return { version: document.version, revision: analysed.revision, items };
   }
@@ -138,13 +137,13 @@ async function partsInSlices(
   parts: Iterable<FindingPart>,
   limit: number,
   stop: () => boolean,
-  { longWork, offThread }: Slices,
+  { longWork, wholeReadings }: Slices,
 ): Promise<FindingPart[] | undefined> {
   const taken: FindingPart[] = [];
   let errors = 0;
   let sliceStart = performance.now();
   for (const part of parts) {
-    if (offThread && !(await readWholeElsewhere(analysed, offThread, stop))) return undefined;
+    if (wholeReadings && analysed.wholeReadWanted() && !(await wholeReadings.settle(analysed, stop))) return undefined;
     taken.push(part);
     if (errors >= limit && part.findings.length > 0) break;
     for (const finding of part.findings) if (finding.severity === "error") errors++;
@@ -154,31 +153,6 @@ async function partsInSlices(
     sliceStart = performance.now();
   }
   return taken;
-}
-
-/** How often a whole reading on the worker checks whether its text is still current. */
-const STALE_CHECK_MS = 20;
-
-/**
- * When `analysed` waits on reading its text whole (a large JSON or YAML list a keystroke broke),
- * does that reading on the worker thread and hands it in; false when `stop()` said to give up
- * meanwhile (the worker is stopped). Should the worker be missing, the reading is done here.
- */
-async function readWholeElsewhere(analysed: AnalysedDocument, offThread: OffThreadWork, stop: () => boolean): Promise<boolean> {
-  const wanted = analysed.wholeReadWanted();
-  if (!wanted || (analysed.kind !== "json" && analysed.kind !== "yaml")) return true;
-  const giveUp = new CancellationTokenSource();
-  const watch = setInterval(() => {
-    if (stop()) giveUp.cancel();
-  }, STALE_CHECK_MS);
-  try {
-    const answer = await offThread.run({ kind: "wholeReading", documentKind: analysed.kind, text: wholeText(wanted.text) }, giveUp.token);
-    if (answer.kind === "done" && answer.value) wanted.settle(answer.value);
-    return answer.kind !== "cancelled" && !stop();
-  } finally {
-    clearInterval(watch);
-    giveUp.dispose();
-  }
 }
 
 const SEVERITY_RANK: Readonly<Record<FindingSeverity, number>> = { error: 0, warning: 1, information: 2, hint: 3 };

@@ -26,7 +26,6 @@ import {
 } from "../../../../shared/src/index";
 import { analyseDocument, fileNameOf, SNIFF_LENGTH, type AnalysedDocument } from "../documentCache";
 import { guarded } from "../guardedHandler";
-import type { LongWork } from "../quickRequests";
 import { lspRange } from "../ranges";
 import { enabledDocument, type ServerContext } from "../serverContext";
 import { diagnosticsOf } from "./diagnostics";
@@ -87,7 +86,7 @@ export function registerSpeciesRequests(context: ServerContext, offThread: OffTh
         if (!enabled) return null;
         const { analysed } = enabled;
         const stale = (): boolean => token.isCancellationRequested || context.cache.revisionOf(uri) !== analysed.revision;
-        const counts = await countsInSlices(analysed, stale, context.longWork);
+        const counts = await countsInSlices(analysed, stale, context);
         if (token.isCancellationRequested) return null;
         if (!counts) continue;
         return {
@@ -115,10 +114,12 @@ const COUNT_SLICE_MS = 8;
 async function countsInSlices(
   analysed: AnalysedDocument,
   stale: () => boolean,
-  longWork: LongWork,
+  { longWork, wholeReadings }: Pick<ServerContext, "longWork" | "wholeReadings">,
 ): Promise<{ species: number; problems: number } | undefined> {
   let sliceStart = performance.now();
   const giveWay = async (): Promise<boolean> => {
+    // A broken text waits for its whole reading on the worker, shared with its diagnostics.
+    if (analysed.wholeReadWanted() && !(await wholeReadings.settle(analysed, stale))) return false;
     if (performance.now() - sliceStart < COUNT_SLICE_MS) return true;
     await longWork.giveWay();
     sliceStart = performance.now();
