@@ -12,8 +12,8 @@ import { TextDocument } from "vscode-languageserver-textdocument";
 import { MAX_ANALYSED_LENGTH, shownParts, type WorkspaceCheckResult } from "../../../shared/src/index";
 import { searchDocuments, type DocumentFile } from "../files/findDocuments";
 import { readDocumentText } from "../files/readDocumentText";
-import { analyseDocument } from "./documentCache";
-import { cappedFindings, diagnosticsOf } from "./features/diagnostics";
+import { analyseDocument, type AnalysedDocument } from "./documentCache";
+import { cappedFindings, diagnosticsOf, partsInSlices } from "./features/diagnostics";
 import { describeError } from "./guardedHandler";
 import { enabledDocument, type ServerContext } from "./serverContext";
 import type { ServerSettings } from "./settings";
@@ -89,7 +89,7 @@ export async function checkWorkspaceFolders(context: ServerContext, options: Pas
     const { file, settings } = found[index];
     options.progress(`${index} of ${found.length} files`, Math.floor((100 * index) / found.length));
     try {
-      const outcome = await checkOne(context, file, settings, openByPath.get(file.path), options.previous);
+      const outcome = await checkOne(context, file, settings, openByPath.get(file.path), options.previous, token);
       checked += 1;
       if (outcome.diagnostics && outcome.diagnostics.length > 0) {
         filesWithProblems += 1;
@@ -97,6 +97,8 @@ export async function checkWorkspaceFolders(context: ServerContext, options: Pas
       }
       await options.onFile(outcome);
     } catch (error) {
+      // A file given up on for a cancellation is neither checked nor unreadable.
+      if (error instanceof PassCancelled) break;
       unreadable += 1;
       context.log.info(`lonepair: workspace check: ${file.path}: ${describeError(error)}`);
     }
@@ -113,6 +115,9 @@ export async function checkWorkspaceFolders(context: ServerContext, options: Pas
     ...(stoppedAt !== undefined ? { stoppedAt } : {}),
   };
 }
+
+/** Thrown out of a file's check when the pass is cancelled in the middle of it. */
+class PassCancelled extends Error {}
 
 /** The path of a `file:` URI, or undefined for another scheme or a malformed URI. */
 export function pathOfUri(uri: string): string | undefined {
@@ -139,15 +144,29 @@ async function checkOne(
   settings: ServerSettings,
   openUri: string | undefined,
   previous: ReadonlyMap<string, string> | undefined,
+  token: CancellationToken,
 ): Promise<CheckedFile> {
   const generation = context.settings.generation;
+  // A large file is read a part at a time between other requests, a broken list on the worker thread.
+  const slices = { longWork: context.longWork, wholeReadings: context.wholeReadings };
+  const stop = (): boolean => token.isCancellationRequested;
+  const diagnosticsIn = async (document: TextDocument, analysed: AnalysedDocument, diagnostics: ServerSettings["diagnostics"]) => {
+    const parts = await partsInSlices(
+      analysed,
+      shownParts(analysed.findingParts(), diagnostics.notesAs),
+      diagnostics.maxPerDocument,
+      stop,
+      slices,
+    );
+    if (!parts) throw new PassCancelled();
+    return diagnosticsOf(document, cappedFindings(parts, diagnostics.maxPerDocument));
+  };
   if (openUri !== undefined) {
     // An open document is checked in the editor's text, as its own diagnostics are.
     const enabled = await enabledDocument(context, openUri);
     if (enabled) {
       const { document, analysed } = enabled;
-      const { maxPerDocument, notesAs } = enabled.settings.diagnostics;
-      const diagnostics = diagnosticsOf(document, cappedFindings(shownParts(analysed.findingParts(), notesAs), maxPerDocument));
+      const diagnostics = await diagnosticsIn(document, analysed, enabled.settings.diagnostics);
       return {
         uri: openUri,
         path: file.path,
@@ -163,10 +182,6 @@ async function checkOne(
   if (previous?.get(file.path) === resultId) return { uri, path: file.path, version: null, resultId, open: openUri !== undefined };
   const read = await readDocumentText(file, MAX_ANALYSED_LENGTH);
   const document = TextDocument.create(uri, "", 0, read.text);
-  const findings = analyseDocument(document, file.kind, 0, undefined, read.cutAt).findingParts();
-  const diagnostics = diagnosticsOf(
-    document,
-    cappedFindings(shownParts(findings, settings.diagnostics.notesAs), settings.diagnostics.maxPerDocument),
-  );
+  const diagnostics = await diagnosticsIn(document, analyseDocument(document, file.kind, 0, undefined, read.cutAt), settings.diagnostics);
   return { uri, path: file.path, version: null, resultId, diagnostics, open: openUri !== undefined };
 }

@@ -89,7 +89,7 @@ export function registerDiagnostics(
 }
 
 /** How diagnostics are worked out without holding up other requests. */
-interface Slices {
+export interface Slices {
   readonly longWork: LongWork;
   readonly wholeReadings?: WholeReadings;
 }
@@ -132,7 +132,7 @@ const SLICE_MS = 8;
  * reading a broken text whole on the worker thread when `analysed` asks for that; undefined once
  * `stop()` says so.
  */
-async function partsInSlices(
+export async function partsInSlices(
   analysed: AnalysedDocument,
   parts: Iterable<FindingPart>,
   limit: number,
