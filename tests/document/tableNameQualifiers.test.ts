@@ -26,12 +26,12 @@ describe("a name cell with a qualifier after the name", () => {
     // from memory: NH3 is trigonal pyramidal, SF6 has 6 + 6 × 7 = 48 valence electrons, any general chemistry text
     [
       "Reagent",
-      "ammonia (anhydrous, lecture bottle)",
+      "ammonia (anhydrous, small cylinder)",
       "Shape",
       "trigonal planar",
       [["table-molecular-geometry", "trigonal planar", "trigonal pyramidal"]],
     ],
-    ["Reagent", "ammonia (anhydrous, lecture bottle)", "Shape", "trigonal pyramidal", []],
+    ["Reagent", "ammonia (anhydrous, small cylinder)", "Shape", "trigonal pyramidal", []],
     ["Name", "sulfur hexafluoride – etch gas", "Valence electrons", "46", [["table-valence-electrons", "46", "48"]]],
     ["Name", "sulfur hexafluoride – etch gas", "Valence electrons", "48", []],
     ["Gas", "nitrogen trifluoride, 99.99%", "Polar", "no", [["table-polarity", "no", "yes"]]],

@@ -197,7 +197,7 @@ export function sameSpecies(a: SpeciesOccurrence, b: SpeciesOccurrence): boolean
 /**
  * Whether a cell of a column that names species reads as the row's species as `addRecord` reads
  * it: a formula, name or SMILES, a mixture, or a name with a qualifier after it ("ammonia
- * (anhydrous, lecture bottle)", "Argon, UHP"). A markdown table scans any other such cell with
+ * (anhydrous, small cylinder)", "Argon, UHP"). A markdown table scans any other such cell with
  * words in it as prose ("SF4 (reference)").
  */
 export function namingCellReads(written: RecordField, read: SpeciesReader): boolean {
