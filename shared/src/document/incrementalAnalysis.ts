@@ -268,12 +268,18 @@ function tableSegments(kind: "csv" | "tsv", read: SpeciesReader): (text: Chunked
       return found;
     };
 
-    const modelOf = (segment: TableSegment): DocumentModel => {
-      const known = models.get(segment.chunks[0]);
-      if (known && sameChunks(known.chunks, segment.chunks)) return shiftedModel(known.model, segment.start);
+    /** A segment's rows read after the header's text; `own` tells what lies in the segment itself. */
+    const readSegment = (segment: TableSegment) => {
       const source = readAfterHeader(segment);
       const whole = analyzeDocument(source.text, kind, read, { delimiter });
       const own = <T extends { readonly range: { readonly start: number } }>(item: T): boolean => item.range.start >= source.from;
+      return { source, whole, own };
+    };
+
+    const modelOf = (segment: TableSegment): DocumentModel => {
+      const known = models.get(segment.chunks[0]);
+      if (known && sameChunks(known.chunks, segment.chunks)) return shiftedModel(known.model, segment.start);
+      const { source, whole, own } = readSegment(segment);
       const local: DocumentModel = shiftedModel(
         {
           kind,
@@ -296,10 +302,8 @@ function tableSegments(kind: "csv" | "tsv", read: SpeciesReader): (text: Chunked
     const speciesOf = (segment: TableSegment): number => {
       const known = counted.get(segment.chunks[0]) ?? models.get(segment.chunks[0]);
       if (known && sameChunks(known.chunks, segment.chunks)) return "species" in known ? known.species : known.model.occurrences.length;
-      const source = readAfterHeader(segment);
-      let species = 0;
-      for (const occurrence of analyzeDocument(source.text, kind, read, { delimiter }).occurrences)
-        if (occurrence.range.start >= source.from) species++;
+      const { whole, own } = readSegment(segment);
+      const species = whole.occurrences.filter(own).length;
       counted.set(segment.chunks[0], { chunks: segment.chunks, species });
       return species;
     };
