@@ -318,9 +318,9 @@ function versionOf<State extends ListParts>(
       if (all || whole) return overlapping(all ?? whole!.findings, start, end);
       const from = Math.max(0, lastAtOrBefore(state.starts, start));
       const to = Math.max(from, lastAtOrBefore(state.starts, end));
-      if (!broken && frameRead() && partsRead(from, to)) return overlapping(cleanFindingsOf(from, to), start, end);
-      if (!setAside()) return overlapping(wholeReading().findings, start, end);
-      // Set aside: the records there that read cleanly alone answer meanwhile.
+      // Reading the parts there may find the text broken (and set aside, being large): then the
+      // records there that read cleanly alone answer meanwhile.
+      if (!broken && frameRead()) partsRead(from, to);
       return overlapping(cleanFindingsOf(from, to), start, end);
     },
     around(start, end) {
