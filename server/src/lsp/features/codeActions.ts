@@ -13,7 +13,14 @@ import {
 } from "vscode-languageserver";
 import type { TextDocument } from "vscode-languageserver-textdocument";
 import { editsOfFix, type Finding, type FixEdit, type TextFix, type TextRange } from "../core";
-import { equationActions, isTextMarkup, tableValueFixesInParts, type EquationAction, type FindingPart } from "../../../../shared/src/index";
+import {
+  equationActions,
+  isTextMarkup,
+  READ_WHOLE_ELSEWHERE_FROM,
+  tableValueFixesInParts,
+  type EquationAction,
+  type FindingPart,
+} from "../../../../shared/src/index";
 import type { AnalysedDocument } from "../documentCache";
 import { guarded } from "../guardedHandler";
 import { lspRange, offsetRange, rangesTouch } from "../ranges";
@@ -67,7 +74,7 @@ export function registerCodeActions(context: ServerContext): void {
         }
       }
       const kind = wants(CodeActionKind.QuickFix) ? CodeActionKind.QuickFix : wants(FIX_ALL_KIND) ? FIX_ALL_KIND : undefined;
-      if (kind && hasTableFixes(analysed, document.chunked.length >= LARGE_DOCUMENT)) {
+      if (kind && hasTableFixes(analysed, document.chunked.length >= READ_WHOLE_ELSEWHERE_FROM)) {
         const action: CodeAction = { title: FIX_ALL_TITLE, kind };
         // A big table's fix-all edit is large: where the client resolves edits, it is built only when chosen.
         if (context.clientFeatures().codeActionResolveEdit)
@@ -112,9 +119,6 @@ const hasTableFixesMemo = new WeakMap<AnalysedDocument, boolean>();
 
 /** How long the lightbulb looks for a first table fix in a large document before answering without fix-all. */
 const FIX_ALL_LOOK_MS = 10;
-
-/** From this many characters a document is large enough for that bound. */
-const LARGE_DOCUMENT = 256 * 1024;
 
 function hasTableFixes(analysed: AnalysedDocument, large: boolean): boolean {
   const known = hasTableFixesMemo.get(analysed);
